@@ -1,0 +1,47 @@
+// Lint rules for axband (run by `npm run lint`): typescript-eslint's recommended set, React hooks rules
+// for the UI, and a fence that keeps the pure cores (physics, data, plot) free of React, the DOM and the store.
+import js from "@eslint/js";
+import tseslint from "typescript-eslint";
+import reactHooks from "eslint-plugin-react-hooks";
+
+const pureCoreFence = {
+  patterns: [
+    { group: ["react", "react-dom", "react-dom/*", "zustand", "zustand/*"], message: "Pure cores must not import React or the store." },
+    { group: ["**/ui/**", "**/ui", "**/worker/**"], message: "Pure cores must not import the UI or the worker." },
+  ],
+};
+
+export default tseslint.config(
+  { basePath: "..", ignores: ["dist/**", "node_modules/**", "bench/.out/**", "tests/.artifacts/**"] },
+  {
+    basePath: "..",
+    files: ["**/*.{ts,tsx,mjs,js}"],
+    extends: [js.configs.recommended, ...tseslint.configs.recommended],
+    languageOptions: { ecmaVersion: 2023, sourceType: "module" },
+    rules: {
+      "@typescript-eslint/no-unused-vars": ["error", { argsIgnorePattern: "^_", varsIgnorePattern: "^_" }],
+      "@typescript-eslint/no-explicit-any": "error",
+    },
+  },
+  {
+    basePath: "..",
+    files: ["src/ui/**/*.{ts,tsx}"],
+    plugins: { "react-hooks": reactHooks },
+    rules: { "react-hooks/rules-of-hooks": "error", "react-hooks/exhaustive-deps": "warn" },
+  },
+  {
+    basePath: "..",
+    files: ["src/physics/**/*.ts", "src/data/**/*.ts", "src/plot/**/*.ts"],
+    languageOptions: { globals: {} },
+    rules: {
+      "no-restricted-imports": ["error", pureCoreFence],
+      // The cores run in plain Node: no DOM globals at all.
+      "no-restricted-globals": ["error", "window", "document", "navigator", "localStorage", "HTMLElement", "location"],
+    },
+  },
+  {
+    basePath: "..",
+    files: ["bench/**/*.{mjs,js}", "tests/**/*.mjs", ".ci/**/*.mjs"],
+    languageOptions: { globals: { process: "readonly", console: "readonly", URL: "readonly", performance: "readonly", setTimeout: "readonly", Buffer: "readonly" } },
+  },
+);
