@@ -1,0 +1,27 @@
+// `npm run bench`: runs every benchmark script in turn and prints their medians and ratios.
+// Benchmarks never pass or fail on timings; a script that crashes is reported and the rest still run.
+import { spawnSync } from "node:child_process";
+import { existsSync } from "node:fs";
+
+const scripts = [
+  ["CSV import (parser alone vs a general CSV library)", "bench/import.mjs"],
+  ["CSV import end to end (worker + transfer, Chromium)", "bench/import-browser.mjs"],
+  ["Figure redraw during a zoom step (Chromium)", "bench/redraw.mjs"],
+  ["Command-line renderer vs reference plotting script", "bench/render.mjs"],
+];
+const only = process.argv.slice(2);
+let crashed = 0;
+for (const [title, file] of scripts) {
+  if (only.length && !only.some((o) => file.includes(o))) continue;
+  if (!existsSync(file)) {
+    console.log(`\n## ${title}\n(missing: ${file})`);
+    continue;
+  }
+  console.log(`\n## ${title}  [${file}]`);
+  const r = spawnSync(process.execPath, [file], { stdio: "inherit" });
+  if (r.status !== 0) {
+    crashed++;
+    console.log(`(${file} exited with ${r.status ?? r.signal})`);
+  }
+}
+if (crashed) console.log(`\n${crashed} benchmark script(s) crashed`);
