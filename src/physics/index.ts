@@ -1,3 +1,9 @@
 // Public face of the physics core: pure functions of plain numbers, loadable in plain Node.
 export * from "./constants";
 export * from "./coupling";
+export * from "./rational";
+export * from "./su3";
+export * from "./anomaly";
+export * from "./catalogue";
+export * from "./eovern-parse";
+export type * from "./anomaly-types";
