@@ -56,3 +56,38 @@ export function defaultProject(): Project {
     },
   };
 }
+
+/** Project without curve data as text for localStorage (temporary: replaced by src/data serializeForStorage). */
+export function serializeForStorage(project: Project): string {
+  return JSON.stringify({ ...project, curves: project.curves.map((c) => ({ ...c, massEv: undefined, gInvGeV: undefined })) });
+}
+
+/** Inverse of {@link serializeForStorage} with the curve arrays put back (temporary, minimal checks). */
+export function deserializeFromStorage(
+  text: string,
+  curveData: ReadonlyMap<string, { massEv: Float64Array; gInvGeV: Float64Array }>,
+): { ok: true; project: Project; missingCurves: string[] } | { ok: false; error: string } {
+  try {
+    const raw = JSON.parse(text) as Project;
+    if (!raw || raw.version !== PROJECT_VERSION || !Array.isArray(raw.models) || !Array.isArray(raw.curves)) {
+      return { ok: false, error: "the saved project is not in a format this version understands" };
+    }
+    const missingCurves: string[] = [];
+    const curves = raw.curves.flatMap((c) => {
+      const d = curveData.get(c.id);
+      if (!d) {
+        missingCurves.push(c.label);
+        return [];
+      }
+      return [{ ...c, massEv: d.massEv, gInvGeV: d.gInvGeV }];
+    });
+    return { ok: true, project: { ...raw, curves }, missingCurves };
+  } catch {
+    return { ok: false, error: "the saved project could not be read" };
+  }
+}
+
+/** Decode a link fragment (temporary: links cannot be opened until src/data/link lands). */
+export function decodeLink(_fragment: string): { ok: true; project: Project } | { ok: false; error: string } {
+  return { ok: false, error: "opening links is not available in this build yet" };
+}

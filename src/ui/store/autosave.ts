@@ -1,0 +1,251 @@
+// Autosave: keeps the project in browser storage (project without curve data in localStorage, curve arrays
+// in IndexedDB keyed by curve id) and restores it on start; a link in the URL fragment wins over it.
+// Storage that is full or missing is reported once (role="alert") and never stops the app.
+import type { StoreApi } from "zustand";
+import type { Project } from "../../data/types";
+import { decodeLink, defaultProject, deserializeFromStorage, serializeForStorage } from "../adapters/data";
+import type { AxbandState } from "./types";
+
+/** localStorage key of the saved project (without curve data). */
+export const STORAGE_KEY = "axband:project";
+
+export interface CurveArrays {
+  massEv: Float64Array;
+  gInvGeV: Float64Array;
+}
+
+/** Where curve arrays go: IndexedDB in the browser, a map in tests. */
+export interface CurveDataStore {
+  put(id: string, data: CurveArrays): Promise<void>;
+  get(id: string): Promise<CurveArrays | undefined>;
+  delete(id: string): Promise<void>;
+}
+
+/** The part of the Storage interface autosave uses. */
+export type KeyValueStorage = Pick<Storage, "getItem" | "setItem">;
+
+export interface AutosaveOpts {
+  /** @default window.localStorage when reachable, else null (storage unavailable) */
+  local?: KeyValueStorage | null;
+  /** @default an IndexedDB store when indexedDB exists, else null */
+  curves?: CurveDataStore | null;
+  /** Quiet time after the last change before saving, in ms. @default 300 */
+  debounceMs?: number;
+}
+
+export const STORAGE_PROBLEM =
+  "Browser storage is full or unavailable, so changes are no longer saved in this browser. Your work is still open: save a project file to keep it.";
+
+/** localStorage, or null where touching it throws (some private modes, sandboxed frames). */
+export function browserLocalStorage(): KeyValueStorage | null {
+  try {
+    const s = globalThis.localStorage;
+    return s ?? null;
+  } catch {
+    return null;
+  }
+}
+
+function request<T>(r: IDBRequest<T>): Promise<T> {
+  return new Promise((resolve, reject) => {
+    r.onsuccess = () => resolve(r.result);
+    r.onerror = () => reject(r.error);
+  });
+}
+
+/**
+ * Curve arrays in IndexedDB (database "axband", object store "curves"); null when IndexedDB is missing.
+ * @param dbName @default "axband"
+ */
+export function indexedDbCurveStore(dbName = "axband"): CurveDataStore | null {
+  const idb = (globalThis as { indexedDB?: IDBFactory }).indexedDB;
+  if (!idb) return null;
+  let db: Promise<IDBDatabase> | null = null;
+  const open = () => {
+    if (!db) {
+      const req = idb.open(dbName, 1);
+      req.onupgradeneeded = () => req.result.createObjectStore("curves");
+      db = request(req);
+      db.catch(() => (db = null));
+    }
+    return db;
+  };
+  const tx = async <T>(mode: IDBTransactionMode, run: (s: IDBObjectStore) => IDBRequest<T>): Promise<T> => {
+    const d = await open();
+    const t = d.transaction("curves", mode);
+    const result = request(run(t.objectStore("curves")));
+    await new Promise<void>((resolve, reject) => {
+      t.oncomplete = () => resolve();
+      t.onerror = () => reject(t.error);
+      t.onabort = () => reject(t.error ?? new Error("IndexedDB transaction aborted"));
+    });
+    return result;
+  };
+  return {
+    put: async (id, data) => {
+      await tx("readwrite", (s) => s.put({ massEv: data.massEv, gInvGeV: data.gInvGeV }, id));
+    },
+    get: async (id) => (await tx("readonly", (s) => s.get(id))) as CurveArrays | undefined,
+    delete: async (id) => {
+      await tx("readwrite", (s) => s.delete(id));
+    },
+  };
+}
+
+export interface Autosave {
+  /** Saves now (cancels a pending debounce); resolves when the curve writes are done. */
+  flush(): Promise<void>;
+  stop(): void;
+}
+
+/**
+ * Saves the store's project after every change (debounced) and on pagehide.
+ * Curve arrays are written only when their references changed since the last save.
+ */
+export function startAutosave(store: StoreApi<AxbandState>, opts: AutosaveOpts = {}): Autosave {
+  const local = opts.local === undefined ? browserLocalStorage() : opts.local;
+  const curves = opts.curves === undefined ? indexedDbCurveStore() : opts.curves;
+  const debounceMs = opts.debounceMs ?? 300;
+  const saved = new Map<string, CurveArrays>();
+  let told = false;
+  let timer: ReturnType<typeof setTimeout> | null = null;
+  let lastSaved: Project | null = null;
+
+  const problem = () => {
+    if (told) return;
+    told = true;
+    store.getState().pushMessage("alert", STORAGE_PROBLEM);
+  };
+
+  const save = async (): Promise<void> => {
+    timer = null;
+    const project = store.getState().project;
+    if (project === lastSaved) return;
+    lastSaved = project;
+    // Curves first, so a saved project never names curves whose data is not stored yet.
+    const writes: Promise<void>[] = [];
+    if (project.curves.length > 0 && !curves) problem();
+    if (curves) {
+      const ids = new Set<string>();
+      for (const c of project.curves) {
+        ids.add(c.id);
+        const prev = saved.get(c.id);
+        if (prev && prev.massEv === c.massEv && prev.gInvGeV === c.gInvGeV) continue;
+        const data = { massEv: c.massEv, gInvGeV: c.gInvGeV };
+        saved.set(c.id, data);
+        writes.push(
+          curves.put(c.id, data).catch(() => {
+            saved.delete(c.id);
+            problem();
+          }),
+        );
+      }
+      for (const id of [...saved.keys()]) {
+        if (ids.has(id)) continue;
+        saved.delete(id);
+        writes.push(curves.delete(id).catch(() => undefined));
+      }
+    }
+    if (!local) problem();
+    else {
+      try {
+        local.setItem(STORAGE_KEY, serializeForStorage(project));
+      } catch {
+        problem();
+      }
+    }
+    await Promise.all(writes);
+  };
+
+  const schedule = () => {
+    if (timer !== null) clearTimeout(timer);
+    timer = setTimeout(() => void save(), debounceMs);
+  };
+  const unsubscribe = store.subscribe((s, prev) => {
+    if (s.project !== prev.project) schedule();
+  });
+  const onPageHide = () => void save();
+  const target = globalThis as { addEventListener?: typeof addEventListener; removeEventListener?: typeof removeEventListener };
+  target.addEventListener?.("pagehide", onPageHide);
+
+  return {
+    flush() {
+      if (timer !== null) clearTimeout(timer);
+      return save();
+    },
+    stop() {
+      if (timer !== null) clearTimeout(timer);
+      timer = null;
+      unsubscribe();
+      target.removeEventListener?.("pagehide", onPageHide);
+    },
+  };
+}
+
+/** The autosaved project, or null when there is none; problems with it become messages. */
+export async function restoreAutosave(store: StoreApi<AxbandState>, opts: AutosaveOpts = {}): Promise<Project | null> {
+  const local = opts.local === undefined ? browserLocalStorage() : opts.local;
+  const curves = opts.curves === undefined ? indexedDbCurveStore() : opts.curves;
+  let text: string | null = null;
+  try {
+    text = local ? local.getItem(STORAGE_KEY) : null;
+  } catch {
+    text = null;
+  }
+  if (!text) return null;
+  const ids = new Set<string>();
+  try {
+    const raw = JSON.parse(text) as { curves?: { id?: unknown }[] };
+    for (const c of Array.isArray(raw?.curves) ? raw.curves : []) if (typeof c?.id === "string") ids.add(c.id);
+  } catch {
+    // deserializeFromStorage reports unreadable text below.
+  }
+  const data = new Map<string, CurveArrays>();
+  if (curves) {
+    await Promise.all(
+      [...ids].map(async (id) => {
+        try {
+          const d = await curves.get(id);
+          if (d && d.massEv instanceof Float64Array && d.gInvGeV instanceof Float64Array) data.set(id, d);
+        } catch {
+          // A curve that cannot be read is reported as missing.
+        }
+      }),
+    );
+  }
+  const r = deserializeFromStorage(text, data);
+  if (!r.ok) {
+    store.getState().pushMessage("alert", `The autosaved project could not be restored: ${r.error}. Starting from the demo project.`);
+    return null;
+  }
+  if (r.missingCurves.length > 0) {
+    store.getState().pushMessage("alert", `The data of ${r.missingCurves.length === 1 ? "curve" : "curves"} ${r.missingCurves.map((l) => `“${l}”`).join(", ")} was not found in browser storage; import the file again.`);
+  }
+  return r.project;
+}
+
+export interface StartOpts extends AutosaveOpts {
+  /** The page's URL fragment without "#" (a share link). @default location.hash */
+  fragment?: string;
+  /** Called after a link was opened, to drop the fragment (so a reload does not reopen it over later edits). */
+  clearFragment?: () => void;
+}
+
+/**
+ * Sets the store's start project: the autosave (or the demo project), then a link in the fragment on top
+ * of it (undoable, so the user can go back to their own project). A bad link leaves the restored project.
+ */
+export async function initProject(store: StoreApi<AxbandState>, opts: StartOpts = {}): Promise<void> {
+  const restored = await restoreAutosave(store, opts);
+  store.getState().resetProject(restored ?? defaultProject());
+  const loc = (globalThis as { location?: Location }).location;
+  const fragment = (opts.fragment ?? loc?.hash ?? "").replace(/^#/, "");
+  if (!fragment) return;
+  const r = decodeLink(fragment);
+  if (r.ok) {
+    store.getState().replaceProject(r.project, "Opened the project from the link. Undo returns to your previous project.");
+  } else {
+    store.getState().pushMessage("alert", `This link could not be opened: ${r.error}. Your previous project is unchanged.`);
+  }
+  (opts.clearFragment ?? (() => loc && history.replaceState(null, "", loc.pathname + loc.search)))();
+}
