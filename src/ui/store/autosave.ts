@@ -186,7 +186,7 @@ export function startAutosave(store: StoreApi<AxbandState>, opts: AutosaveOpts =
 export async function restoreAutosave(store: StoreApi<AxbandState>, opts: AutosaveOpts = {}): Promise<Project | null> {
   const local = opts.local === undefined ? browserLocalStorage() : opts.local;
   const curves = opts.curves === undefined ? indexedDbCurveStore() : opts.curves;
-  let text: string | null = null;
+  let text: string | null;
   try {
     text = local ? local.getItem(STORAGE_KEY) : null;
   } catch {
