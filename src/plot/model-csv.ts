@@ -127,7 +127,7 @@ export function modelCsvBlocks(project: Project, opts: ModelCsvOpts = {}): { blo
 }
 
 /** All model blocks in one CSV text, separated by a blank line (readers that split on blank lines get one table per model). */
-export function modelsCsv(project: Project, opts: ModelCsvOpts = {}): string {
+export function modelsToCsv(project: Project, opts: ModelCsvOpts = {}): string {
   const { blocks, skipped } = modelCsvBlocks(project, opts);
   const head = [`# axband model lines and bands of project "${oneLine(project.name)}"`, ...skipped.map((s) => `# skipped ${s.label}: ${s.reason}`)];
   return [head.join("\n") + "\n", ...blocks.map((b) => b.text)].join("\n");

@@ -1,7 +1,7 @@
 // Tests for the model-line/band CSV export: values against the PDG closed form of g_aγγ(m_a), column layout,
 // log-uniform sampling, cancellation (g_low = 0), theory spread, and labels that cannot break the format.
 import { describe, expect, it } from "vitest";
-import { MODEL_CSV_HEADER, logMasses, modelCsvBlocks, modelsCsv } from "../../src/plot/model-csv";
+import { MODEL_CSV_HEADER, logMasses, modelCsvBlocks, modelsToCsv } from "../../src/plot/model-csv";
 import type { Model, Project } from "../../src/data/types";
 
 function model(id: string, label: string, min: string, max = min, extra: Partial<Model> = {}): Model {
@@ -135,7 +135,7 @@ describe("modelCsvBlocks", () => {
 
   it("keeps a hostile label on its comment line", () => {
     const label = 'evil\n1,2,3,4\r\n<script>alert(1)</script>"><img src=x onerror=alert(1)>';
-    const text = modelsCsv(project([model("e", label, "8/3")]), { points: 3 });
+    const text = modelsToCsv(project([model("e", label, "8/3")]), { points: 3 });
     expect(rows(text)).toHaveLength(3);
     const labelLines = text.split("\n").filter((l) => l.includes("<script>"));
     expect(labelLines.length).toBeGreaterThan(0);
@@ -143,7 +143,7 @@ describe("modelCsvBlocks", () => {
   });
 
   it("puts every block in one text, separated by blank lines", () => {
-    const text = modelsCsv(p, { points: 3 });
+    const text = modelsToCsv(p, { points: 3 });
     expect(text.split("\n").filter((l) => l === MODEL_CSV_HEADER)).toHaveLength(4);
     expect(text).toContain('# axband model lines and bands of project "test"');
     expect(text.split("\n\n").length).toBeGreaterThanOrEqual(4);
