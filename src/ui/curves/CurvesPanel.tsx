@@ -1,4 +1,169 @@
-// Placeholder for the curves list (import, style, rescale); owned and filled in by the second UI engineer (App places it in the layout).
+// The curves list: per imported curve its label, colour, line style, fill, visibility, order and role,
+// the rescaling of haloscope-type limits (local dark-matter density, axion fraction) and a CSV export in
+// chosen units. Every edit goes through the store, so it is undoable and autosaved.
+import { useState } from "react";
+import { useShallow } from "zustand/react/shallow";
+import type { Curve, CurveRole, LineStyle } from "../../data/types";
+import { selectCurve, selectCurveIds, useAxband } from "../store";
+import { curveToCsv } from "../importer/pending-data";
+import { downloadText, safeFileName } from "../export/download";
+import { MASS_UNIT_OPTIONS, type MassUnit } from "../importer/unit-options";
+import { NumberField } from "./NumberField";
+import { isRescaled } from "../../plot/physics-settings";
+import "./curves.css";
+
+export const ROLES: { value: CurveRole; label: string }[] = [
+  { value: "exclusion", label: "exclusion (filled above)" },
+  { value: "projection", label: "projection (line)" },
+  { value: "region", label: "region (closed contour)" },
+];
+
+export const LINE_STYLES: LineStyle[] = ["solid", "dashed", "dotted", "dashdot"];
+
+const positive = (n: number) => (n > 0 ? null : "Must be above 0.");
+const fractionRule = (n: number) => (n > 0 && n <= 1 ? null : "Between 0 (excluded) and 1.");
+
+function CurveCard({ id, index, count }: { id: string; index: number; count: number }) {
+  const curve = useAxband(selectCurve(id));
+  const updateCurve = useAxband((s) => s.updateCurve);
+  const removeCurve = useAxband((s) => s.removeCurve);
+  const moveCurve = useAxband((s) => s.moveCurve);
+  const pushMessage = useAxband((s) => s.pushMessage);
+  const [csvMassUnit, setCsvMassUnit] = useState<MassUnit>("eV");
+  if (!curve) return null;
+  const rs = curve.rescale;
+  const setRescale = (patch: Partial<Curve["rescale"]>) => updateCurve(id, { rescale: { ...curve.rescale, ...patch } }, { coalesceKey: `curve:${id}:rescale` });
+  const points = curve.massEv.length;
+
+  return (
+    <li className="ax-curve" data-testid="curve-item" data-curve-id={id}>
+      <div className="ax-curve-head">
+        <input
+          type="color"
+          aria-label={`Colour of ${curve.label}`}
+          value={/^#[0-9a-f]{6}$/i.test(curve.colour) ? curve.colour : "#000000"}
+          onChange={(e) => updateCurve(id, { colour: e.target.value }, { coalesceKey: `curve:${id}:colour` })}
+        />
+        <input
+          className="ax-curve-label"
+          type="text"
+          aria-label="Curve label"
+          value={curve.label}
+          onChange={(e) => updateCurve(id, { label: e.target.value }, { coalesceKey: `curve:${id}:label` })}
+        />
+        <label className="ax-check" title="Show on the figure">
+          <input type="checkbox" checked={curve.visible} onChange={(e) => updateCurve(id, { visible: e.target.checked })} />
+          shown
+        </label>
+        <span className="ax-curve-order">
+          <button type="button" aria-label={`Move ${curve.label} up`} disabled={index === 0} onClick={() => moveCurve(id, -1)}>
+            ↑
+          </button>
+          <button type="button" aria-label={`Move ${curve.label} down`} disabled={index === count - 1} onClick={() => moveCurve(id, 1)}>
+            ↓
+          </button>
+          <button type="button" className="ax-danger" aria-label={`Remove ${curve.label}`} onClick={() => removeCurve(id)}>
+            ×
+          </button>
+        </span>
+      </div>
+      <div className="ax-curve-row">
+        <label className="ax-field">
+          <span>Role</span>
+          <select aria-label="Curve role" value={curve.role} onChange={(e) => updateCurve(id, { role: e.target.value as CurveRole })}>
+            {ROLES.map((r) => (
+              <option key={r.value} value={r.value}>
+                {r.label}
+              </option>
+            ))}
+          </select>
+        </label>
+        <label className="ax-field">
+          <span>Line</span>
+          <select aria-label="Line style" value={curve.lineStyle} onChange={(e) => updateCurve(id, { lineStyle: e.target.value as LineStyle })}>
+            {LINE_STYLES.map((s) => (
+              <option key={s} value={s}>
+                {s}
+              </option>
+            ))}
+          </select>
+        </label>
+        <label className="ax-field">
+          <span>Fill</span>
+          <input
+            type="range"
+            min={0}
+            max={1}
+            step={0.05}
+            aria-label="Fill opacity"
+            value={curve.fillOpacity}
+            disabled={curve.role === "projection"}
+            onChange={(e) => updateCurve(id, { fillOpacity: Number(e.target.value) }, { coalesceKey: `curve:${id}:fill` })}
+          />
+        </label>
+      </div>
+      <p className="ax-curve-meta">
+        {points.toLocaleString("en")} points{curve.fileName ? ` · ${curve.fileName}` : ""}
+        {isRescaled(curve.rescale) ? " · rescaled" : ""}
+      </p>
+      <details className="ax-curve-more">
+        <summary>Rescale (haloscope limits)</summary>
+        <p className="ax-hint">
+          A limit that assumed a local dark-matter density ρ₀ becomes g·√(ρ₀/ρ) at density ρ, and g/√f when axions are a fraction f
+          of the dark matter.
+        </p>
+        <div className="ax-curve-row">
+          <NumberField label="ρ assumed" unit="GeV/cm³" value={rs.rhoAssumed} validate={positive} onCommit={(n) => setRescale({ rhoAssumed: n })} />
+          <NumberField label="ρ shown" unit="GeV/cm³" value={rs.rhoShown} validate={positive} onCommit={(n) => setRescale({ rhoShown: n })} />
+          <NumberField label="axion fraction f" value={rs.fraction} validate={fractionRule} onCommit={(n) => setRescale({ fraction: n })} />
+        </div>
+      </details>
+      <details className="ax-curve-more">
+        <summary>Export as CSV</summary>
+        <div className="ax-curve-row">
+          <label className="ax-field">
+            <span>Mass unit</span>
+            <select aria-label="CSV mass unit" value={csvMassUnit} onChange={(e) => setCsvMassUnit(e.target.value as MassUnit)}>
+              {MASS_UNIT_OPTIONS.map((u) => (
+                <option key={u.value} value={u.value}>
+                  {u.label}
+                </option>
+              ))}
+            </select>
+          </label>
+          <button
+            type="button"
+            onClick={() => {
+              const text = curveToCsv(curve, { massUnit: csvMassUnit });
+              const name = `${safeFileName(curve.label, "curve")}.csv`;
+              downloadText(name, text, "text/csv");
+              pushMessage("status", `Saved ${name}.`);
+            }}
+          >
+            Download CSV
+          </button>
+        </div>
+        <p className="ax-hint">Couplings are written in GeV⁻¹ as shown on the figure (with the rescaling applied).</p>
+      </details>
+    </li>
+  );
+}
+
+/** The list of imported curves with their controls. */
 export function CurvesPanel() {
-  return null;
+  const ids = useAxband(useShallow(selectCurveIds));
+  return (
+    <section className="ax-panel ax-curves" aria-labelledby="ax-curves-title">
+      <h2 id="ax-curves-title">Curves</h2>
+      {ids.length === 0 ? (
+        <p className="ax-empty">No curves yet. Import a CSV file, drop one on the page, or paste data.</p>
+      ) : (
+        <ul className="ax-curve-list">
+          {ids.map((id, i) => (
+            <CurveCard key={id} id={id} index={i} count={ids.length} />
+          ))}
+        </ul>
+      )}
+    </section>
+  );
 }
