@@ -1,0 +1,117 @@
+// Turns the renderer's input files into one project: a project file or an exported SVG through the same
+// validation as the app, or CSV files through the app's importer and factories with ranges fitted to the data.
+import { readFileSync } from "node:fs";
+import { basename } from "node:path";
+import type { Curve, Model, Project } from "../data/types";
+import { defaultFigure, emptyProject, newCurve, newModel } from "../data/defaults";
+import { parseCouplingUnit, parseMassUnit } from "../data/units";
+import { parseEOverN } from "../physics/eovern-parse";
+import { extractProjectFromSvg } from "../plot/figure-file";
+import { parseCurveText, projectFromFile } from "./pending";
+import type { CliInput, CliOptions } from "./args";
+import { fitRanges } from "./fit-ranges";
+
+/** A problem with the user's input or options: reported on stderr, exit code 2, nothing written. */
+export class InputError extends Error {}
+
+/** The project to draw, and what the user should know about how it was read (printed on stderr). */
+export interface LoadedProject {
+  project: Project;
+  notes: string[];
+}
+
+/** Most `file:row:column: reason` lines printed before "… and N more". */
+export const MAX_ROW_MESSAGES = 20;
+
+function readText(path: string): string {
+  try {
+    return readFileSync(path, "utf8");
+  } catch (e) {
+    const code = (e as NodeJS.ErrnoException).code;
+    const why = code === "ENOENT" ? "no such file" : code === "EISDIR" ? "is a directory" : code === "EACCES" ? "permission denied" : (e as Error).message;
+    throw new InputError(`${path}: cannot read the file (${why})`);
+  }
+}
+
+/** The file name without its last extension ("limits.v2.csv" → "limits.v2"), as the app labels imported curves. */
+export function labelFromFileName(name: string): string {
+  const base = name.replace(/^.*[\\/]/, "");
+  const dot = base.lastIndexOf(".");
+  return (dot > 0 ? base.slice(0, dot) : base) || "Curve";
+}
+
+function loadProjectFile(input: CliInput): LoadedProject {
+  const text = readText(input.path);
+  const r = projectFromFile(text, basename(input.path));
+  if (!r.ok) throw new InputError(`${input.path}: not a usable axband project: ${r.error}`);
+  const repairs = "repairs" in r && Array.isArray(r.repairs) ? (r.repairs as string[]) : [];
+  return { project: r.project, notes: repairs.map((s) => `${input.path}: repaired on loading: ${s}`) };
+}
+
+function loadSvg(input: CliInput): LoadedProject {
+  const r = extractProjectFromSvg(readText(input.path));
+  if (!r.ok) throw new InputError(`${input.path}: ${r.error}`);
+  return { project: r.project, notes: [] };
+}
+
+function loadCsv(inputs: CliInput[], opts: CliOptions): LoadedProject {
+  const notes: string[] = [];
+  const massUnit = opts.massUnit === undefined ? undefined : parseMassUnit(opts.massUnit);
+  if (massUnit === null) throw new InputError(`--mass-unit: unknown unit "${opts.massUnit}" (eV, meV, ueV, neV, peV, keV, GeV, Hz, kHz, MHz, GHz)`);
+  const coupling = opts.couplingUnit === undefined ? undefined : parseCouplingUnit(opts.couplingUnit);
+  if (coupling === null) throw new InputError(`--coupling-unit: unknown unit "${opts.couplingUnit}" (GeV^-1)`);
+  const curves: Curve[] = [];
+  const badRows: string[] = [];
+  for (const input of inputs) {
+    const text = readText(input.path);
+    const fileName = basename(input.path);
+    const r = parseCurveText(text, { fileName, massUnit: massUnit ?? undefined, couplingUnit: coupling?.unit });
+    for (const bad of r.rejected) badRows.push(`${input.path}:${bad.row}:${bad.column}: ${bad.reason}`);
+    if (r.rejected.length > 0 && opts.skipBadRows) notes.push(`${input.path}: skipped ${r.rejected.length} row(s) that could not be read (--skip-bad-rows)`);
+    if (r.nonPositive > 0) notes.push(`${input.path}: ${r.nonPositive} point(s) with a mass or coupling ≤ 0 cannot be drawn on log axes`);
+    if (r.massEv.length === 0) throw new InputError(`${input.path}: no data rows (two numeric columns: mass, coupling)`);
+    // Ids by position, not random: the same files give the same SVG bytes (paper figures rebuilt by scripts).
+    curves.push(newCurve({ id: `c-${curves.length + 1}`, label: labelFromFileName(fileName), role: input.role, massEv: r.massEv, gInvGeV: r.gInvGeV, fileName }, { curves }));
+  }
+  if (badRows.length > 0) {
+    const shown = badRows.slice(0, MAX_ROW_MESSAGES);
+    const more = badRows.length > shown.length ? [`… and ${badRows.length - shown.length} more`] : [];
+    if (!opts.skipBadRows) {
+      throw new InputError([...shown, ...more, `${badRows.length} row(s) could not be read; fix them, or pass --skip-bad-rows to leave them out`].join("\n"));
+    }
+    notes.unshift(...shown, ...more);
+  }
+  const models: Model[] = [];
+  for (const spec of opts.models) {
+    const e = parseEOverN(spec);
+    if (!e.ok) throw new InputError(`--model ${spec}: ${e.error}`);
+    models.push(newModel({ id: `m-${models.length + 1}`, eOverNMin: e.min, eOverNMax: e.max }, { models }));
+  }
+  const figure = defaultFigure();
+  const fitted = fitRanges(curves);
+  if (fitted) {
+    figure.massRangeEv = fitted.massRangeEv;
+    figure.yRange = fitted.gRange;
+  }
+  const project = emptyProject(inputs.length === 1 ? labelFromFileName(basename(inputs[0].path)) : "CSV figure");
+  return { project: { ...project, curves, models, figure }, notes };
+}
+
+/** Applies the size, range and title options to a loaded project (a copy; figure fields only). */
+export function applyFigureOptions(project: Project, opts: CliOptions): Project {
+  const f = { ...project.figure };
+  if (opts.preset) f.preset = opts.preset;
+  if (opts.widthMm !== undefined) f.customWidthMm = opts.widthMm;
+  if (opts.heightMm !== undefined) f.customHeightMm = opts.heightMm;
+  if (opts.massRangeEv) f.massRangeEv = opts.massRangeEv;
+  if (opts.gRange) f.yRange = opts.gRange;
+  if (opts.title !== undefined) f.title = opts.title;
+  return { ...project, figure: f };
+}
+
+/** Reads every input and returns the project to draw; throws InputError on anything the user must fix. */
+export function loadProject(opts: CliOptions): LoadedProject {
+  const first = opts.inputs[0];
+  const loaded = first.kind === "project" ? loadProjectFile(first) : first.kind === "svg" ? loadSvg(first) : loadCsv(opts.inputs, opts);
+  return { project: applyFigureOptions(loaded.project, opts), notes: loaded.notes };
+}

@@ -1,0 +1,99 @@
+// Command-line renderer (`npm run render -- …`): a project file, an exported SVG or CSV files in, the same
+// SVG the app exports (and optionally PNG and model CSV) out, without a browser and without any download.
+import { existsSync, statSync } from "node:fs";
+import { dirname, resolve } from "node:path";
+import { pathToFileURL } from "node:url";
+import { parseArgs, USAGE } from "./args";
+import { InputError, loadProject } from "./inputs";
+import { pickFallbackFont, pngPixelSize, renderPng } from "./png";
+import { writeAllOrNothing, type OutputFile } from "./write-atomic";
+import { exportFigureSvg, exportSizeInches } from "../plot/figure-file";
+import { presetOf } from "../plot/layout";
+import { modelsToCsv } from "../plot/model-csv";
+
+/** Where the renderer writes its messages (tests pass their own). */
+export interface Io {
+  out: (line: string) => void;
+  err: (line: string) => void;
+}
+
+const consoleIo: Io = { out: (s) => process.stdout.write(s + "\n"), err: (s) => process.stderr.write(s + "\n") };
+
+function size(bytes: number): string {
+  if (bytes >= 1e6) return `${(bytes / 1e6).toFixed(2)} MB`;
+  if (bytes >= 1e3) return `${(bytes / 1e3).toFixed(1)} kB`;
+  return `${bytes} bytes`;
+}
+
+function checkOutputDir(path: string): void {
+  const dir = dirname(resolve(path));
+  if (!existsSync(dir) || !statSync(dir).isDirectory()) throw new InputError(`${path}: the directory ${dir} does not exist`);
+  if (existsSync(path) && statSync(path).isDirectory()) throw new InputError(`${path}: is a directory`);
+}
+
+/**
+ * Runs the renderer on argv (without `node` and the script) and returns the exit code: 0 when every output
+ * was written, 2 for bad input or options (nothing written), 1 for an unexpected failure.
+ */
+export function main(argv: readonly string[], io: Io = consoleIo): number {
+  const args = parseArgs(argv);
+  if (!args.ok) {
+    io.err(`axband render: ${args.error}`);
+    io.err("run with --help for usage");
+    return 2;
+  }
+  const opts = args.options;
+  if (opts.help) {
+    io.out(USAGE);
+    return 0;
+  }
+  try {
+    for (const p of [opts.out, opts.png, opts.modelsCsv]) if (p) checkOutputDir(p);
+    const { project, notes } = loadProject(opts);
+    for (const n of notes) io.err(`note: ${n}`);
+    const files: OutputFile[] = [];
+    const report: string[] = [];
+    const preset = presetOf(project.figure);
+    if (opts.out) {
+      const svg = exportFigureSvg(project, { embedProject: opts.embed });
+      files.push({ path: opts.out, data: svg });
+      report.push(
+        `wrote ${opts.out} (${size(Buffer.byteLength(svg))}, ${preset.widthPhysical} × ${preset.heightPhysical}, ${project.curves.length} curve(s), ${project.models.length} model(s)${opts.embed ? ", project embedded" : ""})`,
+      );
+    }
+    if (opts.png) {
+      // The drawing is the same with or without the embedded project; rasterise the lighter one.
+      const svg = exportFigureSvg(project, { embedProject: false });
+      const inches = exportSizeInches(project);
+      const dpi = opts.scale !== undefined ? 96 * opts.scale : opts.dpi;
+      const px = pngPixelSize(inches.widthIn, inches.heightIn, dpi);
+      const font = pickFallbackFont();
+      if (font.note) io.err(`note: ${font.note}`);
+      const png = renderPng(svg, px.widthPx, dpi, font.family);
+      files.push({ path: opts.png, data: png });
+      report.push(`wrote ${opts.png} (${size(png.length)}, ${px.widthPx} × ${px.heightPx} px, ${Math.round(dpi * 100) / 100} dpi)`);
+    }
+    if (opts.modelsCsv) {
+      const csv = modelsToCsv(project);
+      files.push({ path: opts.modelsCsv, data: csv });
+      report.push(`wrote ${opts.modelsCsv} (${size(Buffer.byteLength(csv))}, ${project.models.filter((m) => m.visible).length} model(s))`);
+    }
+    writeAllOrNothing(files);
+    for (const line of report) io.out(line);
+    return 0;
+  } catch (e) {
+    if (e instanceof InputError) {
+      io.err(`axband render: ${e.message}`);
+      io.err("nothing was written");
+      return 2;
+    }
+    io.err(`axband render: unexpected failure: ${e instanceof Error ? (e.stack ?? e.message) : String(e)}`);
+    io.err("nothing was written");
+    return 1;
+  }
+}
+
+// Run only when executed as a script (tests import `main` without side effects).
+if (process.argv[1] && import.meta.url === pathToFileURL(resolve(process.argv[1])).href) {
+  process.exitCode = main(process.argv.slice(2));
+}
