@@ -1,0 +1,11 @@
+// Project schema, migrations, share links, project files, storage form, state table, defaults and demo.
+export * from "./ids";
+export * from "./defaults";
+export * from "./demo";
+export * from "./migrate";
+export * from "./schema";
+export * from "./state-table";
+export * from "./link";
+export * from "./project-file";
+export * from "./overlap";
+export * from "./overlap-table";
