@@ -1,0 +1,59 @@
+// The typed-E/N field: one value adds a model line, an interval ("5/3..44/3") a model band; the label
+// keeps the text as typed. Bad input gets a message next to the field and adds nothing.
+import { useId, useState, type FormEvent } from "react";
+import { parseEOverN } from "../../physics/eovern-parse";
+import { useAxband } from "../store";
+
+export function AddModel() {
+  const addModel = useAxband((s) => s.addModel);
+  const [text, setText] = useState("");
+  const [error, setError] = useState<string | null>(null);
+  const inputId = useId();
+  const errorId = useId();
+
+  const submit = (e: FormEvent) => {
+    e.preventDefault();
+    const r = parseEOverN(text);
+    if (!r.ok) {
+      setError(r.error);
+      return;
+    }
+    addModel({ eOverNMin: r.min, eOverNMax: r.max, label: `E/N = ${text.trim().replace(/\s+/g, " ")}`, source: { kind: "typed" } });
+    setText("");
+    setError(null);
+  };
+
+  return (
+    <form className="add-model" onSubmit={submit} noValidate>
+      <label htmlFor={inputId} className="field-label">
+        E/N value or interval
+      </label>
+      <div className="inline-row">
+        <input
+          id={inputId}
+          data-testid="model-eovern"
+          type="text"
+          inputMode="text"
+          autoComplete="off"
+          spellCheck={false}
+          placeholder="8/3  or  5/3..44/3"
+          value={text}
+          aria-invalid={error ? true : undefined}
+          aria-describedby={error ? errorId : undefined}
+          onChange={(e) => {
+            setText(e.target.value);
+            if (error) setError(null);
+          }}
+        />
+        <button type="submit" data-testid="add-model" className="primary">
+          Add model
+        </button>
+      </div>
+      {error ? (
+        <p id={errorId} className="field-error" data-testid="model-eovern-error">
+          {error}
+        </p>
+      ) : null}
+    </form>
+  );
+}

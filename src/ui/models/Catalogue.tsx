@@ -1,0 +1,91 @@
+// The catalogue picker: ready-made KSVZ-type and DFSZ-type models with their E/N and N_DW (computed by the
+// anomaly calculator from the field content, which each row shows when opened); "Add" makes a model.
+import { useMemo } from "react";
+import { catalogue, type CatalogueEntry } from "../../physics/catalogue";
+import { tryAnomaly } from "../../physics/anomaly";
+import { toFractionString } from "../../physics/rational";
+import { useAxband } from "../store";
+import { fermionSummary, minus } from "../format";
+
+export interface CatalogueRow {
+  entry: CatalogueEntry;
+  /** E/N as an exact fraction string, or null when the calculator gives none. */
+  eOverN: string | null;
+  domainWall: string | null;
+}
+
+/** The catalogue with E/N and N_DW of each entry, computed once. */
+export function catalogueRows(): CatalogueRow[] {
+  return catalogue().map((entry) => {
+    const r = tryAnomaly(entry.fermions, { scalarCharge: entry.scalarCharge });
+    const res = r.ok ? r.result : null;
+    return {
+      entry,
+      eOverN: res?.eOverN ? toFractionString(res.eOverN) : null,
+      domainWall: res?.domainWallExact ? toFractionString(res.domainWallExact) : null,
+    };
+  });
+}
+
+let cached: CatalogueRow[] | null = null;
+/** {@link catalogueRows}, memoised for the session (the catalogue is fixed). */
+export function useCatalogueRows(): CatalogueRow[] {
+  return useMemo(() => (cached ??= catalogueRows()), []);
+}
+
+const GROUPS: { id: CatalogueEntry["group"]; title: string }[] = [
+  { id: "ksvz", title: "KSVZ-type (heavy quarks)" },
+  { id: "dfsz", title: "DFSZ-type (two Higgs doublets)" },
+];
+
+export function Catalogue() {
+  const rows = useCatalogueRows();
+  const addModel = useAxband((s) => s.addModel);
+  const add = (row: CatalogueRow) => {
+    if (!row.eOverN) return;
+    addModel({
+      eOverNMin: row.eOverN,
+      eOverNMax: row.eOverN,
+      label: `${row.entry.label}, E/N = ${minus(row.eOverN)}`,
+      source: { kind: "catalogue", catalogueId: row.entry.id },
+    });
+  };
+  return (
+    <details className="catalogue">
+      <summary>Catalogue</summary>
+      {GROUPS.map((g) => (
+        <div key={g.id} className="catalogue-group" role="group" aria-label={g.title}>
+          <h3>{g.title}</h3>
+          <ul>
+            {rows
+              .filter((r) => r.entry.group === g.id)
+              .map((r) => (
+                <li key={r.entry.id} className="catalogue-entry" data-catalogue-id={r.entry.id}>
+                  <details>
+                    <summary title={r.entry.note}>
+                      <span className="catalogue-label">{r.entry.label}</span>
+                      <span className="catalogue-eovern">E/N = {r.eOverN ? minus(r.eOverN) : "undefined"}</span>
+                    </summary>
+                    <div className="catalogue-fields">
+                      <ul>
+                        {r.entry.fermions.map((f, i) => (
+                          <li key={i}>{fermionSummary(f)}</li>
+                        ))}
+                      </ul>
+                      <p>
+                        X_S = {minus(String(r.entry.scalarCharge))}, N_DW = {r.domainWall ? minus(r.domainWall) : "—"}
+                      </p>
+                      {r.entry.note ? <p className="note">{r.entry.note}</p> : null}
+                    </div>
+                  </details>
+                  <button type="button" onClick={() => add(r)} disabled={!r.eOverN} aria-label={`Add ${r.entry.label}`}>
+                    Add
+                  </button>
+                </li>
+              ))}
+          </ul>
+        </div>
+      ))}
+    </details>
+  );
+}

@@ -1,0 +1,187 @@
+// The list of models: per row label, E/N, colour, line style, visibility, theory spread (k σ), order and
+// removal; a band whose interval reaches c_γ says that its coupling cancels (g = 0).
+import { useCallback, useId, useState } from "react";
+import { useShallow } from "zustand/react/shallow";
+import { bandCancels } from "../../physics/coupling";
+import { parseEOverN } from "../../physics/eovern-parse";
+import { eOverNValue, physicsOptsOf } from "../adapters/plot-settings";
+import type { LineStyle, Model } from "../../data/types";
+import { selectModelIds, selectPhysics, useAxband, type AxbandState } from "../store";
+import { minus } from "../format";
+
+const LINE_STYLES: { value: LineStyle; label: string }[] = [
+  { value: "solid", label: "solid" },
+  { value: "dashed", label: "dashed" },
+  { value: "dotted", label: "dotted" },
+  { value: "dashdot", label: "dash-dot" },
+];
+
+/** E/N of a model as text: "8/3" for a line, "5/3..44/3" for a band. */
+export function eOverNText(m: Pick<Model, "eOverNMin" | "eOverNMax">): string {
+  return m.eOverNMin === m.eOverNMax ? m.eOverNMin : `${m.eOverNMin}..${m.eOverNMax}`;
+}
+
+function EOverNField({ model }: { model: Model }) {
+  const updateModel = useAxband((s) => s.updateModel);
+  const [draft, setDraft] = useState<string | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  const errorId = useId();
+  const apply = () => {
+    if (draft === null) return;
+    const r = parseEOverN(draft);
+    if (!r.ok) {
+      setError(r.error);
+      return;
+    }
+    setError(null);
+    setDraft(null);
+    if (r.min !== model.eOverNMin || r.max !== model.eOverNMax) updateModel(model.id, { eOverNMin: r.min, eOverNMax: r.max });
+  };
+  return (
+    <span className="model-eovern-edit">
+      <input
+        type="text"
+        aria-label={`E/N of ${model.label}`}
+        value={draft ?? eOverNText(model)}
+        spellCheck={false}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={error ? errorId : undefined}
+        onChange={(e) => setDraft(e.target.value)}
+        onBlur={apply}
+        onKeyDown={(e) => {
+          if (e.key === "Enter") apply();
+          if (e.key === "Escape") {
+            setDraft(null);
+            setError(null);
+          }
+        }}
+      />
+      {error ? (
+        <span id={errorId} className="field-error">
+          {error} (kept {minus(eOverNText(model))})
+        </span>
+      ) : null}
+    </span>
+  );
+}
+
+function SpreadField({ model }: { model: Model }) {
+  const updateModel = useAxband((s) => s.updateModel);
+  const preset = [0, 1, 2].includes(model.sigmas) ? String(model.sigmas) : "custom";
+  const [custom, setCustom] = useState(preset === "custom");
+  const shown = custom ? "custom" : preset;
+  return (
+    <span className="spread">
+      <select
+        aria-label={`Theory spread of ${model.label}`}
+        value={shown}
+        onChange={(e) => {
+          if (e.target.value === "custom") setCustom(true);
+          else {
+            setCustom(false);
+            updateModel(model.id, { sigmas: Number(e.target.value) });
+          }
+        }}
+      >
+        <option value="0">no spread</option>
+        <option value="1">± 1σ</option>
+        <option value="2">± 2σ</option>
+        <option value="custom">± kσ…</option>
+      </select>
+      {shown === "custom" ? (
+        <input
+          type="number"
+          min={0}
+          max={10}
+          step={0.5}
+          className="narrow"
+          aria-label={`k for the theory spread of ${model.label}`}
+          value={model.sigmas}
+          onChange={(e) => {
+            const k = Number(e.target.value);
+            if (Number.isFinite(k) && k >= 0 && k <= 10) updateModel(model.id, { sigmas: k }, { coalesceKey: `model:${model.id}:sigmas` });
+          }}
+        />
+      ) : null}
+    </span>
+  );
+}
+
+function ModelRow({ id, index, count }: { id: string; index: number; count: number }) {
+  const model = useAxband(useCallback((s: AxbandState) => s.project.models.find((m) => m.id === id), [id]));
+  const physics = useAxband(selectPhysics);
+  const { updateModel, removeModel, moveModel } = useAxband(
+    useShallow((s: AxbandState) => ({ updateModel: s.updateModel, removeModel: s.removeModel, moveModel: s.moveModel })),
+  );
+  if (!model) return null;
+  const lo = eOverNValue(model.eOverNMin);
+  const hi = eOverNValue(model.eOverNMax);
+  const cancels = Number.isFinite(lo) && Number.isFinite(hi) && bandCancels(lo, hi, { ...physicsOptsOf(physics), sigmas: model.sigmas });
+  const kind = model.eOverNMin === model.eOverNMax ? "line" : "band";
+  return (
+    <li className={`model-row${model.visible ? "" : " hidden-model"}`} data-model-id={model.id}>
+      <div className="model-row-main">
+        <input
+          type="color"
+          className="swatch"
+          aria-label={`Colour of ${model.label}`}
+          value={/^#[0-9a-f]{6}$/i.test(model.colour) ? model.colour : "#1f4e8c"}
+          onChange={(e) => updateModel(model.id, { colour: e.target.value }, { coalesceKey: `model:${model.id}:colour` })}
+        />
+        <input
+          type="text"
+          className="model-label"
+          aria-label="Model label"
+          value={model.label}
+          onChange={(e) => updateModel(model.id, { label: e.target.value }, { coalesceKey: `model:${model.id}:label` })}
+        />
+        <label className="check" title="Show on the figure">
+          <input type="checkbox" checked={model.visible} onChange={(e) => updateModel(model.id, { visible: e.target.checked })} />
+          <span className="visually-hidden">Show {model.label}</span>
+        </label>
+      </div>
+      <div className="model-row-detail">
+        <span className="tag" title={model.source.kind === "catalogue" ? `From the catalogue (${model.source.catalogueId})` : model.source.kind === "calculator" ? "From the anomaly calculator" : "Typed E/N"}>
+          {kind}
+        </span>
+        <EOverNField model={model} />
+        <select aria-label={`Line style of ${model.label}`} value={model.lineStyle} onChange={(e) => updateModel(model.id, { lineStyle: e.target.value as LineStyle })}>
+          {LINE_STYLES.map((s) => (
+            <option key={s.value} value={s.value}>
+              {s.label}
+            </option>
+          ))}
+        </select>
+        <SpreadField model={model} />
+        <span className="row-buttons">
+          <button type="button" className="icon" aria-label={`Move ${model.label} up`} disabled={index === 0} onClick={() => moveModel(model.id, -1)}>
+            ↑
+          </button>
+          <button type="button" className="icon" aria-label={`Move ${model.label} down`} disabled={index === count - 1} onClick={() => moveModel(model.id, 1)}>
+            ↓
+          </button>
+          <button type="button" className="icon danger" aria-label={`Remove ${model.label}`} onClick={() => removeModel(model.id)}>
+            ✕
+          </button>
+        </span>
+      </div>
+      {cancels ? (
+        <p className="model-note" data-testid="cancellation-note">
+          reaches g = 0 (cancellation): the interval contains c_γ
+        </p>
+      ) : null}
+    </li>
+  );
+}
+
+export function ModelList() {
+  const ids = useAxband(useShallow(selectModelIds));
+  if (ids.length === 0) return <p className="empty">No models yet: type an E/N above, pick one from the catalogue, or build one in the anomaly calculator.</p>;
+  return (
+    <ul className="model-list" aria-label="Models">
+      {ids.map((id, i) => (
+        <ModelRow key={id} id={id} index={i} count={ids.length} />
+      ))}
+    </ul>
+  );
+}

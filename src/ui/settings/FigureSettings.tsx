@@ -1,0 +1,188 @@
+// The Figure settings section: size preset, typed axis ranges (validated; the previous range is kept on a
+// bad entry), y view, top axis, grid, legend place, font size and title.
+import { useId, useState } from "react";
+import type { Figure, LegendPlace, SizePreset, TopAxis, YView } from "../../data/types";
+import { selectFigure, useAxband } from "../store";
+
+const PRESETS: { value: SizePreset; label: string }[] = [
+  { value: "slide", label: "Slide 16:9" },
+  { value: "single-column", label: "Single column (8.6 cm)" },
+  { value: "double-column", label: "Double column (17.8 cm)" },
+  { value: "custom", label: "Custom" },
+];
+const Y_VIEWS: { value: YView; label: string }[] = [
+  { value: "coupling", label: "g_aγγ [GeV⁻¹]" },
+  { value: "normalized", label: "|E/N − c_γ| (normalized)" },
+  { value: "g-gamma", label: "|g_γ| = |E/N − c_γ|/2" },
+];
+const TOP_AXES: { value: TopAxis; label: string }[] = [
+  { value: "none", label: "none" },
+  { value: "fa", label: "f_a [GeV]" },
+  { value: "frequency", label: "frequency [Hz]" },
+];
+const LEGEND: { value: LegendPlace; label: string }[] = [
+  { value: "top-left", label: "top left" },
+  { value: "top-right", label: "top right" },
+  { value: "bottom-left", label: "bottom left" },
+  { value: "bottom-right", label: "bottom right" },
+  { value: "outside-right", label: "outside right" },
+  { value: "hidden", label: "hidden" },
+];
+
+/** Short text for a range end: 1e-7 → "1e-7", 2.5e-13 → "2.5e-13", 0.5 → "0.5". */
+export function rangeText(v: number): string {
+  if (v === 0) return "0";
+  const e = Math.floor(Math.log10(Math.abs(v)));
+  if (e >= -3 && e <= 4) return String(Number(v.toPrecision(4)));
+  return Number(v.toPrecision(4)).toExponential().replace("e+", "e");
+}
+
+/** Validates a typed axis range; returns the range or a message naming what is wrong. */
+export function checkRange(minText: string, maxText: string, what: string): { ok: true; range: [number, number] } | { ok: false; error: string } {
+  const lo = Number(minText.trim().replace(/\u2212/g, "-"));
+  const hi = Number(maxText.trim().replace(/\u2212/g, "-"));
+  if (minText.trim() === "" || !Number.isFinite(lo)) return { ok: false, error: `${what} min: “${minText}” is not a number` };
+  if (maxText.trim() === "" || !Number.isFinite(hi)) return { ok: false, error: `${what} max: “${maxText}” is not a number` };
+  if (lo <= 0 || hi <= 0) return { ok: false, error: `${what}: both ends must be positive (log axis)` };
+  if (lo >= hi) return { ok: false, error: `${what}: min must be less than max` };
+  if (hi / lo > 1e40) return { ok: false, error: `${what}: at most 40 decades` };
+  return { ok: true, range: [lo, hi] };
+}
+
+function RangeFields({ label, unit, range, onApply, testid }: { label: string; unit: string; range: [number, number]; onApply: (r: [number, number]) => void; testid: string }) {
+  const [draft, setDraft] = useState<[string, string] | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  const errId = useId();
+  const shown: [string, string] = draft ?? [rangeText(range[0]), rangeText(range[1])];
+  const apply = (d: [string, string] | null) => {
+    if (!d) return;
+    const r = checkRange(d[0], d[1], label);
+    if (!r.ok) {
+      setError(r.error);
+      return;
+    }
+    setError(null);
+    setDraft(null);
+    if (r.range[0] !== range[0] || r.range[1] !== range[1]) onApply(r.range);
+  };
+  const field = (i: 0 | 1, name: string) => (
+    <input
+      type="text"
+      inputMode="decimal"
+      className="range-input"
+      data-testid={`${testid}-${name}`}
+      aria-label={`${label} ${name}${unit ? ` (${unit})` : ""}`}
+      value={shown[i]}
+      aria-invalid={error ? true : undefined}
+      aria-describedby={error ? errId : undefined}
+      onChange={(e) => {
+        const next: [string, string] = [...shown];
+        next[i] = e.target.value;
+        setDraft(next);
+      }}
+      onBlur={() => apply(draft)}
+      onKeyDown={(e) => {
+        if (e.key === "Enter") apply(draft);
+        if (e.key === "Escape") {
+          setDraft(null);
+          setError(null);
+        }
+      }}
+    />
+  );
+  return (
+    <div className="range-fields">
+      <span className="field-label">
+        {label}
+        {unit ? ` [${unit}]` : ""}
+      </span>
+      <div className="inline-row">
+        {field(0, "min")}
+        <span aria-hidden="true">to</span>
+        {field(1, "max")}
+      </div>
+      {error ? (
+        <p id={errId} className="field-error">
+          {error}; kept {rangeText(range[0])} to {rangeText(range[1])}.
+        </p>
+      ) : null}
+    </div>
+  );
+}
+
+function Select<T extends string>({ label, value, options, onChange }: { label: string; value: T; options: { value: T; label: string }[]; onChange: (v: T) => void }) {
+  return (
+    <label className="setting">
+      <span className="field-label">{label}</span>
+      <select value={value} onChange={(e) => onChange(e.target.value as T)}>
+        {options.map((o) => (
+          <option key={o.value} value={o.value}>
+            {o.label}
+          </option>
+        ))}
+      </select>
+    </label>
+  );
+}
+
+function NumberSetting({ label, value, min, max, step, onChange }: { label: string; value: number; min: number; max: number; step: number; onChange: (v: number) => void }) {
+  const [draft, setDraft] = useState<string | null>(null);
+  return (
+    <label className="setting">
+      <span className="field-label">{label}</span>
+      <input
+        type="number"
+        min={min}
+        max={max}
+        step={step}
+        className="narrow"
+        value={draft ?? String(value)}
+        onChange={(e) => {
+          setDraft(e.target.value);
+          const v = Number(e.target.value);
+          if (e.target.value !== "" && Number.isFinite(v) && v >= min && v <= max) onChange(v);
+        }}
+        onBlur={() => setDraft(null)}
+      />
+    </label>
+  );
+}
+
+export function FigureSettings() {
+  const figure = useAxband(selectFigure);
+  const setFigure = useAxband((s) => s.setFigure);
+  const setView = useAxband((s) => s.setView);
+  const resetView = useAxband((s) => s.resetView);
+  const set = (patch: Partial<Figure>, key?: string) => setFigure(patch, key ? { coalesceKey: key } : undefined);
+  const yLabel = figure.yView === "coupling" ? "g_aγγ" : figure.yView === "normalized" ? "|E/N − c_γ|" : "|g_γ|";
+  return (
+    <div className="figure-settings">
+      <Select label="Size" value={figure.preset} options={PRESETS} onChange={(v) => set({ preset: v })} />
+      {figure.preset === "custom" ? (
+        <div className="inline-row">
+          <NumberSetting label="Width (mm)" value={figure.customWidthMm} min={20} max={1000} step={1} onChange={(v) => set({ customWidthMm: v }, "figure:width")} />
+          <NumberSetting label="Height (mm)" value={figure.customHeightMm} min={20} max={1000} step={1} onChange={(v) => set({ customHeightMm: v }, "figure:height")} />
+        </div>
+      ) : null}
+      <RangeFields label="m_a" unit="eV" testid="range-mass" range={figure.massRangeEv} onApply={(r) => setView(r, figure.yRange)} />
+      <RangeFields label={yLabel} unit={figure.yView === "coupling" ? "GeV⁻¹" : ""} testid="range-y" range={figure.yRange} onApply={(r) => setView(figure.massRangeEv, r)} />
+      <button type="button" onClick={resetView}>
+        Reset view
+      </button>
+      <Select label="y axis" value={figure.yView} options={Y_VIEWS} onChange={(v) => set({ yView: v })} />
+      <Select label="Top axis" value={figure.topAxis} options={TOP_AXES} onChange={(v) => set({ topAxis: v })} />
+      <Select label="Legend" value={figure.legend} options={LEGEND} onChange={(v) => set({ legend: v })} />
+      <div className="inline-row">
+        <NumberSetting label="Font (pt)" value={figure.fontPt} min={5} max={36} step={0.5} onChange={(v) => set({ fontPt: v }, "figure:font")} />
+        <label className="check setting">
+          <input type="checkbox" checked={figure.grid} onChange={(e) => set({ grid: e.target.checked })} />
+          Grid
+        </label>
+      </div>
+      <label className="setting">
+        <span className="field-label">Title</span>
+        <input type="text" value={figure.title} placeholder="(none)" onChange={(e) => set({ title: e.target.value }, "figure:title")} />
+      </label>
+    </div>
+  );
+}
