@@ -1,0 +1,193 @@
+// Main-thread side of the curve import: runs parses in the import Web Worker (one shared worker, jobs by id)
+// with progress and cancel, and falls back to sliced parsing on the calling thread where Workers do not exist.
+import {
+  checkImportFile,
+  createCurveParser,
+  ImportCancelled,
+  parseCurveSource,
+  type CurveParseOptions,
+  type CurveParseResult,
+  type ImportProgress,
+} from "../data/csv";
+
+/** Messages to the worker. */
+export type ImportRequest =
+  | { type: "parse"; id: number; source: string | ArrayBuffer | Blob; opts: CurveParseOptions }
+  | { type: "cancel"; id: number };
+
+/** Messages from the worker. */
+export type ImportResponse =
+  | { type: "progress"; id: number; fraction: number; lines: number }
+  | { type: "result"; id: number; result: CurveParseResult }
+  | { type: "cancelled"; id: number }
+  | { type: "error"; id: number; message: string };
+
+export interface ImportJob {
+  /**
+   * The parse result (a file that gives no curve resolves with `fatal` set, it does not reject). Rejects
+   * with an error named "AbortError" after cancel() (test with isImportCancelled), or on a worker failure.
+   */
+  promise: Promise<CurveParseResult>;
+  /** Stops the parse; the promise then rejects with an AbortError. */
+  cancel(): void;
+}
+
+/** Called with the fraction 0..1 of the input read, and the lines read so far. */
+export type ProgressCallback = (fraction: number, progress: ImportProgress) => void;
+
+interface Pending {
+  resolve: (r: CurveParseResult) => void;
+  reject: (e: Error) => void;
+  onProgress?: ProgressCallback;
+  /** Re-run on the main thread if the worker dies before answering. */
+  fallback: () => void;
+}
+
+let worker: Worker | null = null;
+let workerBroken = false;
+let nextId = 1;
+const pending = new Map<number, Pending>();
+/** Set to false to force the main-thread path (tests, benchmarks). */
+let workerAllowed = true;
+
+/** Chooses whether imports may use the Worker (true, the default) or always run on the calling thread. */
+export function setImportWorkerEnabled(enabled: boolean): void {
+  workerAllowed = enabled;
+}
+
+/** True when imports run in a Web Worker here. */
+export function importWorkerAvailable(): boolean {
+  return workerAllowed && !workerBroken && typeof Worker === "function";
+}
+
+function getWorker(): Worker | null {
+  if (!importWorkerAvailable()) return null;
+  if (worker) return worker;
+  try {
+    worker = new Worker(new URL("./import-worker.ts", import.meta.url), { type: "module" });
+  } catch {
+    workerBroken = true;
+    return null;
+  }
+  worker.onmessage = (ev: MessageEvent<ImportResponse>) => {
+    const msg = ev.data;
+    const job = pending.get(msg.id);
+    if (!job) return;
+    if (msg.type === "progress") {
+      job.onProgress?.(msg.fraction, { fraction: msg.fraction, lines: msg.lines });
+      return;
+    }
+    pending.delete(msg.id);
+    if (msg.type === "result") job.resolve(msg.result);
+    else if (msg.type === "cancelled") job.reject(new ImportCancelled());
+    else job.reject(new Error(`import failed: ${msg.message}`));
+  };
+  // A worker that cannot load (blocked module worker, CSP) must not lose the import: redo it here.
+  worker.onerror = (ev) => {
+    ev.preventDefault?.();
+    workerBroken = true;
+    worker?.terminate();
+    worker = null;
+    const jobs = [...pending.values()];
+    pending.clear();
+    for (const job of jobs) job.fallback();
+  };
+  return worker;
+}
+
+/** Stops the shared worker (it is started again by the next import). */
+export function disposeImportWorker(): void {
+  worker?.terminate();
+  worker = null;
+  for (const job of pending.values()) job.reject(new ImportCancelled());
+  pending.clear();
+}
+
+function onMainThread(
+  source: File | Blob | string | ArrayBuffer,
+  opts: CurveParseOptions,
+  onProgress: ProgressCallback | undefined,
+  signal: AbortSignal,
+): Promise<CurveParseResult> {
+  // Short slices keep the page responsive even without a worker.
+  return parseCurveSource(source, opts, {
+    signal,
+    yieldMs: 30,
+    sliceChars: 1 << 18,
+    onProgress: onProgress ? (p) => onProgress(p.fraction, p) : undefined,
+  });
+}
+
+/**
+ * Parses a file, Blob, text or bytes in the import worker (main-thread fallback where there is no Worker).
+ * `opts.fileName` defaults to the File's name. Files over MAX_IMPORT_BYTES, empty or binary files resolve
+ * at once with `fatal` set and nothing parsed.
+ * @param onProgress called with the fraction 0..1 read (throttled to steps of 0.5 % or more)
+ */
+export function importInWorker(
+  source: File | Blob | string | ArrayBuffer,
+  opts: CurveParseOptions = {},
+  onProgress?: ProgressCallback,
+): ImportJob {
+  const o: CurveParseOptions = { ...opts };
+  if (o.fileName === undefined && typeof File === "function" && source instanceof File) o.fileName = source.name;
+  const controller = new AbortController();
+  let resolve!: (r: CurveParseResult) => void;
+  let reject!: (e: Error) => void;
+  const promise = new Promise<CurveParseResult>((res, rej) => {
+    resolve = res;
+    reject = rej;
+  });
+  const local = () => onMainThread(source, o, onProgress, controller.signal).then(resolve, reject);
+
+  const w = getWorker();
+  if (!w) {
+    void local();
+    return { promise, cancel: () => controller.abort() };
+  }
+  const id = nextId++;
+  pending.set(id, { resolve, reject, onProgress, fallback: () => void local() });
+  try {
+    w.postMessage({ type: "parse", id, source, opts: o } satisfies ImportRequest);
+  } catch {
+    pending.delete(id);
+    void local();
+  }
+  return {
+    promise,
+    cancel: () => {
+      controller.abort();
+      if (pending.has(id)) w.postMessage({ type: "cancel", id } satisfies ImportRequest);
+    },
+  };
+}
+
+/** How much of a file {@link previewFile} reads. */
+export const PREVIEW_BYTES = 64 * 1024;
+
+/**
+ * A quick look at a file for the import step: checks (size cap, binary, empty) and parses only its first
+ * {@link PREVIEW_BYTES} on the calling thread. The result is `truncated` when the file is longer; its
+ * detected delimiter, header, units and preview rows are those the full import will find.
+ */
+export async function previewFile(file: Blob, opts: CurveParseOptions = {}): Promise<CurveParseResult> {
+  const o: CurveParseOptions = { ...opts };
+  if (o.fileName === undefined && typeof File === "function" && file instanceof File) o.fileName = file.name;
+  const bytes = new Uint8Array(await file.slice(0, PREVIEW_BYTES).arrayBuffer());
+  const check = checkImportFile({ name: o.fileName, size: file.size, firstBytes: bytes.subarray(0, 4096) });
+  if (!check.ok) {
+    const r = createCurveParser(o).finish();
+    return { ...r, fatal: check.problem, messages: [{ level: "error", text: `${o.fileName ?? "input"}: ${check.problem.message}` }] };
+  }
+  let text = new TextDecoder(check.encoding).decode(bytes);
+  const complete = file.size <= PREVIEW_BYTES;
+  if (!complete) {
+    // The byte cut may break the last line: leave it out.
+    const nl = Math.max(text.lastIndexOf("\n"), text.lastIndexOf("\r"));
+    if (nl >= 0) text = text.slice(0, nl + 1);
+  }
+  const parser = createCurveParser(o);
+  parser.push(text);
+  const r = parser.finish();
+  return complete ? r : { ...r, truncated: true };
+}
