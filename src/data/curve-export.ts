@@ -177,7 +177,6 @@ export function curveCsvFileName(label: string): string {
   const safe = [...label.trim()]
     .map((ch) => (ch.charCodeAt(0) < 32 || '\\/:*?"<>|'.includes(ch) ? "_" : ch))
     .join("")
-    .replace(/_+/g, "_")
     .replace(/\s+/g, " ")
     .slice(0, 120);
   return `${safe || "curve"}.csv`;

@@ -9,3 +9,7 @@ export * from "./link";
 export * from "./project-file";
 export * from "./overlap";
 export * from "./overlap-table";
+export * from "./units";
+export * from "./csv";
+export * from "./rescale";
+export * from "./curve-export";
