@@ -6,20 +6,21 @@ import { useCallback, useEffect, useId, useRef, useState } from "react";
 import type { Curve, CurveRole } from "../../data/types";
 import { newCurve } from "../../data/defaults";
 import { useAxband } from "../store";
-import { MAX_IMPORT_BYTES, type ParseResult } from "./pending-data";
+import { delimiterName, labelFromFileName, MAX_IMPORT_BYTES, type CurveParseResult } from "../../data/csv";
 import { startParse, type ParseJob } from "./parse-runner";
 import {
+  DELIMITERS,
   formatBytes,
   importable,
-  inspectHead,
-  labelFromFileName,
+  initialSettings,
   PARSE_KEYS,
   parseOptsOf,
+  problemOf,
   rejectionLines,
+  settingsAfterParse,
   type ImportItem,
   type ImportSettings,
 } from "./import-items";
-import { delimiterName, DELIMITERS, normaliseDelimiter, splitRow } from "./sniff";
 import { COUPLING_UNIT_OPTIONS, MASS_UNIT_OPTIONS } from "./unit-options";
 import { useWindowDrop } from "./useWindowDrop";
 import { isProjectFileName, openProjectFile } from "../share/open-project";
@@ -91,16 +92,16 @@ export function ImportDialog() {
       jobs.current.set(item.key, { id, job });
       patchItem(item.key, { status: "parsing", progress: 0 });
       job.promise.then(
-        (result: ParseResult) => {
+        (result: CurveParseResult) => {
           if (jobs.current.get(item.key)?.id !== id) return;
           jobs.current.delete(item.key);
-          const empty = result.massEv.length === 0;
-          patchItem(item.key, {
+          patchItem(item.key, (it) => ({
             status: "ready",
             progress: 1,
             result,
-            problem: empty ? `${item.fileName} has no readable data rows${result.rejected.length ? " (every row was rejected)" : ""}.` : null,
-          });
+            settings: settingsAfterParse(it.settings, result),
+            problem: problemOf(it.fileName, result),
+          }));
         },
         (e: unknown) => {
           if (jobs.current.get(item.key)?.id !== id) return;
@@ -114,42 +115,23 @@ export function ImportDialog() {
   );
 
   const addSources = useCallback(
-    async (sources: { name: string; blob: Blob; label?: string }[]) => {
+    (sources: { name: string; blob: Blob; label?: string }[]) => {
       setNotice(null);
       for (const src of sources) {
-        const key = nextKey();
-        const info = await inspectHead(src.blob, src.name, MAX_IMPORT_BYTES);
-        const settings: ImportSettings = {
-          delimiter: "auto",
-          massUnit: info.massUnit ?? "eV",
-          couplingUnit: info.couplingUnit ?? "GeV^-1",
-          modelEOverN: info.modelEOverN !== null ? String(info.modelEOverN) : "0",
-          log10Mass: info.log10Mass,
-          log10Coupling: info.log10Coupling,
-          massColumn: 1,
-          couplingColumn: 2,
-          role: "exclusion",
-          keepOrder: false,
-          label: src.label ?? labelFromFileName(src.name),
-          citation: "",
-        };
         const item: ImportItem = {
-          key,
+          key: nextKey(),
           fileName: src.name,
           source: src.blob,
           sizeBytes: src.blob.size,
-          problem: info.problem,
-          head: info.head,
-          headHeader: info.header,
-          columns: info.columns,
-          unitsFromHeader: { mass: info.massUnit !== null, coupling: info.couplingUnit !== null },
-          settings,
-          status: info.problem ? "failed" : "parsing",
+          problem: null,
+          settings: initialSettings(src.label ?? labelFromFileName(src.name)),
+          labelEdited: false,
+          status: "parsing",
           progress: 0,
           result: null,
         };
         setItems((list) => [...list, item]);
-        if (!info.problem) runParse(item);
+        runParse(item);
       }
     },
     [runParse],
@@ -158,7 +140,7 @@ export function ImportDialog() {
   const addFiles = useCallback(
     async (files: File[]) => {
       const rest = await openProjects(files);
-      if (rest.length > 0) await addSources(rest.map((f) => ({ name: f.name, blob: f })));
+      if (rest.length > 0) addSources(rest.map((f) => ({ name: f.name, blob: f })));
     },
     [openProjects, addSources],
   );
@@ -168,10 +150,9 @@ export function ImportDialog() {
   const changeSettings = (item: ImportItem, patch: Partial<ImportSettings>) => {
     const settings = { ...item.settings, ...patch };
     if (patch.role === "region") settings.keepOrder = true;
-    const next = { ...item, settings };
-    patchItem(item.key, { settings });
-    if (PARSE_KEYS.some((k) => k in patch && patch[k] !== item.settings[k]) && item.problem === null) runParse(next);
-    else if (PARSE_KEYS.some((k) => k in patch) && item.status === "failed" && item.head.length > 0) runParse({ ...next, problem: null });
+    const next: ImportItem = { ...item, settings, labelEdited: item.labelEdited || "label" in patch };
+    patchItem(item.key, { settings, labelEdited: next.labelEdited });
+    if (PARSE_KEYS.some((k) => k in patch && patch[k] !== item.settings[k])) runParse(next);
   };
 
   const removeItem = (key: string) => {
@@ -190,13 +171,13 @@ export function ImportDialog() {
 
   const confirm = async () => {
     setBusy(true);
-    const unseen = itemsRef.current.some((it) => it.status === "parsing" || it.status === "reading");
+    const unseen = itemsRef.current.some((it) => it.status === "parsing");
     // Wait for parses still running; their results arrive through state, read back from the ref.
     await Promise.allSettled([...jobs.current.values()].map((j) => j.job.promise));
     await new Promise((r) => setTimeout(r, 0));
     const list = itemsRef.current;
     const ready = list.filter(importable);
-    const rejectedTotal = ready.reduce((n, it) => n + (it.result?.rejected.length ?? 0), 0);
+    const rejectedTotal = ready.reduce((n, it) => n + (it.result?.rejectedCount ?? 0), 0);
     if (unseen && rejectedTotal > 0) {
       setBusy(false);
       setNotice(`Some rows could not be read (listed below). Import again to skip them, or cancel.`);
@@ -211,7 +192,7 @@ export function ImportDialog() {
     const context: { curves: Pick<Curve, "colour">[] } = { curves: [...existing] };
     const curves: Curve[] = [];
     for (const it of ready) {
-      const r = it.result as ParseResult;
+      const r = it.result as CurveParseResult;
       const s = it.settings;
       const curve = newCurve(
         {
@@ -253,7 +234,7 @@ export function ImportDialog() {
   const totalBytes = parsing.reduce((n, it) => n + Math.max(1, it.sizeBytes), 0);
   const overall = parsing.length === 0 ? 1 : parsing.reduce((n, it) => n + it.progress * Math.max(1, it.sizeBytes), 0) / totalBytes;
   const readyCount = items.filter(importable).length;
-  const rejectedTotal = items.filter(importable).reduce((n, it) => n + (it.result?.rejected.length ?? 0), 0);
+  const rejectedTotal = items.filter(importable).reduce((n, it) => n + (it.result?.rejectedCount ?? 0), 0);
 
   return (
     <section className="ax-panel ax-import" aria-labelledby="ax-import-title">
@@ -296,7 +277,7 @@ export function ImportDialog() {
               type="button"
               disabled={pasteText.trim() === ""}
               onClick={() => {
-                void addSources([{ name: "paste", blob: new Blob([pasteText], { type: "text/plain" }), label: "Pasted data" }]);
+                addSources([{ name: "paste", blob: new Blob([pasteText], { type: "text/plain" }), label: "Pasted data" }]);
                 setPasteText("");
                 setPasteOpen(false);
               }}
@@ -354,15 +335,21 @@ export function ImportDialog() {
   );
 }
 
+function unitNote(source: string | undefined): string {
+  return source === "header" ? " (from the header)" : source === "default" ? " (assumed)" : "";
+}
+
 function ItemCard({ item, onChange, onRemove }: { item: ImportItem; onChange: (p: Partial<ImportSettings>) => void; onRemove: () => void }) {
   const s = item.settings;
   const r = item.result;
-  const delimiter = s.delimiter === "auto" ? normaliseDelimiter(r?.delimiter ?? null) : s.delimiter;
-  const previewRows = item.head.slice(0, 6).map((l) => ({ row: l.row, cells: splitRow(l.text, r ? delimiter : "auto") }));
-  const rej = r ? rejectionLines(item.fileName, r.rejected) : { lines: [], more: 0 };
-  const header = r?.header ?? item.headHeader;
-  const columnChoices = Array.from({ length: Math.max(2, item.columns) }, (_, i) => i + 1);
-  const canEdit = item.head.length > 0;
+  const rej = r ? rejectionLines(item.fileName, r) : { lines: [], more: 0 };
+  const header = r?.header ?? null;
+  const columns = Math.max(2, r?.columnCount ?? 2);
+  const columnChoices = Array.from({ length: columns }, (_, i) => i + 1);
+  const preview = r ? r.preview.slice(0, 6) : [];
+  const canEdit = r !== null && !(r.fatal && r.fatal.code !== "single-column" && r.fatal.code !== "no-data");
+  const notes = r ? r.messages.filter((m) => m.level !== "error") : [];
+  const columnLabel = (c: number) => `column ${c}${header?.[c - 1] ? ` · ${header[c - 1]}` : ""}`;
 
   return (
     <article className="ax-import-item" data-testid="import-item" aria-label={`Import ${item.fileName}`}>
@@ -379,13 +366,21 @@ function ItemCard({ item, onChange, onRemove }: { item: ImportItem; onChange: (p
           {item.problem}
         </p>
       ) : null}
-      {previewRows.length > 0 ? (
+      {preview.length > 0 || header ? (
         <table className="ax-preview" aria-label={`First rows of ${item.fileName}`}>
           <tbody>
-            {previewRows.map((row) => (
-              <tr key={row.row} className={header && row.row === item.head[0]?.row ? "ax-preview-header" : undefined}>
+            {header && r?.headerRow ? (
+              <tr className="ax-preview-header">
+                <th scope="row">{r.headerRow}</th>
+                {header.slice(0, 6).map((c, i) => (
+                  <td key={i}>{c}</td>
+                ))}
+              </tr>
+            ) : null}
+            {preview.map((row) => (
+              <tr key={row.row} className={row.problem ? "ax-preview-bad" : undefined} title={row.problem ?? undefined}>
                 <th scope="row">{row.row}</th>
-                {row.cells.slice(0, 6).map((c, i) => (
+                {row.fields.slice(0, 6).map((c, i) => (
                   <td key={i} className={i + 1 === s.massColumn || i + 1 === s.couplingColumn ? "ax-preview-used" : undefined}>
                     {c}
                   </td>
@@ -395,16 +390,15 @@ function ItemCard({ item, onChange, onRemove }: { item: ImportItem; onChange: (p
           </tbody>
         </table>
       ) : null}
-      {canEdit ? (
+      {r && canEdit ? (
         <>
           <p className="ax-import-detected" data-testid="import-detected">
-            Delimiter: <b>{r ? delimiterName(r.delimiter) : "…"}</b>
-            {s.delimiter === "auto" ? " (detected)" : " (chosen)"} · Header: {header ? <b>{header.join(" | ")}</b> : "none"} · Units:{" "}
-            <b>
-              {MASS_UNIT_OPTIONS.find((u) => u.value === s.massUnit)?.label}, {COUPLING_UNIT_OPTIONS.find((u) => u.value === s.couplingUnit)?.label}
-            </b>
-            {item.unitsFromHeader.mass || item.unitsFromHeader.coupling ? " (from the header)" : ""}
-            {r ? ` · ${r.massEv.length.toLocaleString("en")} points` : ""}
+            Delimiter: <b>{delimiterName(r.delimiter)}</b>
+            {s.delimiter === "auto" ? " (detected)" : " (chosen)"}
+            {r.decimalComma ? ", decimal comma" : ""} · Header: {header ? <b>{header.join(" | ")}</b> : "none"} · Mass:{" "}
+            <b>{MASS_UNIT_OPTIONS.find((u) => u.value === r.massUnit)?.label ?? r.massUnit}</b>
+            {unitNote(r.massUnitSource)} · Coupling: <b>{COUPLING_UNIT_OPTIONS.find((u) => u.value === r.couplingUnit)?.label ?? r.couplingUnit}</b>
+            {unitNote(r.couplingUnitSource)} · <b>{r.massEv.length.toLocaleString("en")}</b> points
           </p>
           <div className="ax-import-settings">
             <label className="ax-field">
@@ -419,7 +413,7 @@ function ItemCard({ item, onChange, onRemove }: { item: ImportItem; onChange: (p
             </label>
             <label className="ax-field">
               <span>Mass unit</span>
-              <select value={s.massUnit} onChange={(e) => onChange({ massUnit: e.target.value as ImportSettings["massUnit"] })}>
+              <select value={s.massUnit ?? r.massUnit} onChange={(e) => onChange({ massUnit: e.target.value as ImportSettings["massUnit"] })}>
                 {MASS_UNIT_OPTIONS.map((u) => (
                   <option key={u.value} value={u.value}>
                     {u.label}
@@ -429,7 +423,10 @@ function ItemCard({ item, onChange, onRemove }: { item: ImportItem; onChange: (p
             </label>
             <label className="ax-field">
               <span>Coupling</span>
-              <select value={s.couplingUnit} onChange={(e) => onChange({ couplingUnit: e.target.value as ImportSettings["couplingUnit"] })}>
+              <select
+                value={s.couplingUnit ?? r.couplingUnit}
+                onChange={(e) => onChange({ couplingUnit: e.target.value as ImportSettings["couplingUnit"] })}
+              >
                 {COUPLING_UNIT_OPTIONS.map((u) => (
                   <option key={u.value} value={u.value}>
                     {u.label}
@@ -437,10 +434,10 @@ function ItemCard({ item, onChange, onRemove }: { item: ImportItem; onChange: (p
                 ))}
               </select>
             </label>
-            {s.couplingUnit === "model-line" ? (
+            {(s.couplingUnit ?? r.couplingUnit) === "model-line" ? (
               <label className="ax-field">
                 <span>of the line E/N =</span>
-                <input type="text" size={6} value={s.modelEOverN} onChange={(e) => onChange({ modelEOverN: e.target.value })} />
+                <input type="text" size={6} aria-label="E/N of the model line" value={s.modelEOverN} onChange={(e) => onChange({ modelEOverN: e.target.value })} />
               </label>
             ) : null}
             <label className="ax-check">
@@ -452,26 +449,24 @@ function ItemCard({ item, onChange, onRemove }: { item: ImportItem; onChange: (p
               coupling as log10
             </label>
           </div>
-          {item.columns > 2 ? (
+          {columns > 2 ? (
             <div className="ax-import-settings">
               <label className="ax-field">
-                <span>Mass column</span>
-                <select value={s.massColumn} onChange={(e) => onChange({ massColumn: Number(e.target.value) })}>
+                <span>Mass from</span>
+                <select value={s.massColumn ?? r.massColumn} onChange={(e) => onChange({ massColumn: Number(e.target.value) })}>
                   {columnChoices.map((c) => (
                     <option key={c} value={c}>
-                      {c}
-                      {header?.[c - 1] ? ` · ${header[c - 1]}` : ""}
+                      {columnLabel(c)}
                     </option>
                   ))}
                 </select>
               </label>
               <label className="ax-field">
-                <span>Coupling column</span>
-                <select value={s.couplingColumn} onChange={(e) => onChange({ couplingColumn: Number(e.target.value) })}>
+                <span>Coupling from</span>
+                <select value={s.couplingColumn ?? r.couplingColumn} onChange={(e) => onChange({ couplingColumn: Number(e.target.value) })}>
                   {columnChoices.map((c) => (
                     <option key={c} value={c}>
-                      {c}
-                      {header?.[c - 1] ? ` · ${header[c - 1]}` : ""}
+                      {columnLabel(c)}
                     </option>
                   ))}
                 </select>
@@ -512,18 +507,29 @@ function ItemCard({ item, onChange, onRemove }: { item: ImportItem; onChange: (p
       ) : null}
       {r && r.massEv.length > 0 ? (
         <p className="ax-hint" data-testid="import-first-point">
-          First point: m_a = {r.massEv[0].toPrecision(4)} eV, g_aγγ = {r.gInvGeV[0].toPrecision(4)} GeV⁻¹
+          First point read: m_a = {r.massEv[0].toExponential(3)} eV, g_aγγ = {r.gInvGeV[0].toExponential(3)} GeV⁻¹
         </p>
+      ) : null}
+      {notes.length > 0 ? (
+        <ul className="ax-import-notes">
+          {notes.map((m, i) => (
+            <li key={i} className={m.level === "warning" ? "ax-import-warn" : "ax-hint"}>
+              {m.text}
+            </li>
+          ))}
+        </ul>
       ) : null}
       {r && r.nonPositive > 0 ? (
         <p className="ax-import-warn" data-testid="import-nonpositive">
-          {r.nonPositive.toLocaleString("en")} value{r.nonPositive === 1 ? "" : "s"} ≤ 0: kept in the data, but they cannot be shown on the log axes.
+          {r.nonPositive.toLocaleString("en")} row{r.nonPositive === 1 ? " has" : "s have"} a value ≤ 0: kept in the data, but not drawn on the log axes
+          {r.nonPositiveRows.length > 0 ? ` (rows ${r.nonPositiveRows.slice(0, 5).join(", ")}${r.nonPositive > 5 ? ", …" : ""})` : ""}.
         </p>
       ) : null}
       {rej.lines.length > 0 ? (
         <div className="ax-import-rejected" data-testid="import-rejected">
           <p>
-            {r?.rejected.length.toLocaleString("en")} row{r?.rejected.length === 1 ? "" : "s"} could not be read; they are skipped when you import (or cancel):
+            {r?.rejectedCount.toLocaleString("en")} row{r?.rejectedCount === 1 ? "" : "s"} could not be read. Import skips {r?.rejectedCount === 1 ? "it" : "them"}; Cancel
+            imports nothing.
           </p>
           <pre>{rej.lines.join("\n") + (rej.more > 0 ? `\n… and ${rej.more.toLocaleString("en")} more` : "")}</pre>
         </div>

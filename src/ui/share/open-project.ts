@@ -1,7 +1,9 @@
 // Opens a project from a file the user picked or dropped: a `.axband.json` project file or an SVG figure
 // exported by axband (the project travels in its <metadata>). Validation is the data core's; this only
 // routes the file and words the outcome.
-import { extractProjectFromSvg, projectFromFile, MAX_IMPORT_BYTES } from "../importer/pending-data";
+import { projectFromFile } from "../importer/pending-data";
+import { MAX_IMPORT_BYTES } from "../../data/csv";
+import { extractProjectFromSvg } from "../../plot/figure-file";
 import type { Project } from "../../data/types";
 
 export type OpenOutcome = { ok: true; project: Project; message: string } | { ok: false; error: string };
