@@ -16,7 +16,8 @@ function decades(lo: number, hi: number, minDecades: number): [number, number] {
     a -= 1;
     if (b - a < minDecades) b += 1;
   }
-  return [10 ** a, 10 ** b];
+  // Number("1e-5") is the double nearest 10⁻⁵; 10 ** -5 is one ulp below it.
+  return [Number(`1e${a}`), Number(`1e${b}`)];
 }
 
 /**

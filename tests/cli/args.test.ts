@@ -1,0 +1,146 @@
+// Tests for the renderer's argument parser and helpers: roles per CSV file, ranges, presets, conflicting or
+// unknown options, fitted axis ranges, PNG pixel sizes and the all-or-nothing writer.
+import { describe, expect, it } from "vitest";
+import { existsSync, readdirSync, readFileSync } from "node:fs";
+import { join } from "node:path";
+import { parseArgs } from "../../src/cli/args";
+import { fitRanges } from "../../src/cli/fit-ranges";
+import { pickFallbackFont, pngPixelSize } from "../../src/cli/png";
+import { writeAllOrNothing } from "../../src/cli/write-atomic";
+import { tempDir } from "./fixtures";
+
+function ok(argv: string[]) {
+  const r = parseArgs(argv);
+  if (!r.ok) throw new Error(r.error);
+  return r.options;
+}
+function err(argv: string[]): string {
+  const r = parseArgs(argv);
+  if (r.ok) throw new Error(`expected an error for ${argv.join(" ")}`);
+  return r.error;
+}
+
+describe("parseArgs", () => {
+  it("reads a project file with SVG and PNG outputs, dpi and preset", () => {
+    const o = ok(["p.axband.json", "-o", "f.svg", "--png=f.png", "--dpi", "600", "--preset", "single-column"]);
+    expect(o.inputs).toEqual([{ path: "p.axband.json", kind: "project", role: "exclusion" }]);
+    expect([o.out, o.png, o.dpi, o.preset, o.embed]).toEqual(["f.svg", "f.png", 600, "single-column", true]);
+  });
+
+  it("defaults to 300 dpi and recognises exported SVG input", () => {
+    const o = ok(["figure.svg", "--png", "f.png"]);
+    expect(o.dpi).toBe(300);
+    expect(o.inputs[0].kind).toBe("svg");
+  });
+
+  it("gives each CSV file the --role before it; files before the first --role take the first one", () => {
+    const o = ok(["a.csv", "--role", "projection", "b.csv", "c.txt", "--role", "region", "d.dat", "-o", "x.svg"]);
+    expect(o.inputs.map((f) => [f.path, f.kind, f.role])).toEqual([
+      ["a.csv", "csv", "projection"],
+      ["b.csv", "csv", "projection"],
+      ["c.txt", "csv", "projection"],
+      ["d.dat", "csv", "region"],
+    ]);
+    expect(ok(["a.csv", "b.csv", "--role", "region", "-o", "x.svg"]).inputs.map((f) => f.role)).toEqual(["region", "region"]);
+    expect(ok(["a.csv", "-o", "x.svg"]).inputs[0].role).toBe("exclusion");
+  });
+
+  it("collects repeated --model values and reads ranges", () => {
+    const o = ok(["a.csv", "--model", "8/3", "--model", "0..44/3", "--mass-range", "1e-10:1e-1", "--g-range=1e-17,1e-7", "-o", "x.svg"]);
+    expect(o.models).toEqual(["8/3", "0..44/3"]);
+    expect(o.massRangeEv).toEqual([1e-10, 1e-1]);
+    expect(o.gRange).toEqual([1e-17, 1e-7]);
+  });
+
+  it("treats everything after -- as files", () => {
+    expect(ok(["-o", "x.svg", "--", "--weird.csv"]).inputs[0].path).toBe("--weird.csv");
+  });
+
+  it("refuses unknown options, missing values, bad numbers and conflicting inputs", () => {
+    expect(err(["a.csv", "-o", "x.svg", "--frobnicate"])).toMatch(/unknown option --frobnicate/);
+    expect(err(["a.csv", "-o"])).toMatch(/-o needs a value/);
+    expect(err(["a.csv", "-o", "x.svg", "--dpi", "-3"])).toMatch(/--dpi/);
+    expect(err(["a.csv", "-o", "x.svg", "--preset", "poster"])).toMatch(/--preset/);
+    expect(err(["a.csv", "-o", "x.svg", "--role", "limit"])).toMatch(/--role/);
+    expect(err(["a.csv", "-o", "x.svg", "--mass-range", "1e-3:1e-6"])).toMatch(/below/);
+    expect(err(["a.csv", "-o", "x.svg", "--g-range", "0:1"])).toMatch(/positive/);
+    expect(err(["p.json", "a.csv", "-o", "x.svg"])).toMatch(/either one project/);
+    expect(err(["p.json", "-o", "x.svg", "--model", "1"])).toMatch(/CSV input only/);
+    expect(err(["a.csv"])).toMatch(/nothing to write/);
+    expect(err(["-o", "x.svg"])).toMatch(/no input/);
+    expect(err(["a.csv", "-o", "a.csv"])).toMatch(/also an input/);
+    expect(err(["a.csv", "-o", "x.svg", "--png", "x.svg"])).toMatch(/same path/);
+    expect(err(["a.csv", "--png", "x.png", "--dpi", "300", "--scale", "2"])).toMatch(/not both/);
+    expect(err(["a.csv", "-o", "x.svg", "--width-mm", "100"])).toMatch(/--preset custom/);
+    expect(err(["a.csv", "-o", "x.svg", "--no-embed=1"])).toMatch(/no value/);
+  });
+
+  it("accepts --help without inputs", () => {
+    expect(ok(["--help"]).help).toBe(true);
+  });
+});
+
+describe("fitRanges", () => {
+  it("encloses the positive data in whole decades", () => {
+    const r = fitRanges([{ massEv: Float64Array.of(3e-6, 2e-4), gInvGeV: Float64Array.of(5e-14, 7e-12) }]);
+    expect(r).toEqual({ massRangeEv: [1e-6, 1e-3], gRange: [1e-14, 1e-11] });
+  });
+
+  it("ignores non-positive and non-finite points and widens a single point to a decade", () => {
+    const r = fitRanges([{ massEv: Float64Array.of(-1, 0, 1e-5, Number.NaN), gInvGeV: Float64Array.of(1, 1, 1e-13, 1) }]);
+    expect(r?.massRangeEv[1] / (r?.massRangeEv[0] ?? 1)).toBeCloseTo(10, 9);
+    expect(r?.massRangeEv[0]).toBeLessThanOrEqual(1e-5);
+    expect(r?.massRangeEv[1]).toBeGreaterThanOrEqual(1e-5);
+    expect(fitRanges([{ massEv: Float64Array.of(0), gInvGeV: Float64Array.of(1) }])).toBeUndefined();
+    expect(fitRanges([])).toBeUndefined();
+  });
+
+  it("spans several curves", () => {
+    const r = fitRanges([
+      { massEv: Float64Array.of(1.5e-9), gInvGeV: Float64Array.of(2e-16) },
+      { massEv: Float64Array.of(0.05), gInvGeV: Float64Array.of(3e-8) },
+    ]);
+    expect(r).toEqual({ massRangeEv: [1e-9, 0.1], gRange: [1e-16, 1e-7] });
+  });
+});
+
+describe("PNG sizing and fonts", () => {
+  it("makes 8.6 cm at 300 dpi 1016 px and 17.8 cm at 300 dpi 2102 px", () => {
+    // 1 in = 2.54 cm exactly: 8.6/2.54·300 = 1015.7, 17.8/2.54·300 = 2102.4.
+    expect(pngPixelSize(8.6 / 2.54, 6.45 / 2.54, 300)).toEqual({ widthPx: 1016, heightPx: 762 });
+    expect(pngPixelSize(17.8 / 2.54, 10.68 / 2.54, 300).widthPx).toBe(2102);
+  });
+
+  it("falls back from DejaVu Sans to Liberation Sans to a note", () => {
+    expect(pickFallbackFont((p) => p.includes("DejaVuSans.ttf")).family).toBe("DejaVu Sans");
+    expect(pickFallbackFont((p) => p.includes("LiberationSans-Regular")).family).toBe("Liberation Sans");
+    const none = pickFallbackFont(() => false);
+    expect(none.family).toBeUndefined();
+    expect(none.note).toMatch(/fonts-dejavu-core/);
+  });
+});
+
+describe("writeAllOrNothing", () => {
+  it("writes every file and leaves no temporary file", () => {
+    const dir = tempDir();
+    writeAllOrNothing([
+      { path: join(dir, "a.svg"), data: "<svg/>" },
+      { path: join(dir, "b.png"), data: Uint8Array.of(1, 2, 3) },
+    ]);
+    expect(readdirSync(dir).sort()).toEqual(["a.svg", "b.png"]);
+    expect(readFileSync(join(dir, "a.svg"), "utf8")).toBe("<svg/>");
+  });
+
+  it("writes nothing when one target cannot be written", () => {
+    const dir = tempDir();
+    // The second target's directory does not exist: its temporary file fails after the first one was written.
+    expect(() =>
+      writeAllOrNothing([
+        { path: join(dir, "first.svg"), data: "x" },
+        { path: join(dir, "missing-dir", "second.svg"), data: "y" },
+      ]),
+    ).toThrow();
+    expect(existsSync(join(dir, "first.svg"))).toBe(false);
+    expect(readdirSync(dir)).toEqual([]);
+  });
+});

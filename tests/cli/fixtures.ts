@@ -1,0 +1,54 @@
+// Small projects and files for the CLI and export tests, plus a helper that runs the CLI as a child process
+// exactly as `npm run render` does (tsx), from the repository root.
+import { spawnSync } from "node:child_process";
+import { mkdtempSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join, resolve } from "node:path";
+import { emptyProject, newCurve, newModel } from "../../src/data/defaults";
+import { projectToJsonValue } from "../../src/data/schema";
+import type { Project } from "../../src/data/types";
+
+export const REPO = resolve(__dirname, "../..");
+
+/** A fresh temporary directory for one test's files. */
+export function tempDir(tag = "axband-cli-"): string {
+  return mkdtempSync(join(tmpdir(), tag));
+}
+
+/**
+ * A small project: two models (a line and a band) and two invented curves (an exclusion and a projection),
+ * single-column figure, fixed ids so output is reproducible. Labels may be overridden for injection tests.
+ */
+export function smallProject(labels: { model?: string; curve?: string; name?: string; title?: string } = {}): Project {
+  const p = emptyProject(labels.name ?? "CLI test (invented data)");
+  const models = [newModel({ id: "m-1", eOverNMin: "8/3", label: labels.model ?? "DFSZ-type line" })];
+  models.push(newModel({ id: "m-2", eOverNMin: "5/3", eOverNMax: "44/3", label: "Preferred window" }, { models }));
+  const mass = Float64Array.from({ length: 200 }, (_, i) => 10 ** (-6 + (3 * i) / 199));
+  const curves = [
+    newCurve({ id: "c-1", label: labels.curve ?? "Demo scan (invented)", role: "exclusion", massEv: mass, gInvGeV: mass.map((m) => 1e-13 * (1 + 0.3 * Math.sin(40 * Math.log10(m)))) }),
+  ];
+  curves.push(newCurve({ id: "c-2", label: "Demo reach (invented)", role: "projection", massEv: mass, gInvGeV: mass.map((m) => 3e-15 * (m / 1e-5) ** 0.5) }, { curves }));
+  return {
+    ...p,
+    models,
+    curves,
+    figure: { ...p.figure, preset: "single-column", massRangeEv: [1e-6, 1e-3], yRange: [1e-17, 1e-11], title: labels.title ?? "" },
+  };
+}
+
+/** The project as the text of a .axband.json file. */
+export function projectFileText(p: Project): string {
+  return JSON.stringify(projectToJsonValue(p));
+}
+
+export interface CliRun {
+  status: number | null;
+  stdout: string;
+  stderr: string;
+}
+
+/** Runs `tsx src/cli/render.ts ARGS` from the repository root and returns its exit code and output. */
+export function runCli(args: string[]): CliRun {
+  const r = spawnSync(process.execPath, ["--import", "tsx", "src/cli/render.ts", ...args], { cwd: REPO, encoding: "utf8", timeout: 60_000 });
+  return { status: r.status, stdout: r.stdout, stderr: r.stderr };
+}
