@@ -76,6 +76,8 @@ export interface ScaleConfig {
   massDomainEv: [number, number];
   /** Visible y range (units of the y view), mapped bottom-to-top to [plot.y + plot.h, plot.y]. */
   yDomain: [number, number];
+  /** What the y axis shows: g_aγγ in GeV⁻¹, |E/N − c_γ| or |g_γ| (absent means "coupling"). */
+  yView?: "coupling" | "normalized" | "g-gamma";
 }
 
 export interface Scene {

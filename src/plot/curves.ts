@@ -1,0 +1,77 @@
+// Curves as scene nodes by role: exclusion (filled from the curve up past the plot top, plus the line),
+// projection (a line), region (a closed, filled and outlined polygon), at pixel resolution via decimate.ts.
+import type { Curve, YView } from "../data/types";
+import type { AxionConstants } from "../physics/constants";
+import type { PathNode } from "./scene-types";
+import { curvePixels, pathData, prepareCurve, type PreparedCurve } from "./decimate";
+import { dashFor, r2, safeColour, unitInterval } from "./format";
+import { viewTransform, type LogAffine } from "./scales";
+import { rescaleFactor } from "./physics-settings";
+
+export interface CurveFrame {
+  constants: AxionConstants;
+  view: YView;
+  map: LogAffine;
+  plot: { x: number; y: number; w: number; h: number };
+  lineWidthPx: number;
+  /** Device pixels per scene pixel. @default 1 */
+  resolution: number;
+  /** Draw every point (no thinning), for comparisons. @default true */
+  thin?: boolean;
+}
+
+export interface CurveGeometry {
+  role: Curve["role"];
+  /** Points that could not be drawn on log axes (≤ 0 or not finite). */
+  skipped: number;
+  /** Points drawn after thinning and clipping. */
+  drawn: number;
+  fills: PathNode[];
+  lines: PathNode[];
+}
+
+/** Whether a curve is drawn in mass order: exclusions and projections unless keepOrder; regions never. */
+export function drawsSorted(curve: Pick<Curve, "role" | "keepOrder">): boolean {
+  return curve.role !== "region" && !curve.keepOrder;
+}
+
+/** The cached log arrays a curve is drawn from. */
+export function preparedOf(curve: Pick<Curve, "role" | "keepOrder" | "massEv" | "gInvGeV">): PreparedCurve {
+  return prepareCurve(curve.massEv, curve.gInvGeV, drawsSorted(curve));
+}
+
+/** Scene nodes of one curve (fills and lines apart, so that every line can go over every fill). */
+export function curveGeometry(curve: Curve, f: CurveFrame, nodeId: string): CurveGeometry {
+  const prep = preparedOf(curve);
+  const closed = curve.role === "region";
+  const t = viewTransform(f.view, f.constants);
+  const pl = curvePixels(prep, closed, {
+    ...f.map,
+    slope: t.slope,
+    yOffset: t.log10Factor + Math.log10(rescaleFactor(curve.rescale)),
+    plot: f.plot,
+    resolution: f.resolution,
+    thin: f.thin,
+  });
+  const colour = safeColour(curve.colour, "#D55E00");
+  const opacity = unitInterval(curve.fillOpacity, 0.3);
+  const lw = f.lineWidthPx;
+  const dash = dashFor(curve.lineStyle, lw);
+  const data = { "curve-id": curve.id, "curve-role": curve.role };
+  const fills: PathNode[] = [];
+  const lines: PathNode[] = [];
+  const out: CurveGeometry = { role: curve.role, skipped: prep.skipped, drawn: pl.n, fills, lines };
+  if (pl.n === 0) return out;
+  const line = pathData(pl);
+  if (curve.role === "exclusion") {
+    const topY = r2(f.plot.y - 4 * lw - 2);
+    const closeUp = `L${r2(pl.xs[pl.n - 1])} ${topY}L${r2(pl.xs[0])} ${topY}`;
+    fills.push({ kind: "path", id: `${nodeId}-fill`, d: pathData(pl, closeUp) + "Z", fill: colour, fillOpacity: opacity, data: { ...data } });
+    lines.push({ kind: "path", id: `${nodeId}-line`, d: line, stroke: colour, strokeWidth: lw, dash, fill: "none", data: { ...data } });
+  } else if (curve.role === "projection") {
+    lines.push({ kind: "path", id: `${nodeId}-line`, d: line, stroke: colour, strokeWidth: lw, dash, fill: "none", data: { ...data } });
+  } else {
+    fills.push({ kind: "path", id: `${nodeId}-region`, d: line, fill: colour, fillOpacity: opacity, stroke: colour, strokeWidth: lw, dash, data: { ...data } });
+  }
+  return out;
+}

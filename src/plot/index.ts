@@ -1,0 +1,34 @@
+// Public face of the plot core (pure, no DOM): scene building, SVG writing, layout presets, scales and the
+// decimation functions, for the app's renderer, the export and the command-line renderer.
+export type * from "./scene-types";
+export { buildScene, FONT_FAMILY, FALLBACK_MASS_RANGE_EV, fallbackYRange, type BuildSceneOpts } from "./scene";
+export { writeSvg, escapeXml, fmt, type WriteSvgOpts } from "./svg";
+export { PRESETS, presetOf, fontsFor, computeLayout, PX_PER_IN, PX_PER_MM, CUSTOM_MM_LIMITS, type Preset, type Fonts, type Layout, type PlotRect } from "./layout";
+export { massToX, xToMass, yToPx, pxToY, massScale, yScale, gToView, viewToG, viewTransform, logAffine, sanitizeDomain, type LogAffine } from "./scales";
+export { logTicks, faTicks, faDomain, frequencyTicks, frequencyDomain, frequencyUnit, decadeLabelStep, type LogTick, type LogTickOpts, type FrequencyUnit } from "./ticks";
+export { axisTicks, yTitle, MASS_TITLE, FA_TITLE, frequencyTitle, type AxisTicks } from "./axes";
+export { constantsOf, physicsOptsOf, eOverNValue, rescaleFactor, isRescaled } from "./physics-settings";
+export {
+  prepareCurve,
+  viewArrays,
+  buildPyramid,
+  thinColumns,
+  pixelColumn,
+  dpImportance,
+  simplifyIndices,
+  clipToRect,
+  curvePixels,
+  pathData,
+  lowerBound,
+  upperBound,
+  type PreparedCurve,
+  type Pyramid,
+  type ColumnParams,
+  type Polyline,
+  type PixelParams,
+  type Rect,
+} from "./decimate";
+export { curveGeometry, drawsSorted, preparedOf, type CurveGeometry } from "./curves";
+export { modelGeometry, type ModelGeometry } from "./models";
+export { placeRuns, runsWidthPx, stringWidthPx, runsText, truncateRuns, type PlacedRun } from "./text";
+export { powerOfTenRuns, scientificRuns, safeColour, dashFor, MINUS } from "./format";

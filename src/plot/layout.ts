@@ -1,0 +1,237 @@
+// Figure sizes and layout: the size presets with their physical sizes, font sizes per preset, and the
+// margins around the plot area computed from font sizes and estimated label widths (no DOM needed).
+import type { Figure, LegendPlace, SizePreset } from "../data/types";
+import { CAP_HEIGHT, SUP_RAISE, SHIFT_SCALE } from "./text";
+
+/** CSS pixels per inch: scene coordinates are CSS px at 96 per inch. */
+export const PX_PER_IN = 96;
+/** Pixels per millimetre at 96 px/in. */
+export const PX_PER_MM = PX_PER_IN / 25.4;
+
+/** A size preset: physical size (for the SVG width/height), pixel size and font scale. */
+export interface Preset {
+  id: SizePreset;
+  label: string;
+  widthMm: number;
+  heightMm: number;
+  /** Physical width/height as written into the SVG, e.g. "8.6cm". */
+  widthPhysical: string;
+  heightPhysical: string;
+  /** Scene size in CSS px at 96 px/in. */
+  widthPx: number;
+  heightPx: number;
+  /**
+   * Factor on Figure.fontPt. Figure.fontPt is the base size on a slide; printed column figures want
+   * ~8–9 pt at their physical size (common practice for journal figures), hence 2/3 and 3/4.
+   */
+  fontScale: number;
+}
+
+function cm(mm: number): string {
+  return `${Math.round(mm * 10) / 100}cm`;
+}
+
+function preset(id: SizePreset, label: string, widthMm: number, heightMm: number, fontScale: number): Preset {
+  return {
+    id,
+    label,
+    widthMm,
+    heightMm,
+    widthPhysical: cm(widthMm),
+    heightPhysical: cm(heightMm),
+    widthPx: Math.round(widthMm * PX_PER_MM * 100) / 100,
+    heightPx: Math.round(heightMm * PX_PER_MM * 100) / 100,
+    fontScale,
+  };
+}
+
+/**
+ * The fixed presets. Slide: 16:9 at 10 in × 5.625 in (960 × 540 px). Single column: 8.6 cm wide, aspect
+ * 0.75 (the column width of the APS journals, common practice). Double column: 17.8 cm wide, aspect 0.6.
+ */
+export const PRESETS: Readonly<Record<Exclude<SizePreset, "custom">, Preset>> = {
+  slide: preset("slide", "Slide 16:9", 254, 142.875, 1),
+  "single-column": preset("single-column", "Single column (8.6 cm)", 86, 64.5, 2 / 3),
+  "double-column": preset("double-column", "Double column (17.8 cm)", 178, 106.8, 0.75),
+};
+
+/** Smallest and largest custom size accepted, mm (keeps a typo from making a 0 px or 10 m figure). */
+export const CUSTOM_MM_LIMITS: readonly [number, number] = [20, 1000];
+
+/**
+ * The preset a figure stands for; "custom" is built from Figure.customWidthMm × customHeightMm (clamped to
+ * {@link CUSTOM_MM_LIMITS}) with font scale 1.
+ */
+export function presetOf(figure: Pick<Figure, "preset" | "customWidthMm" | "customHeightMm">): Preset {
+  if (figure.preset !== "custom") return PRESETS[figure.preset] ?? PRESETS.slide;
+  const clamp = (v: number, d: number) => (Number.isFinite(v) ? Math.min(CUSTOM_MM_LIMITS[1], Math.max(CUSTOM_MM_LIMITS[0], v)) : d);
+  return preset("custom", "Custom", clamp(figure.customWidthMm, 160), clamp(figure.customHeightMm, 90), 1);
+}
+
+/** Font sizes (px) and line widths (px) of one figure. */
+export interface Fonts {
+  /** Tick labels. */
+  tickPx: number;
+  /** Axis titles. */
+  titlePx: number;
+  /** Legend entries. */
+  legendPx: number;
+  /** Figure title. */
+  headingPx: number;
+  /** Axis frame and tick stroke width. */
+  axisLinePx: number;
+  /** Stroke width of curves and model lines. */
+  dataLinePx: number;
+}
+
+/**
+ * Font sizes from the base size in pt (pt → px × 96/72) and the preset's font scale.
+ * @param fontPt Figure.fontPt. @default 12
+ */
+export function fontsFor(fontPt: number, fontScale: number): Fonts {
+  const pt = Number.isFinite(fontPt) && fontPt > 0 ? Math.min(72, Math.max(4, fontPt)) : 12;
+  const base = (pt * fontScale * PX_PER_IN) / 72;
+  return {
+    tickPx: base,
+    titlePx: base * 1.08,
+    legendPx: base * 0.88,
+    headingPx: base * 1.2,
+    axisLinePx: Math.max(0.6, base / 16),
+    dataLinePx: Math.max(0.9, base / 9),
+  };
+}
+
+export interface PlotRect {
+  x: number;
+  y: number;
+  w: number;
+  h: number;
+}
+
+/** What the margins depend on. */
+export interface LayoutInput {
+  widthPx: number;
+  heightPx: number;
+  fonts: Fonts;
+  hasTopAxis: boolean;
+  hasTitle: boolean;
+  /** Widest y tick label (px) for a given plot height (labels thin out on short axes). */
+  yLabelWidthPx: (plotHeightPx: number) => number;
+  /** Half the width of the widest x tick label (it may stick out right of the plot area). */
+  xLabelHalfWidthPx: number;
+  legend: { place: LegendPlace; widthPx: number; heightPx: number };
+}
+
+/** Positions of everything around the plot area, in scene px. */
+export interface Layout {
+  plot: PlotRect;
+  /** Inward tick lengths, major and minor. */
+  tickMajorPx: number;
+  tickMinorPx: number;
+  /** Gap between the frame and tick labels. */
+  labelGapPx: number;
+  /** Baseline of the bottom tick labels, of the x title, of the top tick labels, of the top title. */
+  xLabelBaseline: number;
+  xTitleBaseline: number;
+  topLabelBaseline: number;
+  topTitleBaseline: number;
+  /** x of the right edge of the y tick labels and of the (rotated) y title baseline. */
+  yLabelRight: number;
+  yTitleX: number;
+  /** Baseline of the figure title. */
+  headingBaseline: number;
+  /** Top-left corner of the legend box. */
+  legendX: number;
+  legendY: number;
+}
+
+/** Height above the baseline of a label with a superscript ("10⁻⁶"), as a fraction of its size. */
+const SUP_TOP = SUP_RAISE + SHIFT_SCALE * CAP_HEIGHT + 0.04;
+/** Depth below the baseline of brackets and subscripts. */
+const DESCENT = 0.24;
+
+/**
+ * Margins and positions for a figure. Vertical margins first (they need no label widths), then the y label
+ * width for that plot height, then the horizontal margins (legend outside right shrinks the plot area).
+ */
+export function computeLayout(input: LayoutInput): Layout {
+  const { widthPx: W, heightPx: H, fonts: f } = input;
+  const pad = Math.max(2, f.tickPx * 0.5);
+  const gap = f.tickPx * 0.4;
+  const tickMajorPx = f.tickPx * 0.45;
+  const tickMinorPx = f.tickPx * 0.25;
+
+  let top = pad;
+  let headingBaseline = 0;
+  if (input.hasTitle) {
+    headingBaseline = top + f.headingPx * CAP_HEIGHT;
+    top = headingBaseline + f.headingPx * DESCENT + f.tickPx * 0.4;
+  }
+  let topTitleBaseline = 0;
+  let topLabelBaseline = 0;
+  if (input.hasTopAxis) {
+    topTitleBaseline = top + f.titlePx * SUP_TOP;
+    topLabelBaseline = topTitleBaseline + f.titlePx * DESCENT + gap + f.tickPx * SUP_TOP;
+    top = topLabelBaseline + gap;
+  } else {
+    // Room for the top of the highest y label, which is centred on the frame's top edge.
+    top = Math.max(top, pad + f.tickPx * 0.6);
+  }
+  const xLabelOffset = gap + f.tickPx * SUP_TOP;
+  const xTitleOffset = xLabelOffset + f.tickPx * 0.25 + gap + f.titlePx * CAP_HEIGHT;
+  const bottom = xTitleOffset + f.titlePx * DESCENT + pad;
+  const plotH = Math.max(20, H - top - bottom);
+
+  const yLabelW = input.yLabelWidthPx(plotH);
+  const yTitleDepth = f.titlePx * DESCENT;
+  const left = pad + f.titlePx * SUP_TOP + yTitleDepth + gap * 1.6 + yLabelW + gap;
+  let right = Math.max(pad, input.xLabelHalfWidthPx + 2);
+  const lg = input.legend;
+  const outside = lg.place === "outside-right" && lg.widthPx > 0;
+  if (outside) right = Math.max(right, lg.widthPx + pad * 2 + gap);
+  const plotW = Math.max(20, W - left - right);
+  const plot: PlotRect = { x: left, y: top, w: plotW, h: plotH };
+
+  const inset = f.tickPx * 0.6;
+  let legendX = 0;
+  let legendY = 0;
+  switch (lg.place) {
+    case "top-left":
+      legendX = plot.x + inset;
+      legendY = plot.y + inset;
+      break;
+    case "top-right":
+      legendX = plot.x + plot.w - inset - lg.widthPx;
+      legendY = plot.y + inset;
+      break;
+    case "bottom-left":
+      legendX = plot.x + inset;
+      legendY = plot.y + plot.h - inset - lg.heightPx;
+      break;
+    case "bottom-right":
+      legendX = plot.x + plot.w - inset - lg.widthPx;
+      legendY = plot.y + plot.h - inset - lg.heightPx;
+      break;
+    case "outside-right":
+      legendX = plot.x + plot.w + pad + gap;
+      legendY = plot.y;
+      break;
+    default:
+      break;
+  }
+  return {
+    plot,
+    tickMajorPx,
+    tickMinorPx,
+    labelGapPx: gap,
+    xLabelBaseline: plot.y + plot.h + xLabelOffset,
+    xTitleBaseline: plot.y + plot.h + xTitleOffset,
+    topLabelBaseline,
+    topTitleBaseline,
+    yLabelRight: plot.x - gap,
+    yTitleX: plot.x - gap - yLabelW - gap * 1.6 - yTitleDepth,
+    headingBaseline,
+    legendX,
+    legendY,
+  };
+}

@@ -1,0 +1,115 @@
+// The legend: one entry per visible model and curve with a swatch drawn like the thing it names (line,
+// band, exclusion fill, region), on a white translucent box; notes for cancelling bands and rescaled curves.
+import type { SceneNode, TextRun } from "./scene-types";
+import { r2 } from "./format";
+import { runsText, runsWidthPx, truncateRuns } from "./text";
+
+export type SwatchKind = "model-line" | "model-band" | "exclusion" | "projection" | "region";
+
+export interface LegendEntry {
+  kind: SwatchKind;
+  /** Full text of the entry, notes included. */
+  text: string;
+  colour: string;
+  dash?: string;
+  fillOpacity: number;
+  lineWidthPx: number;
+  /** Draw a lighter band around the swatch (theory spread). */
+  spread?: boolean;
+  /** Extra data-* attributes of the entry's text (model-id / curve-id). */
+  data: Record<string, string>;
+}
+
+export interface LegendBox {
+  widthPx: number;
+  heightPx: number;
+  rowPx: number;
+  swatchPx: number;
+  padPx: number;
+  labels: TextRun[][];
+}
+
+/**
+ * Size of the legend box. Labels longer than `maxLabelPx` are cut with "…" (the full text stays in the
+ * entry's data-legend-entry attribute).
+ */
+export function measureLegend(entries: LegendEntry[], sizePx: number, maxLabelPx: number): LegendBox {
+  const padPx = sizePx * 0.55;
+  const rowPx = sizePx * 1.38;
+  const swatchPx = sizePx * 2.1;
+  const labels = entries.map((e) => truncateRuns([{ text: e.text }], sizePx, Math.max(sizePx * 4, maxLabelPx)));
+  const textW = labels.reduce((w, l) => Math.max(w, runsWidthPx(l, sizePx)), 0);
+  if (entries.length === 0) return { widthPx: 0, heightPx: 0, rowPx, swatchPx, padPx, labels };
+  return {
+    widthPx: padPx * 2 + swatchPx + sizePx * 0.5 + textW,
+    heightPx: padPx * 2 + rowPx * entries.length - (rowPx - sizePx * 1.05),
+    rowPx,
+    swatchPx,
+    padPx,
+    labels,
+  };
+}
+
+/** Scene nodes of the legend box at (x, y). */
+export function legendNodes(entries: LegendEntry[], box: LegendBox, x: number, y: number, sizePx: number): SceneNode[] {
+  if (entries.length === 0) return [];
+  const nodes: SceneNode[] = [
+    {
+      kind: "rect",
+      id: "legend-box",
+      x: r2(x),
+      y: r2(y),
+      w: r2(box.widthPx),
+      h: r2(box.heightPx),
+      fill: "#ffffff",
+      fillOpacity: 0.85,
+      stroke: "#b3b3b3",
+      strokeWidth: r2(Math.max(0.5, sizePx / 22)),
+    },
+  ];
+  entries.forEach((e, i) => {
+    const cy = y + box.padPx + sizePx * 0.52 + i * box.rowPx;
+    const sx = x + box.padPx;
+    const sw = box.swatchPx;
+    const sh = sizePx * 0.72;
+    const id = `legend-${i + 1}`;
+    const lw = r2(e.lineWidthPx);
+    if (e.kind === "model-line" || e.kind === "projection") {
+      if (e.spread) nodes.push({ kind: "rect", id: `${id}-spread`, x: r2(sx), y: r2(cy - sh / 2), w: r2(sw), h: r2(sh), fill: e.colour, fillOpacity: 0.12 });
+      nodes.push({ kind: "path", id: `${id}-swatch`, d: `M${r2(sx)} ${r2(cy)}L${r2(sx + sw)} ${r2(cy)}`, stroke: e.colour, strokeWidth: lw, dash: e.dash, fill: "none" });
+    } else if (e.kind === "model-band") {
+      if (e.spread) nodes.push({ kind: "rect", id: `${id}-spread`, x: r2(sx), y: r2(cy - sh / 2 - sh * 0.2), w: r2(sw), h: r2(sh * 1.4), fill: e.colour, fillOpacity: 0.12 });
+      nodes.push({ kind: "rect", id: `${id}-swatch`, x: r2(sx), y: r2(cy - sh / 2), w: r2(sw), h: r2(sh), fill: e.colour, fillOpacity: e.fillOpacity });
+      nodes.push({
+        kind: "path",
+        id: `${id}-edges`,
+        d: `M${r2(sx)} ${r2(cy - sh / 2)}L${r2(sx + sw)} ${r2(cy - sh / 2)}M${r2(sx)} ${r2(cy + sh / 2)}L${r2(sx + sw)} ${r2(cy + sh / 2)}`,
+        stroke: e.colour,
+        strokeWidth: lw,
+        dash: e.dash,
+        fill: "none",
+      });
+    } else if (e.kind === "exclusion") {
+      nodes.push({ kind: "rect", id: `${id}-swatch`, x: r2(sx), y: r2(cy - sh / 2), w: r2(sw), h: r2(sh), fill: e.colour, fillOpacity: e.fillOpacity });
+      nodes.push({ kind: "path", id: `${id}-edge`, d: `M${r2(sx)} ${r2(cy + sh / 2)}L${r2(sx + sw)} ${r2(cy + sh / 2)}`, stroke: e.colour, strokeWidth: lw, dash: e.dash, fill: "none" });
+    } else {
+      nodes.push({ kind: "rect", id: `${id}-swatch`, x: r2(sx), y: r2(cy - sh / 2), w: r2(sw), h: r2(sh), fill: e.colour, fillOpacity: e.fillOpacity, stroke: e.colour, strokeWidth: lw });
+    }
+    nodes.push({
+      kind: "text",
+      id: `${id}-text`,
+      x: r2(sx + sw + sizePx * 0.5),
+      y: r2(cy),
+      runs: box.labels[i],
+      sizePx: r2(sizePx),
+      anchor: "start",
+      baseline: "middle",
+      fill: "#1a1a1a",
+      data: { "legend-entry": e.text, ...e.data },
+    });
+  });
+  return nodes;
+}
+
+/** Plain text of a legend label (tests, tooltips). */
+export const legendLabelText = runsText;

@@ -1,0 +1,248 @@
+// The scene builder: a project in, the complete figure out as plain layers of paths, rects and text, drawn
+// the same way on screen (React SVG) and in the exported SVG (writeSvg). All defaults of a figure live here.
+import { bandCancels } from "../physics/coupling";
+import type { Curve, Model, Project, YView } from "../data/types";
+import type { PathNode, Scene, SceneLayer, SceneNode, ScaleConfig } from "./scene-types";
+import { axesNodes, axisTicks, gridNodes, horizontalTickOpts, verticalTickOpts, yTitle, type AxesFrame } from "./axes";
+import { curveGeometry } from "./curves";
+import { dashFor, plainOrScientificRuns, r2, safeColour, unitInterval } from "./format";
+import { computeLayout, fontsFor, presetOf, PX_PER_IN, type Fonts } from "./layout";
+import { legendNodes, measureLegend, type LegendEntry } from "./legend";
+import { modelGeometry } from "./models";
+import { constantsOf, eOverNValue, isRescaled } from "./physics-settings";
+import { logAffine, sanitizeDomain } from "./scales";
+import { runsWidthPx } from "./text";
+import { logTicks } from "./ticks";
+
+/** Font stack of every figure: Helvetica-metric faces first (the width table assumes them), then fallbacks. */
+export const FONT_FAMILY = "Helvetica, Arial, 'Liberation Sans', 'DejaVu Sans', sans-serif";
+
+/** Mass range used when the figure's is unusable, eV. */
+export const FALLBACK_MASS_RANGE_EV: [number, number] = [1e-7, 1e-2];
+
+/** y range used when the figure's is unusable, in the units of the y view. */
+export function fallbackYRange(view: YView): [number, number] {
+  if (view === "normalized") return [1e-2, 1e2];
+  if (view === "g-gamma") return [5e-3, 50];
+  return [1e-17, 1e-9];
+}
+
+export interface BuildSceneOpts {
+  /** Scene size in CSS px (96/in). @default the preset's size */
+  widthPx?: number;
+  heightPx?: number;
+  /**
+   * Device pixels per scene pixel: thinning keeps first/min/max/last per 1/resolution scene px. On screen
+   * pass (displayed width / scene width) × devicePixelRatio; for export 1 (≤ 0.5 px error at the export
+   * size) or the PNG's px per scene px. @default 1
+   */
+  resolution?: number;
+  /** A mass interval to highlight (e.g. a row of the overlap table), optionally with its model or curve. */
+  highlight?: { massMinEv: number; massMaxEv: number; modelId?: string; curveId?: string } | null;
+  /** Write the physical size (cm) into the scene, for export. @default true */
+  physical?: boolean;
+  /** Thin curves to pixel resolution; false draws every point (only for comparisons). @default true */
+  thin?: boolean;
+}
+
+function modelNotes(m: Model, c: ReturnType<typeof constantsOf>): string[] {
+  const notes: string[] = [];
+  const a = eOverNValue(m.eOverNMin);
+  const b = eOverNValue(m.eOverNMax ?? m.eOverNMin);
+  const sigmas = Number.isFinite(m.sigmas) && m.sigmas > 0 ? m.sigmas : 0;
+  if (sigmas > 0) notes.push(`±${r2(sigmas)}σ spread`);
+  if (a === b) {
+    if (Math.abs(a - c.cGamma) === 0) notes.push("g = 0: not drawn");
+  } else if (bandCancels(Math.min(a, b), Math.max(a, b), { constants: c })) {
+    notes.push("reaches g = 0: cancellation");
+  } else if (sigmas > 0 && bandCancels(Math.min(a, b), Math.max(a, b), { constants: c, sigmas })) {
+    notes.push("spread reaches g = 0");
+  }
+  return notes;
+}
+
+function num(v: number): string {
+  return String(Number(v.toPrecision(3)));
+}
+
+function curveNotes(cv: Curve): string[] {
+  if (!isRescaled(cv.rescale)) return [];
+  const parts: string[] = [];
+  const r = cv.rescale;
+  if (r.rhoShown !== r.rhoAssumed && r.rhoShown > 0 && r.rhoAssumed > 0) parts.push(`ρ = ${num(r.rhoShown)} GeV/cm³`);
+  if (r.fraction !== 1 && r.fraction > 0 && r.fraction <= 1) parts.push(`f = ${num(r.fraction)}`);
+  return parts.length ? [`rescaled ${parts.join(", ")}`] : [];
+}
+
+function withNotes(label: string, notes: string[]): string {
+  return notes.length ? `${label} (${notes.join("; ")})` : label;
+}
+
+function legendEntries(project: Project, fonts: Fonts, c: ReturnType<typeof constantsOf>): LegendEntry[] {
+  const entries: LegendEntry[] = [];
+  for (const m of project.models) {
+    if (!m.visible) continue;
+    const a = eOverNValue(m.eOverNMin);
+    const b = eOverNValue(m.eOverNMax ?? m.eOverNMin);
+    if (!Number.isFinite(a) || !Number.isFinite(b)) continue;
+    const isLine = a === b;
+    const lw = isLine ? fonts.dataLinePx * 1.15 : fonts.dataLinePx;
+    entries.push({
+      kind: isLine ? "model-line" : "model-band",
+      text: withNotes(m.label?.trim() || "(unnamed model)", modelNotes(m, c)),
+      colour: safeColour(m.colour, "#117A8B"),
+      dash: dashFor(m.lineStyle, lw),
+      fillOpacity: unitInterval(m.fillOpacity, 0.25),
+      lineWidthPx: lw,
+      spread: m.sigmas > 0,
+      data: { "model-id": m.id },
+    });
+  }
+  for (const cv of project.curves) {
+    if (!cv.visible) continue;
+    entries.push({
+      kind: cv.role === "exclusion" ? "exclusion" : cv.role === "projection" ? "projection" : "region",
+      text: withNotes(cv.label?.trim() || "(unnamed curve)", curveNotes(cv)),
+      colour: safeColour(cv.colour, "#D55E00"),
+      dash: dashFor(cv.lineStyle, fonts.dataLinePx),
+      fillOpacity: unitInterval(cv.fillOpacity, 0.3),
+      lineWidthPx: fonts.dataLinePx,
+      data: { "curve-id": cv.id },
+    });
+  }
+  return entries;
+}
+
+function physicalOf(px: number): string {
+  return `${Math.round((px / PX_PER_IN) * 254) / 100}cm`;
+}
+
+/**
+ * The scene of a project's figure. Layers, bottom to top: background, grid, curves (all curve fills in
+ * project order, then all curve lines in project order, so no fill hides a line), models (fills, then
+ * lines), highlight, axes, legend. Curves, models, highlight and grid are clipped to the plot area.
+ * @param project the whole project (figure settings, models, curves, physics constants).
+ * @param opts size, resolution, highlight; see {@link BuildSceneOpts}.
+ */
+export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
+  const fig = project.figure;
+  const c = constantsOf(project.physics);
+  const view: YView = fig.yView === "normalized" || fig.yView === "g-gamma" ? fig.yView : "coupling";
+  const preset = presetOf(fig);
+  const widthPx = opts.widthPx && opts.widthPx > 0 ? opts.widthPx : preset.widthPx;
+  const heightPx = opts.heightPx && opts.heightPx > 0 ? opts.heightPx : preset.heightPx;
+  const fonts = fontsFor(fig.fontPt, preset.fontScale);
+  const massDomainEv = sanitizeDomain(fig.massRangeEv, FALLBACK_MASS_RANGE_EV);
+  const yDomain = sanitizeDomain(fig.yRange, fallbackYRange(view));
+  const topAxis = fig.topAxis === "fa" || fig.topAxis === "frequency" ? fig.topAxis : "none";
+  const legendPlace = fig.legend ?? "top-right";
+
+  const entries = legendPlace === "hidden" ? [] : legendEntries(project, fonts, c);
+  const legendMax = legendPlace === "outside-right" ? widthPx * 0.3 : widthPx * 0.5;
+  const legendBox = measureLegend(entries, fonts.legendPx, legendMax);
+
+  const ySpan = Math.log10(yDomain[1] / yDomain[0]);
+  const xSpan = Math.log10(massDomainEv[1] / massDomainEv[0]);
+  const xLabels = logTicks(massDomainEv[0], massDomainEv[1], horizontalTickOpts((widthPx * 0.8) / xSpan, fonts));
+  const xHalf = xLabels.reduce((w, t) => (t.label ? Math.max(w, runsWidthPx(t.label, fonts.tickPx) / 2) : w), 0);
+  const layout = computeLayout({
+    widthPx,
+    heightPx,
+    fonts,
+    hasTopAxis: topAxis !== "none",
+    hasTitle: !!fig.title?.trim(),
+    yLabelWidthPx: (plotH) =>
+      logTicks(yDomain[0], yDomain[1], { ...verticalTickOpts(plotH / ySpan, fonts), format: view === "coupling" ? undefined : plainOrScientificRuns }).reduce((w, t) => (t.label ? Math.max(w, runsWidthPx(t.label, fonts.tickPx)) : w), 0),
+    xLabelHalfWidthPx: xHalf,
+    legend: { place: legendPlace, widthPx: legendBox.widthPx, heightPx: legendBox.heightPx },
+  });
+  const plot = { x: r2(layout.plot.x), y: r2(layout.plot.y), w: r2(layout.plot.w), h: r2(layout.plot.h) };
+  const scales: ScaleConfig = { massDomainEv, yDomain, yView: view };
+  const map = logAffine(scales, plot);
+  const frame: AxesFrame = { map, plot, massDomainEv, yDomain, topAxis, constants: c, fonts, yView: view };
+  const ticks = axisTicks(frame);
+
+  // Curves: fills first, then lines, each in project order.
+  const curveFills: SceneNode[] = [];
+  const curveLines: SceneNode[] = [];
+  const curveLineById = new Map<string, PathNode[]>();
+  project.curves.forEach((cv, i) => {
+    if (!cv.visible) return;
+    const g = curveGeometry(cv, { constants: c, view, map, plot, lineWidthPx: fonts.dataLinePx, resolution: opts.resolution ?? 1, thin: opts.thin }, `curve-${i + 1}`);
+    curveFills.push(...g.fills);
+    curveLines.push(...g.lines);
+    curveLineById.set(cv.id, g.lines.length ? g.lines : g.fills);
+  });
+  const modelFills: SceneNode[] = [];
+  const modelLines: SceneNode[] = [];
+  const modelLineById = new Map<string, PathNode[]>();
+  project.models.forEach((m, i) => {
+    if (!m.visible) return;
+    const g = modelGeometry(m, { constants: c, view, map, massDomainEv, plot, lineWidthPx: fonts.dataLinePx }, `model-${i + 1}`);
+    if (!g) return;
+    modelFills.push(...g.fills);
+    modelLines.push(...g.lines);
+    modelLineById.set(m.id, g.lines);
+  });
+
+  const highlight: SceneNode[] = [];
+  const hl = opts.highlight;
+  if (hl && hl.massMinEv > 0 && hl.massMaxEv > 0) {
+    const xa = map.ax + map.bx * Math.log10(Math.min(hl.massMinEv, hl.massMaxEv));
+    const xb = map.ax + map.bx * Math.log10(Math.max(hl.massMinEv, hl.massMaxEv));
+    const lo = Math.max(plot.x - 2, xa);
+    const hi = Math.min(plot.x + plot.w + 2, xb);
+    const data: Record<string, string> = { highlight: "mass" };
+    if (hl.modelId) data["model-id"] = hl.modelId;
+    if (hl.curveId) data["curve-id"] = hl.curveId;
+    if (hi > lo) {
+      highlight.push({ kind: "rect", id: "highlight-range", x: r2(lo), y: plot.y, w: r2(Math.max(hi - lo, 0.5)), h: plot.h, fill: "#1f3b57", fillOpacity: 0.1, data });
+    }
+    const halo = [...(hl.modelId ? (modelLineById.get(hl.modelId) ?? []) : []), ...(hl.curveId ? (curveLineById.get(hl.curveId) ?? []) : [])];
+    halo.forEach((node, k) =>
+      highlight.push({
+        kind: "path",
+        id: `highlight-halo-${k + 1}`,
+        d: node.d,
+        stroke: node.stroke ?? node.fill ?? "#1f3b57",
+        strokeWidth: r2((node.strokeWidth ?? fonts.dataLinePx) * 3),
+        strokeOpacity: 0.35,
+        fill: "none",
+        data: { ...data },
+      }),
+    );
+  }
+
+  const axes = axesNodes(frame, ticks, layout, yTitle(view));
+  if (fig.title?.trim()) {
+    axes.push({
+      kind: "text",
+      id: "figure-title",
+      x: r2(plot.x + plot.w / 2),
+      y: r2(layout.headingBaseline),
+      runs: [{ text: fig.title.trim() }],
+      sizePx: r2(fonts.headingPx),
+      anchor: "middle",
+      baseline: "alphabetic",
+      fill: "#1a1a1a",
+      weight: "bold",
+    });
+  }
+
+  const layers: SceneLayer[] = [
+    { id: "background", clip: false, nodes: [{ kind: "rect", id: "background-fill", x: 0, y: 0, w: r2(widthPx), h: r2(heightPx), fill: "#ffffff" }] },
+    { id: "grid", clip: true, nodes: fig.grid ? gridNodes(frame, ticks) : [] },
+    { id: "curves", clip: true, nodes: [...curveFills, ...curveLines] },
+    { id: "models", clip: true, nodes: [...modelFills, ...modelLines] },
+    { id: "highlight", clip: true, nodes: highlight },
+    { id: "axes", clip: false, nodes: axes },
+    { id: "legend", clip: false, nodes: legendNodes(entries, legendBox, layout.legendX, layout.legendY, fonts.legendPx), data: { testid: "legend" } },
+  ];
+  const scene: Scene = { widthPx: r2(widthPx), heightPx: r2(heightPx), plot, scales, fontFamily: FONT_FAMILY, layers };
+  if (opts.physical !== false) {
+    const custom = opts.widthPx !== undefined || opts.heightPx !== undefined;
+    scene.widthPhysical = custom ? physicalOf(widthPx) : preset.widthPhysical;
+    scene.heightPhysical = custom ? physicalOf(heightPx) : preset.heightPhysical;
+  }
+  return scene;
+}
