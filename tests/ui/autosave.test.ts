@@ -4,6 +4,7 @@
 // DOMException when the new value does not fit.
 import { afterEach, beforeEach, describe, expect, test, vi } from "vitest";
 import { createAxbandStore, type AxbandStore } from "../../src/ui/store";
+import { emptyProject } from "../../src/data/defaults";
 import {
   STORAGE_KEY,
   STORAGE_PROBLEM,
@@ -74,7 +75,7 @@ let local: MemoryStorage;
 let curves: MemoryCurves;
 beforeEach(() => {
   vi.useFakeTimers();
-  store = createAxbandStore();
+  store = createAxbandStore(emptyProject());
   local = new MemoryStorage();
   curves = new MemoryCurves();
 });

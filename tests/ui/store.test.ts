@@ -3,11 +3,14 @@
 // the redo stack; one undo reverts one user step; a burst of zoom steps is one step.
 import { afterEach, beforeEach, describe, expect, test, vi } from "vitest";
 import { createAxbandStore, HISTORY_LIMIT, COALESCE_MS, type AxbandStore } from "../../src/ui/store";
+import { emptyProject } from "../../src/data/defaults";
 import type { Curve } from "../../src/data/types";
 
 let store: AxbandStore;
 beforeEach(() => {
-  store = createAxbandStore();
+  store = createAxbandStore(emptyProject());
+  store.getState().addModel({ eOverNMin: "0", label: "KSVZ-type" });
+  store.getState().resetProject(store.getState().project);
 });
 afterEach(() => {
   vi.useRealTimers();

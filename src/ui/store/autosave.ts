@@ -3,7 +3,9 @@
 // Storage that is full or missing is reported once (role="alert") and never stops the app.
 import type { StoreApi } from "zustand";
 import type { Project } from "../../data/types";
-import { decodeLink, defaultProject, deserializeFromStorage, serializeForStorage } from "../adapters/data";
+import { defaultProject } from "../../data/demo";
+import { decodeLink } from "../../data/link";
+import { deserializeFromStorage, serializeForStorage } from "../../data/project-file";
 import type { AxbandState } from "./types";
 
 /** localStorage key of the saved project (without curve data). */
@@ -149,7 +151,7 @@ export function startAutosave(store: StoreApi<AxbandState>, opts: AutosaveOpts =
     if (!local) problem();
     else {
       try {
-        local.setItem(STORAGE_KEY, serializeForStorage(project));
+        local.setItem(STORAGE_KEY, serializeForStorage(project).meta);
       } catch {
         problem();
       }
@@ -200,13 +202,13 @@ export async function restoreAutosave(store: StoreApi<AxbandState>, opts: Autosa
   } catch {
     // deserializeFromStorage reports unreadable text below.
   }
-  const data = new Map<string, CurveArrays>();
+  const data: (CurveArrays & { id: string })[] = [];
   if (curves) {
     await Promise.all(
       [...ids].map(async (id) => {
         try {
           const d = await curves.get(id);
-          if (d && d.massEv instanceof Float64Array && d.gInvGeV instanceof Float64Array) data.set(id, d);
+          if (d && d.massEv instanceof Float64Array && d.gInvGeV instanceof Float64Array) data.push({ id, massEv: d.massEv, gInvGeV: d.gInvGeV });
         } catch {
           // A curve that cannot be read is reported as missing.
         }
@@ -215,11 +217,11 @@ export async function restoreAutosave(store: StoreApi<AxbandState>, opts: Autosa
   }
   const r = deserializeFromStorage(text, data);
   if (!r.ok) {
-    store.getState().pushMessage("alert", `The autosaved project could not be restored: ${r.error}. Starting from the demo project.`);
+    store.getState().pushMessage("alert", `${r.error} Starting from the demo project.`);
     return null;
   }
-  if (r.missingCurves.length > 0) {
-    store.getState().pushMessage("alert", `The data of ${r.missingCurves.length === 1 ? "curve" : "curves"} ${r.missingCurves.map((l) => `“${l}”`).join(", ")} was not found in browser storage; import the file again.`);
+  if (r.repairs.length > 0) {
+    store.getState().pushMessage("alert", `The autosaved project was restored with changes: ${r.repairs.join("; ")}.`);
   }
   return r.project;
 }

@@ -23,7 +23,7 @@ import { createStore } from "zustand/vanilla";
 import { subscribeWithSelector } from "zustand/middleware";
 import type { StateCreator } from "zustand";
 import type { Project } from "../../data/types";
-import { defaultProject } from "../adapters/data";
+import { defaultProject } from "../../data/demo";
 import { createHistorySlice } from "./history";
 import { createModelsSlice } from "./models";
 import { createCurvesSlice } from "./curves";

@@ -1,11 +1,11 @@
 // Models slice: add, edit, remove and reorder model lines and bands (all through commit, so undoable).
-import { newModel } from "../adapters/data";
+import { newModel } from "../../data/defaults";
 import type { ModelsSlice, SliceCreator } from "./types";
 import { moveItem } from "./move";
 
 export const createModelsSlice: SliceCreator<ModelsSlice> = (_set, get) => ({
   addModel(draft) {
-    const model = newModel(draft, get().project.models);
+    const model = newModel(draft, get().project);
     get().commit((p) => ({ ...p, models: [...p.models, model] }));
     return model.id;
   },
