@@ -5,11 +5,11 @@ import { useState } from "react";
 import { useShallow } from "zustand/react/shallow";
 import type { Curve, CurveRole, LineStyle } from "../../data/types";
 import { selectCurve, selectCurveIds, useAxband } from "../store";
-import { curveToCsv } from "../importer/pending-data";
-import { downloadText, safeFileName } from "../export/download";
-import { MASS_UNIT_OPTIONS, type MassUnit } from "../importer/unit-options";
+import { curveCsvFileName, curveToCsv, rescaleCurve } from "../../data";
+import { downloadText } from "../export/download";
+import { COUPLING_UNIT_OPTIONS, MASS_UNIT_OPTIONS, type CouplingUnit, type MassUnit } from "../importer/unit-options";
 import { NumberField } from "./NumberField";
-import { isRescaled } from "../../plot/physics-settings";
+import { isRescaled, physicsOptsOf } from "../../plot/physics-settings";
 import "./curves.css";
 
 export const ROLES: { value: CurveRole; label: string }[] = [
@@ -29,7 +29,11 @@ function CurveCard({ id, index, count }: { id: string; index: number; count: num
   const removeCurve = useAxband((s) => s.removeCurve);
   const moveCurve = useAxband((s) => s.moveCurve);
   const pushMessage = useAxband((s) => s.pushMessage);
+  const physics = useAxband((s) => s.project.physics);
   const [csvMassUnit, setCsvMassUnit] = useState<MassUnit>("eV");
+  const [csvCouplingUnit, setCsvCouplingUnit] = useState<CouplingUnit>("GeV^-1");
+  const [csvEOverN, setCsvEOverN] = useState("0");
+  const [csvRescaled, setCsvRescaled] = useState(true);
   if (!curve) return null;
   const rs = curve.rescale;
   const setRescale = (patch: Partial<Curve["rescale"]>) => updateCurve(id, { rescale: { ...curve.rescale, ...patch } }, { coalesceKey: `curve:${id}:rescale` });
@@ -131,19 +135,48 @@ function CurveCard({ id, index, count }: { id: string; index: number; count: num
               ))}
             </select>
           </label>
+          <label className="ax-field">
+            <span>Coupling</span>
+            <select aria-label="CSV coupling unit" value={csvCouplingUnit} onChange={(e) => setCsvCouplingUnit(e.target.value as CouplingUnit)}>
+              {COUPLING_UNIT_OPTIONS.map((u) => (
+                <option key={u.value} value={u.value}>
+                  {u.label}
+                </option>
+              ))}
+            </select>
+          </label>
+          {csvCouplingUnit === "model-line" ? (
+            <label className="ax-field">
+              <span>of the line E/N =</span>
+              <input type="text" size={6} aria-label="CSV model line E/N" value={csvEOverN} onChange={(e) => setCsvEOverN(e.target.value)} />
+            </label>
+          ) : null}
+          {isRescaled(curve.rescale) ? (
+            <label className="ax-check">
+              <input type="checkbox" checked={csvRescaled} onChange={(e) => setCsvRescaled(e.target.checked)} />
+              with the rescaling
+            </label>
+          ) : null}
           <button
             type="button"
             onClick={() => {
-              const text = curveToCsv(curve, { massUnit: csvMassUnit });
-              const name = `${safeFileName(curve.label, "curve")}.csv`;
-              downloadText(name, text, "text/csv");
-              pushMessage("status", `Saved ${name}.`);
+              try {
+                const gInvGeV = isRescaled(curve.rescale) && csvRescaled ? rescaleCurve(curve.gInvGeV, curve.rescale) : curve.gInvGeV;
+                const text = curveToCsv(
+                  { massEv: curve.massEv, gInvGeV, label: curve.label, citation: curve.citation },
+                  { massUnit: csvMassUnit, couplingUnit: csvCouplingUnit, modelEOverN: csvCouplingUnit === "model-line" ? csvEOverN : undefined, physics: physicsOptsOf(physics) },
+                );
+                const name = curveCsvFileName(curve.label);
+                downloadText(name, text, "text/csv");
+                pushMessage("status", `Saved ${name}.`);
+              } catch (e) {
+                pushMessage("alert", `The CSV was not written: ${e instanceof Error ? e.message : String(e)}.`);
+              }
             }}
           >
             Download CSV
           </button>
         </div>
-        <p className="ax-hint">Couplings are written in GeV⁻¹ as shown on the figure (with the rescaling applied).</p>
       </details>
     </li>
   );

@@ -4,9 +4,8 @@
 // Dropped project files and exported SVG figures reopen the project instead.
 import { useCallback, useEffect, useId, useRef, useState } from "react";
 import type { Curve, CurveRole } from "../../data/types";
-import { newCurve } from "../../data/defaults";
+import { delimiterName, labelFromFileName, MAX_IMPORT_BYTES, newCurve, type CurveParseResult } from "../../data";
 import { useAxband } from "../store";
-import { delimiterName, labelFromFileName, MAX_IMPORT_BYTES, type CurveParseResult } from "../../data/csv";
 import { startParse, type ParseJob } from "./parse-runner";
 import {
   DELIMITERS,

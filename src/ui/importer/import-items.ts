@@ -1,8 +1,7 @@
 // The state of one file (or pasted text) in the import step, and the pure steps on it: the parser options
 // its settings stand for, the settings a first parse detected, and the wording of rejected rows.
 import type { CurveRole, PhysicsSettings } from "../../data/types";
-import type { CouplingUnit, MassUnit } from "../../data/units";
-import { formatProblem, formatRejection, type CurveParseOptions, type CurveParseResult } from "../../data/csv";
+import { formatProblem, formatRejection, type CouplingUnit, type CurveParseOptions, type CurveParseResult, type MassUnit } from "../../data";
 import { physicsOptsOf } from "../../plot/physics-settings";
 
 /** Delimiter choices of the import step; "auto" lets the parser detect it. */

@@ -1,6 +1,6 @@
 // The unit choices the import step and the curve CSV export offer. The units themselves (ids, labels,
 // recognition in headers, conversions) belong to the data core; this only picks what the menus show.
-import { COUPLING_UNITS, MASS_UNITS, type CouplingUnit, type MassUnit } from "../../data/units";
+import { COUPLING_UNITS, MASS_UNITS, type CouplingUnit, type MassUnit } from "../../data";
 
 export type { CouplingUnit, MassUnit };
 

@@ -1,8 +1,7 @@
 // Opens a project from a file the user picked or dropped: a `.axband.json` project file or an SVG figure
 // exported by axband (the project travels in its <metadata>). Validation is the data core's; this only
 // routes the file and words the outcome.
-import { projectFromFile } from "../importer/pending-data";
-import { MAX_IMPORT_BYTES } from "../../data/csv";
+import { MAX_IMPORT_BYTES, projectFromFile } from "../../data";
 import { extractProjectFromSvg } from "../../plot/figure-file";
 import type { Project } from "../../data/types";
 
@@ -29,8 +28,13 @@ export async function openProjectFile(file: Blob & { name: string }): Promise<Op
   }
   const isSvg = /\.svg$/i.test(file.name) || /^\s*(<\?xml[^>]*>\s*)?(<!--[\s\S]*?-->\s*)*<svg\b/i.test(text.slice(0, 4096));
   try {
-    const r = isSvg ? extractProjectFromSvg(text) : projectFromFile(text);
-    if (!r.ok) return { ok: false, error: `${file.name} was not opened: ${r.error}` };
+    if (isSvg) {
+      const r = extractProjectFromSvg(text);
+      if (!r.ok) return { ok: false, error: `${file.name} was not opened: ${r.error}.` };
+      return { ok: true, project: r.project, message: `Opened the project embedded in ${file.name}.` };
+    }
+    const r = projectFromFile(text, file.name);
+    if (!r.ok) return { ok: false, error: r.error };
     return { ok: true, project: r.project, message: `Opened ${file.name}.` };
   } catch (e) {
     return { ok: false, error: `${file.name} was not opened: ${e instanceof Error ? e.message : String(e)}` };
