@@ -4,10 +4,10 @@ import { readFileSync } from "node:fs";
 import { basename } from "node:path";
 import type { Curve, Model, Project } from "../data/types";
 import { defaultFigure, emptyProject, newCurve, newModel } from "../data/defaults";
-import { parseCouplingUnit, parseMassUnit } from "../data/units";
+import { formatProblem, formatRejection, labelFromFileName, parseCurveText } from "../data/csv";
+import { projectFromFile } from "../data/project-file";
 import { parseEOverN } from "../physics/eovern-parse";
 import { extractProjectFromSvg } from "../plot/figure-file";
-import { parseCurveText, projectFromFile } from "./pending";
 import type { CliInput, CliOptions } from "./args";
 import { fitRanges } from "./fit-ranges";
 
@@ -33,19 +33,11 @@ function readText(path: string): string {
   }
 }
 
-/** The file name without its last extension ("limits.v2.csv" → "limits.v2"), as the app labels imported curves. */
-export function labelFromFileName(name: string): string {
-  const base = name.replace(/^.*[\\/]/, "");
-  const dot = base.lastIndexOf(".");
-  return (dot > 0 ? base.slice(0, dot) : base) || "Curve";
-}
-
 function loadProjectFile(input: CliInput): LoadedProject {
   const text = readText(input.path);
   const r = projectFromFile(text, basename(input.path));
   if (!r.ok) throw new InputError(`${input.path}: not a usable axband project: ${r.error}`);
-  const repairs = "repairs" in r && Array.isArray(r.repairs) ? (r.repairs as string[]) : [];
-  return { project: r.project, notes: repairs.map((s) => `${input.path}: repaired on loading: ${s}`) };
+  return { project: r.project, notes: r.repairs.map((s) => `${input.path}: repaired on loading: ${s}`) };
 }
 
 function loadSvg(input: CliInput): LoadedProject {
@@ -56,28 +48,42 @@ function loadSvg(input: CliInput): LoadedProject {
 
 function loadCsv(inputs: CliInput[], opts: CliOptions): LoadedProject {
   const notes: string[] = [];
-  const massUnit = opts.massUnit === undefined ? undefined : parseMassUnit(opts.massUnit);
-  if (massUnit === null) throw new InputError(`--mass-unit: unknown unit "${opts.massUnit}" (eV, meV, ueV, neV, peV, keV, GeV, Hz, kHz, MHz, GHz)`);
-  const coupling = opts.couplingUnit === undefined ? undefined : parseCouplingUnit(opts.couplingUnit);
-  if (coupling === null) throw new InputError(`--coupling-unit: unknown unit "${opts.couplingUnit}" (GeV^-1)`);
   const curves: Curve[] = [];
   const badRows: string[] = [];
+  let badCount = 0;
   for (const input of inputs) {
     const text = readText(input.path);
     const fileName = basename(input.path);
-    const r = parseCurveText(text, { fileName, massUnit: massUnit ?? undefined, couplingUnit: coupling?.unit });
-    for (const bad of r.rejected) badRows.push(`${input.path}:${bad.row}:${bad.column}: ${bad.reason}`);
-    if (r.rejected.length > 0 && opts.skipBadRows) notes.push(`${input.path}: skipped ${r.rejected.length} row(s) that could not be read (--skip-bad-rows)`);
+    // The app's import code: the same parser, unit detection and messages.
+    const r = parseCurveText(text, { fileName, massUnit: opts.massUnit, couplingUnit: opts.couplingUnit });
+    if (r.fatal) throw new InputError(formatProblem(input.path, r.fatal));
+    for (const bad of r.rejected) badRows.push(formatRejection(input.path, bad));
+    badCount += r.rejectedCount;
+    if (r.rejectedCount > 0 && opts.skipBadRows) notes.push(`${input.path}: skipped ${r.rejectedCount} row(s) that could not be read (--skip-bad-rows)`);
+    for (const m of r.messages) if (m.level !== "info") notes.push(`${input.path}: ${m.text}`);
     if (r.nonPositive > 0) notes.push(`${input.path}: ${r.nonPositive} point(s) with a mass or coupling ≤ 0 cannot be drawn on log axes`);
     if (r.massEv.length === 0) throw new InputError(`${input.path}: no data rows (two numeric columns: mass, coupling)`);
     // Ids by position, not random: the same files give the same SVG bytes (paper figures rebuilt by scripts).
-    curves.push(newCurve({ id: `c-${curves.length + 1}`, label: labelFromFileName(fileName), role: input.role, massEv: r.massEv, gInvGeV: r.gInvGeV, fileName }, { curves }));
+    const curve = newCurve(
+      {
+        id: `c-${curves.length + 1}`,
+        label: r.label ?? labelFromFileName(fileName),
+        role: input.role,
+        massEv: r.massEv,
+        gInvGeV: r.gInvGeV,
+        keepOrder: input.role === "region",
+        citation: r.citation ?? "",
+        fileName,
+      },
+      { curves },
+    );
+    curves.push(curve);
   }
-  if (badRows.length > 0) {
+  if (badCount > 0) {
     const shown = badRows.slice(0, MAX_ROW_MESSAGES);
-    const more = badRows.length > shown.length ? [`… and ${badRows.length - shown.length} more`] : [];
+    const more = badCount > shown.length ? [`… and ${badCount - shown.length} more`] : [];
     if (!opts.skipBadRows) {
-      throw new InputError([...shown, ...more, `${badRows.length} row(s) could not be read; fix them, or pass --skip-bad-rows to leave them out`].join("\n"));
+      throw new InputError([...shown, ...more, `${badCount} row(s) could not be read; fix them, or pass --skip-bad-rows to leave them out`].join("\n"));
     }
     notes.unshift(...shown, ...more);
   }

@@ -3,7 +3,7 @@
 import type { Project, SizePreset } from "../data/types";
 import type { Scene } from "./scene-types";
 import { PX_PER_IN, presetOf } from "./layout";
-import { deflateSync, inflateSync, strToU8, strFromU8 } from "fflate";
+import { decodeLink, encodeLink } from "../data/link";
 
 /** Namespace URI of our <metadata> element (a URN of our own: nothing is fetched from it). */
 export const AXBAND_PROJECT_NS = "urn:axband:project";
@@ -42,9 +42,13 @@ export function exportSizeInches(project: Project, preset?: SizePreset): { width
   return { widthIn: size.widthMm / 25.4, heightIn: size.heightMm / 25.4 };
 }
 
-/** The <metadata> content that carries the project: one element in our namespace, payload base64url. */
+/**
+ * The <metadata> content that carries the project: one element in our namespace whose text is the share-link
+ * fragment of the whole project, curves included ("v1." + base64url of raw DEFLATE of the compact JSON; see
+ * src/data/link.ts), so reading it back goes through the link decoder's size cap, schema check and repair.
+ */
 export function projectMetadataXml(project: Project): string {
-  return `<axband:project xmlns:axband="${AXBAND_PROJECT_NS}" encoding="${EMBED_ENCODING}" version="${project.version}">${TEMP_encodeProject(project)}</axband:project>`;
+  return `<axband:project xmlns:axband="${AXBAND_PROJECT_NS}" encoding="${EMBED_ENCODING}" version="${project.version}">${encodeLink(project, { includeCurves: true })}</axband:project>`;
 }
 
 /**
@@ -81,8 +85,8 @@ export function extractProjectFromSvg(svgText: string): ExtractResult {
       continue;
     }
     const payload = m[3].replace(/\s+/g, "");
-    const r = TEMP_decodeProject(payload);
-    return r.ok ? r : { ok: false, error: `the project embedded in this SVG cannot be read: ${r.error}` };
+    const r = decodeLink(payload);
+    return r.ok ? { ok: true, project: r.project } : { ok: false, error: `the project embedded in this SVG cannot be read: ${r.error}` };
   }
   return { ok: false, error: "this SVG mentions axband but its embedded project element is missing or damaged" };
 }
@@ -91,7 +95,7 @@ export function extractProjectFromSvg(svgText: string): ExtractResult {
 export { PX_PER_IN };
 
 // ---------------------------------------------------------------------------------------------------------
-// TEMPORARY adapters until src/plot (buildScene, writeSvg) and the src/data link codec land; each is
+// TEMPORARY adapters until src/plot (buildScene, writeSvg) lands; each is
 // replaced by the real import and removed. Not a finished implementation.
 function esc(s: string): string {
   return s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;");
@@ -140,28 +144,4 @@ function writeSvg(scene: Scene, o: { metadata?: string; idPrefix?: string } = {}
   }
   out.push("</svg>");
   return out.join("\n") + "\n";
-}
-function b64url(bytes: Uint8Array): string {
-  let s = "";
-  for (let i = 0; i < bytes.length; i += 0x8000) s += String.fromCharCode(...bytes.subarray(i, i + 0x8000));
-  return btoa(s).replace(/\+/g, "-").replace(/\//g, "_").replace(/=+$/, "");
-}
-function unb64url(s: string): Uint8Array {
-  const bin = atob(s.replace(/-/g, "+").replace(/_/g, "/"));
-  const out = new Uint8Array(bin.length);
-  for (let i = 0; i < bin.length; i++) out[i] = bin.charCodeAt(i);
-  return out;
-}
-function TEMP_encodeProject(project: Project): string {
-  const json = JSON.stringify(project, (_k, v) => (v instanceof Float64Array ? { f64: Array.from(v) } : v));
-  return b64url(deflateSync(strToU8(json)));
-}
-function TEMP_decodeProject(payload: string): ExtractResult {
-  try {
-    const p = JSON.parse(strFromU8(inflateSync(unb64url(payload))), (_k, v) => (v && typeof v === "object" && Array.isArray(v.f64) ? Float64Array.from(v.f64) : v));
-    if (!p || p.version !== 1 || !Array.isArray(p.curves) || !Array.isArray(p.models)) return { ok: false, error: "not an axband project" };
-    return { ok: true, project: p as Project };
-  } catch (e) {
-    return { ok: false, error: (e as Error).message };
-  }
 }

@@ -5,7 +5,7 @@ import { mkdtempSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join, resolve } from "node:path";
 import { emptyProject, newCurve, newModel } from "../../src/data/defaults";
-import { projectToJsonValue } from "../../src/data/schema";
+import { projectToFile } from "../../src/data/project-file";
 import type { Project } from "../../src/data/types";
 
 export const REPO = resolve(__dirname, "../..");
@@ -38,7 +38,7 @@ export function smallProject(labels: { model?: string; curve?: string; name?: st
 
 /** The project as the text of a .axband.json file. */
 export function projectFileText(p: Project): string {
-  return JSON.stringify(projectToJsonValue(p));
+  return projectToFile(p);
 }
 
 export interface CliRun {

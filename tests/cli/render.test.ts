@@ -7,7 +7,7 @@ import { join } from "node:path";
 import { exportFigureSvg, extractProjectFromSvg } from "../../src/plot/figure-file";
 import { readPngDpi, readPngSize, pngChunksValid } from "../../src/plot/png-meta";
 import { projectsEqual } from "../../src/data/schema";
-import { projectFromFile } from "../../src/cli/pending";
+import { projectFromFile } from "../../src/data/project-file";
 import { INJECTION_CORPUS, SVG_NS, elementNames, parseXml, texts, unsafeParts } from "./svg-checks";
 import { projectFileText, runCli, smallProject, tempDir } from "./fixtures";
 
