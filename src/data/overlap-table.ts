@@ -37,6 +37,8 @@ export interface OverlapRow {
   eOverNSub?: [number, number];
   /** All pieces of that E/N set (two when the band straddles c_γ). */
   eOverNSubs?: [number, number][];
+  /** For exclusion and projection: the E/N values excluded (reached) at every mass of the interval. */
+  eOverNSubThroughout?: [number, number][];
   /** Human-readable remarks (cancellation, gaps merged, rescaling problems); "" when none. */
   note: string;
 }
@@ -87,9 +89,11 @@ function overlapsAny(lo: number, hi: number, list: [number, number][]): boolean 
 
 function rowsForPair(model: Model, curve: Curve, detail: OverlapDetail, c: AxionConstants, extraNote: string[]): OverlapRow[] {
   const kinds = KIND_BY_ROLE[curve.role];
-  const items: { lo: number; hi: number; kind: OverlapKind; subs?: [number, number][] }[] = [];
+  const items: { lo: number; hi: number; kind: OverlapKind; subs?: [number, number][]; all?: [number, number][] }[] = [];
   for (const [lo, hi] of detail.whole) items.push({ lo, hi, kind: kinds.whole });
-  detail.part.forEach(([lo, hi], q) => items.push({ lo, hi, kind: kinds.part, subs: detail.partEOverN[q] }));
+  detail.part.forEach(([lo, hi], q) =>
+    items.push({ lo, hi, kind: kinds.part, subs: detail.partEOverN[q], all: detail.partEOverNThroughout?.[q] }),
+  );
   for (const [lo, hi] of detail.none) items.push({ lo, hi, kind: "none" });
   items.sort((a, b) => a.lo - b.lo);
   return items.map((it) => {
@@ -120,6 +124,7 @@ function rowsForPair(model: Model, curve: Curve, detail: OverlapDetail, c: Axion
       row.eOverNSubs = it.subs.map(([a, b]) => [a, b]);
       if (it.subs.length === 1) row.eOverNSub = [it.subs[0][0], it.subs[0][1]];
     }
+    if (it.all) row.eOverNSubThroughout = it.all.map(([a, b]) => [a, b]);
     return row;
   });
 }

@@ -62,6 +62,12 @@ export interface OverlapDetail extends OverlapResult {
    * region's cross-sections, so it may be wider than the truth when the region has several lobes.
    */
   partEOverN: [number, number][][];
+  /**
+   * For exclusion and projection curves: the E/N values excluded (within reach) at every mass of each `part`
+   * interval, even at the worst end of the theory spread (often empty or a single point, because a part
+   * interval usually runs from "none" to "whole"); null for regions.
+   */
+  partEOverNThroughout: [number, number][][] | null;
   /** Masses of the curve's range where nothing is claimed to overlap. */
   none: Interval[];
   /** The curve's mass range [min, max] in eV (null with fewer than two usable points). */
@@ -183,7 +189,7 @@ interface SortedPrep {
   skipped: number;
 }
 
-/** A closed region in file order, same coordinates; `spacing` is its typical sample spacing in ln m. */
+/** A closed region in file order, same coordinates. */
 interface PolygonPrep {
   n: number;
   x: Float64Array;
@@ -192,7 +198,6 @@ interface PolygonPrep {
   xMax: number;
   massMin: number;
   massMax: number;
-  spacing: number;
   skipped: number;
 }
 
@@ -261,14 +266,6 @@ function preparePolygon(massEv: Float64Array, gInvGeV: Float64Array): PolygonPre
     massMax = Math.max(massMax, massEv[i]);
   }
   const n = xs.length;
-  // The median |Δ ln m| over the edges stands for "one sample": a region has no mass ordering of its own.
-  const steps: number[] = [];
-  for (let i = 0; i < n; i++) {
-    const d = Math.abs(xs[(i + 1) % n] - xs[i]);
-    if (d > 0) steps.push(d);
-  }
-  steps.sort((p, q) => p - q);
-  const spacing = steps.length > 0 ? steps[Math.floor((steps.length - 1) / 2)] : 0;
   entry.polygon = {
     n,
     x: Float64Array.from(xs),
@@ -277,7 +274,6 @@ function preparePolygon(massEv: Float64Array, gInvGeV: Float64Array): PolygonPre
     xMax: n > 0 ? Math.log(massMax) : NaN,
     massMin,
     massMax,
-    spacing,
     skipped: len - n + Math.abs(massEv.length - gInvGeV.length),
   };
   return entry.polygon;
@@ -427,11 +423,23 @@ function sortedOverlap(p: SortedPrep, L: Levels, merge: boolean): Raw {
   return finish(whole, touch, merge, bridge);
 }
 
-/** Lowest sheared curve value over [x0, x1]: at the ends or at a sample inside. */
-function sortedMinOver(p: SortedPrep, x0: number, x1: number): number {
-  let min = Math.min(sortedValueAt(p, x0), sortedValueAt(p, x1));
-  for (let j = lowerBound(p.x, x0); j < p.n && p.x[j] <= x1; j++) min = Math.min(min, p.v[j]);
-  return min;
+// The E/N detail is taken over the interval's interior: a vertical step or edge exactly at an end belongs to
+// the neighbouring interval (it is what ends this one), so the ends are moved in by a negligible amount.
+const INSET = 1e-12;
+
+/** Lowest and highest sheared curve value over the interior of [lo, hi]: at its ends or at a sample inside. */
+function sortedRangeOver(p: SortedPrep, lo: number, hi: number): [number, number] {
+  const x0 = lo + INSET * (hi - lo);
+  const x1 = hi - INSET * (hi - lo);
+  const a = sortedValueAt(p, x0);
+  const b = sortedValueAt(p, x1);
+  let min = Math.min(a, b);
+  let max = Math.max(a, b);
+  for (let j = lowerBound(p.x, x0); j < p.n && p.x[j] <= x1; j++) {
+    min = Math.min(min, p.v[j]);
+    max = Math.max(max, p.v[j]);
+  }
+  return [min, max];
 }
 
 // ---------------------------------------------------------------------------------------------------------
@@ -496,10 +504,39 @@ function boundaryInBand(p: PolygonPrep, lo: number, hi: number): Flat {
   return unionUnsorted(pieces);
 }
 
+/**
+ * For each query abscissa (ascending), the smallest x-width of the polygon edges whose x-range holds it: the
+ * local sample spacing of the region there (0 at a vertical edge, which is a deliberate sharp boundary).
+ */
+function polygonSpacingAt(p: PolygonPrep, xs: Float64Array): Float64Array {
+  const width = new Float64Array(xs.length).fill(Infinity);
+  for (let i = 0; i < p.n; i++) {
+    const j = i + 1 === p.n ? 0 : i + 1;
+    const e0 = Math.min(p.x[i], p.x[j]);
+    const e1 = Math.max(p.x[i], p.x[j]);
+    for (let q = lowerBound(xs, e0); q < xs.length && xs[q] <= e1; q++) width[q] = Math.min(width[q], e1 - e0);
+  }
+  return width;
+}
+
+/** Bridge test for a region: the gap is narrower than the local spacing at both of its ends. */
+function polygonBridge(p: PolygonPrep, lists: Flat[]): (lo: number, hi: number) => boolean {
+  const ends: number[] = [];
+  for (const list of lists) for (let i = 1; i + 1 < list.length; i += 2) ends.push(list[i], list[i + 1]);
+  ends.sort((a, b) => a - b);
+  const xs = Float64Array.from(ends);
+  const width = polygonSpacingAt(p, xs);
+  const at = (x: number): number => {
+    const q = lowerBound(xs, x);
+    return q < xs.length && xs[q] === x ? width[q] : 0;
+  };
+  return (lo, hi) => hi - lo < Math.min(at(lo), at(hi));
+}
+
 function polygonOverlap(p: PolygonPrep, L: Levels, merge: boolean): Raw {
-  const bridge = (lo: number, hi: number): boolean => hi - lo < p.spacing;
   if (L.lo === L.hi) {
-    return finish(insideAlongLevel(p, L.lo), [], merge, bridge, true);
+    const inside = insideAlongLevel(p, L.lo);
+    return finish(inside, [], merge, merge ? polygonBridge(p, [inside]) : () => false, true);
   }
   const insideLo = insideAlongLevel(p, L.lo);
   const insideHi = insideAlongLevel(p, L.hi);
@@ -508,10 +545,10 @@ function polygonOverlap(p: PolygonPrep, L: Levels, merge: boolean): Raw {
   // it meets the region when an end is inside or the boundary crosses it.
   const whole = subtractFlat(intersectFlat(insideLo, insideHi), crossing);
   const touch = unionFlat(unionFlat(insideLo, insideHi), crossing);
-  return finish(whole, touch, merge, bridge);
+  return finish(whole, touch, merge, merge ? polygonBridge(p, [whole, touch]) : () => false);
 }
 
-/** Lowest and highest sheared value of the region within each interval of `parts` (one sweep over edges). */
+/** Lowest and highest sheared value of the region within the interior of each interval of `parts` (one sweep over edges). */
 function polygonRangeOver(p: PolygonPrep, parts: Flat): { min: number[]; max: number[] } {
   const k = parts.length / 2;
   const min = new Array<number>(k).fill(Infinity);
@@ -525,8 +562,10 @@ function polygonRangeOver(p: PolygonPrep, parts: Flat): { min: number[]; max: nu
     const e0 = Math.min(xi, xj);
     const e1 = Math.max(xi, xj);
     for (let q = lowerBound(his, e0); q < k && parts[2 * q] <= e1; q++) {
-      const a = Math.max(e0, parts[2 * q]);
-      const b = Math.min(e1, parts[2 * q + 1]);
+      const inset = INSET * (parts[2 * q + 1] - parts[2 * q]);
+      const a = Math.max(e0, parts[2 * q] + inset);
+      const b = Math.min(e1, parts[2 * q + 1] - inset);
+      if (!(a <= b)) continue;
       let va: number;
       let vb: number;
       if (xj === xi) {
@@ -598,10 +637,11 @@ function constantsFor(model: OverlapModel, opts: OverlapOptions): AxionConstants
  *   (cancellation) `whole` is empty: no finite limit or bounded region covers g → 0.
  * - Nothing is claimed outside the curve's mass range; isolated touching points are not reported.
  * - Gap merging (`mergeGaps`, default on): two intervals of the same kind are joined when the gap between
- *   them is narrower (in ln m) than one sample spacing, taken for exclusion and projection curves as the
- *   smaller width of the two curve segments holding the gap's ends, and for regions as the median |Δ ln m|
- *   of the polygon's edges. Such a gap rests on a single sample and is not resolved by the data. Whole
- *   intervals are merged first; what remains of the band's partial overlap fills the rest.
+ *   them is narrower (in ln m) than one sample spacing: for exclusion and projection curves the smaller
+ *   width of the two curve segments holding the gap's ends; for regions the smallest x-width of the
+ *   polygon edges spanning either end (0 at a vertical edge, so a drawn notch is never bridged). Such a
+ *   gap rests on a single sample and is not resolved by the data. Whole intervals are merged first; what
+ *   remains of the band's partial overlap fills the rest.
  *
  * Complexity: O(n) per call for n points (crossing lists of a region are sorted, O(k log k) for k crossings);
  * the per-curve preparation (logs, sorting) is cached on the curve's arrays, which must not be mutated.
@@ -622,6 +662,7 @@ export function overlapDetail(model: OverlapModel, curve: OverlapCurve, opts: Ov
     whole: [],
     part: [],
     partEOverN: [],
+    partEOverNThroughout: curve.role === "region" ? null : [],
     none: [],
     massRangeEv: null,
     cancels,
@@ -646,7 +687,7 @@ export function overlapDetail(model: OverlapModel, curve: OverlapCurve, opts: Ov
         normalizedOfLevel(range.max[q] + lnFactor, L.kHigh) + L.dc,
       ),
     );
-    return assemble(raw, [p.xMin, p.xMax], toMass, partEOverN, cancels, line, p.skipped);
+    return assemble(raw, [p.xMin, p.xMax], toMass, partEOverN, null, cancels, line, p.skipped);
   }
 
   const p = prepareSorted(curve.massEv, curve.gInvGeV);
@@ -660,11 +701,15 @@ export function overlapDetail(model: OverlapModel, curve: OverlapCurve, opts: Ov
   };
   const raw = sortedOverlap(p, L, merge);
   const partEOverN: [number, number][][] = [];
+  const throughout: [number, number][][] = [];
   for (let i = 0; i < raw.part.length; i += 2) {
-    const vMin = sortedMinOver(p, raw.part[i], raw.part[i + 1]);
+    const [vMin, vMax] = sortedRangeOver(p, raw.part[i], raw.part[i + 1]);
+    // Somewhere: the E/N's own spread top reaches the curve's lowest point; throughout: its spread bottom
+    // stays above the curve's highest point.
     partEOverN.push(eOverNWithAbsIn(L, normalizedOfLevel(vMin + lnFactor, L.kLow) - L.dc, Infinity));
+    throughout.push(eOverNWithAbsIn(L, normalizedOfLevel(vMax + lnFactor, L.kHigh) + L.dc, Infinity));
   }
-  return assemble(raw, [p.x[0], p.x[p.n - 1]], toMass, partEOverN, cancels, line, p.skipped);
+  return assemble(raw, [p.x[0], p.x[p.n - 1]], toMass, partEOverN, throughout, cancels, line, p.skipped);
 }
 
 function assemble(
@@ -672,6 +717,7 @@ function assemble(
   range: [number, number],
   toMass: (x: number) => number,
   partEOverN: [number, number][][],
+  throughout: [number, number][][] | null,
   cancels: boolean,
   line: boolean,
   skipped: number,
@@ -680,12 +726,14 @@ function assemble(
   // Keep partEOverN aligned with the intervals that survive the conversion to eV.
   const part: Interval[] = [];
   const partE: [number, number][][] = [];
+  const partT: [number, number][][] = [];
   for (let i = 0; i < raw.part.length; i += 2) {
     const lo = toMass(raw.part[i]);
     const hi = toMass(raw.part[i + 1]);
     if (hi > lo) {
       part.push([lo, hi]);
       partE.push(partEOverN[i / 2]);
+      if (throughout) partT.push(throughout[i / 2]);
     }
   }
   const none = subtractFlat([range[0], range[1]], unionFlat(raw.whole, raw.part));
@@ -693,6 +741,7 @@ function assemble(
     whole,
     part,
     partEOverN: partE,
+    partEOverNThroughout: throughout ? partT : null,
     none: toIntervals(none, toMass),
     massRangeEv: [toMass(range[0]), toMass(range[1])],
     cancels,
