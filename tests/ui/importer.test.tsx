@@ -5,17 +5,28 @@
 import { beforeEach, describe, expect, test } from "vitest";
 import { fireEvent, render, screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
-import { ImportDialog } from "../../src/ui/importer/ImportDialog";
+import { ImportControls, ImportDialog } from "../../src/ui/importer/ImportDialog";
+import { useImport } from "../../src/ui/importer/import-store";
 import { useAxband } from "../../src/ui/store";
 import { emptyProject } from "../../src/data/defaults";
 
+function Step() {
+  return (
+    <>
+      <ImportControls />
+      <ImportDialog />
+    </>
+  );
+}
+
 beforeEach(() => {
+  useImport.getState().cancelAll();
   useAxband.getState().resetProject(emptyProject());
   useAxband.setState({ ui: { messages: [], highlight: null, hover: null } });
 });
 
 async function paste(text: string) {
-  render(<ImportDialog />);
+  render(<Step />);
   fireEvent.click(screen.getByRole("button", { name: "Paste data" }));
   fireEvent.change(screen.getByLabelText("Paste data"), { target: { value: text } });
   fireEvent.click(screen.getByRole("button", { name: "Preview pasted data" }));
@@ -67,7 +78,7 @@ describe("pasted data", () => {
 describe("files", () => {
   test("confirm adds a curve labelled by the file name, with the chosen mass unit", async () => {
     const user = userEvent.setup();
-    render(<ImportDialog />);
+    render(<Step />);
     const file = new File(["freq,g\n1,1e-13\n2,2e-13\n"], "demo-haloscope (invented).csv", { type: "text/csv" });
     await user.upload(screen.getByTestId("import-files"), file);
     await screen.findByTestId("import-detected");
@@ -85,7 +96,7 @@ describe("files", () => {
 
   test("several files import in one click, each with its own colour", async () => {
     const user = userEvent.setup();
-    render(<ImportDialog />);
+    render(<Step />);
     await user.upload(screen.getByTestId("import-files"), [
       new File(["1e-6,1e-13\n2e-6,2e-13\n"], "a.csv"),
       new File(["1e-6\t1e-12\n2e-6\t2e-12\n"], "b.txt"),
@@ -100,7 +111,7 @@ describe("files", () => {
 
   test("empty, single-column and binary files get a message and change nothing", async () => {
     const user = userEvent.setup();
-    render(<ImportDialog />);
+    render(<Step />);
     await user.upload(screen.getByTestId("import-files"), [
       new File([""], "empty.csv"),
       new File(["1\n2\n3\n"], "one.csv"),

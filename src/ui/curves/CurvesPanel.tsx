@@ -4,6 +4,8 @@
 import { useState } from "react";
 import { useShallow } from "zustand/react/shallow";
 import type { Curve, CurveRole, LineStyle } from "../../data/types";
+import { LINE_STYLES, ROLES } from "./roles";
+import { ImportControls } from "../importer/ImportDialog";
 import { selectCurve, selectCurveIds, useAxband } from "../store";
 import { curveCsvFileName, curveToCsv, rescaleCurve } from "../../data";
 import { downloadText } from "../export/download";
@@ -11,14 +13,6 @@ import { COUPLING_UNIT_OPTIONS, MASS_UNIT_OPTIONS, type CouplingUnit, type MassU
 import { NumberField } from "./NumberField";
 import { isRescaled, physicsOptsOf } from "../../plot/physics-settings";
 import "./curves.css";
-
-export const ROLES: { value: CurveRole; label: string }[] = [
-  { value: "exclusion", label: "exclusion (filled above)" },
-  { value: "projection", label: "projection (line)" },
-  { value: "region", label: "region (closed contour)" },
-];
-
-export const LINE_STYLES: LineStyle[] = ["solid", "dashed", "dotted", "dashdot"];
 
 const positive = (n: number) => (n > 0 ? null : "Must be above 0.");
 const fractionRule = (n: number) => (n > 0 && n <= 1 ? null : "Between 0 (excluded) and 1.");
@@ -44,6 +38,7 @@ function CurveCard({ id, index, count }: { id: string; index: number; count: num
       <div className="ax-curve-head">
         <input
           type="color"
+          className="swatch"
           aria-label={`Colour of ${curve.label}`}
           value={/^#[0-9a-f]{6}$/i.test(curve.colour) ? curve.colour : "#000000"}
           onChange={(e) => updateCurve(id, { colour: e.target.value }, { coalesceKey: `curve:${id}:colour` })}
@@ -60,13 +55,13 @@ function CurveCard({ id, index, count }: { id: string; index: number; count: num
           shown
         </label>
         <span className="ax-curve-order">
-          <button type="button" aria-label={`Move ${curve.label} up`} disabled={index === 0} onClick={() => moveCurve(id, -1)}>
+          <button type="button" className="icon" aria-label={`Move ${curve.label} up`} disabled={index === 0} onClick={() => moveCurve(id, -1)}>
             ↑
           </button>
-          <button type="button" aria-label={`Move ${curve.label} down`} disabled={index === count - 1} onClick={() => moveCurve(id, 1)}>
+          <button type="button" className="icon" aria-label={`Move ${curve.label} down`} disabled={index === count - 1} onClick={() => moveCurve(id, 1)}>
             ↓
           </button>
-          <button type="button" className="ax-danger" aria-label={`Remove ${curve.label}`} onClick={() => removeCurve(id)}>
+          <button type="button" className="icon danger" aria-label={`Remove ${curve.label}`} onClick={() => removeCurve(id)}>
             ×
           </button>
         </span>
@@ -186,8 +181,8 @@ function CurveCard({ id, index, count }: { id: string; index: number; count: num
 export function CurvesPanel() {
   const ids = useAxband(useShallow(selectCurveIds));
   return (
-    <section className="ax-panel ax-curves" aria-labelledby="ax-curves-title">
-      <h2 id="ax-curves-title">Curves</h2>
+    <section className="ax-panel ax-curves" aria-label="Curves">
+      <ImportControls />
       {ids.length === 0 ? (
         <p className="ax-empty">No curves yet. Import a CSV file, drop one on the page, or paste data.</p>
       ) : (

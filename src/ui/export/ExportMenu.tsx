@@ -1,4 +1,138 @@
-// Placeholder for SVG/PNG/CSV export; owned and filled in by the second UI engineer (App places it in the layout).
+// Figure export: the size preset (the same Figure.preset the screen uses), the SVG download (self-contained,
+// project embedded so the file reopens in axband), PNG at 1×, 2× or 300 dpi with the dpi written into the
+// file, and the model lines and bands as CSV. All files come from the same scene builder as the screen.
+import { useState } from "react";
+import type { SizePreset } from "../../data/types";
+import { exportFigureSvg } from "../../plot/figure-file";
+import { PRESETS, presetOf, CUSTOM_MM_LIMITS } from "../../plot/layout";
+import { modelsToCsv } from "../../plot/model-csv";
+import { setPngDpi } from "../../plot/png-meta";
+import { useAxband } from "../store";
+import { downloadBlob, downloadText, safeFileName } from "./download";
+import { pngTarget, rasteriseSvg, svgSize, type PngScale } from "./png";
+import { NumberField } from "../curves/NumberField";
+import "../curves/curves.css";
+import "./export.css";
+
+export const PRESET_OPTIONS: { value: SizePreset; label: string }[] = [
+  { value: "slide", label: PRESETS.slide.label },
+  { value: "single-column", label: PRESETS["single-column"].label },
+  { value: "double-column", label: PRESETS["double-column"].label },
+  { value: "custom", label: "Custom size" },
+];
+
+const PNG_SCALES: { value: PngScale; label: string }[] = [
+  { value: "1x", label: "1× (screen)" },
+  { value: "2x", label: "2× (sharp on high-dpi screens)" },
+  { value: "300dpi", label: "300 dpi at the physical size" },
+];
+
+/** Base name of exported figure files: the project name, or "axband-figure". */
+export function figureBaseName(projectName: string): string {
+  return safeFileName(projectName.trim() === "" || projectName === "Untitled" ? "axband-figure" : projectName, "axband-figure");
+}
+
+/** The export controls. */
 export function ExportMenu() {
-  return null;
+  const figure = useAxband((s) => s.project.figure);
+  const setFigure = useAxband((s) => s.setFigure);
+  const pushMessage = useAxband((s) => s.pushMessage);
+  const [pngScale, setPngScale] = useState<PngScale>("2x");
+  const [busy, setBusy] = useState(false);
+  const size = presetOf(figure);
+  const mmRule = (n: number) => (n >= CUSTOM_MM_LIMITS[0] && n <= CUSTOM_MM_LIMITS[1] ? null : `${CUSTOM_MM_LIMITS[0]}–${CUSTOM_MM_LIMITS[1]} mm`);
+
+  const svgNow = () => {
+    const project = useAxband.getState().project;
+    return { project, svg: exportFigureSvg(project, { preset: project.figure.preset, embedProject: true }) };
+  };
+
+  const saveSvg = () => {
+    try {
+      const { project, svg } = svgNow();
+      const name = `${figureBaseName(project.name)}.svg`;
+      downloadBlob(name, new Blob([svg], { type: "image/svg+xml" }));
+      pushMessage("status", `Saved ${name} (${size.widthPhysical} × ${size.heightPhysical}; drop it on axband to reopen the project).`);
+    } catch (e) {
+      pushMessage("alert", `The SVG could not be made: ${e instanceof Error ? e.message : String(e)}.`);
+    }
+  };
+
+  const savePng = async () => {
+    setBusy(true);
+    try {
+      const { project, svg } = svgNow();
+      const target = pngTarget(svgSize(svg), pngScale);
+      const png = setPngDpi(await rasteriseSvg(svg, target.widthPx, target.heightPx), target.dpi);
+      const name = `${figureBaseName(project.name)}${pngScale === "1x" ? "" : `@${pngScale}`}.png`;
+      downloadBlob(name, new Blob([png as BlobPart], { type: "image/png" }));
+      pushMessage("status", `Saved ${name} (${target.widthPx} × ${target.heightPx} px, ${Math.round(target.dpi)} dpi).`);
+    } catch (e) {
+      pushMessage("alert", `The PNG could not be made: ${e instanceof Error ? e.message : String(e)}`);
+    } finally {
+      setBusy(false);
+    }
+  };
+
+  const saveModelCsv = () => {
+    const project = useAxband.getState().project;
+    if (project.models.length === 0) {
+      pushMessage("alert", "There are no models to export.");
+      return;
+    }
+    try {
+      const name = `${figureBaseName(project.name)}-models.csv`;
+      downloadText(name, modelsToCsv(project), "text/csv");
+      pushMessage("status", `Saved ${name}.`);
+    } catch (e) {
+      pushMessage("alert", `The model CSV could not be made: ${e instanceof Error ? e.message : String(e)}.`);
+    }
+  };
+
+  return (
+    <section className="ax-panel ax-export" aria-labelledby="ax-export-title">
+      <h2 id="ax-export-title">Export</h2>
+      <div className="ax-export-row">
+        <label className="ax-field">
+          <span>Size</span>
+          <select aria-label="Figure size preset" value={figure.preset} onChange={(e) => setFigure({ preset: e.target.value as SizePreset })}>
+            {PRESET_OPTIONS.map((p) => (
+              <option key={p.value} value={p.value}>
+                {p.label}
+              </option>
+            ))}
+          </select>
+        </label>
+        {figure.preset === "custom" ? (
+          <>
+            <NumberField label="width" unit="mm" value={figure.customWidthMm} validate={mmRule} onCommit={(n) => setFigure({ customWidthMm: n }, { coalesceKey: "figure:customWidthMm" })} />
+            <NumberField label="height" unit="mm" value={figure.customHeightMm} validate={mmRule} onCommit={(n) => setFigure({ customHeightMm: n }, { coalesceKey: "figure:customHeightMm" })} />
+          </>
+        ) : null}
+        <span className="ax-hint">
+          {(size.widthMm / 10).toFixed(1)} × {(size.heightMm / 10).toFixed(1)} cm
+        </span>
+      </div>
+      <div className="ax-export-row">
+        <button type="button" className="ax-primary" data-testid="export-svg" onClick={saveSvg}>
+          SVG
+        </button>
+        <span className="ax-export-group">
+          <button type="button" data-testid="export-png" disabled={busy} onClick={() => void savePng()}>
+            {busy ? "PNG…" : "PNG"}
+          </button>
+          <select aria-label="PNG resolution" value={pngScale} onChange={(e) => setPngScale(e.target.value as PngScale)}>
+            {PNG_SCALES.map((s) => (
+              <option key={s.value} value={s.value}>
+                {s.label}
+              </option>
+            ))}
+          </select>
+        </span>
+        <button type="button" data-testid="export-model-csv" onClick={saveModelCsv}>
+          Model lines (CSV)
+        </button>
+      </div>
+    </section>
+  );
 }

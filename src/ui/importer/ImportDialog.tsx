@@ -1,336 +1,175 @@
-// The import step: files from the picker, dropped on the page, or pasted text become curves. Each source is
-// looked at (first rows, delimiter, header, units), parsed in the Web Worker with a progress bar, and shown
-// with its settings and unreadable rows; one click on "Import" adds every ready source as a curve.
-// Dropped project files and exported SVG figures reopen the project instead.
-import { useCallback, useEffect, useId, useRef, useState } from "react";
-import type { Curve, CurveRole } from "../../data/types";
-import { delimiterName, labelFromFileName, MAX_IMPORT_BYTES, newCurve, type CurveParseResult } from "../../data";
-import { useAxband } from "../store";
-import { startParse, type ParseJob } from "./parse-runner";
-import {
-  DELIMITERS,
-  formatBytes,
-  importable,
-  initialSettings,
-  PARSE_KEYS,
-  parseOptsOf,
-  problemOf,
-  rejectionLines,
-  settingsAfterParse,
-  type ImportItem,
-  type ImportSettings,
-} from "./import-items";
+// The import step as a dialog: sources from the file picker, the paste box or a drop anywhere on the page
+// are parsed in the Web Worker (progress bar, cancel), shown with their first rows, detected delimiter,
+// header and units, the settings to change and the unreadable rows; one click on Import adds them all.
+// Dropped project files and exported SVG figures reopen the project instead (see import-store).
+import { useEffect, useId, useState } from "react";
+import type { CurveRole } from "../../data/types";
+import { delimiterName, MAX_IMPORT_BYTES } from "../../data";
+import { DELIMITERS, formatBytes, importable, rejectionLines, type ImportItem, type ImportSettings } from "./import-items";
+import { useImport } from "./import-store";
 import { COUPLING_UNIT_OPTIONS, MASS_UNIT_OPTIONS } from "./unit-options";
 import { useWindowDrop } from "./useWindowDrop";
-import { isProjectFileName, openProjectFile } from "../share/open-project";
-import { ROLES } from "../curves/CurvesPanel";
-import "../curves/curves.css";
+import { ROLES } from "../curves/roles";
 import "./importer.css";
 
-let keyCounter = 0;
-const nextKey = () => `imp-${++keyCounter}`;
+const ACCEPT = ".csv,.tsv,.txt,.dat,.tab,.svg,.json,text/csv,text/plain,text/tab-separated-values";
 
-function isAbort(e: unknown): boolean {
-  return e instanceof DOMException ? e.name === "AbortError" : e instanceof Error && /cancel|abort/i.test(e.message);
-}
-
-/** Opens dropped or picked project files (reopen the project) and returns the rest (curve data). */
-function useProjectOpener() {
-  const replaceProject = useAxband((s) => s.replaceProject);
-  const pushMessage = useAxband((s) => s.pushMessage);
-  return useCallback(
-    async (files: File[]): Promise<File[]> => {
-      const projectFiles = files.filter((f) => isProjectFileName(f.name));
-      const rest = files.filter((f) => !isProjectFileName(f.name));
-      // Only one project can be open: the last one wins, the others are mentioned.
-      for (const f of projectFiles) {
-        const r = await openProjectFile(f);
-        if (r.ok) replaceProject(r.project, r.message);
-        else pushMessage("alert", r.error);
-      }
-      return rest;
-    },
-    [replaceProject, pushMessage],
+/** The import buttons (file picker with data-testid="import-files", and "Paste data"). */
+export function ImportControls() {
+  const addFiles = useImport((s) => s.addFiles);
+  const setPasteOpen = useImport((s) => s.setPasteOpen);
+  return (
+    <div className="ax-import-bar">
+      <label className="ax-button-like">
+        Import files…
+        <input
+          className="visually-hidden"
+          type="file"
+          multiple
+          data-testid="import-files"
+          accept={ACCEPT}
+          onChange={(e) => {
+            const files = Array.from(e.currentTarget.files ?? []);
+            e.currentTarget.value = "";
+            if (files.length > 0) void addFiles(files);
+          }}
+        />
+      </label>
+      <button type="button" onClick={() => setPasteOpen(true)}>
+        Paste data
+      </button>
+      <span className="ax-hint">or drop files on the page</span>
+    </div>
   );
 }
 
-/** The import controls (file input, paste box, page-wide drop) and the import step. */
+function PasteBox() {
+  const addSources = useImport((s) => s.addSources);
+  const setPasteOpen = useImport((s) => s.setPasteOpen);
+  const [text, setText] = useState("");
+  const id = useId();
+  return (
+    <div className="ax-paste">
+      <label htmlFor={id}>Paste data</label>
+      <textarea
+        id={id}
+        rows={6}
+        spellCheck={false}
+        autoFocus
+        placeholder={"m_a [ueV], g [1/GeV]\n1.0, 3e-14\n2.0, 2.5e-14"}
+        value={text}
+        onChange={(e) => setText(e.target.value)}
+      />
+      <div className="ax-import-actions">
+        <button
+          type="button"
+          disabled={text.trim() === ""}
+          onClick={() => {
+            addSources([{ name: "paste", blob: new Blob([text], { type: "text/plain" }), label: "Pasted data" }]);
+            setText("");
+            setPasteOpen(false);
+          }}
+        >
+          Preview pasted data
+        </button>
+      </div>
+    </div>
+  );
+}
+
+/** The import dialog and the page-wide drop target; render once in the app. */
 export function ImportDialog() {
-  const physics = useAxband((s) => s.project.physics);
-  const addCurves = useAxband((s) => s.addCurves);
-  const pushMessage = useAxband((s) => s.pushMessage);
-  const openProjects = useProjectOpener();
-  const [items, setItems] = useState<ImportItem[]>([]);
-  const [pasteOpen, setPasteOpen] = useState(false);
-  const [pasteText, setPasteText] = useState("");
-  const [notice, setNotice] = useState<string | null>(null);
-  const [busy, setBusy] = useState(false);
-  const itemsRef = useRef(items);
-  const jobs = useRef(new Map<string, { id: number; job: ParseJob }>());
-  const jobCounter = useRef(0);
-  const physicsRef = useRef(physics);
-  const fileInput = useRef<HTMLInputElement>(null);
-  const pasteId = useId();
+  const items = useImport((s) => s.items);
+  const pasteOpen = useImport((s) => s.pasteOpen);
+  const notice = useImport((s) => s.notice);
+  const busy = useImport((s) => s.busy);
+  const { addFiles, changeSettings, removeItem, cancelAll, confirm } = useImport.getState();
+  const dragging = useWindowDrop((files) => void addFiles(files));
+  const titleId = useId();
+  const open = items.length > 0 || pasteOpen;
 
   useEffect(() => {
-    itemsRef.current = items;
-    physicsRef.current = physics;
-  });
-
-  const patchItem = useCallback((key: string, patch: Partial<ImportItem> | ((it: ImportItem) => Partial<ImportItem>)) => {
-    setItems((list) => list.map((it) => (it.key === key ? { ...it, ...(typeof patch === "function" ? patch(it) : patch) } : it)));
-  }, []);
-
-  const runParse = useCallback(
-    (item: ImportItem) => {
-      jobs.current.get(item.key)?.job.cancel();
-      const id = ++jobCounter.current;
-      const job = startParse(item.source, parseOptsOf(item, physicsRef.current), (fraction) => {
-        if (jobs.current.get(item.key)?.id === id) patchItem(item.key, { progress: fraction });
-      });
-      jobs.current.set(item.key, { id, job });
-      patchItem(item.key, { status: "parsing", progress: 0 });
-      job.promise.then(
-        (result: CurveParseResult) => {
-          if (jobs.current.get(item.key)?.id !== id) return;
-          jobs.current.delete(item.key);
-          patchItem(item.key, (it) => ({
-            status: "ready",
-            progress: 1,
-            result,
-            settings: settingsAfterParse(it.settings, result),
-            problem: problemOf(it.fileName, result),
-          }));
-        },
-        (e: unknown) => {
-          if (jobs.current.get(item.key)?.id !== id) return;
-          jobs.current.delete(item.key);
-          if (isAbort(e)) return;
-          patchItem(item.key, { status: "failed", problem: `${item.fileName} could not be read: ${e instanceof Error ? e.message : String(e)}` });
-        },
-      );
-    },
-    [patchItem],
-  );
-
-  const addSources = useCallback(
-    (sources: { name: string; blob: Blob; label?: string }[]) => {
-      setNotice(null);
-      for (const src of sources) {
-        const item: ImportItem = {
-          key: nextKey(),
-          fileName: src.name,
-          source: src.blob,
-          sizeBytes: src.blob.size,
-          problem: null,
-          settings: initialSettings(src.label ?? labelFromFileName(src.name)),
-          labelEdited: false,
-          status: "parsing",
-          progress: 0,
-          result: null,
-        };
-        setItems((list) => [...list, item]);
-        runParse(item);
-      }
-    },
-    [runParse],
-  );
-
-  const addFiles = useCallback(
-    async (files: File[]) => {
-      const rest = await openProjects(files);
-      if (rest.length > 0) addSources(rest.map((f) => ({ name: f.name, blob: f })));
-    },
-    [openProjects, addSources],
-  );
-
-  const dragging = useWindowDrop((files) => void addFiles(files));
-
-  const changeSettings = (item: ImportItem, patch: Partial<ImportSettings>) => {
-    const settings = { ...item.settings, ...patch };
-    if (patch.role === "region") settings.keepOrder = true;
-    const next: ImportItem = { ...item, settings, labelEdited: item.labelEdited || "label" in patch };
-    patchItem(item.key, { settings, labelEdited: next.labelEdited });
-    if (PARSE_KEYS.some((k) => k in patch && patch[k] !== item.settings[k])) runParse(next);
-  };
-
-  const removeItem = (key: string) => {
-    jobs.current.get(key)?.job.cancel();
-    jobs.current.delete(key);
-    setItems((list) => list.filter((it) => it.key !== key));
-  };
-
-  const cancelAll = () => {
-    for (const { job } of jobs.current.values()) job.cancel();
-    jobs.current.clear();
-    setItems([]);
-    setNotice(null);
-    setBusy(false);
-  };
-
-  const confirm = async () => {
-    setBusy(true);
-    const unseen = itemsRef.current.some((it) => it.status === "parsing");
-    // Wait for parses still running; their results arrive through state, read back from the ref.
-    await Promise.allSettled([...jobs.current.values()].map((j) => j.job.promise));
-    await new Promise((r) => setTimeout(r, 0));
-    const list = itemsRef.current;
-    const ready = list.filter(importable);
-    const rejectedTotal = ready.reduce((n, it) => n + (it.result?.rejectedCount ?? 0), 0);
-    if (unseen && rejectedTotal > 0) {
-      setBusy(false);
-      setNotice(`Some rows could not be read (listed below). Import again to skip them, or cancel.`);
-      return;
-    }
-    if (ready.length === 0) {
-      setBusy(false);
-      setNotice("Nothing to import: every source has a problem (see above).");
-      return;
-    }
-    const existing = useAxband.getState().project.curves;
-    const context: { curves: Pick<Curve, "colour">[] } = { curves: [...existing] };
-    const curves: Curve[] = [];
-    for (const it of ready) {
-      const r = it.result as CurveParseResult;
-      const s = it.settings;
-      const curve = newCurve(
-        {
-          label: s.label.trim() || labelFromFileName(it.fileName),
-          role: s.role,
-          massEv: r.massEv,
-          gInvGeV: r.gInvGeV,
-          keepOrder: s.role === "region" ? true : s.keepOrder,
-          citation: s.citation.trim(),
-          fileName: it.fileName,
-        },
-        context,
-      );
-      context.curves.push(curve);
-      curves.push(curve);
-    }
-    addCurves(curves);
-    const nonPositive = ready.reduce((n, it) => n + (it.result?.nonPositive ?? 0), 0);
-    const parts = [`Imported ${curves.length} curve${curves.length === 1 ? "" : "s"}: ${curves.map((c) => c.label).join(", ")}.`];
-    if (rejectedTotal > 0) parts.push(`${rejectedTotal} unreadable row${rejectedTotal === 1 ? "" : "s"} skipped.`);
-    if (nonPositive > 0) parts.push(`${nonPositive} value${nonPositive === 1 ? "" : "s"} ≤ 0 cannot be shown on the log axes.`);
-    const skipped = list.length - ready.length;
-    if (skipped > 0) parts.push(`${skipped} source${skipped === 1 ? "" : "s"} not imported.`);
-    pushMessage("status", parts.join(" "));
-    jobs.current.clear();
-    setItems([]);
-    setNotice(null);
-    setBusy(false);
-  };
-
-  useEffect(
-    () => () => {
-      for (const { job } of jobs.current.values()) job.cancel();
-    },
-    [],
-  );
+    if (!open) return;
+    const onKey = (e: KeyboardEvent) => {
+      if (e.key === "Escape") cancelAll();
+    };
+    window.addEventListener("keydown", onKey);
+    return () => window.removeEventListener("keydown", onKey);
+  }, [open, cancelAll]);
 
   const parsing = items.filter((it) => it.status === "parsing");
   const totalBytes = parsing.reduce((n, it) => n + Math.max(1, it.sizeBytes), 0);
   const overall = parsing.length === 0 ? 1 : parsing.reduce((n, it) => n + it.progress * Math.max(1, it.sizeBytes), 0) / totalBytes;
   const readyCount = items.filter(importable).length;
   const rejectedTotal = items.filter(importable).reduce((n, it) => n + (it.result?.rejectedCount ?? 0), 0);
+  const curvesWord = readyCount + parsing.length > 1 ? `${readyCount + parsing.length} curves` : "curve";
 
   return (
-    <section className="ax-panel ax-import" aria-labelledby="ax-import-title">
-      <h2 id="ax-import-title">Import curves</h2>
-      <div className="ax-import-bar">
-        <label className="ax-button-like">
-          Choose files…
-          <input
-            ref={fileInput}
-            className="ax-visually-hidden"
-            type="file"
-            multiple
-            data-testid="import-files"
-            accept=".csv,.tsv,.txt,.dat,.tab,.svg,.json,text/csv,text/plain,text/tab-separated-values"
-            onChange={(e) => {
-              const files = Array.from(e.currentTarget.files ?? []);
-              e.currentTarget.value = "";
-              if (files.length > 0) void addFiles(files);
-            }}
-          />
-        </label>
-        <button type="button" aria-expanded={pasteOpen} onClick={() => setPasteOpen((o) => !o)}>
-          Paste data
-        </button>
-        <span className="ax-hint">or drop files anywhere on the page · up to {formatBytes(MAX_IMPORT_BYTES)} per file</span>
-      </div>
-      {pasteOpen ? (
-        <div className="ax-paste">
-          <label htmlFor={pasteId}>Paste data</label>
-          <textarea
-            id={pasteId}
-            rows={5}
-            spellCheck={false}
-            placeholder={"m_a [ueV], g [1/GeV]\n1.0, 3e-14\n2.0, 2.5e-14"}
-            value={pasteText}
-            onChange={(e) => setPasteText(e.target.value)}
-          />
-          <div>
-            <button
-              type="button"
-              disabled={pasteText.trim() === ""}
-              onClick={() => {
-                addSources([{ name: "paste", blob: new Blob([pasteText], { type: "text/plain" }), label: "Pasted data" }]);
-                setPasteText("");
-                setPasteOpen(false);
-              }}
-            >
-              Preview pasted data
-            </button>
-          </div>
-        </div>
-      ) : null}
+    <>
       {dragging ? (
         <div className="ax-drop-overlay" aria-hidden="true">
-          <div>Drop CSV files to import them as curves, or an axband project / exported SVG to open it.</div>
+          <div>Drop CSV files to import them as curves, or an axband project or exported SVG to open it.</div>
         </div>
       ) : null}
-      {items.length > 0 ? (
-        <div className="ax-import-step" role="group" aria-label="Import step">
-          {items.map((it) => (
-            <ItemCard key={it.key} item={it} onChange={(p) => changeSettings(it, p)} onRemove={() => removeItem(it.key)} />
-          ))}
-          {parsing.length > 0 ? (
-            <div className="ax-progress-row">
-              <div
-                className="ax-progress"
-                role="progressbar"
-                aria-label="Reading files"
-                aria-valuemin={0}
-                aria-valuemax={100}
-                aria-valuenow={Math.round(overall * 100)}
-              >
-                <div className="ax-progress-fill" style={{ width: `${(overall * 100).toFixed(1)}%` }} />
-              </div>
-              <span className="ax-hint">
-                Reading {parsing.length} file{parsing.length === 1 ? "" : "s"} · {Math.round(overall * 100)} %
-              </span>
+      {open ? (
+        <div className="ax-modal-backdrop">
+          <div className="ax-modal ax-panel" role="dialog" aria-modal="true" aria-labelledby={titleId}>
+            <header className="ax-modal-head">
+              <h2 id={titleId}>Import curves</h2>
+              <span className="ax-hint">up to {formatBytes(MAX_IMPORT_BYTES)} per file</span>
+            </header>
+            <div className="ax-modal-body">
+              {pasteOpen ? <PasteBox /> : null}
+              {items.map((it) => (
+                <ItemCard key={it.key} item={it} onChange={(p) => changeSettings(it.key, p)} onRemove={() => removeItem(it.key)} />
+              ))}
             </div>
-          ) : null}
-          {notice ? (
-            <p className="ax-import-notice" role="alert">
-              {notice}
-            </p>
-          ) : null}
-          <div className="ax-import-actions">
-            <button type="button" className="ax-primary" data-testid="import-confirm" disabled={busy || (readyCount === 0 && parsing.length === 0)} onClick={() => void confirm()}>
-              {busy
-                ? "Importing…"
-                : `Import ${readyCount > 1 || parsing.length > 0 ? `${readyCount + parsing.length} curves` : "curve"}${rejectedTotal > 0 ? `, skipping ${rejectedTotal} unreadable row${rejectedTotal === 1 ? "" : "s"}` : ""}`}
-            </button>
-            <button type="button" onClick={cancelAll}>
-              Cancel
-            </button>
+            <footer className="ax-modal-foot">
+              {parsing.length > 0 ? (
+                <div className="ax-progress-row">
+                  <div
+                    className="ax-progress"
+                    role="progressbar"
+                    aria-label="Reading files"
+                    aria-valuemin={0}
+                    aria-valuemax={100}
+                    aria-valuenow={Math.round(overall * 100)}
+                  >
+                    <div className="ax-progress-fill" style={{ width: `${(overall * 100).toFixed(1)}%` }} />
+                  </div>
+                  <span className="ax-hint">
+                    Reading {parsing.length === 1 ? "1 file" : `${parsing.length} files`} · {Math.round(overall * 100)} %
+                  </span>
+                </div>
+              ) : null}
+              {notice ? (
+                <p className="ax-import-notice" role="alert">
+                  {notice}
+                </p>
+              ) : null}
+              <div className="ax-import-actions">
+                <button type="button" onClick={cancelAll}>
+                  Cancel
+                </button>
+                {items.length > 0 ? (
+                  <button
+                    type="button"
+                    className="primary"
+                    data-testid="import-confirm"
+                    disabled={busy || (readyCount === 0 && parsing.length === 0)}
+                    onClick={() => void confirm()}
+                  >
+                    {busy
+                      ? "Importing…"
+                      : `Import ${curvesWord}${rejectedTotal > 0 ? `, skipping ${rejectedTotal.toLocaleString("en")} unreadable row${rejectedTotal === 1 ? "" : "s"}` : ""}`}
+                  </button>
+                ) : null}
+              </div>
+            </footer>
           </div>
         </div>
       ) : null}
-    </section>
+    </>
   );
 }
 
@@ -356,7 +195,7 @@ function ItemCard({ item, onChange, onRemove }: { item: ImportItem; onChange: (p
         <strong>{item.fileName}</strong>
         <span className="ax-hint">{formatBytes(item.sizeBytes)}</span>
         {item.status === "parsing" ? <span className="ax-hint">reading… {Math.round(item.progress * 100)} %</span> : null}
-        <button type="button" className="ax-danger ax-small" aria-label={`Leave out ${item.fileName}`} onClick={onRemove}>
+        <button type="button" className="icon danger ax-small" aria-label={`Leave out ${item.fileName}`} onClick={onRemove}>
           ×
         </button>
       </header>

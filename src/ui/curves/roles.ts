@@ -1,0 +1,10 @@
+// Choices shared by the import step and the curves panel: curve roles (DESIGN.md §2) and line styles.
+import type { CurveRole, LineStyle } from "../../data/types";
+
+export const ROLES: { value: CurveRole; label: string }[] = [
+  { value: "exclusion", label: "exclusion (filled above)" },
+  { value: "projection", label: "projection (line)" },
+  { value: "region", label: "region (closed contour)" },
+];
+
+export const LINE_STYLES: LineStyle[] = ["solid", "dashed", "dotted", "dashdot"];
