@@ -294,11 +294,14 @@ function readNumber(t: string, s: number, e: number, shift: number, comma: boole
   return v;
 }
 
-/** True when the whole string is a plain or scientific number (with `,` as decimal point when `comma`). */
+/**
+ * True when the whole string is written as a plain or scientific number (with `,` as decimal point when
+ * `comma`), even one beyond the range of a double (it may fit once the unit's prefix is applied).
+ */
 export function isNumberText(text: string, comma = false): boolean {
   const s = text.trim();
-  const v = readNumber(s, 0, s.length, 0, comma);
-  return numErr === ERR_NONE && !Number.isNaN(v);
+  readNumber(s, 0, s.length, 0, comma);
+  return numErr === ERR_NONE || numErr === ERR_RANGE;
 }
 
 /** The number a string holds (same grammar as the importer), or NaN. */
@@ -858,10 +861,13 @@ class Parser implements CurveParser {
         if (fe >= e) bad = "unterminated quote";
         p = fe + 1;
         while (p < e && (c = t.charCodeAt(p)) !== delim && !(delim === WS && isBlank(c))) {
-          if (!isBlank(c) && bad === "") bad = `text after the closing quote: "${t.slice(fs - 1, Math.min(e, p + 10))}"`;
+          if (!isBlank(c) && bad === "") bad = `text after the closing quote: "${t.slice(fe + 1, Math.min(e, p + 10))}"`;
           p++;
         }
         if (p > e) p = e;
+        // Blanks inside the quotes cannot change a number's meaning: drop them.
+        while (fs < fe && isBlank(t.charCodeAt(fs))) fs++;
+        while (fe > fs && isBlank(t.charCodeAt(fe - 1))) fe--;
       } else if (delim === WS) {
         while (p < e && !isBlank(t.charCodeAt(p))) p++;
         fe = p;

@@ -58,16 +58,23 @@ export function nextDouble(x: number, dir: 1 | -1 = 1): number {
  * guess itself when none is found (then the value reads back to within an ulp or two).
  */
 function invertExactly(target: number, forward: (y: number) => number, guess: number): number {
-  if (!Number.isFinite(guess) || forward(guess) === target) return guess;
+  if (!Number.isFinite(guess)) return guess;
+  let hit = forward(guess) === target ? guess : NaN;
   let up = guess;
   let down = guess;
-  for (let i = 0; i < 4; i++) {
+  for (let i = 0; i < 4 && Number.isNaN(hit); i++) {
     up = nextDouble(up, 1);
-    if (forward(up) === target) return up;
+    if (forward(up) === target) hit = up;
     down = nextDouble(down, -1);
-    if (forward(down) === target) return down;
+    if (forward(down) === target) hit = down;
   }
-  return guess;
+  if (Number.isNaN(hit)) return guess;
+  // Several doubles may map to the target; a value typed as "1.2345" GHz should be written that way again.
+  for (const digits of [15, 16]) {
+    const short = Number(hit.toPrecision(digits));
+    if (forward(short) === target) return short;
+  }
+  return hit;
 }
 
 /** A double as shortest round-trip decimal, with its decimal exponent moved by `shift` (exact, textual). */
