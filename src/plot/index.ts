@@ -7,7 +7,7 @@ export { PRESETS, presetOf, fontsFor, computeLayout, PX_PER_IN, PX_PER_MM, CUSTO
 export { massToX, xToMass, yToPx, pxToY, massScale, yScale, gToView, viewToG, viewTransform, logAffine, sanitizeDomain, type LogAffine } from "./scales";
 export { logTicks, faTicks, faDomain, frequencyTicks, frequencyDomain, frequencyUnit, decadeLabelStep, type LogTick, type LogTickOpts, type FrequencyUnit } from "./ticks";
 export { axisTicks, yTitle, MASS_TITLE, FA_TITLE, frequencyTitle, type AxisTicks } from "./axes";
-export { constantsOf, physicsOptsOf, eOverNValue, rescaleFactor, isRescaled } from "./physics-settings";
+export { constantsOf, physicsOptsOf, eOverNValue, rescaleFactor, isRescaled, rescaleNote } from "./physics-settings";
 export {
   prepareCurve,
   viewArrays,

@@ -3,6 +3,7 @@
 import { rationalToNumber } from "../physics/eovern-parse";
 import { referenceConstants, type AxionConstants, type PhysicsOpts } from "../physics/constants";
 import type { CurveRescale, PhysicsSettings } from "../data/types";
+import { isRescaled as dataIsRescaled, rescaleFactor as dataRescaleFactor, rescaleLegendSuffix, validateRescale } from "../data/rescale";
 
 function positive(v: unknown, fallback: number): number {
   return typeof v === "number" && Number.isFinite(v) && v > 0 ? v : fallback;
@@ -40,20 +41,20 @@ export function eOverNValue(text: string | number): number {
 }
 
 /**
- * Factor the curve's couplings are multiplied by: √(ρ_assumed/ρ_shown)/√f (a limit scales as g ∝ ρ^(−1/2);
- * a fraction f of the dark matter weakens it by 1/√f; common practice). 1 for missing or invalid settings.
+ * Factor the curve's couplings are multiplied by, √(ρ_assumed/ρ_shown)/√f (src/data/rescale.ts; common
+ * practice); 1 when the settings are missing or invalid, so a half-typed form never breaks the figure.
  */
 export function rescaleFactor(rescale: CurveRescale | undefined): number {
-  if (!rescale) return 1;
-  const ra = rescale.rhoAssumed;
-  const rs = rescale.rhoShown;
-  const f = rescale.fraction;
-  const okRho = Number.isFinite(ra) && Number.isFinite(rs) && ra > 0 && rs > 0;
-  const okF = Number.isFinite(f) && f > 0 && f <= 1;
-  return (okRho ? Math.sqrt(ra / rs) : 1) / (okF ? Math.sqrt(f) : 1);
+  if (!rescale || validateRescale(rescale) !== null) return 1;
+  return dataRescaleFactor(rescale);
 }
 
-/** True when the rescale settings change the curve (ρ shown ≠ ρ assumed or f ≠ 1). */
+/** True when the rescale settings change the curve (and are valid, so they are applied). */
 export function isRescaled(rescale: CurveRescale | undefined): boolean {
-  return Math.abs(rescaleFactor(rescale) - 1) > 1e-12;
+  return !!rescale && validateRescale(rescale) === null && dataIsRescaled(rescale);
+}
+
+/** Legend note of a rescaled curve ("rescaled: ρ = 0.3 GeV/cm³, f = 0.5"), "" when not rescaled. */
+export function rescaleNote(rescale: CurveRescale | undefined): string {
+  return isRescaled(rescale) ? rescaleLegendSuffix(rescale as CurveRescale) : "";
 }

@@ -9,7 +9,7 @@ import { dashFor, plainOrScientificRuns, r2, safeColour, unitInterval } from "./
 import { computeLayout, fontsFor, presetOf, PX_PER_IN, type Fonts } from "./layout";
 import { legendNodes, measureLegend, type LegendEntry } from "./legend";
 import { modelGeometry } from "./models";
-import { constantsOf, eOverNValue, isRescaled } from "./physics-settings";
+import { constantsOf, eOverNValue, rescaleNote } from "./physics-settings";
 import { logAffine, sanitizeDomain } from "./scales";
 import { runsWidthPx } from "./text";
 import { logTicks } from "./ticks";
@@ -61,17 +61,9 @@ function modelNotes(m: Model, c: ReturnType<typeof constantsOf>): string[] {
   return notes;
 }
 
-function num(v: number): string {
-  return String(Number(v.toPrecision(3)));
-}
-
 function curveNotes(cv: Curve): string[] {
-  if (!isRescaled(cv.rescale)) return [];
-  const parts: string[] = [];
-  const r = cv.rescale;
-  if (r.rhoShown !== r.rhoAssumed && r.rhoShown > 0 && r.rhoAssumed > 0) parts.push(`ρ = ${num(r.rhoShown)} GeV/cm³`);
-  if (r.fraction !== 1 && r.fraction > 0 && r.fraction <= 1) parts.push(`f = ${num(r.fraction)}`);
-  return parts.length ? [`rescaled ${parts.join(", ")}`] : [];
+  const note = rescaleNote(cv.rescale);
+  return note ? [note] : [];
 }
 
 function withNotes(label: string, notes: string[]): string {

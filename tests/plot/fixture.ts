@@ -1,0 +1,142 @@
+// A fixed small project for the plot tests (invented curves generated from formulas, textbook E/N values),
+// and helpers to read path data and text back out of a scene.
+import type { Curve, Model, Project } from "../../src/data/types";
+import type { PathNode, Scene, SceneNode, TextNode } from "../../src/plot/scene-types";
+
+/** Deterministic 32-bit generator (mulberry32), so fixtures and property tests are reproducible. */
+export function rng(seed: number): () => number {
+  let a = seed >>> 0;
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+export function model(partial: Partial<Model> & Pick<Model, "id" | "eOverNMin">): Model {
+  return {
+    label: `E/N = ${partial.eOverNMin}`,
+    eOverNMax: partial.eOverNMin,
+    source: { kind: "typed" },
+    colour: "#117A8B",
+    lineStyle: "solid",
+    fillOpacity: 0.25,
+    visible: true,
+    sigmas: 0,
+    ...partial,
+  };
+}
+
+export function curve(partial: Partial<Curve> & Pick<Curve, "id" | "massEv" | "gInvGeV">): Curve {
+  return {
+    label: `Curve ${partial.id} (invented)`,
+    role: "exclusion",
+    keepOrder: false,
+    colour: "#D55E00",
+    lineStyle: "solid",
+    fillOpacity: 0.3,
+    visible: true,
+    rescale: { rhoAssumed: 0.45, rhoShown: 0.45, fraction: 1 },
+    citation: "invented for the tests",
+    fileName: `${partial.id}.csv`,
+    ...partial,
+  };
+}
+
+/** An invented exclusion dip, a smooth projection and a closed region (all formula-made, seeded noise). */
+export function fixtureCurves(): Curve[] {
+  const r = rng(7);
+  const n = 300;
+  const m1 = new Float64Array(n);
+  const g1 = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    const x = -5.6 + (1.2 * i) / (n - 1);
+    m1[i] = 10 ** x;
+    g1[i] = 10 ** (-13.5 + 2.5 * ((x + 5) / 0.6) ** 2 + 0.1 * (r() - 0.5));
+  }
+  const m2 = new Float64Array(120);
+  const g2 = new Float64Array(120);
+  for (let i = 0; i < 120; i++) {
+    const x = -6.5 + (3 * i) / 119;
+    m2[i] = 10 ** x;
+    g2[i] = 10 ** (-15.2 + 0.4 * Math.cos(1.5 * (x + 5)) + 0.5 * (x + 6.5));
+  }
+  const m3 = new Float64Array(90);
+  const g3 = new Float64Array(90);
+  for (let i = 0; i < 90; i++) {
+    const t = (2 * Math.PI * i) / 90;
+    m3[i] = 10 ** (-3.2 + 0.35 * Math.cos(t));
+    g3[i] = 10 ** (-11 + 0.3 * Math.sin(t) * (1 + 0.05 * Math.sin(7 * t)));
+  }
+  return [
+    curve({ id: "dip", label: "Test dip (invented)", role: "exclusion", massEv: m1, gInvGeV: g1, colour: "#D55E00" }),
+    curve({ id: "reach", label: "Test reach (invented)", role: "projection", massEv: m2, gInvGeV: g2, colour: "#CC79A7", lineStyle: "dashed" }),
+    curve({ id: "blob", label: "Test region (invented)", role: "region", massEv: m3, gInvGeV: g3, colour: "#009E73", keepOrder: true }),
+  ];
+}
+
+export function fixtureProject(): Project {
+  return {
+    version: 1,
+    name: "plot fixture",
+    physics: { ref: "2019", custom: { cGamma: 1.92, cGammaSigma: 0.04, kMuEv: 5.691, kMuEvSigma: 0.051, label: "custom" } },
+    models: [
+      model({ id: "ksvz", label: "KSVZ-type, E/N = 0", eOverNMin: "0", colour: "#117A8B" }),
+      model({ id: "dfsz", label: "DFSZ-type, E/N = 8/3", eOverNMin: "8/3", colour: "#1F4E8C", lineStyle: "dashed" }),
+      model({ id: "window", label: "Window, E/N = 5/3..44/3", eOverNMin: "5/3", eOverNMax: "44/3", colour: "#2A9D8F", fillOpacity: 0.2, sigmas: 1 }),
+    ],
+    curves: fixtureCurves(),
+    figure: {
+      preset: "slide",
+      customWidthMm: 120,
+      customHeightMm: 80,
+      massRangeEv: [1e-7, 1e-2],
+      yRange: [1e-17, 1e-9],
+      yView: "coupling",
+      topAxis: "fa",
+      grid: true,
+      legend: "bottom-right",
+      fontPt: 12,
+      title: "",
+    },
+  };
+}
+
+/** Every node of a scene (all layers) or of one layer. */
+export function nodes(scene: Scene, layer?: string): SceneNode[] {
+  return scene.layers.filter((l) => !layer || l.id === layer).flatMap((l) => l.nodes);
+}
+
+export function paths(scene: Scene, layer?: string): PathNode[] {
+  return nodes(scene, layer).filter((n): n is PathNode => n.kind === "path");
+}
+
+export function textNodes(scene: Scene, layer?: string): TextNode[] {
+  return nodes(scene, layer).filter((n): n is TextNode => n.kind === "text");
+}
+
+export function textOf(n: TextNode): string {
+  return n.runs.map((r) => r.text).join("");
+}
+
+/** Subpaths of "M…L…Z" / "H" / "V" path data as point lists (absolute commands only, as the scene writes them). */
+export function parsePath(d: string): { points: [number, number][]; closed: boolean }[] {
+  const out: { points: [number, number][]; closed: boolean }[] = [];
+  const re = /([MLHVZ])([^MLHVZ]*)/g;
+  let cur: { points: [number, number][]; closed: boolean } | null = null;
+  let m: RegExpExecArray | null;
+  while ((m = re.exec(d))) {
+    const cmd = m[1];
+    const nums = m[2].trim() ? m[2].trim().split(/[\s,]+/).map(Number) : [];
+    if (cmd === "M") {
+      cur = { points: [[nums[0], nums[1]]], closed: false };
+      out.push(cur);
+    } else if (cmd === "L" && cur) cur.points.push([nums[0], nums[1]]);
+    else if (cmd === "H" && cur) cur.points.push([nums[0], cur.points[cur.points.length - 1][1]]);
+    else if (cmd === "V" && cur) cur.points.push([cur.points[cur.points.length - 1][0], nums[0]]);
+    else if (cmd === "Z" && cur) cur.closed = true;
+  }
+  return out;
+}
