@@ -1,8 +1,64 @@
-// The application shell: header, the figure, and the side panels.
+// The application shell: header (name, undo/redo, project and export menus), the sidebar with collapsible
+// sections (models, curves, figure settings, constants), and the main area (figure, readout, overlap, sources).
+import { CurvesPanel } from "./curves/CurvesPanel";
+import { ImportDialog } from "./importer/ImportDialog";
+import { ExportMenu } from "./export/ExportMenu";
+import { ProjectMenu } from "./share/ProjectMenu";
+import { OverlapPanel } from "./overlap/OverlapPanel";
+import { SourcesPanel } from "./sources/SourcesPanel";
+import { Messages } from "./layout/Messages";
+import { Section } from "./layout/Section";
+import { UndoRedo, useUndoKeys } from "./layout/UndoRedo";
+import { ModelsPanel } from "./models/ModelsPanel";
+import { FigureSettings } from "./settings/FigureSettings";
+import { ConstantsPanel } from "./settings/ConstantsPanel";
+import { FigureView } from "./figure/FigureView";
+import { HoverReadout } from "./figure/HoverReadout";
+
 export function App() {
+  useUndoKeys();
   return (
-    <main>
-      <h1>axband</h1>
-    </main>
+    <div className="app">
+      <header className="app-header">
+        <div className="brand">
+          <h1>axband</h1>
+          <span className="tagline">QCD-axion model bands over your own sensitivity curves</span>
+        </div>
+        <div className="header-actions">
+          <UndoRedo />
+          <ProjectMenu />
+          <ExportMenu />
+        </div>
+      </header>
+      <Messages />
+      <div className="app-body">
+        <aside className="sidebar" aria-label="Settings">
+          <Section title="Models" id="section-models">
+            <ModelsPanel />
+          </Section>
+          <Section title="Curves" id="section-curves">
+            <CurvesPanel />
+          </Section>
+          <Section title="Figure settings" id="section-figure" open={false}>
+            <FigureSettings />
+          </Section>
+          <Section title="Constants" id="section-constants" open={false}>
+            <ConstantsPanel />
+          </Section>
+        </aside>
+        <main className="main">
+          <FigureView />
+          <HoverReadout />
+          <p className="caution" role="note">
+            Predictions depend on the model assumptions (field content, charges, the constants chosen under
+            Constants) and on the curves you import. Take experimental curves from their original publications
+            and credit those publications when you show a figure.
+          </p>
+          <OverlapPanel />
+          <SourcesPanel />
+        </main>
+      </div>
+      <ImportDialog />
+    </div>
   );
 }

@@ -1,10 +1,20 @@
-// Browser entry point: mounts the axband app.
+// Browser entry point: restores the project (link, autosave or demo), starts autosave, mounts the app.
 import { StrictMode } from "react";
 import { createRoot } from "react-dom/client";
 import { App } from "./App";
+import { useAxband } from "./store";
+import { initProject, startAutosave } from "./store/autosave";
+import "./styles.css";
 
-createRoot(document.getElementById("root")!).render(
-  <StrictMode>
-    <App />
-  </StrictMode>,
-);
+async function start() {
+  // Restore before saving starts, so the demo project never overwrites a saved one.
+  await initProject(useAxband);
+  startAutosave(useAxband);
+  createRoot(document.getElementById("root")!).render(
+    <StrictMode>
+      <App />
+    </StrictMode>,
+  );
+}
+
+void start();

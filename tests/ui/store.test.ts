@@ -219,8 +219,8 @@ describe("actions", () => {
     expect(store.getState().canUndo()).toBe(false);
     store.getState().dismissMessage(id);
     expect(store.getState().ui.messages.map((m) => m.text)).toEqual(["Saved"]);
-    store.getState().setHighlight({ massRangeEv: [1e-6, 1e-5] });
-    expect(store.getState().ui.highlight).toEqual({ massRangeEv: [1e-6, 1e-5] });
+    store.getState().setHighlight({ massMinEv: 1e-6, massMaxEv: 1e-5, modelId: "m1" });
+    expect(store.getState().ui.highlight).toEqual({ massMinEv: 1e-6, massMaxEv: 1e-5, modelId: "m1" });
     expect(store.getState().canUndo()).toBe(false);
   });
 });

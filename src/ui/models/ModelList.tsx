@@ -4,7 +4,7 @@ import { useCallback, useId, useState } from "react";
 import { useShallow } from "zustand/react/shallow";
 import { bandCancels } from "../../physics/coupling";
 import { parseEOverN } from "../../physics/eovern-parse";
-import { eOverNValue, physicsOptsOf } from "../adapters/plot-settings";
+import { eOverNValue, physicsOptsOf } from "../../plot/physics-settings";
 import type { LineStyle, Model } from "../../data/types";
 import { selectModelIds, selectPhysics, useAxband, type AxbandState } from "../store";
 import { minus } from "../format";

@@ -2,7 +2,8 @@
 // bad entry), y view, top axis, grid, legend place, font size and title.
 import { useId, useState } from "react";
 import type { Figure, LegendPlace, SizePreset, TopAxis, YView } from "../../data/types";
-import { selectFigure, useAxband } from "../store";
+import { useShallow } from "zustand/react/shallow";
+import { useAxband, type AxbandState } from "../store";
 
 const PRESETS: { value: SizePreset; label: string }[] = [
   { value: "slide", label: "Slide 16:9" },
@@ -148,13 +149,37 @@ function NumberSetting({ label, value, min, max, step, onChange }: { label: stri
   );
 }
 
-export function FigureSettings() {
-  const figure = useAxband(selectFigure);
-  const setFigure = useAxband((s) => s.setFigure);
+/** The typed axis ranges: the only part of the settings that follows zoom and pan. */
+function ViewRanges() {
+  const { massRangeEv, yRange, yView } = useAxband(
+    useShallow((s: AxbandState) => ({ massRangeEv: s.project.figure.massRangeEv, yRange: s.project.figure.yRange, yView: s.project.figure.yView })),
+  );
   const setView = useAxband((s) => s.setView);
   const resetView = useAxband((s) => s.resetView);
+  const yLabel = yView === "coupling" ? "g_aγγ" : yView === "normalized" ? "|E/N − c_γ|" : "|g_γ|";
+  return (
+    <>
+      <RangeFields label="m_a" unit="eV" testid="range-mass" range={massRangeEv} onApply={(r) => setView(r, useAxband.getState().project.figure.yRange)} />
+      <RangeFields label={yLabel} unit={yView === "coupling" ? "GeV⁻¹" : ""} testid="range-y" range={yRange} onApply={(r) => setView(useAxband.getState().project.figure.massRangeEv, r)} />
+      <button type="button" onClick={resetView}>
+        Reset view
+      </button>
+    </>
+  );
+}
+
+type FigureSansView = Omit<Figure, "massRangeEv" | "yRange">;
+
+export function FigureSettings() {
+  // Every figure field except the ranges, so zoom and pan do not re-render this panel.
+  const figure: FigureSansView = useAxband(
+    useShallow((s: AxbandState) => {
+      const { massRangeEv: _m, yRange: _y, ...rest } = s.project.figure;
+      return rest;
+    }),
+  );
+  const setFigure = useAxband((s) => s.setFigure);
   const set = (patch: Partial<Figure>, key?: string) => setFigure(patch, key ? { coalesceKey: key } : undefined);
-  const yLabel = figure.yView === "coupling" ? "g_aγγ" : figure.yView === "normalized" ? "|E/N − c_γ|" : "|g_γ|";
   return (
     <div className="figure-settings">
       <Select label="Size" value={figure.preset} options={PRESETS} onChange={(v) => set({ preset: v })} />
@@ -164,11 +189,7 @@ export function FigureSettings() {
           <NumberSetting label="Height (mm)" value={figure.customHeightMm} min={20} max={1000} step={1} onChange={(v) => set({ customHeightMm: v }, "figure:height")} />
         </div>
       ) : null}
-      <RangeFields label="m_a" unit="eV" testid="range-mass" range={figure.massRangeEv} onApply={(r) => setView(r, figure.yRange)} />
-      <RangeFields label={yLabel} unit={figure.yView === "coupling" ? "GeV⁻¹" : ""} testid="range-y" range={figure.yRange} onApply={(r) => setView(figure.massRangeEv, r)} />
-      <button type="button" onClick={resetView}>
-        Reset view
-      </button>
+      <ViewRanges />
       <Select label="y axis" value={figure.yView} options={Y_VIEWS} onChange={(v) => set({ yView: v })} />
       <Select label="Top axis" value={figure.topAxis} options={TOP_AXES} onChange={(v) => set({ topAxis: v })} />
       <Select label="Legend" value={figure.legend} options={LEGEND} onChange={(v) => set({ legend: v })} />

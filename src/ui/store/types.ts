@@ -24,9 +24,10 @@ export interface Message {
   text: string;
 }
 
-/** A mass interval to emphasise on the plot (e.g. a clicked overlap-table row). */
+/** A mass interval (eV) to emphasise on the plot (e.g. a clicked overlap-table row); the shape buildScene takes. */
 export interface Highlight {
-  massRangeEv: [number, number];
+  massMinEv: number;
+  massMaxEv: number;
   modelId?: string;
   curveId?: string;
 }

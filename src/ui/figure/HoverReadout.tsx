@@ -1,0 +1,51 @@
+// The hover readout under the figure: m_a, the y-view value and g_aγγ, f_a, frequency, the two E/N values
+// whose model lines pass through the point, and the visible curves that exclude, reach or contain it.
+import { useMemo } from "react";
+import { eOverNAt, faFromMass, frequencyFromMass } from "../../physics/coupling";
+import { constantsOf } from "../../plot/physics-settings";
+import { viewToG } from "../../plot/scales";
+import { selectCurves, selectHover, selectPhysics, selectYView, useAxband } from "../store";
+import { minus, sciFormat, siFormat } from "../format";
+import { curvesAtPoint } from "./hit";
+
+const ROLE_WORD = { exclusion: "excluded by", projection: "within reach of", region: "inside" } as const;
+
+export function HoverReadout() {
+  const hover = useAxband(selectHover);
+  const physics = useAxband(selectPhysics);
+  const yView = useAxband(selectYView);
+  const curves = useAxband(selectCurves);
+  const constants = useMemo(() => constantsOf(physics), [physics]);
+
+  if (!hover) {
+    return (
+      <div className="readout" data-testid="hover-readout" aria-live="off">
+        <span className="readout-empty">Point at the figure to read off m_a, g_aγγ, f_a, the frequency and the E/N values there.</span>
+      </div>
+    );
+  }
+  const g = viewToG(yView, hover.massEv, hover.y, constants);
+  const [enLo, enHi] = eOverNAt(hover.massEv, g, { constants });
+  const hits = curvesAtPoint(curves, hover.massEv, g);
+  const yName = yView === "normalized" ? "|E/N − c_γ|" : yView === "g-gamma" ? "|g_γ|" : null;
+  const item = (label: string, value: string, testid?: string) => (
+    <div className="readout-item" data-testid={testid}>
+      <span>{label}</span>
+      <span>{value}</span>
+    </div>
+  );
+  return (
+    <div className="readout" data-testid="hover-readout" aria-live="off">
+      {item("m_a", siFormat(hover.massEv, "eV"), "hover-mass")}
+      {yName ? item(yName, sciFormat(hover.y)) : null}
+      {item("g_aγγ", `${sciFormat(g)} GeV⁻¹`, "hover-g")}
+      {item("f_a", `${sciFormat(faFromMass(hover.massEv, { constants }))} GeV`, "hover-fa")}
+      {item("frequency", siFormat(frequencyFromMass(hover.massEv), "Hz"), "hover-freq")}
+      {item("E/N of lines through it", `${minus(enLo.toPrecision(3))} or ${minus(enHi.toPrecision(3))}`, "hover-eovern")}
+      <div className="readout-item readout-wide" data-testid="hover-curves">
+        <span>curves</span>
+        <span>{hits.length === 0 ? "not excluded, reached or contained by any visible curve" : hits.map((h) => `${ROLE_WORD[h.role]} ${h.label}`).join("; ")}</span>
+      </div>
+    </div>
+  );
+}
