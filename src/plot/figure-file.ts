@@ -3,6 +3,8 @@
 import type { Project, SizePreset } from "../data/types";
 import type { Scene } from "./scene-types";
 import { PX_PER_IN, presetOf } from "./layout";
+import { buildScene } from "./scene";
+import { writeSvg } from "./svg";
 import { decodeLink, encodeLink } from "../data/link";
 
 /** Namespace URI of our <metadata> element (a URN of our own: nothing is fetched from it). */
@@ -58,9 +60,14 @@ export function projectMetadataXml(project: Project): string {
  * Deterministic: the same project gives the same bytes (the CLI and the app's export button rely on it).
  */
 export function exportFigureSvg(project: Project, opts: ExportSvgOpts = {}): string {
-  const scene = exportScene(project, opts);
-  const embedded = opts.embedProject ?? true;
-  return writeSvg(scene, embedded ? { metadata: projectMetadataXml(withPreset(project, opts.preset)) } : {});
+  const svg = writeSvg(exportScene(project, opts));
+  if (!(opts.embedProject ?? true)) return svg;
+  // writeSvg escapes its metadata option as text; our element goes in as markup, right after the root tag
+  // (its content is base64url and fixed attribute values, so it needs no escaping).
+  const rootEnd = svg.indexOf(">", svg.indexOf("<svg")) + 1;
+  const nl = svg[rootEnd] === "\n" ? 1 : 0;
+  const meta = `<metadata>${projectMetadataXml(withPreset(project, opts.preset))}</metadata>\n`;
+  return svg.slice(0, rootEnd + nl) + meta + svg.slice(rootEnd + nl);
 }
 
 export type ExtractResult = { ok: true; project: Project } | { ok: false; error: string };
@@ -93,55 +100,3 @@ export function extractProjectFromSvg(svgText: string): ExtractResult {
 
 /** CSS px per inch of the scene coordinates (re-exported for PNG sizing). */
 export { PX_PER_IN };
-
-// ---------------------------------------------------------------------------------------------------------
-// TEMPORARY adapters until src/plot (buildScene, writeSvg) lands; each is
-// replaced by the real import and removed. Not a finished implementation.
-function esc(s: string): string {
-  return s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;");
-}
-function buildScene(project: Project, o: { widthPx: number; heightPx: number; resolution?: number }): Scene {
-  const size = presetOf(project.figure);
-  const plot = { x: 60, y: 20, w: o.widthPx - 80, h: o.heightPx - 70 };
-  const [m0, m1] = project.figure.massRangeEv;
-  const [g0, g1] = project.figure.yRange;
-  const X = (m: number) => plot.x + ((Math.log10(m) - Math.log10(m0)) / (Math.log10(m1) - Math.log10(m0))) * plot.w;
-  const Y = (g: number) => plot.y + plot.h - ((Math.log10(g) - Math.log10(g0)) / (Math.log10(g1) - Math.log10(g0))) * plot.h;
-  const curves = project.curves.map((c, i) => {
-    let d = "";
-    for (let k = 0; k < c.massEv.length; k++) d += `${k ? "L" : "M"}${X(c.massEv[k]).toFixed(2)} ${Y(c.gInvGeV[k]).toFixed(2)}`;
-    return { kind: "path" as const, d, stroke: c.colour, id: `curve-${i + 1}` };
-  });
-  const legend = [...project.models, ...project.curves].map((e, i) => ({
-    kind: "text" as const, x: plot.x + 10, y: plot.y + 14 * (i + 1), runs: [{ text: e.label }], sizePx: 10, anchor: "start" as const, baseline: "alphabetic" as const,
-  }));
-  return {
-    widthPx: o.widthPx, heightPx: o.heightPx, widthPhysical: size.widthPhysical, heightPhysical: size.heightPhysical, plot,
-    scales: { massDomainEv: [m0, m1], yDomain: [g0, g1] }, fontFamily: "sans-serif",
-    layers: [
-      { id: "curves", clip: true, nodes: curves },
-      { id: "axes", clip: false, nodes: [
-        { kind: "text", x: plot.x + plot.w / 2, y: o.heightPx - 10, runs: [{ text: "m", italic: true }, { text: "a", shift: "sub" }, { text: " [eV]" }], sizePx: 11, anchor: "middle", baseline: "alphabetic" },
-        { kind: "text", x: 15, y: plot.y + plot.h / 2, runs: [{ text: "g", italic: true }, { text: "aγγ", shift: "sub" }, { text: " [GeV" }, { text: "−1", shift: "sup" }, { text: "]" }], sizePx: 11, anchor: "middle", baseline: "alphabetic", rotate: -90 },
-      ] },
-      { id: "legend", clip: false, nodes: legend, data: { testid: "legend" } },
-    ],
-  };
-}
-function writeSvg(scene: Scene, o: { metadata?: string; idPrefix?: string } = {}): string {
-  const out: string[] = [
-    `<svg xmlns="http://www.w3.org/2000/svg" width="${scene.widthPhysical}" height="${scene.heightPhysical}" viewBox="0 0 ${scene.widthPx} ${scene.heightPx}" font-family="${esc(scene.fontFamily)}">`,
-  ];
-  if (o.metadata) out.push(`<metadata>${o.metadata}</metadata>`);
-  out.push(`<defs><clipPath id="plot-clip"><rect x="${scene.plot.x}" y="${scene.plot.y}" width="${scene.plot.w}" height="${scene.plot.h}"/></clipPath></defs>`);
-  for (const l of scene.layers) {
-    out.push(`<g id="${l.id}"${l.clip ? ' clip-path="url(#plot-clip)"' : ""}>`);
-    for (const n of l.nodes) {
-      if (n.kind === "path") out.push(`<path d="${n.d}" fill="none" stroke="${esc(n.stroke ?? "#000")}"/>`);
-      else if (n.kind === "text") out.push(`<text x="${n.x}" y="${n.y}" font-size="${n.sizePx}"${n.rotate ? ` transform="rotate(${n.rotate} ${n.x} ${n.y})"` : ""} text-anchor="${n.anchor}">${n.runs.map((r) => `<tspan${r.shift ? ` baseline-shift="${r.shift === "sub" ? "sub" : "super"}"` : ""}>${esc(r.text)}</tspan>`).join("")}</text>`);
-    }
-    out.push("</g>");
-  }
-  out.push("</svg>");
-  return out.join("\n") + "\n";
-}

@@ -8,7 +8,7 @@ import { exportFigureSvg, extractProjectFromSvg } from "../../src/plot/figure-fi
 import { readPngDpi, readPngSize, pngChunksValid } from "../../src/plot/png-meta";
 import { projectsEqual } from "../../src/data/schema";
 import { projectFromFile } from "../../src/data/project-file";
-import { INJECTION_CORPUS, SVG_NS, elementNames, parseXml, texts, unsafeParts } from "./svg-checks";
+import { INJECTION_CORPUS, SVG_NS, elementNames, parseXml, shownLabels, texts, unsafeParts, withCorpusLabels } from "./svg-checks";
 import { projectFileText, runCli, smallProject, tempDir } from "./fixtures";
 
 /** Length in cm of an SVG length attribute such as "8.6cm" or "86mm". */
@@ -54,7 +54,7 @@ describe("render a project file", () => {
   });
 
   it("keeps axis titles and legend labels as text", () => {
-    const all = texts(parseXml(readFileSync(svgPath, "utf8"))).join("\n");
+    const all = shownLabels(parseXml(readFileSync(svgPath, "utf8"))).join("\n");
     for (const label of ["DFSZ-type line", "Preferred window", "Demo scan (invented)", "Demo reach (invented)"]) expect(all).toContain(label);
     expect(all).toMatch(/eV/); // mass axis title unit
     expect(all).toMatch(/GeV/); // coupling axis title unit
@@ -192,7 +192,8 @@ describe("injection corpus", () => {
   it("keeps hostile model, curve and project labels, CSV headers and file names as literal text", () => {
     const dir = tempDir();
     const projectPath = join(dir, "evil.axband.json");
-    const p = smallProject({ model: INJECTION_CORPUS.join(" | "), curve: INJECTION_CORPUS[1], name: INJECTION_CORPUS[0], title: INJECTION_CORPUS[2] + INJECTION_CORPUS[3] });
+    const p = withCorpusLabels(smallProject());
+    const c = INJECTION_CORPUS;
     writeFileSync(projectPath, projectFileText(p));
     const svgPath = join(dir, "evil.svg");
     const r = runCli([projectPath, "-o", svgPath]);
@@ -201,9 +202,9 @@ describe("injection corpus", () => {
     expect(unsafeParts(doc)).toEqual([]);
     const names = elementNames(doc);
     for (const n of ["script", "img", "iframe", "foreignObject"]) expect(names.has(n)).toBe(false);
-    const all = texts(doc).join("\n");
-    expect(all).toContain(INJECTION_CORPUS.join(" | "));
-    expect(all).toContain(INJECTION_CORPUS[1]);
+    const shown = shownLabels(doc);
+    for (const label of [c[0], c[5], c[1], `${c[3]} ${c[4]}`]) expect(shown.some((s) => s.includes(label)), label).toBe(true);
+    expect(texts(doc).join("\n")).toContain(`${c[2]} ${c[6]}`);
 
     // A CSV whose header and file name carry the corpus (file names cannot hold "/", so that one is left out).
     const csv = join(dir, `${INJECTION_CORPUS[1]}${INJECTION_CORPUS[2]}&amp;.csv`);
@@ -214,6 +215,6 @@ describe("injection corpus", () => {
     const doc2 = parseXml(readFileSync(out2, "utf8"));
     expect(unsafeParts(doc2)).toEqual([]);
     expect(elementNames(doc2).has("img")).toBe(false);
-    expect(texts(doc2).join("\n")).toContain(`${INJECTION_CORPUS[1]}${INJECTION_CORPUS[2]}&amp;`);
+    expect(shownLabels(doc2)).toContain(`${INJECTION_CORPUS[1]}${INJECTION_CORPUS[2]}&amp;`);
   });
 });

@@ -49,9 +49,32 @@ export function unsafeParts(doc: Document): string[] {
   return out;
 }
 
+/**
+ * Every label the figure shows: text contents plus the full legend labels the writer keeps in
+ * data-legend-entry (the visible legend text may be shortened with "…").
+ */
+export function shownLabels(doc: Document): string[] {
+  const legend = allElements(doc)
+    .map((e) => e.getAttribute("data-legend-entry"))
+    .filter((v): v is string => v !== null);
+  return [...texts(doc), ...legend];
+}
+
 /** Element names (with prefix) that occur in the document, for "no new elements" checks. */
 export function elementNames(doc: Document): Set<string> {
   return new Set(allElements(doc).map((e) => e.nodeName));
+}
+
+/** Sets hostile labels on every labelled thing of a project (two models, two curves, name, title). */
+export function withCorpusLabels<P extends { name: string; models: { label: string }[]; curves: { label: string }[]; figure: { title: string } }>(p: P): P {
+  const c = INJECTION_CORPUS;
+  return {
+    ...p,
+    name: c[0],
+    models: p.models.map((m, i) => ({ ...m, label: i === 0 ? c[0] : c[5] })),
+    curves: p.curves.map((k, i) => ({ ...k, label: i === 0 ? c[1] : `${c[3]} ${c[4]}` })),
+    figure: { ...p.figure, title: `${c[2]} ${c[6]}` },
+  };
 }
 
 /** Hostile label corpus (OWASP XSS Filter Evasion Cheat Sheet patterns, common practice) plus XML edge cases. */

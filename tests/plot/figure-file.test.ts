@@ -4,7 +4,7 @@ import { describe, expect, it } from "vitest";
 import { AXBAND_PROJECT_NS, EMBED_ENCODING, exportFigureSvg, exportSizeInches, extractProjectFromSvg } from "../../src/plot/figure-file";
 import { projectsEqual, restoreProject } from "../../src/data/schema";
 import type { SizePreset } from "../../src/data/types";
-import { INJECTION_CORPUS, SVG_NS, elementNames, parseXml, texts, unsafeParts } from "../cli/svg-checks";
+import { INJECTION_CORPUS, SVG_NS, elementNames, parseXml, shownLabels, texts, unsafeParts, withCorpusLabels } from "../cli/svg-checks";
 import { smallProject } from "../cli/fixtures";
 
 /** The project as a reader gets it back (through the shared restore step), for equality checks. */
@@ -109,16 +109,18 @@ describe("extractProjectFromSvg", () => {
 
 describe("hostile labels", () => {
   it("stay literal text in the SVG and in the embedded project", () => {
-    const p = canonical(smallProject({ model: INJECTION_CORPUS.join(" "), curve: INJECTION_CORPUS[1], name: INJECTION_CORPUS[0], title: INJECTION_CORPUS[2] }));
+    const p = canonical(withCorpusLabels(smallProject()));
     const svg = exportFigureSvg(p);
     const doc = parseXml(svg);
     expect(unsafeParts(doc)).toEqual([]);
     const names = elementNames(doc);
     for (const n of ["script", "img", "iframe"]) expect(names.has(n)).toBe(false);
-    const all = texts(doc).join("\n");
-    expect(all).toContain(INJECTION_CORPUS.join(" "));
-    expect(all).toContain(INJECTION_CORPUS[1]);
+    const shown = shownLabels(doc);
+    const c = INJECTION_CORPUS;
+    for (const label of [c[0], c[5], c[1], `${c[3]} ${c[4]}`]) expect(shown.some((s) => s.includes(label)), label).toBe(true);
+    expect(texts(doc).join("\n")).toContain(`${c[2]} ${c[6]}`);
     const back = extractProjectFromSvg(svg);
-    expect(back.ok && back.project.models[0].label).toBe(INJECTION_CORPUS.join(" "));
+    expect(back.ok && back.project.models[0].label).toBe(c[0]);
+    expect(back.ok && back.project.name).toBe(c[0]);
   });
 });
