@@ -4,23 +4,28 @@ import { existsSync } from "node:fs";
 import { Resvg } from "@resvg/resvg-js";
 import { setPngDpi } from "../plot/png-meta";
 
-/** Sans-serif faces looked for, in order, with the files that show they are installed (Debian, Fedora, Arch, macOS). */
+/**
+ * Sans-serif faces looked for, in order, with the files that show they are installed (Debian, Fedora, Arch,
+ * macOS, Windows). Arial-metric faces first: the plot core lays text out with Helvetica/Arial widths, and
+ * Liberation Sans shares them; DejaVu Sans is ~8 % wider. resvg uses the default family also for a
+ * font-family list whose first entry is missing, so the default must be the face we want, not just any.
+ */
 const FONT_CANDIDATES: { family: string; files: string[] }[] = [
-  {
-    family: "DejaVu Sans",
-    files: ["/usr/share/fonts/truetype/dejavu/DejaVuSans.ttf", "/usr/share/fonts/dejavu/DejaVuSans.ttf", "/usr/share/fonts/TTF/DejaVuSans.ttf"],
-  },
+  { family: "Arial", files: ["/Library/Fonts/Arial.ttf", "/System/Library/Fonts/Supplemental/Arial.ttf", "C:\\Windows\\Fonts\\arial.ttf"] },
   {
     family: "Liberation Sans",
     files: ["/usr/share/fonts/truetype/liberation/LiberationSans-Regular.ttf", "/usr/share/fonts/liberation-sans/LiberationSans-Regular.ttf", "/usr/share/fonts/TTF/LiberationSans-Regular.ttf"],
   },
-  { family: "Arial", files: ["/Library/Fonts/Arial.ttf", "/System/Library/Fonts/Supplemental/Arial.ttf", "C:\\Windows\\Fonts\\arial.ttf"] },
+  {
+    family: "DejaVu Sans",
+    files: ["/usr/share/fonts/truetype/dejavu/DejaVuSans.ttf", "/usr/share/fonts/dejavu/DejaVuSans.ttf", "/usr/share/fonts/TTF/DejaVuSans.ttf"],
+  },
 ];
 
 /** The sans-serif family the PNG's text falls back to, or undefined (with a note) when none of ours is installed. */
 export function pickFallbackFont(exists: (p: string) => boolean = existsSync): { family?: string; note?: string } {
   for (const c of FONT_CANDIDATES) if (c.files.some(exists)) return { family: c.family };
-  return { note: "no DejaVu Sans, Liberation Sans or Arial found; PNG text uses the first system font resvg finds (install fonts-dejavu-core for the intended look)" };
+  return { note: "no Arial, Liberation Sans or DejaVu Sans found; PNG text uses the first system font resvg finds (install fonts-liberation or fonts-dejavu-core)" };
 }
 
 /** Pixel size of a PNG of a figure `widthIn` × `heightIn` inches at `dpi` (8.6 cm at 300 dpi → 1016 px). */

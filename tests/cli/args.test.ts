@@ -113,12 +113,12 @@ describe("PNG sizing and fonts", () => {
     expect(pngPixelSize(17.8 / 2.54, 10.68 / 2.54, 300).widthPx).toBe(2102);
   });
 
-  it("falls back from DejaVu Sans to Liberation Sans to a note", () => {
+  it("prefers an Arial-metric face, then DejaVu Sans, then says none was found", () => {
     expect(pickFallbackFont((p) => p.includes("DejaVuSans.ttf")).family).toBe("DejaVu Sans");
-    expect(pickFallbackFont((p) => p.includes("LiberationSans-Regular")).family).toBe("Liberation Sans");
+    expect(pickFallbackFont((p) => p.includes("LiberationSans-Regular") || p.includes("DejaVuSans.ttf")).family).toBe("Liberation Sans");
     const none = pickFallbackFont(() => false);
     expect(none.family).toBeUndefined();
-    expect(none.note).toMatch(/fonts-dejavu-core/);
+    expect(none.note).toMatch(/fonts-liberation/);
   });
 });
 
