@@ -11,6 +11,7 @@ import { useAxband } from "../store";
 import { downloadBlob, downloadText, safeFileName } from "./download";
 import { pngTarget, rasteriseSvg, svgSize, type PngScale } from "./png";
 import { NumberField } from "../curves/NumberField";
+import { Popover } from "./Popover";
 import "../curves/curves.css";
 import "./export.css";
 
@@ -39,6 +40,7 @@ export function ExportMenu() {
   const pushMessage = useAxband((s) => s.pushMessage);
   const [pngScale, setPngScale] = useState<PngScale>("2x");
   const [busy, setBusy] = useState(false);
+  const [open, setOpen] = useState(false);
   const size = presetOf(figure);
   const mmRule = (n: number) => (n >= CUSTOM_MM_LIMITS[0] && n <= CUSTOM_MM_LIMITS[1] ? null : `${CUSTOM_MM_LIMITS[0]}–${CUSTOM_MM_LIMITS[1]} mm`);
 
@@ -90,49 +92,57 @@ export function ExportMenu() {
   };
 
   return (
-    <section className="ax-panel ax-export" aria-labelledby="ax-export-title">
-      <h2 id="ax-export-title">Export</h2>
-      <div className="ax-export-row">
-        <label className="ax-field">
-          <span>Size</span>
-          <select aria-label="Figure size preset" value={figure.preset} onChange={(e) => setFigure({ preset: e.target.value as SizePreset })}>
-            {PRESET_OPTIONS.map((p) => (
-              <option key={p.value} value={p.value}>
-                {p.label}
-              </option>
-            ))}
-          </select>
-        </label>
-        {figure.preset === "custom" ? (
-          <>
-            <NumberField label="width" unit="mm" value={figure.customWidthMm} validate={mmRule} onCommit={(n) => setFigure({ customWidthMm: n }, { coalesceKey: "figure:customWidthMm" })} />
-            <NumberField label="height" unit="mm" value={figure.customHeightMm} validate={mmRule} onCommit={(n) => setFigure({ customHeightMm: n }, { coalesceKey: "figure:customHeightMm" })} />
-          </>
-        ) : null}
-        <span className="ax-hint">
-          {(size.widthMm / 10).toFixed(1)} × {(size.heightMm / 10).toFixed(1)} cm
-        </span>
-      </div>
-      <div className="ax-export-row">
-        <button type="button" className="ax-primary" data-testid="export-svg" onClick={saveSvg}>
-          SVG
-        </button>
-        <span className="ax-export-group">
-          <button type="button" data-testid="export-png" disabled={busy} onClick={() => void savePng()}>
-            {busy ? "PNG…" : "PNG"}
-          </button>
-          <select aria-label="PNG resolution" value={pngScale} onChange={(e) => setPngScale(e.target.value as PngScale)}>
-            {PNG_SCALES.map((s) => (
-              <option key={s.value} value={s.value}>
-                {s.label}
-              </option>
-            ))}
-          </select>
-        </span>
-        <button type="button" data-testid="export-model-csv" onClick={saveModelCsv}>
-          Model lines (CSV)
-        </button>
-      </div>
-    </section>
+    <span className="ax-header-group ax-panel ax-export">
+      <button type="button" className="primary" data-testid="export-svg" title={`Download the figure as SVG (${size.label})`} onClick={saveSvg}>
+        Export SVG
+      </button>
+      <Popover label="▾" ariaLabel="More export options" open={open} onOpenChange={setOpen} testId="export-menu">
+        <section>
+          <h3>Figure size</h3>
+          <div className="ax-export-row">
+            <select aria-label="Figure size preset" value={figure.preset} onChange={(e) => setFigure({ preset: e.target.value as SizePreset })}>
+              {PRESET_OPTIONS.map((p) => (
+                <option key={p.value} value={p.value}>
+                  {p.label}
+                </option>
+              ))}
+            </select>
+            <span className="ax-hint">
+              {(size.widthMm / 10).toFixed(1)} × {(size.heightMm / 10).toFixed(1)} cm
+            </span>
+          </div>
+          {figure.preset === "custom" ? (
+            <div className="ax-export-row">
+              <NumberField label="width" unit="mm" value={figure.customWidthMm} validate={mmRule} onCommit={(n) => setFigure({ customWidthMm: n }, { coalesceKey: "figure:customWidthMm" })} />
+              <NumberField label="height" unit="mm" value={figure.customHeightMm} validate={mmRule} onCommit={(n) => setFigure({ customHeightMm: n }, { coalesceKey: "figure:customHeightMm" })} />
+            </div>
+          ) : null}
+        </section>
+        <section>
+          <h3>Image</h3>
+          <div className="ax-export-row">
+            <select aria-label="PNG resolution" value={pngScale} onChange={(e) => setPngScale(e.target.value as PngScale)}>
+              {PNG_SCALES.map((s) => (
+                <option key={s.value} value={s.value}>
+                  {s.label}
+                </option>
+              ))}
+            </select>
+            <button type="button" data-testid="export-png" disabled={busy} onClick={() => void savePng()}>
+              {busy ? "Drawing…" : "Download PNG"}
+            </button>
+          </div>
+        </section>
+        <section>
+          <h3>Data</h3>
+          <div className="ax-export-row">
+            <button type="button" data-testid="export-model-csv" onClick={saveModelCsv}>
+              Model lines and bands (CSV)
+            </button>
+          </div>
+          <p className="ax-hint">m_a, f_a, g_low, g_high over the figure&apos;s mass range, one block per model.</p>
+        </section>
+      </Popover>
+    </span>
   );
 }
