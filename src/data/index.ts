@@ -13,3 +13,5 @@ export * from "./units";
 export * from "./csv";
 export * from "./rescale";
 export * from "./curve-export";
+export * from "./sources";
+export * from "./bibtex";
