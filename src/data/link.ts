@@ -17,7 +17,7 @@
 //   to read back to the same double before the form is used.
 //   Without curves ("c" absent), a link carries name, constants, figure and models only; "o" says how many
 //   curves the sender had.
-import { Inflate, deflateSync } from "fflate";
+import { Inflate, deflateSync, inflateSync } from "fflate";
 import { parseJsonSafely, projectsEqual, restoreProject } from "./schema";
 import { CURVE_STATE, FIGURE_STATE, MODEL_STATE, PHYSICS_STATE, PROJECT_STATE, goesTo, type Persistence, type PersistTarget } from "./state-table";
 import type { Project } from "./types";
@@ -411,22 +411,44 @@ export type DecodeLinkResult =
 
 class TooBig extends Error {}
 
-/** Inflate raw DEFLATE in small input steps, stopping as soon as the output passes `cap` bytes. */
-function inflateCapped(data: Uint8Array, cap: number): Uint8Array | "too-big" | "damaged" {
-  if (data.length === 0) return "damaged";
+const SCRATCH_BYTES = 256 * 1024;
+let scratch: Uint8Array | undefined;
+
+/** Outcome of {@link inflateWithCap}: the bytes, or why not (with how many bytes were unpacked before stopping). */
+export type InflateResult = { ok: true; bytes: Uint8Array } | { ok: false; reason: "too-big" | "damaged"; inflatedBytes: number };
+
+/**
+ * Inflate raw DEFLATE, stopping as soon as the output passes `capBytes`: the input is fed in 1 KiB steps, and
+ * DEFLATE expands at most ~1032× per input byte, so at most ~1 MiB is unpacked past the cap.
+ * @param capBytes most output bytes accepted. @default LINK_MAX_DECODED_BYTES
+ */
+export function inflateWithCap(data: Uint8Array, capBytes: number = LINK_MAX_DECODED_BYTES): InflateResult {
+  if (data.length === 0) return { ok: false, reason: "damaged", inflatedBytes: 0 };
+  // Most links unpack to a few kB: inflate into a reused buffer, which spares fflate's per-call growth buffers
+  // (≥ 128 kB each). fflate stops writing at the end of a given buffer, so a result that fills it completely
+  // may be cut off: then inflate again with the streaming path below, which has no such limit but the cap.
+  if (data.length < SCRATCH_BYTES / 2 && SCRATCH_BYTES <= capBytes) {
+    scratch ??= new Uint8Array(SCRATCH_BYTES);
+    let out: Uint8Array;
+    try {
+      out = inflateSync(data, { out: scratch });
+    } catch {
+      return { ok: false, reason: "damaged", inflatedBytes: 0 };
+    }
+    if (out.length < SCRATCH_BYTES) return { ok: true, bytes: out === scratch ? out.slice() : out };
+  }
   const chunks: Uint8Array[] = [];
   let total = 0;
   const inflater = new Inflate((chunk) => {
     total += chunk.length;
-    if (total > cap) throw new TooBig();
+    if (total > capBytes) throw new TooBig();
     chunks.push(chunk);
   });
-  // DEFLATE expands at most ~1032× per input byte, so 1 KiB steps bound the overshoot past the cap to ~1 MiB.
   const STEP = 1024;
   try {
     for (let i = 0; i < data.length; i += STEP) inflater.push(data.subarray(i, i + STEP), i + STEP >= data.length);
   } catch (e) {
-    return e instanceof TooBig ? "too-big" : "damaged";
+    return { ok: false, reason: e instanceof TooBig ? "too-big" : "damaged", inflatedBytes: total };
   }
   const out = new Uint8Array(total);
   let o = 0;
@@ -434,7 +456,7 @@ function inflateCapped(data: Uint8Array, cap: number): Uint8Array | "too-big" | 
     out.set(c, o);
     o += c.length;
   }
-  return out;
+  return { ok: true, bytes: out };
 }
 
 const damaged = (why: string) => ({ ok: false as const, error: `This link is damaged (${why}). Check that it was copied completely.` });
@@ -468,14 +490,14 @@ export function decodeLink(fragment: string): DecodeLinkResult {
     }
     const bytes = base64UrlDecode(m[2]);
     if (!bytes) return damaged(/[^A-Za-z0-9\-_+/=]/.test(m[2]) ? "it contains characters that do not belong in an axband link" : "it looks cut off");
-    const raw = inflateCapped(bytes, LINK_MAX_DECODED_BYTES);
-    if (raw === "too-big") {
+    const inflated = inflateWithCap(bytes, LINK_MAX_DECODED_BYTES);
+    if (!inflated.ok && inflated.reason === "too-big") {
       return { ok: false, error: `This link is too large: it would unpack to more than ${LINK_MAX_DECODED_BYTES / 1048576} MB, so it was not opened.` };
     }
-    if (raw === "damaged") return damaged("its compressed data is cut off or altered");
+    if (!inflated.ok) return damaged("its compressed data is cut off or altered");
     let json: string;
     try {
-      json = new TextDecoder("utf-8", { fatal: true }).decode(raw);
+      json = new TextDecoder("utf-8", { fatal: true }).decode(inflated.bytes);
     } catch {
       return damaged("its content is not text");
     }

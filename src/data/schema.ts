@@ -332,6 +332,10 @@ const lenientCurve = z.object({
   fileName: text(PROJECT_LIMITS.fileName, "file name"),
 });
 
+const physicsOrDefault = lenient(lenientPhysics, "constants");
+const figureOrDefault = lenient(lenientFigure, "figure");
+const projectName = text(PROJECT_LIMITS.label, "project name");
+
 function firstIssue(error: z.ZodError): string {
   const issue = error.issues[0];
   const path = issue.path.map((p) => (typeof p === "number" ? `[${p}]` : `.${String(p)}`)).join("").replace(/^\./, "");
@@ -433,7 +437,7 @@ function restoreCurves(raw: unknown[], repairs: string[]): Curve[] {
 function restorePhysics(raw: unknown): PhysicsSettings {
   repairWhere = "constants, ";
   const d = defaultPhysics();
-  const r = lenient(lenientPhysics, "constants").parse(raw);
+  const r = physicsOrDefault.parse(raw);
   const c = r?.custom;
   return {
     ref: r?.ref ?? d.ref,
@@ -450,7 +454,7 @@ function restorePhysics(raw: unknown): PhysicsSettings {
 function restoreFigure(raw: unknown): Figure {
   repairWhere = "figure, ";
   const d = defaultFigure();
-  const f = lenient(lenientFigure, "figure").parse(raw);
+  const f = figureOrDefault.parse(raw);
   const view = f?.yView ?? d.yView;
   return {
     preset: f?.preset ?? d.preset,
@@ -490,7 +494,7 @@ export function restoreProject(untrusted: unknown): RestoreResult {
     repairLog = [];
     const repairs = repairLog;
     repairWhere = "";
-    const nameParsed = text(PROJECT_LIMITS.label, "project name").parse(raw.name);
+    const nameParsed = projectName.parse(raw.name);
     const project: Project = {
       version: PROJECT_VERSION,
       name: nameParsed ?? "Untitled",
@@ -518,6 +522,8 @@ const FORBIDDEN_KEYS = new Set(["__proto__", "constructor", "prototype"]);
  * @throws SyntaxError on invalid JSON (callers turn it into a message)
  */
 export function parseJsonSafely(text: string): unknown {
+  // The reviver costs a call per value; text that cannot hold such a key (not even "\u"-escaped) skips it.
+  if (!/__proto__|constructor|prototype|\\u/.test(text)) return JSON.parse(text);
   return JSON.parse(text, (key, value) => (FORBIDDEN_KEYS.has(key) ? undefined : value));
 }
 

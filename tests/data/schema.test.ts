@@ -191,6 +191,9 @@ describe("restoreProject", () => {
     expect((r.project.models[0] as unknown as Record<string, unknown>).admin).toBeUndefined();
     expect(Object.getPrototypeOf(r.project.models[0])).toBe(Object.prototype);
     // Even without the safe parser (own "__proto__" key from plain JSON.parse), zod's output has no such key.
+    // A key spelled with JSON escapes is the same key.
+    const escaped = parseJsonSafely('{"\\u005f_proto__":{"polluted":1},"constructo\\u0072":1}') as Record<string, unknown>;
+    expect(Object.keys(escaped)).toEqual([]);
     const r2 = restored(JSON.parse(text));
     expect(Object.keys(r2.project)).toEqual(["version", "name", "physics", "models", "curves", "figure"]);
     expect(({} as Record<string, unknown>).admin).toBeUndefined();
@@ -229,7 +232,7 @@ describe("projectsEqual", () => {
     const a = small();
     const b = small();
     expect(projectsEqual(a, b)).toBe(true);
-    b.curves[0] = { ...b.curves[0], gInvGeV: Float64Array.of(1e-14, 2.0000000000000004e-14) };
+    b.curves[0] = { ...b.curves[0], gInvGeV: Float64Array.of(1e-14, 2e-14 * (1 + Number.EPSILON)) };
     expect(projectsEqual(a, b)).toBe(false);
     const c = small();
     c.figure = { ...c.figure, grid: false };
