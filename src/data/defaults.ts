@@ -6,10 +6,9 @@ import { PROJECT_VERSION } from "./types";
 import { newId } from "./ids";
 
 /**
- * The Okabe–Ito colour-blind-safe palette in its published order (Okabe & Ito, "Color Universal Design",
- * 2008): orange, sky blue, bluish green, yellow, blue, vermillion, reddish purple, black.
+ * The Okabe–Ito colour-blind-safe palette by name (Okabe & Ito, "Color Universal Design", 2008).
  */
-export const OKABE_ITO = {
+export const OKABE_ITO_BY_NAME = {
   orange: "#E69F00",
   skyBlue: "#56B4E9",
   bluishGreen: "#009E73",
@@ -20,19 +19,22 @@ export const OKABE_ITO = {
   black: "#000000",
 } as const;
 
+/** The Okabe–Ito palette in its published order: orange, sky blue, bluish green, yellow, blue, vermillion, reddish purple, black. */
+export const OKABE_ITO: readonly string[] = Object.values(OKABE_ITO_BY_NAME);
+
 /**
  * Order in which new curves take Okabe–Ito colours: the warm and dark ones first so they stand apart from the
  * teal/blue model lines; yellow last because it is faint on white.
  */
 export const CURVE_COLOURS: readonly string[] = [
-  OKABE_ITO.vermillion,
-  OKABE_ITO.reddishPurple,
-  OKABE_ITO.orange,
-  OKABE_ITO.bluishGreen,
-  OKABE_ITO.black,
-  OKABE_ITO.skyBlue,
-  OKABE_ITO.blue,
-  OKABE_ITO.yellow,
+  OKABE_ITO_BY_NAME.vermillion,
+  OKABE_ITO_BY_NAME.reddishPurple,
+  OKABE_ITO_BY_NAME.orange,
+  OKABE_ITO_BY_NAME.bluishGreen,
+  OKABE_ITO_BY_NAME.black,
+  OKABE_ITO_BY_NAME.skyBlue,
+  OKABE_ITO_BY_NAME.blue,
+  OKABE_ITO_BY_NAME.yellow,
 ];
 
 /** Model lines and bands: a teal/blue family (never yellow or orange, which belong to curves). */

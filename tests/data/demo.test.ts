@@ -6,6 +6,7 @@ import {
   DEMO_CITATION,
   MODEL_COLOURS,
   OKABE_ITO,
+  OKABE_ITO_BY_NAME,
   defaultProject,
   mulberry32,
   newCurve,
@@ -36,7 +37,7 @@ function hue(hex: string): number {
 
 describe("palettes", () => {
   it("OKABE_ITO matches the published RGB values (Okabe & Ito, Color Universal Design, 2008)", () => {
-    const rgb: Record<keyof typeof OKABE_ITO, [number, number, number]> = {
+    const rgb: Record<keyof typeof OKABE_ITO_BY_NAME, [number, number, number]> = {
       orange: [230, 159, 0],
       skyBlue: [86, 180, 233],
       bluishGreen: [0, 158, 115],
@@ -48,9 +49,11 @@ describe("palettes", () => {
     };
     for (const [name, [r, g, b]] of Object.entries(rgb)) {
       const hex = `#${[r, g, b].map((v) => v.toString(16).padStart(2, "0")).join("")}`.toUpperCase();
-      expect(OKABE_ITO[name as keyof typeof OKABE_ITO]).toBe(hex);
+      expect(OKABE_ITO_BY_NAME[name as keyof typeof OKABE_ITO_BY_NAME]).toBe(hex);
     }
-    expect([...CURVE_COLOURS].sort()).toEqual(Object.values(OKABE_ITO).sort());
+    // The array form keeps the published order.
+    expect(OKABE_ITO).toEqual(Object.values(rgb).map((c) => `#${c.map((v) => v.toString(16).padStart(2, "0")).join("")}`.toUpperCase()));
+    expect([...CURVE_COLOURS].sort()).toEqual([...OKABE_ITO].sort());
   });
 
   it("model colours are a teal/blue family (hue 170°–230°), never a curve colour", () => {
