@@ -233,7 +233,9 @@ export function AnomalyCalculator() {
             <tr>
               <th scope="col">Name</th>
               <th scope="col">SU(3)_c</th>
-              <th scope="col">Electroweak</th>
+              <th scope="col">
+                Electroweak <span className="th-detail">(SU(2) dim, Y · SU(3)_L rep, X, b · charges)</span>
+              </th>
               <th scope="col" title="Chirality of the Weyl field">L/R</th>
               <th scope="col">PQ charge</th>
               <th scope="col">Copies</th>
@@ -261,8 +263,8 @@ export function AnomalyCalculator() {
                     </select>
                     {row.ewKind === "sm" ? (
                       <>
-                        <input type="text" className="tiny" aria-label={`SU(2) dimension of ${label}`} title="SU(2)_L dimension" value={row.dim} aria-invalid={hasError(errors, i, "ew.dim") || undefined} onChange={(e) => edit(row.key, { dim: e.target.value })} />
-                        <input type="text" className="narrow" aria-label={`Hypercharge Y of ${label}`} title="Hypercharge Y (Q = T₃ + Y)" value={row.y} aria-invalid={hasError(errors, i, "ew.y") || undefined} onChange={(e) => edit(row.key, { y: e.target.value })} />
+                        <input type="text" className="tiny" aria-label={`SU(2) dimension of ${label}`} title="SU(2)_L dimension" placeholder="dim" value={row.dim} aria-invalid={hasError(errors, i, "ew.dim") || undefined} onChange={(e) => edit(row.key, { dim: e.target.value })} />
+                        <input type="text" className="narrow" aria-label={`Hypercharge Y of ${label}`} title="Hypercharge Y (Q = T₃ + Y)" placeholder="Y" value={row.y} aria-invalid={hasError(errors, i, "ew.y") || undefined} onChange={(e) => edit(row.key, { y: e.target.value })} />
                       </>
                     ) : row.ewKind === "su3l" ? (
                       <>
@@ -392,7 +394,7 @@ export function AnomalyCalculator() {
         )}
       </div>
       <button type="button" className="primary" onClick={addAsModel} disabled={!current.ok || !current.result.eOverN} data-testid="calc-add-model">
-        Add as model
+        {current.ok && current.result.eOverN ? `Add E/N = ${frac(current.result.eOverN)} as model` : "Add as model"}
       </button>
     </div>
   );

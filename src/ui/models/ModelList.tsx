@@ -21,6 +21,12 @@ export function eOverNText(m: Pick<Model, "eOverNMin" | "eOverNMax">): string {
   return m.eOverNMin === m.eOverNMax ? m.eOverNMin : `${m.eOverNMin}..${m.eOverNMax}`;
 }
 
+function sourceText(m: Model): string {
+  if (m.source.kind === "catalogue") return `from the catalogue (${m.source.catalogueId})`;
+  if (m.source.kind === "calculator") return "from the anomaly calculator";
+  return "typed";
+}
+
 function EOverNField({ model }: { model: Model }) {
   const updateModel = useAxband((s) => s.updateModel);
   const [draft, setDraft] = useState<string | null>(null);
@@ -42,6 +48,7 @@ function EOverNField({ model }: { model: Model }) {
       <input
         type="text"
         aria-label={`E/N of ${model.label}`}
+        title={`E/N ${model.eOverNMin === model.eOverNMax ? "value (model line)" : "interval (model band)"}, ${sourceText(model)}`}
         value={draft ?? eOverNText(model)}
         spellCheck={false}
         aria-invalid={error ? true : undefined}
@@ -117,7 +124,6 @@ function ModelRow({ id, index, count }: { id: string; index: number; count: numb
   const lo = eOverNValue(model.eOverNMin);
   const hi = eOverNValue(model.eOverNMax);
   const cancels = Number.isFinite(lo) && Number.isFinite(hi) && bandCancels(lo, hi, { ...physicsOptsOf(physics), sigmas: model.sigmas });
-  const kind = model.eOverNMin === model.eOverNMax ? "line" : "band";
   return (
     <li className={`model-row${model.visible ? "" : " hidden-model"}`} data-model-id={model.id}>
       <div className="model-row-main">
@@ -132,6 +138,7 @@ function ModelRow({ id, index, count }: { id: string; index: number; count: numb
           type="text"
           className="model-label"
           aria-label="Model label"
+          title={model.label}
           value={model.label}
           onChange={(e) => updateModel(model.id, { label: e.target.value }, { coalesceKey: `model:${model.id}:label` })}
         />
@@ -139,20 +146,6 @@ function ModelRow({ id, index, count }: { id: string; index: number; count: numb
           <input type="checkbox" checked={model.visible} onChange={(e) => updateModel(model.id, { visible: e.target.checked })} />
           <span className="visually-hidden">Show {model.label}</span>
         </label>
-      </div>
-      <div className="model-row-detail">
-        <span className="tag" title={model.source.kind === "catalogue" ? `From the catalogue (${model.source.catalogueId})` : model.source.kind === "calculator" ? "From the anomaly calculator" : "Typed E/N"}>
-          {kind}
-        </span>
-        <EOverNField model={model} />
-        <select aria-label={`Line style of ${model.label}`} value={model.lineStyle} onChange={(e) => updateModel(model.id, { lineStyle: e.target.value as LineStyle })}>
-          {LINE_STYLES.map((s) => (
-            <option key={s.value} value={s.value}>
-              {s.label}
-            </option>
-          ))}
-        </select>
-        <SpreadField model={model} />
         <span className="row-buttons">
           <button type="button" className="icon" aria-label={`Move ${model.label} up`} disabled={index === 0} onClick={() => moveModel(model.id, -1)}>
             ↑
@@ -165,9 +158,20 @@ function ModelRow({ id, index, count }: { id: string; index: number; count: numb
           </button>
         </span>
       </div>
+      <div className="model-row-detail">
+        <EOverNField model={model} />
+        <select aria-label={`Line style of ${model.label}`} value={model.lineStyle} onChange={(e) => updateModel(model.id, { lineStyle: e.target.value as LineStyle })}>
+          {LINE_STYLES.map((s) => (
+            <option key={s.value} value={s.value}>
+              {s.label}
+            </option>
+          ))}
+        </select>
+        <SpreadField model={model} />
+      </div>
       {cancels ? (
-        <p className="model-note" data-testid="cancellation-note">
-          reaches g = 0 (cancellation): the interval contains c_γ
+        <p className="model-note" data-testid="cancellation-note" title="The E/N interval contains c_γ, so g_aγγ cancels inside the band and no finite limit excludes all of it">
+          reaches g = 0 (cancellation)
         </p>
       ) : null}
     </li>

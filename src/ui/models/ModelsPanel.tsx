@@ -1,19 +1,56 @@
-// The Models section of the sidebar: typed E/N, the catalogue, the model list and the anomaly calculator.
+// The Models section of the sidebar: typed E/N, the catalogue, the model list, and the anomaly calculator
+// (a wide table, so it opens in a dialog over the page; it stays mounted so its table survives closing).
+import { useEffect, useRef, useState } from "react";
+import { createPortal } from "react-dom";
 import { AddModel } from "./AddModel";
 import { Catalogue } from "./Catalogue";
 import { ModelList } from "./ModelList";
 import { AnomalyCalculator } from "./AnomalyCalculator";
 
+function CalculatorDialog({ open, onClose }: { open: boolean; onClose: () => void }) {
+  const panel = useRef<HTMLDivElement>(null);
+  useEffect(() => {
+    if (!open) return;
+    panel.current?.focus();
+    const onKey = (e: KeyboardEvent) => {
+      if (e.key === "Escape") onClose();
+    };
+    window.addEventListener("keydown", onKey);
+    return () => window.removeEventListener("keydown", onKey);
+  }, [open, onClose]);
+  // A portal: the sidebar is a sticky stacking context, and the dialog must cover the whole page.
+  return createPortal(
+    <div className="dialog-backdrop" hidden={!open} onMouseDown={(e) => e.target === e.currentTarget && onClose()}>
+      <div className="dialog" role="dialog" aria-modal="true" aria-labelledby="calculator-title" ref={panel} tabIndex={-1}>
+        <div className="dialog-head">
+          <h2 id="calculator-title">Anomaly calculator</h2>
+          <button type="button" className="icon" aria-label="Close the anomaly calculator" onClick={onClose}>
+            ✕
+          </button>
+        </div>
+        <p className="note">
+          Left-handed Weyl fermions (a right-handed field enters with its PQ charge negated): N = Σ X·T(R)·n_w, E = Σ X·d(R)·Σ Q², N_DW = |2N/X_S|.
+        </p>
+        <AnomalyCalculator />
+      </div>
+    </div>,
+    document.body,
+  );
+}
+
 export function ModelsPanel() {
+  const [calcOpen, setCalcOpen] = useState(false);
   return (
     <div className="models-panel">
       <AddModel />
-      <Catalogue />
+      <div className="inline-row">
+        <Catalogue />
+      </div>
+      <button type="button" className="calc-open" onClick={() => setCalcOpen(true)} aria-haspopup="dialog">
+        Anomaly calculator…
+      </button>
       <ModelList />
-      <details className="calculator-box">
-        <summary>Anomaly calculator</summary>
-        <AnomalyCalculator />
-      </details>
+      <CalculatorDialog open={calcOpen} onClose={() => setCalcOpen(false)} />
     </div>
   );
 }
