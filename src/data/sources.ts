@@ -84,14 +84,14 @@ const GDC_2016: BuiltIn = {
   text: "G. Grilli di Cortona, E. Hardy, J. Pardo Vega, G. Villadoro, “The QCD axion, precisely”, JHEP 01 (2016) 034, arXiv:1511.02867",
 };
 
-// Checked: authors, title and arXiv number (1812.01008, hep-ph) on the arXiv listing. The journal reference
+// Checked: authors, title (capitals as on the listing) and arXiv number (1812.01008, hep-ph) on the arXiv listing. The journal reference
 // JHEP 03 (2019) 033 was found only in one secondary list, not on a page of the paper: kept as unchecked.
 const GV_2019: BuiltIn = {
   key: "Gorghetto2019",
   entryType: "article",
   fields: [
     ["author", "Gorghetto, Marco and Villadoro, Giovanni"],
-    ["title", "Topological susceptibility and QCD axion mass: QED and NNLO corrections"],
+    ["title", "Topological Susceptibility and QCD Axion Mass: QED and NNLO corrections"],
     ["journal", "JHEP"],
     ["volume", "03"],
     ["pages", "033"],
@@ -102,7 +102,7 @@ const GV_2019: BuiltIn = {
   ],
   rawFields: ["author"],
   fromMemory: ["journal", "volume", "pages", "year"],
-  text: "M. Gorghetto, G. Villadoro, “Topological susceptibility and QCD axion mass: QED and NNLO corrections”, JHEP 03 (2019) 033, arXiv:1812.01008",
+  text: "M. Gorghetto, G. Villadoro, “Topological Susceptibility and QCD Axion Mass: QED and NNLO corrections”, JHEP 03 (2019) 033, arXiv:1812.01008",
 };
 
 // Checked: title, Phys. Rev. Lett. 118, 031801 (2017), issue 3, DOI and arXiv:1610.07593 on the arXiv
@@ -112,7 +112,7 @@ const DLMN_PRL: BuiltIn = {
   entryType: "article",
   fields: [
     ["author", "{Di Luzio}, Luca and Mescia, Federico and Nardi, Enrico"],
-    ["title", "Redefining the axion window"],
+    ["title", "Redefining the Axion Window"],
     ["journal", "Phys. Rev. Lett."],
     ["volume", "118"],
     ["number", "3"],
@@ -125,7 +125,7 @@ const DLMN_PRL: BuiltIn = {
   ],
   rawFields: ["author"],
   fromMemory: [],
-  text: "L. Di Luzio, F. Mescia, E. Nardi, “Redefining the axion window”, Phys. Rev. Lett. 118 (2017) 031801, arXiv:1610.07593",
+  text: "L. Di Luzio, F. Mescia, E. Nardi, “Redefining the Axion Window”, Phys. Rev. Lett. 118 (2017) 031801, arXiv:1610.07593",
 };
 
 // Checked: title, Phys. Rev. D 96(7), 075003 (2017), DOI on the Durham repository record; arXiv:1705.05370.
@@ -143,7 +143,6 @@ const DLMN_PRD: BuiltIn = {
     ["doi", "10.1103/PhysRevD.96.075003"],
     ["eprint", "1705.05370"],
     ["archiveprefix", "arXiv"],
-    ["primaryclass", "hep-ph"],
   ],
   rawFields: ["author"],
   fromMemory: [],
