@@ -1,0 +1,136 @@
+// Autosave, start-up and undo/redo in real Chromium: a reload keeps the project (curve data from IndexedDB),
+// undo/redo by buttons and keys (not while typing), full storage gives one alert, links open over it.
+// Storage behaviour per the WHATWG HTML standard, §12 Web storage (setItem throws "QuotaExceededError").
+import { afterAll, beforeAll, describe, expect, inject, test } from "vitest";
+import type { Browser, BrowserContext, Page } from "playwright-core";
+import { launchChromium, watchPage, type Watched } from "./chromium";
+import { defaultProject } from "../../src/data/demo";
+import { newModel } from "../../src/data/defaults";
+import { encodeLink } from "../../src/data/link";
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchChromium();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+async function open(init?: () => void, hash = ""): Promise<{ context: BrowserContext; page: Page; watched: Watched }> {
+  const context = await browser.newContext({ viewport: { width: 1440, height: 900 } });
+  if (init) await context.addInitScript(init);
+  const page = await context.newPage();
+  const watched = watchPage(page);
+  await page.goto(inject("baseUrl") + hash, { waitUntil: "networkidle" });
+  await page.locator('[data-testid="plot"] svg').waitFor();
+  return { context, page, watched };
+}
+
+const legendTexts = (page: Page) =>
+  page.locator('[data-testid="legend"] [data-legend-entry]').evaluateAll((els) => els.map((e) => e.getAttribute("data-legend-entry") ?? ""));
+const massDomain = (page: Page) => page.locator('[data-testid="plot"] svg').getAttribute("data-mass-domain");
+
+async function addModel(page: Page, text: string) {
+  await page.getByTestId("model-eovern").fill(text);
+  await page.getByTestId("add-model").click();
+}
+
+describe("autosave", () => {
+  test("a reload restores models, the zoomed view and the curves", async () => {
+    const { context, page, watched } = await open();
+    await addModel(page, "5/3..44/3");
+    await page.locator('[data-testid="plot"] svg').focus();
+    await page.keyboard.press("+");
+    await expect.poll(() => legendTexts(page)).toContain("E/N = 5/3..44/3 (reaches g = 0: cancellation)");
+    const zoomed = await massDomain(page);
+    await page.waitForTimeout(800); // past the 300 ms debounce
+    await page.reload({ waitUntil: "networkidle" });
+    await page.locator('[data-testid="plot"] svg').waitFor();
+    const texts = await legendTexts(page);
+    expect(texts).toContain("E/N = 5/3..44/3 (reaches g = 0: cancellation)");
+    expect(texts.filter((t) => t.includes("(invented)"))).toHaveLength(4);
+    expect(await massDomain(page)).toBe(zoomed);
+    expect(await page.locator('[data-testid="plot"] path[data-curve-id]').count()).toBeGreaterThanOrEqual(4);
+    // A fresh start has no history to undo.
+    expect(await page.getByTestId("undo").isDisabled()).toBe(true);
+    expect(await page.getByRole("alert").count()).toBe(0);
+    expect(watched.consoleErrors).toEqual([]);
+    await context.close();
+  });
+
+  test("full storage: one alert, and the app keeps working", async () => {
+    const { context, page, watched } = await open(() => {
+      Storage.prototype.setItem = function () {
+        throw new DOMException("The quota has been exceeded.", "QuotaExceededError");
+      };
+    });
+    await addModel(page, "2/3");
+    await page.waitForTimeout(500);
+    await addModel(page, "8/3..16/3");
+    await page.waitForTimeout(500);
+    const alerts = page.getByRole("alert");
+    await expect.poll(() => alerts.count()).toBe(1);
+    expect(await alerts.first().textContent()).toMatch(/storage is full or unavailable/i);
+    expect(await legendTexts(page)).toContain("E/N = 2/3");
+    await page.getByTestId("undo").click();
+    await expect.poll(() => legendTexts(page)).not.toContain("E/N = 8/3..16/3");
+    await page.getByRole("button", { name: "Dismiss message" }).click();
+    expect(await alerts.count()).toBe(0);
+    expect(watched.consoleErrors).toEqual([]);
+    await context.close();
+  });
+});
+
+describe("undo and redo", () => {
+  test("buttons and Ctrl+Z / Shift+Ctrl+Z / Ctrl+Y; keys inside a text field are left to the field", async () => {
+    const { context, page, watched } = await open();
+    await addModel(page, "16/15");
+    await expect.poll(() => legendTexts(page)).toContain("E/N = 16/15");
+    await page.getByTestId("undo").click();
+    await expect.poll(() => legendTexts(page)).not.toContain("E/N = 16/15");
+    await page.getByTestId("redo").click();
+    await expect.poll(() => legendTexts(page)).toContain("E/N = 16/15");
+
+    await page.locator("h1").click();
+    await page.keyboard.press("Control+z");
+    await expect.poll(() => legendTexts(page)).not.toContain("E/N = 16/15");
+    await page.keyboard.press("Control+Shift+z");
+    await expect.poll(() => legendTexts(page)).toContain("E/N = 16/15");
+    await page.keyboard.press("Control+z");
+    await page.keyboard.press("Control+y");
+    await expect.poll(() => legendTexts(page)).toContain("E/N = 16/15");
+
+    const input = page.getByTestId("model-eovern");
+    await input.fill("1/6");
+    await input.press("Control+z");
+    expect(await legendTexts(page)).toContain("E/N = 16/15");
+    expect(watched.consoleErrors).toEqual([]);
+    await context.close();
+  });
+});
+
+describe("links at start", () => {
+  test("a valid link opens its project (undoable) and the fragment is dropped from the address", async () => {
+    const project = defaultProject();
+    project.models = [...project.models, newModel({ id: "from-link", eOverNMin: "44/3", label: "From the link, E/N = 44/3" }, project)];
+    const fragment = encodeLink(project, { includeCurves: false });
+    const { context, page, watched } = await open(undefined, `#${fragment}`);
+    await expect.poll(() => legendTexts(page)).toContain("From the link, E/N = 44/3");
+    expect(await page.getByRole("status").first().textContent()).toMatch(/link/i);
+    expect(new URL(page.url()).hash).toBe("");
+    expect(await page.getByTestId("undo").isDisabled()).toBe(false);
+    expect(watched.consoleErrors).toEqual([]);
+    await context.close();
+  });
+
+  test("a tampered link shows an alert and the previous project stays", async () => {
+    const { context, page, watched } = await open(undefined, "#v1.AAAA-this-is-not-a-project");
+    const alert = page.getByRole("alert");
+    await expect.poll(() => alert.count()).toBe(1);
+    expect(await alert.textContent()).toMatch(/link/i);
+    const texts = await legendTexts(page);
+    expect(texts).toHaveLength(7); // the demo project
+    expect(watched.consoleErrors).toEqual([]);
+    await context.close();
+  });
+});
