@@ -50,10 +50,13 @@ function CurveCard({ id, index, count }: { id: string; index: number; count: num
           value={curve.label}
           onChange={(e) => updateCurve(id, { label: e.target.value }, { coalesceKey: `curve:${id}:label` })}
         />
-        <label className="ax-check" title="Show on the figure">
-          <input type="checkbox" checked={curve.visible} onChange={(e) => updateCurve(id, { visible: e.target.checked })} />
-          shown
-        </label>
+        <input
+          type="checkbox"
+          title="Show on the figure"
+          aria-label={`Show ${curve.label}`}
+          checked={curve.visible}
+          onChange={(e) => updateCurve(id, { visible: e.target.checked })}
+        />
         <span className="ax-curve-order">
           <button type="button" className="icon" aria-label={`Move ${curve.label} up`} disabled={index === 0} onClick={() => moveCurve(id, -1)}>
             ↑

@@ -186,7 +186,9 @@ function ItemCard({ item, onChange, onRemove }: { item: ImportItem; onChange: (p
   const columnChoices = Array.from({ length: columns }, (_, i) => i + 1);
   const preview = r ? r.preview.slice(0, 6) : [];
   const canEdit = r !== null && !(r.fatal && r.fatal.code !== "single-column" && r.fatal.code !== "no-data");
-  const notes = r ? r.messages.filter((m) => m.level !== "error") : [];
+  // The parser's own sentences about delimiter, units, unreadable rows and values ≤ 0 are shown above in
+  // the step's own words; any other warning (e.g. a guess it made) is passed on as it is.
+  const notes = r ? r.messages.filter((m) => m.level === "warning" && !/cannot be read|could not be read|≤ 0|<= 0/.test(m.text)) : [];
   const columnLabel = (c: number) => `column ${c}${header?.[c - 1] ? ` · ${header[c - 1]}` : ""}`;
 
   return (

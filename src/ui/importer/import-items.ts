@@ -65,11 +65,12 @@ export interface ImportItem {
   result: CurveParseResult | null;
 }
 
-/** A byte count in words (decimal units, as file managers show them). */
+/** A byte count in words, in the binary units the import cap is set in (200 MB = 200 × 2²⁰ bytes). */
 export function formatBytes(n: number): string {
-  if (n >= 1e9) return `${(n / 1e9).toFixed(1)} GB`;
-  if (n >= 1e6) return `${(n / 1e6).toFixed(1)} MB`;
-  if (n >= 1e3) return `${(n / 1e3).toFixed(1)} kB`;
+  const trim = (v: number) => String(Number(v.toFixed(1)));
+  if (n >= 2 ** 30) return `${trim(n / 2 ** 30)} GB`;
+  if (n >= 2 ** 20) return `${trim(n / 2 ** 20)} MB`;
+  if (n >= 2 ** 10) return `${trim(n / 2 ** 10)} kB`;
   return `${n} bytes`;
 }
 
