@@ -22,30 +22,37 @@ export const PROJECT_LIMITS = {
 
 // ---------------------------------------------------------------------------------------------- building blocks
 
-const FRACTION_RE = /^[+-]?\d+\/[+-]?\d+$/;
-const DECIMAL_RE = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
 // C0 controls other than tab, LF and CR (and DEL) are invalid in the XML of an exported SVG.
 // eslint-disable-next-line no-control-regex
 const CONTROL_RE = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/g;
 
+// One pass: optional sign, then "p/q" (integers, spaces around "/" allowed) or a decimal with exponent.
+const RATIONAL_RE = /^\s*([+\-\u2212]?)(?:(\d+)\s*\/\s*([+\-\u2212]?)(\d+)|((?:\d+\.?\d*|\.\d+)(?:[eE][+\-\u2212]?\d+)?))\s*$/;
+
 /**
- * Whether a string is a finite number or fraction as the E/N field stores it ("8/3", "-1/3", "0.5", "1e-1";
- * spaces around "/" and a Unicode minus are tolerated), with a non-zero denominator.
+ * Numeric value of E/N text as the E/N field stores it ("8/3", "-1/3", "0.5", "1e-1"; spaces around "/" and a
+ * Unicode minus are tolerated); NaN when it is neither a number nor a fraction, the denominator is 0, or the
+ * value is not finite.
  */
-export function isRationalText(s: string): boolean {
-  if (s.length > PROJECT_LIMITS.rational) return false;
-  const t = s.trim().replace(/\u2212/g, "-").replace(/\s*\/\s*/g, "/");
-  const frac = FRACTION_RE.exec(t);
-  if (frac) return !/^[+-]?0+$/.test(t.split("/")[1]);
-  return DECIMAL_RE.test(t) && Number.isFinite(Number(t));
+export function rationalValue(s: string): number {
+  if (typeof s !== "string" || s.length > PROJECT_LIMITS.rational) return Number.NaN;
+  const m = RATIONAL_RE.exec(s);
+  if (!m) return Number.NaN;
+  const sign = m[1] === "" || m[1] === "+" ? 1 : -1;
+  let v: number;
+  if (m[2] !== undefined) {
+    const den = Number(m[4]) * (m[3] === "" || m[3] === "+" ? 1 : -1);
+    if (den === 0) return Number.NaN;
+    v = (sign * Number(m[2])) / den;
+  } else {
+    v = sign * Number(m[5].replace("\u2212", "-"));
+  }
+  return Number.isFinite(v) ? v : Number.NaN;
 }
 
-/** Numeric value of a string accepted by {@link isRationalText} (NaN otherwise). */
-export function rationalValue(s: string): number {
-  if (!isRationalText(s)) return Number.NaN;
-  const t = s.trim().replace(/\u2212/g, "-").replace(/\s*\/\s*/g, "/");
-  const [num, den] = t.split("/");
-  return den === undefined ? Number(num) : Number(num) / Number(den);
+/** Whether a string is E/N text accepted by {@link rationalValue}. */
+export function isRationalText(s: string): boolean {
+  return !Number.isNaN(rationalValue(s));
 }
 
 const hexColour = z.string().regex(/^#(?:[0-9a-fA-F]{3,4}|[0-9a-fA-F]{6}|[0-9a-fA-F]{8})$/, "expected a colour such as #117A8B");
