@@ -115,9 +115,23 @@ export function applyFigureOptions(project: Project, opts: CliOptions): Project 
   return { ...project, figure: f };
 }
 
+/** Notes for curves of a loaded project with points a log axis cannot show (they stay in the project). */
+export function undrawablePointNotes(project: Project, source: string): string[] {
+  const notes: string[] = [];
+  for (const c of project.curves) {
+    let bad = 0;
+    const n = Math.min(c.massEv.length, c.gInvGeV.length);
+    for (let i = 0; i < n; i++) if (!(c.massEv[i] > 0 && c.gInvGeV[i] > 0 && Number.isFinite(c.massEv[i]) && Number.isFinite(c.gInvGeV[i]))) bad++;
+    if (bad > 0) notes.push(`${source}: curve "${c.label}" has ${bad} point(s) with a mass or coupling ≤ 0 (or not finite); they are not drawn on the log axes`);
+    if (c.massEv.length === 0) notes.push(`${source}: curve "${c.label}" has no data points`);
+  }
+  return notes;
+}
+
 /** Reads every input and returns the project to draw; throws InputError on anything the user must fix. */
 export function loadProject(opts: CliOptions): LoadedProject {
   const first = opts.inputs[0];
   const loaded = first.kind === "project" ? loadProjectFile(first) : first.kind === "svg" ? loadSvg(first) : loadCsv(opts.inputs, opts);
-  return { project: applyFigureOptions(loaded.project, opts), notes: loaded.notes };
+  const extra = first.kind === "csv" ? [] : undrawablePointNotes(loaded.project, first.path);
+  return { project: applyFigureOptions(loaded.project, opts), notes: [...loaded.notes, ...extra] };
 }

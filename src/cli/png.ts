@@ -1,7 +1,7 @@
 // PNG output of the renderer: rasterises the exported SVG with resvg (a native binary shipped inside its npm
 // package; no browser, no download) at physical size × dpi, and stamps the dpi into the PNG's pHYs chunk.
 import { existsSync } from "node:fs";
-import { Resvg } from "@resvg/resvg-js";
+import { createRequire } from "node:module";
 import { setPngDpi } from "../plot/png-meta";
 
 /**
@@ -38,6 +38,8 @@ export function pngPixelSize(widthIn: number, heightIn: number, dpi: number): { 
  * like the app's PNG export, with pHYs set to `dpi`.
  */
 export function renderPng(svg: string, widthPx: number, dpi: number, fontFamily?: string): Uint8Array {
+  // Loaded on first use: SVG-only runs skip the native module's start-up.
+  const { Resvg } = createRequire(import.meta.url)("@resvg/resvg-js") as typeof import("@resvg/resvg-js");
   const r = new Resvg(svg, {
     fitTo: { mode: "width", value: widthPx },
     background: "#ffffff",

@@ -7,7 +7,8 @@ import { parseArgs } from "../../src/cli/args";
 import { fitRanges } from "../../src/cli/fit-ranges";
 import { pickFallbackFont, pngPixelSize } from "../../src/cli/png";
 import { writeAllOrNothing } from "../../src/cli/write-atomic";
-import { tempDir } from "./fixtures";
+import { undrawablePointNotes } from "../../src/cli/inputs";
+import { smallProject, tempDir } from "./fixtures";
 
 function ok(argv: string[]) {
   const r = parseArgs(argv);
@@ -144,5 +145,16 @@ describe("writeAllOrNothing", () => {
     ).toThrow();
     expect(existsSync(join(dir, "first.svg"))).toBe(false);
     expect(readdirSync(dir)).toEqual([]);
+  });
+});
+
+describe("undrawablePointNotes", () => {
+  it("names curves with points a log axis cannot show and counts them", () => {
+    const p = smallProject();
+    const bad = { ...p.curves[0], massEv: Float64Array.of(1e-6, 0, 2e-6, 3e-6), gInvGeV: Float64Array.of(1e-13, 1e-13, -1, Number.NaN) };
+    const notes = undrawablePointNotes({ ...p, curves: [bad, p.curves[1]] }, "x.axband.json");
+    expect(notes).toHaveLength(1);
+    expect(notes[0]).toMatch(/x\.axband\.json: curve "Demo scan \(invented\)" has 3 point\(s\)/);
+    expect(undrawablePointNotes(p, "ok.json")).toEqual([]);
   });
 });
