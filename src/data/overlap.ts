@@ -500,7 +500,7 @@ function boundaryInBand(p: PolygonPrep, lo: number, hi: number): Flat {
     }
   }
   if (curHi >= curLo) pieces.push(curLo, curHi);
-  // Isolated points (a vertex touching the band) are kept as tiny pieces only if they have length.
+  // Zero-length pieces (a vertex just touching a level, a vertical edge) drop out here: they cover no mass.
   return unionUnsorted(pieces);
 }
 
