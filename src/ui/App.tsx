@@ -13,7 +13,19 @@ import { ModelsPanel } from "./models/ModelsPanel";
 import { FigureSettings } from "./settings/FigureSettings";
 import { ConstantsPanel } from "./settings/ConstantsPanel";
 import { FigureView } from "./figure/FigureView";
+import { FigureBoundary } from "./figure/FigureBoundary";
+import { selectProject, useAxband } from "./store";
 import { HoverReadout } from "./figure/HoverReadout";
+
+/** The figure inside its error boundary (a new project retries after a drawing failure). */
+function Figure() {
+  const project = useAxband(selectProject);
+  return (
+    <FigureBoundary resetKey={project}>
+      <FigureView />
+    </FigureBoundary>
+  );
+}
 
 export function App() {
   useUndoKeys();
@@ -47,7 +59,7 @@ export function App() {
           </Section>
         </aside>
         <main className="main">
-          <FigureView />
+          <Figure />
           <HoverReadout />
           <p className="caution" role="note">
             Predictions depend on the model assumptions (field content, charges, the constants chosen under

@@ -16,6 +16,11 @@ function r2(v: number): number {
   return Object.is(r, -0) || !Number.isFinite(r) ? 0 : r;
 }
 
+/** Optional number rounded like the writer's attributes. */
+function num(v: number | undefined): number | undefined {
+  return v === undefined ? undefined : r2(v);
+}
+
 function paint(value: string | undefined): string | undefined {
   if (value === undefined) return undefined;
   return value === "none" ? "none" : safeColour(value, "#000000");
@@ -55,12 +60,12 @@ function PathEl({ n, id }: { n: PathNode; id: string | undefined }) {
     id,
     d: PATH_SAFE.test(n.d) ? n.d : "",
     fill: paint(n.fill) ?? "none",
-    fillOpacity: n.fillOpacity,
+    fillOpacity: num(n.fillOpacity),
   };
   if (n.stroke) {
     props.stroke = stroke;
-    props.strokeWidth = n.strokeWidth;
-    props.strokeOpacity = n.strokeOpacity;
+    props.strokeWidth = num(n.strokeWidth);
+    props.strokeOpacity = num(n.strokeOpacity);
     if (n.dash && DASH_SAFE.test(n.dash)) props.strokeDasharray = n.dash;
     props.strokeLinejoin = "round";
   }
@@ -76,9 +81,9 @@ function RectEl({ n, id }: { n: RectNode; id: string | undefined }) {
       width={r2(Math.max(0, n.w))}
       height={r2(Math.max(0, n.h))}
       fill={paint(n.fill) ?? "none"}
-      fillOpacity={n.fillOpacity}
+      fillOpacity={num(n.fillOpacity)}
       stroke={paint(n.stroke)}
-      strokeWidth={n.stroke ? n.strokeWidth : undefined}
+      strokeWidth={n.stroke ? num(n.strokeWidth) : undefined}
       {...dataProps(n.data)}
     />
   );
@@ -90,8 +95,8 @@ function TextEl({ n, id }: { n: TextNode; id: string | undefined }) {
     <text
       id={id}
       x={r2(n.x)}
-      y={placed.baselineY}
-      fontSize={n.sizePx}
+      y={r2(placed.baselineY)}
+      fontSize={num(n.sizePx)}
       textAnchor={n.anchor === "start" ? undefined : n.anchor}
       fontWeight={n.weight === "bold" ? "bold" : undefined}
       fill={paint(n.fill) ?? "#000000"}
@@ -101,7 +106,7 @@ function TextEl({ n, id }: { n: TextNode; id: string | undefined }) {
     >
       {placed.runs.map((r, i) =>
         r.dyPx !== 0 || r.sizePx !== undefined || r.italic ? (
-          <tspan key={i} dy={r.dyPx !== 0 ? r.dyPx : undefined} fontSize={r.sizePx} fontStyle={r.italic ? "italic" : undefined}>
+          <tspan key={i} dy={r.dyPx !== 0 ? r2(r.dyPx) : undefined} fontSize={num(r.sizePx)} fontStyle={r.italic ? "italic" : undefined}>
             {r.text}
           </tspan>
         ) : (
