@@ -54,18 +54,20 @@ for (const set of benchSets()) {
   const rows = texts.reduce((s, t) => s + csv.parseCurveText(t).massEv.length, 0);
   const agree = texts.every((t) => same(csv.parseCurveText(t), d3ToArrays(t)));
   console.log(`\n${set.name}: ${set.files.length} file(s), ${(bytes / 1e6).toFixed(1)} MB, ${rows.toLocaleString("en")} rows; axband and d3-dsv give identical arrays: ${agree ? "yes" : "NO"}`);
-  const results = [];
-  for (const [label, fn] of methods) {
-    const times = [];
-    for (let r = 0; r <= runs; r++) {
+  // Methods take turns within each run, so a change in machine load hits all of them alike.
+  const times = methods.map(() => []);
+  for (let r = 0; r <= runs; r++) {
+    methods.forEach(([, fn], k) => {
       const t0 = performance.now();
       for (const t of texts) fn(t);
       const dt = (performance.now() - t0) / 1000;
-      if (r > 0) times.push(dt);
-    }
-    const t = median(times);
-    results.push({ label, mbps: bytes / 1e6 / t, t });
+      if (r > 0) times[k].push(dt);
+    });
   }
+  const results = methods.map(([label], k) => {
+    const t = median(times[k]);
+    return { label, mbps: bytes / 1e6 / t, t };
+  });
   const base = results[2].mbps;
   for (const r of results) {
     console.log(`  ${r.label.padEnd(54)} ${r.mbps.toFixed(1).padStart(7)} MB/s  (${(r.t * 1000).toFixed(0)} ms)  ×${(r.mbps / base).toFixed(2)} vs d3-dsv + Number()`);

@@ -194,14 +194,18 @@ const ERR_EMPTY = 1;
 const ERR_NAN = 2;
 const ERR_RANGE = 3;
 let numErr = ERR_NONE;
+/** Where the last readNumber stopped: the first character that cannot continue the number. */
+let numEnd = 0;
 
 /**
- * The number in t[s, e), times 10^shift, correctly rounded; NaN with `numErr` set when it is not a plain or
- * scientific number. Accepts a leading + or − (also U+2212) and `,` as the decimal point when `comma`.
- * The shift is applied to the decimal exponent, so `1.5` μeV becomes exactly the double nearest 1.5e-6.
+ * Reads a number starting at t[s] and stopping at the first character that cannot continue it (numEnd),
+ * times 10^shift, correctly rounded; NaN with `numErr` set when no number starts there. Accepts a leading
+ * + or − (also U+2212) and `,` as the decimal point when `comma`. The shift is applied to the decimal
+ * exponent, so `1.5` μeV becomes exactly the double nearest 1.5e-6. Callers check what follows numEnd.
  */
 function readNumber(t: string, s: number, e: number, shift: number, comma: boolean): number {
   numErr = ERR_NONE;
+  numEnd = s;
   if (s >= e) {
     numErr = ERR_EMPTY;
     return NaN;
@@ -219,7 +223,7 @@ function readNumber(t: string, s: number, e: number, shift: number, comma: boole
   let digits = 0;
   let point = false;
   let long = false;
-  let mantEnd = e;
+  let hasExp = false;
   for (; i < e; i++) {
     c = t.charCodeAt(i);
     if (c >= 48 && c <= 57) {
@@ -233,44 +237,38 @@ function readNumber(t: string, s: number, e: number, shift: number, comma: boole
       } else {
         long = true;
       }
-    } else if (c === 46 || (c === 44 && comma)) {
-      if (point) {
-        numErr = ERR_NAN;
-        return NaN;
-      }
+    } else if ((c === 46 || (c === 44 && comma)) && !point) {
       point = true;
-    } else if (c === 101 || c === 69) {
-      mantEnd = i;
-      break;
     } else {
-      numErr = ERR_NAN;
-      return NaN;
+      hasExp = c === 101 || c === 69;
+      break;
     }
   }
+  const mantEnd = i;
+  numEnd = i;
   if (digits === 0) {
     numErr = ERR_NAN;
     return NaN;
   }
   let exp = 0;
-  if (mantEnd < e) {
-    i = mantEnd + 1;
+  if (hasExp) {
+    i++;
     let eneg = false;
     c = i < e ? t.charCodeAt(i) : 0;
     if (c === 45 || c === 0x2212) {
       eneg = true;
       i++;
     } else if (c === 43) i++;
-    if (i >= e) {
-      numErr = ERR_NAN;
-      return NaN;
-    }
+    const first = i;
     for (; i < e; i++) {
       c = t.charCodeAt(i);
-      if (c < 48 || c > 57) {
-        numErr = ERR_NAN;
-        return NaN;
-      }
+      if (c < 48 || c > 57) break;
       if (exp < 100000) exp = exp * 10 + (c - 48);
+    }
+    numEnd = i;
+    if (i === first) {
+      numErr = ERR_NAN;
+      return NaN;
     }
     if (eneg) exp = -exp;
   }
@@ -301,20 +299,22 @@ function readNumber(t: string, s: number, e: number, shift: number, comma: boole
 export function isNumberText(text: string, comma = false): boolean {
   const s = text.trim();
   readNumber(s, 0, s.length, 0, comma);
-  return numErr === ERR_NONE || numErr === ERR_RANGE;
+  return (numErr === ERR_NONE || numErr === ERR_RANGE) && numEnd === s.length;
 }
 
 /** The number a string holds (same grammar as the importer), or NaN. */
 export function readNumberText(text: string, comma = false): number {
   const s = text.trim();
-  return readNumber(s, 0, s.length, 0, comma);
+  const v = readNumber(s, 0, s.length, 0, comma);
+  return numErr === ERR_NONE && numEnd === s.length ? v : NaN;
 }
 
-function numberReason(t: string, s: number, e: number): string {
-  if (numErr === ERR_EMPTY) return "empty field";
+/** The rejection reason for the field t[s, e). */
+function fieldReason(t: string, s: number, e: number, outOfRange: boolean): string {
+  if (s >= e) return "empty field";
   const raw = t.slice(s, e);
   const shown = raw.length > 40 ? raw.slice(0, 40) + "…" : raw;
-  return numErr === ERR_RANGE ? `out of range: "${shown}"` : `not a number: "${shown}"`;
+  return outOfRange ? `out of range: "${shown}"` : `not a number: "${shown}"`;
 }
 
 // ---------------------------------------------------------------------------------------------------------
@@ -843,6 +843,8 @@ class Parser implements CurveParser {
       return;
     }
     const comma = this.comma;
+    // With a comma delimiter a decimal comma can only live inside quotes.
+    const bareComma = comma && delim !== 44;
     const massCol = this.massCol;
     const gCol = this.gCol;
     const need = this.need;
@@ -852,12 +854,13 @@ class Parser implements CurveParser {
     let reason = "";
     let col = 0;
     for (;;) {
-      let fs = p;
-      let fe: number;
+      const want = col === massCol || col === gCol;
+      const shift = col === massCol ? this.massShift : 0;
       let bad = "";
+      let v = NaN;
       if (p < e && t.charCodeAt(p) === 34) {
-        fs = p + 1;
-        fe = closingQuote(t, fs, e);
+        let fs = p + 1;
+        let fe = closingQuote(t, fs, e);
         if (fe >= e) bad = "unterminated quote";
         p = fe + 1;
         while (p < e && (c = t.charCodeAt(p)) !== delim && !(delim === WS && isBlank(c))) {
@@ -865,30 +868,42 @@ class Parser implements CurveParser {
           p++;
         }
         if (p > e) p = e;
-        // Blanks inside the quotes cannot change a number's meaning: drop them.
-        while (fs < fe && isBlank(t.charCodeAt(fs))) fs++;
-        while (fe > fs && isBlank(t.charCodeAt(fe - 1))) fe--;
+        if (want && bad === "") {
+          // Blanks inside the quotes cannot change a number's meaning: drop them.
+          while (fs < fe && isBlank(t.charCodeAt(fs))) fs++;
+          while (fe > fs && isBlank(t.charCodeAt(fe - 1))) fe--;
+          v = readNumber(t, fs, fe, shift, comma);
+          if (numErr !== ERR_NONE || numEnd !== fe) bad = fieldReason(t, fs, fe, numErr === ERR_RANGE && numEnd === fe);
+        }
+      } else if (want) {
+        // Read the number in place, then check that the field ends where the number does.
+        const fs = p;
+        v = readNumber(t, fs, e, shift, bareComma);
+        let q = numEnd;
+        if (delim !== WS) while (q < e && ((c = t.charCodeAt(q)) === 32 || (c === 9 && delim !== 9))) q++;
+        const boundary = q >= e || (delim === WS ? isBlank(t.charCodeAt(q)) : t.charCodeAt(q) === delim);
+        if (numErr === ERR_NONE && boundary) p = q;
+        else {
+          const outOfRange = numErr === ERR_RANGE && boundary;
+          p = fs;
+          if (delim === WS) while (p < e && !isBlank(t.charCodeAt(p))) p++;
+          else while (p < e && t.charCodeAt(p) !== delim) p++;
+          let fe = p;
+          while (fe > fs && ((c = t.charCodeAt(fe - 1)) === 32 || (c === 9 && delim !== 9))) fe--;
+          bad = fieldReason(t, fs, fe, outOfRange);
+          v = NaN;
+        }
       } else if (delim === WS) {
         while (p < e && !isBlank(t.charCodeAt(p))) p++;
-        fe = p;
       } else {
         while (p < e && t.charCodeAt(p) !== delim) p++;
-        fe = p;
-        while (fe > fs && ((c = t.charCodeAt(fe - 1)) === 32 || (c === 9 && delim !== 9))) fe--;
       }
-      if (col === massCol || col === gCol) {
-        let v = NaN;
-        if (bad === "") {
-          v = readNumber(t, fs, fe, col === massCol ? this.massShift : 0, comma);
-          if (numErr !== ERR_NONE) bad = numberReason(t, fs, fe);
-        }
-        if (bad !== "" && errCol < 0) {
-          errCol = col;
-          reason = bad;
-        }
-        if (col === massCol) massV = v;
-        else gV = v;
+      if (bad !== "" && errCol < 0) {
+        errCol = col;
+        reason = bad;
       }
+      if (col === massCol) massV = v;
+      else if (col === gCol) gV = v;
       col++;
       if (col >= need || p >= e) break;
       if (delim === WS) {
