@@ -3,7 +3,8 @@
 // on the models, curves and constants). Sorting by column, filters, CSV and Markdown export, and a click on
 // a row highlights its interval on the figure.
 import { useMemo, useState } from "react";
-import { overlapTable, overlapTableToCsv, overlapTableToMarkdown, type OverlapRow } from "../../data";
+import { overlapTableToCsv, overlapTableToMarkdown, type OverlapRow } from "../../data";
+import { useOverlapRows } from "./overlap-client";
 import { siFormat, sciFormat } from "../format";
 import { useAxband } from "../store";
 import { downloadText, safeFileName } from "../export/download";
@@ -23,6 +24,9 @@ const COLUMNS: { key: SortKey | null; label: string; title?: string }[] = [
   { key: null, label: "E/N excluded", title: "For a partial overlap: the E/N values of the band that are affected" },
   { key: null, label: "Notes" },
 ];
+
+/** Rows drawn before "Show all" (a wiggly million-point curve can give hundreds of intervals). */
+const ROWS_SHOWN = 100;
 
 function range(lo: number, hi: number, fmt: (v: number) => string): string {
   return `${fmt(lo)} – ${fmt(hi)}`;
@@ -46,11 +50,9 @@ export function OverlapPanel() {
   const [sort, setSort] = useState<SortState | null>(null);
   const [filter, setFilter] = useState<RowFilter>(NO_FILTER);
 
+  const [showAll, setShowAll] = useState(false);
   // Only models, curves and constants change the table; the figure (zoom, preset) does not.
-  const rows = useMemo(() => {
-    const p = useAxband.getState().project;
-    return overlapTable({ ...p, models, curves, physics });
-  }, [models, curves, physics]);
+  const { rows, pending } = useOverlapRows(models, curves, physics);
   const shown = useMemo(() => sortRows(filterRows(rows, filter), sort), [rows, filter, sort]);
   const modelChoices = useMemo(() => [...new Map(rows.map((r) => [r.modelId, r.modelLabel])).entries()], [rows]);
   const curveChoices = useMemo(() => [...new Map(rows.map((r) => [r.curveId, r.curveLabel])).entries()], [rows]);
@@ -66,7 +68,8 @@ export function OverlapPanel() {
     <section className="ax-panel ax-overlap" aria-labelledby="ax-overlap-title">
       <div className="ax-overlap-head">
         <h2 id="ax-overlap-title">Overlap table</h2>
-        <span className="ax-hint">
+        <span className="ax-hint" aria-live="polite">
+          {pending ? "updating… · " : ""}
           {shown.length === rows.length ? `${rows.length} rows` : `${shown.length} of ${rows.length} rows`} · {visibleModels} model{visibleModels === 1 ? "" : "s"} ×{" "}
           {visibleCurves} curve{visibleCurves === 1 ? "" : "s"}
         </span>
@@ -157,7 +160,7 @@ export function OverlapPanel() {
                 </tr>
               </thead>
               <tbody>
-                {shown.map((r) => {
+                {(showAll ? shown : shown.slice(0, ROWS_SHOWN)).map((r) => {
                   const key = rowKey(r);
                   const selected = selectedKey ? rowKey(selectedKey) === key : false;
                   return (
@@ -191,6 +194,14 @@ export function OverlapPanel() {
               </tbody>
             </table>
           </div>
+          {shown.length > ROWS_SHOWN ? (
+            <p className="ax-hint">
+              Showing {showAll ? "all" : `the first ${ROWS_SHOWN}`} of {shown.length} rows (the exports always hold all of them).{" "}
+              <button type="button" onClick={() => setShowAll(!showAll)}>
+                {showAll ? `Show the first ${ROWS_SHOWN}` : "Show all"}
+              </button>
+            </p>
+          ) : null}
           <p className="ax-hint">Click a row to highlight its interval on the figure. Curves are interpolated linearly in log–log between their points; nothing is claimed outside a curve&apos;s mass range.</p>
         </>
       )}

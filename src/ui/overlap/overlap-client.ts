@@ -1,0 +1,124 @@
+// Main-thread side of the overlap table: computes the rows in a Web Worker (each curve array is copied
+// to the worker once and then named by id), and on the calling thread where Workers do not exist (jsdom)
+// or the worker fails to start. `useOverlapRows` gives the rows for the current models, curves and constants.
+import { useEffect, useMemo, useRef, useState } from "react";
+import { overlapTable, type OverlapRow } from "../../data";
+import type { Curve, Model, PhysicsSettings, Project } from "../../data/types";
+import { useAxband } from "../store";
+
+type CurveMeta = Omit<Curve, "massEv" | "gInvGeV">;
+
+export interface OverlapRequest {
+  id: number;
+  project: Omit<Project, "curves"> & { curves: { meta: CurveMeta; massRef: number; gRef: number }[] };
+  /** Arrays the worker has not seen yet, by id. */
+  arrays: [number, Float64Array][];
+  /** Every array id still in use (the worker forgets the others). */
+  keep: number[];
+}
+
+export type OverlapResponse = { id: number; ok: true; rows: OverlapRow[] } | { id: number; ok: false; error: string };
+
+let worker: Worker | null = null;
+let broken = false;
+let nextJob = 1;
+let nextArray = 1;
+const arrayIds = new WeakMap<Float64Array, number>();
+let workerHas = new Set<number>();
+const waiting = new Map<number, { resolve: (rows: OverlapRow[]) => void; fallback: () => void }>();
+
+/** True when the overlap table is computed in a Web Worker here. */
+export function overlapWorkerAvailable(): boolean {
+  return !broken && typeof Worker === "function";
+}
+
+function getWorker(): Worker | null {
+  if (!overlapWorkerAvailable()) return null;
+  if (worker) return worker;
+  try {
+    worker = new Worker(new URL("./overlap-worker.ts", import.meta.url), { type: "module" });
+  } catch {
+    broken = true;
+    return null;
+  }
+  worker.onmessage = (ev: MessageEvent<OverlapResponse>) => {
+    const job = waiting.get(ev.data.id);
+    if (!job) return;
+    waiting.delete(ev.data.id);
+    if (ev.data.ok) job.resolve(ev.data.rows);
+    else job.fallback();
+  };
+  worker.onerror = (ev) => {
+    ev.preventDefault?.();
+    broken = true;
+    worker?.terminate();
+    worker = null;
+    workerHas = new Set();
+    const jobs = [...waiting.values()];
+    waiting.clear();
+    for (const j of jobs) j.fallback();
+  };
+  return worker;
+}
+
+function arrayId(a: Float64Array): number {
+  let id = arrayIds.get(a);
+  if (id === undefined) {
+    id = nextArray++;
+    arrayIds.set(a, id);
+  }
+  return id;
+}
+
+/** The overlap rows of a project, from the worker when there is one. Never rejects. */
+export function computeOverlapRows(project: Project): Promise<OverlapRow[]> {
+  const local = () => Promise.resolve().then(() => overlapTable(project));
+  const w = getWorker();
+  if (!w) return local();
+  const fresh: [number, Float64Array][] = [];
+  const keep: number[] = [];
+  const curves = project.curves.map(({ massEv, gInvGeV, ...meta }) => {
+    const massRef = arrayId(massEv);
+    const gRef = arrayId(gInvGeV);
+    for (const [id, a] of [
+      [massRef, massEv],
+      [gRef, gInvGeV],
+    ] as const) {
+      keep.push(id);
+      if (!workerHas.has(id)) fresh.push([id, a]);
+    }
+    return { meta, massRef, gRef };
+  });
+  const id = nextJob++;
+  return new Promise<OverlapRow[]>((resolve) => {
+    waiting.set(id, { resolve, fallback: () => resolve(overlapTable(project)) });
+    try {
+      w.postMessage({ id, project: { ...project, curves }, arrays: fresh, keep } satisfies OverlapRequest);
+      for (const [aid] of fresh) workerHas.add(aid);
+      workerHas = new Set(keep.filter((k) => workerHas.has(k)));
+    } catch {
+      waiting.delete(id);
+      resolve(overlapTable(project));
+    }
+  });
+}
+
+/**
+ * The overlap rows for the current models, curves and constants (the figure does not change them), and
+ * whether a newer computation is still running. Synchronous where there is no Worker.
+ */
+export function useOverlapRows(models: Model[], curves: Curve[], physics: PhysicsSettings): { rows: OverlapRow[]; pending: boolean } {
+  const sync = !overlapWorkerAvailable();
+  const syncRows = useMemo(() => (sync ? overlapTable({ ...useAxband.getState().project, models, curves, physics }) : null), [sync, models, curves, physics]);
+  const [state, setState] = useState<{ rows: OverlapRow[]; job: number }>({ rows: [], job: 0 });
+  const latest = useRef(0);
+  useEffect(() => {
+    if (sync) return;
+    const job = ++latest.current;
+    void computeOverlapRows({ ...useAxband.getState().project, models, curves, physics }).then((rows) => {
+      if (latest.current === job) setState({ rows, job });
+    });
+  }, [sync, models, curves, physics]);
+  if (syncRows) return { rows: syncRows, pending: false };
+  return { rows: state.rows, pending: state.job !== latest.current };
+}
