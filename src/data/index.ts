@@ -15,3 +15,4 @@ export * from "./rescale";
 export * from "./curve-export";
 export * from "./sources";
 export * from "./bibtex";
+export * from "./import-options";
