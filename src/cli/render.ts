@@ -7,7 +7,7 @@ import { parseArgs, USAGE } from "./args";
 import { InputError, loadProject } from "./inputs";
 import { pickFallbackFont, pngPixelSize, renderPng } from "./png";
 import { writeAllOrNothing, type OutputFile } from "./write-atomic";
-import { exportFigureSvg, exportSizeInches } from "../plot/figure-file";
+import { embedProjectInSvg, exportFigureSvg, exportSizeInches } from "../plot/figure-file";
 import { presetOf } from "../plot/layout";
 import { modelsToCsv } from "../plot/model-csv";
 
@@ -54,22 +54,22 @@ export function main(argv: readonly string[], io: Io = consoleIo): number {
     const files: OutputFile[] = [];
     const report: string[] = [];
     const preset = presetOf(project.figure);
+    // One scene for both outputs: the PNG is drawn from the SVG without the (possibly large) project.
+    const bare = opts.out || opts.png ? exportFigureSvg(project, { embedProject: false }) : "";
     if (opts.out) {
-      const svg = exportFigureSvg(project, { embedProject: opts.embed });
+      const svg = opts.embed ? embedProjectInSvg(bare, project) : bare;
       files.push({ path: opts.out, data: svg });
       report.push(
         `wrote ${opts.out} (${size(Buffer.byteLength(svg))}, ${preset.widthPhysical} × ${preset.heightPhysical}, ${project.curves.length} curve(s), ${project.models.length} model(s)${opts.embed ? ", project embedded" : ""})`,
       );
     }
     if (opts.png) {
-      // The drawing is the same with or without the embedded project; rasterise the lighter one.
-      const svg = exportFigureSvg(project, { embedProject: false });
       const inches = exportSizeInches(project);
       const dpi = opts.scale !== undefined ? 96 * opts.scale : opts.dpi;
       const px = pngPixelSize(inches.widthIn, inches.heightIn, dpi);
       const font = pickFallbackFont();
       if (font.note) io.err(`note: ${font.note}`);
-      const png = renderPng(svg, px.widthPx, dpi, font.family);
+      const png = renderPng(bare, px.widthPx, dpi, font.family);
       files.push({ path: opts.png, data: png });
       report.push(`wrote ${opts.png} (${size(png.length)}, ${px.widthPx} × ${px.heightPx} px, ${Math.round(dpi * 100) / 100} dpi)`);
     }

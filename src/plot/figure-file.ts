@@ -61,12 +61,21 @@ export function projectMetadataXml(project: Project): string {
  */
 export function exportFigureSvg(project: Project, opts: ExportSvgOpts = {}): string {
   const svg = writeSvg(exportScene(project, opts));
-  if (!(opts.embedProject ?? true)) return svg;
-  // writeSvg escapes its metadata option as text; our element goes in as markup, right after the root tag
-  // (its content is base64url and fixed attribute values, so it needs no escaping).
+  return (opts.embedProject ?? true) ? embedProjectInSvg(svg, withPreset(project, opts.preset)) : svg;
+}
+
+/**
+ * An SVG written without the project, with the project put into a <metadata> element right after the root
+ * tag (writeSvg escapes its own metadata option as text; ours is markup). exportFigureSvg(p) equals
+ * embedProjectInSvg(exportFigureSvg(p, { embedProject: false }), p), so a caller that needs both (the CLI
+ * rasterises the lighter one) builds the scene once.
+ * @param project the project as exported (its figure preset already set to the export's).
+ */
+export function embedProjectInSvg(svg: string, project: Project): string {
   const rootEnd = svg.indexOf(">", svg.indexOf("<svg")) + 1;
   const nl = svg[rootEnd] === "\n" ? 1 : 0;
-  const meta = `<metadata>${projectMetadataXml(withPreset(project, opts.preset))}</metadata>\n`;
+  // Content is base64url and fixed attribute values: it needs no escaping.
+  const meta = `<metadata>${projectMetadataXml(project)}</metadata>\n`;
   return svg.slice(0, rootEnd + nl) + meta + svg.slice(rootEnd + nl);
 }
 

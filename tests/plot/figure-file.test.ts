@@ -1,7 +1,7 @@
 // Tests for the exported figure file: physical sizes per preset, viewBox, determinism, the embedded project
 // (round trip with curve data, any prefix, damaged or missing payloads) and inert hostile labels.
 import { describe, expect, it } from "vitest";
-import { AXBAND_PROJECT_NS, EMBED_ENCODING, exportFigureSvg, exportSizeInches, extractProjectFromSvg } from "../../src/plot/figure-file";
+import { AXBAND_PROJECT_NS, EMBED_ENCODING, embedProjectInSvg, exportFigureSvg, exportSizeInches, extractProjectFromSvg } from "../../src/plot/figure-file";
 import { projectsEqual, restoreProject } from "../../src/data/schema";
 import type { SizePreset } from "../../src/data/types";
 import { INJECTION_CORPUS, SVG_NS, elementNames, parseXml, shownLabels, texts, unsafeParts, withCorpusLabels } from "../cli/svg-checks";
@@ -66,6 +66,11 @@ describe("exportFigureSvg", () => {
     // "v1." and the base64url alphabet only (RFC 4648 §5), so the payload needs no XML escaping.
     expect(el[0].textContent).toMatch(/^v1\.[A-Za-z0-9_-]+$/);
     expect(exportFigureSvg(canonical(), { embedProject: false })).not.toContain(AXBAND_PROJECT_NS);
+  });
+
+  it("equals the bare SVG with the project embedded afterwards (the CLI builds the scene once)", () => {
+    const p = canonical();
+    expect(embedProjectInSvg(exportFigureSvg(p, { embedProject: false }), p)).toBe(exportFigureSvg(p));
   });
 });
 
