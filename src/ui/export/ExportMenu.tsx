@@ -54,7 +54,7 @@ export function ExportMenu() {
       const { project, svg } = svgNow();
       const name = `${figureBaseName(project.name)}.svg`;
       downloadBlob(name, new Blob([svg], { type: "image/svg+xml" }));
-      pushMessage("status", `Saved ${name} (${size.widthPhysical} × ${size.heightPhysical}; drop it on axband to reopen the project).`);
+      pushMessage("status", `Saved ${name} (${(size.widthMm / 10).toFixed(1)} × ${(size.heightMm / 10).toFixed(1)} cm; drop it on axband to reopen the project).`);
     } catch (e) {
       pushMessage("alert", `The SVG could not be made: ${e instanceof Error ? e.message : String(e)}.`);
     }

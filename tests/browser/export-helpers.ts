@@ -1,0 +1,17 @@
+// Helpers for the export, share and overlap browser tests: catch a download the page starts and read it.
+import { readFileSync } from "node:fs";
+import type { Page } from "playwright-core";
+
+/** Runs `action`, waits for the download it starts, and returns the file's name and bytes. */
+export async function download(page: Page, action: () => Promise<unknown>): Promise<{ name: string; bytes: Buffer }> {
+  const [d] = await Promise.all([page.waitForEvent("download", { timeout: 60_000 }), action()]);
+  const path = await d.path();
+  if (!path) throw new Error(`download ${d.suggestedFilename()} failed: ${await d.failure()}`);
+  return { name: d.suggestedFilename(), bytes: readFileSync(path) };
+}
+
+/** Clicks the export-svg control and returns the SVG text. */
+export async function exportSvg(page: Page): Promise<{ name: string; text: string }> {
+  const { name, bytes } = await download(page, () => page.click('[data-testid="export-svg"]'));
+  return { name, text: bytes.toString("utf8") };
+}
