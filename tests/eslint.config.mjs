@@ -12,7 +12,7 @@ const pureCoreFence = {
 };
 
 export default tseslint.config(
-  { basePath: "..", ignores: ["dist/**", "node_modules/**", "bench/.out/**", "tests/.artifacts/**"] },
+  { ignores: ["**/dist/**", "**/node_modules/**", "**/.out/**", "**/.artifacts/**"] },
   {
     basePath: "..",
     files: ["**/*.{ts,tsx,mjs,js}"],
