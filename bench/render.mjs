@@ -2,7 +2,7 @@
 // reference plotting script (a general plotting library drawing the same curves). Prints medians and ratios,
 // and the thinning error of the exported scene; never passes or fails on the numbers.
 //
-// usage: node bench/render.mjs        (BENCH_RUNS=3 timed runs per variant; inputs made once under bench/.out)
+// usage: node bench/render.mjs [--thinning-only]   (BENCH_RUNS=3 timed runs per variant; inputs made once under bench/.out)
 import { spawnSync } from "node:child_process";
 import { existsSync, mkdirSync, readFileSync, statSync } from "node:fs";
 import { dirname, join, resolve } from "node:path";
@@ -54,9 +54,8 @@ function timed(cmd, args, env = process.env) {
   return ms;
 }
 
-/** Median wall time of RUNS runs (after one untimed warm-up run when `warm`), and the output size. */
-function measure(label, cmd, args, outFile, { warm = false, env } = {}) {
-  if (warm) timed(cmd, args, env);
+/** Median wall time of RUNS runs, and the output size. */
+function measure(label, cmd, args, outFile, { env } = {}) {
   const times = [];
   for (let i = 0; i < RUNS; i++) times.push(timed(cmd, args, env));
   const bytes = statSync(outFile).size;
@@ -74,24 +73,50 @@ function findPython() {
 
 // ------------------------------------------------------------------------------------------ thinning error
 
-/** Polylines of an SVG path made of M, L and Z commands (what the plot core writes). */
+/** Polylines (absolute px) of SVG path data with M/L/H/V/Z commands, absolute or relative (what the plot core writes). */
 function polylines(d) {
   const out = [];
   let cur = null;
-  for (const m of d.matchAll(/([MLZ])\s*(?:(-?[\d.]+(?:e-?\d+)?)[ ,](-?[\d.]+(?:e-?\d+)?))?/gi)) {
-    const cmd = m[1].toUpperCase();
-    if (cmd === "Z") {
-      if (cur && cur.length) cur.push(cur[0], cur[1]);
-      continue;
+  let x = 0;
+  let y = 0;
+  let sx = 0;
+  let sy = 0;
+  let cmd = "M";
+  let nums = [];
+  const flush = () => {
+    const rel = cmd === cmd.toLowerCase();
+    const C = cmd.toUpperCase();
+    if (C === "Z") {
+      if (cur) cur.push(sx, sy);
+      x = sx;
+      y = sy;
+      return;
     }
-    const x = Number(m[2]);
-    const y = Number(m[3]);
-    if (cmd === "M" || !cur) {
-      cur = [];
-      out.push(cur);
+    const step = C === "H" || C === "V" ? 1 : 2;
+    for (let i = 0; i + step <= nums.length; i += step) {
+      if (C === "H") x = rel ? x + nums[i] : nums[i];
+      else if (C === "V") y = rel ? y + nums[i] : nums[i];
+      else {
+        x = rel ? x + nums[i] : nums[i];
+        y = rel ? y + nums[i + 1] : nums[i + 1];
+      }
+      if (C === "M" && i === 0) {
+        cur = [];
+        out.push(cur);
+        sx = x;
+        sy = y;
+      }
+      cur?.push(x, y);
     }
-    cur.push(x, y);
+  };
+  for (const m of d.matchAll(/([MmLlHhVvZz])|(-?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?)/g)) {
+    if (m[1]) {
+      flush();
+      cmd = m[1];
+      nums = [];
+    } else nums.push(Number(m[2]));
   }
+  flush();
   return out;
 }
 
@@ -112,7 +137,7 @@ function segDist(px, py, ax, ay, bx, by) {
  * point only looks at nearby segments; beyond 4 px it counts as 4 px (reported as "≥").
  */
 function thinningError(fullScene, thinScene) {
-  const nodesOf = (scene) => new Map(scene.layers.flatMap((l) => l.nodes).filter((n) => n.kind === "path" && /^curve-\d+-(line|region)$/.test(n.id ?? "")).map((n) => [n.id, n.d]));
+  const nodesOf = (scene) => new Map(scene.layers.flatMap((l) => l.nodes).filter((n) => n.kind === "path" && /^curve-\d+-/.test(n.id ?? "")).map((n) => [n.id, n.d]));
   const full = nodesOf(fullScene);
   const thin = nodesOf(thinScene);
   const { x: X0, y: Y0, w: W, h: H } = fullScene.plot;
@@ -173,7 +198,7 @@ async function measureThinning(manifest) {
   const { loadProject } = await import("../src/cli/inputs.ts");
   const { buildScene } = await import("../src/plot/scene.ts");
   const { presetOf } = await import("../src/plot/layout.ts");
-  const { EXPORT_RESOLUTION } = await import("../src/plot/figure-file.ts");
+  const { EXPORT_RESOLUTION, rasterResolution } = await import("../src/plot/figure-file.ts");
   const args = parseArgs(cliArgs(manifest, join(OUT, "unused.svg")).slice(3));
   if (!args.ok) throw new Error(args.error);
   const { project } = loadProject(args.options);
@@ -181,9 +206,11 @@ async function measureThinning(manifest) {
   const base = { widthPx: size.widthPx, heightPx: size.heightPx };
   const full = buildScene(project, { ...base, thin: false });
   const results = [];
-  for (const resolution of [...new Set([1, EXPORT_RESOLUTION])]) {
+  const png300 = rasterResolution(300);
+  for (const resolution of [...new Set([EXPORT_RESOLUTION, 2, png300])]) {
     const e = thinningError(full, buildScene(project, { ...base, resolution }));
-    results.push({ resolution, ...e, used: resolution === EXPORT_RESOLUTION });
+    const used = [resolution === EXPORT_RESOLUTION ? "the SVG export" : "", resolution === png300 ? "a 300 dpi PNG" : ""].filter(Boolean).join(", ");
+    results.push({ resolution, ...e, used, png300: resolution === png300 });
   }
   return { results, size };
 }
@@ -193,18 +220,19 @@ async function measureThinning(manifest) {
 const manifest = ensureCurves();
 console.log(`inputs: ${manifest.curves.length} invented curves × ${POINTS} points (${CURVES}), preset double-column, models E/N = 0, 8/3, 44/3, axes ${MASS_RANGE} eV × ${G_RANGE} GeV^-1; median of ${RUNS} runs`);
 
-const cliEmbed = measure("axband CLI, project embedded (default)", process.execPath, cliArgs(manifest, join(OUT, "cli.svg")), join(OUT, "cli.svg"));
-const cliBare = measure("axband CLI, --no-embed (figure only)", process.execPath, cliArgs(manifest, join(OUT, "cli-noembed.svg"), ["--no-embed"]), join(OUT, "cli-noembed.svg"), { warm: true });
+const thinningOnly = process.argv.includes("--thinning-only");
+const cliEmbed = thinningOnly ? null : measure("axband CLI, project embedded (default)", process.execPath, cliArgs(manifest, join(OUT, "cli.svg")), join(OUT, "cli.svg"));
+const cliBare = thinningOnly ? null : measure("axband CLI, --no-embed (figure only)", process.execPath, cliArgs(manifest, join(OUT, "cli-noembed.svg"), ["--no-embed"]), join(OUT, "cli-noembed.svg"));
 
-const python = findPython();
+const python = thinningOnly ? null : findPython();
 let ref = null;
 if (python) {
   const env = { ...process.env, MPLCONFIGDIR: join(OUT, "mplconfig") };
   // Older OpenBLAS workarounds slow a current numpy; unset both together for the reference only.
   delete env.OPENBLAS_CORETYPE;
   delete env.OPENBLAS_L2_SIZE;
-  ref = measure(`reference script (matplotlib ${python.version}, ${python.py})`, python.py, [join(SHARED, "bench/reference-figure.py"), CURVES, join(OUT, "reference.svg")], join(OUT, "reference.svg"), { warm: true, env });
-} else {
+  ref = measure(`reference script (matplotlib ${python.version}, ${python.py})`, python.py, [join(SHARED, "bench/reference-figure.py"), CURVES, join(OUT, "reference.svg")], join(OUT, "reference.svg"), { env });
+} else if (!thinningOnly) {
   console.log("  reference script: skipped (no python3 with matplotlib; Debian: apt-get install python3-matplotlib)");
 }
 
@@ -220,7 +248,8 @@ try {
   console.log(`thinning error at the export size (${size.widthPhysical} × ${size.heightPhysical}, ${size.widthPx} × ${size.heightPx} scene px), distance from every unthinned point inside the plot to the drawn line:`);
   for (const e of results) {
     console.log(
-      `  resolution ${e.resolution}${e.used ? " (used by the export)" : ""}: max ${e.capped ? "≥ " : ""}${e.max.toFixed(3)} px, mean ${e.mean.toFixed(4)} px over ${e.count} points`,
+      `  resolution ${e.resolution}${e.used ? ` (used by ${e.used})` : ""}: max ${e.capped ? "≥ " : ""}${e.max.toFixed(4)} scene px, mean ${e.mean.toFixed(4)} px over ${e.count} points` +
+        (e.png300 ? `; = ${((e.max * 300) / 96).toFixed(4)} px of the 300 dpi PNG` : ""),
     );
   }
 } catch (e) {

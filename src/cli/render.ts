@@ -7,7 +7,7 @@ import { parseArgs, USAGE } from "./args";
 import { InputError, loadProject } from "./inputs";
 import { pickFallbackFont, pngPixelSize, renderPng } from "./png";
 import { writeAllOrNothing, type OutputFile } from "./write-atomic";
-import { embedProjectInSvg, exportFigureSvg, exportSizeInches } from "../plot/figure-file";
+import { embedProjectInSvg, exportFigureSvg, exportSizeInches, rasterResolution } from "../plot/figure-file";
 import { presetOf } from "../plot/layout";
 import { modelsToCsv } from "../plot/model-csv";
 
@@ -54,8 +54,8 @@ export function main(argv: readonly string[], io: Io = consoleIo): number {
     const files: OutputFile[] = [];
     const report: string[] = [];
     const preset = presetOf(project.figure);
-    // One scene for both outputs: the PNG is drawn from the SVG without the (possibly large) project.
-    const bare = opts.out || opts.png ? exportFigureSvg(project, { embedProject: false }) : "";
+    // The project is embedded into the written SVG only; rasters are drawn from the lighter bare SVG.
+    const bare = opts.out ? exportFigureSvg(project, { embedProject: false }) : "";
     if (opts.out) {
       const svg = opts.embed ? embedProjectInSvg(bare, project) : bare;
       files.push({ path: opts.out, data: svg });
@@ -69,7 +69,10 @@ export function main(argv: readonly string[], io: Io = consoleIo): number {
       const px = pngPixelSize(inches.widthIn, inches.heightIn, dpi);
       const font = pickFallbackFont();
       if (font.note) io.err(`note: ${font.note}`);
-      const png = renderPng(bare, px.widthPx, dpi, font.family);
+      // Thinned for the PNG's own pixels (≤ 0.5 PNG px), not the 96/in scene px of the SVG.
+      const resolution = rasterResolution(dpi);
+      const forPng = bare && resolution === rasterResolution(96) ? bare : exportFigureSvg(project, { embedProject: false, resolution });
+      const png = renderPng(forPng, px.widthPx, dpi, font.family);
       files.push({ path: opts.png, data: png });
       report.push(`wrote ${opts.png} (${size(png.length)}, ${px.widthPx} × ${px.heightPx} px, ${Math.round(dpi * 100) / 100} dpi)`);
     }

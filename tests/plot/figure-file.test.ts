@@ -1,7 +1,7 @@
 // Tests for the exported figure file: physical sizes per preset, viewBox, determinism, the embedded project
 // (round trip with curve data, any prefix, damaged or missing payloads) and inert hostile labels.
 import { describe, expect, it } from "vitest";
-import { AXBAND_PROJECT_NS, EMBED_ENCODING, embedProjectInSvg, exportFigureSvg, exportSizeInches, extractProjectFromSvg } from "../../src/plot/figure-file";
+import { AXBAND_PROJECT_NS, EMBED_ENCODING, EXPORT_RESOLUTION, embedProjectInSvg, rasterResolution, exportFigureSvg, exportSizeInches, extractProjectFromSvg } from "../../src/plot/figure-file";
 import { projectsEqual, restoreProject } from "../../src/data/schema";
 import type { SizePreset } from "../../src/data/types";
 import { INJECTION_CORPUS, SVG_NS, elementNames, parseXml, shownLabels, texts, unsafeParts, withCorpusLabels } from "../cli/svg-checks";
@@ -71,6 +71,17 @@ describe("exportFigureSvg", () => {
   it("equals the bare SVG with the project embedded afterwards (the CLI builds the scene once)", () => {
     const p = canonical();
     expect(embedProjectInSvg(exportFigureSvg(p, { embedProject: false }), p)).toBe(exportFigureSvg(p));
+  });
+});
+
+describe("thinning resolution", () => {
+  it("is 1 column per scene px for the SVG and the PNG's px per scene px for rasters", () => {
+    // 1 CSS px = 1/96 in (CSS Values and Units Level 3, §5.2): 300 dpi is 300/96 = 3.125 PNG px per scene px.
+    expect(EXPORT_RESOLUTION).toBe(1);
+    expect(rasterResolution(300)).toBe(3.125);
+    expect(rasterResolution(192)).toBe(2);
+    expect(rasterResolution(72)).toBe(1);
+    expect(rasterResolution(Number.NaN)).toBe(1);
   });
 });
 
