@@ -8,7 +8,8 @@ import userEvent from "@testing-library/user-event";
 import { ImportControls, ImportDialog } from "../../src/ui/importer/ImportDialog";
 import { useImport } from "../../src/ui/importer/import-store";
 import { useAxband } from "../../src/ui/store";
-import { emptyProject } from "../../src/data/defaults";
+import { defaultProject, emptyProject } from "../../src/data";
+import { exportFigureSvg } from "../../src/plot/figure-file";
 
 function Step() {
   return (
@@ -124,5 +125,35 @@ describe("files", () => {
     expect(texts[2]).toMatch(/^sheet\.csv: .*ZIP/);
     expect(screen.getByTestId("import-confirm")).toBeDisabled();
     expect(useAxband.getState().project.curves).toHaveLength(0);
+  });
+});
+
+describe("dropping files on the page", () => {
+  function drop(files: File[]) {
+    const ev = new Event("drop", { bubbles: true, cancelable: true });
+    Object.defineProperty(ev, "dataTransfer", { value: { types: ["Files"], files, dropEffect: "none" } });
+    window.dispatchEvent(ev);
+    return ev;
+  }
+
+  test("an exported axband SVG reopens its project with a status message", async () => {
+    const saved = { ...defaultProject(), name: "Dropped figure project" };
+    render(<Step />);
+    const ev = drop([new File([exportFigureSvg(saved, { embedProject: true })], "figure.svg", { type: "image/svg+xml" })]);
+    expect(ev.defaultPrevented).toBe(true);
+    await waitFor(() => expect(useAxband.getState().project.name).toBe("Dropped figure project"));
+    expect(useAxband.getState().project.curves.map((c) => c.label)).toEqual(saved.curves.map((c) => c.label));
+    expect(useAxband.getState().ui.messages.at(-1)).toMatchObject({ kind: "status", text: expect.stringContaining("figure.svg") });
+  });
+
+  test("a bad project file gives an alert and changes nothing; a dropped CSV opens the import step", async () => {
+    render(<Step />);
+    const before = useAxband.getState().project;
+    drop([new File(["<svg xmlns='http://www.w3.org/2000/svg'></svg>"], "other.svg"), new File(["1e-6,1e-12\n1e-5,1e-12\n"], "dropped.csv")]);
+    await waitFor(() => expect(useAxband.getState().ui.messages.at(-1)?.kind).toBe("alert"));
+    expect(useAxband.getState().ui.messages.at(-1)?.text).toMatch(/^other\.svg was not opened: .*no axband project/);
+    expect(useAxband.getState().project).toBe(before);
+    await screen.findByTestId("import-detected");
+    expect(screen.getByRole("dialog", { name: "Import curves" }).textContent).toContain("dropped.csv");
   });
 });
