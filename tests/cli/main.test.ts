@@ -1,0 +1,91 @@
+// In-process tests of the renderer's main(): the options the child-process tests do not cover (PNG at 2×,
+// custom size, title, model CSV, missing output directory), with messages captured instead of printed.
+import { describe, expect, it } from "vitest";
+import { existsSync, readFileSync, readdirSync, writeFileSync } from "node:fs";
+import { join } from "node:path";
+import { main } from "../../src/cli/render";
+import { readPngDpi, readPngSize } from "../../src/plot/png-meta";
+import { MODEL_CSV_HEADER } from "../../src/plot/model-csv";
+import { parseXml, texts } from "./svg-checks";
+import { projectFileText, smallProject, tempDir } from "./fixtures";
+
+function run(argv: string[]) {
+  const out: string[] = [];
+  const err: string[] = [];
+  const status = main(argv, { out: (s) => out.push(s), err: (s) => err.push(s) });
+  return { status, out: out.join("\n"), err: err.join("\n") };
+}
+
+function projectIn(dir: string): string {
+  const path = join(dir, "p.axband.json");
+  writeFileSync(path, projectFileText(smallProject()));
+  return path;
+}
+
+describe("main", () => {
+  it("writes a 2× PNG: twice the 96-px-per-inch size, 192 dpi in pHYs", () => {
+    const dir = tempDir();
+    const png = join(dir, "f.png");
+    const r = run([projectIn(dir), "--png", png, "--scale", "2", "--preset", "single-column"]);
+    expect(r.err).toBe("");
+    expect(r.status).toBe(0);
+    const bytes = new Uint8Array(readFileSync(png));
+    // 8.6 cm = 325.04 CSS px at 96/in (CSS Values and Units Level 3, §5.2); 2× → 650 px.
+    expect(readPngSize(bytes).widthPx).toBe(Math.round(((8.6 / 2.54) * 96 * 2)));
+    // 192 dpi = 192 / 0.0254 m = 7559 px/m (ISO/IEC 15948 §11.3.5.3).
+    expect(readPngDpi(bytes)?.pxPerUnitX).toBe(7559);
+  });
+
+  it("draws a custom size with a title, and writes the model CSV", () => {
+    const dir = tempDir();
+    const svg = join(dir, "f.svg");
+    const csv = join(dir, "models.csv");
+    const r = run([projectIn(dir), "-o", svg, "--preset", "custom", "--width-mm", "120", "--height-mm", "75", "--title", "Quick look (invented)", "--models-csv", csv]);
+    expect(r.status).toBe(0);
+    const root = parseXml(readFileSync(svg, "utf8")).documentElement!;
+    expect(root.getAttribute("width")).toBe("12cm");
+    expect(root.getAttribute("height")).toBe("7.5cm");
+    expect(texts(parseXml(readFileSync(svg, "utf8")))).toContain("Quick look (invented)");
+    const text = readFileSync(csv, "utf8");
+    expect(text.split("\n").filter((l) => l === MODEL_CSV_HEADER)).toHaveLength(2);
+    expect(r.out).toMatch(/wrote .*models\.csv/);
+  });
+
+  it("exits 2 without writing when an output directory does not exist", () => {
+    const dir = tempDir();
+    const p = projectIn(dir);
+    const r = run([p, "-o", join(dir, "f.svg"), "--png", join(dir, "no-such-dir", "f.png")]);
+    expect(r.status).toBe(2);
+    expect(r.err).toMatch(/does not exist/);
+    expect(existsSync(join(dir, "f.svg"))).toBe(false);
+    expect(readdirSync(dir)).toEqual(["p.axband.json"]);
+  });
+
+  it("exits 2 on a bad --model and on a CSV with no data rows", () => {
+    const dir = tempDir();
+    const csv = join(dir, "a.csv");
+    writeFileSync(csv, "1e-6,1e-13\n1e-5,2e-13\n");
+    const bad = run([csv, "-o", join(dir, "f.svg"), "--model", "eight thirds"]);
+    expect(bad.status).toBe(2);
+    expect(bad.err).toMatch(/--model eight thirds/);
+    const empty = join(dir, "empty.csv");
+    writeFileSync(empty, "# nothing here\n");
+    const r = run([empty, "-o", join(dir, "f.svg")]);
+    expect(r.status).toBe(2);
+    expect(r.err).toMatch(/empty\.csv/);
+    expect(existsSync(join(dir, "f.svg"))).toBe(false);
+  });
+
+  it("reads CSV units from --mass-unit when the file has no header", () => {
+    const dir = tempDir();
+    const csv = join(dir, "ueV.csv");
+    writeFileSync(csv, "1,1e-13\n10,2e-13\n100,1e-13\n");
+    const svg = join(dir, "f.svg");
+    expect(run([csv, "-o", svg, "--mass-unit", "ueV"]).status).toBe(0);
+    // 1–100 μeV = 10⁻⁶–10⁻⁴ eV: the fitted mass axis spans those decades.
+    const all = texts(parseXml(readFileSync(svg, "utf8"))).join(" ");
+    expect(all).toContain("10−6");
+    expect(all).toContain("10−4");
+    expect(all).not.toContain("10−8");
+  });
+});
