@@ -47,7 +47,12 @@ export const useImport = create<ImportState>()((set, get) => {
     jobs.get(item.key)?.job.cancel();
     const id = ++jobCounter;
     const physics = useAxband.getState().project.physics;
+    // Progress redraws the dialog: at most every 100 ms (and at the end), which is smooth enough for a bar.
+    let lastShown = 0;
     const job = startParse(item.source, parseOptsOf(item, physics), (fraction) => {
+      const now = Date.now();
+      if (fraction < 1 && now - lastShown < 100) return;
+      lastShown = now;
       if (jobs.get(item.key)?.id === id) patchItem(item.key, { progress: fraction });
     });
     jobs.set(item.key, { id, job });
