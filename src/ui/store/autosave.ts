@@ -94,6 +94,16 @@ export function indexedDbCurveStore(dbName = "axband"): CurveDataStore | null {
   };
 }
 
+const NO_DATA = new Float64Array(0);
+
+/**
+ * The localStorage text of a project. The curve arrays are left out before serialising: they are not part of
+ * the text anyway, and converting millions of numbers on every save would stall zooming.
+ */
+function metaOf(project: Project): string {
+  return serializeForStorage({ ...project, curves: project.curves.map((c) => ({ ...c, massEv: NO_DATA, gInvGeV: NO_DATA })) }).meta;
+}
+
 export interface Autosave {
   /** Saves now (cancels a pending debounce); resolves when the curve writes are done. */
   flush(): Promise<void>;
@@ -151,7 +161,7 @@ export function startAutosave(store: StoreApi<AxbandState>, opts: AutosaveOpts =
     if (!local) problem();
     else {
       try {
-        local.setItem(STORAGE_KEY, serializeForStorage(project).meta);
+        local.setItem(STORAGE_KEY, metaOf(project));
       } catch {
         problem();
       }
