@@ -1,15 +1,11 @@
 // Model lines and bands as CSV (m_a, f_a, g_low, g_high) sampled over the figure's mass range, so users can
 // replot the predictions in their own scripts. Pure: a project in, text out; the UI and the CLI save it.
-import { bandEdges, faFromMass, referenceConstants, rationalToNumber, type AxionConstants } from "../physics/index";
-import type { Model, PhysicsSettings, Project } from "../data/types";
+import { bandEdges, faFromMass, rationalToNumber, type AxionConstants } from "../physics/index";
+import type { Model, Project } from "../data/types";
+import { constantsOf } from "./physics-settings";
 
 /** Column header of every block (units in brackets, as the CSV importer reads them). */
 export const MODEL_CSV_HEADER = "m_a [eV],f_a [GeV],g_low [GeV^-1],g_high [GeV^-1]";
-
-/** The constants a project's physics settings stand for (a published set or the user's own). */
-export function constantsOf(physics: PhysicsSettings): AxionConstants {
-  return physics.ref === "custom" ? { ...physics.custom } : referenceConstants(physics.ref);
-}
 
 export interface ModelCsvOpts {
   /** Number of masses, log-uniform over the figure's mass range, ends included. @default 101 */

@@ -125,6 +125,20 @@ describe("modelCsvBlocks", () => {
     expect(spread.text).toContain("theory spread");
   });
 
+  it("uses the project's custom constants", () => {
+    // c_γ = 1.95, the older coefficient behind the often quoted g_γ = −0.97 for E/N = 0 (DESIGN.md §4; PDG
+    // review "Axions and other similar particles", earlier editions, from memory); K = 5.70 μeV (JHEP 01 (2016) 034).
+    const q = project([model("k", "KSVZ-type", "0")]);
+    q.physics = { ref: "custom", custom: { cGamma: 1.95, cGammaSigma: 0.08, kMuEv: 5.7, kMuEvSigma: 0.07, label: "older" } };
+    const b = modelCsvBlocks(q, { points: 3 }).blocks[0];
+    expect(b.text).toContain("c_gamma = 1.95");
+    for (const [m, fa, lo] of rows(b.text)) {
+      expect(m * fa).toBeCloseTo(5.7e6, 0);
+      // α/(2π f_a)·|0 − 1.95| with α from CODATA 2018: g_γ = −0.975 → |g_γ|·2α/(π·2 f_a).
+      expect(lo / ((7.2973525693e-3 / (2 * Math.PI * fa)) * 1.95)).toBeCloseTo(1, 10);
+    }
+  });
+
   it("skips hidden models unless asked and reports unreadable E/N", () => {
     const q = project([model("h", "hidden", "1", "1", { visible: false }), model("x", "broken", "eight thirds")]);
     const r = modelCsvBlocks(q);
