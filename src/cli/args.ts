@@ -146,7 +146,7 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
       else o.skipBadRows = true;
       continue;
     }
-    if (!WITH_VALUE.has(name)) return { ok: false, error: `unknown option ${name} (see --help)` };
+    if (!WITH_VALUE.has(name)) return { ok: false, error: `unknown option ${name}` };
     let value: string;
     if (eq > 0) value = arg.slice(eq + 1);
     else {
@@ -217,7 +217,7 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
     role: roleCount > 0 ? roles[roleCount - 1] : (roles[0] ?? "exclusion"),
   }));
   if (o.help) return { ok: true, options: o };
-  if (o.inputs.length === 0) return { ok: false, error: "no input file (a .axband.json project, an exported .svg, or CSV files; see --help)" };
+  if (o.inputs.length === 0) return { ok: false, error: "no input file (a .axband.json project, an exported .svg, or CSV files)" };
   if (!o.out && !o.png && !o.modelsCsv) return { ok: false, error: "nothing to write: give -o FILE.svg, --png FILE.png or --models-csv FILE.csv" };
   const projects = o.inputs.filter((f) => f.kind !== "csv");
   if (projects.length > 0 && o.inputs.length > 1) {
