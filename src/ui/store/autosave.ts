@@ -227,13 +227,19 @@ export async function restoreAutosave(store: StoreApi<AxbandState>, opts: Autosa
   }
   const r = deserializeFromStorage(text, data);
   if (!r.ok) {
-    store.getState().pushMessage("alert", `${r.error} Starting from the demo project.`);
+    store.getState().pushMessage("alert", `${sentence(r.error)} Starting from the demo project.`);
     return null;
   }
   if (r.repairs.length > 0) {
     store.getState().pushMessage("alert", `The autosaved project was restored with changes: ${r.repairs.join("; ")}.`);
   }
   return r.project;
+}
+
+/** Text ending with exactly one full stop. */
+function sentence(text: string): string {
+  const t = text.trim();
+  return /[.!?]$/.test(t) ? t : `${t}.`;
 }
 
 export interface StartOpts extends AutosaveOpts {
@@ -255,9 +261,11 @@ export async function initProject(store: StoreApi<AxbandState>, opts: StartOpts 
   if (!fragment) return;
   const r = decodeLink(fragment);
   if (r.ok) {
-    store.getState().replaceProject(r.project, "Opened the project from the link. Undo returns to your previous project.");
+    const left = r.omittedCurveCount;
+    const note = left > 0 ? ` The link leaves out the data of ${left === 1 ? "one curve" : `${left} curves`}; ask the sender for the project file to see ${left === 1 ? "it" : "them"}.` : "";
+    store.getState().replaceProject(r.project, `Opened the project from the link. Undo returns to your previous project.${note}`);
   } else {
-    store.getState().pushMessage("alert", `This link could not be opened: ${r.error}. Your previous project is unchanged.`);
+    store.getState().pushMessage("alert", `This link could not be opened: ${sentence(r.error)} Your previous project is unchanged.`);
   }
   (opts.clearFragment ?? (() => loc && history.replaceState(null, "", loc.pathname + loc.search)))();
 }
