@@ -1141,6 +1141,8 @@ export interface ParseSourceHooks {
   signal?: AbortSignal;
   /** Characters per slice of a string source. @default 1 << 20 */
   sliceChars?: number;
+  /** Bytes per slice of a Blob/File source. @default 1 << 20 */
+  blobSliceBytes?: number;
   /** Give the event loop a turn after this much work, so cancel and other messages get through. @default 50 */
   yieldMs?: number;
 }
@@ -1222,19 +1224,13 @@ export async function parseCurveSource(
   const parser = createCurveParser({ sizeHint: size, ...opts });
 
   if (source instanceof Blob) {
-    const reader = source.stream().getReader();
-    let read = 0;
-    try {
-      for (;;) {
-        const { done: end, value } = await reader.read();
-        if (end) break;
-        read += value.byteLength;
-        parser.push(decoder.decode(value, { stream: true }));
-        await step(parser, read / size);
-      }
-    } finally {
-      if (signal?.aborted) reader.cancel().catch(() => undefined);
-      reader.releaseLock();
+    // 1 MB slices: fewer round trips to the blob store than a stream's 64 KB chunks, still a smooth progress bar.
+    const slice = hooks.blobSliceBytes ?? 1 << 20;
+    for (let i = 0; i < size; i += slice) {
+      const bytes = new Uint8Array(await source.slice(i, Math.min(size, i + slice)).arrayBuffer());
+      if (signal?.aborted) throw new ImportCancelled();
+      parser.push(decoder.decode(bytes, { stream: true }));
+      await step(parser, Math.min(1, (i + slice) / size));
     }
   } else {
     const bytes = source instanceof Uint8Array ? source : new Uint8Array(source);
