@@ -34,9 +34,12 @@ describe("parseCurveSource", () => {
     expect(r.massUnit).toBe("ueV");
     expect(r.massEv.length).toBe(10);
   });
-  test("a Blob (File) read as a stream", async () => {
-    const r = await parseCurveSource(new Blob([text]), { fileName: "t.csv" });
-    same(r, reference);
+  test("a Blob (File) read in slices, also slices that cut a line or a multi-byte μ", async () => {
+    same(await parseCurveSource(new Blob([text]), { fileName: "t.csv" }), reference);
+    same(await parseCurveSource(new Blob([text]), { fileName: "t.csv" }, { blobSliceBytes: 1000 }), reference);
+    const mu = await parseCurveSource(new Blob(["m [\u03bceV],g\n1,2\n"]), {}, { blobSliceBytes: 4 });
+    expect(mu.massUnit).toBe("ueV");
+    expect(Array.from(mu.massEv)).toEqual([1e-6]);
   });
   test("UTF-16LE with BOM (spreadsheet 'Unicode text' export) is decoded", async () => {
     const s = "\uFEFFm [ueV]\tg\r\n1\t2\r\n";
