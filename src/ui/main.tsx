@@ -8,7 +8,12 @@ import "./styles.css";
 
 async function start() {
   // Restore before saving starts, so the demo project never overwrites a saved one.
-  await initProject(useAxband);
+  try {
+    await initProject(useAxband);
+  } catch (e) {
+    // The app must open even when restoring fails in an unforeseen way; the demo project is already loaded.
+    useAxband.getState().pushMessage("alert", `The saved project could not be restored (${e instanceof Error ? e.message : String(e)}).`);
+  }
   startAutosave(useAxband);
   createRoot(document.getElementById("root")!).render(
     <StrictMode>

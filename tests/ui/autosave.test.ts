@@ -173,6 +173,25 @@ describe("restoring", () => {
     expect(alerts[0].text).toContain("Demo c2 (invented)");
   });
 
+  test("a blocked IndexedDB does not keep the app from starting: the curve is left out after a wait", async () => {
+    const auto = startAutosave(store, { local, curves });
+    store.getState().addModel({ eOverNMin: "2/3", label: "kept" });
+    store.getState().addCurves([curve("c1")]);
+    await auto.flush();
+    auto.stop();
+    const blocked: CurveDataStore = { put: async () => {}, get: () => new Promise(() => {}), delete: async () => {} };
+    const next = createAxbandStore();
+    let done = false;
+    const started = initProject(next, { local, curves: blocked, fragment: "" }).then(() => (done = true));
+    await vi.advanceTimersByTimeAsync(1000);
+    expect(done).toBe(false);
+    await vi.advanceTimersByTimeAsync(5000);
+    await started;
+    expect(next.getState().project.models.some((m) => m.label === "kept")).toBe(true);
+    expect(next.getState().project.curves).toEqual([]);
+    expect(next.getState().ui.messages.filter((m) => m.kind === "alert")).toHaveLength(1);
+  });
+
   test("unreadable saved text gives one alert and the default project", async () => {
     local.items.set(STORAGE_KEY, "{not json");
     const next = createAxbandStore();

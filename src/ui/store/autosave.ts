@@ -194,6 +194,25 @@ export function startAutosave(store: StoreApi<AxbandState>, opts: AutosaveOpts =
   };
 }
 
+/** How long start-up waits for one curve's data (a blocked IndexedDB must not keep the app from starting). */
+const CURVE_READ_TIMEOUT_MS = 4000;
+
+function withTimeout<T>(p: Promise<T>, ms: number): Promise<T | undefined> {
+  return new Promise((resolve, reject) => {
+    const t = setTimeout(() => resolve(undefined), ms);
+    p.then(
+      (v) => {
+        clearTimeout(t);
+        resolve(v);
+      },
+      (e) => {
+        clearTimeout(t);
+        reject(e);
+      },
+    );
+  });
+}
+
 /** The autosaved project, or null when there is none; problems with it become messages. */
 export async function restoreAutosave(store: StoreApi<AxbandState>, opts: AutosaveOpts = {}): Promise<Project | null> {
   const local = opts.local === undefined ? browserLocalStorage() : opts.local;
@@ -217,7 +236,7 @@ export async function restoreAutosave(store: StoreApi<AxbandState>, opts: Autosa
     await Promise.all(
       [...ids].map(async (id) => {
         try {
-          const d = await curves.get(id);
+          const d = await withTimeout(curves.get(id), CURVE_READ_TIMEOUT_MS);
           if (d && d.massEv instanceof Float64Array && d.gInvGeV instanceof Float64Array) data.push({ id, massEv: d.massEv, gInvGeV: d.gInvGeV });
         } catch {
           // A curve that cannot be read is reported as missing.
