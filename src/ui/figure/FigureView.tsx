@@ -5,7 +5,7 @@ import { useCallback, useEffect, useId, useMemo, useRef, useState, type Keyboard
 import { buildScene } from "../../plot/scene";
 import { presetOf } from "../../plot/layout";
 import type { Scene } from "../../plot/scene-types";
-import { selectHighlight, selectProject, useAxband } from "../store";
+import { selectHighlight, selectHover, selectProject, useAxband } from "../store";
 import { SceneSvg } from "./SceneSvg";
 
 /** Smallest and largest visible span, in decades (keeps zoom away from degenerate or absurd ranges). */
@@ -84,6 +84,24 @@ function insidePlot(scene: Scene, x: number, y: number): boolean {
 function resolutionFor(displayWidthPx: number, sceneWidthPx: number): number {
   const dpr = typeof window !== "undefined" && window.devicePixelRatio > 0 ? window.devicePixelRatio : 1;
   return Math.max(0.25, Math.round(((displayWidthPx || sceneWidthPx) / sceneWidthPx) * dpr * 4) / 4);
+}
+
+/** Thin crosshair at the hover point (screen only; the export has none). Re-renders alone on hover. */
+function Crosshair({ scene }: { scene: Scene }) {
+  const hover = useAxband(selectHover);
+  if (!hover) return null;
+  const { plot, scales } = scene;
+  const [m0, m1] = scales.massDomainEv.map(Math.log10);
+  const [y0, y1] = scales.yDomain.map(Math.log10);
+  const x = plot.x + ((Math.log10(hover.massEv) - m0) / (m1 - m0)) * plot.w;
+  const y = plot.y + plot.h - ((Math.log10(hover.y) - y0) / (y1 - y0)) * plot.h;
+  if (!(x >= plot.x && x <= plot.x + plot.w && y >= plot.y && y <= plot.y + plot.h)) return null;
+  return (
+    <g className="crosshair" pointerEvents="none" aria-hidden="true">
+      <path d={`M${plot.x},${y}H${plot.x + plot.w}M${x},${plot.y}V${plot.y + plot.h}`} stroke="#2b3440" strokeOpacity={0.45} strokeWidth={0.75} strokeDasharray="3 3" fill="none" />
+      <circle cx={x} cy={y} r={2.5} fill="none" stroke="#2b3440" strokeWidth={1} />
+    </g>
+  );
 }
 
 export function FigureView() {
@@ -288,7 +306,9 @@ export function FigureView() {
             useAxband.getState().resetView();
           }}
           onKeyDown={onKeyDown}
-        />
+        >
+          <Crosshair scene={scene} />
+        </SceneSvg>
       </div>
       <p className="figure-hint" id={hintId}>
         Scroll to zoom (Shift: mass axis only, Alt: y axis only), drag to pan, double-click to reset. With the figure focused: + and − zoom, arrow keys pan, 0 resets.

@@ -1,6 +1,6 @@
 // The hover readout under the figure: m_a, the y-view value and g_aγγ, f_a, frequency, the two E/N values
 // whose model lines pass through the point, and the visible curves that exclude, reach or contain it.
-import { useMemo } from "react";
+import { useMemo, type ReactNode } from "react";
 import { eOverNAt, faFromMass, frequencyFromMass } from "../../physics/coupling";
 import { constantsOf } from "../../plot/physics-settings";
 import { viewToG } from "../../plot/scales";
@@ -27,8 +27,17 @@ export function HoverReadout() {
   const g = viewToG(yView, hover.massEv, hover.y, constants);
   const [enLo, enHi] = eOverNAt(hover.massEv, g, { constants });
   const hits = curvesAtPoint(curves, hover.massEv, g);
-  const yName = yView === "normalized" ? "|E/N − c_γ|" : yView === "g-gamma" ? "|g_γ|" : null;
-  const item = (label: string, value: string, testid?: string) => (
+  const yName =
+    yView === "normalized" ? (
+      <>
+        |E/N − c<sub>γ</sub>|
+      </>
+    ) : yView === "g-gamma" ? (
+      <>
+        |g<sub>γ</sub>|
+      </>
+    ) : null;
+  const item = (label: ReactNode, value: string, testid?: string) => (
     <div className="readout-item" data-testid={testid}>
       <span>{label}</span>
       <span>{value}</span>
@@ -36,10 +45,10 @@ export function HoverReadout() {
   );
   return (
     <div className="readout" data-testid="hover-readout" aria-live="off">
-      {item("m_a", siFormat(hover.massEv, "eV"), "hover-mass")}
+      {item(<>m<sub>a</sub></>, siFormat(hover.massEv, "eV"), "hover-mass")}
       {yName ? item(yName, sciFormat(hover.y)) : null}
-      {item("g_aγγ", `${sciFormat(g)} GeV⁻¹`, "hover-g")}
-      {item("f_a", `${sciFormat(faFromMass(hover.massEv, { constants }))} GeV`, "hover-fa")}
+      {item(<>g<sub>aγγ</sub></>, `${sciFormat(g)} GeV⁻¹`, "hover-g")}
+      {item(<>f<sub>a</sub></>, `${sciFormat(faFromMass(hover.massEv, { constants }))} GeV`, "hover-fa")}
       {item("frequency", siFormat(frequencyFromMass(hover.massEv), "Hz"), "hover-freq")}
       {item("E/N of lines through it", `${minus(enLo.toPrecision(3))} or ${minus(enHi.toPrecision(3))}`, "hover-eovern")}
       <div className="readout-item readout-wide" data-testid="hover-curves">

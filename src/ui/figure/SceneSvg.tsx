@@ -1,6 +1,6 @@
 // Renders a Scene as React SVG elements, node for node and attribute for attribute as writeSvg writes it
 // (same text placement through placeRuns, same colour sanitising), so the screen matches the export.
-import { memo, useMemo, type SVGProps } from "react";
+import { memo, useMemo, type ReactNode, type SVGProps } from "react";
 import type { PathNode, RectNode, Scene, SceneLayer, SceneNode, TextNode } from "../../plot/scene-types";
 import { placeRuns } from "../../plot/text";
 import { safeColour } from "../../plot/format";
@@ -135,13 +135,15 @@ const Layer = memo(function Layer({ layer, id, nodeIds, clipId }: { layer: Scene
 });
 
 export interface SceneSvgProps extends Omit<SVGProps<SVGSVGElement>, "viewBox"> {
+  /** Screen-only overlays drawn above the scene (never part of the export). */
+  children?: ReactNode;
   scene: Scene;
   /** Prefix of every id (several figures on one page must not share ids). */
   idPrefix: string;
 }
 
 /** The scene as an <svg> with a viewBox in scene px; CSS decides the displayed size. */
-export function SceneSvg({ scene, idPrefix, ...rest }: SceneSvgProps) {
+export function SceneSvg({ scene, idPrefix, children, ...rest }: SceneSvgProps) {
   const ids = useMemo(() => assignIds(scene, idPrefix.replace(ID_SAFE, "_")), [scene, idPrefix]);
   const clipId = ids.clip;
   const { plot } = scene;
@@ -161,6 +163,7 @@ export function SceneSvg({ scene, idPrefix, ...rest }: SceneSvgProps) {
       {scene.layers.map((layer, i) => (
         <Layer key={layer.id} layer={layer} id={ids.layers[i]} nodeIds={ids.nodes[i]} clipId={clipId} />
       ))}
+      {children}
     </svg>
   );
 }
