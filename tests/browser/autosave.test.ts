@@ -7,6 +7,9 @@ import { launchChromium, watchPage, type Watched } from "./chromium";
 import { defaultProject } from "../../src/data/demo";
 import { newModel } from "../../src/data/defaults";
 import { encodeLink } from "../../src/data/link";
+import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
 
 let browser: Browser;
 beforeAll(async () => {
@@ -56,6 +59,35 @@ describe("autosave", () => {
     expect(await page.getByRole("alert").count()).toBe(0);
     expect(watched.consoleErrors).toEqual([]);
     await context.close();
+  });
+
+  test("a curve bigger than one stored chunk (150,000 points) comes back after a reload, drawn the same", async () => {
+    const dir = mkdtempSync(join(tmpdir(), "axband-autosave-"));
+    const file = join(dir, "chunked (invented).csv");
+    // Invented data: 150,000 points over two decades, more than two 65,536-point chunks.
+    const rows = ["# invented for the autosave test; not data from any experiment", "m_a [eV],g [GeV^-1]"];
+    for (let i = 0; i < 150_000; i++) rows.push(`${(2e-6 * 10 ** ((2 * i) / 149_999)).toExponential(10)},${(3e-13 * (1.2 + Math.sin(i / 500))).toExponential(8)}`);
+    writeFileSync(file, rows.join("\n") + "\n");
+    try {
+      const { context, page, watched } = await open();
+      await page.setInputFiles('[data-testid="import-files"]', file);
+      await page.click('[data-testid="import-confirm"]', { timeout: 60_000 });
+      const entry = page.locator('[data-testid="legend"] [data-legend-entry="chunked (invented)"]');
+      await entry.waitFor({ timeout: 60_000 });
+      const curveId = await entry.getAttribute("data-curve-id");
+      const path = page.locator(`[data-testid="plot"] path[data-curve-id="${curveId}"]`).first();
+      const before = await path.getAttribute("d");
+      expect((before ?? "").length).toBeGreaterThan(1000);
+      await page.waitForTimeout(2000); // debounce, then one chunk per task
+      await page.reload({ waitUntil: "networkidle" });
+      await page.locator('[data-testid="legend"] [data-legend-entry="chunked (invented)"]').waitFor();
+      expect(await page.locator(`[data-testid="plot"] path[data-curve-id="${curveId}"]`).first().getAttribute("d")).toBe(before);
+      expect(await page.getByRole("alert").count()).toBe(0);
+      expect(watched.consoleErrors).toEqual([]);
+      await context.close();
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
   });
 
   test("full storage: one alert, and the app keeps working", async () => {

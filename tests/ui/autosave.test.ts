@@ -14,6 +14,9 @@ import {
   type CurveArrays,
   type CurveDataStore,
   type KeyValueStorage,
+  splitChunks,
+  joinChunks,
+  chunkKey,
 } from "../../src/ui/store/autosave";
 import type { Curve } from "../../src/data/types";
 
@@ -254,5 +257,33 @@ describe("full or missing storage", () => {
     await auto.flush();
     expect(store.getState().ui.messages.filter((m) => m.kind === "alert")).toHaveLength(1);
     auto.stop();
+  });
+});
+
+describe("chunked curve records (IndexedDB layout)", () => {
+  test("split and join give back the same numbers, for sizes around the chunk size", () => {
+    for (const n of [0, 1, 9, 10, 11, 35]) {
+      const data = { massEv: Float64Array.from({ length: n }, (_, i) => 1e-6 * (1 + i)), gInvGeV: Float64Array.from({ length: n }, (_, i) => 1e-13 / (1 + i)) };
+      const { head, chunks } = splitChunks(data, 10);
+      expect(head).toEqual({ v: 1, length: n, chunks: Math.ceil(n / 10) });
+      expect(chunks.every((c) => c.massEv.length <= 10 && c.massEv.buffer !== data.massEv.buffer)).toBe(true);
+      const back = joinChunks(head, chunks)!;
+      expect(Array.from(back.massEv)).toEqual(Array.from(data.massEv));
+      expect(Array.from(back.gInvGeV)).toEqual(Array.from(data.gInvGeV));
+    }
+  });
+
+  test("a missing or damaged chunk reads as missing, never as wrong data", () => {
+    const data = { massEv: Float64Array.from({ length: 25 }, (_, i) => i + 1), gInvGeV: Float64Array.from({ length: 25 }, (_, i) => i + 2) };
+    const { head, chunks } = splitChunks(data, 10);
+    expect(joinChunks(head, chunks.slice(0, 2))).toBeUndefined();
+    expect(joinChunks(head, [chunks[0], undefined, chunks[2]])).toBeUndefined();
+    expect(joinChunks({ ...head, length: 24 }, chunks)).toBeUndefined();
+    expect(joinChunks(head, [chunks[0], { massEv: chunks[1].massEv, gInvGeV: new Float64Array(3) }, chunks[2]])).toBeUndefined();
+  });
+
+  test("chunk keys sort in chunk order after the curve's own key and before any other id", () => {
+    const keys = [chunkKey("c1", 10), chunkKey("c1", 2), "c1", "c10", chunkKey("c1", 0)].sort();
+    expect(keys).toEqual(["c1", chunkKey("c1", 0), chunkKey("c1", 2), chunkKey("c1", 10), "c10"]);
   });
 });

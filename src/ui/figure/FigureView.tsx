@@ -1,7 +1,7 @@
 // The interactive figure: the scene of the project (the same one the export writes) drawn as React SVG,
 // with wheel zoom about the cursor, drag to pan, keyboard zoom/pan, double-click reset and a hover point.
 // Zoom and pan go through setView (one undo step per burst) and are batched to one commit per frame.
-import { useCallback, useEffect, useId, useMemo, useRef, useState, type KeyboardEvent, type PointerEvent } from "react";
+import { useCallback, useDeferredValue, useEffect, useId, useMemo, useRef, useState, type KeyboardEvent, type PointerEvent } from "react";
 import { buildScene } from "../../plot/scene";
 import { presetOf } from "../../plot/layout";
 import type { Scene } from "../../plot/scene-types";
@@ -105,8 +105,10 @@ function Crosshair({ scene }: { scene: Scene }) {
 }
 
 export function FigureView() {
-  const project = useAxband(selectProject);
-  const highlight = useAxband(selectHighlight);
+  // Deferred: a big change (a million-point curve arriving) builds the scene in its own task, after the
+  // panels have updated, instead of adding to one long task; zoom steps may skip stale frames.
+  const project = useDeferredValue(useAxband(selectProject));
+  const highlight = useDeferredValue(useAxband(selectHighlight));
   const setHover = useAxband((s) => s.setHover);
   const boxRef = useRef<HTMLDivElement>(null);
   const svgRef = useRef<SVGSVGElement>(null);

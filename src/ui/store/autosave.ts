@@ -55,8 +55,52 @@ function request<T>(r: IDBRequest<T>): Promise<T> {
   });
 }
 
+/** Points per stored chunk: 2 × 8 bytes × 65,536 = 1 MiB, a few ms of structured cloning per put. */
+export const CHUNK_POINTS = 65_536;
+
+/** The record stored under a curve's id; its data follow in `chunks` records keyed by {@link chunkKey}. */
+export interface ChunkedHead {
+  v: 1;
+  length: number;
+  chunks: number;
+}
+
+/** Key of chunk k of a curve ("\u0000" cannot appear in ids the app makes, and sorts first). */
+export function chunkKey(id: string, k: number): string {
+  return `${id}\u0000${String(k).padStart(6, "0")}`;
+}
+
+/** A curve's arrays cut into copies of at most `size` points (copies, so each clones only its own bytes). */
+export function splitChunks(data: CurveArrays, size = CHUNK_POINTS): { head: ChunkedHead; chunks: CurveArrays[] } {
+  const n = Math.min(data.massEv.length, data.gInvGeV.length);
+  const chunks: CurveArrays[] = [];
+  for (let i = 0; i < n; i += size) chunks.push({ massEv: data.massEv.slice(i, i + size), gInvGeV: data.gInvGeV.slice(i, i + size) });
+  return { head: { v: 1, length: n, chunks: chunks.length }, chunks };
+}
+
+/** The arrays back from their chunks; undefined when a chunk is missing or the sizes disagree. */
+export function joinChunks(head: ChunkedHead, chunks: (CurveArrays | undefined)[]): CurveArrays | undefined {
+  if (chunks.length !== head.chunks) return undefined;
+  const massEv = new Float64Array(head.length);
+  const gInvGeV = new Float64Array(head.length);
+  let o = 0;
+  for (const c of chunks) {
+    if (!c || !(c.massEv instanceof Float64Array) || !(c.gInvGeV instanceof Float64Array) || c.massEv.length !== c.gInvGeV.length) return undefined;
+    if (o + c.massEv.length > head.length) return undefined;
+    massEv.set(c.massEv, o);
+    gInvGeV.set(c.gInvGeV, o);
+    o += c.massEv.length;
+  }
+  return o === head.length ? { massEv, gInvGeV } : undefined;
+}
+
+/** Lets other work run between two chunk writes (structured cloning happens synchronously in put). */
+const nextTask = () => new Promise<void>((resolve) => setTimeout(resolve, 0));
+
 /**
  * Curve arrays in IndexedDB (database "axband", object store "curves"); null when IndexedDB is missing.
+ * A curve is written as ~1 MiB chunks, one per task, so a million-point curve never blocks the page for
+ * long; its head record is written last, so an interrupted write reads back as missing, never as wrong.
  * @param dbName @default "axband"
  */
 export function indexedDbCurveStore(dbName = "axband"): CurveDataStore | null {
@@ -83,14 +127,29 @@ export function indexedDbCurveStore(dbName = "axband"): CurveDataStore | null {
     });
     return result;
   };
+  const chunkRange = (id: string) => IDBKeyRange.bound(`${id}\u0000`, `${id}\u0001`, false, true);
+  const remove = async (id: string) => {
+    await tx("readwrite", (s) => s.delete(id));
+    await tx("readwrite", (s) => s.delete(chunkRange(id)));
+  };
   return {
     put: async (id, data) => {
-      await tx("readwrite", (s) => s.put({ massEv: data.massEv, gInvGeV: data.gInvGeV }, id));
+      const { head, chunks } = splitChunks(data);
+      await remove(id);
+      for (let k = 0; k < chunks.length; k++) {
+        if (k > 0) await nextTask();
+        const c = chunks[k];
+        await tx("readwrite", (s) => s.put({ massEv: c.massEv, gInvGeV: c.gInvGeV }, chunkKey(id, k)));
+      }
+      await tx("readwrite", (s) => s.put(head, id));
     },
-    get: async (id) => (await tx("readonly", (s) => s.get(id))) as CurveArrays | undefined,
-    delete: async (id) => {
-      await tx("readwrite", (s) => s.delete(id));
+    get: async (id) => {
+      const head = (await tx("readonly", (s) => s.get(id))) as Partial<ChunkedHead> | undefined;
+      if (!head || head.v !== 1 || typeof head.length !== "number" || typeof head.chunks !== "number") return undefined;
+      const chunks = (await tx("readonly", (s) => s.getAll(chunkRange(id)))) as (CurveArrays | undefined)[];
+      return joinChunks(head as ChunkedHead, chunks);
     },
+    delete: remove,
   };
 }
 
