@@ -3,7 +3,7 @@
 import type { Curve, YView } from "../data/types";
 import type { AxionConstants } from "../physics/constants";
 import type { PathNode } from "./scene-types";
-import { curvePixels, pathData, prepareCurve, type PreparedCurve } from "./decimate";
+import { curvePixels, pathDataCompact, prepareCurve, type PreparedCurve } from "./decimate";
 import { dashFor, r2, safeColour, unitInterval } from "./format";
 import { viewTransform, type LogAffine } from "./scales";
 import { rescaleFactor } from "./physics-settings";
@@ -62,16 +62,16 @@ export function curveGeometry(curve: Curve, f: CurveFrame, nodeId: string): Curv
   const lines: PathNode[] = [];
   const out: CurveGeometry = { role: curve.role, skipped: prep.skipped, drawn: pl.n, fills, lines };
   if (pl.n === 0) return out;
-  const line = pathData(pl);
   if (curve.role === "exclusion") {
+    // One path, filled and stroked: the curve, then up past the plot top (outside the clip) and back. Its
+    // stroke also marks the vertical ends of the excluded region where they lie inside the plot.
     const topY = r2(f.plot.y - 4 * lw - 2);
-    const closeUp = `L${r2(pl.xs[pl.n - 1])} ${topY}L${r2(pl.xs[0])} ${topY}`;
-    fills.push({ kind: "path", id: `${nodeId}-fill`, d: pathData(pl, closeUp) + "Z", fill: colour, fillOpacity: opacity, data: { ...data } });
-    lines.push({ kind: "path", id: `${nodeId}-line`, d: line, stroke: colour, strokeWidth: lw, dash, fill: "none", data: { ...data } });
+    const closeUp = `L${r2(pl.xs[pl.n - 1])} ${topY}L${r2(pl.xs[0])} ${topY}Z`;
+    fills.push({ kind: "path", id: `${nodeId}-exclusion`, d: pathDataCompact(pl, closeUp), fill: colour, fillOpacity: opacity, stroke: colour, strokeWidth: lw, dash, data: { ...data } });
   } else if (curve.role === "projection") {
-    lines.push({ kind: "path", id: `${nodeId}-line`, d: line, stroke: colour, strokeWidth: lw, dash, fill: "none", data: { ...data } });
+    lines.push({ kind: "path", id: `${nodeId}-line`, d: pathDataCompact(pl), stroke: colour, strokeWidth: lw, dash, fill: "none", data: { ...data } });
   } else {
-    fills.push({ kind: "path", id: `${nodeId}-region`, d: line, fill: colour, fillOpacity: opacity, stroke: colour, strokeWidth: lw, dash, data: { ...data } });
+    fills.push({ kind: "path", id: `${nodeId}-region`, d: pathDataCompact(pl), fill: colour, fillOpacity: opacity, stroke: colour, strokeWidth: lw, dash, data: { ...data } });
   }
   return out;
 }

@@ -1,6 +1,7 @@
 // Curves at pixel resolution: per-curve cached log10 arrays, column thinning (first/min/max/last per pixel
 // column, with a block min/max pyramid so zoomed-out redraws skip most points), Douglas–Peucker importance
 // for unsorted curves and regions, and clipping to a generous rectangle so no coordinate gets huge.
+import { beginPath, CH, finishPath, writeAscii, writeChar, writeHundredths } from "./path-writer";
 
 /** Points of one curve in log10, in drawing order, with the derived arrays of each y view. */
 export interface PreparedCurve {
@@ -23,6 +24,49 @@ interface ViewArrays {
   pyramid: Pyramid | null;
   /** Douglas–Peucker importance in (lm, v) space (unsorted curves and regions). */
   importance: Float64Array | null;
+  /** Per chunk of {@link BOX_CHUNK} points: lm min, lm max, v min, v max (unsorted curves), for culling. */
+  boxes: Float64Array | null;
+  /** Selections of unsorted curves per tolerance level (see {@link curvePixels}), most recent last. */
+  levels: Map<string, LevelSelection>;
+  /** Unsorted curves: indices by decreasing importance, and the importances in that order. */
+  order: Int32Array | null;
+  impDesc: Float64Array | null;
+}
+
+/** Kept indices of one tolerance level, with where each chunk's indices start (for culling whole chunks). */
+interface LevelSelection {
+  idx: Int32Array;
+  offsets: Int32Array;
+}
+
+/** Selections cached per curve and view; older levels are dropped beyond this. */
+const MAX_LEVELS = 10;
+
+/** Points per bounding box of an unsorted curve: off-screen boxes are skipped without mapping their points. */
+export const BOX_CHUNK = 64;
+
+function chunkBoxes(lm: Float64Array, v: Float64Array): Float64Array {
+  const nc = Math.ceil(lm.length / BOX_CHUNK);
+  const out = new Float64Array(nc * 4);
+  for (let c = 0; c < nc; c++) {
+    const s = c * BOX_CHUNK;
+    const e = Math.min(lm.length, s + BOX_CHUNK);
+    let a = Infinity;
+    let b = -Infinity;
+    let lo = Infinity;
+    let hi = -Infinity;
+    for (let i = s; i < e; i++) {
+      if (lm[i] < a) a = lm[i];
+      if (lm[i] > b) b = lm[i];
+      if (v[i] < lo) lo = v[i];
+      if (v[i] > hi) hi = v[i];
+    }
+    out[4 * c] = a;
+    out[4 * c + 1] = b;
+    out[4 * c + 2] = lo;
+    out[4 * c + 3] = hi;
+  }
+  return out;
 }
 
 /** Block argmin/argmax of v at levels of 16, 256, 4096, … points. */
@@ -90,11 +134,22 @@ export function viewArrays(prep: PreparedCurve, slope: number, closed: boolean):
       v = new Float64Array(prep.n);
       for (let i = 0; i < prep.n; i++) v[i] = prep.lg[i] + slope * prep.lm[i];
     }
-    va = { v, pyramid: null, importance: null };
+    va = { v, pyramid: null, importance: null, boxes: null, levels: new Map(), order: null, impDesc: null };
     prep.views.set(slope, va);
   }
   if (prep.sorted && !va.pyramid) va.pyramid = buildPyramid(va.v);
-  if (!prep.sorted && !va.importance) va.importance = dpImportance(prep.lm, va.v, closed);
+  if (!prep.sorted && !va.importance) {
+    const imp = dpImportance(prep.lm, va.v, closed);
+    va.importance = imp;
+    va.boxes = chunkBoxes(prep.lm, va.v);
+    const order = new Int32Array(prep.n);
+    for (let i = 0; i < prep.n; i++) order[i] = i;
+    order.sort((a, b) => (imp[a] > imp[b] ? -1 : imp[a] < imp[b] ? 1 : a - b));
+    const impDesc = new Float64Array(prep.n);
+    for (let k = 0; k < prep.n; k++) impDesc[k] = imp[order[k]];
+    va.order = order;
+    va.impDesc = impDesc;
+  }
   return va;
 }
 
@@ -154,7 +209,7 @@ function rangeMinMax(v: Float64Array, pyr: Pyramid | null, lo: number, hi: numbe
   let mx = lo;
   let a = lo + 1;
   let b = hi;
-  if (!pyr || pyr.levels.length === 0 || hi - lo < 2 * BLOCK) {
+  if (!pyr || pyr.levels.length === 0 || hi - lo < 32 * BLOCK) {
     for (let i = a; i < b; i++) {
       const x = v[i];
       if (x < v[mn]) mn = i;
@@ -498,54 +553,308 @@ export interface PixelParams {
 }
 
 /**
- * The pixels of a prepared curve for one frame: sorted curves thinned per column of 1/resolution scene px;
- * unsorted curves and closed regions simplified to ≤ 0.5 device px (Douglas–Peucker, tolerance divided by
- * the larger px-per-decade so it holds on both axes); then clipped to the plot ± 2 plot sizes.
+ * Off-plot culling keeps everything within this many scene px of the plot area, more than half of any
+ * stroke width with round joins, so culling never changes a visible pixel.
+ */
+export const CULL_MARGIN_PX = 16;
+
+let bufX = new Float64Array(4096);
+let bufY = new Float64Array(4096);
+let bufC = new Uint8Array(4096);
+
+function ensureBuffers(n: number): void {
+  if (bufX.length >= n) return;
+  let size = bufX.length;
+  while (size < n) size *= 2;
+  bufX = new Float64Array(size);
+  bufY = new Float64Array(size);
+  bufC = new Uint8Array(size);
+}
+
+/**
+ * Drops, in place, every interior point that lies beyond the same edge of the cull rectangle as the last
+ * kept point and the next point. The removed loop lies in that outer half-plane, so fills (any winding rule)
+ * and strokes inside the rectangle are unchanged — exact culling, not an approximation.
+ * @returns the new count.
+ */
+function cullOutside(n: number, r: Rect): number {
+  if (n <= 2) return n;
+  for (let k = 0; k < n; k++) {
+    const x = bufX[k];
+    const y = bufY[k];
+    bufC[k] = (x < r.x0 ? 1 : x > r.x1 ? 2 : 0) | (y < r.y0 ? 4 : y > r.y1 ? 8 : 0);
+  }
+  let w = 1;
+  let last = bufC[0];
+  for (let k = 1; k < n - 1; k++) {
+    const c = bufC[k];
+    if (last & c & bufC[k + 1]) continue;
+    bufX[w] = bufX[k];
+    bufY[w] = bufY[k];
+    w++;
+    last = c;
+  }
+  bufX[w] = bufX[n - 1];
+  bufY[w] = bufY[n - 1];
+  return w + 1;
+}
+
+/**
+ * Run thinning for curves that are not sorted by mass: consecutive points whose bounding box is at most
+ * `tx` wide (then the run keeps its first, lowest, highest and last point, in order) or at most `ty` tall
+ * (then first, leftmost, rightmost, last). Every removed point lies in its run's box and the kept polyline
+ * crosses that box from one extreme to the other, so old and new are within tx (resp. ty) of each other
+ * (Hausdorff). Works on log coordinates (tx, ty in decades: through the affine maps this is run thinning in
+ * px with τ = tx·bx = ty·|by|) or directly on px.
+ * @returns the kept indices, ascending.
+ */
+export function thinRunsLog(lm: Float64Array, v: Float64Array, tx: number, ty: number): Int32Array {
+  const n = lm.length;
+  const out = new Int32Array(n);
+  let w = 0;
+  let i = 0;
+  while (i < n) {
+    let xmin = lm[i];
+    let xmax = xmin;
+    let ymin = v[i];
+    let ymax = ymin;
+    let ixmin = i;
+    let ixmax = i;
+    let iymin = i;
+    let iymax = i;
+    let j = i + 1;
+    for (; j < n; j++) {
+      const x = lm[j];
+      const y = v[j];
+      const nxmin = x < xmin ? x : xmin;
+      const nxmax = x > xmax ? x : xmax;
+      const nymin = y < ymin ? y : ymin;
+      const nymax = y > ymax ? y : ymax;
+      if (nxmax - nxmin > tx && nymax - nymin > ty) break;
+      if (x < xmin) ixmin = j;
+      else if (x > xmax) ixmax = j;
+      if (y < ymin) iymin = j;
+      else if (y > ymax) iymax = j;
+      xmin = nxmin;
+      xmax = nxmax;
+      ymin = nymin;
+      ymax = nymax;
+    }
+    const last = j - 1;
+    if (last - i < 4) {
+      for (let k = i; k <= last; k++) out[w++] = k;
+    } else {
+      const narrow = xmax - xmin <= tx;
+      const a = narrow ? Math.min(iymin, iymax) : Math.min(ixmin, ixmax);
+      const b = narrow ? Math.max(iymin, iymax) : Math.max(ixmin, ixmax);
+      out[w++] = i;
+      if (a !== i && a !== last) out[w++] = a;
+      if (b !== i && b !== last && b !== a) out[w++] = b;
+      out[w++] = last;
+    }
+    i = j;
+  }
+  return out.slice(0, w);
+}
+
+function levelOf(va: ViewArrays, n: number, key: string, build: () => Int32Array): LevelSelection {
+  const hit = va.levels.get(key);
+  if (hit) {
+    va.levels.delete(key);
+    va.levels.set(key, hit);
+    return hit;
+  }
+  const idx = build();
+  const nc = Math.ceil(n / BOX_CHUNK);
+  const offsets = new Int32Array(nc + 1);
+  let k = 0;
+  for (let c = 0; c <= nc; c++) {
+    const start = c * BOX_CHUNK;
+    while (k < idx.length && idx[k] < start) k++;
+    offsets[c] = k;
+  }
+  const sel = { idx, offsets };
+  va.levels.set(key, sel);
+  if (va.levels.size > MAX_LEVELS) va.levels.delete(va.levels.keys().next().value as string);
+  return sel;
+}
+
+/**
+ * Copies a level's indices into idxScratch, where a chunk whose box lies wholly beyond one edge of the cull
+ * rectangle (log space) contributes only its first and last kept index: exactly what culling would leave
+ * of it, found without mapping its points.
+ */
+function gatherVisible(sel: LevelSelection, boxes: Float64Array, lmLo: number, lmHi: number, vLo: number, vHi: number): number {
+  const { idx, offsets } = sel;
+  let count = 0;
+  const nc = offsets.length - 1;
+  for (let c = 0; c < nc; c++) {
+    const s = offsets[c];
+    const e = offsets[c + 1];
+    if (e === s) continue;
+    const out = boxes[4 * c + 1] < lmLo || boxes[4 * c] > lmHi || boxes[4 * c + 3] < vLo || boxes[4 * c + 2] > vHi;
+    if (out) {
+      count = pushIdx(count, idx[s]);
+      if (e - 1 > s) count = pushIdx(count, idx[e - 1]);
+    } else {
+      for (let k = s; k < e; k++) count = pushIdx(count, idx[k]);
+    }
+  }
+  return count;
+}
+
+/** Map selected indices (idxScratch[0..count)) to pixels in bufX/bufY. */
+function mapSelected(prep: PreparedCurve, v: Float64Array, count: number, p: PixelParams): void {
+  ensureBuffers(count);
+  const { ax, bx, ay, by, yOffset } = p;
+  const lm = prep.lm;
+  for (let k = 0; k < count; k++) {
+    const i = idxScratch[k];
+    bufX[k] = ax + bx * lm[i];
+    bufY[k] = ay + by * (v[i] + yOffset);
+  }
+}
+
+/** Error budget of unsorted curves in device px: Douglas–Peucker alone, or run thinning alone. */
+const DP_ONLY_PX = 0.5;
+const RUNS_PX = 0.5;
+
+/**
+ * The pixels of a prepared curve for one frame.
+ * Sorted curves: per column of 1/resolution scene px the first, lowest, highest and last point, at their
+ * own positions (moving them to the column centre would widen a spike that ends a column into a visible
+ * notch).
+ * Unsorted curves and closed regions: the smaller of Douglas–Peucker at 0.5 device px (smooth outlines) or
+ * run thinning at 0.5 device px (noisy ones); both ≤ 0.5 device px from the full curve. The DP tolerance is
+ * divided by the larger px-per-decade so it holds on both axes.
+ * Then points beyond the plot (+ margin) are culled exactly and the rest clipped to the plot ± 2 plot sizes.
  */
 export function curvePixels(prep: PreparedCurve, closed: boolean, p: PixelParams): Polyline {
   const res = p.resolution && p.resolution > 0 ? p.resolution : 1;
-  const thin = p.thin !== false;
-  const va = thin ? viewArrays(prep, p.slope, closed) : null;
-  let v: Float64Array;
-  let idx: Int32Array | null = null;
-  if (va) {
-    v = va.v;
-    if (prep.sorted) {
-      idx = thinColumns(prep.lm, v, va.pyramid, {
-        lmLo: (p.plot.x - p.ax) / p.bx,
-        lmHi: (p.plot.x + p.plot.w - p.ax) / p.bx,
-        colL0: (p.plot.x - p.ax) / p.bx,
-        colK: p.bx * res,
-      });
-    } else if (va.importance) {
-      const tolPx = 0.5 / res;
-      idx = simplifyIndices(va.importance, tolPx / Math.max(Math.abs(p.bx), Math.abs(p.by)));
-    }
-  } else {
-    v = prep.lg;
-  }
-  const n = idx ? idx.length : prep.n;
-  const xs = new Float64Array(n);
-  const ys = new Float64Array(n);
-  const { ax, bx, ay, by, slope, yOffset } = p;
-  const lm = prep.lm;
-  const lg = prep.lg;
-  const direct = !va && slope !== 0;
-  for (let k = 0; k < n; k++) {
-    const i = idx ? idx[k] : k;
-    xs[k] = ax + bx * lm[i];
-    ys[k] = ay + by * ((direct ? lg[i] + slope * lm[i] : v[i]) + yOffset);
-  }
   const pl = p.plot;
-  const m = 2 * Math.max(pl.w, pl.h);
-  return clipToRect({ xs, ys, n, closed }, { x0: pl.x - m, y0: pl.y - m, x1: pl.x + pl.w + m, y1: pl.y + pl.h + m });
+  const far = 2 * Math.max(pl.w, pl.h);
+  const farRect = { x0: pl.x - far, y0: pl.y - far, x1: pl.x + pl.w + far, y1: pl.y + pl.h + far };
+  const mg = CULL_MARGIN_PX;
+  const cullRect = { x0: pl.x - mg, y0: pl.y - mg, x1: pl.x + pl.w + mg, y1: pl.y + pl.h + mg };
+  let n: number;
+
+  if (p.thin === false) {
+    n = prep.n;
+    ensureBuffers(n);
+    for (let i = 0; i < n; i++) {
+      bufX[i] = p.ax + p.bx * prep.lm[i];
+      bufY[i] = p.ay + p.by * (prep.lg[i] + p.slope * prep.lm[i] + p.yOffset);
+    }
+  } else if (prep.sorted) {
+    const va = viewArrays(prep, p.slope, closed);
+    const colL0 = (pl.x - p.ax) / p.bx;
+    const colK = p.bx * res;
+    const idx = thinColumns(prep.lm, va.v, va.pyramid, { lmLo: colL0, lmHi: (pl.x + pl.w - p.ax) / p.bx, colL0, colK });
+    n = idx.length;
+    idxScratch.set(idx);
+    mapSelected(prep, va.v, n, p);
+    n = cullOutside(n, cullRect);
+  } else {
+    const va = viewArrays(prep, p.slope, closed);
+    const boxes = va.boxes as Float64Array;
+    const lmLo = (cullRect.x0 - p.ax) / p.bx;
+    const lmHi = (cullRect.x1 - p.ax) / p.bx;
+    const vLo = (cullRect.y1 - p.ay) / p.by - p.yOffset;
+    const vHi = (cullRect.y0 - p.ay) / p.by - p.yOffset;
+    const scale = Math.max(Math.abs(p.bx), Math.abs(p.by));
+    const order = va.order as Int32Array;
+    const impDesc = va.impDesc as Float64Array;
+    // Candidate A, Douglas–Peucker: the points above the tolerance are a prefix of the importance order.
+    const tA = DP_ONLY_PX / res / scale;
+    let lo = 0;
+    let hi = impDesc.length;
+    while (lo < hi) {
+      const mid = (lo + hi) >>> 1;
+      if (impDesc[mid] > tA) lo = mid + 1;
+      else hi = mid;
+    }
+    const k = lo;
+    const limit = Math.max(256, 2 * (pl.w + pl.h) * res);
+    // Candidate B for noisy outlines (DP keeps almost everything): run thinning, cached per level with the
+    // run size rounded down to a power of √2 (a finer level keeps a few more points; the bound holds).
+    let selB: LevelSelection | null = null;
+    if (k > limit) {
+      const pow = (t: number) => 2 ** (Math.floor(2 * Math.log2(t)) / 2);
+      const tx = pow(RUNS_PX / res / Math.abs(p.bx));
+      const ty = pow(RUNS_PX / res / Math.abs(p.by));
+      selB = levelOf(va, prep.n, `B${tx},${ty}`, () => thinRunsLog(prep.lm, va.v, tx, ty));
+      if (selB.idx.length >= k) selB = null;
+    }
+    if (!selB) {
+      const sel = order.slice(0, k).sort();
+      ensureBuffers(k);
+      if (idxScratch.length < k) idxScratch = new Int32Array(k * 2);
+      idxScratch.set(sel);
+      n = k;
+    } else {
+      n = gatherVisible(selB, boxes, lmLo, lmHi, vLo, vHi);
+    }
+    mapSelected(prep, va.v, n, p);
+    n = cullOutside(n, cullRect);
+  }
+  return clipToRect({ xs: bufX.slice(0, n), ys: bufY.slice(0, n), n, closed }, farRect);
 }
 
-/** Path data "M x y L x y …" (numbers rounded to 2 decimals), closed with Z for polygons. */
+/** Path data "M x y L x y …" with absolute coordinates rounded to 2 decimals, closed with Z for polygons. */
 export function pathData(poly: Polyline, extra = ""): string {
   const { xs, ys, n } = poly;
   if (n === 0) return "";
-  let d = "M" + Math.round(xs[0] * 100) / 100 + " " + Math.round(ys[0] * 100) / 100;
-  for (let k = 1; k < n; k++) d += "L" + Math.round(xs[k] * 100) / 100 + " " + Math.round(ys[k] * 100) / 100;
-  return d + extra + (poly.closed ? "Z" : "");
+  beginPath();
+  for (let k = 0; k < n; k++) {
+    writeChar(k === 0 ? CH.M : CH.L);
+    writeHundredths(Math.round(xs[k] * 100));
+    writeChar(CH.space);
+    writeHundredths(Math.round(ys[k] * 100));
+  }
+  if (extra) writeAscii(extra);
+  if (poly.closed) writeChar(CH.Z);
+  return finishPath();
+}
+
+/**
+ * Compact path data for long curves: an absolute "M" then relative moves between the positions rounded to
+ * 0.01 px ("l dx dy", or "h dx" / "v dy" when one coordinate repeats), so every vertex lands exactly on its
+ * rounded absolute position (no drift) in about half the characters; repeated vertices are dropped.
+ * @param extra path data appended before the closing Z (absolute commands).
+ */
+export function pathDataCompact(poly: Polyline, extra = ""): string {
+  const { xs, ys, n } = poly;
+  if (n === 0) return "";
+  let px = Math.round(xs[0] * 100);
+  let py = Math.round(ys[0] * 100);
+  beginPath();
+  writeChar(CH.M);
+  writeHundredths(px);
+  writeChar(CH.space);
+  writeHundredths(py);
+  for (let k = 1; k < n; k++) {
+    const qx = Math.round(xs[k] * 100);
+    const qy = Math.round(ys[k] * 100);
+    const dx = qx - px;
+    const dy = qy - py;
+    if (dx === 0) {
+      if (dy !== 0) {
+        writeChar(CH.v);
+        writeHundredths(dy);
+      }
+    } else if (dy === 0) {
+      writeChar(CH.h);
+      writeHundredths(dx);
+    } else {
+      writeChar(CH.l);
+      writeHundredths(dx);
+      if (dy > 0) writeChar(CH.space);
+      writeHundredths(dy);
+    }
+    px = qx;
+    py = qy;
+  }
+  if (extra) writeAscii(extra);
+  if (poly.closed) writeChar(CH.Z);
+  return finishPath();
 }

@@ -79,7 +79,7 @@ export function logTicks(lo: number, hi: number, opts: LogTickOpts): LogTick[] {
   const minorsFit = ppd * Math.log10(10 / 9) >= minorMin;
   let extra = new Set<number>();
   if (labelCount < 2) {
-    for (const set of [[2, 5], [3], [2], [5]]) {
+    for (const set of [[2, 5], [2, 3, 4, 5, 6, 7, 8, 9], [3], [2], [5]]) {
       const values: number[] = [];
       for (let e = Math.floor(l0) - 1; e <= eHi; e++) for (const k of [1, ...set]) values.push(k * decade(e));
       const shown = values.filter(inRange).sort((a, b) => a - b);
@@ -107,15 +107,47 @@ export function logTicks(lo: number, hi: number, opts: LogTickOpts): LogTick[] {
     }
   }
   if (ticks.filter((t) => t.label).length < 2) {
-    // Very narrow range: D3 falls back to linear ticks inside the decade.
-    const n = Math.max(2, Math.floor((ppd * span) / Math.max(needPx * 1.6, 1)));
-    const d3ticks = scaleLog().domain([lo, hi]).ticks(n);
-    const taken = new Set(ticks.map((t) => t.value));
-    for (const v of d3ticks) {
-      if (!inRange(v)) continue;
-      const existing = ticks.find((t) => Math.abs(t.value - v) <= v * EPS);
-      if (existing) existing.label = existing.label ?? format(v);
-      else if (!taken.has(v)) ticks.push({ value: v, major: false, label: format(v) });
+    // Very narrow range: D3's log ticks (linear inside the decade) for a few tick counts, each labelled
+    // greedily left to right where a label does not run into the previous one; the count that gives the
+    // most labels wins.
+    const greedy = (values: number[]) => {
+      const chosen = new Map<number, TextRun[]>();
+      let prevPx = -Infinity;
+      let prevHalf = 0;
+      for (const v of values) {
+        const runs = format(v);
+        const half = opts.labelExtentPx(runs) / 2;
+        const px = ppd * Math.log10(v / lo);
+        if (px - prevPx >= prevHalf + half + gap) {
+          chosen.set(v, runs);
+          prevPx = px;
+          prevHalf = half;
+        }
+      }
+      return chosen;
+    };
+    let best = new Map<number, TextRun[]>();
+    let bestValues: number[] = [];
+    for (const n of [2, 3, 4, 6, 8, 12, 16, 24]) {
+      const values = scaleLog().domain([lo, hi]).ticks(n).filter(inRange);
+      const chosen = greedy(values);
+      if (chosen.size > best.size) {
+        best = chosen;
+        bestValues = values;
+      }
+    }
+    if (best.size >= 2) {
+      const taken = new Map(ticks.map((t) => [t.value, t]));
+      for (const t of ticks) t.label = null;
+      for (const v of bestValues) {
+        let tick = taken.get(v);
+        if (!tick) {
+          tick = { value: v, major: false, label: null };
+          ticks.push(tick);
+          taken.set(v, tick);
+        }
+        tick.label = best.get(v) ?? null;
+      }
     }
   }
   return ticks.sort((a, b) => a.value - b.value);

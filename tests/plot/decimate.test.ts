@@ -8,10 +8,12 @@ import {
   curvePixels,
   dpImportance,
   pathData,
+  pathDataCompact,
   pixelColumn,
   prepareCurve,
   simplifyIndices,
   thinColumns,
+  thinRunsLog,
   viewArrays,
   type PixelParams,
 } from "../../src/plot/index";
@@ -219,6 +221,82 @@ describe("simplification of unsorted curves and closed regions", () => {
       prev = k;
     }
     expect(prev).toBeLessThan(60);
+  });
+});
+
+describe("run thinning and path encoding", () => {
+  test("run thinning of a noisy outline stays within τ of the original, both ways (Hausdorff)", () => {
+    const r = rng(21);
+    const n = 6000;
+    const x = new Float64Array(n);
+    const y = new Float64Array(n);
+    for (let i = 0; i < n; i++) {
+      const t = (2 * Math.PI * i) / n;
+      x[i] = 300 + 200 * Math.cos(t) + 3 * (r() - 0.5); // ±1.5 px noise across the outline
+      y[i] = 200 + 120 * Math.sin(t) + 3 * (r() - 0.5);
+    }
+    const tau = 0.5;
+    const kept = thinRunsLog(x, y, tau, tau);
+    expect(kept.length).toBeLessThan(n);
+    expect(kept[0]).toBe(0);
+    expect(kept[kept.length - 1]).toBe(n - 1);
+    const segDist = (px: number, py: number, k: number) => {
+      const ax = x[kept[k]];
+      const ay = y[kept[k]];
+      const dx = x[kept[k + 1]] - ax;
+      const dy = y[kept[k + 1]] - ay;
+      const l2 = dx * dx + dy * dy;
+      const t = l2 === 0 ? 0 : Math.max(0, Math.min(1, ((px - ax) * dx + (py - ay) * dy) / l2));
+      return Math.hypot(px - ax - t * dx, py - ay - t * dy);
+    };
+    // original → simplified: each original point lies near one of the kept segments of its run (the run
+    // keeps at most 4 points, so the segments within 3 of its position in the order)
+    let k = 0;
+    let worst = 0;
+    for (let i = 0; i < n; i++) {
+      while (k < kept.length - 2 && kept[k + 1] <= i) k++;
+      let d = Infinity;
+      for (let q = Math.max(0, k - 3); q <= Math.min(kept.length - 2, k + 3); q++) d = Math.min(d, segDist(x[i], y[i], q));
+      worst = Math.max(worst, d);
+    }
+    expect(worst).toBeLessThanOrEqual(tau + 1e-9);
+    // simplified → original: every kept segment's midpoint lies within τ of the original polyline
+    for (let q = 0; q + 1 < kept.length; q++) {
+      const mx = (x[kept[q]] + x[kept[q + 1]]) / 2;
+      const my = (y[kept[q]] + y[kept[q + 1]]) / 2;
+      let best = Infinity;
+      for (let i = kept[q]; i < kept[q + 1]; i++) {
+        const dx = x[i + 1] - x[i];
+        const dy = y[i + 1] - y[i];
+        const l2 = dx * dx + dy * dy;
+        const t = l2 === 0 ? 0 : Math.max(0, Math.min(1, ((mx - x[i]) * dx + (my - y[i]) * dy) / l2));
+        best = Math.min(best, Math.hypot(mx - x[i] - t * dx, my - y[i] - t * dy));
+      }
+      expect(best).toBeLessThanOrEqual(tau + 1e-9);
+    }
+  });
+
+  test("compact path data (relative moves) lands on the same rounded vertices as absolute path data", () => {
+    const r = rng(8);
+    const n = 2000;
+    const xs = new Float64Array(n);
+    const ys = new Float64Array(n);
+    for (let i = 0; i < n; i++) {
+      xs[i] = i % 7 === 0 && i > 0 ? xs[i - 1] : 20 + 900 * r();
+      ys[i] = i % 5 === 0 && i > 0 ? ys[i - 1] : -50 + 600 * r();
+    }
+    const poly = { xs, ys, n, closed: true };
+    const abs = parsePath(pathData(poly))[0];
+    const rel = parsePath(pathDataCompact(poly))[0];
+    expect(rel.closed).toBe(true);
+    // repeated vertices are dropped by the compact form; compare the distinct sequence
+    const distinct = abs.points.filter((p, i) => i === 0 || p[0] !== abs.points[i - 1][0] || p[1] !== abs.points[i - 1][1]);
+    expect(rel.points.length).toBe(distinct.length);
+    rel.points.forEach(([x, y], i) => {
+      expect(x).toBeCloseTo(distinct[i][0], 6);
+      expect(y).toBeCloseTo(distinct[i][1], 6);
+    });
+    expect(pathDataCompact(poly).length).toBeLessThan(pathData(poly).length);
   });
 });
 

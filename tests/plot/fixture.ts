@@ -121,22 +121,39 @@ export function textOf(n: TextNode): string {
   return n.runs.map((r) => r.text).join("");
 }
 
-/** Subpaths of "M…L…Z" / "H" / "V" path data as point lists (absolute commands only, as the scene writes them). */
+/**
+ * Subpaths of path data as absolute point lists. Reads the commands the scene writes: M L H V Z (absolute)
+ * and m l h v z (relative), numbers with or without separators before a minus sign.
+ */
 export function parsePath(d: string): { points: [number, number][]; closed: boolean }[] {
   const out: { points: [number, number][]; closed: boolean }[] = [];
-  const re = /([MLHVZ])([^MLHVZ]*)/g;
+  const re = /([MLHVZmlhvz])([^MLHVZmlhvz]*)/g;
   let cur: { points: [number, number][]; closed: boolean } | null = null;
+  let x = 0;
+  let y = 0;
   let m: RegExpExecArray | null;
   while ((m = re.exec(d))) {
     const cmd = m[1];
-    const nums = m[2].trim() ? m[2].trim().split(/[\s,]+/).map(Number) : [];
-    if (cmd === "M") {
-      cur = { points: [[nums[0], nums[1]]], closed: false };
-      out.push(cur);
-    } else if (cmd === "L" && cur) cur.points.push([nums[0], nums[1]]);
-    else if (cmd === "H" && cur) cur.points.push([nums[0], cur.points[cur.points.length - 1][1]]);
-    else if (cmd === "V" && cur) cur.points.push([cur.points[cur.points.length - 1][0], nums[0]]);
-    else if (cmd === "Z" && cur) cur.closed = true;
+    const nums = (m[2].match(/-?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?/gi) ?? []).map(Number);
+    const rel = cmd === cmd.toLowerCase();
+    const C = cmd.toUpperCase();
+    if (C === "Z") {
+      if (cur) cur.closed = true;
+      continue;
+    }
+    const step = C === "H" || C === "V" ? 1 : 2;
+    for (let i = 0; i < nums.length; i += step) {
+      if (C === "H") x = rel ? x + nums[i] : nums[i];
+      else if (C === "V") y = rel ? y + nums[i] : nums[i];
+      else {
+        x = rel ? x + nums[i] : nums[i];
+        y = rel ? y + nums[i + 1] : nums[i + 1];
+      }
+      if (C === "M" && i === 0) {
+        cur = { points: [[x, y]], closed: false };
+        out.push(cur);
+      } else cur?.points.push([x, y]);
+    }
   }
   return out;
 }

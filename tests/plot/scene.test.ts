@@ -146,23 +146,26 @@ describe("model bands", () => {
 });
 
 describe("curves", () => {
-  test("an exclusion is filled from the curve up past the plot top, plus its line; a region is closed", () => {
+  test("an exclusion is one path filled from the curve up past the plot top and stroked; a region is closed", () => {
     const scene = buildScene(fixtureProject());
-    const fill = paths(scene, "curves").find((n) => n.id?.endsWith("-fill"))!;
-    expect(fill.data?.["curve-id"]).toBe("dip");
-    const ys = parsePath(fill.d)[0].points.map(([, y]) => y);
+    const excl = paths(scene, "curves").find((n) => n.id?.endsWith("-exclusion"))!;
+    expect(excl.data?.["curve-id"]).toBe("dip");
+    expect(excl.data?.["curve-role"]).toBe("exclusion");
+    const ys = parsePath(excl.d)[0].points.map(([, y]) => y);
     expect(Math.min(...ys)).toBeLessThan(scene.plot.y);
-    expect(paths(scene, "curves").find((n) => n.id?.endsWith("-line") && n.data?.["curve-id"] === "dip")?.fill).toBe("none");
+    expect(excl.fill).toBe("#D55E00");
+    expect(excl.stroke).toBe("#D55E00");
+    expect(excl.d.endsWith("Z")).toBe(true);
     const region = paths(scene, "curves").find((n) => n.data?.["curve-id"] === "blob")!;
     expect(region.d.endsWith("Z")).toBe(true);
     expect(region.fill).toBe("#009E73");
     expect(region.stroke).toBe("#009E73");
   });
 
-  test("fills come before lines in the curves layer", () => {
+  test("filled curves (exclusions, regions) come before lines (projections) in the curves layer", () => {
     const scene = buildScene(fixtureProject());
     const ids = paths(scene, "curves").map((n) => n.id ?? "");
-    const lastFill = Math.max(...ids.map((id, i) => (id.endsWith("-fill") || id.endsWith("-region") ? i : -1)));
+    const lastFill = Math.max(...ids.map((id, i) => (id.endsWith("-exclusion") || id.endsWith("-region") ? i : -1)));
     const firstLine = ids.findIndex((id) => id.endsWith("-line"));
     expect(lastFill).toBeLessThan(firstLine);
   });
@@ -184,9 +187,10 @@ describe("curves", () => {
     const p = fixtureProject();
     p.curves = [curve({ id: "z", role: "exclusion", massEv: Float64Array.from([1e-6, 2e-6, 3e-6, 4e-6]), gInvGeV: Float64Array.from([1e-13, 0, -1, 2e-13]) })];
     const scene = buildScene(p);
-    const line = paths(scene, "curves").find((n) => n.id?.endsWith("-line"))!;
-    expect(line.d).not.toMatch(/NaN|Infinity/);
-    expect(parsePath(line.d)[0].points.length).toBe(2);
+    const excl = paths(scene, "curves").find((n) => n.id?.endsWith("-exclusion"))!;
+    expect(excl.d).not.toMatch(/NaN|Infinity/);
+    // two data points, then the two points that close the fill above the plot
+    expect(parsePath(excl.d)[0].points.length).toBe(4);
   });
 
   test("hidden curves and models are not drawn and have no legend entry", () => {

@@ -1,8 +1,8 @@
 // Checks of the log axes: decade labels with real superscripts and minus signs, minor ticks at log10(k),
 // label thinning, narrow ranges, and the f_a and frequency top axes against published constants.
 import { describe, expect, test } from "vitest";
-import { buildScene, logTicks, frequencyUnit, massToX, xToMass, yToPx, pxToY, decadeLabelStep, type LogTick } from "../../src/plot/index";
-import { fixtureProject, textNodes, textOf } from "./fixture";
+import { buildScene, logTicks, frequencyUnit, massToX, xToMass, yToPx, pxToY, decadeLabelStep, runsWidthPx, type LogTick } from "../../src/plot/index";
+import { fixtureProject, rng, textNodes, textOf } from "./fixture";
 
 const opts = (pxPerDecade: number) => ({ pxPerDecade, labelExtentPx: () => 20 });
 const labelled = (ticks: LogTick[]) => ticks.filter((t) => t.label);
@@ -71,6 +71,27 @@ describe("decade ticks", () => {
     const lab = labelled(ticks);
     expect(lab.length).toBeGreaterThanOrEqual(2);
     for (const t of lab) expect(t.value).toBeGreaterThanOrEqual(3.1e-6 * (1 - 1e-9));
+  });
+});
+
+describe("labels never collide (common practice: no overlapping tick labels)", () => {
+  test("random narrow and wide ranges at several axis lengths: ≥ 2 labels, spaced by their estimated widths", () => {
+    const r = rng(99);
+    const width = (runs: { text: string; shift?: string }[]) => runsWidthPx(runs as never, 16);
+    for (let i = 0; i < 300; i++) {
+      const lo = 10 ** (-12 + 10 * r());
+      const span = 10 ** (-1.8 + 3 * r()); // 0.016 to 16 decades
+      const hi = lo * 10 ** span;
+      const axisPx = 150 + 900 * r();
+      const ppd = axisPx / span;
+      const ticks = logTicks(lo, hi, { pxPerDecade: ppd, labelExtentPx: width, labelGapPx: 8 });
+      const lab = labelled(ticks);
+      expect(lab.length, `range ${lo}..${hi}`).toBeGreaterThanOrEqual(2);
+      for (let k = 1; k < lab.length; k++) {
+        const dist = ppd * Math.log10(lab[k].value / lab[k - 1].value);
+        expect(dist).toBeGreaterThanOrEqual((width(lab[k].label!) + width(lab[k - 1].label!)) / 2 + 8 - 1e-6);
+      }
+    }
   });
 });
 

@@ -1,0 +1,219 @@
+// Benchmark page: loads the invented benchmark curves, then times zoom steps (buildScene + DOM update +
+// forced geometry) against a plain full-resolution draw of the same data. Driven by bench/redraw.mjs.
+import { buildScene, massScale, yScale, type PathNode, type Scene } from "../../src/plot/index";
+import type { Curve, CurveRole, Model, Project } from "../../src/data/types";
+import { createDomRenderer } from "./render-dom";
+
+interface Manifest {
+  curves: { file: string; kind: string; points: number }[];
+}
+
+const ROLE: Record<string, CurveRole> = { scan: "exclusion", plateau: "exclusion", projection: "projection", region: "region" };
+const COLOURS = ["#D55E00", "#CC79A7", "#E69F00", "#009E73", "#000000", "#56B4E9", "#0072B2", "#F0E442"];
+
+async function loadProject(): Promise<Project> {
+  const manifest: Manifest = await (await fetch("./curves.json")).json();
+  const buf = new Float64Array(await (await fetch("./curves.bin")).arrayBuffer());
+  let off = 0;
+  const curves: Curve[] = manifest.curves.map((c, i) => {
+    const massEv = buf.slice(off, off + c.points);
+    off += c.points;
+    const gInvGeV = buf.slice(off, off + c.points);
+    off += c.points;
+    const role = ROLE[c.kind] ?? "exclusion";
+    return {
+      id: `bench-${i}`,
+      label: `Bench ${c.kind} ${i} (invented)`,
+      role,
+      massEv,
+      gInvGeV,
+      keepOrder: role === "region",
+      colour: COLOURS[i % COLOURS.length],
+      lineStyle: role === "projection" ? "dashed" : "solid",
+      fillOpacity: 0.25,
+      visible: true,
+      rescale: { rhoAssumed: 0.45, rhoShown: 0.45, fraction: 1 },
+      citation: "invented benchmark curve",
+      fileName: c.file,
+    };
+  });
+  const model = (id: string, min: string, max: string, colour: string): Model => ({
+    id,
+    label: `E/N = ${min === max ? min : `${min}..${max}`}`,
+    eOverNMin: min,
+    eOverNMax: max,
+    source: { kind: "typed" },
+    colour,
+    lineStyle: "solid",
+    fillOpacity: 0.2,
+    visible: true,
+    sigmas: 0,
+  });
+  let mLo = Infinity;
+  let mHi = 0;
+  let gLo = Infinity;
+  let gHi = 0;
+  for (const c of curves) {
+    for (let i = 0; i < c.massEv.length; i++) {
+      const m = c.massEv[i];
+      const g = c.gInvGeV[i];
+      if (m < mLo) mLo = m;
+      if (m > mHi) mHi = m;
+      if (g < gLo) gLo = g;
+      if (g > gHi) gHi = g;
+    }
+  }
+  return {
+    version: 1,
+    name: "redraw benchmark",
+    physics: { ref: "2019", custom: { cGamma: 1.92, cGammaSigma: 0.04, kMuEv: 5.691, kMuEvSigma: 0.051, label: "custom" } },
+    models: [model("ksvz", "0", "0", "#117A8B"), model("dfsz", "8/3", "8/3", "#1F4E8C"), model("window", "5/3", "44/3", "#2A9D8F")],
+    curves,
+    figure: {
+      preset: "slide",
+      customWidthMm: 160,
+      customHeightMm: 90,
+      massRangeEv: [mLo / 1.5, mHi * 1.5],
+      yRange: [gLo / 3, gHi * 3],
+      yView: "coupling",
+      topAxis: "fa",
+      grid: true,
+      legend: "outside-right",
+      fontPt: 12,
+      title: "",
+    },
+  };
+}
+
+/** Mass ranges of a zoom in (×0.8 of the span per step) around the middle, then back out. */
+function zoomSequence(full: [number, number], steps: number): [number, number][] {
+  const l0 = Math.log10(full[0]);
+  const l1 = Math.log10(full[1]);
+  const centre = (l0 + l1) / 2 + 0.37;
+  const out: [number, number][] = [];
+  const half = steps / 2;
+  for (let k = 0; k < steps; k++) {
+    const depth = k < half ? k : steps - 1 - k;
+    const span = (l1 - l0) * 0.8 ** depth;
+    out.push([10 ** (centre - span / 2), 10 ** (centre + span / 2)]);
+  }
+  return out;
+}
+
+/** The plain full-resolution draw: every point of every curve through the D3 scales into one path each. */
+function plainScene(project: Project, range: [number, number]): Scene {
+  const hidden = { ...project, curves: project.curves.map((c) => ({ ...c, visible: false })), figure: { ...project.figure, massRangeEv: range } };
+  const scene = buildScene(hidden);
+  const xs = massScale(scene);
+  const ys = yScale(scene);
+  const fills: PathNode[] = [];
+  const lines: PathNode[] = [];
+  project.curves.forEach((c, i) => {
+    let order: number[] | null = null;
+    if (c.role !== "region") {
+      order = Array.from(c.massEv.keys()).sort((a, b) => c.massEv[a] - c.massEv[b]);
+    }
+    let d = "";
+    const n = c.massEv.length;
+    for (let k = 0; k < n; k++) {
+      const j = order ? order[k] : k;
+      d += (k ? "L" : "M") + Math.round(xs(c.massEv[j]) * 100) / 100 + " " + Math.round(ys(c.gInvGeV[j]) * 100) / 100;
+    }
+    if (c.role === "region") fills.push({ kind: "path", id: `curve-${i + 1}-region`, d: d + "Z", fill: c.colour, fillOpacity: 0.25, stroke: c.colour, strokeWidth: 1.8 });
+    else {
+      if (c.role === "exclusion") fills.push({ kind: "path", id: `curve-${i + 1}-fill`, d: `${d}L${xs(c.massEv[order![n - 1]])} ${scene.plot.y - 10}L${xs(c.massEv[order![0]])} ${scene.plot.y - 10}Z`, fill: c.colour, fillOpacity: 0.25 });
+      lines.push({ kind: "path", id: `curve-${i + 1}-line`, d, stroke: c.colour, strokeWidth: 1.8, fill: "none" });
+    }
+  });
+  const layer = scene.layers.find((l) => l.id === "curves")!;
+  layer.nodes = [...fills, ...lines];
+  return scene;
+}
+
+function median(a: number[]): number {
+  const s = [...a].sort((x, y) => x - y);
+  const m = s.length >> 1;
+  return s.length % 2 ? s[m] : (s[m - 1] + s[m]) / 2;
+}
+
+export interface BenchResult {
+  points: number;
+  curves: number;
+  steps: number;
+  firstDrawMs: number;
+  thinned: { buildMs: number; domMs: number; setMs: number; totalMs: number; pathChars: number };
+  plain: { buildMs: number; domMs: number; totalMs: number; pathChars: number; steps: number };
+  devicePixelRatio: number;
+}
+
+async function run(opts: { steps: number; plainSteps: number }): Promise<BenchResult> {
+  const project = await loadProject();
+  const host = document.getElementById("plot")!;
+  const render = createDomRenderer(host);
+  const sync = () => (host.querySelector("#curves") as SVGGElement | null)?.getBBox();
+  const ranges = zoomSequence(project.figure.massRangeEv, opts.steps);
+  const resolution = window.devicePixelRatio || 1;
+  const at = (r: [number, number]): Project => ({ ...project, figure: { ...project.figure, massRangeEv: r } });
+  const pathChars = (s: Scene) => s.layers.reduce((n, l) => n + l.nodes.reduce((k, nd) => k + (nd.kind === "path" ? nd.d.length : 0), 0), 0);
+
+  let t = performance.now();
+  render(buildScene(at(ranges[0]), { resolution }));
+  sync();
+  const firstDrawMs = performance.now() - t;
+  for (let w = 0; w < 5; w++) {
+    render(buildScene(at(ranges[w % ranges.length]), { resolution }));
+    sync();
+  }
+
+  const b: number[] = [];
+  const set: number[] = [];
+  const d: number[] = [];
+  const tot: number[] = [];
+  const chars: number[] = [];
+  for (const r of ranges) {
+    const t0 = performance.now();
+    const scene = buildScene(at(r), { resolution });
+    const t1 = performance.now();
+    render(scene);
+    const tSet = performance.now();
+    sync();
+    const t2 = performance.now();
+    set.push(tSet - t1);
+    b.push(t1 - t0);
+    d.push(t2 - t1);
+    tot.push(t2 - t0);
+    chars.push(pathChars(scene));
+    await new Promise((res) => requestAnimationFrame(() => res(null)));
+  }
+
+  const pb: number[] = [];
+  const pd: number[] = [];
+  const pt: number[] = [];
+  const pc: number[] = [];
+  const stride = Math.max(1, Math.floor(ranges.length / opts.plainSteps));
+  for (let k = 0; k < ranges.length && pt.length < opts.plainSteps; k += stride) {
+    t = performance.now();
+    const scene = plainScene(project, ranges[k]);
+    const t1 = performance.now();
+    render(scene);
+    sync();
+    const t2 = performance.now();
+    pb.push(t1 - t);
+    pd.push(t2 - t1);
+    pt.push(t2 - t);
+    pc.push(pathChars(scene));
+    await new Promise((res) => requestAnimationFrame(() => res(null)));
+  }
+  return {
+    points: project.curves.reduce((n, c) => n + c.massEv.length, 0),
+    curves: project.curves.length,
+    steps: ranges.length,
+    firstDrawMs,
+    thinned: { buildMs: median(b), domMs: median(d), setMs: median(set), totalMs: median(tot), pathChars: median(chars) },
+    plain: { buildMs: median(pb), domMs: median(pd), totalMs: median(pt), pathChars: median(pc), steps: pt.length },
+    devicePixelRatio: resolution,
+  };
+}
+
+(window as unknown as { runBench: typeof run }).runBench = run;
+document.body.dataset.ready = "1";
