@@ -2,8 +2,9 @@
 // Decoding never throws: it caps the unpacked size, validates through the shared restore step and explains failures.
 //
 // Link format v1 (frozen; a later format gets a new prefix, and v1 links keep decoding with this code):
-//   fragment = "v1." + base64url without padding (RFC 4648 §5) of raw DEFLATE (RFC 1951, fflate level 9)
-//              of the UTF-8 JSON of the compact object below.
+//   fragment = "v1." + base64url without padding (RFC 4648 §5) of raw DEFLATE (RFC 1951, written by fflate at
+//              level 9 for link-sized payloads, lower for large ones; any level reads the same) of the UTF-8
+//              JSON of the compact object below.
 //   compact  = { n: name, p: physics, f: figure, m: [model…], c: [curve…], o: number of curves left out }
 //   Every object uses the one- or two-letter keys of the tables below; a key is omitted when its value equals
 //   the v1 base value (frozen here, independent of today's defaults): name "Untitled", the 2019 constants,
@@ -14,10 +15,12 @@
 //   value i = M_i × 10^(E_i) with M_i = d_0 + … + d_i and E_i = e_0 + … + e_i (all M_i with the same number of
 //   digits, so sorted data give small steps that compress about twice as well as the plain numbers). Both forms
 //   are exact: the digits are those of JavaScript's shortest round-trip decimal, and every value is checked
-//   to read back to the same double before the form is used.
+//   to read back to the same double before the form is used. (The encoder writes the JSON bytes directly and
+//   finds the digits by exact scaling, with toExponential only as a fallback; the text is the same as the first
+//   string-based encoder's, which tests/data/link-large.test.ts keeps as its reference.)
 //   Without curves ("c" absent), a link carries name, constants, figure and models only; "o" says how many
 //   curves the sender had.
-import { Inflate, deflateSync, inflateSync } from "fflate";
+import { Deflate, Inflate, deflateSync, inflateSync } from "fflate";
 import { parseJsonSafely, projectsEqual, restoreProject } from "./schema";
 import { CURVE_STATE, FIGURE_STATE, MODEL_STATE, PHYSICS_STATE, PROJECT_STATE, goesTo, type Persistence, type PersistTarget } from "./state-table";
 import type { Project } from "./types";
@@ -42,44 +45,81 @@ const B64_INDEX = (() => {
   return t;
 })();
 
-/** base64url without padding (RFC 4648 §5). */
+const B64_CODES = Uint8Array.from(B64, (c) => c.charCodeAt(0));
+const ASCII = new TextDecoder();
+
+/** base64url without padding (RFC 4648 §5). Written as ASCII bytes and turned into a string once. */
 export function base64UrlEncode(bytes: Uint8Array): string {
-  const parts: string[] = [];
-  let s = "";
-  for (let i = 0; i < bytes.length; i += 3) {
-    const n = (bytes[i] << 16) | ((bytes[i + 1] ?? 0) << 8) | (bytes[i + 2] ?? 0);
-    const left = bytes.length - i;
-    s += B64[(n >> 18) & 63] + B64[(n >> 12) & 63] + (left > 1 ? B64[(n >> 6) & 63] : "") + (left > 2 ? B64[n & 63] : "");
-    if (s.length > 8192) {
-      parts.push(s);
-      s = "";
-    }
+  const n = bytes.length;
+  const full = n - (n % 3);
+  const out = new Uint8Array(Math.ceil((n * 4) / 3));
+  let o = 0;
+  for (let i = 0; i < full; i += 3) {
+    const v = (bytes[i] << 16) | (bytes[i + 1] << 8) | bytes[i + 2];
+    out[o] = B64_CODES[v >> 18];
+    out[o + 1] = B64_CODES[(v >> 12) & 63];
+    out[o + 2] = B64_CODES[(v >> 6) & 63];
+    out[o + 3] = B64_CODES[v & 63];
+    o += 4;
   }
-  parts.push(s);
-  return parts.join("");
+  if (n - full === 1) {
+    const v = bytes[full] << 16;
+    out[o++] = B64_CODES[v >> 18];
+    out[o++] = B64_CODES[(v >> 12) & 63];
+  } else if (n - full === 2) {
+    const v = (bytes[full] << 16) | (bytes[full + 1] << 8);
+    out[o++] = B64_CODES[v >> 18];
+    out[o++] = B64_CODES[(v >> 12) & 63];
+    out[o++] = B64_CODES[(v >> 6) & 63];
+  }
+  return ASCII.decode(out.subarray(0, o));
+}
+
+/** Length of the base64url text (no padding) of `n` bytes. */
+function base64Length(n: number): number {
+  return Math.ceil((n * 4) / 3);
 }
 
 /** Bytes of a base64url (or base64) string without padding; null when a character or the length is invalid. */
 export function base64UrlDecode(text: string): Uint8Array | null {
-  const t = text.replace(/=+$/, "");
-  if (t.length % 4 === 1) return null;
-  const out = new Uint8Array(Math.floor((t.length * 3) / 4));
+  let n = text.length;
+  while (n > 0 && text.charCodeAt(n - 1) === 61) n--;
+  if (n % 4 === 1) return null;
+  const out = new Uint8Array(Math.floor((n * 3) / 4));
+  const idx = B64_INDEX;
+  const full = n - (n % 4);
   let o = 0;
-  for (let i = 0; i < t.length; i += 4) {
-    let n = 0;
-    const len = Math.min(4, t.length - i);
+  for (let i = 0; i < full; i += 4) {
+    const c0 = text.charCodeAt(i);
+    const c1 = text.charCodeAt(i + 1);
+    const c2 = text.charCodeAt(i + 2);
+    const c3 = text.charCodeAt(i + 3);
+    if ((c0 | c1 | c2 | c3) > 127) return null;
+    const a = idx[c0];
+    const b = idx[c1];
+    const c = idx[c2];
+    const d = idx[c3];
+    if ((a | b | c | d) < 0) return null;
+    const v = (a << 18) | (b << 12) | (c << 6) | d;
+    out[o] = v >> 16;
+    out[o + 1] = (v >> 8) & 255;
+    out[o + 2] = v & 255;
+    o += 3;
+  }
+  const left = n - full;
+  if (left > 0) {
+    let v = 0;
     for (let j = 0; j < 4; j++) {
-      let v = 0;
-      if (j < len) {
-        const code = t.charCodeAt(i + j);
-        v = code < 128 ? B64_INDEX[code] : -1;
-        if (v < 0) return null;
+      let x = 0;
+      if (j < left) {
+        const code = text.charCodeAt(full + j);
+        x = code < 128 ? idx[code] : -1;
+        if (x < 0) return null;
       }
-      n = (n << 6) | v;
+      v = (v << 6) | x;
     }
-    out[o++] = (n >> 16) & 255;
-    if (len > 2) out[o++] = (n >> 8) & 255;
-    if (len > 3) out[o++] = n & 255;
+    out[o] = (v >> 16) & 255;
+    if (left > 2) out[o + 1] = (v >> 8) & 255;
   }
   return out;
 }
@@ -117,39 +157,101 @@ class ShapeError extends Error {}
 
 // Largest digit count whose integers stay exact in a double (10¹⁵ < 2⁵³ ≈ 9.007·10¹⁵).
 const MAX_DELTA_DIGITS = 15;
+// 10⁰ … 10²², each exact as a double (5²² < 2⁵³), parsed rather than computed so that no pow() rounding creeps in.
+const POW10: readonly number[] = Array.from({ length: 23 }, (_, i) => Number(`1e${i}`));
+const MAX_EXACT_POW = 22;
 
-/** Curve data for the link: the decimal delta form when exact and applicable, else a plain number array. */
+/**
+ * Curve data on their way into the compact object: the JSON writer turns them straight into bytes (decimal
+ * delta form or number list), so millions of values never become intermediate JS arrays or strings.
+ */
+class NumberColumn {
+  constructor(readonly values: Float64Array) {}
+}
+
 function encodeNumbers(v: unknown): unknown {
-  const a = v instanceof Float64Array ? v : Float64Array.from(v as ArrayLike<number>);
-  const plain = Array.from(a);
-  if (a.length < 4) return plain;
-  const digits: string[] = new Array(a.length);
-  const exps = new Int32Array(a.length);
-  let width = 1;
-  for (let i = 0; i < a.length; i++) {
-    // toExponential() without an argument gives the shortest digits that read back to the same double.
-    const [mant, exp] = a[i].toExponential().split("e");
-    const [whole, frac = ""] = mant.replace("-", "").split(".");
-    digits[i] = whole + frac;
-    exps[i] = Number(exp) - frac.length;
-    width = Math.max(width, digits[i].length);
-    if (width > MAX_DELTA_DIGITS) return plain;
+  return new NumberColumn(v instanceof Float64Array ? v : Float64Array.from(v as ArrayLike<number>));
+}
+
+/**
+ * round(|x| · 10^s) for |s| ≤ 22, NaN otherwise. When |x| has at most 15 significant digits and s puts them
+ * left of the point, the one rounding of the product or quotient is too small to move the result off the
+ * integer (relative error ≤ 2⁻⁵² on integers below 10¹⁵, i.e. < 0.25).
+ */
+function scaledRound(ax: number, s: number): number {
+  if (s >= 0) return s <= MAX_EXACT_POW ? Math.round(ax * POW10[s]) : NaN;
+  return s >= -MAX_EXACT_POW ? Math.round(ax / POW10[-s]) : NaN;
+}
+
+/**
+ * The decimal delta form's integers of a column: value i = m[i] × 10^ex[i] with every m[i] of the same digit
+ * count W (the largest shortest-round-trip digit count of the column, padded with zeros), or null when a
+ * value needs more than 15 digits or is not finite. The result is exactly that of the first (string-based)
+ * v1 encoder: for W ≤ 15 only one W-digit decimal reads back to a given double (their spacing, ≥ 10⁻¹⁵
+ * relative, is wider than a double's rounding interval, ≤ 2⁻⁵² relative), so whichever way it is found it
+ * is the same. Most values take the fast path: scale by an exact power of ten, round, and check the way back
+ * with one exactly rounded operation (an exact integer below 2⁵³ times or over an exact power of ten is
+ * correctly rounded, as a decimal-to-double parse is: Clinger, "How to read floating point numbers
+ * accurately", PLDI 1990). The rest go through toExponential(), the shortest round-trip digits.
+ */
+function deltaForm(a: Float64Array): { m: Float64Array; ex: Int32Array } | null {
+  const n = a.length;
+  const m = new Float64Array(n);
+  const ex = new Int32Array(n);
+  let w = 0;
+  for (let i = 0; i < n; i++) {
+    const x = a[i];
+    if (w > 0) {
+      if (x === 0) {
+        m[i] = 0;
+        ex[i] = 1 - w;
+        continue;
+      }
+      const ax = x < 0 ? -x : x;
+      let s = w - 1 - Math.floor(Math.log10(ax));
+      let mm = scaledRound(ax, s);
+      // log10 may land one decade off next to a power of ten: move s by one so that mm has w digits.
+      if (mm >= POW10[w]) mm = scaledRound(ax, --s);
+      else if (mm < POW10[w - 1]) mm = scaledRound(ax, ++s);
+      if (mm >= POW10[w - 1] && mm < POW10[w] && (s >= 0 ? mm / POW10[s] : mm * POW10[-s]) === ax) {
+        m[i] = x < 0 ? -mm : mm;
+        ex[i] = -s;
+        continue;
+      }
+    }
+    // Slow path: the shortest digits of x from toExponential() ("-1.2345e-7"); non-finite values have no "e".
+    const t = x.toExponential();
+    const eAt = t.indexOf("e");
+    if (eAt < 0) return null;
+    const neg = t.charCodeAt(0) === 45;
+    const dot = t.indexOf(".");
+    const digits = dot < 0 ? t.slice(neg ? 1 : 0, eAt) : t.slice(neg ? 1 : 0, dot) + t.slice(dot + 1, eAt);
+    const k = digits.length;
+    if (k > MAX_DELTA_DIGITS) return null;
+    if (k > w) {
+      // A wider value: pad everything written so far to the new width (exact: integers stay below 10¹⁵).
+      const up = POW10[k - w];
+      for (let j = 0; j < i; j++) {
+        m[j] *= up;
+        ex[j] -= k - w;
+      }
+      w = k;
+    }
+    const mm = Number(digits) * POW10[w - k];
+    const e = Number(t.slice(eAt + 1)) - (w - 1);
+    const signed = neg ? -mm : mm;
+    if (Number(`${signed}e${e}`) !== x) return null;
+    m[i] = signed;
+    ex[i] = e;
   }
-  const e: number[] = new Array(a.length);
-  const d: number[] = new Array(a.length);
-  let prevM = 0;
-  let prevE = 0;
-  for (let i = 0; i < a.length; i++) {
-    const pad = width - digits[i].length;
-    const m = Number(digits[i] + "0".repeat(pad)) * (a[i] < 0 ? -1 : 1);
-    const ex = exps[i] - pad;
-    if (Number(`${m}e${ex}`) !== a[i]) return plain;
-    d[i] = m - prevM;
-    e[i] = ex - prevE;
-    prevM = m;
-    prevE = ex;
-  }
-  return { e, d };
+  return { m, ex };
+}
+
+/** m × 10^e as the double nearest to it: one exactly rounded operation when 10^|e| is exact, else a parse. */
+function fromDecimal(m: number, e: number): number {
+  if (e >= 0 && e <= MAX_EXACT_POW) return m * POW10[e];
+  if (e < 0 && e >= -MAX_EXACT_POW) return m / POW10[-e];
+  return Number(`${m}e${e}`);
 }
 
 /** Inverse of {@link encodeNumbers}; a number array passes through (the schema checks its values). */
@@ -170,7 +272,7 @@ function decodeNumbers(v: unknown): unknown {
     m += dd as number;
     ex += de as number;
     if (!Number.isSafeInteger(m) || Math.abs(ex) > 400) throw new ShapeError("curve data contain a value out of range");
-    out[i] = Number(`${m}e${ex}`);
+    out[i] = fromDecimal(m, ex);
   }
   return out;
 }
@@ -359,20 +461,273 @@ const LINK_DECODERS: Readonly<Record<number, (compact: unknown) => { project: Re
 
 // ------------------------------------------------------------------------------------------------------ encoding
 
+// The compact JSON goes out in chunks of about this size (the deflater takes them as they come).
+const CHUNK_BYTES = 1 << 20;
+// DEFLATE level by payload size, counted in curve values (known before anything is written, so the choice is
+// the same wherever the project is encoded): level 9, packed in one go, up to 131,072 values (about 1 MB of
+// JSON for data of 7 digits), which covers every link-sized payload; streamed at level 6 up to 524,288 values;
+// streamed at level 1 above, where fflate's higher levels would spend seconds per million points for a few per
+// cent of size (measured on 2·10⁶ invented 7-digit points: 28 MB of JSON packs to 6.7 MB at level 1 in ~1 s,
+// to 6.2 MB at level 6 in ~5 s).
+const LEVEL9_MAX_VALUES = 1 << 17;
+const LEVEL6_MAX_VALUES = 1 << 19;
+
+/** DEFLATE level for a link carrying `values` curve numbers (see above). */
+function levelFor(values: number): 9 | 6 | 1 {
+  return values <= LEVEL9_MAX_VALUES ? 9 : values <= LEVEL6_MAX_VALUES ? 6 : 1;
+}
+
+/** Thrown while packing once the link is certain to exceed the caller's length limit. */
+class OverLimit extends Error {}
+
+/**
+ * Packs the compact JSON as it is written: at level 9 it is held and packed in one go at the end; at lower
+ * levels (large payloads) it streams through the deflater, and with a byte limit packing stops as soon as
+ * the packed output passes it, so a project far too large costs about the limit's worth of work.
+ */
+class Packer {
+  private raw: Uint8Array[] = [];
+  private rawBytes = 0;
+  private out: Uint8Array[] = [];
+  private outBytes = 0;
+  private readonly deflater: Deflate | undefined;
+
+  constructor(
+    private readonly level: 9 | 6 | 1,
+    private readonly maxOutBytes: number,
+  ) {
+    if (level !== 9) {
+      this.deflater = new Deflate({ level }, (data) => {
+        this.out.push(data);
+        this.outBytes += data.length;
+      });
+    }
+  }
+
+  push(chunk: Uint8Array): void {
+    if (this.deflater) {
+      this.deflater.push(chunk);
+      if (this.outBytes > this.maxOutBytes) throw new OverLimit();
+      return;
+    }
+    this.raw.push(chunk);
+    this.rawBytes += chunk.length;
+  }
+
+  finish(): Uint8Array {
+    if (this.deflater) this.deflater.push(new Uint8Array(0), true);
+    const packed = this.deflater ? concatBytes(this.out, this.outBytes) : deflateSync(concatBytes(this.raw, this.rawBytes), { level: this.level });
+    if (packed.length > this.maxOutBytes) throw new OverLimit();
+    return packed;
+  }
+}
+
+function concatBytes(parts: readonly Uint8Array[], total: number): Uint8Array {
+  if (parts.length === 1 && parts[0].length === total) return parts[0];
+  const all = new Uint8Array(total);
+  let o = 0;
+  for (const p of parts) {
+    all.set(p, o);
+    o += p.length;
+  }
+  return all;
+}
+
+const UTF8 = new TextEncoder();
+
+function isPlainObject(v: unknown): v is Rec {
+  if (typeof v !== "object" || v === null) return false;
+  const proto = Object.getPrototypeOf(v) as unknown;
+  return proto === Object.prototype || proto === null;
+}
+
+/**
+ * Writes the compact object as UTF-8 JSON, byte for byte what JSON.stringify gives for it (with each
+ * NumberColumn in its link form), in chunks handed to `emit`. Numbers of curve data are written as ASCII
+ * digits straight into the buffer: no string per value, no array of millions of numbers.
+ */
+class JsonWriter {
+  private buf = new Uint8Array(64 * 1024);
+  private pos = 0;
+
+  constructor(private readonly emit: (chunk: Uint8Array) => void) {}
+
+  /** Makes room for `n` more bytes: grows the buffer up to CHUNK_BYTES, then hands full chunks on. */
+  private room(n: number): void {
+    if (this.pos + n <= this.buf.length) return;
+    if (this.buf.length >= CHUNK_BYTES) {
+      this.emit(this.buf.subarray(0, this.pos));
+      this.buf = new Uint8Array(Math.max(CHUNK_BYTES, n));
+      this.pos = 0;
+      return;
+    }
+    const grown = new Uint8Array(Math.max(Math.min(this.buf.length * 2, CHUNK_BYTES), this.pos + n));
+    grown.set(this.buf.subarray(0, this.pos));
+    this.buf = grown;
+  }
+
+  end(): void {
+    if (this.pos > 0) this.emit(this.buf.subarray(0, this.pos));
+    this.pos = 0;
+  }
+
+  private byte(b: number): void {
+    this.room(1);
+    this.buf[this.pos++] = b;
+  }
+
+  private text(s: string): void {
+    this.room(s.length * 3);
+    this.pos += UTF8.encodeInto(s, this.buf.subarray(this.pos)).written;
+  }
+
+  /** ASCII text (digits, signs, exponents): one byte per character. */
+  private ascii(s: string): void {
+    this.room(s.length);
+    const b = this.buf;
+    let p = this.pos;
+    for (let i = 0; i < s.length; i++) b[p++] = s.charCodeAt(i);
+    this.pos = p;
+  }
+
+  /** An integer-valued double below 2⁵³ in magnitude, as JSON.stringify writes it (−0 as "0"). */
+  private int(v: number): void {
+    this.room(17);
+    const b = this.buf;
+    let p = this.pos;
+    if (v < 0) {
+      b[p++] = 45;
+      v = -v;
+    }
+    if (v >= 1e8) {
+      // Two parts of at most 8 digits each in int32 range; the split is exact for integers (v < 2⁵³).
+      let hi = Math.floor(v / 1e8);
+      let lo = v - hi * 1e8;
+      if (lo >= 1e8) {
+        hi += 1;
+        lo -= 1e8;
+      } else if (lo < 0) {
+        hi -= 1;
+        lo += 1e8;
+      }
+      p = writeDigits(b, p, hi, 0);
+      p = writeDigits(b, p, lo, 8);
+    } else p = writeDigits(b, p, v, 0);
+    this.pos = p;
+  }
+
+  value(v: unknown): void {
+    if (v instanceof NumberColumn) this.column(v.values);
+    else if (Array.isArray(v)) {
+      this.byte(91);
+      for (let i = 0; i < v.length; i++) {
+        if (i > 0) this.byte(44);
+        const item: unknown = v[i];
+        // As JSON.stringify: holes, undefined and functions in arrays become null.
+        if (item === undefined || typeof item === "function" || typeof item === "symbol") this.ascii("null");
+        else this.value(item);
+      }
+      this.byte(93);
+    } else if (isPlainObject(v)) {
+      this.byte(123);
+      let first = true;
+      for (const key of Object.keys(v)) {
+        const item = v[key];
+        if (item === undefined || typeof item === "function" || typeof item === "symbol") continue;
+        if (!first) this.byte(44);
+        first = false;
+        this.text(JSON.stringify(key));
+        this.byte(58);
+        this.value(item);
+      }
+      this.byte(125);
+    } else this.text(JSON.stringify(v) ?? "null");
+  }
+
+  /** Curve data: the decimal delta form {"e":[…],"d":[…]} when exact and at least 4 values, else a number list. */
+  private column(a: Float64Array): void {
+    const delta = a.length >= 4 ? deltaForm(a) : null;
+    if (delta) {
+      const { m, ex } = delta;
+      this.ascii('{"e":[');
+      for (let i = 0; i < ex.length; i++) {
+        if (i > 0) this.byte(44);
+        this.int(i === 0 ? ex[0] : ex[i] - ex[i - 1]);
+      }
+      this.ascii('],"d":[');
+      for (let i = 0; i < m.length; i++) {
+        if (i > 0) this.byte(44);
+        this.int(i === 0 ? m[0] : m[i] - m[i - 1]);
+      }
+      this.ascii("]}");
+      return;
+    }
+    this.byte(91);
+    for (let i = 0; i < a.length; i++) {
+      if (i > 0) this.byte(44);
+      const x = a[i];
+      // String(x) is JSON's number form for finite x (ECMA-262 Number::toString); JSON writes null otherwise.
+      this.ascii(Number.isFinite(x) ? String(x) : "null");
+    }
+    this.byte(93);
+  }
+}
+
+/** Writes the digits of a non-negative integer v < 2³¹ at p, left-padded with zeros to `width`; returns the new end. */
+function writeDigits(b: Uint8Array, p: number, v: number, width: number): number {
+  let len = 1;
+  while (len < 10 && v >= POW10[len]) len++;
+  if (len < width) len = width;
+  let q = v | 0;
+  for (let j = p + len - 1; j >= p; j--) {
+    const t = (q / 10) | 0;
+    b[j] = 48 + q - t * 10;
+    q = t;
+  }
+  return p + len;
+}
+
 export interface EncodeLinkOpts {
   /** Put curves (metadata and data) into the link. @default true */
   includeCurves?: boolean;
 }
 
 /**
- * The share-link fragment (without "#") for a project: "v1." + base64url(deflate-raw level 9 of the compact
- * JSON). With `includeCurves: false` the link carries name, constants, figure and models only.
+ * The share-link fragment, or null as soon as it is certain to be longer than `maxChars` characters (the
+ * packing stops there, so a project of millions of points is turned down after about `maxChars` worth of
+ * work). When it fits, the fragment equals {@link encodeLink}'s.
+ * @param maxChars longest acceptable fragment, "v1." included.
+ */
+export function encodeLinkWithin(project: Project, maxChars: number, opts: EncodeLinkOpts = {}): string | null {
+  const prefix = `v${LINK_FORMAT_VERSION}.`;
+  // Most packed bytes whose base64url text still fits: ceil(4n/3) ≤ maxChars − prefix.
+  const room = maxChars - prefix.length;
+  const maxOutBytes = room < 0 ? -1 : Math.floor((room * 3) / 4);
+  const includeCurves = opts.includeCurves ?? true;
+  const values = includeCurves ? project.curves.reduce((n, c) => n + c.massEv.length + c.gInvGeV.length, 0) : 0;
+  const packer = new Packer(levelFor(values), maxOutBytes);
+  try {
+    const writer = new JsonWriter((chunk) => packer.push(chunk));
+    writer.value(toCompact(project, includeCurves));
+    writer.end();
+    const packed = packer.finish();
+    if (prefix.length + base64Length(packed.length) > maxChars) return null;
+    return prefix + base64UrlEncode(packed);
+  } catch (e) {
+    if (e instanceof OverLimit) return null;
+    throw e;
+  }
+}
+
+/**
+ * The share-link fragment (without "#") for a project: "v1." + base64url(raw DEFLATE of the compact JSON;
+ * level 9 up to 131,072 curve values, 6 up to 524,288, 1 above). With
+ * `includeCurves: false` the link carries name, constants, figure and models only. Linear in the number of
+ * curve points (about 1 s per million points on a busy 2-core machine).
  */
 export function encodeLink(project: Project, opts: EncodeLinkOpts = {}): string {
-  const includeCurves = opts.includeCurves ?? true;
-  const json = JSON.stringify(toCompact(project, includeCurves));
-  const packed = deflateSync(new TextEncoder().encode(json), { level: 9 });
-  return `v${LINK_FORMAT_VERSION}.${base64UrlEncode(packed)}`;
+  // Infinity never stops the packing, so the result is never null.
+  return encodeLinkWithin(project, Infinity, opts) as string;
 }
 
 export interface AutoLink {
@@ -385,14 +740,15 @@ export interface AutoLink {
 
 /**
  * A share link with curves when it stays within `maxChars`, else without them (and the labels of the curves
- * left out, so the UI can offer the project file instead).
+ * left out, so the UI can offer the project file instead). A project far over the limit is turned down after
+ * about `maxChars` worth of packing, not after encoding all of its data.
  * @param opts.maxChars longest acceptable fragment. @default LINK_MAX_CHARS (8000)
  */
 export function encodeLinkAuto(project: Project, opts: { maxChars?: number } = {}): AutoLink {
   const maxChars = opts.maxChars ?? LINK_MAX_CHARS;
   if (project.curves.length === 0) return { fragment: encodeLink(project, { includeCurves: false }), includedCurves: true, omittedCurves: [] };
-  const full = encodeLink(project, { includeCurves: true });
-  if (full.length <= maxChars) return { fragment: full, includedCurves: true, omittedCurves: [] };
+  const full = encodeLinkWithin(project, maxChars, { includeCurves: true });
+  if (full !== null) return { fragment: full, includedCurves: true, omittedCurves: [] };
   return { fragment: encodeLink(project, { includeCurves: false }), includedCurves: false, omittedCurves: project.curves.map((c) => c.label) };
 }
 
@@ -418,8 +774,9 @@ let scratch: Uint8Array | undefined;
 export type InflateResult = { ok: true; bytes: Uint8Array } | { ok: false; reason: "too-big" | "damaged"; inflatedBytes: number };
 
 /**
- * Inflate raw DEFLATE, stopping as soon as the output passes `capBytes`: the input is fed in 1 KiB steps, and
- * DEFLATE expands at most ~1032× per input byte, so at most ~1 MiB is unpacked past the cap.
+ * Inflate raw DEFLATE, stopping as soon as the output passes `capBytes`. DEFLATE expands at most ~1032× per
+ * input byte, and the input is fed in steps of at most (room left under the cap) / 1032 bytes, never below
+ * 1 KiB, so at most ~1 MiB is unpacked past the cap.
  * @param capBytes most output bytes accepted. @default LINK_MAX_DECODED_BYTES
  */
 export function inflateWithCap(data: Uint8Array, capBytes: number = LINK_MAX_DECODED_BYTES): InflateResult {
@@ -444,9 +801,15 @@ export function inflateWithCap(data: Uint8Array, capBytes: number = LINK_MAX_DEC
     if (total > capBytes) throw new TooBig();
     chunks.push(chunk);
   });
-  const STEP = 1024;
   try {
-    for (let i = 0; i < data.length; i += STEP) inflater.push(data.subarray(i, i + STEP), i + STEP >= data.length);
+    for (let i = 0; i < data.length; ) {
+      // No step can unpack to more than the room left under the cap (≤ 1032 bytes per input byte), except at
+      // the 1 KiB floor near the cap; larger steps far from it spare fflate's per-push window copies.
+      const step = Math.max(1024, Math.min(1 << 20, Math.floor((capBytes - total) / 1032)));
+      const end = Math.min(data.length, i + step);
+      inflater.push(data.subarray(i, end), end >= data.length);
+      i = end;
+    }
   } catch (e) {
     return { ok: false, reason: e instanceof TooBig ? "too-big" : "damaged", inflatedBytes: total };
   }
