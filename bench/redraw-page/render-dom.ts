@@ -1,6 +1,6 @@
-// Benchmark-only renderer: puts scene nodes into an <svg> as DOM elements, reusing elements by node id and
-// touching only attributes that changed (what React's reconciliation does for the app's SVG renderer).
-import { placeRuns, type Scene, type SceneNode } from "../../src/plot/index";
+// Benchmark-only renderer: puts scene nodes into an <svg> as DOM elements with the SVG writer's attributes,
+// reusing elements by node id and touching only attributes that changed (what React's reconciliation does).
+import { nodeAttributes, textSpans, type Scene, type SceneNode } from "../../src/plot/index";
 
 const NS = "http://www.w3.org/2000/svg";
 
@@ -17,36 +17,7 @@ function n(v: number): string {
 
 function attrsOf(node: SceneNode): Record<string, string> {
   const a: Record<string, string> = {};
-  const put = (k: string, v: string | number | undefined) => {
-    if (v !== undefined && v !== "") a[k] = typeof v === "number" ? n(v) : v;
-  };
-  if (node.kind === "path") {
-    put("d", node.d);
-    put("fill", node.fill ?? "none");
-    put("fill-opacity", node.fillOpacity);
-    put("stroke", node.stroke);
-    put("stroke-width", node.strokeWidth);
-    put("stroke-opacity", node.strokeOpacity);
-    put("stroke-dasharray", node.dash);
-  } else if (node.kind === "rect") {
-    put("x", node.x);
-    put("y", node.y);
-    put("width", node.w);
-    put("height", node.h);
-    put("fill", node.fill ?? "none");
-    put("fill-opacity", node.fillOpacity);
-    put("stroke", node.stroke);
-    put("stroke-width", node.strokeWidth);
-  } else {
-    const p = placeRuns(node);
-    put("x", node.x);
-    put("y", p.baselineY);
-    put("font-size", node.sizePx);
-    put("text-anchor", node.anchor === "start" ? undefined : node.anchor);
-    put("fill", node.fill ?? "#000");
-    if (node.rotate) put("transform", `rotate(${node.rotate} ${n(node.x)} ${n(node.y)})`);
-  }
-  if (node.data) for (const k of Object.keys(node.data)) a[`data-${k}`] = node.data[k];
+  for (const [k, v] of nodeAttributes(node)) if (k !== "xml:space") a[k] = v;
   return a;
 }
 
@@ -57,13 +28,11 @@ function textKey(node: SceneNode): string {
 function fillText(el: SVGElement, node: SceneNode): void {
   if (node.kind !== "text") return;
   el.textContent = "";
-  for (const r of placeRuns(node).runs) {
-    const span = document.createElementNS(NS, "tspan");
-    if (r.dyPx) span.setAttribute("dy", n(r.dyPx));
-    if (r.sizePx) span.setAttribute("font-size", n(r.sizePx));
-    if (r.italic) span.setAttribute("font-style", "italic");
-    span.textContent = r.text;
-    el.appendChild(span);
+  for (const span of textSpans(node)) {
+    const t = document.createElementNS(NS, "tspan");
+    for (const [k, v] of span.attrs) t.setAttribute(k, v);
+    t.textContent = span.text;
+    el.appendChild(t);
   }
 }
 

@@ -33,11 +33,13 @@ interface ViewArrays {
   impDesc: Float64Array | null;
 }
 
-/** Kept indices of one tolerance level, with where each chunk's indices start (for culling whole chunks). */
+/** Run-thinned indices of one tolerance level, computed lazily per chunk of {@link RUN_CHUNK} points. */
 interface LevelSelection {
-  idx: Int32Array;
-  offsets: Int32Array;
+  perChunk: (Int32Array | undefined)[];
 }
+
+/** Points per chunk of a run-thinning level: a chunk edge ends a run, which costs ≤ 2 extra points per chunk. */
+export const RUN_CHUNK = 1024;
 
 /** Selections cached per curve and view; older levels are dropped beyond this. */
 const MAX_LEVELS = 10;
@@ -657,48 +659,58 @@ export function thinRunsLog(lm: Float64Array, v: Float64Array, tx: number, ty: n
   return out.slice(0, w);
 }
 
-function levelOf(va: ViewArrays, n: number, key: string, build: () => Int32Array): LevelSelection {
+function levelOf(va: ViewArrays, key: string): LevelSelection {
   const hit = va.levels.get(key);
   if (hit) {
     va.levels.delete(key);
     va.levels.set(key, hit);
     return hit;
   }
-  const idx = build();
-  const nc = Math.ceil(n / BOX_CHUNK);
-  const offsets = new Int32Array(nc + 1);
-  let k = 0;
-  for (let c = 0; c <= nc; c++) {
-    const start = c * BOX_CHUNK;
-    while (k < idx.length && idx[k] < start) k++;
-    offsets[c] = k;
-  }
-  const sel = { idx, offsets };
+  const sel: LevelSelection = { perChunk: [] };
   va.levels.set(key, sel);
   if (va.levels.size > MAX_LEVELS) va.levels.delete(va.levels.keys().next().value as string);
   return sel;
 }
 
 /**
- * Copies a level's indices into idxScratch, where a chunk whose box lies wholly beyond one edge of the cull
- * rectangle (log space) contributes only its first and last kept index: exactly what culling would leave
- * of it, found without mapping its points.
+ * Run-thinned indices of the visible part of an unsorted curve into idxScratch. A chunk whose box lies
+ * wholly beyond one edge of the cull rectangle (log space) contributes only its first and last point: the
+ * path between them stays beyond that edge, so this is exact culling, found without touching its points.
+ * Visible chunks are thinned on first use and kept in the level.
  */
-function gatherVisible(sel: LevelSelection, boxes: Float64Array, lmLo: number, lmHi: number, vLo: number, vHi: number): number {
-  const { idx, offsets } = sel;
+function gatherRuns(prep: PreparedCurve, va: ViewArrays, sel: LevelSelection, tx: number, ty: number, lmLo: number, lmHi: number, vLo: number, vHi: number): number {
+  const boxes = va.boxes as Float64Array;
+  const n = prep.n;
+  const per = RUN_CHUNK / BOX_CHUNK;
+  const nc = Math.ceil(n / RUN_CHUNK);
   let count = 0;
-  const nc = offsets.length - 1;
   for (let c = 0; c < nc; c++) {
-    const s = offsets[c];
-    const e = offsets[c + 1];
-    if (e === s) continue;
-    const out = boxes[4 * c + 1] < lmLo || boxes[4 * c] > lmHi || boxes[4 * c + 3] < vLo || boxes[4 * c + 2] > vHi;
-    if (out) {
-      count = pushIdx(count, idx[s]);
-      if (e - 1 > s) count = pushIdx(count, idx[e - 1]);
-    } else {
-      for (let k = s; k < e; k++) count = pushIdx(count, idx[k]);
+    const s = c * RUN_CHUNK;
+    const e = Math.min(n, s + RUN_CHUNK);
+    let a = Infinity;
+    let b = -Infinity;
+    let lo = Infinity;
+    let hi = -Infinity;
+    const b0 = c * per;
+    const b1 = Math.min(boxes.length >> 2, b0 + per);
+    for (let k = b0; k < b1; k++) {
+      if (boxes[4 * k] < a) a = boxes[4 * k];
+      if (boxes[4 * k + 1] > b) b = boxes[4 * k + 1];
+      if (boxes[4 * k + 2] < lo) lo = boxes[4 * k + 2];
+      if (boxes[4 * k + 3] > hi) hi = boxes[4 * k + 3];
     }
+    if (b < lmLo || a > lmHi || hi < vLo || lo > vHi) {
+      count = pushIdx(count, s);
+      if (e - 1 > s) count = pushIdx(count, e - 1);
+      continue;
+    }
+    let idx = sel.perChunk[c];
+    if (!idx) {
+      idx = thinRunsLog(prep.lm.subarray(s, e), va.v.subarray(s, e), tx, ty);
+      for (let k = 0; k < idx.length; k++) idx[k] += s;
+      sel.perChunk[c] = idx;
+    }
+    for (let k = 0; k < idx.length; k++) count = pushIdx(count, idx[k]);
   }
   return count;
 }
@@ -756,7 +768,6 @@ export function curvePixels(prep: PreparedCurve, closed: boolean, p: PixelParams
     n = cullOutside(n, cullRect);
   } else {
     const va = viewArrays(prep, p.slope, closed);
-    const boxes = va.boxes as Float64Array;
     const lmLo = (cullRect.x0 - p.ax) / p.bx;
     const lmHi = (cullRect.x1 - p.ax) / p.bx;
     const vLo = (cullRect.y1 - p.ay) / p.by - p.yOffset;
@@ -777,22 +788,21 @@ export function curvePixels(prep: PreparedCurve, closed: boolean, p: PixelParams
     const limit = Math.max(256, 2 * (pl.w + pl.h) * res);
     // Candidate B for noisy outlines (DP keeps almost everything): run thinning, cached per level with the
     // run size rounded down to a power of √2 (a finer level keeps a few more points; the bound holds).
-    let selB: LevelSelection | null = null;
-    if (k > limit) {
+    n = 0;
+    let useA = k <= limit;
+    if (!useA) {
       const pow = (t: number) => 2 ** (Math.floor(2 * Math.log2(t)) / 2);
       const tx = pow(RUNS_PX / res / Math.abs(p.bx));
       const ty = pow(RUNS_PX / res / Math.abs(p.by));
-      selB = levelOf(va, prep.n, `B${tx},${ty}`, () => thinRunsLog(prep.lm, va.v, tx, ty));
-      if (selB.idx.length >= k) selB = null;
+      n = gatherRuns(prep, va, levelOf(va, `B${tx},${ty}`), tx, ty, lmLo, lmHi, vLo, vHi);
+      useA = n >= k;
     }
-    if (!selB) {
+    if (useA) {
       const sel = order.slice(0, k).sort();
       ensureBuffers(k);
       if (idxScratch.length < k) idxScratch = new Int32Array(k * 2);
       idxScratch.set(sel);
       n = k;
-    } else {
-      n = gatherVisible(selB, boxes, lmLo, lmHi, vLo, vHi);
     }
     mapSelected(prep, va.v, n, p);
     n = cullOutside(n, cullRect);

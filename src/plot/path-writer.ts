@@ -1,6 +1,6 @@
 // Writes SVG path data into a reused byte buffer and decodes it once: number → string conversion of
 // non-integers is the slowest step of a redraw in V8, and digits written as bytes are several times faster.
-// The text is identical to String(q / 100) for every coordinate q given in hundredths of a pixel.
+// The value is exactly q / 100 for every coordinate q given in hundredths of a pixel (leading zeros dropped).
 
 let buf = new Uint8Array(1 << 16);
 let pos = 0;
@@ -24,7 +24,11 @@ export function writeChar(code: number): void {
   buf[pos++] = code;
 }
 
-/** Append an integer count of hundredths as a decimal number: 12345 → "123.45", -50 → "-0.5", 300 → "3". */
+/**
+ * Append an integer count of hundredths as a decimal number: 12345 → "123.45", -50 → "-.5", 300 → "3".
+ * Fractions drop the leading zero (".5"; SVG 1.1 path grammar allows it) as the compact paths are mostly
+ * small relative moves.
+ */
 export function writeHundredths(q: number): void {
   ensure(24);
   if (!(q === q) || q === Infinity || q === -Infinity) q = 0;
@@ -34,8 +38,9 @@ export function writeHundredths(q: number): void {
   }
   let ip = Math.floor(q / 100);
   const fp = q - ip * 100;
-  if (ip === 0) buf[pos++] = 48;
-  else {
+  if (ip === 0) {
+    if (fp === 0) buf[pos++] = 48;
+  } else {
     const start = pos;
     while (ip > 0) {
       const d = ip % 10;

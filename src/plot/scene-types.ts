@@ -10,7 +10,10 @@ export interface TextRun {
 
 export interface PathNode {
   kind: "path";
-  /** SVG path data in scene pixels, numbers rounded to 2 decimals. */
+  /**
+   * SVG path data in scene pixels, numbers rounded to 2 decimals. Curves use the compact form (an absolute
+   * M, then relative l/h/v moves, fractions without a leading zero); everything else absolute M/L/H/V/Z.
+   */
   d: string;
   stroke?: string;
   strokeWidth?: number;

@@ -1,6 +1,6 @@
 // The SVG string writer: a scene in, one self-contained, deterministic SVG document out (no external fonts,
 // images or CSS; text kept as text; every text and attribute value escaped; the project in <metadata>).
-import type { PathNode, RectNode, Scene, SceneNode, TextNode } from "./scene-types";
+import type { Scene, SceneNode, TextNode } from "./scene-types";
 import { safeColour } from "./format";
 import { placeRuns } from "./text";
 
@@ -68,70 +68,92 @@ class Ids {
   }
 }
 
-function pathEl(n: PathNode, ids: Ids): string {
-  const d = PATH_SAFE.test(n.d) ? n.d : "";
-  return (
-    "<path" +
-    attr("id", ids.get(n.id)) +
-    attr("d", d) +
-    attr("fill", paint(n.fill) ?? "none") +
-    attr("fill-opacity", n.fillOpacity) +
-    attr("stroke", paint(n.stroke)) +
-    attr("stroke-width", n.stroke ? n.strokeWidth : undefined) +
-    attr("stroke-opacity", n.stroke ? n.strokeOpacity : undefined) +
-    attr("stroke-dasharray", n.stroke && n.dash && DASH_SAFE.test(n.dash) ? n.dash : undefined) +
-    (n.stroke ? ' stroke-linejoin="round"' : "") +
-    dataAttrs(n.data) +
-    "/>"
-  );
+/** One attribute as written: SVG name and its value as text (unescaped; the writer escapes). */
+export type SvgAttribute = [name: string, value: string];
+
+function num(v: number | undefined): string | undefined {
+  return v === undefined || !Number.isFinite(v) ? undefined : fmt(v);
 }
 
-function rectEl(n: RectNode, ids: Ids): string {
-  return (
-    "<rect" +
-    attr("id", ids.get(n.id)) +
-    attr("x", n.x) +
-    attr("y", n.y) +
-    attr("width", Math.max(0, n.w)) +
-    attr("height", Math.max(0, n.h)) +
-    attr("fill", paint(n.fill) ?? "none") +
-    attr("fill-opacity", n.fillOpacity) +
-    attr("stroke", paint(n.stroke)) +
-    attr("stroke-width", n.stroke ? n.strokeWidth : undefined) +
-    dataAttrs(n.data) +
-    "/>"
-  );
+function push(out: SvgAttribute[], name: string, value: string | undefined): void {
+  if (value !== undefined && value !== "") out.push([name, value]);
 }
 
-function textEl(n: TextNode, ids: Ids): string {
-  const placed = placeRuns(n);
-  let inner = "";
-  for (const r of placed.runs) {
-    const a = attr("dy", r.dyPx !== 0 ? r.dyPx : undefined) + attr("font-size", r.sizePx) + (r.italic ? ' font-style="italic"' : "");
-    inner += a ? `<tspan${a}>${escapeXml(r.text)}</tspan>` : escapeXml(r.text);
+function pushData(out: SvgAttribute[], data: Record<string, string> | undefined): void {
+  if (!data) return;
+  for (const key of Object.keys(data).sort()) if (DATA_KEY.test(key)) out.push([`data-${key}`, String(data[key])]);
+}
+
+/**
+ * The attributes of a scene node exactly as the SVG writer writes them (after the id): presentation
+ * attributes with safe colours, numbers with 2 decimals, round joins on strokes, the text baseline turned
+ * into an explicit y, and data-* attributes with keys limited to [a-z0-9-]. The on-screen renderer should
+ * set the same attributes (React: camelCase names, xmlSpace) so screen and export agree.
+ */
+export function nodeAttributes(n: SceneNode): SvgAttribute[] {
+  const out: SvgAttribute[] = [];
+  if (n.kind === "path") {
+    push(out, "d", PATH_SAFE.test(n.d) ? n.d : "");
+    push(out, "fill", paint(n.fill) ?? "none");
+    push(out, "fill-opacity", num(n.fillOpacity));
+    if (n.stroke) {
+      push(out, "stroke", paint(n.stroke));
+      push(out, "stroke-width", num(n.strokeWidth));
+      push(out, "stroke-opacity", num(n.strokeOpacity));
+      push(out, "stroke-dasharray", n.dash && DASH_SAFE.test(n.dash) ? n.dash : undefined);
+      // Round joins: no miter spikes at the turns of dense data, and cheap stroke bounds for the browser.
+      push(out, "stroke-linejoin", "round");
+    }
+  } else if (n.kind === "rect") {
+    push(out, "x", num(n.x));
+    push(out, "y", num(n.y));
+    push(out, "width", num(Math.max(0, n.w)));
+    push(out, "height", num(Math.max(0, n.h)));
+    push(out, "fill", paint(n.fill) ?? "none");
+    push(out, "fill-opacity", num(n.fillOpacity));
+    if (n.stroke) {
+      push(out, "stroke", paint(n.stroke));
+      push(out, "stroke-width", num(n.strokeWidth));
+    }
+  } else {
+    push(out, "x", num(n.x));
+    push(out, "y", num(placeRuns(n).baselineY));
+    push(out, "font-size", num(n.sizePx));
+    push(out, "text-anchor", n.anchor === "start" ? undefined : n.anchor);
+    push(out, "font-weight", n.weight === "bold" ? "bold" : undefined);
+    push(out, "fill", paint(n.fill) ?? "#000000");
+    if (n.rotate) push(out, "transform", `rotate(${fmt(n.rotate)} ${fmt(n.x)} ${fmt(n.y)})`);
+    push(out, "xml:space", "preserve");
   }
-  return (
-    "<text" +
-    attr("id", ids.get(n.id)) +
-    attr("x", n.x) +
-    attr("y", placed.baselineY) +
-    attr("font-size", n.sizePx) +
-    attr("text-anchor", n.anchor === "start" ? undefined : n.anchor) +
-    attr("font-weight", n.weight === "bold" ? "bold" : undefined) +
-    attr("fill", paint(n.fill) ?? "#000000") +
-    (n.rotate ? attr("transform", `rotate(${fmt(n.rotate)} ${fmt(n.x)} ${fmt(n.y)})`) : "") +
-    ' xml:space="preserve"' +
-    dataAttrs(n.data) +
-    ">" +
-    inner +
-    "</text>"
-  );
+  pushData(out, n.data);
+  return out;
+}
+
+/** The tspans of a text node as written: attributes (dy, font-size, font-style) and text of each run. */
+export function textSpans(n: TextNode): { attrs: SvgAttribute[]; text: string }[] {
+  return placeRuns(n).runs.map((r) => {
+    const attrs: SvgAttribute[] = [];
+    if (r.dyPx !== 0) attrs.push(["dy", fmt(r.dyPx)]);
+    if (r.sizePx !== undefined) attrs.push(["font-size", fmt(r.sizePx)]);
+    if (r.italic) attrs.push(["font-style", "italic"]);
+    return { attrs, text: r.text };
+  });
+}
+
+function attrsText(attrs: SvgAttribute[]): string {
+  let s = "";
+  for (const [k, v] of attrs) s += ` ${k}="${escapeXml(v)}"`;
+  return s;
 }
 
 function nodeEl(n: SceneNode, ids: Ids): string {
-  if (n.kind === "path") return pathEl(n, ids);
-  if (n.kind === "rect") return rectEl(n, ids);
-  return textEl(n, ids);
+  const tag = n.kind === "path" ? "path" : n.kind === "rect" ? "rect" : "text";
+  const id = ids.get(n.id);
+  const head = `<${tag}${id ? ` id="${escapeXml(id)}"` : ""}${attrsText(nodeAttributes(n))}`;
+  if (n.kind !== "text") return head + "/>";
+  let inner = "";
+  for (const span of textSpans(n)) inner += span.attrs.length ? `<tspan${attrsText(span.attrs)}>${escapeXml(span.text)}</tspan>` : escapeXml(span.text);
+  return `${head}>${inner}</text>`;
 }
 
 /**
