@@ -57,7 +57,8 @@ output (at least one of -o, --png, --models-csv):
   --scale K                 PNG at K times the 96-px-per-inch size instead (1 or 2, as the app's 1x/2x)
   --preset NAME             slide | single-column | double-column | custom (default: the project's own)
   --width-mm W --height-mm H  size of the custom preset, in mm
-  --no-embed                leave the project out of the SVG's <metadata> (smaller file, cannot be reopened)
+  --no-embed                leave the project out of the SVG's <metadata> (smaller file, cannot be reopened);
+                            by default it is embedded, with curve data while that stays under 2 MB
   --models-csv FILE.csv     also write the model lines and bands as CSV (m_a, f_a, g_low, g_high)
   --mass-range LO:HI        mass axis in eV, e.g. 1e-7:1e-2 (CSV input: default fitted to the data)
   --g-range LO:HI           y axis in GeV^-1 (CSV input: default fitted to the data)

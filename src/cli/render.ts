@@ -7,7 +7,7 @@ import { parseArgs, USAGE } from "./args";
 import { InputError, loadProject } from "./inputs";
 import { pickFallbackFont, pngPixelSize, renderPng } from "./png";
 import { writeAllOrNothing, type OutputFile } from "./write-atomic";
-import { embedProjectInSvg, exportFigureSvg, exportSizeInches, rasterResolution } from "../plot/figure-file";
+import { EMBED_MAX_CHARS, embedProjectInSvgWithInfo, exportFigureSvg, exportSizeInches, rasterResolution } from "../plot/figure-file";
 import { presetOf } from "../plot/layout";
 import { modelsToCsv } from "../plot/model-csv";
 
@@ -57,11 +57,16 @@ export function main(argv: readonly string[], io: Io = consoleIo): number {
     // The project is embedded into the written SVG only; rasters are drawn from the lighter bare SVG.
     const bare = opts.out ? exportFigureSvg(project, { embedProject: false }) : "";
     if (opts.out) {
-      const svg = opts.embed ? embedProjectInSvg(bare, project) : bare;
+      const embedded = opts.embed ? embedProjectInSvgWithInfo(bare, project) : undefined;
+      const svg = embedded ? embedded.svg : bare;
+      if (embedded && !embedded.embeddedCurves) {
+        io.err(
+          `note: project embedded without curve data (${embedded.omittedPoints} points exceed the ${EMBED_MAX_CHARS / 1e6} MB cap); the SVG reopens with models, figure and constants only: keep the project file or the CSV files for the data`,
+        );
+      }
+      const embedNote = embedded ? (embedded.embeddedCurves ? ", project embedded" : ", project embedded without curve data") : "";
       files.push({ path: opts.out, data: svg });
-      report.push(
-        `wrote ${opts.out} (${size(Buffer.byteLength(svg))}, ${preset.widthPhysical} × ${preset.heightPhysical}, ${project.curves.length} curve(s), ${project.models.length} model(s)${opts.embed ? ", project embedded" : ""})`,
-      );
+      report.push(`wrote ${opts.out} (${size(Buffer.byteLength(svg))}, ${preset.widthPhysical} × ${preset.heightPhysical}, ${project.curves.length} curve(s), ${project.models.length} model(s)${embedNote})`);
     }
     if (opts.png) {
       const inches = exportSizeInches(project);

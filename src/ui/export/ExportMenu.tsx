@@ -3,7 +3,7 @@
 // file, and the model lines and bands as CSV. All files come from the same scene builder as the screen.
 import { useState } from "react";
 import type { SizePreset } from "../../data/types";
-import { exportFigureSvg } from "../../plot/figure-file";
+import { EMBED_MAX_CHARS, exportFigureSvgWithInfo } from "../../plot/figure-file";
 import { PRESETS, presetOf, CUSTOM_MM_LIMITS } from "../../plot/layout";
 import { modelsToCsv } from "../../plot/model-csv";
 import { setPngDpi } from "../../plot/png-meta";
@@ -46,15 +46,23 @@ export function ExportMenu() {
 
   const svgNow = () => {
     const project = useAxband.getState().project;
-    return { project, svg: exportFigureSvg(project, { preset: project.figure.preset, embedProject: true }) };
+    return { project, ...exportFigureSvgWithInfo(project, { preset: project.figure.preset, embedProject: true }) };
   };
 
   const saveSvg = () => {
     try {
-      const { project, svg } = svgNow();
+      const { project, svg, embeddedCurves, omittedCurves, omittedPoints } = svgNow();
       const name = `${figureBaseName(project.name)}.svg`;
       downloadBlob(name, new Blob([svg], { type: "image/svg+xml" }));
-      pushMessage("status", `Saved ${name} (${(size.widthMm / 10).toFixed(1)} × ${(size.heightMm / 10).toFixed(1)} cm; drop it on axband to reopen the project).`);
+      const cm = `${(size.widthMm / 10).toFixed(1)} × ${(size.heightMm / 10).toFixed(1)} cm`;
+      if (embeddedCurves) pushMessage("status", `Saved ${name} (${cm}; drop it on axband to reopen the project).`);
+      else {
+        const n = omittedCurves.length;
+        pushMessage(
+          "alert",
+          `Saved ${name} (${cm}) without the data of ${n === 1 ? "its curve" : `its ${n} curves`} (${omittedPoints.toLocaleString("en")} points, more than ${EMBED_MAX_CHARS / 1e6} MB embedded): dropped on axband it reopens the models and figure only. Save the project file to keep the data.`,
+        );
+      }
     } catch (e) {
       pushMessage("alert", `The SVG could not be made: ${e instanceof Error ? e.message : String(e)}.`);
     }
