@@ -119,6 +119,10 @@ async function main() {
     await page.waitForSelector("body[data-ready='1']", { timeout: 60000 });
     const r = await page.evaluate((o) => window.runBench(o), { steps: STEPS, plainSteps: PLAIN_STEPS });
     if (errors.length) log("page errors:", errors.join("\n"));
+    if (process.env.AXBAND_BENCH_DETAIL) {
+      const steps = await page.evaluate(() => window.benchSteps);
+      for (const st of steps) log(`  span ${st.span.toFixed(3)} dec  build ${st.build.toFixed(1)}  set ${st.set.toFixed(1)}  dom ${st.dom.toFixed(1)}  chars ${st.chars}`);
+    }
     const f = (x) => x.toFixed(2).padStart(9);
     log(`inputs: ${r.curves} invented curves, ${r.points.toLocaleString("en")} points; slide preset 960×540, devicePixelRatio ${r.devicePixelRatio}`);
     log(`first draw (builds the per-curve caches): ${r.firstDrawMs.toFixed(1)} ms`);

@@ -204,6 +204,7 @@ async function run(opts: { steps: number; plainSteps: number }): Promise<BenchRe
     pc.push(pathChars(scene));
     await new Promise((res) => requestAnimationFrame(() => res(null)));
   }
+  (window as unknown as { benchSteps: unknown }).benchSteps = ranges.map((r, i) => ({ span: Math.log10(r[1] / r[0]), build: b[i], set: set[i], dom: d[i], chars: chars[i] }));
   return {
     points: project.curves.reduce((n, c) => n + c.massEv.length, 0),
     curves: project.curves.length,

@@ -42,7 +42,7 @@ interface LevelSelection {
 export const RUN_CHUNK = 1024;
 
 /** Selections cached per curve and view; older levels are dropped beyond this. */
-const MAX_LEVELS = 10;
+const MAX_LEVELS = 24;
 
 /** Points per bounding box of an unsorted curve: off-screen boxes are skipped without mapping their points. */
 export const BOX_CHUNK = 64;
@@ -324,8 +324,15 @@ export interface ColumnParams {
  * @param lm ascending log10 masses. @param v log10 y values (any monotone y map keeps the same indices).
  */
 export function thinColumns(lm: Float64Array, v: Float64Array, pyr: Pyramid | null, p: ColumnParams): Int32Array {
+  // Count first: the call may replace idxScratch with a larger buffer.
+  const count = thinColumnsInto(lm, v, pyr, p);
+  return idxScratch.slice(0, count);
+}
+
+/** {@link thinColumns} leaving the indices in idxScratch; returns their count. */
+function thinColumnsInto(lm: Float64Array, v: Float64Array, pyr: Pyramid | null, p: ColumnParams): number {
   const n = lm.length;
-  if (n === 0) return new Int32Array(0);
+  if (n === 0) return 0;
   const start = Math.max(0, lowerBound(lm, p.lmLo) - 1);
   const end = Math.min(n, upperBound(lm, p.lmHi) + 1);
   const { colL0, colK } = p;
@@ -368,7 +375,7 @@ export function thinColumns(lm: Float64Array, v: Float64Array, pyr: Pyramid | nu
     }
     i = j;
   }
-  return idxScratch.slice(0, count);
+  return count;
 }
 
 /** Points per independent Douglas–Peucker chunk: bounds the worst case at O(n · CHUNK) on adversarial data. */
@@ -761,9 +768,7 @@ export function curvePixels(prep: PreparedCurve, closed: boolean, p: PixelParams
     const va = viewArrays(prep, p.slope, closed);
     const colL0 = (pl.x - p.ax) / p.bx;
     const colK = p.bx * res;
-    const idx = thinColumns(prep.lm, va.v, va.pyramid, { lmLo: colL0, lmHi: (pl.x + pl.w - p.ax) / p.bx, colL0, colK });
-    n = idx.length;
-    idxScratch.set(idx);
+    n = thinColumnsInto(prep.lm, va.v, va.pyramid, { lmLo: colL0, lmHi: (pl.x + pl.w - p.ax) / p.bx, colL0, colK });
     mapSelected(prep, va.v, n, p);
     n = cullOutside(n, cullRect);
   } else {

@@ -25,7 +25,23 @@ export function fmt(v: number): string {
 
 const DATA_KEY = /^[a-z0-9-]+$/;
 const ID_SAFE = /[^A-Za-z0-9_-]/g;
-const PATH_SAFE = /^[MLHVZCQSTAmlhvzcqsta0-9eE+\-.,\s]*$/;
+const PATH_CHARS = (() => {
+  const t = new Uint8Array(128);
+  for (const ch of "MLHVZCQSTAmlhvzcqsta0123456789eE+-., \t\n\r") t[ch.charCodeAt(0)] = 1;
+  return t;
+})();
+
+/**
+ * True when path data holds only path commands, digits, signs, dots, commas and spaces (nothing that could
+ * close the attribute or reference anything). A table lookup: this runs over every curve on every frame.
+ */
+export function isSafePathData(d: string): boolean {
+  for (let i = 0; i < d.length; i++) {
+    const c = d.charCodeAt(i);
+    if (c >= 128 || PATH_CHARS[c] === 0) return false;
+  }
+  return true;
+}
 const DASH_SAFE = /^[0-9.\s,]*$/;
 
 export interface WriteSvgOpts {
@@ -93,7 +109,7 @@ function pushData(out: SvgAttribute[], data: Record<string, string> | undefined)
 export function nodeAttributes(n: SceneNode): SvgAttribute[] {
   const out: SvgAttribute[] = [];
   if (n.kind === "path") {
-    push(out, "d", PATH_SAFE.test(n.d) ? n.d : "");
+    push(out, "d", isSafePathData(n.d) ? n.d : "");
     push(out, "fill", paint(n.fill) ?? "none");
     push(out, "fill-opacity", num(n.fillOpacity));
     if (n.stroke) {

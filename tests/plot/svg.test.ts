@@ -2,7 +2,7 @@
 // physical size, text kept as text with real sub/superscripts, inert output for hostile labels, and bytes
 // that depend only on the scene.
 import { describe, expect, test } from "vitest";
-import { buildScene, escapeXml, writeSvg } from "../../src/plot/index";
+import { buildScene, escapeXml, isSafePathData, writeSvg } from "../../src/plot/index";
 import { INJECTION_CORPUS, parseXml, SVG_NS, texts, unsafeParts } from "../cli/svg-checks";
 import { curve, fixtureProject, model } from "./fixture";
 
@@ -105,11 +105,16 @@ describe("escaping (W3C XML 1.0 5th ed. §2.4 and §3.3.3; OWASP XSS filter evas
     const legend = scene.layers.find((l) => l.id === "legend")!;
     const t = legend.nodes.find((n) => n.kind === "text")!;
     (t.data as Record<string, string>)["Bad Key onclick"] = "x";
+    const curvesLayer = scene.layers.find((l) => l.id === "curves")!;
+    const path = curvesLayer.nodes.find((n) => n.kind === "path")!;
+    if (path.kind === "path") path.d = 'M0 0" onclick="alert(1)';
     (t.data as Record<string, string>)["ok-key"] = '"><b>';
     const svg = writeSvg(scene);
     const doc = parseXml(svg);
     expect(unsafeParts(doc)).toEqual([]);
     expect(svg).not.toMatch(/onload|onclick|example\.com/);
+    expect(isSafePathData("M1 2l.5-3h4v-.25Z")).toBe(true);
+    expect(isSafePathData('M0 0"/><script>')).toBe(false);
     expect(svg).toContain('data-ok-key="&quot;&gt;&lt;b&gt;"');
   });
 });
