@@ -18,7 +18,8 @@ export interface PreparedCurve {
   views: Map<number, ViewArrays>;
 }
 
-interface ViewArrays {
+/** The arrays of one y view of a prepared curve (exported for prepare-transfer.ts, which moves them between threads). */
+export interface ViewArrays {
   /** log10 of the y-view value without its constant offset: lg + slope·lm. */
   v: Float64Array;
   pyramid: Pyramid | null;
@@ -125,6 +126,27 @@ export function prepareCurve(massEv: Float64Array, gInvGeV: Float64Array, sorted
   const prep: PreparedCurve = { n, skipped: len - n, lm, lg, sorted, views: new Map() };
   entry[key] = prep;
   return prep;
+}
+
+/**
+ * Puts a curve prepared elsewhere (in a worker, see prepare-transfer.ts) into the cache, so prepareCurve and
+ * the scene builder use it for these arrays. The caller vouches that it is what prepareCurve would build; an
+ * entry already cached for the same arrays and order is kept.
+ */
+export function installPrepared(massEv: Float64Array, gInvGeV: Float64Array, prep: PreparedCurve): void {
+  let entry = cache.get(massEv);
+  if (!entry || entry.g !== gInvGeV) {
+    entry = { g: gInvGeV };
+    cache.set(massEv, entry);
+  }
+  const key = prep.sorted ? "sorted" : "file";
+  if (!entry[key]) entry[key] = prep;
+}
+
+/** The prepared curve cached for these arrays and order, if any (nothing is computed). */
+export function cachedPrepared(massEv: Float64Array, gInvGeV: Float64Array, sorted: boolean): PreparedCurve | undefined {
+  const entry = cache.get(massEv);
+  return entry && entry.g === gInvGeV ? entry[sorted ? "sorted" : "file"] : undefined;
 }
 
 /** The view arrays of a prepared curve for a y-view slope (built once, then cached on the curve). */
