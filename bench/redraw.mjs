@@ -117,6 +117,13 @@ async function main() {
     page.on("pageerror", (e) => errors.push(String(e)));
     await page.goto(`http://127.0.0.1:${port}/`);
     await page.waitForSelector("body[data-ready='1']", { timeout: 60000 });
+    if (process.env.AXBAND_BENCH_DOM_ONLY) {
+      for (const [strip, textByTransform] of [[undefined, false], [undefined, true], ["text", false]]) {
+        const d = await page.evaluate((o) => window.domOnly(o), { steps: STEPS, strip, textByTransform });
+        log(`DOM only${strip ? ` without ${strip}` : ""}${textByTransform ? " (labels moved by transform)" : ""}: set ${d.setMs.toFixed(2)} ms, set + geometry ${d.domMs.toFixed(2)} ms`);
+      }
+      return;
+    }
     const r = await page.evaluate((o) => window.runBench(o), { steps: STEPS, plainSteps: PLAIN_STEPS });
     if (errors.length) log("page errors:", errors.join("\n"));
     if (process.env.AXBAND_BENCH_DETAIL) {

@@ -218,3 +218,43 @@ async function run(opts: { steps: number; plainSteps: number }): Promise<BenchRe
 
 (window as unknown as { runBench: typeof run }).runBench = run;
 document.body.dataset.ready = "1";
+
+/** DOM-only timing (diagnostics): prebuilt scenes put into a fresh <svg>, optionally with parts stripped. */
+async function domOnly(opts: { steps: number; strip?: "text" | "fill" | "stroke" | "clip"; textByTransform?: boolean }): Promise<{ setMs: number; domMs: number }> {
+  const project = await loadProject();
+  const host = document.createElement("div");
+  document.body.appendChild(host);
+  const render = createDomRenderer(host, !!opts.textByTransform);
+  const ranges = zoomSequence(project.figure.massRangeEv, opts.steps);
+  const scenes = ranges.map((r) => {
+    const s = buildScene({ ...project, figure: { ...project.figure, massRangeEv: r } });
+    for (const l of s.layers) {
+      if (opts.strip === "text") l.nodes = l.nodes.filter((n) => n.kind !== "text");
+      if (opts.strip === "clip") l.clip = false;
+      for (const n of l.nodes) {
+        if (n.kind !== "path") continue;
+        if (opts.strip === "fill" && n.stroke) n.fill = "none";
+        if (opts.strip === "stroke" && n.fill && n.fill !== "none") n.stroke = undefined;
+      }
+    }
+    return s;
+  });
+  const sync = () => (host.querySelector("#curves") as SVGGElement | null)?.getBBox();
+  render(scenes[0]);
+  sync();
+  const set: number[] = [];
+  const dom: number[] = [];
+  for (const s of scenes) {
+    const t0 = performance.now();
+    render(s);
+    const t1 = performance.now();
+    sync();
+    const t2 = performance.now();
+    set.push(t1 - t0);
+    dom.push(t2 - t0);
+    await new Promise((res) => requestAnimationFrame(() => res(null)));
+  }
+  host.remove();
+  return { setMs: median(set), domMs: median(dom) };
+}
+(window as unknown as { domOnly: typeof domOnly }).domOnly = domOnly;

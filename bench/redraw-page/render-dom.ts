@@ -15,9 +15,16 @@ function n(v: number): string {
   return String(Math.round(v * 100) / 100);
 }
 
-function attrsOf(node: SceneNode): Record<string, string> {
+function attrsOf(node: SceneNode, textByTransform: boolean): Record<string, string> {
   const a: Record<string, string> = {};
   for (const [k, v] of nodeAttributes(node)) if (k !== "xml:space") a[k] = v;
+  if (textByTransform && node.kind === "text") {
+    // Moving a label by transform needs no new text layout in the browser (x/y changes do).
+    const rot = a.transform ? ` rotate(${node.rotate} 0 ${Number(a.y) - node.y})` : "";
+    a.transform = `translate(${a.x} ${n(node.y)})${rot}`;
+    a.y = n(Number(a.y) - node.y);
+    delete a.x;
+  }
   return a;
 }
 
@@ -37,7 +44,7 @@ function fillText(el: SVGElement, node: SceneNode): void {
 }
 
 /** A persistent renderer into one <svg>: call render(scene) for every frame. */
-export function createDomRenderer(host: HTMLElement): (scene: Scene) => void {
+export function createDomRenderer(host: HTMLElement, textByTransform = false): (scene: Scene) => void {
   const svg = document.createElementNS(NS, "svg");
   svg.setAttribute("xmlns", NS);
   host.appendChild(svg);
@@ -49,13 +56,21 @@ export function createDomRenderer(host: HTMLElement): (scene: Scene) => void {
   defs.appendChild(clip);
   svg.appendChild(defs);
   const groups = new Map<string, { g: SVGGElement; slots: Map<string, Slot> }>();
+  // Only changed values are written: even setting an attribute to the same value (e.g. the viewBox) can make
+  // the browser lay out the whole figure again.
+  const last: Record<string, string> = {};
+  const set = (el: Element, key: string, name: string, value: string) => {
+    if (last[key] === value) return;
+    last[key] = value;
+    el.setAttribute(name, value);
+  };
   return (scene: Scene) => {
-    svg.setAttribute("viewBox", `0 0 ${scene.widthPx} ${scene.heightPx}`);
-    svg.setAttribute("font-family", scene.fontFamily);
-    clipRect.setAttribute("x", n(scene.plot.x));
-    clipRect.setAttribute("y", n(scene.plot.y));
-    clipRect.setAttribute("width", n(scene.plot.w));
-    clipRect.setAttribute("height", n(scene.plot.h));
+    set(svg, "vb", "viewBox", `0 0 ${scene.widthPx} ${scene.heightPx}`);
+    set(svg, "ff", "font-family", scene.fontFamily);
+    set(clipRect, "cx", "x", n(scene.plot.x));
+    set(clipRect, "cy", "y", n(scene.plot.y));
+    set(clipRect, "cw", "width", n(scene.plot.w));
+    set(clipRect, "ch", "height", n(scene.plot.h));
     for (const layer of scene.layers) {
       let grp = groups.get(layer.id);
       if (!grp) {
@@ -66,18 +81,26 @@ export function createDomRenderer(host: HTMLElement): (scene: Scene) => void {
         grp = { g, slots: new Map() };
         groups.set(layer.id, grp);
       }
-      const seen = new Set<string>();
+      // Drop elements whose node is gone first, so the ones that stay never move (moving an element makes
+      // the browser lay it out again, which for text is the expensive part of a frame).
+      const keys = layer.nodes.map((node, i) => `${node.kind}:${node.id ?? i}`);
+      const seen = new Set(keys);
+      for (const [key, slot] of grp.slots) {
+        if (!seen.has(key)) {
+          slot.el.remove();
+          grp.slots.delete(key);
+        }
+      }
       let prev: Element | null = null;
       layer.nodes.forEach((node, i) => {
-        const key = `${node.kind}:${node.id ?? i}`;
-        seen.add(key);
+        const key = keys[i];
         let slot = grp.slots.get(key);
         if (!slot) {
           const tag = node.kind === "path" ? "path" : node.kind === "rect" ? "rect" : "text";
           slot = { el: document.createElementNS(NS, tag), kind: node.kind, attrs: {}, text: "" };
           grp.slots.set(key, slot);
         }
-        const next = attrsOf(node);
+        const next = attrsOf(node, textByTransform);
         for (const k of Object.keys(slot.attrs)) if (!(k in next)) slot.el.removeAttribute(k);
         for (const k of Object.keys(next)) if (slot.attrs[k] !== next[k]) slot.el.setAttribute(k, next[k]);
         slot.attrs = next;
@@ -90,12 +113,6 @@ export function createDomRenderer(host: HTMLElement): (scene: Scene) => void {
         if (want !== slot.el) grp.g.insertBefore(slot.el, want);
         prev = slot.el;
       });
-      for (const [key, slot] of grp.slots) {
-        if (!seen.has(key)) {
-          slot.el.remove();
-          grp.slots.delete(key);
-        }
-      }
     }
   };
 }

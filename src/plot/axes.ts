@@ -80,6 +80,14 @@ export function axisTicks(f: AxesFrame): AxisTicks {
   return { x, y, top, topTitle, frequencyUnit };
 }
 
+/** A tick value as an id part: "1e-6", "2_5e-7" (only [A-Za-z0-9_-]). */
+function valueKey(v: number): string {
+  return Number(v.toPrecision(6))
+    .toExponential()
+    .replace("+", "")
+    .replace(/[^A-Za-z0-9-]/g, "_");
+}
+
 function text(id: string, x: number, y: number, runs: TextRun[], sizePx: number, anchor: TextNode["anchor"], extra: Partial<TextNode> = {}): TextNode {
   return { kind: "text", id, x: r2(x), y: r2(y), runs, sizePx: r2(sizePx), anchor, baseline: "alphabetic", fill: "#1a1a1a", ...extra };
 }
@@ -122,12 +130,15 @@ export function axesNodes(f: AxesFrame, t: AxisTicks, layout: Layout, yTitleRuns
   if (major) nodes.push({ kind: "path", id: "ticks-major", d: major, stroke: "#1a1a1a", strokeWidth: lw, fill: "none" });
   nodes.push({ kind: "rect", id: "frame", x: r2(x0), y: r2(y0), w: r2(plot.w), h: r2(plot.h), fill: "none", stroke: "#1a1a1a", strokeWidth: lw });
 
-  let n = 0;
-  for (const tk of t.x) if (tk.label && inX(tk.px)) nodes.push(text(`xlabel-${++n}`, tk.px, layout.xLabelBaseline, tk.label, fonts.tickPx, "middle"));
-  n = 0;
-  for (const tk of t.y) if (tk.label && inY(tk.px)) nodes.push(text(`ylabel-${++n}`, layout.yLabelRight, tk.px + 0.36 * fonts.tickPx, tk.label, fonts.tickPx, "end"));
-  n = 0;
-  for (const tk of t.top ?? []) if (tk.label && inX(tk.px)) nodes.push(text(`toplabel-${++n}`, tk.px, layout.topLabelBaseline, tk.label, fonts.tickPx, "middle"));
+  // Label ids follow the tick value, so a label keeps its id (and its element on screen) while zooming.
+  // Labels of the horizontal axes that would cross the figure edge are left out.
+  const fitsX = (tk: { px: number; label: TextRun[] | null }) => {
+    const half = runsWidthPx(tk.label ?? [], fonts.tickPx) / 2;
+    return tk.px - half >= 0 && tk.px + half <= layout.figureWidthPx;
+  };
+  for (const tk of t.x) if (tk.label && inX(tk.px) && fitsX(tk)) nodes.push(text(`xlabel-${valueKey(tk.value)}`, tk.px, layout.xLabelBaseline, tk.label, fonts.tickPx, "middle"));
+  for (const tk of t.y) if (tk.label && inY(tk.px)) nodes.push(text(`ylabel-${valueKey(tk.value)}`, layout.yLabelRight, tk.px + 0.36 * fonts.tickPx, tk.label, fonts.tickPx, "end"));
+  for (const tk of t.top ?? []) if (tk.label && inX(tk.px) && fitsX(tk)) nodes.push(text(`toplabel-${valueKey(tk.value)}`, tk.px, layout.topLabelBaseline, tk.label, fonts.tickPx, "middle"));
 
   nodes.push(text("xtitle", x0 + plot.w / 2, layout.xTitleBaseline, MASS_TITLE, fonts.titlePx, "middle"));
   nodes.push(text("ytitle", layout.yTitleX, y0 + plot.h / 2, yTitleRuns, fonts.titlePx, "middle", { rotate: -90 }));

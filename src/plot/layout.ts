@@ -125,6 +125,8 @@ export interface LayoutInput {
 /** Positions of everything around the plot area, in scene px. */
 export interface Layout {
   plot: PlotRect;
+  /** Width of the whole figure (labels must stay inside it). */
+  figureWidthPx: number;
   /** Inward tick lengths, major and minor. */
   tickMajorPx: number;
   tickMinorPx: number;
@@ -221,6 +223,7 @@ export function computeLayout(input: LayoutInput): Layout {
   }
   return {
     plot,
+    figureWidthPx: W,
     tickMajorPx,
     tickMinorPx,
     labelGapPx: gap,

@@ -3,9 +3,9 @@
 import { bandCancels } from "../physics/coupling";
 import type { Curve, Model, Project, YView } from "../data/types";
 import type { PathNode, Scene, SceneLayer, SceneNode, ScaleConfig } from "./scene-types";
-import { axesNodes, axisTicks, gridNodes, horizontalTickOpts, verticalTickOpts, yTitle, type AxesFrame } from "./axes";
+import { axesNodes, axisTicks, gridNodes, verticalTickOpts, yTitle, type AxesFrame } from "./axes";
 import { curveGeometry } from "./curves";
-import { dashFor, plainOrScientificRuns, r2, safeColour, unitInterval } from "./format";
+import { dashFor, plainOrScientificRuns, powerOfTenRuns, r2, safeColour, unitInterval } from "./format";
 import { computeLayout, fontsFor, presetOf, PX_PER_IN, type Fonts } from "./layout";
 import { legendNodes, measureLegend, type LegendEntry } from "./legend";
 import { modelGeometry } from "./models";
@@ -134,9 +134,9 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   const legendBox = measureLegend(entries, fonts.legendPx, legendMax);
 
   const ySpan = Math.log10(yDomain[1] / yDomain[0]);
-  const xSpan = Math.log10(massDomainEv[1] / massDomainEv[0]);
-  const xLabels = logTicks(massDomainEv[0], massDomainEv[1], horizontalTickOpts((widthPx * 0.8) / xSpan, fonts));
-  const xHalf = xLabels.reduce((w, t) => (t.label ? Math.max(w, runsWidthPx(t.label, fonts.tickPx) / 2) : w), 0);
+  // Right margin: half of a wide decade label ("10⁻¹⁰"), fixed for the font size so the plot area does not
+  // jump while zooming; a label that would still cross the figure edge is left out (axesNodes).
+  const xHalf = runsWidthPx(powerOfTenRuns(-10), fonts.tickPx) / 2;
   const layout = computeLayout({
     widthPx,
     heightPx,

@@ -249,7 +249,8 @@ describe("legend, layers and sizes", () => {
     expect(s.widthPhysical).toBe("8.6cm");
     expect(s.widthPx).toBeCloseTo(325.04, 2);
     // 12 pt base × 2/3 = 8 pt tick labels in a single column (8 pt · 96/72 = 10.67 px)
-    expect(textNodes(s, "axes").find((t) => t.id === "xlabel-1")!.sizePx).toBeCloseTo(10.67, 2);
+    expect(textNodes(s, "axes").find((t) => t.id?.startsWith("xlabel-"))!.sizePx).toBeCloseTo(10.67, 2);
+    expect(textNodes(s, "axes").find((t) => t.id === "xlabel-1e-6")).toBeDefined();
   });
 
   test("layers in order with the plot-area clip on curves, models, highlight and grid; axis titles with sub/superscripts", () => {
@@ -283,6 +284,26 @@ describe("legend, layers and sizes", () => {
       const yl = textNodes(scene, "axes").filter((t) => t.id?.startsWith("ylabel-")).map((t) => t.y);
       for (let i = 1; i < yl.length; i++) expect(Math.abs(yl[i] - yl[i - 1])).toBeGreaterThan(textNodes(scene, "axes")[0].sizePx);
     }
+  });
+
+  test("the plot area stays put while zooming the mass axis (no jumping frame on screen), labels stay inside the figure", () => {
+    const p = fixtureProject();
+    const rects = new Set<string>();
+    for (const range of [
+      [1e-7, 1e-2],
+      [2.1e-5, 9.5e-5],
+      [1.2e-9, 3e-3],
+      [3.1e-6, 3.4e-6],
+    ] as [number, number][]) {
+      p.figure.massRangeEv = range;
+      const scene = buildScene(p);
+      rects.add(JSON.stringify(scene.plot));
+      for (const t of textNodes(scene, "axes").filter((n) => n.id?.startsWith("xlabel-") || n.id?.startsWith("toplabel-"))) {
+        expect(t.x).toBeGreaterThan(0);
+        expect(t.x).toBeLessThan(scene.widthPx);
+      }
+    }
+    expect(rects.size).toBe(1);
   });
 
   test("the same project gives the same scene", () => {
