@@ -71,6 +71,9 @@ describe("exclusion curves: exact intervals = brute-force classification", () =>
       fc.property(modelArb, curveArb, fc.array(fc.double({ min: 0, max: 1, noNaN: true }), { minLength: 400, maxLength: 400 }), (model, c, us) => {
         const xs = [...c.logMasses].sort((p, q) => p - q).map((l) => l * Math.LN10);
         if (xs[xs.length - 1] - xs[0] < 1e-3) return;
+        // Two samples at (numerically) the same mass make a vertical step whose order in the file decides
+        // which value the next segment starts from; the brute force cannot know it, so keep masses apart.
+        if (xs.some((x, i) => i > 0 && x - xs[i - 1] < 1e-9)) return;
         const [lo, hi] = levels(model);
         const mid = Number.isFinite(lo) ? (lo + hi) / 2 : hi;
         // Curve values scattered around the band in the sheared plane (ln g − ln m).
@@ -108,7 +111,7 @@ describe("exclusion curves: exact intervals = brute-force classification", () =>
         if (model.eOverNMin === model.eOverNMax && model.sigmas === 0) expect(d.part).toEqual([]);
         if (d.cancels) expect(d.whole).toEqual([]);
       }),
-      { numRuns: 300 },
+      { numRuns: 300, ...(process.env.FC_SEED ? { seed: Number(process.env.FC_SEED) } : {}) },
     );
   });
 
@@ -146,7 +149,7 @@ describe("exclusion curves: exact intervals = brute-force classification", () =>
           }
         }
       }),
-      { numRuns: 300 },
+      { numRuns: 300, ...(process.env.FC_SEED ? { seed: Number(process.env.FC_SEED) } : {}) },
     );
   });
 });
@@ -202,7 +205,7 @@ describe("regions: exact intervals = brute-force cross-sections", () => {
         }
         if (d.cancels) expect(d.whole).toEqual([]);
       }),
-      { numRuns: 300 },
+      { numRuns: 300, ...(process.env.FC_SEED ? { seed: Number(process.env.FC_SEED) } : {}) },
     );
   });
 });
