@@ -31,7 +31,8 @@ export async function openProjectFile(file: Blob & { name: string }): Promise<Op
     if (isSvg) {
       const r = extractProjectFromSvg(text);
       if (!r.ok) return { ok: false, error: `${file.name} was not opened: ${r.error}.` };
-      return { ok: true, project: r.project, message: `Opened the project embedded in ${file.name}.` };
+      const left = r.note ? ` Note: ${r.note}.` : "";
+      return { ok: true, project: r.project, message: `Opened the project embedded in ${file.name}.${left}` };
     }
     const r = projectFromFile(text, file.name);
     if (!r.ok) return { ok: false, error: r.error };
