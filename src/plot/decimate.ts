@@ -765,10 +765,12 @@ const RUNS_PX = 0.5;
  * Sorted curves: per column of 1/resolution scene px the first, lowest, highest and last point, at their
  * own positions (moving them to the column centre would widen a spike that ends a column into a visible
  * notch).
- * Unsorted curves and closed regions: the smaller of Douglas–Peucker at 0.5 device px (smooth outlines) or
- * run thinning at 0.5 device px (noisy ones); both ≤ 0.5 device px from the full curve. The DP tolerance is
- * divided by the larger px-per-decade so it holds on both axes.
+ * Unsorted curves and closed regions: Douglas–Peucker at 0.5 device px while it keeps few points (smooth
+ * outlines; the tolerance is divided by the larger px-per-decade so it holds on both axes), else run thinning
+ * at 0.5 device px when that keeps fewer (noisy outlines, computed only for chunks near the plot and cached
+ * per level); either way ≤ 0.5 device px from the full curve.
  * Then points beyond the plot (+ margin) are culled exactly and the rest clipped to the plot ± 2 plot sizes.
+ * With `thin: false` every point is drawn (for comparisons only).
  */
 export function curvePixels(prep: PreparedCurve, closed: boolean, p: PixelParams): Polyline {
   const res = p.resolution && p.resolution > 0 ? p.resolution : 1;
