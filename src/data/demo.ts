@@ -139,7 +139,7 @@ export function demoModels(): Model[] {
   return [
     newModel({ id: "ksvz", label: "KSVZ-type, E/N = 0", eOverNMin: "0", colour: MODEL_COLOURS[0] }),
     newModel({ id: "dfsz", label: "DFSZ-type, E/N = 8/3", eOverNMin: "8/3", colour: MODEL_COLOURS[1] }),
-    newModel({ id: "window", label: "Preferred window, E/N = 5/3..44/3", eOverNMin: "5/3", eOverNMax: "44/3", colour: MODEL_COLOURS[2], fillOpacity: 0.2 }),
+    newModel({ id: "window", label: "Heavy-quark models, E/N = 5/3..44/3", eOverNMin: "5/3", eOverNMax: "44/3", colour: MODEL_COLOURS[2], fillOpacity: 0.2 }),
   ];
 }
 

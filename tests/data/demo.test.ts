@@ -106,7 +106,7 @@ describe("defaultProject (the demo)", () => {
       [8 / 3, 8 / 3],
       [5 / 3, 44 / 3],
     ]);
-    expect(p.models.map((m) => m.label)).toEqual(["KSVZ-type, E/N = 0", "DFSZ-type, E/N = 8/3", "Preferred window, E/N = 5/3..44/3"]);
+    expect(p.models.map((m) => m.label)).toEqual(["KSVZ-type, E/N = 0", "DFSZ-type, E/N = 8/3", "Heavy-quark models, E/N = 5/3..44/3"]);
     for (const m of p.models) expect(MODEL_COLOURS).toContain(m.colour);
   });
 
