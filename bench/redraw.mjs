@@ -1,6 +1,9 @@
 // Redraw benchmark (`node bench/redraw.mjs`): median time of a zoom step in headless Chromium — buildScene
 // with a new mass range plus the DOM update of the <svg> — on 20 invented curves × 100,000 points, against a
 // plain full-resolution draw of the same data in the same run. Prints medians and ratios; never pass/fail.
+// Options (environment): AXBAND_BENCH_STEPS (zoom steps, default 40), AXBAND_BENCH_PLAIN_STEPS (full draws,
+// default 6), AXBAND_BENCH_DETAIL=1 (every step), AXBAND_BENCH_DOM_ONLY=1 (DOM cost of prebuilt scenes only),
+// AXBAND_BENCH_MINIFY=0 (readable bundle for profiling), CHROMIUM_PATH (default /usr/bin/chromium).
 import { spawnSync } from "node:child_process";
 import { createServer } from "node:http";
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from "node:fs";
