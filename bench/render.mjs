@@ -43,7 +43,7 @@ function ensureCurves() {
 
 function cliArgs(manifest, outSvg, extra = []) {
   const files = manifest.curves.flatMap((c) => ["--role", ROLE_OF_KIND[c.kind] ?? "exclusion", join(CURVES, c.file)]);
-  return ["--import", "tsx", "src/cli/render.ts", ...files, "--model", "0", "--model", "8/3", "--model", "44/3", "--preset", "double-column", "--mass-range", MASS_RANGE, "--g-range", G_RANGE, "-o", outSvg, ...extra];
+  return ["src/cli/run.mjs", ...files, "--model", "0", "--model", "8/3", "--model", "44/3", "--preset", "double-column", "--mass-range", MASS_RANGE, "--g-range", G_RANGE, "-o", outSvg, ...extra];
 }
 
 function timed(cmd, args, env = process.env) {
