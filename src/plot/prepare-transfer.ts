@@ -1,0 +1,147 @@
+// A curve's drawing preparation (log10 arrays, and per y view the thinning pyramid or the Douglas–Peucker
+// order) as plain typed arrays: built off the main thread (the import worker), moved without copying, and
+// put into the plot cache there, so the first scene of a million-point curve does not block the page.
+import type { Curve, Figure, PhysicsSettings, YView } from "../data/types";
+import { cachedPrepared, installPrepared, prepareCurve, viewArrays, type PreparedCurve, type ViewArrays } from "./decimate";
+import { drawsSorted } from "./curves";
+import { constantsOf } from "./physics-settings";
+import { viewTransform } from "./scales";
+
+/** The arrays of one y view, as built by viewArrays. */
+export interface ViewTransfer {
+  /** y-view slope (0: g_aγγ; −1: the normalized views). */
+  slope: number;
+  /** lg + slope·lm; null for slope 0, where the view is lg itself. */
+  v: Float64Array | null;
+  /** Sorted curves: the block argmin/argmax pyramid, level by level. */
+  pyramidMin: Int32Array[] | null;
+  pyramidMax: Int32Array[] | null;
+  /** Unsorted curves and regions: importance, culling boxes, importance order and the sorted importances. */
+  importance: Float64Array | null;
+  boxes: Float64Array | null;
+  order: Int32Array | null;
+  impDesc: Float64Array | null;
+}
+
+/** Everything {@link seedPreparedCurve} needs; structured-cloneable, its buffers listed by {@link preparedTransferables}. */
+export interface PreparedTransfer {
+  n: number;
+  skipped: number;
+  sorted: boolean;
+  lm: Float64Array;
+  lg: Float64Array;
+  views: ViewTransfer[];
+}
+
+export interface ComputePreparedOpts {
+  /** y-view slopes to build the view arrays of (the figure's current view is enough). @default [0] */
+  slopes?: readonly number[];
+  /** The curve is a closed region (as curveGeometry passes it). @default !sorted */
+  closed?: boolean;
+}
+
+/** What to prepare for one curve: its drawing order and the y views it will be drawn in first. */
+export interface PrepareSpec {
+  sorted: boolean;
+  closed: boolean;
+  slopes: number[];
+}
+
+/**
+ * The preparation a curve with this role and order needs for the figure's y view (as buildScene draws it).
+ * @param physics the project's constants (the slope does not depend on them, the view factor does).
+ */
+export function prepareSpecOf(curve: Pick<Curve, "role" | "keepOrder">, yView: Figure["yView"], physics?: PhysicsSettings): PrepareSpec {
+  const view: YView = yView === "normalized" || yView === "g-gamma" ? yView : "coupling";
+  return { sorted: drawsSorted(curve), closed: curve.role === "region", slopes: [viewTransform(view, constantsOf(physics)).slope] };
+}
+
+/**
+ * The preparation prepareCurve and viewArrays would build for these arrays, as plain typed arrays. Runs the
+ * same code (so the result is identical by construction); it leaves the curve in this thread's cache too,
+ * which is harmless in a worker whose arrays are then transferred away.
+ * @param massEv masses (eV) as imported. @param gInvGeV couplings (GeV⁻¹) as imported.
+ * @param sorted drawn in mass order (see drawsSorted: exclusions and projections unless keepOrder).
+ */
+export function computePrepared(massEv: Float64Array, gInvGeV: Float64Array, sorted: boolean, opts: ComputePreparedOpts = {}): PreparedTransfer {
+  const prep = prepareCurve(massEv, gInvGeV, sorted);
+  const closed = opts.closed ?? !sorted;
+  const views: ViewTransfer[] = [];
+  for (const slope of new Set(opts.slopes ?? [0])) {
+    if (!Number.isFinite(slope)) continue;
+    const va = viewArrays(prep, slope, closed);
+    views.push({
+      slope,
+      v: va.v === prep.lg ? null : va.v,
+      pyramidMin: va.pyramid ? va.pyramid.levels.map((l) => l.min) : null,
+      pyramidMax: va.pyramid ? va.pyramid.levels.map((l) => l.max) : null,
+      importance: va.importance,
+      boxes: va.boxes,
+      order: va.order,
+      impDesc: va.impDesc,
+    });
+  }
+  return { n: prep.n, skipped: prep.skipped, sorted, lm: prep.lm, lg: prep.lg, views };
+}
+
+/** The distinct buffers of a transfer, for postMessage's transfer list (a buffer listed twice would throw). */
+export function preparedTransferables(t: PreparedTransfer): ArrayBuffer[] {
+  const seen = new Set<ArrayBuffer>();
+  const add = (a: ArrayBufferView | null) => {
+    if (a && a.buffer instanceof ArrayBuffer) seen.add(a.buffer);
+  };
+  add(t.lm);
+  add(t.lg);
+  for (const v of t.views) {
+    add(v.v);
+    v.pyramidMin?.forEach(add);
+    v.pyramidMax?.forEach(add);
+    add(v.importance);
+    add(v.boxes);
+    add(v.order);
+    add(v.impDesc);
+  }
+  return [...seen];
+}
+
+function viewOk(t: PreparedTransfer, v: ViewTransfer): boolean {
+  const n = t.n;
+  if (v.v && v.v.length !== n) return false;
+  if (t.sorted) return !!v.pyramidMin && !!v.pyramidMax && v.pyramidMin.length === v.pyramidMax.length;
+  return v.importance?.length === n && v.order?.length === n && v.impDesc?.length === n && !!v.boxes;
+}
+
+/**
+ * Installs a transfer from {@link computePrepared} in this thread's plot cache under the given arrays (the
+ * ones the curve will be drawn from), so buildScene finds it. A transfer that does not fit the arrays
+ * (other length or order, detached buffers) is ignored and the curve is prepared here when first drawn.
+ * @returns whether it was installed (or an entry was already cached).
+ */
+export function seedPreparedCurve(massEv: Float64Array, gInvGeV: Float64Array, sorted: boolean, t: PreparedTransfer): boolean {
+  if (cachedPrepared(massEv, gInvGeV, sorted)) return true;
+  const len = Math.min(massEv.length, gInvGeV.length);
+  if (t.sorted !== sorted || t.n + t.skipped !== len || t.lm.length !== t.n || t.lg.length !== t.n) return false;
+  const views = new Map<number, ViewArrays>();
+  for (const v of t.views) {
+    if (!viewOk(t, v)) continue;
+    const pyramid = v.pyramidMin && v.pyramidMax ? { levels: v.pyramidMin.map((min, i) => ({ min, max: (v.pyramidMax as Int32Array[])[i] })) } : null;
+    views.set(v.slope, {
+      v: v.v ?? t.lg,
+      pyramid,
+      importance: v.importance,
+      boxes: v.boxes,
+      levels: new Map(),
+      order: v.order,
+      impDesc: v.impDesc,
+    });
+  }
+  const prep: PreparedCurve = { n: t.n, skipped: t.skipped, lm: t.lm, lg: t.lg, sorted, views };
+  installPrepared(massEv, gInvGeV, prep);
+  return true;
+}
+
+/** Whether the curve's preparation for the spec's order and y views is already cached (nothing to build). */
+export function hasPrepared(massEv: Float64Array, gInvGeV: Float64Array, spec: PrepareSpec): boolean {
+  const prep = cachedPrepared(massEv, gInvGeV, spec.sorted);
+  return !!prep && spec.slopes.every((s) => prep.views.has(s));
+}
