@@ -1,5 +1,6 @@
 // Main-thread side of the curve import: runs parses in the import Web Worker (one shared worker, jobs by id)
 // with progress and cancel, and falls back to sliced parsing on the calling thread where Workers do not exist.
+// A curve's drawing preparation built in the worker is put into the plot cache here as the result arrives.
 import {
   checkImportFile,
   createCurveParser,
@@ -9,16 +10,19 @@ import {
   type CurveParseResult,
   type ImportProgress,
 } from "../data/csv";
+import { seedPreparedCurve, type PrepareSpec, type PreparedTransfer } from "../plot/prepare-transfer";
 
 /** Messages to the worker. */
 export type ImportRequest =
-  | { type: "parse"; id: number; source: string | ArrayBuffer | Blob; opts: CurveParseOptions }
+  | { type: "parse"; id: number; source: string | ArrayBuffer | Blob; opts: CurveParseOptions; prepare?: PrepareSpec }
+  | { type: "prepare"; id: number; massEv: Float64Array; gInvGeV: Float64Array; spec: PrepareSpec }
   | { type: "cancel"; id: number };
 
 /** Messages from the worker. */
 export type ImportResponse =
   | { type: "progress"; id: number; fraction: number; lines: number }
-  | { type: "result"; id: number; result: CurveParseResult }
+  | { type: "result"; id: number; result: CurveParseResult; prepared?: PreparedTransfer | null }
+  | { type: "prepared"; id: number; prepared: PreparedTransfer | null }
   | { type: "cancelled"; id: number }
   | { type: "error"; id: number; message: string };
 
@@ -47,6 +51,8 @@ let worker: Worker | null = null;
 let workerBroken = false;
 let nextId = 1;
 const pending = new Map<number, Pending>();
+/** Preparation jobs ({@link prepareInWorker}) by id; resolved with false when the worker fails. */
+const preparing = new Map<number, { resolve: (seeded: boolean) => void; massEv: Float64Array; gInvGeV: Float64Array; sorted: boolean }>();
 /** Set to false to force the main-thread path (tests, benchmarks). */
 let workerAllowed = true;
 
@@ -71,6 +77,13 @@ function getWorker(): Worker | null {
   }
   worker.onmessage = (ev: MessageEvent<ImportResponse>) => {
     const msg = ev.data;
+    if (msg.type === "prepared") {
+      const p = preparing.get(msg.id);
+      if (!p) return;
+      preparing.delete(msg.id);
+      p.resolve(!!msg.prepared && seedPreparedCurve(p.massEv, p.gInvGeV, p.sorted, msg.prepared));
+      return;
+    }
     const job = pending.get(msg.id);
     if (!job) return;
     if (msg.type === "progress") {
@@ -78,8 +91,11 @@ function getWorker(): Worker | null {
       return;
     }
     pending.delete(msg.id);
-    if (msg.type === "result") job.resolve(msg.result);
-    else if (msg.type === "cancelled") job.reject(new ImportCancelled());
+    if (msg.type === "result") {
+      // Seeded under the arrays that arrived with it: the curve made from this result is drawn from them.
+      if (msg.prepared) seedPreparedCurve(msg.result.massEv, msg.result.gInvGeV, msg.prepared.sorted, msg.prepared);
+      job.resolve(msg.result);
+    } else if (msg.type === "cancelled") job.reject(new ImportCancelled());
     else job.reject(new Error(`import failed: ${msg.message}`));
   };
   // A worker that cannot load (blocked module worker, CSP) must not lose the import: redo it here.
@@ -91,6 +107,8 @@ function getWorker(): Worker | null {
     const jobs = [...pending.values()];
     pending.clear();
     for (const job of jobs) job.fallback();
+    for (const p of preparing.values()) p.resolve(false);
+    preparing.clear();
   };
   return worker;
 }
@@ -101,6 +119,8 @@ export function disposeImportWorker(): void {
   worker = null;
   for (const job of pending.values()) job.reject(new ImportCancelled());
   pending.clear();
+  for (const p of preparing.values()) p.resolve(false);
+  preparing.clear();
 }
 
 function onMainThread(
@@ -123,11 +143,14 @@ function onMainThread(
  * `opts.fileName` defaults to the File's name. Files over MAX_IMPORT_BYTES, empty or binary files resolve
  * at once with `fatal` set and nothing parsed.
  * @param onProgress called with the fraction 0..1 read (throttled to steps of 0.5 % or more)
+ * @param prepare the drawing preparation the worker builds after parsing and this thread puts into the plot
+ *   cache (see prepare-transfer.ts); none when omitted or on the same-thread path.
  */
 export function importInWorker(
   source: File | Blob | string | ArrayBuffer,
   opts: CurveParseOptions = {},
   onProgress?: ProgressCallback,
+  prepare?: PrepareSpec,
 ): ImportJob {
   const o: CurveParseOptions = { ...opts };
   if (o.fileName === undefined && typeof File === "function" && source instanceof File) o.fileName = source.name;
@@ -148,7 +171,7 @@ export function importInWorker(
   const id = nextId++;
   pending.set(id, { resolve, reject, onProgress, fallback: () => void local() });
   try {
-    w.postMessage({ type: "parse", id, source, opts: o } satisfies ImportRequest);
+    w.postMessage({ type: "parse", id, source, opts: o, prepare } satisfies ImportRequest);
   } catch {
     pending.delete(id);
     void local();
@@ -160,6 +183,27 @@ export function importInWorker(
       if (pending.has(id)) w.postMessage({ type: "cancel", id } satisfies ImportRequest);
     },
   };
+}
+
+/**
+ * Builds a curve's drawing preparation in the import worker from copies of its arrays and puts it into the
+ * plot cache under the arrays given (used when the import step's role or order changed after the parse).
+ * @returns true when it was seeded; false without a worker or on failure (the page then prepares it lazily).
+ */
+export function prepareInWorker(massEv: Float64Array, gInvGeV: Float64Array, spec: PrepareSpec): Promise<boolean> {
+  const w = getWorker();
+  if (!w) return Promise.resolve(false);
+  const id = nextId++;
+  return new Promise<boolean>((resolve) => {
+    preparing.set(id, { resolve, massEv, gInvGeV, sorted: spec.sorted });
+    try {
+      // Copied, not transferred: the page keeps drawing from its own arrays.
+      w.postMessage({ type: "prepare", id, massEv, gInvGeV, spec } satisfies ImportRequest);
+    } catch {
+      preparing.delete(id);
+      resolve(false);
+    }
+  });
 }
 
 /** How much of a file {@link previewFile} reads. */
