@@ -5,7 +5,8 @@ import { create } from "zustand";
 import { labelFromFileName, newCurve, type CurveParseResult } from "../../data";
 import type { Curve } from "../../data/types";
 import { useAxband } from "../store";
-import { startParse, type ParseJob } from "./parse-runner";
+import { prepareSpecOf } from "../../plot/prepare-transfer";
+import { ensurePrepared, startParse, type ParseJob } from "./parse-runner";
 import { importable, initialSettings, PARSE_KEYS, parseOptsOf, problemOf, settingsAfterParse, type ImportItem, type ImportSettings } from "./import-items";
 import { isProjectFileName, openProjectFile } from "../share/open-project";
 
@@ -46,15 +47,20 @@ export const useImport = create<ImportState>()((set, get) => {
   const runParse = (item: ImportItem) => {
     jobs.get(item.key)?.job.cancel();
     const id = ++jobCounter;
-    const physics = useAxband.getState().project.physics;
+    const { physics, figure } = useAxband.getState().project;
     // Progress redraws the dialog: at most every 100 ms (and at the end), which is smooth enough for a bar.
     let lastShown = 0;
-    const job = startParse(item.source, parseOptsOf(item, physics), (fraction) => {
-      const now = Date.now();
-      if (fraction < 1 && now - lastShown < 100) return;
-      lastShown = now;
-      if (jobs.get(item.key)?.id === id) patchItem(item.key, { progress: fraction });
-    });
+    const job = startParse(
+      item.source,
+      parseOptsOf(item, physics),
+      (fraction) => {
+        const now = Date.now();
+        if (fraction < 1 && now - lastShown < 100) return;
+        lastShown = now;
+        if (jobs.get(item.key)?.id === id) patchItem(item.key, { progress: fraction });
+      },
+      prepareSpecOf(item.settings, figure.yView, physics),
+    );
     jobs.set(item.key, { id, job });
     patchItem(item.key, { status: "parsing", progress: 0 });
     job.promise.then(
@@ -158,6 +164,11 @@ export const useImport = create<ImportState>()((set, get) => {
         set({ busy: false, notice: "Nothing to import: no source gave a curve (see the messages above)." });
         return 0;
       }
+      const { figure, physics } = useAxband.getState().project;
+      // A big curve's drawing preparation is built in the worker, so adding it does not block the page.
+      await Promise.all(ready.map((it) => ensurePrepared(it.result as CurveParseResult, prepareSpecOf(it.settings, figure.yView, physics))));
+      // Cancelled meanwhile: nothing is imported.
+      if (!get().busy) return 0;
       const project = useAxband.getState().project;
       const context: { curves: Pick<Curve, "colour">[] } = { curves: [...project.curves] };
       const curves: Curve[] = [];

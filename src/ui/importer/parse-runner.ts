@@ -1,8 +1,10 @@
 // Runs one parse of an import source through the import worker client: in the Web Worker in a browser (the
 // page stays responsive and the arrays arrive as transferred buffers). Where there is no Worker (jsdom
 // tests) the client parses on the calling thread; the bytes are read first because jsdom's Blob has no stream().
+// The worker also builds the curve's drawing preparation, so its first scene does not block the page.
 import type { CurveParseOptions, CurveParseResult } from "../../data";
-import { importInWorker, importWorkerAvailable } from "../../worker/import-client";
+import { hasPrepared, type PrepareSpec } from "../../plot/prepare-transfer";
+import { importInWorker, importWorkerAvailable, prepareInWorker } from "../../worker/import-client";
 
 export interface ParseJob {
   promise: Promise<CurveParseResult>;
@@ -12,14 +14,15 @@ export interface ParseJob {
 /**
  * Starts parsing a file (or pasted text wrapped in a Blob).
  * @param onProgress fraction 0..1 of the bytes read
+ * @param prepare the drawing preparation the worker should build too (see prepareSpecOf)
  */
-export function startParse(source: Blob, opts: CurveParseOptions, onProgress: (fraction: number) => void): ParseJob {
-  if (importWorkerAvailable() || typeof source.stream === "function") return importInWorker(source, opts, onProgress);
+export function startParse(source: Blob, opts: CurveParseOptions, onProgress: (fraction: number) => void, prepare?: PrepareSpec): ParseJob {
+  if (importWorkerAvailable() || typeof source.stream === "function") return importInWorker(source, opts, onProgress, prepare);
   let cancelled = false;
   let inner: ParseJob | null = null;
   const promise = readBytes(source).then((bytes) => {
     if (cancelled) throw new DOMException("import cancelled", "AbortError");
-    inner = importInWorker(bytes, opts, onProgress);
+    inner = importInWorker(bytes, opts, onProgress, prepare);
     return inner.promise;
   });
   return {
@@ -29,6 +32,18 @@ export function startParse(source: Blob, opts: CurveParseOptions, onProgress: (f
       inner?.cancel();
     },
   };
+}
+
+/** Points from which a curve's preparation goes to the worker; below it, it takes a few ms on the page. */
+export const PREPARE_OFF_THREAD_POINTS = 50_000;
+
+/**
+ * Makes sure a large parsed curve's drawing preparation for the final settings is in the plot cache before
+ * the curve is added (the parse prepared for the settings at that time; role, order or view may have changed).
+ */
+export async function ensurePrepared(r: Pick<CurveParseResult, "massEv" | "gInvGeV">, spec: PrepareSpec): Promise<void> {
+  if (r.massEv.length < PREPARE_OFF_THREAD_POINTS || !importWorkerAvailable() || hasPrepared(r.massEv, r.gInvGeV, spec)) return;
+  await prepareInWorker(r.massEv, r.gInvGeV, spec);
 }
 
 /** The bytes of a Blob; FileReader where Blob.arrayBuffer is missing too. */
