@@ -1,32 +1,13 @@
 // Which curves a point (m_a, g_aγγ) lies in: below an exclusion or projection curve interpolated linearly in
-// log-log space at that mass, or inside a closed region. Per-curve preparation is cached by data array.
+// log-log space at that mass, or inside a closed region. Uses the plot core's cached log10 arrays (by data
+// array), so the first hover after a big import reuses what the import worker prepared for the figure.
 import type { Curve } from "../../data/types";
+import { prepareCurve, type PreparedCurve } from "../../plot/decimate";
 import { rescaleFactor } from "../../plot/physics-settings";
 
-interface Prepared {
-  /** log10 mass and log10 g of the usable points (> 0), sorted by mass for lines, file order for regions. */
-  lm: Float64Array;
-  lg: Float64Array;
-}
-
-const cache = new WeakMap<Float64Array, { g: Float64Array; sorted: boolean; prep: Prepared }>();
-
-function prepare(c: Pick<Curve, "massEv" | "gInvGeV" | "role">): Prepared {
-  const sorted = c.role !== "region";
-  const hit = cache.get(c.massEv);
-  if (hit && hit.g === c.gInvGeV && hit.sorted === sorted) return hit.prep;
-  const idx: number[] = [];
-  for (let i = 0; i < c.massEv.length; i++) if (c.massEv[i] > 0 && c.gInvGeV[i] > 0 && Number.isFinite(c.massEv[i]) && Number.isFinite(c.gInvGeV[i])) idx.push(i);
-  if (sorted) idx.sort((a, b) => c.massEv[a] - c.massEv[b]);
-  const lm = new Float64Array(idx.length);
-  const lg = new Float64Array(idx.length);
-  idx.forEach((k, j) => {
-    lm[j] = Math.log10(c.massEv[k]);
-    lg[j] = Math.log10(c.gInvGeV[k]);
-  });
-  const prep = { lm, lg };
-  cache.set(c.massEv, { g: c.gInvGeV, sorted, prep });
-  return prep;
+/** log10 mass and g of the usable points (> 0, finite), sorted by mass (stable) for lines, file order for regions. */
+function prepare(c: Pick<Curve, "massEv" | "gInvGeV" | "role">): PreparedCurve {
+  return prepareCurve(c.massEv, c.gInvGeV, c.role !== "region");
 }
 
 /**
