@@ -207,7 +207,7 @@ async function measureThinning(manifest) {
   const full = buildScene(project, { ...base, thin: false });
   const results = [];
   const png300 = rasterResolution(300);
-  for (const resolution of [...new Set([EXPORT_RESOLUTION, 2, png300])]) {
+  for (const resolution of [...new Set([1, EXPORT_RESOLUTION, png300])]) {
     const e = thinningError(full, buildScene(project, { ...base, resolution }));
     const used = [resolution === EXPORT_RESOLUTION ? "the SVG export" : "", resolution === png300 ? "a 300 dpi PNG" : ""].filter(Boolean).join(", ");
     results.push({ resolution, ...e, used, png300: resolution === png300 });

@@ -75,13 +75,14 @@ describe("exportFigureSvg", () => {
 });
 
 describe("thinning resolution", () => {
-  it("is 1 column per scene px for the SVG and the PNG's px per scene px for rasters", () => {
-    // 1 CSS px = 1/96 in (CSS Values and Units Level 3, §5.2): 300 dpi is 300/96 = 3.125 PNG px per scene px.
-    expect(EXPORT_RESOLUTION).toBe(1);
-    expect(rasterResolution(300)).toBe(3.125);
-    expect(rasterResolution(192)).toBe(2);
-    expect(rasterResolution(72)).toBe(1);
-    expect(rasterResolution(Number.NaN)).toBe(1);
+  it("is 2 columns per scene px for the SVG and 2 per PNG px for rasters", () => {
+    // 1 CSS px = 1/96 in (CSS Values and Units Level 3, §5.2): 300 dpi is 300/96 = 3.125 PNG px per scene px;
+    // the thinning error is about one column, so two columns per output pixel keep it ≤ 0.5 px.
+    expect(EXPORT_RESOLUTION).toBe(2);
+    expect(rasterResolution(300)).toBe(6.25);
+    expect(rasterResolution(192)).toBe(4);
+    expect(rasterResolution(72)).toBe(2);
+    expect(rasterResolution(Number.NaN)).toBe(2);
   });
 });
 
