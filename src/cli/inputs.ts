@@ -4,7 +4,7 @@ import { readFileSync } from "node:fs";
 import { basename } from "node:path";
 import type { Curve, Model, Project } from "../data/types";
 import { defaultFigure, emptyProject, newCurve, newModel } from "../data/defaults";
-import { formatProblem, formatRejection, labelFromFileName, parseCurveText } from "../data/csv";
+import { formatProblem, formatRejection, labelFromFileName, parseCurveText, type CurveParseResult } from "../data/csv";
 import { projectFromFile } from "../data/project-file";
 import { parseEOverN } from "../physics/eovern-parse";
 import { extractProjectFromSvg } from "../plot/figure-file";
@@ -46,16 +46,18 @@ function loadSvg(input: CliInput): LoadedProject {
   return { project: r.project, notes: [] };
 }
 
-function loadCsv(inputs: CliInput[], opts: CliOptions): LoadedProject {
+/** Parse results found ahead of loading (by parse-parallel.ts), by input index; undefined: parse here. */
+export type PreParsed = readonly (CurveParseResult | undefined)[];
+
+function loadCsv(inputs: CliInput[], opts: CliOptions, preParsed: PreParsed): LoadedProject {
   const notes: string[] = [];
   const curves: Curve[] = [];
   const badRows: string[] = [];
   let badCount = 0;
-  for (const input of inputs) {
-    const text = readText(input.path);
+  for (const [index, input] of inputs.entries()) {
     const fileName = basename(input.path);
     // The app's import code: the same parser, unit detection and messages.
-    const r = parseCurveText(text, { fileName, massUnit: opts.massUnit, couplingUnit: opts.couplingUnit });
+    const r = preParsed[index] ?? parseCurveText(readText(input.path), { fileName, massUnit: opts.massUnit, couplingUnit: opts.couplingUnit });
     if (r.fatal) throw new InputError(formatProblem(input.path, r.fatal));
     for (const bad of r.rejected) badRows.push(formatRejection(input.path, bad));
     badCount += r.rejectedCount;
@@ -128,10 +130,14 @@ export function undrawablePointNotes(project: Project, source: string): string[]
   return notes;
 }
 
-/** Reads every input and returns the project to draw; throws InputError on anything the user must fix. */
-export function loadProject(opts: CliOptions): LoadedProject {
+/**
+ * Reads every input and returns the project to draw; throws InputError on anything the user must fix.
+ * `preParsed` holds CSV parse results already made elsewhere (same parser, same options), by input index.
+ * @default preParsed [] (every file read and parsed here)
+ */
+export function loadProject(opts: CliOptions, preParsed: PreParsed = []): LoadedProject {
   const first = opts.inputs[0];
-  const loaded = first.kind === "project" ? loadProjectFile(first) : first.kind === "svg" ? loadSvg(first) : loadCsv(opts.inputs, opts);
+  const loaded = first.kind === "project" ? loadProjectFile(first) : first.kind === "svg" ? loadSvg(first) : loadCsv(opts.inputs, opts, preParsed);
   const extra = first.kind === "csv" ? [] : undrawablePointNotes(loaded.project, first.path);
   return { project: applyFigureOptions(loaded.project, opts), notes: [...loaded.notes, ...extra] };
 }

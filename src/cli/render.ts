@@ -4,7 +4,8 @@ import { existsSync, statSync } from "node:fs";
 import { dirname, resolve } from "node:path";
 import { pathToFileURL } from "node:url";
 import { parseArgs, USAGE } from "./args";
-import { InputError, loadProject } from "./inputs";
+import { InputError, loadProject, type PreParsed } from "./inputs";
+import { parseCsvInWorkers } from "./parse-parallel";
 import { pickFallbackFont, pngPixelSize, renderPng } from "./png";
 import { writeAllOrNothing, type OutputFile } from "./write-atomic";
 import { EMBED_MAX_CHARS, embedProjectInSvgWithInfo, exportFigureSvg, exportSizeInches, rasterResolution } from "../plot/figure-file";
@@ -36,6 +37,21 @@ function checkOutputDir(path: string): void {
  * was written, 2 for bad input or options (nothing written), 1 for an unexpected failure.
  */
 export function main(argv: readonly string[], io: Io = consoleIo): number {
+  return run(argv, io, []);
+}
+
+/**
+ * As {@link main}, with several CSV inputs first read and parsed on worker threads running `parseWorker`
+ * (the bundled parse-worker.ts; see run.mjs). Output and messages are those of {@link main}: any file a
+ * worker did not parse is parsed in-process, and without `parseWorker` this is main().
+ */
+export async function mainAsync(argv: readonly string[], io: Io = consoleIo, options: { parseWorker?: URL } = {}): Promise<number> {
+  const args = parseArgs(argv);
+  const preParsed = args.ok && !args.options.help && options.parseWorker ? await parseCsvInWorkers(args.options, options.parseWorker) : [];
+  return run(argv, io, preParsed);
+}
+
+function run(argv: readonly string[], io: Io, preParsed: PreParsed): number {
   const args = parseArgs(argv);
   if (!args.ok) {
     io.err(`axband render: ${args.error}`);
@@ -49,7 +65,7 @@ export function main(argv: readonly string[], io: Io = consoleIo): number {
   }
   try {
     for (const p of [opts.out, opts.png, opts.modelsCsv]) if (p) checkOutputDir(p);
-    const { project, notes } = loadProject(opts);
+    const { project, notes } = loadProject(opts, preParsed);
     for (const n of notes) io.err(`note: ${n}`);
     const files: OutputFile[] = [];
     const report: string[] = [];

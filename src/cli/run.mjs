@@ -1,5 +1,5 @@
-// Launcher of the command-line renderer (`npm run render`): bundles src/cli/render.ts with esbuild into
-// node_modules/.cache/axband/ when any source file is newer than the bundle, then runs it in this process.
+// Launcher of the command-line renderer (`npm run render`): bundles src/cli/render.ts and its CSV parse worker
+// with esbuild into node_modules/.cache/axband/ when any source file is newer than a bundle, then runs it here.
 // Why: starting through a TypeScript loader costs ~1–3 s per run on a small machine, more than rendering.
 import { build } from "esbuild";
 import { existsSync, readdirSync, statSync, mkdirSync } from "node:fs";
@@ -7,7 +7,9 @@ import { dirname, join, resolve } from "node:path";
 import { fileURLToPath, pathToFileURL } from "node:url";
 
 const repo = resolve(dirname(fileURLToPath(import.meta.url)), "../..");
-const out = join(repo, "node_modules", ".cache", "axband", "render.mjs");
+const cache = join(repo, "node_modules", ".cache", "axband");
+const out = join(cache, "render.mjs");
+const worker = join(cache, "parse-worker.mjs");
 
 function newestMtime(dir) {
   let newest = 0;
@@ -19,20 +21,22 @@ function newestMtime(dir) {
   return newest;
 }
 
-const stale = !existsSync(out) || statSync(out).mtimeMs < Math.max(newestMtime(join(repo, "src")), statSync(join(repo, "package.json")).mtimeMs);
+const bundles = [out, worker];
+const stale = !bundles.every((f) => existsSync(f)) || Math.min(...bundles.map((f) => statSync(f).mtimeMs)) < Math.max(newestMtime(join(repo, "src")), statSync(join(repo, "package.json")).mtimeMs);
 if (stale) {
   mkdirSync(dirname(out), { recursive: true });
   // Packages stay external: they resolve from the repository's node_modules next to the bundle.
   await build({
-    entryPoints: [join(repo, "src", "cli", "render.ts")],
+    entryPoints: { render: join(repo, "src", "cli", "render.ts"), "parse-worker": join(repo, "src", "cli", "parse-worker.ts") },
     bundle: true,
     platform: "node",
     format: "esm",
     target: "node20",
     packages: "external",
-    outfile: out,
+    outdir: cache,
+    outExtension: { ".js": ".mjs" },
     logLevel: "warning",
   });
 }
-const { main } = await import(pathToFileURL(out).href);
-process.exitCode = main(process.argv.slice(2));
+const { mainAsync } = await import(pathToFileURL(out).href);
+process.exitCode = await mainAsync(process.argv.slice(2), undefined, { parseWorker: pathToFileURL(worker) });
