@@ -5,7 +5,6 @@ import { dirname, resolve } from "node:path";
 import { pathToFileURL } from "node:url";
 import { parseArgs, USAGE } from "./args";
 import { InputError, loadProject, type PreParsed } from "./inputs";
-import { parseCsvInWorkers } from "./parse-parallel";
 import { pickFallbackFont, pngPixelSize, renderPng } from "./png";
 import { writeAllOrNothing, type OutputFile } from "./write-atomic";
 import { EMBED_MAX_CHARS, embedProjectInSvgWithInfo, exportFigureSvg, exportSizeInches, rasterResolution } from "../plot/figure-file";
@@ -18,7 +17,7 @@ export interface Io {
   err: (line: string) => void;
 }
 
-const consoleIo: Io = { out: (s) => process.stdout.write(s + "\n"), err: (s) => process.stderr.write(s + "\n") };
+export const consoleIo: Io = { out: (s) => process.stdout.write(s + "\n"), err: (s) => process.stderr.write(s + "\n") };
 
 function size(bytes: number): string {
   if (bytes >= 1e6) return `${(bytes / 1e6).toFixed(2)} MB`;
@@ -41,13 +40,10 @@ export function main(argv: readonly string[], io: Io = consoleIo): number {
 }
 
 /**
- * As {@link main}, with several CSV inputs first read and parsed on worker threads running `parseWorker`
- * (the bundled parse-worker.ts; see run.mjs). Output and messages are those of {@link main}: any file a
- * worker did not parse is parsed in-process, and without `parseWorker` this is main().
+ * As {@link main}, with CSV parse results already made (by start.ts on worker threads), by input index;
+ * any file without one is read and parsed here, so output and messages are those of {@link main}.
  */
-export async function mainAsync(argv: readonly string[], io: Io = consoleIo, options: { parseWorker?: URL } = {}): Promise<number> {
-  const args = parseArgs(argv);
-  const preParsed = args.ok && !args.options.help && options.parseWorker ? await parseCsvInWorkers(args.options, options.parseWorker) : [];
+export function mainWithPreParsed(argv: readonly string[], io: Io, preParsed: PreParsed): number {
   return run(argv, io, preParsed);
 }
 

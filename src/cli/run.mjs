@@ -1,8 +1,9 @@
-// Launcher of the command-line renderer (`npm run render`): bundles src/cli/render.ts and its CSV parse worker
-// with esbuild into node_modules/.cache/axband/ when any source file is newer than a bundle, then runs it here.
+// Launcher of the command-line renderer (`npm run render`): bundles src/cli/start.ts (which loads render.ts) and
+// the CSV parse worker with esbuild into node_modules/.cache/axband/ when any source file is newer than a bundle,
+// then runs it in this process.
 // Why: starting through a TypeScript loader costs ~1–3 s per run on a small machine, more than rendering.
 import { build } from "esbuild";
-import { existsSync, readdirSync, statSync, mkdirSync } from "node:fs";
+import { existsSync, readdirSync, statSync, mkdirSync, rmSync } from "node:fs";
 import { dirname, join, resolve } from "node:path";
 import { fileURLToPath, pathToFileURL } from "node:url";
 
@@ -24,15 +25,19 @@ function newestMtime(dir) {
 const bundles = [out, worker];
 const stale = !bundles.every((f) => existsSync(f)) || Math.min(...bundles.map((f) => statSync(f).mtimeMs)) < Math.max(newestMtime(join(repo, "src")), statSync(join(repo, "package.json")).mtimeMs);
 if (stale) {
-  mkdirSync(dirname(out), { recursive: true });
+  mkdirSync(cache, { recursive: true });
+  // Chunk names carry content hashes: drop the previous build's so they do not pile up.
+  for (const f of readdirSync(cache)) if (f.endsWith(".mjs")) rmSync(join(cache, f), { force: true });
   // Packages stay external: they resolve from the repository's node_modules next to the bundle.
   await build({
-    entryPoints: { render: join(repo, "src", "cli", "render.ts"), "parse-worker": join(repo, "src", "cli", "parse-worker.ts") },
+    entryPoints: { render: join(repo, "src", "cli", "start.ts"), "parse-worker": join(repo, "src", "cli", "parse-worker.ts") },
     bundle: true,
     platform: "node",
     format: "esm",
     target: "node20",
     packages: "external",
+    // Split so that start.ts's dynamic import of the renderer loads its modules after the workers start.
+    splitting: true,
     outdir: cache,
     outExtension: { ".js": ".mjs" },
     logLevel: "warning",
