@@ -5,10 +5,17 @@ import { parseArgs } from "./args";
 import type { Io } from "./render";
 import { parseCsvInWorkers } from "./parse-parallel";
 
-/** Most parse workers: AXBAND_PARSE_THREADS when set to a whole number ≥ 1, else the CPUs available. */
+/**
+ * Most parse workers: AXBAND_PARSE_THREADS when set to a whole number ≥ 1, else the CPUs available, but
+ * none (in-process) on two CPUs or fewer: measured on a busy 2-core machine (bench/render.mjs), 20 files of
+ * 100 000 rows parsed ~0.1 s slower with two workers than in-process (each worker boots and warms up its own
+ * copy of the parser). Not yet measured on more cores.
+ */
 function parseThreads(): number {
   const n = Number(process.env.AXBAND_PARSE_THREADS);
-  return Number.isInteger(n) && n >= 1 ? n : availableParallelism();
+  if (Number.isInteger(n) && n >= 1) return n;
+  const cpus = availableParallelism();
+  return cpus > 2 ? cpus : 1;
 }
 
 /**
