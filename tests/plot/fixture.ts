@@ -2,18 +2,10 @@
 // and helpers to read path data and text back out of a scene.
 import type { Curve, Model, Project } from "../../src/data/types";
 import type { PathNode, Scene, SceneNode, TextNode } from "../../src/plot/scene-types";
+import { mulberry32 } from "../../src/data/demo";
 
-/** Deterministic 32-bit generator (mulberry32), so fixtures and property tests are reproducible. */
-export function rng(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+/** Deterministic 32-bit generator (the demo's mulberry32), so fixtures and property tests are reproducible. */
+export const rng = mulberry32;
 
 export function model(partial: Partial<Model> & Pick<Model, "id" | "eOverNMin">): Model {
   return {
