@@ -6,16 +6,15 @@ import type { Io } from "./render";
 import { parseCsvInWorkers } from "./parse-parallel";
 
 /**
- * Most parse workers: AXBAND_PARSE_THREADS when set to a whole number ≥ 1, else the CPUs available, but
- * none (in-process) on two CPUs or fewer: measured on a busy 2-core machine (bench/render.mjs), 20 files of
- * 100 000 rows parsed ~0.1 s slower with two workers than in-process (each worker boots and warms up its own
- * copy of the parser). Not yet measured on more cores.
+ * Most parse workers: AXBAND_PARSE_THREADS when set to a whole number ≥ 1, else the CPUs available (one, i.e.
+ * in-process, on a single CPU). Measured with bench/render.mjs on a 2-core machine, 20 files of 100 000 rows:
+ * idle, two workers 1.74 s against 2.14 s in-process; with the machine busy the two were about even (each
+ * worker boots and warms up its own copy of the parser). The output bytes are the same either way.
  */
 function parseThreads(): number {
   const n = Number(process.env.AXBAND_PARSE_THREADS);
   if (Number.isInteger(n) && n >= 1) return n;
-  const cpus = availableParallelism();
-  return cpus > 2 ? cpus : 1;
+  return Math.max(1, availableParallelism());
 }
 
 /**

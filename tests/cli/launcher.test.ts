@@ -1,0 +1,44 @@
+// The bundled launcher that `npm run render` uses (src/cli/run.mjs): CSV files parsed on worker threads give
+// the same SVG bytes as parsing in-process, and as the TypeScript entry the other CLI tests run.
+import { describe, expect, it } from "vitest";
+import { spawnSync } from "node:child_process";
+import { readFileSync, writeFileSync } from "node:fs";
+import { join } from "node:path";
+import { REPO, runCli, tempDir } from "./fixtures";
+import { mulberry32 } from "../../src/data/demo";
+
+function invented(file: string, seed: number, rows: number): void {
+  const r = mulberry32(seed);
+  const lines = ["# invented test curve, not data from any experiment", "mass_eV,g_GeV^-1"];
+  for (let i = 0; i < rows; i++) lines.push(`${(10 ** (-6 + (2 * i) / rows)).toExponential(6)},${(10 ** (-13 + r())).toExponential(6)}`);
+  writeFileSync(file, lines.join("\n") + "\n");
+}
+
+function launch(args: string[], threads: string): { status: number | null; stderr: string } {
+  const r = spawnSync(process.execPath, ["src/cli/run.mjs", ...args], {
+    cwd: REPO,
+    encoding: "utf8",
+    timeout: 120_000,
+    env: { ...process.env, AXBAND_PARSE_THREADS: threads },
+  });
+  return { status: r.status, stderr: r.stderr };
+}
+
+describe("npm run render launcher", () => {
+  it("gives the same bytes with two parse workers, in-process, and through the TypeScript entry", () => {
+    const dir = tempDir("axband-launcher-");
+    const files = [0, 1, 2].map((i) => join(dir, `curve-${i}.csv`));
+    files.forEach((f, i) => invented(f, 7 + i, 2000));
+    const common = [...files, "--role", "exclusion", "--model", "8/3", "--no-embed"];
+    const two = launch([...common, "-o", join(dir, "two.svg")], "2");
+    expect(two.status, two.stderr).toBe(0);
+    const one = launch([...common, "-o", join(dir, "one.svg")], "1");
+    expect(one.status, one.stderr).toBe(0);
+    const ts = runCli([...common, "-o", join(dir, "ts.svg")]);
+    expect(ts.status).toBe(0);
+    const bytes = readFileSync(join(dir, "two.svg"), "utf8");
+    expect(bytes).toContain("<svg");
+    expect(readFileSync(join(dir, "one.svg"), "utf8")).toBe(bytes);
+    expect(readFileSync(join(dir, "ts.svg"), "utf8")).toBe(bytes);
+  });
+});
