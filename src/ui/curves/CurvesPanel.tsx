@@ -10,6 +10,7 @@ import { selectCurve, selectCurveIds, useAxband } from "../store";
 import { curveCsvFileName, curveToCsv, rescaleCurve } from "../../data";
 import { downloadText } from "../export/download";
 import { COUPLING_UNIT_OPTIONS, MASS_UNIT_OPTIONS, type CouplingUnit, type MassUnit } from "../importer/unit-options";
+import { ChoiceField } from "../layout/ChoiceField";
 import { NumberField } from "./NumberField";
 import { isRescaled, physicsOptsOf } from "../../plot/physics-settings";
 import "./curves.css";
@@ -123,26 +124,14 @@ function CurveCard({ id, index, count }: { id: string; index: number; count: num
       <details className="ax-curve-more">
         <summary>Export as CSV</summary>
         <div className="ax-curve-row">
-          <label className="ax-field">
-            <span>Mass unit</span>
-            <select aria-label="CSV mass unit" value={csvMassUnit} onChange={(e) => setCsvMassUnit(e.target.value as MassUnit)}>
-              {MASS_UNIT_OPTIONS.map((u) => (
-                <option key={u.value} value={u.value}>
-                  {u.label}
-                </option>
-              ))}
-            </select>
-          </label>
-          <label className="ax-field">
-            <span>Coupling</span>
-            <select aria-label="CSV coupling unit" value={csvCouplingUnit} onChange={(e) => setCsvCouplingUnit(e.target.value as CouplingUnit)}>
-              {COUPLING_UNIT_OPTIONS.map((u) => (
-                <option key={u.value} value={u.value}>
-                  {u.label}
-                </option>
-              ))}
-            </select>
-          </label>
+          <ChoiceField label="Mass unit" ariaLabel="CSV mass unit" value={csvMassUnit} choices={MASS_UNIT_OPTIONS} onChange={(v) => setCsvMassUnit(v as MassUnit)} />
+          <ChoiceField
+            label="Coupling"
+            ariaLabel="CSV coupling unit"
+            value={csvCouplingUnit}
+            choices={COUPLING_UNIT_OPTIONS}
+            onChange={(v) => setCsvCouplingUnit(v as CouplingUnit)}
+          />
           {csvCouplingUnit === "model-line" ? (
             <label className="ax-field">
               <span>of the line E/N =</span>

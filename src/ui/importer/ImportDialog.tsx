@@ -8,6 +8,7 @@ import { delimiterName, MAX_IMPORT_BYTES } from "../../data";
 import { DELIMITERS, formatBytes, importable, rejectionLines, type ImportItem, type ImportSettings } from "./import-items";
 import { useImport } from "./import-store";
 import { COUPLING_UNIT_OPTIONS, MASS_UNIT_OPTIONS } from "./unit-options";
+import { ChoiceField } from "../layout/ChoiceField";
 import { useWindowDrop } from "./useWindowDrop";
 import { ROLES } from "../curves/roles";
 import "./importer.css";
@@ -183,13 +184,12 @@ function ItemCard({ item, onChange, onRemove }: { item: ImportItem; onChange: (p
   const rej = r ? rejectionLines(item.fileName, r) : { lines: [], more: 0 };
   const header = r?.header ?? null;
   const columns = Math.max(2, r?.columnCount ?? 2);
-  const columnChoices = Array.from({ length: columns }, (_, i) => i + 1);
+  const columnChoices = Array.from({ length: columns }, (_, i) => ({ value: i + 1, label: `column ${i + 1}${header?.[i] ? ` · ${header[i]}` : ""}` }));
   const preview = r ? r.preview.slice(0, 6) : [];
   const canEdit = r !== null && !(r.fatal && r.fatal.code !== "single-column" && r.fatal.code !== "no-data");
   // The parser's own sentences about delimiter, units, unreadable rows and values ≤ 0 are shown above in
   // the step's own words; any other warning (e.g. a guess it made) is passed on as it is.
   const notes = r ? r.messages.filter((m) => m.level === "warning" && !/cannot be read|could not be read|≤ 0|<= 0/.test(m.text)) : [];
-  const columnLabel = (c: number) => `column ${c}${header?.[c - 1] ? ` · ${header[c - 1]}` : ""}`;
 
   return (
     <article className="ax-import-item" data-testid="import-item" aria-label={`Import ${item.fileName}`}>
@@ -241,39 +241,19 @@ function ItemCard({ item, onChange, onRemove }: { item: ImportItem; onChange: (p
             {unitNote(r.couplingUnitSource)} · <b>{r.massEv.length.toLocaleString("en")}</b> points
           </p>
           <div className="ax-import-settings">
-            <label className="ax-field">
-              <span>Delimiter</span>
-              <select value={s.delimiter} onChange={(e) => onChange({ delimiter: e.target.value })}>
-                {DELIMITERS.map((d) => (
-                  <option key={d.label} value={d.value}>
-                    {d.label}
-                  </option>
-                ))}
-              </select>
-            </label>
-            <label className="ax-field">
-              <span>Mass unit</span>
-              <select value={s.massUnit ?? r.massUnit} onChange={(e) => onChange({ massUnit: e.target.value as ImportSettings["massUnit"] })}>
-                {MASS_UNIT_OPTIONS.map((u) => (
-                  <option key={u.value} value={u.value}>
-                    {u.label}
-                  </option>
-                ))}
-              </select>
-            </label>
-            <label className="ax-field">
-              <span>Coupling</span>
-              <select
-                value={s.couplingUnit ?? r.couplingUnit}
-                onChange={(e) => onChange({ couplingUnit: e.target.value as ImportSettings["couplingUnit"] })}
-              >
-                {COUPLING_UNIT_OPTIONS.map((u) => (
-                  <option key={u.value} value={u.value}>
-                    {u.label}
-                  </option>
-                ))}
-              </select>
-            </label>
+            <ChoiceField label="Delimiter" value={s.delimiter} choices={DELIMITERS} onChange={(v) => onChange({ delimiter: v })} />
+            <ChoiceField
+              label="Mass unit"
+              value={s.massUnit ?? r.massUnit}
+              choices={MASS_UNIT_OPTIONS}
+              onChange={(v) => onChange({ massUnit: v as ImportSettings["massUnit"] })}
+            />
+            <ChoiceField
+              label="Coupling"
+              value={s.couplingUnit ?? r.couplingUnit}
+              choices={COUPLING_UNIT_OPTIONS}
+              onChange={(v) => onChange({ couplingUnit: v as ImportSettings["couplingUnit"] })}
+            />
             {(s.couplingUnit ?? r.couplingUnit) === "model-line" ? (
               <label className="ax-field">
                 <span>of the line E/N =</span>
@@ -291,26 +271,13 @@ function ItemCard({ item, onChange, onRemove }: { item: ImportItem; onChange: (p
           </div>
           {columns > 2 ? (
             <div className="ax-import-settings">
-              <label className="ax-field">
-                <span>Mass from</span>
-                <select value={s.massColumn ?? r.massColumn} onChange={(e) => onChange({ massColumn: Number(e.target.value) })}>
-                  {columnChoices.map((c) => (
-                    <option key={c} value={c}>
-                      {columnLabel(c)}
-                    </option>
-                  ))}
-                </select>
-              </label>
-              <label className="ax-field">
-                <span>Coupling from</span>
-                <select value={s.couplingColumn ?? r.couplingColumn} onChange={(e) => onChange({ couplingColumn: Number(e.target.value) })}>
-                  {columnChoices.map((c) => (
-                    <option key={c} value={c}>
-                      {columnLabel(c)}
-                    </option>
-                  ))}
-                </select>
-              </label>
+              <ChoiceField label="Mass from" value={s.massColumn ?? r.massColumn} choices={columnChoices} onChange={(v) => onChange({ massColumn: Number(v) })} />
+              <ChoiceField
+                label="Coupling from"
+                value={s.couplingColumn ?? r.couplingColumn}
+                choices={columnChoices}
+                onChange={(v) => onChange({ couplingColumn: Number(v) })}
+              />
             </div>
           ) : null}
           <div className="ax-import-settings">

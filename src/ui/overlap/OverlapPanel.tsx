@@ -10,8 +10,15 @@ import { useAxband } from "../store";
 import { downloadText, safeFileName } from "../export/download";
 import { copyText } from "../share/clipboard";
 import { filterRows, nextSort, NO_FILTER, rowKey, sortRows, VERDICT_GROUPS, verdictText, type RowFilter, type SortKey, type SortState } from "./table-logic";
+import { ChoiceField, type Choice } from "../layout/ChoiceField";
 import "../curves/curves.css";
 import "./overlap.css";
+
+/** Filter choices: "all" (the empty value) first, then the entries. */
+function withAll(entries: [string, string][]): Choice[] {
+  return [{ value: "", label: "all" }, ...entries.map(([value, label]) => ({ value, label }))];
+}
+const VERDICT_CHOICES: Choice[] = [{ value: "", label: "all" }, ...VERDICT_GROUPS];
 
 const COLUMNS: { key: SortKey | null; label: string; title?: string }[] = [
   { key: "model", label: "Model" },
@@ -54,8 +61,8 @@ export function OverlapPanel() {
   // Only models, curves and constants change the table; the figure (zoom, preset) does not.
   const { rows, pending } = useOverlapRows(models, curves, physics);
   const shown = useMemo(() => sortRows(filterRows(rows, filter), sort), [rows, filter, sort]);
-  const modelChoices = useMemo(() => [...new Map(rows.map((r) => [r.modelId, r.modelLabel])).entries()], [rows]);
-  const curveChoices = useMemo(() => [...new Map(rows.map((r) => [r.curveId, r.curveLabel])).entries()], [rows]);
+  const modelChoices = useMemo(() => withAll([...new Map(rows.map((r) => [r.modelId, r.modelLabel])).entries()]), [rows]);
+  const curveChoices = useMemo(() => withAll([...new Map(rows.map((r) => [r.curveId, r.curveLabel])).entries()]), [rows]);
   const base = safeFileName(projectName === "Untitled" ? "axband" : projectName, "axband");
 
   const selectedKey =
@@ -83,39 +90,15 @@ export function OverlapPanel() {
       ) : (
         <>
           <div className="ax-overlap-tools">
-            <label className="ax-field">
-              <span>Model</span>
-              <select aria-label="Filter by model" value={filter.modelId ?? ""} onChange={(e) => setFilter({ ...filter, modelId: e.target.value || null })}>
-                <option value="">all</option>
-                {modelChoices.map(([id, label]) => (
-                  <option key={id} value={id}>
-                    {label}
-                  </option>
-                ))}
-              </select>
-            </label>
-            <label className="ax-field">
-              <span>Curve</span>
-              <select aria-label="Filter by curve" value={filter.curveId ?? ""} onChange={(e) => setFilter({ ...filter, curveId: e.target.value || null })}>
-                <option value="">all</option>
-                {curveChoices.map(([id, label]) => (
-                  <option key={id} value={id}>
-                    {label}
-                  </option>
-                ))}
-              </select>
-            </label>
-            <label className="ax-field">
-              <span>Verdict</span>
-              <select aria-label="Filter by verdict" value={filter.verdict ?? ""} onChange={(e) => setFilter({ ...filter, verdict: e.target.value || null })}>
-                <option value="">all</option>
-                {VERDICT_GROUPS.map((v) => (
-                  <option key={v.value} value={v.value}>
-                    {v.label}
-                  </option>
-                ))}
-              </select>
-            </label>
+            <ChoiceField label="Model" ariaLabel="Filter by model" value={filter.modelId ?? ""} choices={modelChoices} onChange={(v) => setFilter({ ...filter, modelId: v || null })} />
+            <ChoiceField label="Curve" ariaLabel="Filter by curve" value={filter.curveId ?? ""} choices={curveChoices} onChange={(v) => setFilter({ ...filter, curveId: v || null })} />
+            <ChoiceField
+              label="Verdict"
+              ariaLabel="Filter by verdict"
+              value={filter.verdict ?? ""}
+              choices={VERDICT_CHOICES}
+              onChange={(v) => setFilter({ ...filter, verdict: v || null })}
+            />
             <span className="ax-overlap-export">
               <button type="button" data-testid="overlap-csv" onClick={() => downloadText(`${base}-overlap.csv`, overlapTableToCsv(shown), "text/csv")}>
                 CSV
