@@ -16,3 +16,4 @@ export * from "./curve-export";
 export * from "./sources";
 export * from "./bibtex";
 export * from "./import-options";
+export * from "./physics-constants";

@@ -1,11 +1,12 @@
 // The overlap table: for every visible model × visible curve of a project, the mass (f_a, frequency)
 // intervals where the curve excludes, reaches or contains the whole model band, part of it, or none of it;
 // with CSV and Markdown exports. The UI sorts, filters and highlights rows; this module only computes them.
-import { referenceConstants, type AxionConstants } from "../physics/constants";
+import type { AxionConstants } from "../physics/constants";
 import { faFromMass, frequencyFromMass } from "../physics/coupling";
 import { parseEOverN } from "../physics/eovern-parse";
 import { overlapDetail, type OverlapDetail } from "./overlap";
 import { rescaleFactor } from "./rescale";
+import { constantsOf } from "./physics-constants";
 import type { Curve, CurveRole, Model, Project } from "./types";
 
 export type OverlapKind =
@@ -45,8 +46,7 @@ export interface OverlapRow {
 
 /** The constants a project uses: a published set or the user's own values. */
 export function projectConstants(project: Project): AxionConstants {
-  const p = project.physics;
-  return p.ref === "custom" ? { ...p.custom } : referenceConstants(p.ref);
+  return constantsOf(project.physics);
 }
 
 /**
