@@ -134,7 +134,9 @@ function rowsForPair(model: Model, curve: Curve, detail: OverlapDetail, c: Axion
  * ascending in mass, covering the curve's mass range), computed with the project's constants (reference
  * 2016, 2019 or custom), each model's theory spread and each curve's rescaling. Models whose E/N cannot be
  * read and curves with fewer than two usable points give no rows. Intervals merge across gaps narrower
- * than one curve sample (see overlapDetail).
+ * than one curve sample (see overlapDetail). Rows come in the project's order: model by model as listed,
+ * within a model curve by curve as listed, within a pair by mass; the overlap panel shows them strongest
+ * verdict first and relies on this order within a verdict.
  * @param project the whole state; nothing in it is changed.
  */
 export function overlapTable(project: Project): OverlapRow[] {

@@ -53,6 +53,22 @@ describe("overlapTable", () => {
     expect(line[1].massMinEv).toBe(line[0].massMaxEv);
   });
 
+  test("rows in the project's order: models as listed, then curves as listed, then ascending mass", () => {
+    const p = smallProject();
+    p.curves[1].visible = true;
+    p.models.reverse(); // now listed: hidden (skipped), band, line0
+    const rows = overlapTable(p);
+    const pairs = [...new Set(rows.map((r) => `${r.modelId}×${r.curveId}`))];
+    expect(pairs).toEqual(["band×x", "band×y", "line0×x", "line0×y"]);
+    for (const pair of pairs) {
+      const lows = rows.filter((r) => `${r.modelId}×${r.curveId}` === pair).map((r) => r.massMinEv);
+      expect(lows).toEqual([...lows].sort((a, b) => a - b));
+    }
+    // Each pair's rows are contiguous (the panel's default order keeps this order within a verdict).
+    const firsts = pairs.map((pair) => rows.findIndex((r) => `${r.modelId}×${r.curveId}` === pair));
+    expect(firsts).toEqual([...firsts].sort((a, b) => a - b));
+  });
+
   test("f_a and frequency at the interval ends: m·f_a = 5.691·10⁶ eV·GeV (JHEP 2019), ν = m/h (CODATA 2018)", () => {
     const [, whole] = rowsOf(overlapTable(smallProject()), "line0", "x");
     expect(whole.faMinGeV * whole.massMaxEv).toBeCloseTo(5.691e6, 6);

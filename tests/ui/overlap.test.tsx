@@ -1,11 +1,12 @@
 // Overlap panel in jsdom: rows for a small project (a model line against a flat invented exclusion), sorting
-// by column, filters, the CSV/Markdown exports equal the data core's writers, and a row click sets the
-// highlight. Analytic case (issue 7): a flat limit g = G over [m1, m2] against the line g = k·m excludes
+// by column, the default order (strongest verdict first), filters, the CSV/Markdown exports equal the data
+// core's writers on the rows as shown, and a row click sets the highlight. Analytic case (issue 7): a flat limit g = G over [m1, m2] against the line g = k·m excludes
 // [max(m1, G/k), m2]; the line is g = α m |E/N − c_γ| / (2π K·10⁶ eV GeV) (Grilli di Cortona, Hardy,
 // Pardo Vega, Villadoro, JHEP 01 (2016) 034, eq. for g_aγγ; K from Gorghetto & Villadoro, JHEP 03 (2019) 033).
 import { afterEach, beforeEach, describe, expect, test, vi } from "vitest";
 import { fireEvent, render, screen, waitFor, within } from "@testing-library/react";
 import { OverlapPanel } from "../../src/ui/overlap/OverlapPanel";
+import { sortRows, verdictText } from "../../src/ui/overlap/table-logic";
 import { useAxband } from "../../src/ui/store";
 import { emptyProject, newCurve, newModel, overlapTable, overlapTableToCsv, overlapTableToMarkdown } from "../../src/data";
 import { gAgg } from "../../src/physics";
@@ -44,6 +45,21 @@ describe("overlap panel", () => {
     expect(shown.textContent).toContain(`${siFormat(lineRow.massMinEv, "eV")} – ${siFormat(lineRow.massMaxEv, "eV")}`);
   });
 
+  // Ordering is our own convention (not physics): the strongest verdict first, "no overlap" last.
+  test("by default the exclusions come first and the rows without overlap last", () => {
+    render(<OverlapPanel />);
+    const verdicts = bodyRows().map((tr) => tr.children[3].textContent);
+    const models = bodyRows().map((tr) => tr.children[0].textContent);
+    // The line (listed first) is wholly excluded above 10 μeV; the band straddles c_γ, so only part of it is.
+    expect(verdicts.slice(0, 2)).toEqual([verdictText("excluded-whole"), verdictText("excluded-part")]);
+    expect(models.slice(0, 2)).toEqual(["DFSZ-type line", "Wide band"]);
+    const firstNone = verdicts.indexOf(verdictText("none"));
+    expect(firstNone).toBeGreaterThan(1);
+    expect(verdicts.slice(firstNone).every((v) => v === verdictText("none"))).toBe(true);
+    // Within "no overlap": models as listed in the project.
+    expect(models.slice(firstNone)).toEqual(["DFSZ-type line", "Wide band"]);
+  });
+
   test("clicking a column header sorts, a second click reverses, a third restores the order", () => {
     render(<OverlapPanel />);
     const order = () => bodyRows().map((tr) => tr.children[0].textContent);
@@ -79,7 +95,7 @@ describe("overlap panel", () => {
   test("CSV and Markdown exports equal the data core's writers; a row click highlights its interval", async () => {
     const downloads = captureDownloads();
     render(<OverlapPanel />);
-    const rows = overlapTable(useAxband.getState().project);
+    const rows = sortRows(overlapTable(useAxband.getState().project), null);
     fireEvent.click(screen.getByTestId("overlap-csv"));
     fireEvent.click(screen.getByTestId("overlap-md"));
     await waitFor(() => expect(downloads).toHaveLength(2));

@@ -1,7 +1,7 @@
 // The overlap table: for every visible model × visible curve, the mass intervals where the curve excludes,
 // reaches or contains the whole model band, part of it, or none of it (computed by the data core, memoised
-// on the models, curves and constants). Sorting by column, filters, CSV and Markdown export, and a click on
-// a row highlights its interval on the figure.
+// on the models, curves and constants). Strongest verdict first by default, sorting by column, filters, CSV
+// and Markdown export (rows in the order shown), and a click on a row highlights its interval on the figure.
 import { useMemo, useState } from "react";
 import { overlapTableToCsv, overlapTableToMarkdown, type OverlapRow } from "../../data";
 import { useOverlapRows } from "./overlap-client";

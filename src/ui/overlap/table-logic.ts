@@ -61,15 +61,24 @@ export function filterRows(rows: readonly OverlapRow[], f: RowFilter): OverlapRo
   );
 }
 
+/**
+ * Verdict order, strongest first: excluded (whole, then part), within reach of a projection (whole, then
+ * part), inside a region (whole, then part), no overlap last.
+ */
 const KIND_ORDER: Record<OverlapKind, number> = {
   "excluded-whole": 0,
   "excluded-part": 1,
-  "inside-whole": 2,
-  "inside-part": 3,
-  "reach-whole": 4,
-  "reach-part": 5,
+  "reach-whole": 2,
+  "reach-part": 3,
+  "inside-whole": 4,
+  "inside-part": 5,
   none: 6,
 };
+
+/** Rank of a verdict in the default order (0 = excluded, whole band; 6 = no overlap). */
+export function verdictRank(kind: OverlapKind): number {
+  return KIND_ORDER[kind];
+}
 
 function compare(a: OverlapRow, b: OverlapRow, key: SortKey): number {
   switch (key) {
@@ -90,14 +99,29 @@ function compare(a: OverlapRow, b: OverlapRow, key: SortKey): number {
   }
 }
 
-/** Rows sorted by a column (stable: equal rows keep the table's order); null keeps the table's order. */
-export function sortRows(rows: readonly OverlapRow[], sort: SortState | null): OverlapRow[] {
+/**
+ * The default order of the table: strongest verdict first (see {@link verdictRank}); within a verdict the
+ * order overlapTable gives, i.e. models and curves as listed in the project, then ascending mass.
+ */
+export function defaultOrder(rows: readonly OverlapRow[]): OverlapRow[] {
   const indexed = rows.map((r, i) => ({ r, i }));
-  if (sort) indexed.sort((x, y) => sort.dir * compare(x.r, y.r, sort.key) || x.i - y.i);
+  indexed.sort((x, y) => KIND_ORDER[x.r.kind] - KIND_ORDER[y.r.kind] || x.i - y.i);
   return indexed.map((x) => x.r);
 }
 
-/** Next sort state after a click on a column header: ascending, descending, then the table's order. */
+/**
+ * Rows sorted by a column; null gives the default order ({@link defaultOrder}). Stable: rows equal in the
+ * column keep their default order, so sorting by model still lists each model's exclusions first.
+ */
+export function sortRows(rows: readonly OverlapRow[], sort: SortState | null): OverlapRow[] {
+  const base = defaultOrder(rows);
+  if (!sort) return base;
+  const indexed = base.map((r, i) => ({ r, i }));
+  indexed.sort((x, y) => sort.dir * compare(x.r, y.r, sort.key) || x.i - y.i);
+  return indexed.map((x) => x.r);
+}
+
+/** Next sort state after a click on a column header: ascending, descending, then the default order. */
 export function nextSort(current: SortState | null, key: SortKey): SortState | null {
   if (!current || current.key !== key) return { key, dir: 1 };
   return current.dir === 1 ? { key, dir: -1 } : null;
