@@ -1,9 +1,11 @@
 // Parses the renderer's CSV inputs on worker threads, one file at a time per worker, results kept in the
-// order of the files. Why: parsing 20 files of 100 000 rows is most of a run, and files are independent.
+// order of the files, each with its drawing preparation. Why: parsing and preparing 20 files of 100 000 rows
+// is most of a run, and files are independent.
 import { availableParallelism } from "node:os";
 import { basename } from "node:path";
 import { Worker } from "node:worker_threads";
 import type { CurveParseResult } from "../data/csv";
+import { seedPreparedCurve, type PreparedTransfer } from "../plot/prepare-transfer";
 import type { CliOptions } from "./args";
 
 /** One file for a worker to read and parse. */
@@ -13,12 +15,18 @@ export interface ParseJob {
   fileName: string;
   massUnit?: string;
   couplingUnit?: string;
+  /** Drawn in mass order (what drawsSorted says of a CSV curve of this role: all but regions). */
+  sorted: boolean;
+  /** A closed region. */
+  closed: boolean;
 }
 
 /** A worker's answer; `result` is null when it could not read or parse the file (the caller redoes it). */
 export interface ParseReply {
   index: number;
   result: CurveParseResult | null;
+  /** The curve's drawing preparation for the g_aγγ view (computePrepared), when the worker made one. */
+  prepared?: PreparedTransfer;
 }
 
 /**
@@ -31,7 +39,8 @@ export interface ParseReply {
  */
 export async function parseCsvInWorkers(opts: CliOptions, workerUrl: URL, threads: number = availableParallelism()): Promise<(CurveParseResult | undefined)[]> {
   const jobs: ParseJob[] = opts.inputs
-    .map((input, index) => ({ index, path: input.path, fileName: basename(input.path), massUnit: opts.massUnit, couplingUnit: opts.couplingUnit, kind: input.kind }))
+    // A CSV curve keeps its file order only as a region (inputs.ts), and a CSV figure starts in the g_aγγ view.
+    .map((input, index) => ({ index, path: input.path, fileName: basename(input.path), massUnit: opts.massUnit, couplingUnit: opts.couplingUnit, sorted: input.role !== "region", closed: input.role === "region", kind: input.kind }))
     .filter((j) => j.kind === "csv")
     .map(({ kind: _kind, ...job }) => job);
   const results: (CurveParseResult | undefined)[] = new Array(opts.inputs.length).fill(undefined);
@@ -49,7 +58,11 @@ export async function parseCsvInWorkers(opts: CliOptions, workerUrl: URL, thread
       }
       const feed = () => worker.postMessage(next < jobs.length ? jobs[next++] : null);
       worker.on("message", (reply: ParseReply) => {
-        if (reply.result) results[reply.index] = reply.result;
+        if (reply.result) {
+          results[reply.index] = reply.result;
+          // Into this thread's plot cache under the arrays the curve is drawn from; a misfit is ignored (prepared when drawn).
+          if (reply.prepared) seedPreparedCurve(reply.result.massEv, reply.result.gInvGeV, jobs.find((j) => j.index === reply.index)?.sorted ?? true, reply.prepared);
+        }
         feed();
       });
       // A failed worker leaves its file undefined; the others go on, the caller parses what is missing.

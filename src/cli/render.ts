@@ -7,7 +7,7 @@ import { parseArgs, USAGE } from "./args";
 import { InputError, loadProject, type PreParsed } from "./inputs";
 import { pickFallbackFont, pngPixelSize, renderPng } from "./png";
 import { writeAllOrNothing, type OutputFile } from "./write-atomic";
-import { EMBED_MAX_CHARS, embedProjectInSvgWithInfo, exportFigureSvg, exportSizeInches, rasterResolution } from "../plot/figure-file";
+import { embedCapText, embedProjectInSvgWithInfo, exportFigureSvg, exportSizeInches, rasterResolution } from "../plot/figure-file";
 import { presetOf } from "../plot/layout";
 import { modelsToCsv } from "../plot/model-csv";
 
@@ -73,7 +73,7 @@ function run(argv: readonly string[], io: Io, preParsed: PreParsed): number {
       const svg = embedded ? embedded.svg : bare;
       if (embedded && !embedded.embeddedCurves) {
         io.err(
-          `note: project embedded without curve data (${embedded.omittedPoints} points exceed the ${EMBED_MAX_CHARS / 1e6} MB cap); the SVG reopens with models, figure and constants only: keep the project file or the CSV files for the data`,
+          `note: project embedded without curve data (${embedded.omittedPoints} points exceed ${embedCapText(embedded.omittedBecause ?? "size")}); the SVG reopens with models, figure and constants only: keep the project file or the CSV files for the data`,
         );
       }
       const embedNote = embedded ? (embedded.embeddedCurves ? ", project embedded" : ", project embedded without curve data") : "";

@@ -1,6 +1,6 @@
 // The exported figure file: project → self-contained SVG at a preset's physical size, with the project
 // embedded (compressed) in <metadata> so the file reopens in axband and the CLI accepts it as input; curve
-// data only while the embedded project stays under EMBED_MAX_CHARS, so a figure of millions of points stays small.
+// data only up to EMBED_MAX_POINTS points and EMBED_MAX_CHARS characters, so a figure of millions of points stays small.
 import type { Project, SizePreset } from "../data/types";
 import type { Scene } from "./scene-types";
 import { PX_PER_IN, presetOf } from "./layout";
@@ -18,6 +18,15 @@ export const EMBED_ENCODING = "deflate-base64url";
  * curves="omitted" on the element), so the figure file stays a figure: 2·10⁶ points would add ~9 MB.
  */
 export const EMBED_MAX_CHARS = 2_000_000;
+
+/**
+ * Most curve points (one per mass value, over all curves) an embedded project carries. A project with more
+ * is embedded without its curve data at once, without trying to pack it: finding out that 2·10⁶ points do
+ * not fit EMBED_MAX_CHARS costs ~0.5 s of packing (bench/render.mjs), a quarter of a CLI run. 500,000 points
+ * would need ≥ 3 bytes each to pass 2 MB, which measured data reach (the invented benchmark curves take 3.4
+ * bytes a point, 120,000 full-precision points already 2.6 MB), so the cap rarely changes what is embedded.
+ */
+export const EMBED_MAX_POINTS = 500_000;
 
 /**
  * Thinning resolution of the exported SVG (columns per scene px). The plot core's thinning (first/min/max/last
@@ -44,6 +53,8 @@ export interface ExportSvgOpts {
   resolution?: number;
   /** Longest embedded payload with curve data, in characters; above it the curve data are left out. @default EMBED_MAX_CHARS */
   embedMaxChars?: number;
+  /** Most curve points embedded; with more the curve data are left out without packing them. @default EMBED_MAX_POINTS */
+  embedMaxPoints?: number;
 }
 
 /** What went into the SVG's <metadata>. */
@@ -56,6 +67,8 @@ export interface EmbedInfo {
   omittedCurves: string[];
   /** Number of points of those curves. */
   omittedPoints: number;
+  /** Why the data were left out: more points than EMBED_MAX_POINTS, or a payload over EMBED_MAX_CHARS; null when nothing was. */
+  omittedBecause: "points" | "size" | null;
 }
 
 /** An exported SVG and what its <metadata> carries. */
@@ -92,32 +105,44 @@ function capText(chars: number): string {
 }
 
 /**
+ * The cap a figure went over, for messages: "the cap of 500,000 points" or "the 2 MB cap".
+ * @param maxChars the payload cap used. @default EMBED_MAX_CHARS @param maxPoints the point cap. @default EMBED_MAX_POINTS
+ */
+export function embedCapText(because: "points" | "size", maxChars: number = EMBED_MAX_CHARS, maxPoints: number = EMBED_MAX_POINTS): string {
+  return because === "points" ? `the cap of ${maxPoints.toLocaleString("en")} points` : `the ${capText(maxChars)} cap`;
+}
+
+/**
  * The <metadata> content that carries the project, and what it holds: one element in our namespace whose
  * text is the share-link fragment of the project ("v1." + base64url of raw DEFLATE of the compact JSON; see
  * src/data/link.ts), so reading it back goes through the link decoder's size cap, schema check and repair.
- * Curve data are included while the fragment stays within `maxChars`; the encoder stops as soon as it cannot,
- * so a project far over the cap costs about the cap's worth of packing. Otherwise the fragment carries name,
+ * Curve data are included while the curves have at most `maxPoints` points (checked first, at no cost) and the
+ * fragment stays within `maxChars`; the encoder stops as soon as it cannot, so a project over the character
+ * cap costs about the cap's worth of packing. Otherwise the fragment carries name,
  * constants, figure and models (and how many curves were left out), the element says curves="omitted" with
  * the counts, and a comment before it tells a reader of the file why.
  * @param maxChars longest payload with curve data, in characters. @default EMBED_MAX_CHARS
+ * @param maxPoints most curve points embedded. @default EMBED_MAX_POINTS
  */
-export function projectMetadata(project: Project, maxChars: number = EMBED_MAX_CHARS): { xml: string; info: EmbedInfo } {
+export function projectMetadata(project: Project, maxChars: number = EMBED_MAX_CHARS, maxPoints: number = EMBED_MAX_POINTS): { xml: string; info: EmbedInfo } {
   const open = `<axband:project xmlns:axband="${AXBAND_PROJECT_NS}" encoding="${EMBED_ENCODING}" version="${project.version}"`;
-  const full = project.curves.length === 0 ? encodeLink(project, { includeCurves: true }) : encodeLinkWithin(project, maxChars, { includeCurves: true });
-  if (full !== null) {
-    return { xml: `${open}>${full}</axband:project>`, info: { embedded: true, embeddedCurves: true, omittedCurves: [], omittedPoints: 0 } };
-  }
   const points = pointCount(project);
+  const tooMany = points > maxPoints;
+  const full = project.curves.length === 0 ? encodeLink(project, { includeCurves: true }) : tooMany ? null : encodeLinkWithin(project, maxChars, { includeCurves: true });
+  if (full !== null) {
+    return { xml: `${open}>${full}</axband:project>`, info: { embedded: true, embeddedCurves: true, omittedCurves: [], omittedPoints: 0, omittedBecause: null } };
+  }
   const curves = project.curves.length;
+  const why = tooMany ? `they are more than ${maxPoints} points, the most a figure file carries` : `with them the embedded project would exceed ${capText(maxChars)}`;
   // Counts only in the comment (labels could hold "--", which a comment cannot).
-  const comment = `<!-- axband: the data of ${curves} curve(s), ${points} points, were left out: with them the embedded project would exceed ${capText(maxChars)}. The models, figure and constants are here; the project file (.axband.json) keeps the data. -->`;
+  const comment = `<!-- axband: the data of ${curves} curve(s), ${points} points, were left out: ${why}. The models, figure and constants are here; the project file (.axband.json) keeps the data. -->`;
   const xml = `${comment}${open} curves="omitted" omitted-curves="${curves}" omitted-points="${points}">${encodeLink(project, { includeCurves: false })}</axband:project>`;
-  return { xml, info: { embedded: true, embeddedCurves: false, omittedCurves: project.curves.map((c) => c.label), omittedPoints: points } };
+  return { xml, info: { embedded: true, embeddedCurves: false, omittedCurves: project.curves.map((c) => c.label), omittedPoints: points, omittedBecause: tooMany ? "points" : "size" } };
 }
 
-/** The <metadata> content that carries the project (see {@link projectMetadata}). @param maxChars @default EMBED_MAX_CHARS */
-export function projectMetadataXml(project: Project, maxChars: number = EMBED_MAX_CHARS): string {
-  return projectMetadata(project, maxChars).xml;
+/** The <metadata> content that carries the project (see {@link projectMetadata}). @param maxChars @default EMBED_MAX_CHARS @param maxPoints @default EMBED_MAX_POINTS */
+export function projectMetadataXml(project: Project, maxChars: number = EMBED_MAX_CHARS, maxPoints: number = EMBED_MAX_POINTS): string {
+  return projectMetadata(project, maxChars, maxPoints).xml;
 }
 
 /**
@@ -129,8 +154,8 @@ export function projectMetadataXml(project: Project, maxChars: number = EMBED_MA
  */
 export function exportFigureSvgWithInfo(project: Project, opts: ExportSvgOpts = {}): SvgWithInfo {
   const svg = writeSvg(exportScene(project, opts));
-  if (!(opts.embedProject ?? true)) return { svg, embedded: false, embeddedCurves: false, omittedCurves: [], omittedPoints: 0 };
-  return embedProjectInSvgWithInfo(svg, withPreset(project, opts.preset), opts.embedMaxChars);
+  if (!(opts.embedProject ?? true)) return { svg, embedded: false, embeddedCurves: false, omittedCurves: [], omittedPoints: 0, omittedBecause: null };
+  return embedProjectInSvgWithInfo(svg, withPreset(project, opts.preset), opts.embedMaxChars, opts.embedMaxPoints);
 }
 
 /** {@link exportFigureSvgWithInfo} without the info: the SVG text only. */
@@ -145,19 +170,20 @@ export function exportFigureSvg(project: Project, opts: ExportSvgOpts = {}): str
  * that needs both (the CLI rasterises the lighter one) builds the scene once.
  * @param project the project as exported (its figure preset already set to the export's).
  * @param maxChars longest payload with curve data. @default EMBED_MAX_CHARS
+ * @param maxPoints most curve points embedded. @default EMBED_MAX_POINTS
  */
-export function embedProjectInSvgWithInfo(svg: string, project: Project, maxChars: number = EMBED_MAX_CHARS): SvgWithInfo {
+export function embedProjectInSvgWithInfo(svg: string, project: Project, maxChars: number = EMBED_MAX_CHARS, maxPoints: number = EMBED_MAX_POINTS): SvgWithInfo {
   const rootEnd = svg.indexOf(">", svg.indexOf("<svg")) + 1;
   const nl = svg[rootEnd] === "\n" ? 1 : 0;
-  const { xml, info } = projectMetadata(project, maxChars);
+  const { xml, info } = projectMetadata(project, maxChars, maxPoints);
   // Content is base64url, fixed attribute values, counts and a comment of our own: it needs no escaping.
   const meta = `<metadata>${xml}</metadata>\n`;
   return { svg: svg.slice(0, rootEnd + nl) + meta + svg.slice(rootEnd + nl), ...info };
 }
 
-/** {@link embedProjectInSvgWithInfo} without the info. @param maxChars @default EMBED_MAX_CHARS */
-export function embedProjectInSvg(svg: string, project: Project, maxChars: number = EMBED_MAX_CHARS): string {
-  return embedProjectInSvgWithInfo(svg, project, maxChars).svg;
+/** {@link embedProjectInSvgWithInfo} without the info. @param maxChars @default EMBED_MAX_CHARS @param maxPoints @default EMBED_MAX_POINTS */
+export function embedProjectInSvg(svg: string, project: Project, maxChars: number = EMBED_MAX_CHARS, maxPoints: number = EMBED_MAX_POINTS): string {
+  return embedProjectInSvgWithInfo(svg, project, maxChars, maxPoints).svg;
 }
 
 export type ExtractResult =
@@ -177,7 +203,7 @@ const EMBED_RE = /<([A-Za-z_][\w.-]*:)?project\b([^>]*)>([^<]*)<\/\1?project\s*>
 /**
  * The project embedded in an SVG exported by axband, decoded and validated exactly like a project file or
  * a link (schema check, migrations, size cap). Never throws: anything wrong gives `{ ok: false, error }`.
- * A figure exported without its curve data (over EMBED_MAX_CHARS) opens with models, figure and constants,
+ * A figure exported without its curve data (over EMBED_MAX_POINTS or EMBED_MAX_CHARS) opens with models, figure and constants,
  * and says how many curves were left out (`omittedCurveCount`, `note`).
  */
 export function extractProjectFromSvg(svgText: string): ExtractResult {

@@ -1,5 +1,6 @@
-// The bundled launcher that `npm run render` uses (src/cli/run.mjs): CSV files parsed on worker threads give
-// the same SVG bytes as parsing in-process, and as the TypeScript entry the other CLI tests run.
+// The bundled launcher that `npm run render` uses (src/cli/run.mjs): CSV files parsed and prepared for drawing
+// on worker threads give the same SVG bytes as doing both in-process, and as the TypeScript entry the other
+// CLI tests run (sorted curves and a closed region, whose preparations differ).
 import { describe, expect, it } from "vitest";
 import { spawnSync } from "node:child_process";
 import { readFileSync, writeFileSync } from "node:fs";
@@ -29,7 +30,7 @@ describe("npm run render launcher", () => {
     const dir = tempDir("axband-launcher-");
     const files = [0, 1, 2].map((i) => join(dir, `curve-${i}.csv`));
     files.forEach((f, i) => invented(f, 7 + i, 2000));
-    const common = [...files, "--role", "exclusion", "--model", "8/3", "--no-embed"];
+    const common = ["--role", "exclusion", files[0], files[1], "--role", "region", files[2], "--model", "8/3", "--no-embed"];
     const two = launch([...common, "-o", join(dir, "two.svg")], "2");
     expect(two.status, two.stderr).toBe(0);
     const one = launch([...common, "-o", join(dir, "one.svg")], "1");
@@ -38,6 +39,7 @@ describe("npm run render launcher", () => {
     expect(ts.status).toBe(0);
     const bytes = readFileSync(join(dir, "two.svg"), "utf8");
     expect(bytes).toContain("<svg");
+    expect(bytes).toMatch(/id="curve-3-region"/);
     expect(readFileSync(join(dir, "one.svg"), "utf8")).toBe(bytes);
     expect(readFileSync(join(dir, "ts.svg"), "utf8")).toBe(bytes);
   });

@@ -1,5 +1,5 @@
-// The embedding policy of exported SVGs: the project goes into <metadata> with its curve data while the payload
-// stays within EMBED_MAX_CHARS (2 MB), else without them, marked curves="omitted" and said in a comment, and
+// The embedding policy of exported SVGs: the project goes into <metadata> with its curve data while the curves
+// have at most EMBED_MAX_POINTS points and the payload stays within EMBED_MAX_CHARS (2 MB), else without them, marked curves="omitted" and said in a comment, and
 // the SVG still reopens with models, figure and constants and says what was left out.
 import { describe, expect, it } from "vitest";
 import { newCurve } from "../../src/data/defaults";
@@ -9,6 +9,8 @@ import type { Project } from "../../src/data/types";
 import {
   AXBAND_PROJECT_NS,
   EMBED_MAX_CHARS,
+  EMBED_MAX_POINTS,
+  embedCapText,
   embedProjectInSvg,
   embedProjectInSvgWithInfo,
   exportFigureSvg,
@@ -46,7 +48,7 @@ describe("curve data within the cap", () => {
   it("a small project is embedded whole, and the info says so", () => {
     const p = canonical();
     const r = exportFigureSvgWithInfo(p);
-    expect(r).toMatchObject({ embedded: true, embeddedCurves: true, omittedCurves: [], omittedPoints: 0 });
+    expect(r).toMatchObject({ embedded: true, embeddedCurves: true, omittedCurves: [], omittedPoints: 0, omittedBecause: null });
     expect(r.svg).toBe(exportFigureSvg(p));
     expect(projectElement(r.svg).hasAttribute("curves")).toBe(false);
     const back = extractProjectFromSvg(r.svg);
@@ -131,5 +133,45 @@ describe("the default 2 MB cap", () => {
     const back = extractProjectFromSvg(f.svg);
     expect(back.ok && projectsEqual(back.project, fits)).toBe(true);
     expect(projectElement(f.svg).textContent?.length).toBeLessThanOrEqual(EMBED_MAX_CHARS);
+  });
+});
+
+/** A project whose one big curve compresses to almost nothing: `n` points on a regular grid of round numbers. */
+function regularProject(n: number): Project {
+  const p = canonical();
+  const massEv = Float64Array.from({ length: n }, (_, i) => (i + 1) * 1e-9);
+  const gInvGeV = new Float64Array(n).fill(1e-13);
+  return { ...p, curves: [...p.curves, newCurve({ id: "c-grid", label: "Grid scan (invented)", massEv, gInvGeV }, { curves: p.curves })] };
+}
+
+describe("the point cap", () => {
+  const points = (p: Project) => p.curves.reduce((n, c) => n + c.massEv.length, 0);
+
+  it("leaves out curve data over EMBED_MAX_POINTS without packing them, even when they would fit 2 MB", () => {
+    const base = points(canonical());
+    // Round grid values pack to a few bytes per thousand points: the character cap alone would let them in.
+    const over = regularProject(EMBED_MAX_POINTS - base + 1);
+    expect(points(over)).toBe(EMBED_MAX_POINTS + 1);
+    expect(encodeLink(over).length).toBeLessThan(EMBED_MAX_CHARS);
+    const r = projectMetadata(over);
+    expect(r.info).toMatchObject({ embeddedCurves: false, omittedBecause: "points", omittedPoints: EMBED_MAX_POINTS + 1 });
+    expect(r.xml).toContain(`more than ${EMBED_MAX_POINTS} points`);
+    expect(r.xml).toContain('curves="omitted"');
+
+    const at = regularProject(EMBED_MAX_POINTS - base);
+    const a = projectMetadata(at);
+    expect(a.info).toMatchObject({ embeddedCurves: true, omittedBecause: null });
+  });
+
+  it("a lower cap passed in is used, and the size reason is kept apart from the point reason", () => {
+    const p = bigProject(1000);
+    expect(exportFigureSvgWithInfo(p, { embedMaxPoints: 500 }).omittedBecause).toBe("points");
+    expect(exportFigureSvgWithInfo(p, { embedMaxChars: 5000 }).omittedBecause).toBe("size");
+    expect(exportFigureSvgWithInfo(p).omittedBecause).toBe(null);
+  });
+
+  it("names the cap in words for messages", () => {
+    expect(embedCapText("points")).toBe("the cap of 500,000 points");
+    expect(embedCapText("size")).toBe("the 2 MB cap");
   });
 });
