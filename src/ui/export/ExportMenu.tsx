@@ -1,6 +1,7 @@
 // Figure export: the size preset (the same Figure.preset the screen uses), the SVG download (self-contained,
 // project embedded so the file reopens in axband), PNG at 1×, 2× or 300 dpi with the dpi written into the
-// file, and the model lines and bands as CSV. All files come from the same scene builder as the screen.
+// file (drawn from an SVG thinned for the PNG's pixels, without the project), and the model lines and bands
+// as CSV. All files come from the same scene builder as the screen.
 import { useState } from "react";
 import type { SizePreset } from "../../data/types";
 import { EMBED_MAX_CHARS, exportFigureSvgWithInfo } from "../../plot/figure-file";
@@ -9,7 +10,7 @@ import { modelsToCsv } from "../../plot/model-csv";
 import { setPngDpi } from "../../plot/png-meta";
 import { useAxband } from "../store";
 import { downloadBlob, downloadText, safeFileName } from "./download";
-import { pngTarget, rasteriseSvg, svgSize, type PngScale } from "./png";
+import { pngFigure, rasteriseSvg, type PngScale } from "./png";
 import { NumberField } from "../curves/NumberField";
 import { Popover } from "./Popover";
 import "../curves/curves.css";
@@ -71,9 +72,9 @@ export function ExportMenu() {
   const savePng = async () => {
     setBusy(true);
     try {
-      const { project, svg } = svgNow();
-      const target = pngTarget(svgSize(svg), pngScale);
-      const png = setPngDpi(await rasteriseSvg(svg, target.widthPx, target.heightPx), target.dpi);
+      const project = useAxband.getState().project;
+      const target = pngFigure(project, pngScale);
+      const png = setPngDpi(await rasteriseSvg(target.svg, target.widthPx, target.heightPx), target.dpi);
       const name = `${figureBaseName(project.name)}${pngScale === "1x" ? "" : `@${pngScale}`}.png`;
       downloadBlob(name, new Blob([png as BlobPart], { type: "image/png" }));
       pushMessage("status", `Saved ${name} (${target.widthPx} × ${target.heightPx} px, ${Math.round(target.dpi)} dpi).`);

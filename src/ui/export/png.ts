@@ -1,5 +1,9 @@
-// Rasterises an exported SVG figure to PNG in the browser (Image of a blob URL drawn into a canvas) and
-// works out the pixel size for 1×, 2× and 300 dpi from the SVG's own viewBox and physical size.
+// Rasterises an exported SVG figure to PNG in the browser (Image of a blob URL drawn into a canvas), works
+// out the pixel size for 1×, 2× and 300 dpi from the SVG's viewBox and physical size, and builds the SVG a
+// PNG is drawn from: thinned for the PNG's pixels, without the embedded project.
+import type { Project } from "../../data/types";
+import { exportFigureSvg, rasterResolution } from "../../plot/figure-file";
+import { presetOf, type Preset } from "../../plot/layout";
 
 /** PNG resolutions offered by the export menu. */
 export type PngScale = "1x" | "2x" | "300dpi";
@@ -55,6 +59,39 @@ export function pngTarget(size: SvgSize, scale: PngScale): { widthPx: number; he
   const widthPx = Math.round(size.widthPx * k);
   const heightPx = Math.round(size.heightPx * k);
   return { widthPx, heightPx, dpi: wIn > 0 ? widthPx / wIn : 96 * k };
+}
+
+/**
+ * The size of a figure exported at this preset, known before the SVG is built: the viewBox in px and the
+ * preset's physical size. For the fixed presets it is what {@link svgSize} reads from the file; for a custom
+ * size the file rounds its physical size from the px size to 0.01 cm, so the two can differ by that much.
+ */
+export function presetSvgSize(preset: Pick<Preset, "widthPx" | "heightPx" | "widthPhysical" | "heightPhysical">): SvgSize {
+  return { widthPx: preset.widthPx, heightPx: preset.heightPx, widthIn: lengthInches(preset.widthPhysical), heightIn: lengthInches(preset.heightPhysical) };
+}
+
+/** The SVG a PNG is drawn from, its pixel size and dpi, and the thinning resolution it was built with. */
+export interface PngFigure {
+  svg: string;
+  widthPx: number;
+  heightPx: number;
+  dpi: number;
+  /** Columns per scene px: rasterResolution of the dpi the preset's size gives (two columns per PNG pixel; equal to rasterResolution(dpi) for the fixed presets). */
+  resolution: number;
+}
+
+/**
+ * The SVG to rasterise for a PNG of the project at its figure preset: thinned at rasterResolution(dpi) (two
+ * columns per PNG pixel, so the thinning stays ≤ 0.5 PNG px, as the command-line renderer does) and without
+ * the embedded project (the PNG cannot carry it, and a lighter SVG rasterises faster); with the PNG's
+ * pixel size and dpi from {@link pngTarget} on the built SVG's own size.
+ */
+export function pngFigure(project: Project, scale: PngScale): PngFigure {
+  const resolution = rasterResolution(pngTarget(presetSvgSize(presetOf(project.figure)), scale).dpi);
+  const svg = exportFigureSvg(project, { preset: project.figure.preset, embedProject: false, resolution });
+  // The file's width/height decide the pixels and the dpi stamped into the PNG (as before); for a custom size
+  // they may differ from the preset's by the 0.01 cm rounding (≤ 0.5 % in dpi at the smallest 2 cm), too little to matter for thinning.
+  return { svg, ...pngTarget(svgSize(svg), scale), resolution };
 }
 
 /** Sets the width/height attributes of the root <svg> to pixels so the browser rasterises it at that size. */
