@@ -187,7 +187,8 @@ export function importInWorker(
 
 /**
  * Builds a curve's drawing preparation in the import worker from copies of its arrays and puts it into the
- * plot cache under the arrays given (used when the import step's role or order changed after the parse).
+ * plot cache under the arrays given (used when the import step's role or order changed after the parse, and
+ * for big curves that reach the store another way: src/ui/store/preparation.ts).
  * @returns true when it was seeded; false without a worker or on failure (the page then prepares it lazily).
  */
 export function prepareInWorker(massEv: Float64Array, gInvGeV: Float64Array, spec: PrepareSpec): Promise<boolean> {
@@ -197,8 +198,11 @@ export function prepareInWorker(massEv: Float64Array, gInvGeV: Float64Array, spe
   return new Promise<boolean>((resolve) => {
     preparing.set(id, { resolve, massEv, gInvGeV, sorted: spec.sorted });
     try {
-      // Copied, not transferred: the page keeps drawing from its own arrays.
-      w.postMessage({ type: "prepare", id, massEv, gInvGeV, spec } satisfies ImportRequest);
+      // The page keeps its own arrays: copies go, transferred. For a million points slice() and transfer
+      // took 15–27 ms here against 24–75 ms for structured cloning in postMessage (Chromium, 2 busy cores).
+      const m = massEv.slice();
+      const g = gInvGeV.slice();
+      w.postMessage({ type: "prepare", id, massEv: m, gInvGeV: g, spec } satisfies ImportRequest, [m.buffer, g.buffer]);
     } catch {
       preparing.delete(id);
       resolve(false);

@@ -1,11 +1,14 @@
 // The interactive figure: the scene of the project (the same one the export writes) drawn as React SVG,
 // with wheel zoom about the cursor, drag to pan, keyboard zoom/pan, double-click reset and a hover point.
 // Zoom and pan go through setView (one undo step per burst) and are batched to one commit per frame.
+// Big curves whose drawing preparation is still being built in the worker are left out, with a note.
 import { useCallback, useDeferredValue, useEffect, useId, useMemo, useRef, useState, type KeyboardEvent, type PointerEvent } from "react";
 import { buildScene } from "../../plot/scene";
 import { presetOf } from "../../plot/layout";
 import type { Scene } from "../../plot/scene-types";
-import { selectHighlight, selectHover, selectProject, useAxband } from "../store";
+import type { Curve } from "../../data/types";
+import { selectHighlight, selectHover, selectPreparing, selectProject, useAxband } from "../store";
+import { withoutPreparing } from "../store/preparation";
 import { SceneSvg } from "./SceneSvg";
 
 /** Smallest and largest visible span, in decades (keeps zoom away from degenerate or absurd ranges). */
@@ -86,6 +89,17 @@ function resolutionFor(displayWidthPx: number, sceneWidthPx: number): number {
   return Math.max(0.25, Math.round(((displayWidthPx || sceneWidthPx) / sceneWidthPx) * dpr * 4) / 4);
 }
 
+/** Inside the top left of the plot area (placed from the scene), so the figure does not move for it. */
+const PREPARING_STYLE = {
+  position: "absolute",
+  margin: 0,
+  padding: "2px 8px",
+  background: "rgba(255, 255, 255, 0.92)",
+  border: "1px solid var(--line)",
+  borderRadius: 4,
+  pointerEvents: "none",
+} as const;
+
 /** Thin crosshair at the hover point (screen only; the export has none). Re-renders alone on hover. */
 function Crosshair({ scene }: { scene: Scene }) {
   const hover = useAxband(selectHover);
@@ -104,10 +118,20 @@ function Crosshair({ scene }: { scene: Scene }) {
   );
 }
 
+/** The note over the plot while curves are being prepared for drawing. */
+function preparingNote(waiting: readonly Curve[]): string {
+  const names = waiting.map((c) => `“${c.label}”`);
+  if (names.length === 1) return `Preparing curve ${names[0]} for drawing…`;
+  return `Preparing ${names.length} curves for drawing: ${names.join(", ")}…`;
+}
+
 export function FigureView() {
   // Deferred: a big change (a million-point curve arriving) builds the scene in its own task, after the
   // panels have updated, instead of adding to one long task; zoom steps may skip stale frames.
-  const project = useDeferredValue(useAxband(selectProject));
+  const fullProject = useDeferredValue(useAxband(selectProject));
+  const preparing = useAxband(selectPreparing);
+  // Drawing a curve before its preparation arrives would build it here, a long task for a big curve.
+  const { project, waiting } = useMemo(() => withoutPreparing(fullProject, preparing), [fullProject, preparing]);
   const highlight = useDeferredValue(useAxband(selectHighlight));
   const setHover = useAxband((s) => s.setHover);
   const boxRef = useRef<HTMLDivElement>(null);
@@ -311,6 +335,11 @@ export function FigureView() {
         >
           <Crosshair scene={scene} />
         </SceneSvg>
+        {waiting.length > 0 ? (
+          <p className="note figure-preparing" data-testid="figure-preparing" aria-live="polite" style={{ ...PREPARING_STYLE, left: `${((plot.x + 8) / scene.widthPx) * 100}%`, top: `${((plot.y + 8) / scene.heightPx) * 100}%` }}>
+            {preparingNote(waiting)}
+          </p>
+        ) : null}
       </div>
       <p className="figure-hint" id={hintId}>
         Scroll to zoom (Shift: mass axis only, Alt: y axis only), drag to pan, double-click to reset. With the figure focused: + and − zoom, arrow keys pan, 0 resets.

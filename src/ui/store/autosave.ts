@@ -6,6 +6,7 @@ import type { Project } from "../../data/types";
 import { defaultProject } from "../../data/demo";
 import { decodeLink } from "../../data/link";
 import { deserializeFromStorage, serializeForStorage } from "../../data/project-file";
+import { PROJECT_LIMITS } from "../../data/schema";
 import type { AxbandState } from "./types";
 
 /** localStorage key of the saved project (without curve data). */
@@ -90,20 +91,44 @@ export function splitChunks(data: CurveArrays, size = CHUNK_POINTS): { head: Chu
   return { head, chunks: Array.from({ length: head.chunks }, (_, k) => chunkOf(data, k, size)) };
 }
 
-/** The arrays back from their chunks; undefined when a chunk is missing or the sizes disagree. */
-export function joinChunks(head: ChunkedHead, chunks: (CurveArrays | undefined)[]): CurveArrays | undefined {
-  if (chunks.length !== head.chunks) return undefined;
+/** Puts a curve's arrays back together one chunk at a time (so each chunk can be read in its own task). */
+export interface ChunkJoiner {
+  /** Appends the next chunk; false (and the joiner is spoilt) when it is missing, malformed or too long. */
+  add(chunk: CurveArrays | undefined): boolean;
+  /** The arrays, or undefined when a chunk was bad or the count or total length disagrees with the head. */
+  finish(): CurveArrays | undefined;
+}
+
+/** A {@link ChunkJoiner} for the chunks of `head`, in order. */
+export function chunkJoiner(head: ChunkedHead): ChunkJoiner {
   const massEv = new Float64Array(head.length);
   const gInvGeV = new Float64Array(head.length);
   let o = 0;
-  for (const c of chunks) {
-    if (!c || !(c.massEv instanceof Float64Array) || !(c.gInvGeV instanceof Float64Array) || c.massEv.length !== c.gInvGeV.length) return undefined;
-    if (o + c.massEv.length > head.length) return undefined;
-    massEv.set(c.massEv, o);
-    gInvGeV.set(c.gInvGeV, o);
-    o += c.massEv.length;
-  }
-  return o === head.length ? { massEv, gInvGeV } : undefined;
+  let count = 0;
+  let ok = true;
+  return {
+    add(c) {
+      if (!ok) return false;
+      count++;
+      if (count > head.chunks || !c || !(c.massEv instanceof Float64Array) || !(c.gInvGeV instanceof Float64Array) || c.massEv.length !== c.gInvGeV.length || o + c.massEv.length > head.length) {
+        ok = false;
+        return false;
+      }
+      massEv.set(c.massEv, o);
+      gInvGeV.set(c.gInvGeV, o);
+      o += c.massEv.length;
+      return true;
+    },
+    finish: () => (ok && count === head.chunks && o === head.length ? { massEv, gInvGeV } : undefined),
+  };
+}
+
+/** The arrays back from their chunks; undefined when a chunk is missing or the sizes disagree. */
+export function joinChunks(head: ChunkedHead, chunks: (CurveArrays | undefined)[]): CurveArrays | undefined {
+  if (chunks.length !== head.chunks) return undefined;
+  const j = chunkJoiner(head);
+  for (const c of chunks) if (!j.add(c)) return undefined;
+  return j.finish();
 }
 
 /** Lets other work run between two chunk writes (structured cloning happens synchronously in put). */
@@ -159,8 +184,16 @@ export function indexedDbCurveStore(dbName = "axband"): CurveDataStore | null {
     get: async (id) => {
       const head = (await tx("readonly", (s) => s.get(id))) as Partial<ChunkedHead> | undefined;
       if (!head || head.v !== 1 || typeof head.length !== "number" || typeof head.chunks !== "number") return undefined;
-      const chunks = (await tx("readonly", (s) => s.getAll(chunkRange(id)))) as (CurveArrays | undefined)[];
-      return joinChunks(head as ChunkedHead, chunks);
+      if (!(head.length >= 0 && head.length <= PROJECT_LIMITS.points)) return undefined;
+      // One chunk per task: reading all at once (getAll) cloned 16 MB in one callback, and joining them in
+      // the same task made a start-up task of a few hundred ms for a million points.
+      const joiner = chunkJoiner(head as ChunkedHead);
+      for (let k = 0; k < head.chunks; k++) {
+        await nextTask();
+        const c = (await tx("readonly", (s) => s.get(chunkKey(id, k)))) as CurveArrays | undefined;
+        if (!joiner.add(c)) return undefined;
+      }
+      return joiner.finish();
     },
     delete: remove,
   };
@@ -316,6 +349,9 @@ export async function restoreAutosave(store: StoreApi<AxbandState>, opts: Autosa
       }),
     );
   }
+  // Validating (and copying) the curve data is O(points): for big curves in a task of its own, not after the
+  // last read (a chunk's worth of points takes a few ms, not worth a task).
+  if (data.reduce((n, d) => n + d.massEv.length, 0) > CHUNK_POINTS) await nextTask();
   const r = deserializeFromStorage(text, data);
   if (!r.ok) {
     store.getState().pushMessage("alert", `${sentence(r.error)} Starting from the demo project.`);

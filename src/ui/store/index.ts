@@ -5,6 +5,8 @@
 //   project: Project                 plain data (src/data/types); curve arrays are never mutated, only replaced
 //   history: { past, future }        bounded to HISTORY_LIMIT (100) projects each way
 //   ui: { messages, highlight, hover }  transient: never saved, never undone
+//   preparing: PreparingCurve[]      big curves whose drawing preparation is being built off the main thread
+//                                    (preparation.ts; the app store watches its project, fresh stores do not)
 // Changing the project: everything goes through commit(updater, { coalesceKey? }). Steps with the same key
 // within COALESCE_MS (500 ms) of each other form one undo step (setView uses "view"; text fields should pass
 // e.g. `model:${id}:label`). An updater that returns the same object records nothing.
@@ -29,6 +31,7 @@ import { createModelsSlice } from "./models";
 import { createCurvesSlice } from "./curves";
 import { createFigureSlice } from "./figure";
 import { createUiSlice } from "./ui";
+import { createPreparationSlice, watchCurvePreparation } from "./preparation";
 import type { AxbandMiddleware, AxbandState } from "./types";
 
 export * from "./types";
@@ -41,6 +44,7 @@ function combined(initial: Project): StateCreator<AxbandState, [], AxbandMiddlew
     ...createCurvesSlice(...a),
     ...createFigureSlice(...a),
     ...createUiSlice(...a),
+    ...createPreparationSlice(...a),
   }));
 }
 
@@ -56,6 +60,8 @@ export type AxbandStore = ReturnType<typeof createAxbandStore>;
 
 /** The app's store as a React hook (with getState/setState/subscribe for use outside components). */
 export const useAxband = create<AxbandState>()(combined(defaultProject()));
+// Subscribed before any component, so a restored big curve is listed as preparing before the first render.
+watchCurvePreparation(useAxband);
 
 // Selectors: return store references only (no new objects), so they are safe without useShallow.
 export const selectProject = (s: AxbandState) => s.project;
@@ -67,6 +73,7 @@ export const selectYView = (s: AxbandState) => s.project.figure.yView;
 export const selectMessages = (s: AxbandState) => s.ui.messages;
 export const selectHighlight = (s: AxbandState) => s.ui.highlight;
 export const selectHover = (s: AxbandState) => s.ui.hover;
+export const selectPreparing = (s: AxbandState) => s.preparing;
 export const selectCanUndo = (s: AxbandState) => s.history.past.length > 0;
 export const selectCanRedo = (s: AxbandState) => s.history.future.length > 0;
 export const selectModel = (id: string) => (s: AxbandState) => s.project.models.find((m) => m.id === id);

@@ -99,7 +99,20 @@ export interface UiSlice {
   setHover: (h: HoverPoint | null) => void;
 }
 
-export type AxbandState = HistorySlice & ModelsSlice & CurvesSlice & FigureSlice & UiSlice;
+/** A big curve's arrays whose drawing preparation is being built off the main thread (see preparation.ts). */
+export interface PreparingCurve {
+  massEv: Float64Array;
+  gInvGeV: Float64Array;
+  /** The drawing order prepared (drawsSorted of the curve). */
+  sorted: boolean;
+}
+
+export interface PreparationSlice {
+  /** Curves the figure leaves out until their preparation is in the plot cache; replaced whole on change. */
+  preparing: readonly PreparingCurve[];
+}
+
+export type AxbandState = HistorySlice & ModelsSlice & CurvesSlice & FigureSlice & UiSlice & PreparationSlice;
 
 /** Middleware applied once to the combined store. */
 export type AxbandMiddleware = [["zustand/subscribeWithSelector", never]];
