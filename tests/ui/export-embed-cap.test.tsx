@@ -1,4 +1,4 @@
-// Export menu with curve data too large to embed (over EMBED_MAX_CHARS, src/plot/figure-file.ts): the SVG is
+// Export menu with curve data too large to embed (over EMBED_MAX_CHARS or EMBED_MAX_POINTS, src/plot/figure-file.ts): the SVG is
 // still exportFigureSvg's, and the user is told in an alert that the data were left out and to save the project file.
 import { afterEach, describe, expect, test, vi } from "vitest";
 import { fireEvent, render, screen, waitFor } from "@testing-library/react";
@@ -26,6 +26,21 @@ describe("SVG export over the embedding cap", () => {
     expect(await downloads[0].text()).toBe(exportFigureSvg(project, { preset: project.figure.preset, embedProject: true }));
     const last = useAxband.getState().ui.messages.at(-1);
     expect(last?.kind).toBe("alert");
-    expect(last?.text).toMatch(/^Saved Big export\.svg .* without the data of its curve \(120,000 points, more than 2 MB embedded\).*Save the project file/);
+    expect(last?.text).toMatch(/^Saved Big export\.svg .* without the data of its curve \(120,000 points, over the 2 MB cap for embedded data\).*Save the project file/);
+  });
+
+  test("names the point cap when the curves have more points than a figure file carries", async () => {
+    // 500,001 invented points on a round grid: tiny when packed, but over the 500,000-point cap.
+    const n = 500_001;
+    const grid = newCurve({ id: "grid", label: "Grid scan (invented)", massEv: Float64Array.from({ length: n }, (_, i) => (i + 1) * 1e-9), gInvGeV: new Float64Array(n).fill(1e-13) });
+    useProject({ ...defaultProject(), name: "Grid export", curves: [grid] });
+    const downloads = captureDownloads();
+    render(<ExportMenu />);
+    fireEvent.click(screen.getByTestId("export-svg"));
+    await waitFor(() => expect(downloads).toHaveLength(1));
+    expect(await downloads[0].text()).toContain('curves="omitted"');
+    const last = useAxband.getState().ui.messages.at(-1);
+    expect(last?.kind).toBe("alert");
+    expect(last?.text).toMatch(/without the data of its curve \(500,001 points, over the cap of 500,000 points for embedded data\)/);
   });
 });

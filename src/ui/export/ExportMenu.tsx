@@ -4,7 +4,7 @@
 // as CSV. All files come from the same scene builder as the screen.
 import { useState } from "react";
 import type { SizePreset } from "../../data/types";
-import { EMBED_MAX_CHARS, exportFigureSvgWithInfo } from "../../plot/figure-file";
+import { embedCapText, exportFigureSvgWithInfo } from "../../plot/figure-file";
 import { PRESETS, presetOf, CUSTOM_MM_LIMITS } from "../../plot/layout";
 import { modelsToCsv } from "../../plot/model-csv";
 import { setPngDpi } from "../../plot/png-meta";
@@ -52,7 +52,7 @@ export function ExportMenu() {
 
   const saveSvg = () => {
     try {
-      const { project, svg, embeddedCurves, omittedCurves, omittedPoints } = svgNow();
+      const { project, svg, embeddedCurves, omittedCurves, omittedPoints, omittedBecause } = svgNow();
       const name = `${figureBaseName(project.name)}.svg`;
       downloadBlob(name, new Blob([svg], { type: "image/svg+xml" }));
       const cm = `${(size.widthMm / 10).toFixed(1)} × ${(size.heightMm / 10).toFixed(1)} cm`;
@@ -61,7 +61,7 @@ export function ExportMenu() {
         const n = omittedCurves.length;
         pushMessage(
           "alert",
-          `Saved ${name} (${cm}) without the data of ${n === 1 ? "its curve" : `its ${n} curves`} (${omittedPoints.toLocaleString("en")} points, more than ${EMBED_MAX_CHARS / 1e6} MB embedded): dropped on axband it reopens the models and figure only. Save the project file to keep the data.`,
+          `Saved ${name} (${cm}) without the data of ${n === 1 ? "its curve" : `its ${n} curves`} (${omittedPoints.toLocaleString("en")} points, over ${embedCapText(omittedBecause ?? "size")} for embedded data): dropped on axband it reopens the models and figure only. Save the project file to keep the data.`,
         );
       }
     } catch (e) {
