@@ -1,5 +1,6 @@
 // Redraw benchmark (`node bench/redraw.mjs`): median time of a zoom step in headless Chromium — buildScene
-// with a new mass range plus the DOM update of the <svg> — on 20 invented curves × 100,000 points, against a
+// with a new mass range plus the update of the app's figure component (SceneSvg: React commit and scene-dom's
+// in-place DOM update) and a forced layout — on 20 invented curves × 100,000 points, against a
 // plain full-resolution draw of the same data in the same run. Prints medians and ratios; never pass/fail.
 // Options (environment): AXBAND_BENCH_STEPS (zoom steps, default 40), AXBAND_BENCH_PLAIN_STEPS (full draws,
 // default 6), AXBAND_BENCH_DETAIL=1 (every step), AXBAND_BENCH_DOM_ONLY=1 (DOM cost of prebuilt scenes only),
@@ -121,9 +122,9 @@ async function main() {
     await page.goto(`http://127.0.0.1:${port}/`);
     await page.waitForSelector("body[data-ready='1']", { timeout: 60000 });
     if (process.env.AXBAND_BENCH_DOM_ONLY) {
-      for (const [strip, textByTransform] of [[undefined, false], [undefined, true], ["text", false]]) {
-        const d = await page.evaluate((o) => window.domOnly(o), { steps: STEPS, strip, textByTransform });
-        log(`DOM only${strip ? ` without ${strip}` : ""}${textByTransform ? " (labels moved by transform)" : ""}: set ${d.setMs.toFixed(2)} ms, set + geometry ${d.domMs.toFixed(2)} ms`);
+      for (const strip of [undefined, "text", "legend-text", "axes-text", "curves", "clip"]) {
+        const d = await page.evaluate((o) => window.domOnly(o), { steps: STEPS, strip });
+        log(`DOM only (the app's scene renderer)${strip ? ` without ${strip}` : ""}: set ${d.setMs.toFixed(2)} ms, set + geometry ${d.domMs.toFixed(2)} ms`);
       }
       return;
     }
@@ -136,7 +137,7 @@ async function main() {
     const f = (x) => x.toFixed(2).padStart(9);
     log(`inputs: ${r.curves} invented curves, ${r.points.toLocaleString("en")} points; slide preset 960×540, devicePixelRatio ${r.devicePixelRatio}`);
     log(`first draw (builds the per-curve caches): ${r.firstDrawMs.toFixed(1)} ms`);
-    log(`zoom step, median over ${r.steps} steps (in ×0.8 per step, then out):`);
+    log(`zoom step, median over ${r.steps} steps (in ×0.8 per step, then out), drawn by the app's SceneSvg:`);
     log(`                      build ms    DOM ms  total ms   path chars`);
     log(`  thinned (axband)   ${f(r.thinned.buildMs)} ${f(r.thinned.domMs)} ${f(r.thinned.totalMs)}  ${String(Math.round(r.thinned.pathChars)).padStart(11)}`);
     log(`  plain full draw    ${f(r.plain.buildMs)} ${f(r.plain.domMs)} ${f(r.plain.totalMs)}  ${String(Math.round(r.plain.pathChars)).padStart(11)}   (${r.plain.steps} steps)`);

@@ -1,8 +1,8 @@
-// Benchmark page: loads the invented benchmark curves, then times zoom steps (buildScene + DOM update +
+// Benchmark page: loads the invented benchmark curves, then times zoom steps (buildScene + the app's SceneSvg update +
 // forced geometry) against a plain full-resolution draw of the same data. Driven by bench/redraw.mjs.
 import { buildScene, massScale, yScale, type PathNode, type Scene } from "../../src/plot/index";
 import type { Curve, CurveRole, Model, Project } from "../../src/data/types";
-import { createDomRenderer } from "./render-dom";
+import { createAppRenderer, createSceneDomRenderer } from "./render-app";
 
 interface Manifest {
   curves: { file: string; kind: string; points: number }[];
@@ -146,12 +146,15 @@ export interface BenchResult {
   devicePixelRatio: number;
 }
 
-async function run(opts: { steps: number; plainSteps: number }): Promise<BenchResult> {
+async function run(opts: { steps: number; plainSteps: number; repeat?: number; renderer?: "app" | "scene-dom" }): Promise<BenchResult> {
   const project = await loadProject();
   const host = document.getElementById("plot")!;
-  const render = createDomRenderer(host);
-  const sync = () => (host.querySelector("#curves") as SVGGElement | null)?.getBBox();
-  const ranges = zoomSequence(project.figure.massRangeEv, opts.steps);
+  host.textContent = "";
+  // The app's renderer by default: what the figure does on every zoom step.
+  const render = opts.renderer === "scene-dom" ? createSceneDomRenderer(host) : createAppRenderer(host);
+  const sync = () => (host.querySelector("#bench-curves") as SVGGElement | null)?.getBBox();
+  // repeat > 1 runs the same zoom sequence again (for profiling: more samples of the same steps).
+  const ranges = Array.from({ length: opts.repeat ?? 1 }, () => zoomSequence(project.figure.massRangeEv, opts.steps)).flat();
   const resolution = window.devicePixelRatio || 1;
   const at = (r: [number, number]): Project => ({ ...project, figure: { ...project.figure, massRangeEv: r } });
   const pathChars = (s: Scene) => s.layers.reduce((n, l) => n + l.nodes.reduce((k, nd) => k + (nd.kind === "path" ? nd.d.length : 0), 0), 0);
@@ -220,16 +223,19 @@ async function run(opts: { steps: number; plainSteps: number }): Promise<BenchRe
 document.body.dataset.ready = "1";
 
 /** DOM-only timing (diagnostics): prebuilt scenes put into a fresh <svg>, optionally with parts stripped. */
-async function domOnly(opts: { steps: number; strip?: "text" | "fill" | "stroke" | "clip"; textByTransform?: boolean }): Promise<{ setMs: number; domMs: number }> {
+async function domOnly(opts: { steps: number; strip?: "text" | "fill" | "stroke" | "clip" | "legend-text" | "axes-text" | "curves" }): Promise<{ setMs: number; domMs: number }> {
   const project = await loadProject();
   const host = document.createElement("div");
   document.body.appendChild(host);
-  const render = createDomRenderer(host, !!opts.textByTransform);
+  const render = createSceneDomRenderer(host);
   const ranges = zoomSequence(project.figure.massRangeEv, opts.steps);
   const scenes = ranges.map((r) => {
     const s = buildScene({ ...project, figure: { ...project.figure, massRangeEv: r } });
     for (const l of s.layers) {
       if (opts.strip === "text") l.nodes = l.nodes.filter((n) => n.kind !== "text");
+      if (opts.strip === "legend-text" && l.id === "legend") l.nodes = l.nodes.filter((n) => n.kind !== "text");
+      if (opts.strip === "axes-text" && l.id === "axes") l.nodes = l.nodes.filter((n) => n.kind !== "text");
+      if (opts.strip === "curves" && l.id === "curves") l.nodes = [];
       if (opts.strip === "clip") l.clip = false;
       for (const n of l.nodes) {
         if (n.kind !== "path") continue;
@@ -239,7 +245,7 @@ async function domOnly(opts: { steps: number; strip?: "text" | "fill" | "stroke"
     }
     return s;
   });
-  const sync = () => (host.querySelector("#curves") as SVGGElement | null)?.getBBox();
+  const sync = () => (host.querySelector("#bench-curves") as SVGGElement | null)?.getBBox();
   render(scenes[0]);
   sync();
   const set: number[] = [];

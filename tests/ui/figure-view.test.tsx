@@ -1,11 +1,11 @@
-// The on-screen figure: the React renderer draws exactly the elements and attributes the SVG writer writes
-// (one scene, two outputs: DESIGN.md §1 — so the export matches the screen), keyboard zoom and reset go
+// The on-screen figure: the scene renderer (scene-dom.ts inside SceneSvg) draws exactly the elements and
+// attributes the SVG writer writes (one scene, two outputs: DESIGN.md §1 — so the export matches the screen),
+// also after updating in place from one scene to the next, keyboard zoom and reset go
 // through the store, and zooming does not re-render the sidebar panels (zustand's documented selector model:
 // a component re-renders only when the slice it selects changes).
 import { beforeEach, describe, expect, test } from "vitest";
 import { Profiler } from "react";
 import { act, fireEvent, render, screen } from "@testing-library/react";
-import { renderToStaticMarkup } from "react-dom/server";
 import { buildScene } from "../../src/plot/scene";
 import { writeSvg } from "../../src/plot/svg";
 import { defaultProject } from "../../src/data/demo";
@@ -57,16 +57,35 @@ describe("screen and export agree", () => {
         return p;
       },
     ],
-  ])("%s: every element and attribute of the React SVG equals the writer's", (_name, make) => {
+  ])("%s: every element and attribute on screen equals the writer's, also after updates in place", (_name, make) => {
     const project = make();
-    const scene = buildScene(project, { widthPx: 960, heightPx: 540, resolution: 1, physical: false, highlight: { massMinEv: 1e-5, massMaxEv: 1e-4, modelId: project.models[0].id } });
+    const opts = { widthPx: 960, heightPx: 540, resolution: 1, physical: false } as const;
+    const scene = buildScene(project, { ...opts, highlight: { massMinEv: 1e-5, massMaxEv: 1e-4, modelId: project.models[0].id } });
+    // A different scene first (other range, no highlight, legend elsewhere), so the final one is an update.
+    const other = buildScene({ ...project, figure: { ...project.figure, massRangeEv: [3e-9, 2e-3], legend: "top-left", title: "" } }, opts);
+    const { container, rerender } = render(
+      <SceneSvg scene={other} idPrefix="t-">
+        <rect data-testid="overlay-mark" />
+      </SceneSvg>,
+    );
+    rerender(
+      <SceneSvg scene={scene} idPrefix="t-">
+        <rect data-testid="overlay-mark" />
+      </SceneSvg>,
+    );
+    const svg = container.querySelector("svg")!;
+    // The screen-only overlays sit in one group after the scene; the rest must be the writer's content.
+    const overlay = svg.querySelector(":scope > g[data-overlay]")!;
+    expect(overlay.querySelector("[data-testid=overlay-mark]")).not.toBeNull();
+    expect(svg.lastElementChild).toBe(overlay);
+    overlay.remove();
     const fromWriter = tree(parse(writeSvg(scene, { idPrefix: "t-" })));
-    const fromReact = tree(parse(renderToStaticMarkup(<SceneSvg scene={scene} idPrefix="t-" />)));
+    const fromScreen = tree(svg);
     // Root attributes differ on purpose (the export has a physical size); the content must not.
-    expect(fromReact.attrs.viewBox).toBe(fromWriter.attrs.viewBox);
-    expect(fromReact.attrs["font-family"]).toBe(fromWriter.attrs["font-family"]);
-    expect(fromReact.children).toEqual(fromWriter.children);
-    expect(fromReact.children.length).toBeGreaterThan(5);
+    expect(fromScreen.attrs.viewBox).toBe(fromWriter.attrs.viewBox);
+    expect(fromScreen.attrs["font-family"]).toBe(fromWriter.attrs["font-family"]);
+    expect(fromScreen.children).toEqual(fromWriter.children);
+    expect(fromScreen.children.length).toBeGreaterThan(5);
   });
 });
 

@@ -1,0 +1,188 @@
+// Puts a Scene into an <svg> as DOM elements, node for node and attribute for attribute as writeSvg writes it
+// (the plot core's nodeAttributes and textSpans), updating in place from frame to frame: the figure's hot path.
+// Why not React elements: reconciling ~150 scene nodes took about as long again as building the scene
+// (bench/redraw.mjs, renderer "react" against this one), and React cannot skip unchanged text positions.
+import type { Scene, SceneLayer, SceneNode } from "../../plot/scene-types";
+import { fmt, nodeAttributes, textSpans } from "../../plot/svg";
+
+const SVG_NS = "http://www.w3.org/2000/svg";
+const XML_NS = "http://www.w3.org/XML/1998/namespace";
+// The writer's guards for ids and data keys (its own are module-private).
+const ID_SAFE = /[^A-Za-z0-9_-]/g;
+const DATA_KEY = /^[a-z0-9-]+$/;
+
+/** Element ids in document order as the writer gives them: prefix + safe id, repeats get "-2", "-3"… */
+export function sceneIds(scene: Scene, prefix: string): { clip: string; layers: (string | undefined)[]; nodes: (string | undefined)[][] } {
+  const used = new Map<string, number>();
+  const safePrefix = prefix.replace(ID_SAFE, "_");
+  const get = (id: string | undefined) => {
+    if (!id) return undefined;
+    const base = safePrefix + id.replace(ID_SAFE, "_");
+    const n = used.get(base) ?? 0;
+    used.set(base, n + 1);
+    return n === 0 ? base : `${base}-${n + 1}`;
+  };
+  const clip = get("plot-clip") as string;
+  const layers: (string | undefined)[] = [];
+  const nodes: (string | undefined)[][] = [];
+  for (const layer of scene.layers) {
+    layers.push(get(layer.id));
+    nodes.push(layer.nodes.map((n) => get(n.id)));
+  }
+  return { clip, layers, nodes };
+}
+
+/** One element kept from frame to frame, with the attribute values last written to it. */
+interface Slot {
+  el: SVGElement;
+  attrs: Map<string, string>;
+  /** The text content last written (tspans as the writer writes them), for text nodes. */
+  text: string;
+}
+
+interface LayerSlot {
+  g: SVGGElement;
+  attrs: Map<string, string>;
+  slots: Map<string, Slot>;
+}
+
+/** Writes `next` over the attributes last written (`last`): only the changed ones, removing the dropped ones. */
+function syncAttributes(el: Element, last: Map<string, string>, next: [string, string][]): void {
+  // Setting an attribute to its current value can still make the browser lay the figure out again.
+  const seen = new Set<string>();
+  for (const [k, v] of next) {
+    seen.add(k);
+    if (last.get(k) === v) continue;
+    if (k === "xml:space") el.setAttributeNS(XML_NS, k, v);
+    else el.setAttribute(k, v);
+    last.set(k, v);
+  }
+  if (seen.size === last.size) return;
+  for (const k of [...last.keys()]) {
+    if (seen.has(k)) continue;
+    if (k === "xml:space") el.removeAttributeNS(XML_NS, "space");
+    else el.removeAttribute(k);
+    last.delete(k);
+  }
+}
+
+function layerAttributes(layer: SceneLayer, id: string | undefined, clipId: string): [string, string][] {
+  const out: [string, string][] = [];
+  if (id) out.push(["id", id]);
+  if (layer.clip) out.push(["clip-path", `url(#${clipId})`]);
+  if (layer.data) for (const k of Object.keys(layer.data)) if (DATA_KEY.test(k)) out.push([`data-${k}`, String(layer.data[k])]);
+  return out;
+}
+
+function fillText(el: SVGElement, spans: ReturnType<typeof textSpans>): void {
+  el.textContent = "";
+  for (const span of spans) {
+    if (span.attrs.length === 0) {
+      el.appendChild(document.createTextNode(span.text));
+      continue;
+    }
+    const t = document.createElementNS(SVG_NS, "tspan");
+    for (const [k, v] of span.attrs) t.setAttribute(k, v);
+    t.textContent = span.text;
+    el.appendChild(t);
+  }
+}
+
+function tagOf(node: SceneNode): string {
+  return node.kind === "path" ? "path" : node.kind === "rect" ? "rect" : "text";
+}
+
+export interface SceneDom {
+  /** Brings the elements in line with `scene` (the same markup writeSvg would write for it). */
+  update(scene: Scene): void;
+  /** Removes every element this renderer added. */
+  destroy(): void;
+}
+
+/**
+ * A renderer of scenes into `svg`: its <defs> (the plot clip) and one <g> per layer, inserted before `before`
+ * (e.g. a group of screen-only overlays; null: at the end). Elements are kept by layer and node id, so an
+ * unchanged node costs a comparison and a moved tick label keeps its element; only changed attributes and
+ * texts are written.
+ * @param idPrefix prefix of every id, as writeSvg's idPrefix.
+ */
+export function createSceneDom(svg: SVGSVGElement, before: Node | null, idPrefix: string): SceneDom {
+  const defs = document.createElementNS(SVG_NS, "defs");
+  const clip = document.createElementNS(SVG_NS, "clipPath");
+  const clipRect = document.createElementNS(SVG_NS, "rect");
+  clip.appendChild(clipRect);
+  defs.appendChild(clip);
+  svg.insertBefore(defs, before);
+  const clipAttrs = new Map<string, string>();
+  const rectAttrs = new Map<string, string>();
+  const layers = new Map<string, LayerSlot>();
+
+  const update = (scene: Scene) => {
+    const ids = sceneIds(scene, idPrefix);
+    const { plot } = scene;
+    syncAttributes(clip, clipAttrs, [["id", ids.clip]]);
+    syncAttributes(clipRect, rectAttrs, [
+      ["x", fmt(plot.x)],
+      ["y", fmt(plot.y)],
+      ["width", fmt(plot.w)],
+      ["height", fmt(plot.h)],
+    ]);
+    const layerKeys = new Set<string>(scene.layers.map((l) => l.id));
+    for (const [key, ls] of layers) {
+      if (layerKeys.has(key)) continue;
+      ls.g.remove();
+      layers.delete(key);
+    }
+    let prevLayer: Element = defs;
+    scene.layers.forEach((layer, li) => {
+      let ls = layers.get(layer.id);
+      if (!ls) {
+        ls = { g: document.createElementNS(SVG_NS, "g"), attrs: new Map(), slots: new Map() };
+        layers.set(layer.id, ls);
+      }
+      syncAttributes(ls.g, ls.attrs, layerAttributes(layer, ids.layers[li], ids.clip));
+      if (prevLayer.nextSibling !== ls.g) svg.insertBefore(ls.g, prevLayer.nextSibling);
+      prevLayer = ls.g;
+      const nodeIds = ids.nodes[li];
+      const keys = layer.nodes.map((n, i) => `${n.kind}:${nodeIds[i] ?? `#${i}`}`);
+      // Elements of nodes that are gone go first, so the ones that stay keep their place (a moved element is
+      // laid out again, which for text is the dear part of a frame).
+      const keep = new Set(keys);
+      for (const [key, slot] of ls.slots) {
+        if (keep.has(key)) continue;
+        slot.el.remove();
+        ls.slots.delete(key);
+      }
+      let prev: Element | null = null;
+      layer.nodes.forEach((node, i) => {
+        const key = keys[i];
+        let slot = ls.slots.get(key);
+        if (!slot) {
+          slot = { el: document.createElementNS(SVG_NS, tagOf(node)), attrs: new Map(), text: "" };
+          ls.slots.set(key, slot);
+        }
+        const id = nodeIds[i];
+        const attrs = nodeAttributes(node);
+        syncAttributes(slot.el, slot.attrs, id ? [["id", id], ...attrs] : attrs);
+        if (node.kind === "text") {
+          const spans = textSpans(node);
+          const text = JSON.stringify(spans);
+          if (text !== slot.text) {
+            fillText(slot.el, spans);
+            slot.text = text;
+          }
+        }
+        const want: ChildNode | null = prev ? prev.nextSibling : ls.g.firstChild;
+        if (want !== slot.el) ls.g.insertBefore(slot.el, want);
+        prev = slot.el;
+      });
+    });
+  };
+
+  const destroy = () => {
+    defs.remove();
+    for (const ls of layers.values()) ls.g.remove();
+    layers.clear();
+  };
+  return { update, destroy };
+}
