@@ -117,8 +117,10 @@ export function nodeAttributes(n: SceneNode): SvgAttribute[] {
       push(out, "stroke-width", num(n.strokeWidth));
       push(out, "stroke-opacity", num(n.strokeOpacity));
       push(out, "stroke-dasharray", n.dash && DASH_SAFE.test(n.dash) ? n.dash : undefined);
-      // Round joins: no miter spikes at the turns of dense data, and cheap stroke bounds for the browser.
-      push(out, "stroke-linejoin", "round");
+      // Bevel joins: no miter spikes at the turns of dense data, and at ~2 px line widths they look as round
+      // joins do while costing the browser ~30 % less to paint (bench/redraw.mjs, 20 curves of 100,000 points:
+      // raster time of a zoom sequence 2.2 s with round joins, 1.5 s with bevel).
+      push(out, "stroke-linejoin", "bevel");
     }
   } else if (n.kind === "rect") {
     push(out, "x", num(n.x));
