@@ -40,6 +40,20 @@ export function writeHundredths(q: number): void {
   const fp = q - ip * 100;
   if (ip === 0) {
     if (fp === 0) buf[pos++] = 48;
+  } else if (ip < 1000) {
+    // Most coordinates and moves: up to three integer digits, written without a reversing pass.
+    if (ip >= 100) {
+      const h = Math.floor(ip / 100);
+      buf[pos++] = 48 + h;
+      ip -= h * 100;
+      const t = Math.floor(ip / 10);
+      buf[pos++] = 48 + t;
+      buf[pos++] = 48 + ip - t * 10;
+    } else if (ip >= 10) {
+      const t = Math.floor(ip / 10);
+      buf[pos++] = 48 + t;
+      buf[pos++] = 48 + ip - t * 10;
+    } else buf[pos++] = 48 + ip;
   } else {
     const start = pos;
     while (ip > 0) {
@@ -55,8 +69,9 @@ export function writeHundredths(q: number): void {
   }
   if (fp !== 0) {
     buf[pos++] = 46;
-    buf[pos++] = 48 + Math.floor(fp / 10);
-    if (fp % 10) buf[pos++] = 48 + (fp % 10);
+    const t = Math.floor(fp / 10);
+    buf[pos++] = 48 + t;
+    if (fp - t * 10 !== 0) buf[pos++] = 48 + fp - t * 10;
   }
 }
 
@@ -66,9 +81,35 @@ export function writeAscii(s: string): void {
   for (let i = 0; i < s.length; i++) buf[pos++] = s.charCodeAt(i) & 0x7f;
 }
 
+// The latest paths written here, so that the SVG writer's check of path data (isSafePathData in svg.ts) need
+// not rescan tens of thousands of characters per curve on every frame: what this module writes holds only
+// command letters, digits, "-", "." and spaces by construction. Bounded to 8·10⁶ characters (about 8 MB: the
+// paths of a few frames; a figure has a few dozen paths).
+const RECENT_MAX_CHARS = 8_000_000;
+const recent = new Set<string>();
+const recentOrder: string[] = [];
+let recentChars = 0;
+
 /** The path written since beginPath(). */
 export function finishPath(): string {
-  return decoder.decode(buf.subarray(0, pos));
+  const d = decoder.decode(buf.subarray(0, pos));
+  // Short paths are checked faster than remembered.
+  if (d.length >= 256 && d.length <= RECENT_MAX_CHARS / 4 && !recent.has(d)) {
+    recent.add(d);
+    recentOrder.push(d);
+    recentChars += d.length;
+    while (recentChars > RECENT_MAX_CHARS) {
+      const old = recentOrder.shift() as string;
+      recent.delete(old);
+      recentChars -= old.length;
+    }
+  }
+  return d;
+}
+
+/** Whether `d` equals path data lately returned by finishPath (so it is well-formed and safe by construction). */
+export function isRecentPath(d: string): boolean {
+  return recent.has(d);
 }
 
 export const CH = { M: 77, L: 76, Z: 90, l: 108, h: 104, v: 118, space: 32 } as const;

@@ -3,6 +3,7 @@
 import type { Scene, SceneNode, TextNode } from "./scene-types";
 import { safeColour } from "./format";
 import { placeRuns } from "./text";
+import { isRecentPath } from "./path-writer";
 
 /** XML-escape text and attribute values: & < > " ' (so nothing in a label can open a tag or end an attribute). */
 export function escapeXml(s: string): string {
@@ -36,6 +37,8 @@ const PATH_CHARS = (() => {
  * close the attribute or reference anything). A table lookup: this runs over every curve on every frame.
  */
 export function isSafePathData(d: string): boolean {
+  // Path data just written by path-writer.ts is safe by construction: no rescan of every curve per frame.
+  if (isRecentPath(d)) return true;
   for (let i = 0; i < d.length; i++) {
     const c = d.charCodeAt(i);
     if (c >= 128 || PATH_CHARS[c] === 0) return false;

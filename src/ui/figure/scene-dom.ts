@@ -11,13 +11,25 @@ const XML_NS = "http://www.w3.org/XML/1998/namespace";
 const ID_SAFE = /[^A-Za-z0-9_-]/g;
 const DATA_KEY = /^[a-z0-9-]+$/;
 
+// The same node ids come back every frame: their safe forms are remembered (bounded, cleared when full).
+const safeIds = new Map<string, string>();
+function safeId(id: string): string {
+  let s = safeIds.get(id);
+  if (s === undefined) {
+    if (safeIds.size > 10_000) safeIds.clear();
+    s = id.replace(ID_SAFE, "_");
+    safeIds.set(id, s);
+  }
+  return s;
+}
+
 /** Element ids in document order as the writer gives them: prefix + safe id, repeats get "-2", "-3"… */
 export function sceneIds(scene: Scene, prefix: string): { clip: string; layers: (string | undefined)[]; nodes: (string | undefined)[][] } {
   const used = new Map<string, number>();
   const safePrefix = prefix.replace(ID_SAFE, "_");
   const get = (id: string | undefined) => {
     if (!id) return undefined;
-    const base = safePrefix + id.replace(ID_SAFE, "_");
+    const base = safePrefix + safeId(id);
     const n = used.get(base) ?? 0;
     used.set(base, n + 1);
     return n === 0 ? base : `${base}-${n + 1}`;
