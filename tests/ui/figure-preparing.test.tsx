@@ -43,6 +43,7 @@ import { buildScene } from "../../src/plot/scene";
 import { emptyProject, newCurve, serializeForStorage } from "../../src/data";
 import type { Curve, Project } from "../../src/data/types";
 import { FigureView } from "../../src/ui/figure/FigureView";
+import { HoverReadout } from "../../src/ui/figure/HoverReadout";
 import { useAxband } from "../../src/ui/store";
 import { OFF_THREAD_PREPARE_POINTS } from "../../src/ui/store/preparation";
 import { initProject, STORAGE_KEY, type CurveArrays, type CurveDataStore } from "../../src/ui/store/autosave";
@@ -186,5 +187,22 @@ describe("a big curve restored from autosave", () => {
     await act(async () => useAxband.getState().addCurves([bigCurve("other")]));
     expect(worker.calls).toHaveLength(0);
     expect(curvePaths("other").length).toBeGreaterThan(0);
+  });
+
+  test("the hover readout leaves a curve being prepared out (testing it would prepare it on the page), then names it", async () => {
+    const project = emptyProject("restored");
+    project.curves = [bigCurve("big")];
+    await initProject(useAxband, { ...savedProject(project), fragment: "" });
+    const restored = useAxband.getState().project.curves[0];
+    render(<HoverReadout />);
+    // A point well below the invented limit (~1e-13 GeV⁻¹ at 1e-5 eV): excluded once the curve counts.
+    await act(async () => useAxband.getState().setHover({ massEv: 1e-5, y: 1e-12 }));
+    expect(screen.getByTestId("hover-readout")).not.toHaveTextContent("Demo big big (invented)");
+    expect(worker.computed.filter((c) => c.massEv === restored.massEv)).toEqual([]);
+    const reply = workerReply(restored, worker.calls[0].spec);
+    worker.computed.length = 0;
+    await act(async () => worker.calls[0].reply(reply));
+    expect(screen.getByTestId("hover-readout")).toHaveTextContent("excluded by");
+    expect(screen.getByTestId("hover-readout")).toHaveTextContent("Demo big big (invented)");
   });
 });

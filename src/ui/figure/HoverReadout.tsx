@@ -4,7 +4,8 @@ import { useMemo, type ReactNode } from "react";
 import { eOverNAt, faFromMass, frequencyFromMass } from "../../physics/coupling";
 import { constantsOf } from "../../plot/physics-settings";
 import { viewToG } from "../../plot/scales";
-import { selectCurves, selectHover, selectPhysics, selectYView, useAxband } from "../store";
+import { selectCurves, selectHover, selectPhysics, selectPreparing, selectYView, useAxband } from "../store";
+import { isPreparing } from "../store/preparation";
 import { minus, sciFormat, siFormat } from "../format";
 import { curvesAtPoint } from "./hit";
 
@@ -14,7 +15,11 @@ export function HoverReadout() {
   const hover = useAxband(selectHover);
   const physics = useAxband(selectPhysics);
   const yView = useAxband(selectYView);
-  const curves = useAxband(selectCurves);
+  const allCurves = useAxband(selectCurves);
+  const preparing = useAxband(selectPreparing);
+  // A curve still being prepared in the worker is not drawn yet: testing the point against it would prepare it
+  // here, on the page, the long task the worker is there to avoid.
+  const curves = useMemo(() => (preparing.length === 0 ? allCurves : allCurves.filter((c) => !isPreparing(preparing, c))), [allCurves, preparing]);
   const constants = useMemo(() => constantsOf(physics), [physics]);
 
   if (!hover) {
