@@ -115,29 +115,31 @@ function viewOk(t: PreparedTransfer, v: ViewTransfer): boolean {
  * Installs a transfer from {@link computePrepared} in this thread's plot cache under the given arrays (the
  * ones the curve will be drawn from), so buildScene finds it. A transfer that does not fit the arrays
  * (other length or order, detached buffers) is ignored and the curve is prepared here when first drawn.
- * @returns whether it was installed (or an entry was already cached).
+ * When the curve is already cached (prepared here meanwhile, e.g. by an export or the hover readout), the
+ * transfer's y views that the entry lacks are added to it, so a later switch to that view builds nothing here.
+ * @returns whether it was installed or merged (or an entry was already cached).
  */
 export function seedPreparedCurve(massEv: Float64Array, gInvGeV: Float64Array, sorted: boolean, t: PreparedTransfer): boolean {
-  if (cachedPrepared(massEv, gInvGeV, sorted)) return true;
   const len = Math.min(massEv.length, gInvGeV.length);
-  if (t.sorted !== sorted || t.n + t.skipped !== len || t.lm.length !== t.n || t.lg.length !== t.n) return false;
-  const views = new Map<number, ViewArrays>();
-  for (const v of t.views) {
-    if (!viewOk(t, v)) continue;
-    const pyramid = v.pyramidMin && v.pyramidMax ? { levels: v.pyramidMin.map((min, i) => ({ min, max: (v.pyramidMax as Int32Array[])[i] })) } : null;
-    views.set(v.slope, {
-      v: v.v ?? t.lg,
-      pyramid,
-      importance: v.importance,
-      boxes: v.boxes,
-      levels: new Map(),
-      order: v.order,
-      impDesc: v.impDesc,
-    });
+  const fits = t.sorted === sorted && t.n + t.skipped === len && t.lm.length === t.n && t.lg.length === t.n;
+  const cached = cachedPrepared(massEv, gInvGeV, sorted);
+  if (cached) {
+    // The same arrays give the same preparation (computePrepared runs the same code), so the views fit it.
+    if (fits && cached.n === t.n) for (const v of t.views) if (!cached.views.has(v.slope) && viewOk(t, v)) cached.views.set(v.slope, viewOf(v, cached.lg));
+    return true;
   }
+  if (!fits) return false;
+  const views = new Map<number, ViewArrays>();
+  for (const v of t.views) if (viewOk(t, v)) views.set(v.slope, viewOf(v, t.lg));
   const prep: PreparedCurve = { n: t.n, skipped: t.skipped, lm: t.lm, lg: t.lg, sorted, views };
   installPrepared(massEv, gInvGeV, prep);
   return true;
+}
+
+/** The plot cache's form of one transferred y view; `lg` stands in for the view values of the g_aγγ view. */
+function viewOf(v: ViewTransfer, lg: Float64Array): ViewArrays {
+  const pyramid = v.pyramidMin && v.pyramidMax ? { levels: v.pyramidMin.map((min, i) => ({ min, max: (v.pyramidMax as Int32Array[])[i] })) } : null;
+  return { v: v.v ?? lg, pyramid, importance: v.importance, boxes: v.boxes, levels: new Map(), order: v.order, impDesc: v.impDesc };
 }
 
 /** Whether the curve's preparation for the spec's order and y views is already cached (nothing to build). */

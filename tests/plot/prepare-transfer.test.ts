@@ -104,6 +104,26 @@ describe("seeding a curve prepared elsewhere", () => {
     });
   }
 
+  test("a reply for a curve prepared here meanwhile adds the views it lacks, and draws as before", () => {
+    const base = bigCurves();
+    for (const c of copies(base)) {
+      // Drawn here first in the g_aγγ view (e.g. an export before the worker replied).
+      const spec0 = prepareSpecOf(c, "coupling");
+      const specN = prepareSpecOf(c, "normalized");
+      writeSvg(buildScene(projectWith([c], "coupling")));
+      const cached = cachedPrepared(c.massEv, c.gInvGeV, spec0.sorted);
+      expect(cached).toBeDefined();
+      expect(hasPrepared(c.massEv, c.gInvGeV, specN)).toBe(false);
+      // The worker's reply for the normalized view is merged into that entry, which stays the one drawn from.
+      const t = computePrepared(c.massEv.slice(), c.gInvGeV.slice(), specN.sorted, { slopes: specN.slopes, closed: specN.closed });
+      expect(seedPreparedCurve(c.massEv, c.gInvGeV, specN.sorted, t)).toBe(true);
+      expect(cachedPrepared(c.massEv, c.gInvGeV, spec0.sorted)).toBe(cached);
+      expect(hasPrepared(c.massEv, c.gInvGeV, specN)).toBe(true);
+      const fresh = copies([c]);
+      expect(writeSvg(buildScene(projectWith([c], "normalized"), { resolution: 1.5 }))).toBe(writeSvg(buildScene(projectWith(fresh, "normalized"), { resolution: 1.5 })));
+    }
+  });
+
   test("a transfer that does not fit the arrays is refused, and the curve is then prepared where it is drawn", () => {
     const [long] = bigCurves();
     const { spec, moved } = viaWorker(long, "coupling");
