@@ -4,7 +4,8 @@
 // plain full-resolution draw of the same data in the same run. Prints medians and ratios; never pass/fail.
 // Options (environment): AXBAND_BENCH_STEPS (zoom steps, default 40), AXBAND_BENCH_PLAIN_STEPS (full draws,
 // default 6), AXBAND_BENCH_DETAIL=1 (every step), AXBAND_BENCH_DOM_ONLY=1 (DOM cost of prebuilt scenes only),
-// AXBAND_BENCH_MINIFY=0 (readable bundle for profiling), CHROMIUM_PATH (default /usr/bin/chromium).
+// AXBAND_BENCH_MINIFY=0 (readable bundle for profiling), AXBAND_BENCH_NO_TRACE=1 (skip the painting trace),
+// CHROMIUM_PATH (default /usr/bin/chromium).
 import { spawnSync } from "node:child_process";
 import { createServer } from "node:http";
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from "node:fs";
@@ -144,6 +145,26 @@ async function main() {
     log(`ratio thinned/plain: total ${(r.thinned.totalMs / r.plain.totalMs).toFixed(4)}, path size ${(r.thinned.pathChars / r.plain.pathChars).toFixed(4)}`);
     log(`  (of the thinned DOM time, ${r.thinned.setMs.toFixed(2)} ms is setting attributes and text, the rest the forced geometry)`);
     log(`target: median zoom step ≤ 8 ms (measured ${r.thinned.totalMs.toFixed(2)} ms; DOM time includes a forced getBBox of the curves layer)`);
+    if (!process.env.AXBAND_BENCH_NO_TRACE) {
+      // The browser paints each frame on its raster threads, outside the times above but on the same two cores:
+      // trace the zoom sequence once more, each frame given time to be painted, and sum the raster work.
+      // A fresh tab, so that no painting of the full-resolution draws above is still going on.
+      await page.close();
+      const tab = await browser.newPage({ viewport: { width: 1280, height: 800 } });
+      await tab.goto(`http://127.0.0.1:${port}/`);
+      await tab.waitForSelector("body[data-ready='1']", { timeout: 60000 });
+      await browser.startTracing(tab, { categories: ["devtools.timeline", "disabled-by-default-devtools.timeline", "blink.user_timing"] });
+      const t = await tab.evaluate((o) => window.runBench(o), { steps: STEPS, plainSteps: 0, settleMs: 100 });
+      const events = JSON.parse((await browser.stopTracing()).toString()).traceEvents;
+      // Only the painting of the zoom steps: between the page's marks (first draws and earlier frames left out).
+      const mark = (name) => events.find((e) => e.name === name)?.ts;
+      const from = mark("axband-zoom-start") ?? 0;
+      const to = mark("axband-zoom-end") ?? Infinity;
+      const raster = events.filter((e) => e.ph === "X" && e.name === "RasterTask" && e.ts >= from && e.ts <= to);
+      const rasterMs = raster.reduce((sum, e) => sum + (e.dur ?? 0), 0) / 1000;
+      log(`painting (the browser's raster threads, software, no GPU): ${(rasterMs / t.steps).toFixed(1)} ms per zoom step on average;`);
+      log(`  with each frame painted before the next step the main-thread median is ${t.thinned.totalMs.toFixed(2)} ms (build ${t.thinned.buildMs.toFixed(2)}, DOM ${t.thinned.domMs.toFixed(2)})`);
+    }
   } finally {
     await browser.close();
     await new Promise((ok) => server.close(ok));

@@ -146,7 +146,7 @@ export interface BenchResult {
   devicePixelRatio: number;
 }
 
-async function run(opts: { steps: number; plainSteps: number; repeat?: number; renderer?: "app" | "scene-dom" }): Promise<BenchResult> {
+async function run(opts: { steps: number; plainSteps: number; repeat?: number; renderer?: "app" | "scene-dom"; strip?: "text" | "curves"; settleMs?: number; look?: "nofill" | "nostroke" | "noclip" | "noopacity" | "nodash" | "thin" }): Promise<BenchResult> {
   const project = await loadProject();
   const host = document.getElementById("plot")!;
   host.textContent = "";
@@ -173,9 +173,28 @@ async function run(opts: { steps: number; plainSteps: number; repeat?: number; r
   const d: number[] = [];
   const tot: number[] = [];
   const chars: number[] = [];
+  // Marks for a trace of this run (bench/redraw.mjs counts the painting between them).
+  performance.mark("axband-zoom-start");
   for (const r of ranges) {
     const t0 = performance.now();
     const scene = buildScene(at(r), { resolution });
+    // Diagnostics: leave out all text or all curves before drawing (the build time above stays whole).
+    if (opts.strip) for (const l of scene.layers) l.nodes = l.nodes.filter((n) => (opts.strip === "text" ? n.kind !== "text" : l.id !== "curves"));
+    // Diagnostics: how the look of the curves changes the browser's painting (raster) cost.
+    if (opts.look) {
+      for (const l of scene.layers) {
+        if (opts.look === "noclip") l.clip = false;
+        if (l.id !== "curves") continue;
+        for (const nd of l.nodes) {
+          if (nd.kind !== "path") continue;
+          if (opts.look === "nofill" && nd.stroke) nd.fill = "none";
+          if (opts.look === "nostroke" && nd.fill && nd.fill !== "none") nd.stroke = undefined;
+          if (opts.look === "noopacity" && nd.fillOpacity !== undefined) nd.fillOpacity = 1;
+          if (opts.look === "nodash") nd.dash = undefined;
+          if (opts.look === "thin" && nd.strokeWidth) nd.strokeWidth = 1;
+        }
+      }
+    }
     const t1 = performance.now();
     render(scene);
     const tSet = performance.now();
@@ -187,8 +206,11 @@ async function run(opts: { steps: number; plainSteps: number; repeat?: number; r
     tot.push(t2 - t0);
     chars.push(pathChars(scene));
     await new Promise((res) => requestAnimationFrame(() => res(null)));
+    // Diagnostics: let the compositor finish painting the frame before the next step.
+    if (opts.settleMs) await new Promise((res) => setTimeout(res, opts.settleMs));
   }
 
+  performance.mark("axband-zoom-end");
   const pb: number[] = [];
   const pd: number[] = [];
   const pt: number[] = [];
@@ -220,6 +242,24 @@ async function run(opts: { steps: number; plainSteps: number; repeat?: number; r
 }
 
 (window as unknown as { runBench: typeof run }).runBench = run;
+
+/** Diagnostics: the fastest of `reps` builds of the scene at each depth of the zoom sequence (no drawing). */
+async function buildOnly(opts: { reps: number; depths: number[] }): Promise<{ depth: number; ms: number }[]> {
+  const project = await loadProject();
+  const ranges = zoomSequence(project.figure.massRangeEv, 40);
+  buildScene(project);
+  return opts.depths.map((depth) => {
+    const p = { ...project, figure: { ...project.figure, massRangeEv: ranges[depth] } };
+    let best = Infinity;
+    for (let k = 0; k < opts.reps; k++) {
+      const t = performance.now();
+      buildScene(p);
+      best = Math.min(best, performance.now() - t);
+    }
+    return { depth, ms: best };
+  });
+}
+(window as unknown as { buildOnly: typeof buildOnly }).buildOnly = buildOnly;
 document.body.dataset.ready = "1";
 
 /** DOM-only timing (diagnostics): prebuilt scenes put into a fresh <svg>, optionally with parts stripped. */
