@@ -82,7 +82,11 @@ export function defaultPhysics(): PhysicsSettings {
   };
 }
 
-/** Figure of a new project: a 16:9 slide, f_a on the top axis, grid on, legend in the empty lower right. */
+/**
+ * Figure of a new project: a 16:9 slide, f_a on the top axis, grid on, the legend in the inner corner where
+ * it covers the least of the curves and models ("auto"). Share links keep their own frozen base value for the
+ * legend ("bottom-right", src/data/link.ts), so links written before "auto" existed decode as they did.
+ */
 export function defaultFigure(): Figure {
   return {
     preset: "slide",
@@ -93,7 +97,7 @@ export function defaultFigure(): Figure {
     yView: "coupling",
     topAxis: "fa",
     grid: true,
-    legend: "bottom-right",
+    legend: "auto",
     fontPt: 12,
     title: "",
   };

@@ -58,7 +58,9 @@ export function isRationalText(s: string): boolean {
 const hexColour = z.string().regex(/^#(?:[0-9a-fA-F]{3,4}|[0-9a-fA-F]{6}|[0-9a-fA-F]{8})$/, "expected a colour such as #117A8B");
 const lineStyle = z.enum(["solid", "dashed", "dotted", "dashdot"]);
 const curveRole = z.enum(["exclusion", "projection", "region"]);
-const legendPlace = z.enum(["top-left", "top-right", "bottom-left", "bottom-right", "outside-right", "hidden"]);
+// "auto" joined in schema version 1 without a bump: every older file still validates, and an older build
+// reading "auto" repairs it to its default legend place (a noted repair), so no migration is needed.
+const legendPlace = z.enum(["auto", "top-left", "top-right", "bottom-left", "bottom-right", "outside-right", "hidden"]);
 const sizePreset = z.enum(["slide", "single-column", "double-column", "custom"]);
 const topAxis = z.enum(["none", "fa", "frequency"]);
 const yView = z.enum(["coupling", "normalized", "g-gamma"]);

@@ -6,7 +6,8 @@ export const PROJECT_VERSION = 1 as const;
 
 export type LineStyle = "solid" | "dashed" | "dotted" | "dashdot";
 export type CurveRole = "exclusion" | "projection" | "region";
-export type LegendPlace = "top-left" | "top-right" | "bottom-left" | "bottom-right" | "outside-right" | "hidden";
+/** Where the legend goes; "auto" is the inner corner where it covers the least drawn content (src/plot/legend-place.ts). */
+export type LegendPlace = "auto" | "top-left" | "top-right" | "bottom-left" | "bottom-right" | "outside-right" | "hidden";
 export type SizePreset = "slide" | "single-column" | "double-column" | "custom";
 export type TopAxis = "none" | "fa" | "frequency";
 /** y axis: g_aγγ itself, |E/N − c_γ|, or |g_γ| = |E/N − c_γ|/2 (model lines horizontal in the last two). */

@@ -147,6 +147,23 @@ export interface Layout {
   legendY: number;
 }
 
+/** An inner corner of the plot area where the legend box can sit. */
+export type LegendCorner = "top-left" | "top-right" | "bottom-left" | "bottom-right";
+
+/**
+ * Top-left corner (scene px) of a legend box of the given size in an inner corner of the plot area, inset
+ * by 0.6 tick-label sizes from the frame.
+ */
+export function cornerLegendOrigin(plot: PlotRect, corner: LegendCorner, widthPx: number, heightPx: number, fonts: Pick<Fonts, "tickPx">): { x: number; y: number } {
+  const inset = fonts.tickPx * 0.6;
+  const left = corner === "top-left" || corner === "bottom-left";
+  const top = corner === "top-left" || corner === "top-right";
+  return {
+    x: left ? plot.x + inset : plot.x + plot.w - inset - widthPx,
+    y: top ? plot.y + inset : plot.y + plot.h - inset - heightPx,
+  };
+}
+
 /** Height above the baseline of a label with a superscript ("10⁻⁶"), as a fraction of its size. */
 const SUP_TOP = SUP_RAISE + SHIFT_SCALE * CAP_HEIGHT + 0.04;
 /** Depth below the baseline of brackets and subscripts. */
@@ -155,6 +172,8 @@ const DESCENT = 0.24;
 /**
  * Margins and positions for a figure. Vertical margins first (they need no label widths), then the y label
  * width for that plot height, then the horizontal margins (legend outside right shrinks the plot area).
+ * An "auto" legend is laid out like an inner corner (no margin) and left at (0, 0): the scene builder picks
+ * its place.
  */
 export function computeLayout(input: LayoutInput): Layout {
   const { widthPx: W, heightPx: H, fonts: f } = input;
@@ -194,31 +213,21 @@ export function computeLayout(input: LayoutInput): Layout {
   const plotW = Math.max(20, W - left - right);
   const plot: PlotRect = { x: left, y: top, w: plotW, h: plotH };
 
-  const inset = f.tickPx * 0.6;
   let legendX = 0;
   let legendY = 0;
   switch (lg.place) {
     case "top-left":
-      legendX = plot.x + inset;
-      legendY = plot.y + inset;
-      break;
     case "top-right":
-      legendX = plot.x + plot.w - inset - lg.widthPx;
-      legendY = plot.y + inset;
-      break;
     case "bottom-left":
-      legendX = plot.x + inset;
-      legendY = plot.y + plot.h - inset - lg.heightPx;
-      break;
     case "bottom-right":
-      legendX = plot.x + plot.w - inset - lg.widthPx;
-      legendY = plot.y + plot.h - inset - lg.heightPx;
+      ({ x: legendX, y: legendY } = cornerLegendOrigin(plot, lg.place, lg.widthPx, lg.heightPx, f));
       break;
     case "outside-right":
       legendX = plot.x + plot.w + pad + gap;
       legendY = plot.y;
       break;
     default:
+      // "auto" is resolved to a corner (or outside right) by the scene builder before the final layout.
       break;
   }
   return {

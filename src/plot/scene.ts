@@ -1,13 +1,14 @@
 // The scene builder: a project in, the complete figure out as plain layers of paths, rects and text, drawn
 // the same way on screen (React SVG) and in the exported SVG (writeSvg). All defaults of a figure live here.
 import { bandCancels } from "../physics/coupling";
-import type { Curve, Model, Project, YView } from "../data/types";
+import type { Curve, LegendPlace, Model, Project, YView } from "../data/types";
 import type { PathNode, Scene, SceneLayer, SceneNode, ScaleConfig } from "./scene-types";
 import { axesNodes, axisTicks, gridNodes, verticalTickOpts, yTitle, type AxesFrame } from "./axes";
 import { curveGeometry } from "./curves";
 import { dashFor, plainOrScientificRuns, powerOfTenRuns, r2, safeColour, unitInterval } from "./format";
-import { computeLayout, fontsFor, presetOf, PX_PER_IN, type Fonts } from "./layout";
-import { legendNodes, measureLegend, type LegendEntry } from "./legend";
+import { computeLayout, cornerLegendOrigin, fontsFor, presetOf, PX_PER_IN, type Fonts, type Layout, type LegendCorner } from "./layout";
+import { legendLabelText, legendNodes, measureLegend, type LegendBox, type LegendEntry } from "./legend";
+import { LEGEND_CORNERS, OUTSIDE_MIN_PLOT_FRACTION, PLACEMENT_RESOLUTION, pickLegendPlace } from "./legend-place";
 import { modelGeometry } from "./models";
 import { constantsOf, eOverNValue, rescaleNote } from "./physics-settings";
 import { logAffine, sanitizeDomain } from "./scales";
@@ -105,6 +106,46 @@ function legendEntries(project: Project, fonts: Fonts, c: ReturnType<typeof cons
   return entries;
 }
 
+/** What the automatic legend placement needs from the figure being built. */
+interface AutoLegendFrame {
+  constants: ReturnType<typeof constantsOf>;
+  view: YView;
+  scales: ScaleConfig;
+  fonts: Fonts;
+  box: LegendBox;
+  /** The layout with the legend inside (every inner corner gives the same plot area). */
+  layout: Layout;
+  outsideFits: () => boolean;
+}
+
+/**
+ * The place of an "auto" legend (legend-place.ts): the curves are built again at the fixed
+ * PLACEMENT_RESOLUTION (the scene's own paths follow the display resolution, and the screen must pick the
+ * corner the export picks); model paths do not depend on resolution. The highlight is left out (the
+ * legend must not move when a table row is hovered).
+ */
+function autoLegendPlace(project: Project, f: AutoLegendFrame): LegendCorner | "outside-right" {
+  const plot = { x: r2(f.layout.plot.x), y: r2(f.layout.plot.y), w: r2(f.layout.plot.w), h: r2(f.layout.plot.h) };
+  const map = logAffine(f.scales, plot);
+  const nodes: SceneNode[] = [];
+  project.curves.forEach((cv, i) => {
+    if (!cv.visible) return;
+    const g = curveGeometry(cv, { constants: f.constants, view: f.view, map, plot, lineWidthPx: f.fonts.dataLinePx, resolution: PLACEMENT_RESOLUTION }, `place-curve-${i + 1}`);
+    nodes.push(...g.fills, ...g.lines);
+  });
+  project.models.forEach((m, i) => {
+    if (!m.visible) return;
+    const g = modelGeometry(m, { constants: f.constants, view: f.view, map, massDomainEv: f.scales.massDomainEv, plot, lineWidthPx: f.fonts.dataLinePx }, `place-model-${i + 1}`);
+    if (g) nodes.push(...g.fills, ...g.lines);
+  });
+  const boxes = {} as Record<LegendCorner, { x: number; y: number; w: number; h: number }>;
+  for (const corner of LEGEND_CORNERS) {
+    const o = cornerLegendOrigin(f.layout.plot, corner, f.box.widthPx, f.box.heightPx, f.fonts);
+    boxes[corner] = { x: o.x, y: o.y, w: f.box.widthPx, h: f.box.heightPx };
+  }
+  return pickLegendPlace({ nodes, plot, boxes, outsideFits: f.outsideFits }).place;
+}
+
 function physicalOf(px: number): string {
   return `${Math.round((px / PX_PER_IN) * 254) / 100}cm`;
 }
@@ -113,6 +154,9 @@ function physicalOf(px: number): string {
  * The scene of a project's figure. Layers, bottom to top: background, grid, curves (all curve fills in
  * project order, then all curve lines in project order, so no fill hides a line), models (fills, then
  * lines), highlight, axes, legend. Curves, models, highlight and grid are clipped to the plot area.
+ * An "auto" legend goes to the inner corner where it covers the least of the curves and models, or outside
+ * right when every corner is crowded and the figure has room (legend-place.ts); the choice depends on the
+ * project and the scene size only, never on `resolution` or `highlight`, so screen and export agree.
  * @param project the whole project (figure settings, models, curves, physics constants).
  * @param opts size, resolution, highlight; see {@link BuildSceneOpts}.
  */
@@ -127,29 +171,50 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   const massDomainEv = sanitizeDomain(fig.massRangeEv, FALLBACK_MASS_RANGE_EV);
   const yDomain = sanitizeDomain(fig.yRange, fallbackYRange(view));
   const topAxis = fig.topAxis === "fa" || fig.topAxis === "frequency" ? fig.topAxis : "none";
-  const legendPlace = fig.legend ?? "top-right";
+  const legendSetting = fig.legend ?? "top-right";
 
-  const entries = legendPlace === "hidden" ? [] : legendEntries(project, fonts, c);
-  const legendMax = legendPlace === "outside-right" ? widthPx * 0.3 : widthPx * 0.5;
-  const legendBox = measureLegend(entries, fonts.legendPx, legendMax);
+  const entries = legendSetting === "hidden" ? [] : legendEntries(project, fonts, c);
+  const measureFor = (place: LegendPlace) => measureLegend(entries, fonts.legendPx, place === "outside-right" ? widthPx * 0.3 : widthPx * 0.5);
 
   const ySpan = Math.log10(yDomain[1] / yDomain[0]);
   // Right margin: half of a wide decade label ("10⁻¹⁰"), fixed for the font size so the plot area does not
   // jump while zooming; a label that would still cross the figure edge is left out (axesNodes).
   const xHalf = runsWidthPx(powerOfTenRuns(-10), fonts.tickPx) / 2;
-  const layout = computeLayout({
-    widthPx,
-    heightPx,
-    fonts,
-    hasTopAxis: topAxis !== "none",
-    hasTitle: !!fig.title?.trim(),
-    yLabelWidthPx: (plotH) =>
-      logTicks(yDomain[0], yDomain[1], { ...verticalTickOpts(plotH / ySpan, fonts), format: view === "coupling" ? undefined : plainOrScientificRuns }).reduce((w, t) => (t.label ? Math.max(w, runsWidthPx(t.label, fonts.tickPx)) : w), 0),
-    xLabelHalfWidthPx: xHalf,
-    legend: { place: legendPlace, widthPx: legendBox.widthPx, heightPx: legendBox.heightPx },
-  });
-  const plot = { x: r2(layout.plot.x), y: r2(layout.plot.y), w: r2(layout.plot.w), h: r2(layout.plot.h) };
+  const layoutFor = (place: LegendPlace, box: LegendBox) =>
+    computeLayout({
+      widthPx,
+      heightPx,
+      fonts,
+      hasTopAxis: topAxis !== "none",
+      hasTitle: !!fig.title?.trim(),
+      yLabelWidthPx: (plotH) =>
+        logTicks(yDomain[0], yDomain[1], { ...verticalTickOpts(plotH / ySpan, fonts), format: view === "coupling" ? undefined : plainOrScientificRuns }).reduce((w, t) => (t.label ? Math.max(w, runsWidthPx(t.label, fonts.tickPx)) : w), 0),
+      xLabelHalfWidthPx: xHalf,
+      legend: { place, widthPx: box.widthPx, heightPx: box.heightPx },
+    });
   const scales: ScaleConfig = { massDomainEv, yDomain, yView: view };
+  let legendPlace: LegendPlace = legendSetting;
+  const legendBox = measureFor(legendPlace);
+  let layout: Layout | null = null;
+  if (legendPlace === "auto") {
+    // Outside right only when no label is cut there and the plot keeps most of the width.
+    const outsideFits = () => {
+      const ob = measureFor("outside-right");
+      if (ob.labels.some((l, i) => legendLabelText(l) !== entries[i].text)) return false;
+      const lo = layoutFor("outside-right", ob);
+      return lo.plot.w >= OUTSIDE_MIN_PLOT_FRACTION * widthPx && ob.heightPx <= lo.plot.h;
+    };
+    const inside = layoutFor("auto", legendBox);
+    legendPlace = entries.length ? autoLegendPlace(project, { constants: c, view, scales, fonts, box: legendBox, layout: inside, outsideFits }) : LEGEND_CORNERS[0];
+    // Outside right keeps the box: outsideFits found no label cut at the narrower limit, so none is cut at
+    // either. An inner corner leaves the margins as they are: only the legend's origin changes.
+    if (legendPlace !== "outside-right") {
+      const at = cornerLegendOrigin(inside.plot, legendPlace, legendBox.widthPx, legendBox.heightPx, fonts);
+      layout = { ...inside, legendX: at.x, legendY: at.y };
+    }
+  }
+  layout ??= layoutFor(legendPlace, legendBox);
+  const plot = { x: r2(layout.plot.x), y: r2(layout.plot.y), w: r2(layout.plot.w), h: r2(layout.plot.h) };
   const map = logAffine(scales, plot);
   const frame: AxesFrame = { map, plot, massDomainEv, yDomain, topAxis, constants: c, fonts, yView: view };
   const ticks = axisTicks(frame);

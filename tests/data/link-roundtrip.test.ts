@@ -98,7 +98,7 @@ const figure: fc.Arbitrary<Figure> = fc.record({
   yView: fc.constantFrom("coupling", "normalized", "g-gamma") as fc.Arbitrary<Figure["yView"]>,
   topAxis: fc.constantFrom("none", "fa", "frequency") as fc.Arbitrary<Figure["topAxis"]>,
   grid: fc.boolean(),
-  legend: fc.constantFrom("top-left", "top-right", "bottom-left", "bottom-right", "outside-right", "hidden") as fc.Arbitrary<Figure["legend"]>,
+  legend: fc.constantFrom("auto", "top-left", "top-right", "bottom-left", "bottom-right", "outside-right", "hidden") as fc.Arbitrary<Figure["legend"]>,
   fontPt: fc.double({ min: 4, max: 72, noNaN: true }),
   title: text(40),
 });

@@ -64,7 +64,9 @@ describe("encodeLink / decodeLink", () => {
     const link = encodeLink(defaultProject(), { includeCurves: false });
     const json = new TextDecoder().decode(inflateSync(Buffer.from(link.slice(3), "base64url")));
     const compact = JSON.parse(json) as Record<string, unknown>;
-    expect(Object.keys(compact).sort()).toEqual(["m", "n", "o"]);
+    expect(Object.keys(compact).sort()).toEqual(["f", "m", "n", "o"]);
+    // The demo's figure differs from the frozen v1 base only in its legend: "auto" is newer than the base "bottom-right".
+    expect(compact.f).toEqual({ l: "auto" });
     expect(compact.o).toBe(4);
   });
 

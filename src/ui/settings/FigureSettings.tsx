@@ -22,6 +22,8 @@ const TOP_AXES: { value: TopAxis; label: string }[] = [
   { value: "frequency", label: "frequency [Hz]" },
 ];
 const LEGEND: { value: LegendPlace; label: string }[] = [
+  // The inner corner covering the least of the curves and models (src/plot/legend-place.ts).
+  { value: "auto", label: "Best corner" },
   { value: "top-left", label: "top left" },
   { value: "top-right", label: "top right" },
   { value: "bottom-left", label: "bottom left" },

@@ -1,0 +1,470 @@
+// Automatic legend placement ("auto", legend-place.ts): the inner corner whose legend box covers the least
+// drawn content. The rule is our own (keeping the legend off the data is common practice); the geometry it
+// rests on is checked against brute-force references: path data per the SVG 1.1 grammar (W3C, "Scalable
+// Vector Graphics (SVG) 1.1 (Second Edition)", 2011, §8.3), fills by the nonzero winding rule (same, §11.3
+// 'fill-rule'), line cells by exact segment–cell intersection (the grid walk of Amanatides & Woo, "A fast
+// voxel traversal algorithm for ray tracing", Eurographics 1987, clipped as in Liang & Barsky, ACM TOG 3
+// (1984) 1).
+import { describe, expect, test, vi } from "vitest";
+import fc from "fast-check";
+import { defaultProject } from "../../src/data/demo";
+import type { Curve, LegendPlace, Project, SizePreset } from "../../src/data/types";
+import { pathData, pathDataCompact } from "../../src/plot/decimate";
+import { exportFigureSvg, exportScene, rasterResolution } from "../../src/plot/figure-file";
+import type { LegendCorner } from "../../src/plot/layout";
+import {
+  CROWDED_COVERAGE,
+  LEGEND_CORNERS,
+  OUTSIDE_MIN_PLOT_FRACTION,
+  coveredFraction,
+  emptyGrid,
+  markFill,
+  markSegment,
+  occupancyGrid,
+  parsePathData,
+  pickLegendPlace,
+  type OccupancyGrid,
+} from "../../src/plot/legend-place";
+import { buildScene } from "../../src/plot/scene";
+import type { RectNode, Scene } from "../../src/plot/scene-types";
+import { curve, fixtureProject, model, nodes, parsePath, paths, rng } from "./fixture";
+
+// ------------------------------------------------------------------------------------------------ helpers
+
+function legendBox(scene: Scene): RectNode {
+  const box = scene.layers.find((l) => l.id === "legend")!.nodes[0];
+  if (!box || box.kind !== "rect") throw new Error("no legend box");
+  return box;
+}
+
+/** Which corner of the plot area the legend box sits in (or outside right). */
+function placeOf(scene: Scene): LegendCorner | "outside-right" {
+  const b = legendBox(scene);
+  const p = scene.plot;
+  if (b.x >= p.x + p.w) return "outside-right";
+  const left = b.x + b.w / 2 < p.x + p.w / 2;
+  const top = b.y + b.h / 2 < p.y + p.h / 2;
+  return `${top ? "top" : "bottom"}-${left ? "left" : "right"}`;
+}
+
+/** A closed region (file order) through the given (mass eV, g GeV⁻¹) corners: an invented block of data. */
+function block(id: string, massEv: [number, number], gInvGeV: [number, number], label = `Block ${id} (invented)`): Curve {
+  const [m0, m1] = massEv;
+  const [g0, g1] = gInvGeV;
+  return curve({ id, label, role: "region", keepOrder: true, massEv: Float64Array.from([m0, m1, m1, m0]), gInvGeV: Float64Array.from([g0, g0, g1, g1]) });
+}
+
+/** A slide figure over 10⁻⁷..10⁻² eV × 10⁻¹⁷..10⁻⁹ GeV⁻¹ with the given curves and an "auto" legend. */
+function project(curves: Curve[], preset: SizePreset = "slide", models: Project["models"] = []): Project {
+  const p = fixtureProject();
+  p.curves = curves;
+  p.models = models;
+  p.figure = { ...p.figure, preset, legend: "auto" };
+  return p;
+}
+
+/** The coverage of each corner as the scene builder sees it (the scene's own content and legend box). */
+function coverageOf(scene: Scene): Record<LegendCorner, number> {
+  const b = legendBox(scene);
+  const p = scene.plot;
+  const inset = 0.6 * (scene.layers.find((l) => l.id === "axes")!.nodes.find((n) => n.kind === "text" && n.id?.startsWith("xlabel-")) as { sizePx: number }).sizePx;
+  const boxes = {
+    "top-left": { x: p.x + inset, y: p.y + inset, w: b.w, h: b.h },
+    "top-right": { x: p.x + p.w - inset - b.w, y: p.y + inset, w: b.w, h: b.h },
+    "bottom-left": { x: p.x + inset, y: p.y + p.h - inset - b.h, w: b.w, h: b.h },
+    "bottom-right": { x: p.x + p.w - inset - b.w, y: p.y + p.h - inset - b.h, w: b.w, h: b.h },
+  };
+  return pickLegendPlace({ nodes: [...nodes(scene, "curves"), ...nodes(scene, "models")], plot: p, boxes, outsideFits: () => false }).coverage;
+}
+
+// Far outside the plot on every side, so a block reaching them fills a corner (regions are clipped to the plot).
+const M_LO = 1e-9;
+const M_HI = 1;
+const G_LO = 1e-19;
+const G_HI = 1e-7;
+
+// ------------------------------------------------------------------------------------------ choice in scenes
+
+describe("automatic legend placement in the scene", () => {
+  test("a curve filling the top-right corner sends the legend elsewhere (the first free corner in tie order)", () => {
+    // An exclusion limit at 10⁻¹³ GeV⁻¹ above 10⁻⁴ eV: everything above it, up to the plot top, is filled.
+    const m = Float64Array.from({ length: 50 }, (_, i) => 10 ** (-4 + (3 * i) / 49));
+    const g = Float64Array.from(m, () => 1e-13);
+    const scene = buildScene(project([curve({ id: "x", label: "Limit (invented)", role: "exclusion", massEv: m, gInvGeV: g })]));
+    const cov = coverageOf(scene);
+    expect(cov["top-right"]).toBeGreaterThan(0.95);
+    expect(cov["top-left"]).toBe(0);
+    expect(placeOf(scene)).not.toBe("top-right");
+    // Top-left, bottom-right and bottom-left are all empty: the tie goes to top-left (LEGEND_CORNERS order).
+    expect(placeOf(scene)).toBe("top-left");
+  });
+
+  test("data in every corner but the bottom left puts the legend bottom left", () => {
+    const curves = [
+      block("tr", [1e-4, M_HI], [1e-13, G_HI]),
+      block("tl", [M_LO, 1e-5], [1e-13, G_HI]),
+      block("br", [1e-4, M_HI], [G_LO, 1e-14]),
+    ];
+    const scene = buildScene(project(curves));
+    const cov = coverageOf(scene);
+    for (const c of ["top-right", "top-left", "bottom-right"] as const) expect(cov[c]).toBeGreaterThan(0.9);
+    expect(cov["bottom-left"]).toBe(0);
+    expect(placeOf(scene)).toBe("bottom-left");
+  });
+
+  test("a model band counts as drawn content: a cancelling band fills the bottom right more than the bottom left", () => {
+    const curves = [block("tr", [1e-4, M_HI], [1e-13, G_HI]), block("tl", [M_LO, 1e-5], [1e-13, G_HI])];
+    // Without models both bottom corners are empty and the tie goes to bottom right.
+    expect(placeOf(buildScene(project(curves)))).toBe("bottom-right");
+    // E/N ∈ [1.8, 2.1] contains c_γ = 1.92 (Grilli di Cortona et al., JHEP 01 (2016) 034), so the band reaches
+    // g = 0 and fills everything below its upper edge g ∝ m·|2.1 − c_γ|, which rises to the right (DESIGN.md §4).
+    const band = buildScene(project(curves, "slide", [model({ id: "b", label: "Band", eOverNMin: "1.8", eOverNMax: "2.1" })]));
+    const cov = coverageOf(band);
+    expect(cov["bottom-right"]).toBe(1);
+    expect(cov["bottom-left"]).toBeGreaterThan(0);
+    expect(cov["bottom-left"]).toBeLessThan(CROWDED_COVERAGE);
+    expect(placeOf(band)).toBe("bottom-left");
+  });
+
+  test("the least covered corner wins among partly covered ones", () => {
+    // Blocks of different depth into each corner: the bottom right one is the shallowest.
+    const curves = [
+      block("tr", [3e-4, M_HI], [1e-11, G_HI]),
+      block("tl", [M_LO, 1e-6], [1e-11, G_HI]),
+      block("bl", [M_LO, 1e-6], [G_LO, 1e-15]),
+      block("br", [3e-3, M_HI], [G_LO, 1e-16]),
+    ];
+    const scene = buildScene(project(curves));
+    const cov = coverageOf(scene);
+    const least = LEGEND_CORNERS.reduce((a, b) => (cov[b] < cov[a] ? b : a));
+    expect(least).toBe("bottom-right");
+    expect(cov["bottom-right"]).toBeGreaterThan(0);
+    expect(placeOf(scene)).toBe("bottom-right");
+  });
+
+  test("every corner crowded: outside right on a slide with short labels, the least covered corner on a single column", () => {
+    const curves = [block("all", [M_LO, M_HI], [G_LO, G_HI], "A"), block("b", [1e-4, M_HI], [G_LO, G_HI], "B")];
+    const slide = buildScene(project(curves));
+    expect(placeOf(slide)).toBe("outside-right");
+    const inside = buildScene({ ...project(curves), figure: { ...project(curves).figure, legend: "top-right" } });
+    expect(slide.plot.w).toBeLessThan(inside.plot.w);
+    expect(slide.plot.w).toBeGreaterThanOrEqual(OUTSIDE_MIN_PLOT_FRACTION * slide.widthPx);
+    // Exactly the figure a fixed "outside-right" legend gives.
+    expect(slide).toEqual(buildScene({ ...project(curves), figure: { ...project(curves).figure, legend: "outside-right" } }));
+    // The same content with the demo's seven long labels on the single-column preset (8.6 cm): no room outside.
+    const demo = defaultProject();
+    const crowded = { ...demo, curves: [...demo.curves, block("all", [M_LO, M_HI], [G_LO, G_HI])], figure: { ...demo.figure, preset: "single-column" as const, legend: "auto" as const } };
+    const column = buildScene(crowded);
+    const cov = coverageOf(column);
+    expect(Math.min(...Object.values(cov))).toBeGreaterThan(CROWDED_COVERAGE);
+    expect(placeOf(column)).not.toBe("outside-right");
+    // All four are fully covered here: the tie goes to the first corner.
+    expect(placeOf(column)).toBe(LEGEND_CORNERS[0]);
+  });
+
+  test("an auto legend lands exactly where the chosen fixed corner would put it, and the rest of the figure is unchanged", () => {
+    const p = project([block("tr", [1e-4, M_HI], [1e-13, G_HI]), block("tl", [M_LO, 1e-5], [1e-13, G_HI])]);
+    const auto = buildScene(p);
+    const place = placeOf(auto);
+    expect(place).toBe("bottom-right");
+    const fixed = buildScene({ ...p, figure: { ...p.figure, legend: place as LegendPlace } });
+    expect(auto).toEqual(fixed);
+  });
+
+  test("deterministic: the same scene twice, no Math.random, no dependence on the highlight", () => {
+    const spy = vi.spyOn(Math, "random");
+    try {
+      const p = defaultProject();
+      p.figure.preset = "single-column";
+      const a = buildScene(p);
+      const b = buildScene(p);
+      expect(a).toEqual(b);
+      const hl = buildScene(p, { highlight: { massMinEv: 1e-6, massMaxEv: 1e-3, modelId: p.models[0].id } });
+      expect(legendBox(hl)).toEqual(legendBox(a));
+      expect(spy).not.toHaveBeenCalled();
+    } finally {
+      spy.mockRestore();
+    }
+  });
+
+  test("screen and export pick the same corner at every display resolution (demo and a noisy 20,000-point curve)", () => {
+    const noisy = (() => {
+      const r = rng(11);
+      const n = 20_000;
+      const m = new Float64Array(n);
+      const g = new Float64Array(n);
+      for (let i = 0; i < n; i++) {
+        const x = -7 + (5 * i) / (n - 1);
+        m[i] = 10 ** x;
+        // An invented limit with a deep, noisy dip in the middle of the range.
+        g[i] = 10 ** (-10.5 - 5 * Math.exp(-(((x + 4.5) / 0.8) ** 2)) + 0.6 * (r() - 0.5));
+      }
+      return curve({ id: "noisy", label: "Noisy (invented)", role: "exclusion", massEv: m, gInvGeV: g });
+    })();
+    const projects: Project[] = [defaultProject(), project([noisy, block("br", [1e-4, M_HI], [G_LO, 1e-15])], "slide", [model({ id: "k", eOverNMin: "0" })])];
+    for (const base of projects) {
+      for (const preset of ["slide", "single-column", "double-column", "custom"] as const) {
+        const p = { ...base, figure: { ...base.figure, preset, legend: "auto" as const } };
+        const exported = exportScene(p);
+        const svgBox = /<rect id="legend-box" x="([\d.]+)" y="([\d.]+)"/.exec(exportFigureSvg(p, { embedProject: false }));
+        expect(svgBox && [Number(svgBox[1]), Number(svgBox[2])]).toEqual([legendBox(exported).x, legendBox(exported).y]);
+        for (const resolution of [0.25, 0.75, 1, 1.25, 3, rasterResolution(300)]) {
+          const screen = buildScene(p, { widthPx: exported.widthPx, heightPx: exported.heightPx, resolution, physical: false });
+          expect(legendBox(screen), `${preset} at resolution ${resolution}`).toEqual(legendBox(exported));
+        }
+        // Unthinned drawing (comparisons) picks the same corner as well.
+        expect(legendBox(buildScene(p, { thin: false }))).toEqual(legendBox(exported));
+      }
+    }
+  });
+
+  test("near ties: the scene's own paths at different display resolutions would disagree, the builder never does", () => {
+    // Two invented wavy projections, one the mirror image of the other about the middle of the mass range,
+    // cross the two top corners almost equally; a block fills the lower half.
+    const mirrored = (seed: number) => {
+      const r = rng(seed);
+      const n = 4000;
+      const lm = Float64Array.from({ length: n }, (_, i) => -7 + (2 * i) / (n - 1));
+      const lg = Float64Array.from(lm, (x) => -10 + 0.3 * Math.sin(7 * x) + 0.06 * (r() - 0.5));
+      const left = curve({ id: "a", label: "Left (invented)", role: "projection", massEv: lm.map((x) => 10 ** x), gInvGeV: lg.map((y) => 10 ** y) });
+      const right = curve({ id: "b", label: "Right (invented)", role: "projection", massEv: lm.map((_, i) => 10 ** (-9 - lm[n - 1 - i])), gInvGeV: lg.map((_, i) => 10 ** lg[n - 1 - i]) });
+      return project([left, right, block("low", [M_LO, M_HI], [G_LO, 1e-13])]);
+    };
+    let disagreements = 0;
+    for (let seed = 1; seed <= 30; seed++) {
+      const p = mirrored(seed);
+      const boxes = new Set<string>();
+      const own = new Set<string>();
+      for (const resolution of [0.25, 0.75, 1, 1.25, 2, 3, 6.25]) {
+        const scene = buildScene(p, { resolution, physical: false });
+        boxes.add(JSON.stringify(legendBox(scene)));
+        const cov = coverageOf(scene);
+        own.add(LEGEND_CORNERS.reduce((a, b) => (cov[b] < cov[a] ? b : a)));
+      }
+      expect(boxes.size, `seed ${seed}`).toBe(1);
+      if (own.size > 1) disagreements++;
+    }
+    // Without this the check above would be vacuous (thinning that no longer depends on resolution would end it).
+    expect(disagreements, "no near tie among the seeds: the test no longer exercises the fixed placement resolution").toBeGreaterThan(0);
+  });
+
+  test("the demo on the single-column preset (7 entries) gets the corner that covers least of it", () => {
+    const p = defaultProject();
+    expect(p.figure.legend).toBe("auto");
+    p.figure.preset = "single-column";
+    const scene = buildScene(p);
+    expect(scene.layers.find((l) => l.id === "legend")!.nodes.filter((n) => n.kind === "text")).toHaveLength(7);
+    const cov = coverageOf(scene);
+    const place = placeOf(scene);
+    expect(place).not.toBe("outside-right");
+    for (const c of LEGEND_CORNERS) expect(cov[place as LegendCorner]).toBeLessThanOrEqual(cov[c]);
+    // Less than the old default corner (bottom right), which sat on the model lines and the cancelling band.
+    expect(cov[place as LegendCorner]).toBeLessThan(cov["bottom-right"]);
+  });
+
+  test("no entries, no legend: auto with nothing to list draws no box", () => {
+    expect(buildScene(project([])).layers.find((l) => l.id === "legend")!.nodes).toHaveLength(0);
+  });
+});
+
+// ---------------------------------------------------------------------------------------- pure choice rule
+
+describe("pickLegendPlace", () => {
+  const plot = { x: 0, y: 0, w: 200, h: 100 };
+  const boxes = {
+    "top-left": { x: 4, y: 4, w: 60, h: 30 },
+    "top-right": { x: 136, y: 4, w: 60, h: 30 },
+    "bottom-left": { x: 4, y: 66, w: 60, h: 30 },
+    "bottom-right": { x: 136, y: 66, w: 60, h: 30 },
+  };
+  const rect = (x: number, y: number, w: number, h: number) => ({ kind: "path" as const, d: `M${x} ${y}H${x + w}V${y + h}H${x}Z`, fill: "#000" });
+
+  test("ties go top-right, top-left, bottom-right, bottom-left", () => {
+    expect(LEGEND_CORNERS).toEqual(["top-right", "top-left", "bottom-right", "bottom-left"]);
+    const none = pickLegendPlace({ nodes: [], plot, boxes, outsideFits: () => true });
+    expect(none).toMatchObject({ place: "top-right", crowded: false });
+    expect(pickLegendPlace({ nodes: [rect(100, 0, 100, 50)], plot, boxes, outsideFits: () => true }).place).toBe("top-left");
+    expect(pickLegendPlace({ nodes: [rect(0, 0, 200, 50)], plot, boxes, outsideFits: () => true }).place).toBe("bottom-right");
+    expect(pickLegendPlace({ nodes: [rect(0, 0, 200, 50), rect(100, 50, 100, 50)], plot, boxes, outsideFits: () => true }).place).toBe("bottom-left");
+  });
+
+  test("crowded above the threshold: outside right when it fits, else the least covered corner; room is asked only then", () => {
+    const fits = vi.fn(() => true);
+    // Everything filled except a 20 × 100 strip on the left: top-left and bottom-left are 16/60 uncovered.
+    const most = [rect(20, 0, 180, 100)];
+    const a = pickLegendPlace({ nodes: most, plot, boxes, outsideFits: fits });
+    expect(a.coverage["top-left"]).toBeCloseTo(44 / 60, 12);
+    expect(a).toMatchObject({ place: "outside-right", crowded: true });
+    const b = pickLegendPlace({ nodes: most, plot, boxes, outsideFits: () => false });
+    expect(b.place).toBe("top-left");
+    fits.mockClear();
+    // 20 of the box's 60 px width covered = 1/3 < 35 %: not crowded, no question about room.
+    const c = pickLegendPlace({ nodes: [rect(44, 0, 156, 100)], plot, boxes, outsideFits: fits });
+    expect(c.coverage["top-left"]).toBeCloseTo(1 / 3, 12);
+    expect(c).toMatchObject({ place: "top-left", crowded: false });
+    expect(fits).not.toHaveBeenCalled();
+  });
+
+  test("lines count by the cells they cross, unpainted nodes and text not at all", () => {
+    const line = { kind: "path" as const, d: "M0 10H200", stroke: "#000", strokeWidth: 1, fill: "none" };
+    const r = pickLegendPlace({ nodes: [line], plot, boxes, outsideFits: () => false });
+    // The row of cells 8..12 px: 4 of the box's 30 px height (the box spans y 4..34).
+    expect(r.coverage["top-left"]).toBeCloseTo(4 / 30, 12);
+    expect(r.coverage["bottom-left"]).toBe(0);
+    expect(r.place).toBe("bottom-right");
+    const ghost = [
+      { ...line, stroke: "none" },
+      { kind: "path" as const, d: "M0 0H200V100H0Z", fill: "none" },
+      { kind: "path" as const, d: "M0 0H200V100H0Z", fill: "#000", fillOpacity: 0 },
+      { kind: "text" as const, x: 10, y: 10, runs: [{ text: "hello" }], sizePx: 40, anchor: "start" as const, baseline: "middle" as const },
+    ];
+    expect(Object.values(pickLegendPlace({ nodes: ghost, plot, boxes, outsideFits: () => false }).coverage)).toEqual([0, 0, 0, 0]);
+  });
+});
+
+// ------------------------------------------------------------------------------------------ geometry pieces
+
+/** Cells of the grid a segment meets (closed cells), by clipping it to each cell: the brute-force reference. */
+function cellsMetBySegment(g: OccupancyGrid, xa: number, ya: number, xb: number, yb: number): Set<number> {
+  const out = new Set<number>();
+  for (let r = 0; r < g.rows; r++) {
+    for (let c = 0; c < g.cols; c++) {
+      const x0 = g.x0 + c * g.cellPx;
+      const y0 = g.y0 + r * g.cellPx;
+      let t0 = 0;
+      let t1 = 1;
+      const dx = xb - xa;
+      const dy = yb - ya;
+      const ok = ([[-dx, xa - x0], [dx, x0 + g.cellPx - xa], [-dy, ya - y0], [dy, y0 + g.cellPx - ya]] as const).every(([p, q]) => {
+        if (p === 0) return q >= 0;
+        const t = q / p;
+        if (p < 0) t0 = Math.max(t0, t);
+        else t1 = Math.min(t1, t);
+        return true;
+      });
+      if (ok && t0 <= t1) out.add(r * g.cols + c);
+    }
+  }
+  return out;
+}
+
+/** Winding number of a closed polygon around a point (the nonzero rule's count, by upward/downward crossings). */
+function winding(xs: number[], ys: number[], px: number, py: number): number {
+  let w = 0;
+  for (let i = 0; i < xs.length; i++) {
+    const j = (i + 1) % xs.length;
+    const [xa, ya, xb, yb] = [xs[i], ys[i], xs[j], ys[j]];
+    if ((ya <= py) !== (yb <= py)) {
+      const x = xa + ((py - ya) * (xb - xa)) / (yb - ya);
+      if (x < px) w += yb > ya ? 1 : -1;
+    }
+  }
+  return w;
+}
+
+function marked(g: OccupancyGrid): Set<number> {
+  const s = new Set<number>();
+  g.cells.forEach((v, i) => v && s.add(i));
+  return s;
+}
+
+describe("occupancy grid", () => {
+  const plot = { x: 10.3, y: 5.7, w: 61, h: 43 };
+  const coord = (lo: number, span: number) => fc.double({ min: lo - 20, max: lo + span + 20, noNaN: true });
+
+  test("a segment marks exactly the cells it meets (property, 300 random segments in and around the grid)", () => {
+    fc.assert(
+      fc.property(coord(plot.x, plot.w), coord(plot.y, plot.h), coord(plot.x, plot.w), coord(plot.y, plot.h), (xa, ya, xb, yb) => {
+        const g = emptyGrid(plot, 4);
+        markSegment(g, xa, ya, xb, yb);
+        expect(marked(g)).toEqual(cellsMetBySegment(g, xa, ya, xb, yb));
+      }),
+      { numRuns: 300, seed: 42 },
+    );
+  });
+
+  test("a fill marks exactly the cells whose centre has nonzero winding (property, random self-crossing polygons)", () => {
+    const pt = fc.tuple(coord(plot.x, plot.w), coord(plot.y, plot.h));
+    fc.assert(
+      fc.property(fc.array(pt, { minLength: 3, maxLength: 12 }), (pts) => {
+        const g = emptyGrid(plot, 4);
+        const xs = pts.map((p) => p[0]);
+        const ys = pts.map((p) => p[1]);
+        markFill(g, [{ xs, ys, closed: false }]);
+        const expected = new Set<number>();
+        for (let r = 0; r < g.rows; r++) for (let c = 0; c < g.cols; c++) if (winding(xs, ys, g.x0 + (c + 0.5) * 4, g.y0 + (r + 0.5) * 4) !== 0) expected.add(r * g.cols + c);
+        expect(marked(g)).toEqual(expected);
+      }),
+      { numRuns: 300, seed: 7 },
+    );
+  });
+
+  test("nonzero, not even-odd: a square drawn twice the same way round stays filled (SVG 1.1 §11.3)", () => {
+    const g = occupancyGrid([{ kind: "path", d: "M0 0H40V40H0ZM0 0H40V40H0Z", fill: "#000" }], { x: 0, y: 0, w: 40, h: 40 }, 4);
+    expect(g.cells.every((v) => v === 1)).toBe(true);
+    const holed = occupancyGrid([{ kind: "path", d: "M0 0H40V40H0ZM10 10V30H30V10Z", fill: "#000" }], { x: 0, y: 0, w: 40, h: 40 }, 4);
+    // The inner square runs the other way round: a hole of 20 px, five 4-px cells each way.
+    expect(holed.cells.reduce((a, v) => a + v, 0)).toBe(100 - 25);
+  });
+
+  test("covered fraction weighs partly covered cells by their overlap", () => {
+    const g = emptyGrid({ x: 0, y: 0, w: 40, h: 40 }, 4);
+    for (let r = 0; r < g.rows; r++) for (let c = 0; c < 5; c++) g.cells[r * g.cols + c] = 1; // x < 20 px
+    expect(coveredFraction(g, { x: 0, y: 0, w: 40, h: 40 })).toBe(0.5);
+    expect(coveredFraction(g, { x: 10, y: 3, w: 20, h: 17 })).toBeCloseTo(0.5, 12);
+    expect(coveredFraction(g, { x: 18, y: 0, w: 4, h: 4 })).toBeCloseTo(0.5, 12);
+    // Outside the grid counts as empty.
+    expect(coveredFraction(g, { x: -40, y: 0, w: 80, h: 40 })).toBeCloseTo(0.25, 12);
+  });
+});
+
+describe("parsePathData", () => {
+  test("absolute and relative commands, implicit line-tos after M, H/V, Z back to the start (SVG 1.1 §8.3)", () => {
+    expect(parsePathData("M1 2L3 4 5 6H7V8Z")).toEqual([{ xs: [1, 3, 5, 7, 7], ys: [2, 4, 6, 6, 8], closed: true }]);
+    expect(parsePathData("m1 2 3 4l.5-.25h-1v2zl1 1")).toEqual([
+      { xs: [1, 4, 4.5, 3.5, 3.5], ys: [2, 6, 5.75, 5.75, 7.75], closed: true },
+      { xs: [1, 2], ys: [2, 3], closed: false },
+    ]);
+    expect(parsePathData("M0,0 C1,1 2,2 3,0 Q4 4 5 0 A1 1 0 0 1 6 0")).toEqual([{ xs: [0, 3, 5, 6], ys: [0, 0, 0, 0], closed: false }]);
+    expect(parsePathData("M1e1 2E-1L-1.5e+1 .5")).toEqual([{ xs: [10, -15], ys: [0.2, 0.5], closed: false }]);
+    expect(parsePathData("M1 2L3 4 x 5")).toEqual([{ xs: [1, 3], ys: [2, 4], closed: false }]);
+    expect(parsePathData("")).toEqual([]);
+  });
+
+  test("reads back the scene's own path forms: compact curve paths and absolute paths (property, random polylines)", () => {
+    fc.assert(
+      fc.property(fc.array(fc.tuple(fc.integer({ min: -50_000, max: 90_000 }), fc.integer({ min: -50_000, max: 90_000 })), { minLength: 1, maxLength: 40 }), fc.boolean(), (pts, closed) => {
+        const poly = { xs: Float64Array.from(pts, (p) => p[0] / 100), ys: Float64Array.from(pts, (p) => p[1] / 100), n: pts.length, closed };
+        // The compact form drops repeated vertices, the absolute form keeps them.
+        for (const [d, dropsRepeats] of [
+          [pathDataCompact(poly), true],
+          [pathData(poly), false],
+        ] as const) {
+          const [sub] = parsePathData(d);
+          expect(sub.closed).toBe(closed);
+          const keep = dropsRepeats ? pts.filter((p, i) => i === 0 || p[0] !== pts[i - 1][0] || p[1] !== pts[i - 1][1]) : pts;
+          expect(sub.xs.map((x) => Math.round(x * 100))).toEqual(keep.map((p) => p[0]));
+          expect(sub.ys.map((y) => Math.round(y * 100))).toEqual(keep.map((p) => p[1]));
+        }
+      }),
+      { numRuns: 200, seed: 3 },
+    );
+  });
+
+  test("agrees with the plot tests' reference reader on every path of the demo scene", () => {
+    const scene = buildScene(defaultProject());
+    const all = paths(scene);
+    expect(all.length).toBeGreaterThan(10);
+    for (const node of all) {
+      const ref = parsePath(node.d);
+      const got = parsePathData(node.d);
+      expect(got.length).toBe(ref.length);
+      got.forEach((s, i) => {
+        expect(s.closed).toBe(ref[i].closed);
+        expect(s.xs.length).toBe(ref[i].points.length);
+        s.xs.forEach((x, k) => expect(x).toBeCloseTo(ref[i].points[k][0], 9));
+        s.ys.forEach((y, k) => expect(y).toBeCloseTo(ref[i].points[k][1], 9));
+      });
+    }
+  });
+});

@@ -1,0 +1,44 @@
+// The Legend setting of the Figure section driven like a user: "Best corner" (auto) is offered first, is
+// what a new project shows, and choosing a place goes through the store with undo.
+import { beforeEach, describe, expect, test } from "vitest";
+import { render, screen, within } from "@testing-library/react";
+import userEvent from "@testing-library/user-event";
+import { defaultProject } from "../../src/data/demo";
+import { FigureSettings } from "../../src/ui/settings/FigureSettings";
+import { useAxband } from "../../src/ui/store";
+import { blankProject, resetStore } from "./helpers";
+
+beforeEach(() => resetStore());
+
+const legend = () => useAxband.getState().project.figure.legend;
+
+describe("Legend setting", () => {
+  test('offers "Best corner" (auto) first, then the fixed corners, outside right and hidden', () => {
+    render(<FigureSettings />);
+    const select = screen.getByLabelText("Legend");
+    const options = within(select).getAllByRole("option") as HTMLOptionElement[];
+    expect(options.map((o) => o.value)).toEqual(["auto", "top-left", "top-right", "bottom-left", "bottom-right", "outside-right", "hidden"]);
+    expect(options[0]).toHaveTextContent("Best corner");
+  });
+
+  test('a new project shows "Best corner"', () => {
+    resetStore(defaultProject());
+    render(<FigureSettings />);
+    expect(screen.getByLabelText("Legend")).toHaveValue("auto");
+    expect((screen.getByRole("option", { name: "Best corner" }) as HTMLOptionElement).selected).toBe(true);
+  });
+
+  test("choosing a fixed corner and back to Best corner updates the figure; undo restores the previous place", async () => {
+    const user = userEvent.setup();
+    resetStore({ ...blankProject(), figure: { ...blankProject().figure, legend: "auto" } });
+    render(<FigureSettings />);
+    const select = screen.getByLabelText("Legend");
+    await user.selectOptions(select, "bottom-left");
+    expect(legend()).toBe("bottom-left");
+    await user.selectOptions(select, "Best corner");
+    expect(legend()).toBe("auto");
+    expect(select).toHaveValue("auto");
+    useAxband.getState().undo();
+    expect(legend()).toBe("bottom-left");
+  });
+});
