@@ -1,6 +1,6 @@
 // The SVG string writer: a scene in, one self-contained, deterministic SVG document out (no external fonts,
 // images or CSS; text kept as text; every text and attribute value escaped; the project in <metadata>).
-import type { Scene, SceneNode, TextNode } from "./scene-types";
+import type { Scene, SceneLayer, SceneNode, TextNode } from "./scene-types";
 import { safeColour } from "./format";
 import { placeRuns } from "./text";
 import { isRecentPath } from "./path-writer";
@@ -59,19 +59,21 @@ function attr(name: string, value: string | number | undefined): string {
   return ` ${name}="${typeof value === "number" ? fmt(value) : escapeXml(value)}"`;
 }
 
-function dataAttrs(data: Record<string, string> | undefined): string {
-  if (!data) return "";
-  let s = "";
-  for (const key of Object.keys(data).sort()) {
-    if (!DATA_KEY.test(key)) continue;
-    s += ` data-${key}="${escapeXml(String(data[key]))}"`;
-  }
-  return s;
-}
-
 function paint(value: string | undefined): string | undefined {
   if (value === undefined) return undefined;
   return value === "none" ? "none" : safeColour(value, "#000000");
+}
+
+// The same node ids come back on every frame: their safe forms are remembered (bounded, cleared when full).
+const safeIds = new Map<string, string>();
+function safeId(id: string): string {
+  let out = safeIds.get(id);
+  if (out === undefined) {
+    if (safeIds.size > 10_000) safeIds.clear();
+    out = id.replace(ID_SAFE, "_");
+    safeIds.set(id, out);
+  }
+  return out;
 }
 
 /** Ids are written as prefix + the node's id, restricted to [A-Za-z0-9_-]; duplicates get a counter. */
@@ -80,11 +82,35 @@ class Ids {
   constructor(private prefix: string) {}
   get(id: string | undefined): string | undefined {
     if (!id) return undefined;
-    const base = this.prefix + id.replace(ID_SAFE, "_");
+    const base = this.prefix + safeId(id);
     const n = this.used.get(base) ?? 0;
     this.used.set(base, n + 1);
     return n === 0 ? base : `${base}-${n + 1}`;
   }
+}
+
+/** The element ids of a scene as written: the plot clip path, each layer group, each node (undefined: none). */
+export interface SceneIds {
+  clip: string;
+  layers: (string | undefined)[];
+  nodes: (string | undefined)[][];
+}
+
+/**
+ * Element ids in document order: prefix + the id with characters outside [A-Za-z0-9_-] replaced by "_",
+ * repeats suffixed "-2", "-3"… (ids stay unique even when labels are not).
+ * @param prefix prefix of every id. @default ""
+ */
+export function sceneIds(scene: Scene, prefix = ""): SceneIds {
+  const ids = new Ids(prefix.replace(ID_SAFE, "_"));
+  const clip = ids.get("plot-clip") as string;
+  const layers: (string | undefined)[] = [];
+  const nodes: (string | undefined)[][] = [];
+  for (const layer of scene.layers) {
+    layers.push(ids.get(layer.id));
+    nodes.push(layer.nodes.map((n) => ids.get(n.id)));
+  }
+  return { clip, layers, nodes };
 }
 
 /** One attribute as written: SVG name and its value as text (unescaped; the writer escapes). */
@@ -105,7 +131,7 @@ function pushData(out: SvgAttribute[], data: Record<string, string> | undefined)
 
 /**
  * The attributes of a scene node exactly as the SVG writer writes them (after the id): presentation
- * attributes with safe colours, numbers with 2 decimals, round joins on strokes, the text baseline turned
+ * attributes with safe colours, numbers with 2 decimals, bevel joins on strokes, the text baseline turned
  * into an explicit y, and data-* attributes with keys limited to [a-z0-9-]. The on-screen renderer should
  * set the same attributes (React: camelCase names, xmlSpace) so screen and export agree.
  */
@@ -150,6 +176,15 @@ export function nodeAttributes(n: SceneNode): SvgAttribute[] {
   return out;
 }
 
+/** The attributes of a layer's <g> as written: its id, the plot clip when the layer is clipped, data-* attributes. */
+export function layerAttributes(layer: SceneLayer, id: string | undefined, clipId: string): SvgAttribute[] {
+  const out: SvgAttribute[] = [];
+  push(out, "id", id);
+  if (layer.clip) out.push(["clip-path", `url(#${clipId})`]);
+  pushData(out, layer.data);
+  return out;
+}
+
 /** The tspans of a text node as written: attributes (dy, font-size, font-style) and text of each run. */
 export function textSpans(n: TextNode): { attrs: SvgAttribute[]; text: string }[] {
   return placeRuns(n).runs.map((r) => {
@@ -167,9 +202,8 @@ function attrsText(attrs: SvgAttribute[]): string {
   return s;
 }
 
-function nodeEl(n: SceneNode, ids: Ids): string {
+function nodeEl(n: SceneNode, id: string | undefined): string {
   const tag = n.kind === "path" ? "path" : n.kind === "rect" ? "rect" : "text";
-  const id = ids.get(n.id);
   const head = `<${tag}${id ? ` id="${escapeXml(id)}"` : ""}${attrsText(nodeAttributes(n))}`;
   if (n.kind !== "text") return head + "/>";
   let inner = "";
@@ -183,9 +217,8 @@ function nodeEl(n: SceneNode, ids: Ids): string {
  * clip path for the plot area on the clipped layers. Same scene and options give the same bytes.
  */
 export function writeSvg(scene: Scene, opts: WriteSvgOpts = {}): string {
-  const prefix = (opts.idPrefix ?? "").replace(ID_SAFE, "_");
-  const ids = new Ids(prefix);
-  const clipId = ids.get("plot-clip") as string;
+  const ids = sceneIds(scene, opts.idPrefix ?? "");
+  const clipId = ids.clip;
   const { plot } = scene;
   const out: string[] = [];
   out.push('<?xml version="1.0" encoding="UTF-8"?>\n');
@@ -200,12 +233,11 @@ export function writeSvg(scene: Scene, opts: WriteSvgOpts = {}): string {
   );
   if (opts.metadata !== undefined) out.push(`<metadata>${escapeXml(opts.metadata)}</metadata>\n`);
   out.push(`<defs><clipPath id="${clipId}"><rect x="${fmt(plot.x)}" y="${fmt(plot.y)}" width="${fmt(plot.w)}" height="${fmt(plot.h)}"/></clipPath></defs>\n`);
-  for (const layer of scene.layers) {
-    const gid = ids.get(layer.id);
-    out.push(`<g id="${gid}"${layer.clip ? ` clip-path="url(#${clipId})"` : ""}${dataAttrs(layer.data)}>`);
-    for (const node of layer.nodes) out.push("\n" + nodeEl(node, ids));
+  scene.layers.forEach((layer, li) => {
+    out.push(`<g${attrsText(layerAttributes(layer, ids.layers[li], clipId))}>`);
+    layer.nodes.forEach((node, ni) => out.push("\n" + nodeEl(node, ids.nodes[li][ni])));
     out.push(layer.nodes.length ? "\n</g>\n" : "</g>\n");
-  }
+  });
   out.push("</svg>\n");
   return out.join("");
 }

@@ -1,48 +1,13 @@
 // Puts a Scene into an <svg> as DOM elements, node for node and attribute for attribute as writeSvg writes it
-// (the plot core's nodeAttributes and textSpans), updating in place from frame to frame: the figure's hot path.
+// (the plot core's sceneIds, layerAttributes, nodeAttributes and textSpans), updating in place from frame to
+// frame: the figure's hot path.
 // Why not React elements: reconciling ~150 scene nodes took about as long again as building the scene
 // (bench/redraw.mjs, renderer "react" against this one), and React cannot skip unchanged text positions.
-import type { Scene, SceneLayer, SceneNode } from "../../plot/scene-types";
-import { fmt, nodeAttributes, textSpans } from "../../plot/svg";
+import type { Scene, SceneNode } from "../../plot/scene-types";
+import { fmt, layerAttributes, nodeAttributes, sceneIds, textSpans } from "../../plot/svg";
 
 const SVG_NS = "http://www.w3.org/2000/svg";
 const XML_NS = "http://www.w3.org/XML/1998/namespace";
-// The writer's guards for ids and data keys (its own are module-private).
-const ID_SAFE = /[^A-Za-z0-9_-]/g;
-const DATA_KEY = /^[a-z0-9-]+$/;
-
-// The same node ids come back every frame: their safe forms are remembered (bounded, cleared when full).
-const safeIds = new Map<string, string>();
-function safeId(id: string): string {
-  let s = safeIds.get(id);
-  if (s === undefined) {
-    if (safeIds.size > 10_000) safeIds.clear();
-    s = id.replace(ID_SAFE, "_");
-    safeIds.set(id, s);
-  }
-  return s;
-}
-
-/** Element ids in document order as the writer gives them: prefix + safe id, repeats get "-2", "-3"… */
-export function sceneIds(scene: Scene, prefix: string): { clip: string; layers: (string | undefined)[]; nodes: (string | undefined)[][] } {
-  const used = new Map<string, number>();
-  const safePrefix = prefix.replace(ID_SAFE, "_");
-  const get = (id: string | undefined) => {
-    if (!id) return undefined;
-    const base = safePrefix + safeId(id);
-    const n = used.get(base) ?? 0;
-    used.set(base, n + 1);
-    return n === 0 ? base : `${base}-${n + 1}`;
-  };
-  const clip = get("plot-clip") as string;
-  const layers: (string | undefined)[] = [];
-  const nodes: (string | undefined)[][] = [];
-  for (const layer of scene.layers) {
-    layers.push(get(layer.id));
-    nodes.push(layer.nodes.map((n) => get(n.id)));
-  }
-  return { clip, layers, nodes };
-}
 
 /** One element kept from frame to frame, with the attribute values last written to it. */
 interface Slot {
@@ -76,14 +41,6 @@ function syncAttributes(el: Element, last: Map<string, string>, next: [string, s
     else el.removeAttribute(k);
     last.delete(k);
   }
-}
-
-function layerAttributes(layer: SceneLayer, id: string | undefined, clipId: string): [string, string][] {
-  const out: [string, string][] = [];
-  if (id) out.push(["id", id]);
-  if (layer.clip) out.push(["clip-path", `url(#${clipId})`]);
-  if (layer.data) for (const k of Object.keys(layer.data)) if (DATA_KEY.test(k)) out.push([`data-${k}`, String(layer.data[k])]);
-  return out;
 }
 
 function fillText(el: SVGElement, spans: ReturnType<typeof textSpans>): void {
