@@ -1,5 +1,5 @@
 // The scene: a plain, serialisable description of one figure (layers of paths, rects and text) that both
-// the on-screen renderer (React SVG) and the SVG string writer (export, CLI) draw without further logic.
+// the on-screen renderer (SceneSvg, scene-dom.ts) and the SVG string writer (export, CLI) draw without further logic.
 
 /** One run of text; math labels are sequences of runs with real sub/superscripts. */
 export interface TextRun {

@@ -1,5 +1,5 @@
 // The scene builder: a project in, the complete figure out as plain layers of paths, rects and text, drawn
-// the same way on screen (React SVG) and in the exported SVG (writeSvg). All defaults of a figure live here.
+// the same way on screen (SceneSvg and scene-dom.ts) and in the exported SVG (writeSvg). All defaults of a figure live here.
 import { bandCancels } from "../physics/coupling";
 import type { Curve, LegendPlace, Model, Project, YView } from "../data/types";
 import type { PathNode, Scene, SceneLayer, SceneNode, ScaleConfig } from "./scene-types";

@@ -1,4 +1,4 @@
-// The interactive figure: the scene of the project (the same one the export writes) drawn as React SVG,
+// The interactive figure: the scene of the project (the same one the export writes) drawn by SceneSvg (scene-dom.ts),
 // with wheel zoom about the cursor, drag to pan, keyboard zoom/pan, double-click reset and a hover point.
 // Zoom and pan go through setView (one undo step per burst) and are batched to one commit per frame.
 // Big curves whose drawing preparation is still being built in the worker are left out, with a note.
