@@ -1,4 +1,4 @@
-// The Legend setting of the Figure section driven like a user: "Best corner" (auto) is offered first, is
+// The Legend setting of the Figure section driven like a user: "best corner (automatic)" (auto) is offered first, is
 // what a new project shows, and choosing a place goes through the store with undo.
 import { beforeEach, describe, expect, test } from "vitest";
 import { render, screen, within } from "@testing-library/react";
@@ -13,29 +13,29 @@ beforeEach(() => resetStore());
 const legend = () => useAxband.getState().project.figure.legend;
 
 describe("Legend setting", () => {
-  test('offers "Best corner" (auto) first, then the fixed corners, outside right and hidden', () => {
+  test('offers "best corner (automatic)" (auto) first, then the fixed corners, outside right and hidden', () => {
     render(<FigureSettings />);
     const select = screen.getByLabelText("Legend");
     const options = within(select).getAllByRole("option") as HTMLOptionElement[];
     expect(options.map((o) => o.value)).toEqual(["auto", "top-left", "top-right", "bottom-left", "bottom-right", "outside-right", "hidden"]);
-    expect(options[0]).toHaveTextContent("Best corner");
+    expect(options[0]).toHaveTextContent("best corner (automatic)");
   });
 
-  test('a new project shows "Best corner"', () => {
+  test('a new project shows "best corner (automatic)"', () => {
     resetStore(defaultProject());
     render(<FigureSettings />);
     expect(screen.getByLabelText("Legend")).toHaveValue("auto");
-    expect((screen.getByRole("option", { name: "Best corner" }) as HTMLOptionElement).selected).toBe(true);
+    expect((screen.getByRole("option", { name: "best corner (automatic)" }) as HTMLOptionElement).selected).toBe(true);
   });
 
-  test("choosing a fixed corner and back to Best corner updates the figure; undo restores the previous place", async () => {
+  test("choosing a fixed corner and back to best corner updates the figure; undo restores the previous place", async () => {
     const user = userEvent.setup();
     resetStore({ ...blankProject(), figure: { ...blankProject().figure, legend: "auto" } });
     render(<FigureSettings />);
     const select = screen.getByLabelText("Legend");
     await user.selectOptions(select, "bottom-left");
     expect(legend()).toBe("bottom-left");
-    await user.selectOptions(select, "Best corner");
+    await user.selectOptions(select, "best corner (automatic)");
     expect(legend()).toBe("auto");
     expect(select).toHaveValue("auto");
     useAxband.getState().undo();

@@ -23,7 +23,7 @@ const TOP_AXES: { value: TopAxis; label: string }[] = [
 ];
 const LEGEND: { value: LegendPlace; label: string }[] = [
   // The inner corner covering the least of the curves and models (src/plot/legend-place.ts).
-  { value: "auto", label: "Best corner" },
+  { value: "auto", label: "best corner (automatic)" },
   { value: "top-left", label: "top left" },
   { value: "top-right", label: "top right" },
   { value: "bottom-left", label: "bottom left" },
