@@ -98,6 +98,9 @@ const PREPARING_STYLE = {
   border: "1px solid var(--line)",
   borderRadius: 4,
   pointerEvents: "none",
+  // Centred at the top of the plot: the legend sits in a corner.
+  transform: "translateX(-50%)",
+  maxWidth: "60%",
 } as const;
 
 /** Thin crosshair at the hover point (screen only; the export has none). Re-renders alone on hover. */
@@ -336,7 +339,7 @@ export function FigureView() {
           <Crosshair scene={scene} />
         </SceneSvg>
         {waiting.length > 0 ? (
-          <p className="note figure-preparing" data-testid="figure-preparing" aria-live="polite" style={{ ...PREPARING_STYLE, left: `${((plot.x + 8) / scene.widthPx) * 100}%`, top: `${((plot.y + 8) / scene.heightPx) * 100}%` }}>
+          <p className="note figure-preparing" data-testid="figure-preparing" aria-live="polite" style={{ ...PREPARING_STYLE, left: `${((plot.x + plot.w / 2) / scene.widthPx) * 100}%`, top: `${((plot.y + 8) / scene.heightPx) * 100}%` }}>
             {preparingNote(waiting)}
           </p>
         ) : null}
