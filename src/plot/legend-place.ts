@@ -1,7 +1,10 @@
 // Automatic legend placement: the inner corner where the legend box covers the least drawn content, read
 // from the scene's curve and model paths on a coarse occupancy grid over the plot area (our own rule).
+import type { Curve } from "../data/types";
 import type { SceneNode } from "./scene-types";
 import type { LegendCorner, PlotRect } from "./layout";
+import { drawsSorted, preparedOf } from "./curves";
+import { viewArrays, type PreparedCurve } from "./decimate";
 
 /** Corners in the order ties are broken: the first of equally covered corners wins. */
 export const LEGEND_CORNERS: readonly LegendCorner[] = ["top-right", "top-left", "bottom-right", "bottom-left"];
@@ -29,6 +32,50 @@ export const OUTSIDE_MIN_PLOT_FRACTION = 0.6;
  * under a cell, so the cells a curve crosses hardly differ from those of the finer drawn path.
  */
 export const PLACEMENT_RESOLUTION = 0.5;
+
+/**
+ * Most points of a curve drawn in file order (or a region) that the placement thins itself. Thinning such a
+ * curve at a new zoom level costs time in proportion to its points (run thinning, cached per level); the
+ * placement's own level would double that for every big region on every such zoom. Beyond this many points
+ * the placement reads the curve's most important points instead (see {@link placementCurve}).
+ */
+export const PLACEMENT_MAX_POINTS = 4_000;
+
+// Per prepared curve and y-view slope: the arrays of its PLACEMENT_MAX_POINTS most important points, kept so
+// that the plot cache (keyed by array identity) prepares them once.
+const standIns = new WeakMap<PreparedCurve, Map<number, { massEv: Float64Array; gInvGeV: Float64Array }>>();
+
+/**
+ * The curve the placement reads in place of `curve`: the curve itself when it is drawn in mass order or has
+ * at most PLACEMENT_MAX_POINTS usable points; otherwise the same curve reduced to its PLACEMENT_MAX_POINTS
+ * most important points in the y view of `slope` (the Douglas–Peucker order the drawing already has, in file
+ * order, ends included), which outlines it far finer than the 4 px cells need. Depends on the data and the
+ * view only, never on the resolution, so screen and export still agree.
+ */
+export function placementCurve<C extends Pick<Curve, "role" | "keepOrder" | "massEv" | "gInvGeV">>(curve: C, slope: number): C {
+  if (drawsSorted(curve)) return curve;
+  const prep = preparedOf(curve);
+  if (prep.n <= PLACEMENT_MAX_POINTS) return curve;
+  let bySlope = standIns.get(prep);
+  if (!bySlope) {
+    bySlope = new Map();
+    standIns.set(prep, bySlope);
+  }
+  let arrays = bySlope.get(slope);
+  if (!arrays) {
+    const order = viewArrays(prep, slope, curve.role === "region").order as Int32Array;
+    const keep = order.slice(0, PLACEMENT_MAX_POINTS).sort();
+    const massEv = new Float64Array(keep.length);
+    const gInvGeV = new Float64Array(keep.length);
+    for (let k = 0; k < keep.length; k++) {
+      massEv[k] = 10 ** prep.lm[keep[k]];
+      gInvGeV[k] = 10 ** prep.lg[keep[k]];
+    }
+    arrays = { massEv, gInvGeV };
+    bySlope.set(slope, arrays);
+  }
+  return { ...curve, massEv: arrays.massEv, gInvGeV: arrays.gInvGeV };
+}
 
 /** Cells of the plot area that hold drawn content: 1 where a line crosses the cell or the cell's centre is inside a fill. */
 export interface OccupancyGrid {

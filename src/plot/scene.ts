@@ -8,10 +8,10 @@ import { curveGeometry } from "./curves";
 import { dashFor, plainOrScientificRuns, powerOfTenRuns, r2, safeColour, unitInterval } from "./format";
 import { computeLayout, cornerLegendOrigin, fontsFor, presetOf, PX_PER_IN, type Fonts, type Layout, type LegendCorner } from "./layout";
 import { legendLabelText, legendNodes, measureLegend, type LegendBox, type LegendEntry } from "./legend";
-import { LEGEND_CORNERS, OUTSIDE_MIN_PLOT_FRACTION, PLACEMENT_RESOLUTION, pickLegendPlace } from "./legend-place";
+import { LEGEND_CORNERS, OUTSIDE_MIN_PLOT_FRACTION, PLACEMENT_RESOLUTION, pickLegendPlace, placementCurve } from "./legend-place";
 import { modelGeometry } from "./models";
 import { constantsOf, eOverNValue, rescaleNote } from "./physics-settings";
-import { logAffine, sanitizeDomain } from "./scales";
+import { logAffine, sanitizeDomain, viewTransform } from "./scales";
 import { runsWidthPx } from "./text";
 import { logTicks } from "./ticks";
 
@@ -119,18 +119,19 @@ interface AutoLegendFrame {
 }
 
 /**
- * The place of an "auto" legend (legend-place.ts): the curves are built again at the fixed
- * PLACEMENT_RESOLUTION (the scene's own paths follow the display resolution, and the screen must pick the
+ * The place of an "auto" legend (legend-place.ts): the curves (big file-order ones reduced by placementCurve)
+ * are built again at the fixed PLACEMENT_RESOLUTION (the scene's own paths follow the display resolution, and the screen must pick the
  * corner the export picks); model paths do not depend on resolution. The highlight is left out (the
  * legend must not move when a table row is hovered).
  */
 function autoLegendPlace(project: Project, f: AutoLegendFrame): LegendCorner | "outside-right" {
   const plot = { x: r2(f.layout.plot.x), y: r2(f.layout.plot.y), w: r2(f.layout.plot.w), h: r2(f.layout.plot.h) };
   const map = logAffine(f.scales, plot);
+  const slope = viewTransform(f.view, f.constants).slope;
   const nodes: SceneNode[] = [];
   project.curves.forEach((cv, i) => {
     if (!cv.visible) return;
-    const g = curveGeometry(cv, { constants: f.constants, view: f.view, map, plot, lineWidthPx: f.fonts.dataLinePx, resolution: PLACEMENT_RESOLUTION }, `place-curve-${i + 1}`);
+    const g = curveGeometry(placementCurve(cv, slope), { constants: f.constants, view: f.view, map, plot, lineWidthPx: f.fonts.dataLinePx, resolution: PLACEMENT_RESOLUTION }, `place-curve-${i + 1}`);
     nodes.push(...g.fills, ...g.lines);
   });
   project.models.forEach((m, i) => {

@@ -23,6 +23,8 @@ import {
   occupancyGrid,
   parsePathData,
   pickLegendPlace,
+  placementCurve,
+  PLACEMENT_MAX_POINTS,
   type OccupancyGrid,
 } from "../../src/plot/legend-place";
 import { buildScene } from "../../src/plot/scene";
@@ -268,6 +270,55 @@ describe("automatic legend placement in the scene", () => {
 });
 
 // ---------------------------------------------------------------------------------------- pure choice rule
+
+describe("big file-order curves and regions", () => {
+  /** An invented noisy closed contour of n points filling the top right of the figure. */
+  function bigRegion(n: number): Curve {
+    const massEv = new Float64Array(n);
+    const gInvGeV = new Float64Array(n);
+    for (let i = 0; i < n; i++) {
+      const a = (2 * Math.PI * i) / n;
+      const r = 1 + 0.03 * Math.sin(i / 37);
+      massEv[i] = 10 ** (-3 + 1.4 * r * Math.cos(a));
+      gInvGeV[i] = 10 ** (-11 + 1.6 * r * Math.sin(a));
+    }
+    return curve({ id: "big", label: "Big contour (invented)", role: "region", keepOrder: true, massEv, gInvGeV });
+  }
+
+  test("are read through their most important points, in file order with the ends, cached per view", () => {
+    const big = bigRegion(5 * PLACEMENT_MAX_POINTS);
+    const a = placementCurve(big, 0);
+    expect(a.massEv).toHaveLength(PLACEMENT_MAX_POINTS);
+    expect(a.massEv[0]).toBeCloseTo(big.massEv[0], 12);
+    // The same arrays on the next frame (the plot cache is keyed by them), other arrays for another view.
+    expect(placementCurve(big, 0).massEv).toBe(a.massEv);
+    expect(placementCurve(big, -1).massEv).not.toBe(a.massEv);
+    // Every point kept is a point of the curve, met in the curve's own order.
+    let j = 0;
+    for (let k = 0; k < a.massEv.length; k++) {
+      while (j < big.massEv.length && Math.abs(big.massEv[j] / a.massEv[k] - 1) > 1e-12) j++;
+      expect(j).toBeLessThan(big.massEv.length);
+      expect(a.gInvGeV[k] / big.gInvGeV[j]).toBeCloseTo(1, 12);
+    }
+    // Small ones and curves drawn in mass order are read as they are.
+    const small = bigRegion(PLACEMENT_MAX_POINTS);
+    expect(placementCurve(small, 0)).toBe(small);
+    const sorted = { ...big, role: "exclusion" as const, keepOrder: false };
+    expect(placementCurve(sorted, 0)).toBe(sorted);
+  });
+
+  test("the corner chosen for a big contour is the one its full outline gives, at every resolution", () => {
+    const big = bigRegion(10 * PLACEMENT_MAX_POINTS);
+    const places = [0.5, 1, 2, 6.25].map((resolution) => placeOf(buildScene(project([big]), { resolution })));
+    expect(new Set(places).size).toBe(1);
+    expect(places[0]).not.toBe("top-right");
+    // Reference: the same contour cut to PLACEMENT_MAX_POINTS by plain striding, read whole by the placement.
+    const stride = Math.ceil(big.massEv.length / PLACEMENT_MAX_POINTS);
+    const every = (a: Float64Array) => a.filter((_, i) => i % stride === 0);
+    const strided = { ...big, id: "strided", massEv: every(big.massEv), gInvGeV: every(big.gInvGeV) };
+    expect(placeOf(buildScene(project([strided])))).toBe(places[0]);
+  });
+});
 
 describe("pickLegendPlace", () => {
   const plot = { x: 0, y: 0, w: 200, h: 100 };
