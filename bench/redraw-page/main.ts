@@ -146,7 +146,7 @@ export interface BenchResult {
   devicePixelRatio: number;
 }
 
-async function run(opts: { steps: number; plainSteps: number; repeat?: number; renderer?: "app" | "scene-dom"; strip?: "text" | "curves"; settleMs?: number; look?: "nofill" | "nostroke" | "noclip" | "noopacity" | "nodash" | "thin" }): Promise<BenchResult> {
+async function run(opts: { steps: number; plainSteps: number; profile?: boolean; repeat?: number; renderer?: "app" | "scene-dom"; strip?: "text" | "curves"; settleMs?: number; look?: "nofill" | "nostroke" | "noclip" | "noopacity" | "nodash" | "thin" }): Promise<BenchResult> {
   const project = await loadProject();
   const host = document.getElementById("plot")!;
   host.textContent = "";
@@ -175,6 +175,8 @@ async function run(opts: { steps: number; plainSteps: number; repeat?: number; r
   const chars: number[] = [];
   // Marks for a trace of this run (bench/redraw.mjs counts the painting between them).
   performance.mark("axband-zoom-start");
+  // Diagnostics: a CPU profile of the zoom steps alone (read over the DevTools protocol, Profiler domain).
+  if (opts.profile) console.profile("axband-zoom");
   for (const r of ranges) {
     const t0 = performance.now();
     const scene = buildScene(at(r), { resolution });
@@ -210,6 +212,7 @@ async function run(opts: { steps: number; plainSteps: number; repeat?: number; r
     if (opts.settleMs) await new Promise((res) => setTimeout(res, opts.settleMs));
   }
 
+  if (opts.profile) console.profileEnd("axband-zoom");
   performance.mark("axband-zoom-end");
   const pb: number[] = [];
   const pd: number[] = [];

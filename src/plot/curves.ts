@@ -52,6 +52,8 @@ export function curveGeometry(curve: Curve, f: CurveFrame, nodeId: string): Curv
     plot: f.plot,
     resolution: f.resolution,
     thin: f.thin,
+    // Used at once below: its path data is written before the next curve is thinned.
+    reuse: true,
   });
   const colour = safeColour(curve.colour, "#D55E00");
   const opacity = unitInterval(curve.fillOpacity, 0.3);

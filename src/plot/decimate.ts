@@ -1,7 +1,7 @@
 // Curves at pixel resolution: per-curve cached log10 arrays, column thinning (first/min/max/last per pixel
 // column, with a block min/max pyramid so zoomed-out redraws skip most points), Douglas–Peucker importance
 // for unsorted curves and regions, and clipping to a generous rectangle so no coordinate gets huge.
-import { beginPath, CH, finishPath, writeAscii, writeChar, writeHundredths } from "./path-writer";
+import { absolutePath, compactPath } from "./path-writer";
 
 /** Points of one curve in log10, in drawing order, with the derived arrays of each y view. */
 export interface PreparedCurve {
@@ -75,6 +75,8 @@ function chunkBoxes(lm: Float64Array, v: Float64Array): Float64Array {
 /** Block argmin/argmax of v at levels of 16, 256, 4096, … points. */
 export interface Pyramid {
   levels: { min: Int32Array; max: Int32Array }[];
+  /** The values at those indices, per level, for the v they were read from (derived on first use). */
+  values?: { v: Float64Array; min: Float64Array[]; max: Float64Array[] };
 }
 
 const BLOCK_SHIFT = 4;
@@ -227,17 +229,42 @@ export function buildPyramid(v: Float64Array): Pyramid {
 let qMin = 0;
 let qMax = 0;
 
-/** Argmin and argmax of v over [lo, hi) (hi > lo) into qMin/qMax, using the pyramid's whole blocks. */
+/** Columns shorter than this are scanned point by point (the pyramid's bookkeeping costs more there). */
+const PYRAMID_MIN_SPAN = Number(globalThis.process?.env?.PYRMIN ?? 64);
+
+/** The v values of a pyramid level's argmin/argmax, built on first use (they are not transferred between threads). */
+function levelValues(pyr: Pyramid, v: Float64Array): void {
+  if (pyr.values && pyr.values.v === v) return;
+  pyr.values = {
+    v,
+    min: pyr.levels.map((l) => Float64Array.from(l.min, (i) => v[i])),
+    max: pyr.levels.map((l) => Float64Array.from(l.max, (i) => v[i])),
+  };
+}
+
+/**
+ * Argmin and argmax of v over [lo, hi) (hi > lo) into qMin/qMax: the first index of the lowest and of the
+ * highest value, as a scan would give, whatever order the pyramid's blocks are visited in (ties go to the
+ * lower index). Whole blocks are compared through their stored values, so a column costs O(log) plus the
+ * partial blocks at its two ends.
+ */
 function rangeMinMax(v: Float64Array, pyr: Pyramid | null, lo: number, hi: number): void {
   let mn = lo;
   let mx = lo;
+  let vmn = v[lo];
+  let vmx = vmn;
   let a = lo + 1;
   let b = hi;
-  if (!pyr || pyr.levels.length === 0 || hi - lo < 32 * BLOCK) {
+  if (!pyr || pyr.levels.length === 0 || hi - lo < PYRAMID_MIN_SPAN) {
     for (let i = a; i < b; i++) {
       const x = v[i];
-      if (x < v[mn]) mn = i;
-      else if (x > v[mx]) mx = i;
+      if (x < vmn) {
+        vmn = x;
+        mn = i;
+      } else if (x > vmx) {
+        vmx = x;
+        mx = i;
+      }
     }
     qMin = mn;
     qMax = mx;
@@ -245,40 +272,67 @@ function rangeMinMax(v: Float64Array, pyr: Pyramid | null, lo: number, hi: numbe
   }
   while (a < b && a & BLOCK_MASK) {
     const x = v[a];
-    if (x < v[mn]) mn = a;
-    else if (x > v[mx]) mx = a;
+    if (x < vmn) {
+      vmn = x;
+      mn = a;
+    } else if (x > vmx) {
+      vmx = x;
+      mx = a;
+    }
     a++;
   }
-  while (b > a && b & BLOCK_MASK) {
-    b--;
-    const x = v[b];
-    if (x < v[mn]) mn = b;
-    else if (x > v[mx]) mx = b;
-  }
+  const tail = b;
+  b = Math.max(a, b & ~BLOCK_MASK);
+  // The tail after the whole blocks comes last in index order: strict comparisons keep the earlier index.
   let la = a >> BLOCK_SHIFT;
   let lb = b >> BLOCK_SHIFT;
   const levels = pyr.levels;
+  const values = pyr.values as NonNullable<Pyramid["values"]>;
   for (let L = 0; la < lb; L++) {
     const { min, max } = levels[L];
-    if (L === levels.length - 1) {
-      for (let k = la; k < lb; k++) {
-        if (v[min[k]] < v[mn]) mn = min[k];
-        if (v[max[k]] > v[mx]) mx = max[k];
+    const vmin = values.min[L];
+    const vmax = values.max[L];
+    const top = L === levels.length - 1;
+    let ea = top ? lb : Math.min(lb, (la + BLOCK_MASK) & ~BLOCK_MASK);
+    let sb = top ? lb : Math.max(ea, lb & ~BLOCK_MASK);
+    for (let k = la; k < ea; k++) {
+      const x = vmin[k];
+      if (x < vmn || (x === vmn && min[k] < mn)) {
+        vmn = x;
+        mn = min[k];
       }
-      break;
+      const y = vmax[k];
+      if (y > vmx || (y === vmx && max[k] < mx)) {
+        vmx = y;
+        mx = max[k];
+      }
     }
-    while (la < lb && la & BLOCK_MASK) {
-      if (v[min[la]] < v[mn]) mn = min[la];
-      if (v[max[la]] > v[mx]) mx = max[la];
-      la++;
+    for (let k = sb; k < lb; k++) {
+      const x = vmin[k];
+      if (x < vmn || (x === vmn && min[k] < mn)) {
+        vmn = x;
+        mn = min[k];
+      }
+      const y = vmax[k];
+      if (y > vmx || (y === vmx && max[k] < mx)) {
+        vmx = y;
+        mx = max[k];
+      }
     }
-    while (lb > la && lb & BLOCK_MASK) {
-      lb--;
-      if (v[min[lb]] < v[mn]) mn = min[lb];
-      if (v[max[lb]] > v[mx]) mx = max[lb];
+    if (top) break;
+    la = ea >> BLOCK_SHIFT;
+    lb = sb >> BLOCK_SHIFT;
+    if (ea === sb) break;
+  }
+  for (let i = b; i < tail; i++) {
+    const x = v[i];
+    if (x < vmn) {
+      vmn = x;
+      mn = i;
+    } else if (x > vmx) {
+      vmx = x;
+      mx = i;
     }
-    la >>= BLOCK_SHIFT;
-    lb >>= BLOCK_SHIFT;
   }
   qMin = mn;
   qMax = mx;
@@ -351,17 +405,44 @@ export function thinColumns(lm: Float64Array, v: Float64Array, pyr: Pyramid | nu
   return idxScratch.slice(0, count);
 }
 
-/** {@link thinColumns} leaving the indices in idxScratch; returns their count. */
-function thinColumnsInto(lm: Float64Array, v: Float64Array, pyr: Pyramid | null, p: ColumnParams): number {
+/** An affine map of (log10 m, v) to pixels: x = ax + bx·lm, y = ay + by·(v + yOffset). */
+interface PixelMap {
+  ax: number;
+  bx: number;
+  ay: number;
+  by: number;
+  yOffset: number;
+}
+
+/**
+ * {@link thinColumns} leaving the indices in idxScratch, or with `map` the kept points' pixels in bufX/bufY
+ * (written while their values are at hand: a second pass over the indices would fetch them from memory
+ * again); returns their count.
+ */
+function thinColumnsInto(lm: Float64Array, v: Float64Array, pyr: Pyramid | null, p: ColumnParams, map: PixelMap | null = null): number {
   const n = lm.length;
   if (n === 0) return 0;
   const start = Math.max(0, lowerBound(lm, p.lmLo) - 1);
   const end = Math.min(n, upperBound(lm, p.lmHi) + 1);
   const { colL0, colK } = p;
+  if (pyr && pyr.levels.length) levelValues(pyr, v);
+  // At most 4 points per column, and the visible columns plus the two beyond the ends.
+  const bound = Math.min(end - start, 4 * (Math.max(0, Math.ceil((p.lmHi - p.lmLo) * colK)) + 8));
+  if (map) ensureBuffers(bound);
+  else if (idxScratch.length < bound) idxScratch = new Int32Array(bound);
+  const ax = map ? map.ax : 0;
+  const bx = map ? map.bx : 0;
+  const ay = map ? map.ay : 0;
+  const by = map ? map.by : 0;
+  const yOffset = map ? map.yOffset : 0;
+  const ox = bufX;
+  const oy = bufY;
+  const oi = idxScratch;
   let count = 0;
   let i = start;
   while (i < end) {
-    const c = Math.floor((lm[i] - colL0) * colK);
+    const li = lm[i];
+    const c = Math.floor((li - colL0) * colK);
     let j = i + 1;
     if (j < end && Math.floor((lm[j] - colL0) * colK) <= c) {
       // Gallop, then bisect, to the first index of the next column.
@@ -383,17 +464,44 @@ function thinColumnsInto(lm: Float64Array, v: Float64Array, pyr: Pyramid | null,
     }
     const last = j - 1;
     if (j - i <= 4) {
-      for (let k = i; k < j; k++) count = pushIdx(count, k);
+      for (let k = i; k < j; k++) {
+        if (map) {
+          ox[count] = ax + bx * lm[k];
+          oy[count] = ay + by * (v[k] + yOffset);
+        } else oi[count] = k;
+        count++;
+      }
     } else {
       rangeMinMax(v, pyr, i, j);
       let a = qMin < qMax ? qMin : qMax;
       let b = qMin < qMax ? qMax : qMin;
-      count = pushIdx(count, i);
       if (a === i) a = -1;
       if (b === last) b = -1;
-      if (a > i && a < last) count = pushIdx(count, a);
-      if (b > i && b < last && b !== a) count = pushIdx(count, b);
-      count = pushIdx(count, last);
+      const keepA = a > i && a < last;
+      const keepB = b > i && b < last && b !== a;
+      if (map) {
+        ox[count] = ax + bx * li;
+        oy[count] = ay + by * (v[i] + yOffset);
+        count++;
+        if (keepA) {
+          ox[count] = ax + bx * lm[a];
+          oy[count] = ay + by * (v[a] + yOffset);
+          count++;
+        }
+        if (keepB) {
+          ox[count] = ax + bx * lm[b];
+          oy[count] = ay + by * (v[b] + yOffset);
+          count++;
+        }
+        ox[count] = ax + bx * lm[last];
+        oy[count] = ay + by * (v[last] + yOffset);
+        count++;
+      } else {
+        oi[count++] = i;
+        if (keepA) oi[count++] = a;
+        if (keepB) oi[count++] = b;
+        oi[count++] = last;
+      }
     }
     i = j;
   }
@@ -507,7 +615,7 @@ export interface Rect {
  */
 export function clipToRect(poly: Polyline, r: Rect): Polyline {
   let cur = poly;
-  for (let side = 0; side < 4 && cur.n > 0; side++) cur = clipHalf(cur, side, r);
+  for (let side = 0; side < 4 && cur.n > 0; side++) cur = clipHalf(cur, side, r, null);
   return cur;
 }
 
@@ -515,13 +623,25 @@ function inside(x: number, y: number, side: number, r: Rect): boolean {
   return side === 0 ? x >= r.x0 : side === 1 ? x <= r.x1 : side === 2 ? y >= r.y0 : y <= r.y1;
 }
 
-function clipHalf(p: Polyline, side: number, r: Rect): Polyline {
+// Two scratch polylines the frame path (curvePixels with `reuse`) clips between, so a redraw allocates nothing.
+const clipScratch = [
+  { xs: new Float64Array(4096), ys: new Float64Array(4096) },
+  { xs: new Float64Array(4096), ys: new Float64Array(4096) },
+];
+
+/** One Sutherland–Hodgman pass; into `into` (grown as needed) or new arrays when it is null. */
+function clipHalf(p: Polyline, side: number, r: Rect, into: { xs: Float64Array; ys: Float64Array } | null): Polyline {
   const { xs, ys, n, closed } = p;
   let all = true;
   for (let i = 0; i < n && all; i++) if (!inside(xs[i], ys[i], side, r)) all = false;
   if (all) return p;
-  const ox = new Float64Array(n * 2 + 2);
-  const oy = new Float64Array(n * 2 + 2);
+  const size = n * 2 + 2;
+  if (into && into.xs.length < size) {
+    into.xs = new Float64Array(size * 2);
+    into.ys = new Float64Array(size * 2);
+  }
+  const ox = into ? into.xs : new Float64Array(size);
+  const oy = into ? into.ys : new Float64Array(size);
   let k = 0;
   const edge = side === 0 ? r.x0 : side === 1 ? r.x1 : side === 2 ? r.y0 : r.y1;
   const cross = (i: number, j: number) => {
@@ -581,6 +701,11 @@ export interface PixelParams {
   resolution?: number;
   /** Thin at all (false draws every point, for comparisons). @default true */
   thin?: boolean;
+  /**
+   * Return views of the module's scratch buffers instead of new arrays: valid only until the next call
+   * (the scene builder turns each into path data at once). @default false
+   */
+  reuse?: boolean;
 }
 
 /**
@@ -630,6 +755,9 @@ function cullOutside(n: number, r: Rect): number {
   return w + 1;
 }
 
+// Working space of thinRunsLog (its result is a copy): levels are thinned a chunk at a time, on every zoom.
+let runScratch = new Int32Array(RUN_CHUNK);
+
 /**
  * Run thinning for curves that are not sorted by mass: consecutive points whose bounding box is at most
  * `tx` wide (then the run keeps its first, lowest, highest and last point, in order) or at most `ty` tall
@@ -641,7 +769,8 @@ function cullOutside(n: number, r: Rect): number {
  */
 export function thinRunsLog(lm: Float64Array, v: Float64Array, tx: number, ty: number): Int32Array {
   const n = lm.length;
-  const out = new Int32Array(n);
+  if (runScratch.length < n) runScratch = new Int32Array(n);
+  const out = runScratch;
   let w = 0;
   let i = 0;
   while (i < n) {
@@ -792,8 +921,7 @@ export function curvePixels(prep: PreparedCurve, closed: boolean, p: PixelParams
     const va = viewArrays(prep, p.slope, closed);
     const colL0 = (pl.x - p.ax) / p.bx;
     const colK = p.bx * res;
-    n = thinColumnsInto(prep.lm, va.v, va.pyramid, { lmLo: colL0, lmHi: (pl.x + pl.w - p.ax) / p.bx, colL0, colK });
-    mapSelected(prep, va.v, n, p);
+    n = thinColumnsInto(prep.lm, va.v, va.pyramid, { lmLo: colL0, lmHi: (pl.x + pl.w - p.ax) / p.bx, colL0, colK }, p);
     n = cullOutside(n, cullRect);
   } else {
     const va = viewArrays(prep, p.slope, closed);
@@ -836,23 +964,30 @@ export function curvePixels(prep: PreparedCurve, closed: boolean, p: PixelParams
     mapSelected(prep, va.v, n, p);
     n = cullOutside(n, cullRect);
   }
-  return clipToRect({ xs: bufX.slice(0, n), ys: bufY.slice(0, n), n, closed }, farRect);
+  if (!p.reuse) return clipToRect({ xs: bufX.slice(0, n), ys: bufY.slice(0, n), n, closed }, farRect);
+  let cur: Polyline = { xs: bufX, ys: bufY, n, closed };
+  if (!allInside(bufX, bufY, n, farRect)) {
+    for (let side = 0, k = 0; side < 4 && cur.n > 0; side++) {
+      const next = clipHalf(cur, side, farRect, clipScratch[k]);
+      if (next !== cur) k ^= 1;
+      cur = next;
+    }
+  }
+  return { xs: cur.xs.subarray(0, cur.n), ys: cur.ys.subarray(0, cur.n), n: cur.n, closed };
+}
+
+function allInside(xs: Float64Array, ys: Float64Array, n: number, r: Rect): boolean {
+  for (let i = 0; i < n; i++) {
+    const x = xs[i];
+    const y = ys[i];
+    if (x < r.x0 || x > r.x1 || y < r.y0 || y > r.y1) return false;
+  }
+  return true;
 }
 
 /** Path data "M x y L x y …" with absolute coordinates rounded to 2 decimals, closed with Z for polygons. */
 export function pathData(poly: Polyline, extra = ""): string {
-  const { xs, ys, n } = poly;
-  if (n === 0) return "";
-  beginPath();
-  for (let k = 0; k < n; k++) {
-    writeChar(k === 0 ? CH.M : CH.L);
-    writeHundredths(Math.round(xs[k] * 100));
-    writeChar(CH.space);
-    writeHundredths(Math.round(ys[k] * 100));
-  }
-  if (extra) writeAscii(extra);
-  if (poly.closed) writeChar(CH.Z);
-  return finishPath();
+  return poly.n === 0 ? "" : absolutePath(poly.xs, poly.ys, poly.n, poly.closed, extra);
 }
 
 /**
@@ -862,38 +997,5 @@ export function pathData(poly: Polyline, extra = ""): string {
  * @param extra path data appended before the closing Z (absolute commands).
  */
 export function pathDataCompact(poly: Polyline, extra = ""): string {
-  const { xs, ys, n } = poly;
-  if (n === 0) return "";
-  let px = Math.round(xs[0] * 100);
-  let py = Math.round(ys[0] * 100);
-  beginPath();
-  writeChar(CH.M);
-  writeHundredths(px);
-  writeChar(CH.space);
-  writeHundredths(py);
-  for (let k = 1; k < n; k++) {
-    const qx = Math.round(xs[k] * 100);
-    const qy = Math.round(ys[k] * 100);
-    const dx = qx - px;
-    const dy = qy - py;
-    if (dx === 0) {
-      if (dy !== 0) {
-        writeChar(CH.v);
-        writeHundredths(dy);
-      }
-    } else if (dy === 0) {
-      writeChar(CH.h);
-      writeHundredths(dx);
-    } else {
-      writeChar(CH.l);
-      writeHundredths(dx);
-      if (dy > 0) writeChar(CH.space);
-      writeHundredths(dy);
-    }
-    px = qx;
-    py = qy;
-  }
-  if (extra) writeAscii(extra);
-  if (poly.closed) writeChar(CH.Z);
-  return finishPath();
+  return poly.n === 0 ? "" : compactPath(poly.xs, poly.ys, poly.n, poly.closed, extra);
 }

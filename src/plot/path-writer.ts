@@ -31,48 +31,144 @@ export function writeChar(code: number): void {
  */
 export function writeHundredths(q: number): void {
   ensure(24);
+  pos = putHundredths(buf, pos, q);
+}
+
+/**
+ * Writes q hundredths at b[p…] and returns the new position (b must have 24 bytes free). A pure function
+ * of its arguments, small enough for V8 to inline into the path loops, for |q| < 10⁵ (coordinates and moves
+ * of up to 999.99 px: nearly all of them); the rest goes to {@link putHundredthsWide}.
+ */
+function putHundredths(b: Uint8Array, p: number, q: number): number {
+  if (!(q > -100000 && q < 100000)) return putHundredthsWide(b, p, q);
+  if (q < 0) {
+    b[p++] = 45;
+    q = -q;
+  }
+  // q is a whole number of hundredths (callers round), so this is floor(q / 100) and the remainder.
+  const ip = (q / 100) | 0;
+  const fp = q - ip * 100;
+  if (ip >= 100) {
+    const h = (ip / 100) | 0;
+    b[p++] = 48 + h;
+    const r = ip - h * 100;
+    const t = (r / 10) | 0;
+    b[p++] = 48 + t;
+    b[p++] = 48 + r - t * 10;
+  } else if (ip >= 10) {
+    const t = (ip / 10) | 0;
+    b[p++] = 48 + t;
+    b[p++] = 48 + ip - t * 10;
+  } else if (ip > 0 || fp === 0) b[p++] = 48 + ip;
+  if (fp !== 0) {
+    b[p++] = 46;
+    const t = (fp / 10) | 0;
+    b[p++] = 48 + t;
+    if (fp - t * 10 !== 0) b[p++] = 48 + fp - t * 10;
+  }
+  return p;
+}
+
+/** {@link putHundredths} for any magnitude (and 0 for NaN and ±∞). */
+function putHundredthsWide(b: Uint8Array, p: number, q: number): number {
   if (!(q === q) || q === Infinity || q === -Infinity) q = 0;
   if (q < 0) {
-    buf[pos++] = 45;
+    b[p++] = 45;
     q = -q;
   }
   let ip = Math.floor(q / 100);
   const fp = q - ip * 100;
-  if (ip === 0) {
-    if (fp === 0) buf[pos++] = 48;
-  } else if (ip < 1000) {
-    // Most coordinates and moves: up to three integer digits, written without a reversing pass.
-    if (ip >= 100) {
-      const h = Math.floor(ip / 100);
-      buf[pos++] = 48 + h;
-      ip -= h * 100;
-      const t = Math.floor(ip / 10);
-      buf[pos++] = 48 + t;
-      buf[pos++] = 48 + ip - t * 10;
-    } else if (ip >= 10) {
-      const t = Math.floor(ip / 10);
-      buf[pos++] = 48 + t;
-      buf[pos++] = 48 + ip - t * 10;
-    } else buf[pos++] = 48 + ip;
-  } else {
-    const start = pos;
-    while (ip > 0) {
-      const d = ip % 10;
-      buf[pos++] = 48 + d;
-      ip = (ip - d) / 10;
-    }
-    for (let a = start, b = pos - 1; a < b; a++, b--) {
-      const t = buf[a];
-      buf[a] = buf[b];
-      buf[b] = t;
-    }
+  const start = p;
+  if (ip === 0 && fp === 0) b[p++] = 48;
+  while (ip > 0) {
+    const d = ip % 10;
+    b[p++] = 48 + d;
+    ip = (ip - d) / 10;
+  }
+  for (let a = start, z = p - 1; a < z; a++, z--) {
+    const t = b[a];
+    b[a] = b[z];
+    b[z] = t;
   }
   if (fp !== 0) {
-    buf[pos++] = 46;
+    b[p++] = 46;
     const t = Math.floor(fp / 10);
-    buf[pos++] = 48 + t;
-    if (fp - t * 10 !== 0) buf[pos++] = 48 + fp - t * 10;
+    b[p++] = 48 + t;
+    if (fp - t * 10 !== 0) b[p++] = 48 + fp - t * 10;
   }
+  return p;
+}
+
+/** Bytes one vertex can take in {@link compactPath} or {@link absolutePath}: a letter, two numbers, a space. */
+const VERTEX_BYTES = 2 + 2 * 24;
+
+function appendAscii(b: Uint8Array, p: number, s: string): number {
+  for (let i = 0; i < s.length; i++) b[p++] = s.charCodeAt(i) & 0x7f;
+  return p;
+}
+
+/**
+ * Path data of a polyline in one pass: an absolute "M" then relative moves between positions rounded to
+ * 0.01 px ("l dx dy", or "h dx" / "v dy" when one coordinate repeats), so every vertex lands exactly on its
+ * rounded absolute position; repeated vertices are dropped. `extra` (absolute commands) goes before the
+ * closing Z. Starts a new path (as beginPath) and returns it finished.
+ */
+export function compactPath(xs: Float64Array, ys: Float64Array, n: number, closed: boolean, extra = ""): string {
+  pos = 0;
+  ensure(n * VERTEX_BYTES + extra.length + 2);
+  const b = buf;
+  let p = 0;
+  let px = Math.round(xs[0] * 100);
+  let py = Math.round(ys[0] * 100);
+  b[p++] = 77 /* M */;
+  p = putHundredths(b, p, px);
+  b[p++] = 32 /* space */;
+  p = putHundredths(b, p, py);
+  for (let k = 1; k < n; k++) {
+    const qx = Math.round(xs[k] * 100);
+    const qy = Math.round(ys[k] * 100);
+    const dx = qx - px;
+    const dy = qy - py;
+    if (dx === 0) {
+      if (dy !== 0) {
+        b[p++] = 118 /* v */;
+        p = putHundredths(b, p, dy);
+      }
+    } else if (dy === 0) {
+      b[p++] = 104 /* h */;
+      p = putHundredths(b, p, dx);
+    } else {
+      b[p++] = 108 /* l */;
+      p = putHundredths(b, p, dx);
+      // A minus sign separates the two numbers by itself.
+      if (dy > 0) b[p++] = 32 /* space */;
+      p = putHundredths(b, p, dy);
+    }
+    px = qx;
+    py = qy;
+  }
+  if (extra) p = appendAscii(b, p, extra);
+  if (closed) b[p++] = 90 /* Z */;
+  pos = p;
+  return finishPath();
+}
+
+/** Path data "M x y L x y …" with absolute coordinates rounded to 0.01 px, closed with Z when asked. */
+export function absolutePath(xs: Float64Array, ys: Float64Array, n: number, closed: boolean, extra = ""): string {
+  pos = 0;
+  ensure(n * VERTEX_BYTES + extra.length + 2);
+  const b = buf;
+  let p = 0;
+  for (let k = 0; k < n; k++) {
+    b[p++] = k === 0 ? 77 /* M */ : 76 /* L */;
+    p = putHundredths(b, p, Math.round(xs[k] * 100));
+    b[p++] = 32 /* space */;
+    p = putHundredths(b, p, Math.round(ys[k] * 100));
+  }
+  if (extra) p = appendAscii(b, p, extra);
+  if (closed) b[p++] = 90 /* Z */;
+  pos = p;
+  return finishPath();
 }
 
 /** Append a plain string (ASCII only). */
@@ -83,33 +179,32 @@ export function writeAscii(s: string): void {
 
 // The latest paths written here, so that the SVG writer's check of path data (isSafePathData in svg.ts) need
 // not rescan tens of thousands of characters per curve on every frame: what this module writes holds only
-// command letters, digits, "-", "." and spaces by construction. Bounded to 8·10⁶ characters (about 8 MB: the
-// paths of a few frames; a figure has a few dozen paths).
+// command letters, digits, "-", "." and spaces by construction. A short ring compared by identity (the
+// screen checks a frame's paths right after building them), not a hashed set: hashing costs a pass over
+// every string, and a set holding many frames keeps their strings alive through the young-generation
+// collections, which then copy them. Bounded to RECENT_MAX paths and RECENT_MAX_CHARS characters.
+const RECENT_MAX = 256;
 const RECENT_MAX_CHARS = 8_000_000;
-const recent = new Set<string>();
-const recentOrder: string[] = [];
+const recent: string[] = [];
 let recentChars = 0;
 
 /** The path written since beginPath(). */
 export function finishPath(): string {
   const d = decoder.decode(buf.subarray(0, pos));
   // Short paths are checked faster than remembered.
-  if (d.length >= 256 && d.length <= RECENT_MAX_CHARS / 4 && !recent.has(d)) {
-    recent.add(d);
-    recentOrder.push(d);
+  if (d.length >= 256 && d.length <= RECENT_MAX_CHARS / 4) {
+    recent.push(d);
     recentChars += d.length;
-    while (recentChars > RECENT_MAX_CHARS) {
-      const old = recentOrder.shift() as string;
-      recent.delete(old);
-      recentChars -= old.length;
-    }
+    while (recent.length > RECENT_MAX || recentChars > RECENT_MAX_CHARS) recentChars -= (recent.shift() as string).length;
   }
   return d;
 }
 
 /** Whether `d` equals path data lately returned by finishPath (so it is well-formed and safe by construction). */
 export function isRecentPath(d: string): boolean {
-  return recent.has(d);
+  // Newest first: the caller almost always asks about the paths it has just built.
+  for (let i = recent.length - 1; i >= 0; i--) if (recent[i] === d) return true;
+  return false;
 }
 
 export const CH = { M: 77, L: 76, Z: 90, l: 108, h: 104, v: 118, space: 32 } as const;

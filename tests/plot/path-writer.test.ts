@@ -63,19 +63,23 @@ describe("recent paths", () => {
   });
 
   test("memory is bounded: old paths are forgotten (and still pass the full check)", () => {
-    beginPath();
-    writeAscii("M0 0");
-    for (let i = 0; i < 600; i++) writeAscii("h1");
-    const first = finishPath();
-    expect(isRecentPath(first)).toBe(true);
-    // 10 distinct paths of 1,000,000 characters: more than the 8·10⁶ remembered.
-    for (let k = 0; k < 10; k++) {
+    const write = (k: number, steps: number) => {
       beginPath();
       writeAscii(`M${k} 0`);
-      for (let i = 0; i < 499_998; i++) writeAscii("h1");
-      finishPath();
-    }
+      for (let i = 0; i < steps; i++) writeAscii("h1");
+      return finishPath();
+    };
+    const first = write(0, 600);
+    expect(isRecentPath(first)).toBe(true);
+    // By count: 300 more distinct paths (more than the 256 remembered).
+    for (let k = 1; k <= 300; k++) write(k, 200);
     expect(isRecentPath(first)).toBe(false);
     expect(isSafePathData(first)).toBe(true);
+    // By size: 10 distinct paths of 1,000,000 characters (more than the 8·10⁶ remembered).
+    const big = write(-1, 499_998);
+    expect(isRecentPath(big)).toBe(true);
+    for (let k = 0; k < 10; k++) write(1000 + k, 499_998);
+    expect(isRecentPath(big)).toBe(false);
+    expect(isSafePathData(big)).toBe(true);
   });
 });
