@@ -230,7 +230,7 @@ let qMin = 0;
 let qMax = 0;
 
 /** Columns shorter than this are scanned point by point (the pyramid's bookkeeping costs more there). */
-const PYRAMID_MIN_SPAN = Number(globalThis.process?.env?.PYRMIN ?? 64);
+const PYRAMID_MIN_SPAN = 64;
 
 /** The v values of a pyramid level's argmin/argmax, built on first use (they are not transferred between threads). */
 function levelValues(pyr: Pyramid, v: Float64Array): void {
@@ -293,8 +293,8 @@ function rangeMinMax(v: Float64Array, pyr: Pyramid | null, lo: number, hi: numbe
     const vmin = values.min[L];
     const vmax = values.max[L];
     const top = L === levels.length - 1;
-    let ea = top ? lb : Math.min(lb, (la + BLOCK_MASK) & ~BLOCK_MASK);
-    let sb = top ? lb : Math.max(ea, lb & ~BLOCK_MASK);
+    const ea = top ? lb : Math.min(lb, (la + BLOCK_MASK) & ~BLOCK_MASK);
+    const sb = top ? lb : Math.max(ea, lb & ~BLOCK_MASK);
     for (let k = la; k < ea; k++) {
       const x = vmin[k];
       if (x < vmn || (x === vmn && min[k] < mn)) {
