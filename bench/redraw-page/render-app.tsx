@@ -21,7 +21,10 @@ export function createSceneDomRenderer(host: HTMLElement): (scene: Scene) => voi
   host.appendChild(svg);
   const dom = createSceneDom(svg, null, "bench-");
   return (scene: Scene) => {
-    svg.setAttribute("viewBox", `0 0 ${scene.widthPx} ${scene.heightPx}`);
+    // Only when it changes, as React does for SceneSvg: setting the viewBox, even to its old value, makes
+    // the browser lay out every text of the figure again.
+    const viewBox = `0 0 ${scene.widthPx} ${scene.heightPx}`;
+    if (svg.getAttribute("viewBox") !== viewBox) svg.setAttribute("viewBox", viewBox);
     dom.update(scene);
   };
 }
