@@ -5,7 +5,7 @@
 // again as building the scene (bench/redraw.mjs, measured before this renderer replaced them); here an
 // unchanged node costs a few string comparisons.
 import type { Scene, SceneNode } from "../../plot/scene-types";
-import { fmt, layerAttributes, nodeAttributes, sceneIds, textSpans } from "../../plot/svg";
+import { fmt, layerAttributes, nodeAttributes, sceneIds, textPlacement, textSpans } from "../../plot/svg";
 
 const SVG_NS = "http://www.w3.org/2000/svg";
 const XML_NS = "http://www.w3.org/XML/1998/namespace";
@@ -16,6 +16,9 @@ interface Slot {
   attrs: Map<string, string>;
   /** The text content last written (tspans as the writer writes them), for text nodes. */
   text: string;
+  /** Text nodes: the group that places the text (textPlacement), and its transform last written. */
+  wrap: SVGGElement | null;
+  placement: string;
 }
 
 interface LayerSlot {
@@ -120,7 +123,7 @@ export function createSceneDom(svg: SVGSVGElement, before: Node | null, idPrefix
       const keep = new Set(keys);
       for (const [key, slot] of ls.slots) {
         if (keep.has(key)) continue;
-        slot.el.remove();
+        (slot.wrap ?? slot.el).remove();
         ls.slots.delete(key);
       }
       let prev: Element | null = null;
@@ -128,13 +131,21 @@ export function createSceneDom(svg: SVGSVGElement, before: Node | null, idPrefix
         const key = keys[i];
         let slot = ls.slots.get(key);
         if (!slot) {
-          slot = { el: document.createElementNS(SVG_NS, tagOf(node)), attrs: new Map(), text: "" };
+          const el = document.createElementNS(SVG_NS, tagOf(node));
+          const wrap = node.kind === "text" ? document.createElementNS(SVG_NS, "g") : null;
+          wrap?.appendChild(el);
+          slot = { el, attrs: new Map(), text: "", wrap, placement: "" };
           ls.slots.set(key, slot);
         }
         const id = nodeIds[i];
         const attrs = nodeAttributes(node);
         syncAttributes(slot.el, slot.attrs, id ? [["id", id], ...attrs] : attrs);
-        if (node.kind === "text") {
+        if (node.kind === "text" && slot.wrap) {
+          const placement = textPlacement(node);
+          if (placement !== slot.placement) {
+            slot.wrap.setAttribute("transform", placement);
+            slot.placement = placement;
+          }
           const spans = textSpans(node);
           const text = JSON.stringify(spans);
           if (text !== slot.text) {
@@ -142,9 +153,10 @@ export function createSceneDom(svg: SVGSVGElement, before: Node | null, idPrefix
             slot.text = text;
           }
         }
+        const outer = slot.wrap ?? slot.el;
         const want: ChildNode | null = prev ? prev.nextSibling : ls.g.firstChild;
-        if (want !== slot.el) ls.g.insertBefore(slot.el, want);
-        prev = slot.el;
+        if (want !== outer) ls.g.insertBefore(outer, want);
+        prev = outer;
       });
     });
   };
