@@ -64,14 +64,27 @@ function paint(value: string | undefined): string | undefined {
   return value === "none" ? "none" : safeColour(value, "#000000");
 }
 
-// The same node ids come back on every frame: their safe forms are remembered (bounded, cleared when full).
-const safeIds = new Map<string, string>();
-function safeId(id: string): string {
-  let out = safeIds.get(id);
+// The same node ids come back on every frame: their written forms (prefix + safe id) are remembered, so that
+// each frame gets the very same strings, whose hashes the engine keeps (bounded, cleared when full).
+const writtenIds = new Map<string, Map<string, string>>();
+let writtenCount = 0;
+function writtenId(prefix: string, id: string): string {
+  let byId = writtenIds.get(prefix);
+  if (!byId) {
+    byId = new Map();
+    writtenIds.set(prefix, byId);
+  }
+  let out = byId.get(id);
   if (out === undefined) {
-    if (safeIds.size > 10_000) safeIds.clear();
-    out = id.replace(ID_SAFE, "_");
-    safeIds.set(id, out);
+    if (writtenCount > 10_000) {
+      writtenIds.clear();
+      writtenCount = 0;
+      byId = new Map();
+      writtenIds.set(prefix, byId);
+    }
+    out = prefix + id.replace(ID_SAFE, "_");
+    byId.set(id, out);
+    writtenCount++;
   }
   return out;
 }
@@ -82,10 +95,14 @@ class Ids {
   constructor(private prefix: string) {}
   get(id: string | undefined): string | undefined {
     if (!id) return undefined;
-    const base = this.prefix + safeId(id);
-    const n = this.used.get(base) ?? 0;
+    const base = writtenId(this.prefix, id);
+    const n = this.used.get(base);
+    if (n === undefined) {
+      this.used.set(base, 1);
+      return base;
+    }
     this.used.set(base, n + 1);
-    return n === 0 ? base : `${base}-${n + 1}`;
+    return `${base}-${n + 1}`;
   }
 }
 

@@ -19,6 +19,7 @@ interface Slot {
   /** Text nodes: the group that places the text (textPlacement), and its transform last written. */
   wrap: SVGGElement | null;
   placement: string;
+  tag: string;
 }
 
 interface LayerSlot {
@@ -30,15 +31,17 @@ interface LayerSlot {
 /** Writes `next` over the attributes last written (`last`): only the changed ones, removing the dropped ones. */
 function syncAttributes(el: Element, last: Map<string, string>, next: [string, string][]): void {
   // Setting an attribute to its current value can still make the browser lay the figure out again.
-  const seen = new Set<string>();
-  for (const [k, v] of next) {
-    seen.add(k);
+  for (let i = 0; i < next.length; i++) {
+    const k = next[i][0];
+    const v = next[i][1];
     if (last.get(k) === v) continue;
     if (k === "xml:space") el.setAttributeNS(XML_NS, k, v);
     else el.setAttribute(k, v);
     last.set(k, v);
   }
-  if (seen.size === last.size) return;
+  // The names in `next` are distinct and all in `last` now: equal sizes mean nothing is left to remove.
+  if (next.length === last.size) return;
+  const seen = new Set(next.map((a) => a[0]));
   for (const k of [...last.keys()]) {
     if (seen.has(k)) continue;
     if (k === "xml:space") el.removeAttributeNS(XML_NS, "space");
@@ -117,7 +120,9 @@ export function createSceneDom(svg: SVGSVGElement, before: Node | null, idPrefix
       if (prevLayer.nextSibling !== ls.g) svg.insertBefore(ls.g, prevLayer.nextSibling);
       prevLayer = ls.g;
       const nodeIds = ids.nodes[li];
-      const keys = layer.nodes.map((n, i) => `${n.kind}:${nodeIds[i] ?? `#${i}`}`);
+      // Keyed by the written id (unique in a scene, and the same string object from frame to frame); a node
+      // whose kind changed under the same id gets a new element below.
+      const keys = layer.nodes.map((_, i) => nodeIds[i] ?? `#${i}`);
       // Elements of nodes that are gone go first, so the ones that stay keep their place (a moved element is
       // laid out again, which for text is the dear part of a frame).
       const keep = new Set(keys);
@@ -130,11 +135,16 @@ export function createSceneDom(svg: SVGSVGElement, before: Node | null, idPrefix
       layer.nodes.forEach((node, i) => {
         const key = keys[i];
         let slot = ls.slots.get(key);
+        const tag = tagOf(node);
+        if (slot && slot.tag !== tag) {
+          (slot.wrap ?? slot.el).remove();
+          slot = undefined;
+        }
         if (!slot) {
-          const el = document.createElementNS(SVG_NS, tagOf(node));
+          const el = document.createElementNS(SVG_NS, tag);
           const wrap = node.kind === "text" ? document.createElementNS(SVG_NS, "g") : null;
           wrap?.appendChild(el);
-          slot = { el, attrs: new Map(), text: "", wrap, placement: "" };
+          slot = { el, attrs: new Map(), text: "", wrap, placement: "", tag };
           ls.slots.set(key, slot);
         }
         const id = nodeIds[i];
