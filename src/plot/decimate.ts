@@ -718,13 +718,20 @@ let bufX = new Float64Array(4096);
 let bufY = new Float64Array(4096);
 let bufC = new Uint8Array(4096);
 
-function ensureBuffers(n: number): void {
+/** Room for n points in bufX/bufY/bufC; the first `keep` points survive a growth. */
+function ensureBuffers(n: number, keep = 0): void {
   if (bufX.length >= n) return;
   let size = bufX.length;
   while (size < n) size *= 2;
+  const ox = bufX;
+  const oy = bufY;
   bufX = new Float64Array(size);
   bufY = new Float64Array(size);
   bufC = new Uint8Array(size);
+  if (keep > 0) {
+    bufX.set(ox.subarray(0, keep));
+    bufY.set(oy.subarray(0, keep));
+  }
 }
 
 /**
@@ -836,9 +843,12 @@ function levelOf(va: ViewArrays, key: string): LevelSelection {
  * path between them stays beyond that edge, so this is exact culling, found without touching its points.
  * Visible chunks are thinned on first use and kept in the level.
  */
-function gatherRuns(prep: PreparedCurve, va: ViewArrays, sel: LevelSelection, tx: number, ty: number, lmLo: number, lmHi: number, vLo: number, vHi: number): number {
+function gatherRuns(prep: PreparedCurve, va: ViewArrays, sel: LevelSelection, tx: number, ty: number, lmLo: number, lmHi: number, vLo: number, vHi: number, map: PixelMap): number {
   const boxes = va.boxes as Float64Array;
   const n = prep.n;
+  const lm = prep.lm;
+  const v = va.v;
+  const { ax, bx, ay, by, yOffset } = map;
   const per = RUN_CHUNK / BOX_CHUNK;
   const nc = Math.ceil(n / RUN_CHUNK);
   let count = 0;
@@ -857,18 +867,34 @@ function gatherRuns(prep: PreparedCurve, va: ViewArrays, sel: LevelSelection, tx
       if (boxes[4 * k + 2] < lo) lo = boxes[4 * k + 2];
       if (boxes[4 * k + 3] > hi) hi = boxes[4 * k + 3];
     }
-    if (b < lmLo || a > lmHi || hi < vLo || lo > vHi) {
-      count = pushIdx(count, s);
-      if (e - 1 > s) count = pushIdx(count, e - 1);
-      continue;
-    }
-    let idx = sel.perChunk[c];
-    if (!idx) {
-      idx = thinRunsLog(prep.lm.subarray(s, e), va.v.subarray(s, e), tx, ty);
+    const off = b < lmLo || a > lmHi || hi < vLo || lo > vHi;
+    let idx = off ? null : sel.perChunk[c];
+    if (!off && !idx) {
+      idx = thinRunsLog(lm.subarray(s, e), v.subarray(s, e), tx, ty);
       for (let k = 0; k < idx.length; k++) idx[k] += s;
       sel.perChunk[c] = idx;
     }
-    for (let k = 0; k < idx.length; k++) count = pushIdx(count, idx[k]);
+    // The pixels of the kept points, written here rather than in a second pass over their indices.
+    ensureBuffers(count + (idx ? idx.length : 2), count);
+    const ox = bufX;
+    const oy = bufY;
+    if (!idx) {
+      ox[count] = ax + bx * lm[s];
+      oy[count] = ay + by * (v[s] + yOffset);
+      count++;
+      if (e - 1 > s) {
+        ox[count] = ax + bx * lm[e - 1];
+        oy[count] = ay + by * (v[e - 1] + yOffset);
+        count++;
+      }
+      continue;
+    }
+    for (let k = 0; k < idx.length; k++) {
+      const i = idx[k];
+      ox[count] = ax + bx * lm[i];
+      oy[count] = ay + by * (v[i] + yOffset);
+      count++;
+    }
   }
   return count;
 }
@@ -951,7 +977,7 @@ export function curvePixels(prep: PreparedCurve, closed: boolean, p: PixelParams
       const pow = (t: number) => 2 ** (Math.floor(2 * Math.log2(t)) / 2);
       const tx = pow(RUNS_PX / res / Math.abs(p.bx));
       const ty = pow(RUNS_PX / res / Math.abs(p.by));
-      n = gatherRuns(prep, va, levelOf(va, `B${tx},${ty}`), tx, ty, lmLo, lmHi, vLo, vHi);
+      n = gatherRuns(prep, va, levelOf(va, `B${tx},${ty}`), tx, ty, lmLo, lmHi, vLo, vHi, p);
       useA = n >= k;
     }
     if (useA) {
@@ -960,8 +986,8 @@ export function curvePixels(prep: PreparedCurve, closed: boolean, p: PixelParams
       if (idxScratch.length < k) idxScratch = new Int32Array(k * 2);
       idxScratch.set(sel);
       n = k;
+      mapSelected(prep, va.v, n, p);
     }
-    mapSelected(prep, va.v, n, p);
     n = cullOutside(n, cullRect);
   }
   if (!p.reuse) return clipToRect({ xs: bufX.slice(0, n), ys: bufY.slice(0, n), n, closed }, farRect);

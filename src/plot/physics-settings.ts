@@ -15,8 +15,17 @@ export function physicsOptsOf(physics?: PhysicsSettings): PhysicsOpts {
 
 /** Value of an E/N string ("8/3", "-1/3", "0.5", U+2212 minus accepted); NaN when unreadable. */
 export function eOverNValue(text: string | number): number {
-  return rationalToNumber(text);
+  if (typeof text === "number") return text;
+  // Every frame reads the same few model strings (several times each): parse each once (bounded).
+  let v = eOverNValues.get(text);
+  if (v === undefined) {
+    if (eOverNValues.size > 1000) eOverNValues.clear();
+    v = rationalToNumber(text);
+    eOverNValues.set(text, v);
+  }
+  return v;
 }
+const eOverNValues = new Map<string, number>();
 
 /**
  * Factor the curve's couplings are multiplied by, √(ρ_assumed/ρ_shown)/√f (src/data/rescale.ts; common
