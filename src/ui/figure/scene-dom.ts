@@ -20,6 +20,9 @@ interface Slot {
   wrap: SVGGElement | null;
   placement: string;
   tag: string;
+  /** The node and id last drawn here: an equal node next frame needs no attribute work at all. */
+  node: SceneNode | null;
+  id: string | undefined;
 }
 
 interface LayerSlot {
@@ -62,6 +65,21 @@ function fillText(el: SVGElement, spans: ReturnType<typeof textSpans>): void {
     t.textContent = span.text;
     el.appendChild(t);
   }
+}
+
+/** Whether two scene values (plain objects, arrays, strings, numbers) are equal, field by field. */
+function sameValue(a: unknown, b: unknown): boolean {
+  if (a === b) return true;
+  if (typeof a !== "object" || typeof b !== "object" || a === null || b === null) return false;
+  if (Array.isArray(a)) {
+    if (!Array.isArray(b) || a.length !== b.length) return false;
+    for (let i = 0; i < a.length; i++) if (!sameValue(a[i], b[i])) return false;
+    return true;
+  }
+  const ka = Object.keys(a);
+  if (ka.length !== Object.keys(b).length) return false;
+  for (const k of ka) if (!sameValue((a as Record<string, unknown>)[k], (b as Record<string, unknown>)[k])) return false;
+  return true;
 }
 
 function tagOf(node: SceneNode): string {
@@ -144,13 +162,21 @@ export function createSceneDom(svg: SVGSVGElement, before: Node | null, idPrefix
           const el = document.createElementNS(SVG_NS, tag);
           const wrap = node.kind === "text" ? document.createElementNS(SVG_NS, "g") : null;
           wrap?.appendChild(el);
-          slot = { el, attrs: new Map(), text: "", wrap, placement: "", tag };
+          slot = { el, attrs: new Map(), text: "", wrap, placement: "", tag, node: null, id: undefined };
           ls.slots.set(key, slot);
         }
         const id = nodeIds[i];
-        const attrs = nodeAttributes(node);
-        syncAttributes(slot.el, slot.attrs, id ? [["id", id], ...attrs] : attrs);
-        if (node.kind === "text" && slot.wrap) {
+        // Legend entries, unchanged labels and models: most of a frame's nodes equal the last ones.
+        const same = slot.id === id && slot.node !== null && sameValue(slot.node, node);
+        slot.node = node;
+        slot.id = id;
+        if (same) {
+          // Nothing to write; only its place among the layer's children is checked below.
+        } else {
+          const attrs = nodeAttributes(node);
+          syncAttributes(slot.el, slot.attrs, id ? [["id", id], ...attrs] : attrs);
+        }
+        if (!same && node.kind === "text" && slot.wrap) {
           const placement = textPlacement(node);
           if (placement !== slot.placement) {
             slot.wrap.setAttribute("transform", placement);
