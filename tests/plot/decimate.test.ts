@@ -202,6 +202,38 @@ describe("simplification of unsorted curves and closed regions", () => {
     expect(sub.every(([x, y]) => orig.has(`${Math.round(x * 100)},${Math.round(y * 100)}`))).toBe(true);
   });
 
+  test("zooming in and out, each frame's simplification equals that of a fresh copy of the curve", () => {
+    // The Douglas–Peucker selection is carried from frame to frame (grown or cut as the tolerance changes);
+    // a fresh copy has no history. The tolerances cover both directions and repeats.
+    const r = rng(12);
+    const n = 30000;
+    const m = new Float64Array(n);
+    const g = new Float64Array(n);
+    for (let i = 0; i < n; i++) {
+      const t = (2 * Math.PI * i) / (n - 1);
+      const w = 1 + 0.05 * Math.sin(17 * t) + 0.001 * (r() - 0.5);
+      m[i] = 10 ** (-4 + 0.8 * w * Math.cos(t));
+      g[i] = 10 ** (-11 + 0.6 * w * Math.sin(t));
+    }
+    const prep = prepareCurve(m, g, false);
+    const plot = { x: 0, y: 0, w: 900, h: 600 };
+    const at = (decades: number): PixelParams => {
+      const bx = 900 / decades;
+      const by = -600 / (0.75 * decades);
+      return { ax: -bx * (-4 - decades / 2), bx, ay: 600 - by * (-11 - 0.375 * decades), by, slope: 0, yOffset: 0, plot, resolution: 1, reuse: true };
+    };
+    const points = (pl: { xs: Float64Array; ys: Float64Array; n: number }) => [Array.from(pl.xs.subarray(0, pl.n)), Array.from(pl.ys.subarray(0, pl.n))];
+    let kinds = 0;
+    for (const decades of [2, 1.8, 1.65, 1.65, 1.8, 2, 2.5, 4, 1.7, 3]) {
+      const carried = points(curvePixels(prep, true, at(decades)));
+      const fresh = points(curvePixels(prepareCurve(m.slice(), g.slice(), false), true, at(decades)));
+      expect(carried[0].length).toBeGreaterThan(40);
+      expect(carried).toEqual(fresh);
+      kinds++;
+    }
+    expect(kinds).toBe(10);
+  });
+
   test("importance is parent-clamped: the kept set shrinks monotonically with the tolerance", () => {
     const r = rng(3);
     const n = 5000;
