@@ -3,6 +3,7 @@
 import type { Curve, YView } from "../data/types";
 import type { AxionConstants } from "../physics/constants";
 import type { PathNode } from "./scene-types";
+import type { Shape } from "./legend-place";
 import { curvePixels, pathDataCompact, prepareCurve, type PreparedCurve } from "./decimate";
 import { dashFor, r2, safeColour, unitInterval } from "./format";
 import { viewTransform, type LogAffine } from "./scales";
@@ -76,4 +77,43 @@ export function curveGeometry(curve: Curve, f: CurveFrame, nodeId: string): Curv
     fills.push({ kind: "path", id: `${nodeId}-region`, d: pathDataCompact(pl), fill: colour, fillOpacity: opacity, stroke: colour, strokeWidth: lw, dash, data: { ...data } });
   }
   return out;
+}
+
+/**
+ * What {@link curveGeometry} draws, as vertices (rounded to 0.01 px as the path data is) with its painted fill
+ * and stroke, for the automatic legend placement: the same shape, without writing path data and reading it
+ * back. Null when nothing is drawn.
+ */
+export function curveShape(curve: Curve, f: CurveFrame): Shape | null {
+  const prep = preparedOf(curve);
+  const closed = curve.role === "region";
+  const t = viewTransform(f.view, f.constants);
+  const pl = curvePixels(prep, closed, {
+    ...f.map,
+    slope: t.slope,
+    yOffset: t.log10Factor + Math.log10(rescaleFactor(curve.rescale)),
+    plot: f.plot,
+    resolution: f.resolution,
+    thin: f.thin,
+    reuse: true,
+  });
+  if (pl.n === 0) return null;
+  const exclusion = curve.role === "exclusion";
+  const m = pl.n + (exclusion ? 2 : 0);
+  const xs = new Float64Array(m);
+  const ys = new Float64Array(m);
+  for (let k = 0; k < pl.n; k++) {
+    xs[k] = Math.round(pl.xs[k] * 100) / 100;
+    ys[k] = Math.round(pl.ys[k] * 100) / 100;
+  }
+  if (exclusion) {
+    // Up past the plot top and back, as the drawn exclusion path closes.
+    const topY = r2(f.plot.y - 4 * f.lineWidthPx - 2);
+    xs[m - 2] = r2(pl.xs[pl.n - 1]);
+    ys[m - 2] = topY;
+    xs[m - 1] = r2(pl.xs[0]);
+    ys[m - 1] = topY;
+  }
+  const filled = curve.role !== "projection" && unitInterval(curve.fillOpacity, 0.3) > 0;
+  return { subpaths: [{ xs, ys, closed: closed || exclusion }], fill: filled, stroke: f.lineWidthPx > 0 };
 }

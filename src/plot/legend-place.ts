@@ -91,9 +91,23 @@ export interface OccupancyGrid {
 
 /** One subpath of SVG path data: its vertices in scene px and whether it was closed with Z. */
 export interface Subpath {
+  xs: ArrayLike<number>;
+  ys: ArrayLike<number>;
+  closed: boolean;
+}
+
+/** A subpath read from path data (plain arrays). */
+export interface ParsedSubpath extends Subpath {
   xs: number[];
   ys: number[];
-  closed: boolean;
+}
+
+/** Drawn content given as vertices rather than path data (what the scene builder has before writing it). */
+export interface Shape {
+  subpaths: readonly Subpath[];
+  /** Painted fill (nonzero winding) and painted stroke. */
+  fill: boolean;
+  stroke: boolean;
 }
 
 // ------------------------------------------------------------------------------------------------ path data
@@ -187,14 +201,14 @@ function readNumber(): boolean {
  * as the compact curve form writes them ("l.5-.25"). Stops at the first character it cannot read.
  * @param d path data in scene px
  */
-export function parsePathData(d: string): Subpath[] {
-  const out: Subpath[] = [];
+export function parsePathData(d: string): ParsedSubpath[] {
+  const out: ParsedSubpath[] = [];
   const n = d.length;
   src = d;
   at = 0;
   let xs: number[] = [];
   let ys: number[] = [];
-  let cur: Subpath | null = null;
+  let cur: ParsedSubpath | null = null;
   let x = 0;
   let y = 0;
   let sx = 0;
@@ -440,9 +454,13 @@ function paints(colour: string | undefined): boolean {
  * @param plot the plot area, scene px
  * @param cellPx side of a cell, scene px. @default OCCUPANCY_CELL_PX
  */
-export function occupancyGrid(nodes: readonly SceneNode[], plot: PlotRect, cellPx: number = OCCUPANCY_CELL_PX): OccupancyGrid {
+export function occupancyGrid(nodes: readonly SceneNode[], plot: PlotRect, cellPx: number = OCCUPANCY_CELL_PX, shapes: readonly Shape[] = []): OccupancyGrid {
   const g = emptyGrid(plot, cellPx);
   const scratch = fillScratch(g);
+  for (const shape of shapes) {
+    if (shape.fill) markFill(g, shape.subpaths, scratch);
+    if (shape.stroke) markStroke(g, shape.subpaths);
+  }
   for (const node of nodes) {
     if (node.kind === "text") continue;
     const stroke = paints(node.stroke) && (node.strokeWidth ?? 1) > 0 && (node.kind === "rect" || (node.strokeOpacity ?? 1) > 0);
@@ -501,6 +519,8 @@ export interface LegendChoice {
 export interface LegendPlaceInput {
   /** Drawn content to keep clear: the curve and model nodes (not grid, highlight or axes). */
   nodes: readonly SceneNode[];
+  /** More drawn content, as vertices (the scene builder's curves, without writing and reading path data). */
+  shapes?: readonly Shape[];
   /** Plot area, scene px. */
   plot: PlotRect;
   /** The legend box (scene px) in each inner corner. */
@@ -519,7 +539,7 @@ export interface LegendPlaceInput {
  * if the figure leaves room, else still the least covered corner. A pure function of its input.
  */
 export function pickLegendPlace(input: LegendPlaceInput): LegendChoice {
-  const grid = occupancyGrid(input.nodes, input.plot, input.cellPx ?? OCCUPANCY_CELL_PX);
+  const grid = occupancyGrid(input.nodes, input.plot, input.cellPx ?? OCCUPANCY_CELL_PX, input.shapes);
   const coverage = {} as Record<LegendCorner, number>;
   let best: LegendCorner = LEGEND_CORNERS[0];
   for (const corner of LEGEND_CORNERS) {

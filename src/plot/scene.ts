@@ -4,11 +4,11 @@ import { bandCancels } from "../physics/coupling";
 import type { Curve, LegendPlace, Model, Project, YView } from "../data/types";
 import type { PathNode, Scene, SceneLayer, SceneNode, ScaleConfig } from "./scene-types";
 import { axesNodes, axisTicks, gridNodes, verticalTickOpts, yTitle, type AxesFrame } from "./axes";
-import { curveGeometry } from "./curves";
+import { curveGeometry, curveShape } from "./curves";
 import { dashFor, plainOrScientificRuns, powerOfTenRuns, r2, safeColour, unitInterval } from "./format";
 import { computeLayout, cornerLegendOrigin, fontsFor, presetOf, PX_PER_IN, type Fonts, type Layout, type LegendCorner } from "./layout";
 import { legendLabelText, legendNodes, measureLegend, type LegendBox, type LegendEntry } from "./legend";
-import { LEGEND_CORNERS, OUTSIDE_MIN_PLOT_FRACTION, PLACEMENT_RESOLUTION, pickLegendPlace, placementCurve } from "./legend-place";
+import { LEGEND_CORNERS, OUTSIDE_MIN_PLOT_FRACTION, PLACEMENT_RESOLUTION, pickLegendPlace, placementCurve, type Shape } from "./legend-place";
 import { modelGeometry } from "./models";
 import { constantsOf, eOverNValue, rescaleNote } from "./physics-settings";
 import { logAffine, sanitizeDomain, viewTransform } from "./scales";
@@ -129,10 +129,11 @@ function autoLegendPlace(project: Project, f: AutoLegendFrame): LegendCorner | "
   const map = logAffine(f.scales, plot);
   const slope = viewTransform(f.view, f.constants).slope;
   const nodes: SceneNode[] = [];
-  project.curves.forEach((cv, i) => {
+  const shapes: Shape[] = [];
+  project.curves.forEach((cv) => {
     if (!cv.visible) return;
-    const g = curveGeometry(placementCurve(cv, slope), { constants: f.constants, view: f.view, map, plot, lineWidthPx: f.fonts.dataLinePx, resolution: PLACEMENT_RESOLUTION }, `place-curve-${i + 1}`);
-    nodes.push(...g.fills, ...g.lines);
+    const shape = curveShape(placementCurve(cv, slope), { constants: f.constants, view: f.view, map, plot, lineWidthPx: f.fonts.dataLinePx, resolution: PLACEMENT_RESOLUTION });
+    if (shape) shapes.push(shape);
   });
   project.models.forEach((m, i) => {
     if (!m.visible) return;
@@ -144,7 +145,7 @@ function autoLegendPlace(project: Project, f: AutoLegendFrame): LegendCorner | "
     const o = cornerLegendOrigin(f.layout.plot, corner, f.box.widthPx, f.box.heightPx, f.fonts);
     boxes[corner] = { x: o.x, y: o.y, w: f.box.widthPx, h: f.box.heightPx };
   }
-  return pickLegendPlace({ nodes, plot, boxes, outsideFits: f.outsideFits }).place;
+  return pickLegendPlace({ nodes, shapes, plot, boxes, outsideFits: f.outsideFits }).place;
 }
 
 function physicalOf(px: number): string {
