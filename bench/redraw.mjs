@@ -5,6 +5,7 @@
 // Options (environment): AXBAND_BENCH_STEPS (zoom steps, default 40), AXBAND_BENCH_PLAIN_STEPS (full draws,
 // default 6), AXBAND_BENCH_DETAIL=1 (every step), AXBAND_BENCH_DOM_ONLY=1 (DOM cost of prebuilt scenes only),
 // AXBAND_BENCH_MINIFY=0 (readable bundle for profiling), AXBAND_BENCH_NO_TRACE=1 (skip the painting trace),
+// AXBAND_BENCH_LEGEND=auto (the legend place; default outside-right: the automatic place costs more, see DEVELOPERS.md),
 // CHROMIUM_PATH (default /usr/bin/chromium).
 import { spawnSync } from "node:child_process";
 import { createServer } from "node:http";
@@ -20,6 +21,7 @@ const CURVES = 20;
 const POINTS = 100000;
 const STEPS = Number(process.env.AXBAND_BENCH_STEPS ?? 40);
 const PLAIN_STEPS = Number(process.env.AXBAND_BENCH_PLAIN_STEPS ?? 6);
+const LEGEND = process.env.AXBAND_BENCH_LEGEND ?? "outside-right";
 
 function log(...a) {
   console.log(...a);
@@ -129,14 +131,14 @@ async function main() {
       }
       return;
     }
-    const r = await page.evaluate((o) => window.runBench(o), { steps: STEPS, plainSteps: PLAIN_STEPS });
+    const r = await page.evaluate((o) => window.runBench(o), { steps: STEPS, plainSteps: PLAIN_STEPS, legend: LEGEND });
     if (errors.length) log("page errors:", errors.join("\n"));
     if (process.env.AXBAND_BENCH_DETAIL) {
       const steps = await page.evaluate(() => window.benchSteps);
       for (const st of steps) log(`  span ${st.span.toFixed(3)} dec  build ${st.build.toFixed(1)}  set ${st.set.toFixed(1)}  dom ${st.dom.toFixed(1)}  chars ${st.chars}`);
     }
     const f = (x) => x.toFixed(2).padStart(9);
-    log(`inputs: ${r.curves} invented curves, ${r.points.toLocaleString("en")} points; slide preset 960×540, devicePixelRatio ${r.devicePixelRatio}`);
+    log(`inputs: ${r.curves} invented curves, ${r.points.toLocaleString("en")} points; slide preset 960×540, devicePixelRatio ${r.devicePixelRatio}, legend ${LEGEND}`);
     log(`first draw (builds the per-curve caches): ${r.firstDrawMs.toFixed(1)} ms`);
     log(`zoom step, median over ${r.steps} steps (in ×0.8 per step, then out), drawn by the app's SceneSvg:`);
     log(`                      build ms    DOM ms  total ms   path chars`);
@@ -151,7 +153,7 @@ async function main() {
     const calm = await browser.newPage({ viewport: { width: 1280, height: 800 } });
     await calm.goto(`http://127.0.0.1:${port}/`);
     await calm.waitForSelector("body[data-ready='1']", { timeout: 60000 });
-    const settled = await calm.evaluate((o) => window.runBench(o), { steps: STEPS, plainSteps: 0, settleMs: 100 });
+    const settled = await calm.evaluate((o) => window.runBench(o), { steps: STEPS, plainSteps: 0, settleMs: 100, legend: LEGEND });
     await calm.close();
     log(`  isolated steps     ${f(settled.thinned.buildMs)} ${f(settled.thinned.domMs)} ${f(settled.thinned.totalMs)}   (each frame painted before the next step, 100 ms apart)`);
     log(`target: median zoom step ≤ 8 ms; measured ${r.thinned.totalMs.toFixed(2)} ms back to back (one step per frame), ${settled.thinned.totalMs.toFixed(2)} ms for isolated steps`);
@@ -165,7 +167,7 @@ async function main() {
       await tab.goto(`http://127.0.0.1:${port}/`);
       await tab.waitForSelector("body[data-ready='1']", { timeout: 60000 });
       await browser.startTracing(tab, { categories: ["devtools.timeline", "disabled-by-default-devtools.timeline", "blink.user_timing"] });
-      const t = await tab.evaluate((o) => window.runBench(o), { steps: STEPS, plainSteps: 0, settleMs: 100 });
+      const t = await tab.evaluate((o) => window.runBench(o), { steps: STEPS, plainSteps: 0, settleMs: 100, legend: LEGEND });
       const events = JSON.parse((await browser.stopTracing()).toString()).traceEvents;
       // Only the painting of the zoom steps: between the page's marks (first draws and earlier frames left out).
       const mark = (name) => events.find((e) => e.name === name)?.ts;

@@ -11,7 +11,7 @@ interface Manifest {
 const ROLE: Record<string, CurveRole> = { scan: "exclusion", plateau: "exclusion", projection: "projection", region: "region" };
 const COLOURS = ["#D55E00", "#CC79A7", "#E69F00", "#009E73", "#000000", "#56B4E9", "#0072B2", "#F0E442"];
 
-async function loadProject(): Promise<Project> {
+async function loadProject(legend: Project["figure"]["legend"] = "outside-right"): Promise<Project> {
   const manifest: Manifest = await (await fetch("./curves.json")).json();
   const buf = new Float64Array(await (await fetch("./curves.bin")).arrayBuffer());
   let off = 0;
@@ -78,7 +78,7 @@ async function loadProject(): Promise<Project> {
       yView: "coupling",
       topAxis: "fa",
       grid: true,
-      legend: "outside-right",
+      legend,
       fontPt: 12,
       title: "",
     },
@@ -146,8 +146,8 @@ export interface BenchResult {
   devicePixelRatio: number;
 }
 
-async function run(opts: { steps: number; plainSteps: number; warmSteps?: number; profile?: boolean; repeat?: number; renderer?: "app" | "scene-dom"; strip?: "text" | "curves"; settleMs?: number; look?: "nofill" | "nostroke" | "noclip" | "noopacity" | "nodash" | "thin" | "boxfill" }): Promise<BenchResult> {
-  const project = await loadProject();
+async function run(opts: { steps: number; plainSteps: number; legend?: Project["figure"]["legend"]; warmSteps?: number; profile?: boolean; repeat?: number; renderer?: "app" | "scene-dom"; strip?: "text" | "curves"; settleMs?: number; look?: "nofill" | "nostroke" | "noclip" | "noopacity" | "nodash" | "thin" | "boxfill" }): Promise<BenchResult> {
+  const project = await loadProject(opts.legend);
   const host = document.getElementById("plot")!;
   host.textContent = "";
   // The app's renderer by default: what the figure does on every zoom step.
