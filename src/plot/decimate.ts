@@ -999,7 +999,6 @@ export function curvePixels(prep: PreparedCurve, closed: boolean, p: PixelParams
     const vLo = (cullRect.y1 - p.ay) / p.by - p.yOffset;
     const vHi = (cullRect.y0 - p.ay) / p.by - p.yOffset;
     const scale = Math.max(Math.abs(p.bx), Math.abs(p.by));
-    const order = va.order as Int32Array;
     const impDesc = va.impDesc as Float64Array;
     // Candidate A, Douglas–Peucker: the points above the tolerance are a prefix of the importance order.
     const tA = DP_ONLY_PX / res / scale;
