@@ -41,21 +41,27 @@ export function preparedOf(curve: Pick<Curve, "role" | "keepOrder" | "massEv" | 
   return prepareCurve(curve.massEv, curve.gInvGeV, drawsSorted(curve));
 }
 
-/** Scene nodes of one curve (fills and lines apart, so that every line can go over every fill). */
-export function curveGeometry(curve: Curve, f: CurveFrame, nodeId: string): CurveGeometry {
-  const prep = preparedOf(curve);
-  const closed = curve.role === "region";
+/**
+ * A curve's pixels for this frame, in the thinning's scratch buffers: valid until the next curve is thinned,
+ * so callers use them at once.
+ */
+function framePixels(curve: Curve, f: CurveFrame) {
   const t = viewTransform(f.view, f.constants);
-  const pl = curvePixels(prep, closed, {
+  return curvePixels(preparedOf(curve), curve.role === "region", {
     ...f.map,
     slope: t.slope,
     yOffset: t.log10Factor + Math.log10(rescaleFactor(curve.rescale)),
     plot: f.plot,
     resolution: f.resolution,
     thin: f.thin,
-    // Used at once below: its path data is written before the next curve is thinned.
     reuse: true,
   });
+}
+
+/** Scene nodes of one curve (fills and lines apart, so that every line can go over every fill). */
+export function curveGeometry(curve: Curve, f: CurveFrame, nodeId: string): CurveGeometry {
+  const prep = preparedOf(curve);
+  const pl = framePixels(curve, f);
   const colour = safeColour(curve.colour, "#D55E00");
   const opacity = unitInterval(curve.fillOpacity, 0.3);
   const lw = f.lineWidthPx;
@@ -85,18 +91,8 @@ export function curveGeometry(curve: Curve, f: CurveFrame, nodeId: string): Curv
  * back. Null when nothing is drawn.
  */
 export function curveShape(curve: Curve, f: CurveFrame): Shape | null {
-  const prep = preparedOf(curve);
   const closed = curve.role === "region";
-  const t = viewTransform(f.view, f.constants);
-  const pl = curvePixels(prep, closed, {
-    ...f.map,
-    slope: t.slope,
-    yOffset: t.log10Factor + Math.log10(rescaleFactor(curve.rescale)),
-    plot: f.plot,
-    resolution: f.resolution,
-    thin: f.thin,
-    reuse: true,
-  });
+  const pl = framePixels(curve, f);
   if (pl.n === 0) return null;
   const exclusion = curve.role === "exclusion";
   const m = pl.n + (exclusion ? 2 : 0);

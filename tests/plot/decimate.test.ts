@@ -160,9 +160,9 @@ describe("simplification of unsorted curves and closed regions", () => {
     return Math.hypot(px - ax - t * dx, py - ay - t * dy);
   }
 
-  test("a wobbly region stays closed and within 0.5 px of the original (Douglas & Peucker, Canadian Cartographer 10 (1973) 112)", () => {
-    const r = rng(11);
-    const n = 20000;
+  /** An ellipse in log space (around 10⁻⁴ eV, 10⁻¹¹ GeV⁻¹) with a slow wobble and a little noise. */
+  function wobblyRegion(n: number, seed: number) {
+    const r = rng(seed);
     const m = new Float64Array(n);
     const g = new Float64Array(n);
     for (let i = 0; i < n; i++) {
@@ -171,6 +171,12 @@ describe("simplification of unsorted curves and closed regions", () => {
       m[i] = 10 ** (-4 + 0.8 * w * Math.cos(t));
       g[i] = 10 ** (-11 + 0.6 * w * Math.sin(t));
     }
+    return { m, g };
+  }
+
+  test("a wobbly region stays closed and within 0.5 px of the original (Douglas & Peucker, Canadian Cartographer 10 (1973) 112)", () => {
+    const n = 20000;
+    const { m, g } = wobblyRegion(n, 11);
     const prep = prepareCurve(m, g, false);
     const plot = { x: 0, y: 0, w: 900, h: 600 };
     const bx = 900 / 2; // 2 decades across
@@ -205,16 +211,7 @@ describe("simplification of unsorted curves and closed regions", () => {
   test("zooming in and out, each frame's simplification equals that of a fresh copy of the curve", () => {
     // The Douglas–Peucker selection is carried from frame to frame (grown or cut as the tolerance changes);
     // a fresh copy has no history. The tolerances cover both directions and repeats.
-    const r = rng(12);
-    const n = 30000;
-    const m = new Float64Array(n);
-    const g = new Float64Array(n);
-    for (let i = 0; i < n; i++) {
-      const t = (2 * Math.PI * i) / (n - 1);
-      const w = 1 + 0.05 * Math.sin(17 * t) + 0.001 * (r() - 0.5);
-      m[i] = 10 ** (-4 + 0.8 * w * Math.cos(t));
-      g[i] = 10 ** (-11 + 0.6 * w * Math.sin(t));
-    }
+    const { m, g } = wobblyRegion(30000, 12);
     const prep = prepareCurve(m, g, false);
     const plot = { x: 0, y: 0, w: 900, h: 600 };
     const at = (decades: number): PixelParams => {
