@@ -166,13 +166,12 @@ export function createSceneDom(svg: SVGSVGElement, before: Node | null, idPrefix
           ls.slots.set(key, slot);
         }
         const id = nodeIds[i];
-        // Legend entries, unchanged labels and models: most of a frame's nodes equal the last ones.
+        // Legend entries, unchanged labels and models: most of a frame's nodes equal the last ones, and an
+        // equal node needs nothing written (only its place among the layer's children is checked below).
         const same = slot.id === id && slot.node !== null && sameValue(slot.node, node);
         slot.node = node;
         slot.id = id;
-        if (same) {
-          // Nothing to write; only its place among the layer's children is checked below.
-        } else {
+        if (!same) {
           const attrs = nodeAttributes(node);
           syncAttributes(slot.el, slot.attrs, id ? [["id", id], ...attrs] : attrs);
         }
