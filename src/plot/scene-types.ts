@@ -95,4 +95,6 @@ export interface Scene {
   scales: ScaleConfig;
   fontFamily: string;
   layers: SceneLayer[];
+  /** Where an "auto" legend was put (a corner or outside right); absent for a fixed place or no legend. */
+  autoLegendPlace?: "top-left" | "top-right" | "bottom-left" | "bottom-right" | "outside-right";
 }

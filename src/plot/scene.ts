@@ -44,6 +44,12 @@ export interface BuildSceneOpts {
   physical?: boolean;
   /** Thin curves to pixel resolution; false draws every point (only for comparisons). @default true */
   thin?: boolean;
+  /**
+   * For an "auto" legend: keep it at this place (a scene's `autoLegendPlace`) instead of choosing again. The
+   * figure holds the legend still while the user zooms or pans, and places it afresh once the view rests;
+   * exports never pass it. Ignored for a fixed place.
+   */
+  holdLegend?: LegendCorner | "outside-right";
 }
 
 function modelNotes(m: Model, c: ReturnType<typeof constantsOf>): string[] {
@@ -198,6 +204,7 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   let legendPlace: LegendPlace = legendSetting;
   const legendBox = measureFor(legendPlace);
   let layout: Layout | null = null;
+  let autoPlace: LegendCorner | "outside-right" | undefined;
   if (legendPlace === "auto") {
     // Outside right only when no label is cut there and the plot keeps most of the width.
     const outsideFits = () => {
@@ -207,7 +214,10 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
       return lo.plot.w >= OUTSIDE_MIN_PLOT_FRACTION * widthPx && ob.heightPx <= lo.plot.h;
     };
     const inside = layoutFor("auto", legendBox);
-    legendPlace = entries.length ? autoLegendPlace(project, { constants: c, view, scales, fonts, box: legendBox, layout: inside, outsideFits }) : LEGEND_CORNERS[0];
+    legendPlace = !entries.length
+      ? LEGEND_CORNERS[0]
+      : (opts.holdLegend ?? autoLegendPlace(project, { constants: c, view, scales, fonts, box: legendBox, layout: inside, outsideFits }));
+    autoPlace = legendPlace;
     // Outside right keeps the box: outsideFits found no label cut at the narrower limit, so none is cut at
     // either. An inner corner leaves the margins as they are: only the legend's origin changes.
     if (legendPlace !== "outside-right") {
@@ -298,6 +308,7 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
     { id: "legend", clip: false, nodes: legendNodes(entries, legendBox, layout.legendX, layout.legendY, fonts.legendPx), data: { testid: "legend" } },
   ];
   const scene: Scene = { widthPx: r2(widthPx), heightPx: r2(heightPx), plot, scales, fontFamily: FONT_FAMILY, layers };
+  if (autoPlace && entries.length) scene.autoLegendPlace = autoPlace;
   if (opts.physical !== false) {
     const custom = opts.widthPx !== undefined || opts.heightPx !== undefined;
     scene.widthPhysical = custom ? physicalOf(widthPx) : preset.widthPhysical;

@@ -151,8 +151,10 @@ describe("automatic legend placement in the scene", () => {
     const inside = buildScene({ ...project(curves), figure: { ...project(curves).figure, legend: "top-right" } });
     expect(slide.plot.w).toBeLessThan(inside.plot.w);
     expect(slide.plot.w).toBeGreaterThanOrEqual(OUTSIDE_MIN_PLOT_FRACTION * slide.widthPx);
-    // Exactly the figure a fixed "outside-right" legend gives.
-    expect(slide).toEqual(buildScene({ ...project(curves), figure: { ...project(curves).figure, legend: "outside-right" } }));
+    // Exactly the figure a fixed "outside-right" legend gives, and the scene says where it went.
+    const { autoLegendPlace: slidePlace, ...slideRest } = slide;
+    expect(slidePlace).toBe("outside-right");
+    expect(slideRest).toEqual(buildScene({ ...project(curves), figure: { ...project(curves).figure, legend: "outside-right" } }));
     // The same content with the demo's seven long labels on the single-column preset (8.6 cm): no room outside.
     const demo = defaultProject();
     const crowded = { ...demo, curves: [...demo.curves, block("all", [M_LO, M_HI], [G_LO, G_HI])], figure: { ...demo.figure, preset: "single-column" as const, legend: "auto" as const } };
@@ -170,7 +172,25 @@ describe("automatic legend placement in the scene", () => {
     const place = placeOf(auto);
     expect(place).toBe("bottom-right");
     const fixed = buildScene({ ...p, figure: { ...p.figure, legend: place as LegendPlace } });
-    expect(auto).toEqual(fixed);
+    const { autoLegendPlace, ...rest } = auto;
+    expect(autoLegendPlace).toBe(place);
+    expect(fixed.autoLegendPlace).toBeUndefined();
+    expect(rest).toEqual(fixed);
+  });
+
+  test("a held place (the figure during a zoom or pan) is used as given, for an auto legend only", () => {
+    const p = project([block("tr", [1e-4, M_HI], [1e-13, G_HI]), block("tl", [M_LO, 1e-5], [1e-13, G_HI])]);
+    expect(buildScene(p).autoLegendPlace).toBe("bottom-right");
+    // Held at the top left, where the placement would not put it: the figure of a fixed top-left legend.
+    const held = buildScene(p, { holdLegend: "top-left" });
+    const { autoLegendPlace, ...rest } = held;
+    expect(autoLegendPlace).toBe("top-left");
+    expect(rest).toEqual(buildScene({ ...p, figure: { ...p.figure, legend: "top-left" } }));
+    const heldOutside = buildScene(p, { holdLegend: "outside-right" });
+    expect(placeOf(heldOutside)).toBe("outside-right");
+    // A fixed place ignores the hold.
+    const fixed = { ...p, figure: { ...p.figure, legend: "bottom-left" as const } };
+    expect(buildScene(fixed, { holdLegend: "top-left" })).toEqual(buildScene(fixed));
   });
 
   test("deterministic: the same scene twice, no Math.random, no dependence on the highlight", () => {

@@ -10,7 +10,8 @@ import { buildScene } from "../../src/plot/scene";
 import { writeSvg } from "../../src/plot/svg";
 import { defaultProject } from "../../src/data/demo";
 import { SceneSvg } from "../../src/ui/figure/SceneSvg";
-import { FigureView } from "../../src/ui/figure/FigureView";
+import { FigureView, LEGEND_HOLD_MS } from "../../src/ui/figure/FigureView";
+import { newCurve } from "../../src/data/defaults";
 import { ModelsPanel } from "../../src/ui/models/ModelsPanel";
 import { FigureSettings } from "../../src/ui/settings/FigureSettings";
 import { ConstantsPanel } from "../../src/ui/settings/ConstantsPanel";
@@ -108,6 +109,35 @@ describe("FigureView", () => {
     expect(useAxband.getState().history.past).toHaveLength(1);
     fireEvent.keyDown(svg, { key: "0" });
     expect(useAxband.getState().project.figure.massRangeEv).toEqual(f0.massRangeEv);
+  });
+
+  test("an automatic legend holds its place while the view moves, and is placed afresh once the view rests", async () => {
+    // An invented block over the top of the right part of the mass range: the legend starts top left. Panned
+    // three decades to the right, the block sits top left and the free corner is top right.
+    const p = defaultProject();
+    p.models = [];
+    p.curves = [newCurve({ id: "block", label: "Block (invented)", role: "region", keepOrder: true, massEv: Float64Array.from([1e-4, 1e-2, 1e-2, 1e-4]), gInvGeV: Float64Array.from([1e-12, 1e-12, 1e-9, 1e-9]) })];
+    p.figure = { ...p.figure, massRangeEv: [1e-7, 1e-2], yRange: [1e-17, 1e-9], legend: "auto" };
+    resetStore(p);
+    render(<FigureView />);
+    const svg = screen.getByTestId("plot").querySelector("svg")!;
+    const boxX = () => Number(svg.querySelector('rect[id$="legend-box"]')!.getAttribute("x"));
+    const plotBox = () => svg.getAttribute("data-plot-box")!.split(",").map(Number);
+    const [px, , pw] = plotBox();
+    const start = boxX();
+    expect(start).toBeLessThan(px + pw / 2);
+    for (let k = 0; k < 6; k++) fireEvent.keyDown(svg, { key: "ArrowRight" });
+    await nextFrame();
+    const f = useAxband.getState().project.figure;
+    expect(Math.log10(f.massRangeEv[0])).toBeCloseTo(-4, 6);
+    // Moved, but the legend stays where it was...
+    expect(boxX()).toBe(start);
+    // ...until the view has rested: then it goes where a fresh placement puts it, as the export would.
+    await act(() => new Promise<void>((r) => setTimeout(r, LEGEND_HOLD_MS + 50)));
+    const rested = boxX();
+    expect(rested).toBeGreaterThan(px + pw / 2);
+    const fresh = buildScene(useAxband.getState().project, { physical: false });
+    expect(fresh.autoLegendPlace).toBe("top-right");
   });
 
   test("zooming re-renders the figure but not the models, constants or figure-settings panels (except the ranges)", async () => {
