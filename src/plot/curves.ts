@@ -45,9 +45,9 @@ export function preparedOf(curve: Pick<Curve, "role" | "keepOrder" | "massEv" | 
  * A curve's pixels for this frame, in the thinning's scratch buffers: valid until the next curve is thinned,
  * so callers use them at once.
  */
-function framePixels(curve: Curve, f: CurveFrame) {
+function framePixels(curve: Curve, prep: PreparedCurve, f: CurveFrame) {
   const t = viewTransform(f.view, f.constants);
-  return curvePixels(preparedOf(curve), curve.role === "region", {
+  return curvePixels(prep, curve.role === "region", {
     ...f.map,
     slope: t.slope,
     yOffset: t.log10Factor + Math.log10(rescaleFactor(curve.rescale)),
@@ -61,7 +61,7 @@ function framePixels(curve: Curve, f: CurveFrame) {
 /** Scene nodes of one curve (fills and lines apart, so that every line can go over every fill). */
 export function curveGeometry(curve: Curve, f: CurveFrame, nodeId: string): CurveGeometry {
   const prep = preparedOf(curve);
-  const pl = framePixels(curve, f);
+  const pl = framePixels(curve, prep, f);
   const colour = safeColour(curve.colour, "#D55E00");
   const opacity = unitInterval(curve.fillOpacity, 0.3);
   const lw = f.lineWidthPx;
@@ -92,7 +92,7 @@ export function curveGeometry(curve: Curve, f: CurveFrame, nodeId: string): Curv
  */
 export function curveShape(curve: Curve, f: CurveFrame): Shape | null {
   const closed = curve.role === "region";
-  const pl = framePixels(curve, f);
+  const pl = framePixels(curve, preparedOf(curve), f);
   if (pl.n === 0) return null;
   const exclusion = curve.role === "exclusion";
   const m = pl.n + (exclusion ? 2 : 0);

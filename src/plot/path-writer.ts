@@ -18,12 +18,6 @@ export function beginPath(): void {
   pos = 0;
 }
 
-/** Append one ASCII character (a command letter or a separator). */
-export function writeChar(code: number): void {
-  ensure(1);
-  buf[pos++] = code;
-}
-
 /**
  * Append an integer count of hundredths as a decimal number: 12345 → "123.45", -50 → "-.5", 300 → "3".
  * Fractions drop the leading zero (".5"; SVG 1.1 path grammar allows it) as the compact paths are mostly
@@ -207,4 +201,3 @@ export function isRecentPath(d: string): boolean {
   return false;
 }
 
-export const CH = { M: 77, L: 76, Z: 90, l: 108, h: 104, v: 118, space: 32 } as const;

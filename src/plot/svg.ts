@@ -69,6 +69,10 @@ function paint(value: string | undefined): string | undefined {
 const writtenIds = new Map<string, Map<string, string>>();
 let writtenCount = 0;
 function writtenId(prefix: string, id: string): string {
+  if (writtenCount > 10_000) {
+    writtenIds.clear();
+    writtenCount = 0;
+  }
   let byId = writtenIds.get(prefix);
   if (!byId) {
     byId = new Map();
@@ -76,12 +80,6 @@ function writtenId(prefix: string, id: string): string {
   }
   let out = byId.get(id);
   if (out === undefined) {
-    if (writtenCount > 10_000) {
-      writtenIds.clear();
-      writtenCount = 0;
-      byId = new Map();
-      writtenIds.set(prefix, byId);
-    }
     out = prefix + id.replace(ID_SAFE, "_");
     byId.set(id, out);
     writtenCount++;
