@@ -17,7 +17,14 @@ export default defineConfig({
         test: {
           name: "unit",
           environment: "node",
-          include: ["tests/physics/**/*.test.ts", "tests/data/**/*.test.ts", "tests/plot/**/*.test.ts", "tests/cli/**/*.test.ts"],
+          include: [
+            "tests/physics/**/*.test.ts",
+            "tests/project/**/*.test.ts",
+            "tests/formats/**/*.test.ts",
+            "tests/analysis/**/*.test.ts",
+            "tests/plot/**/*.test.ts",
+            "tests/cli/**/*.test.ts",
+          ],
           testTimeout: 60_000,
         },
       },

@@ -10,7 +10,15 @@ import { arg, benchSets, median, ROOT } from "./import-data.mjs";
 
 const runs = Number(arg("runs", "5"));
 const CHROMIUM = process.env.CHROMIUM_PATH || "/usr/bin/chromium";
-const ARGS = ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"];
+const ARGS = [
+  "--no-sandbox",
+  "--disable-gpu",
+  "--disable-quic",
+  "--no-first-run",
+  "--disable-background-networking",
+  "--disable-component-update",
+  "--disable-sync",
+];
 
 if (!existsSync(CHROMIUM)) {
   console.log(`no Chromium at ${CHROMIUM} (set CHROMIUM_PATH); skipping the browser import benchmark`);
@@ -65,11 +73,19 @@ try {
     const worker = rate(r.workerEndToEnd);
     const fromFile = rate(r.mainThreadFromFile);
     const alone = rate(r.mainThreadParserAlone);
-    console.log(`\n${set.name}: ${set.files.length} file(s), ${mb.toFixed(1)} MB, ${r.rows.toLocaleString("en")} rows${r.worker ? "" : " (NO worker: fallback measured)"}`);
-    console.log(`  worker end to end (File → worker → transferred arrays)  ${worker.toFixed(1).padStart(7)} MB/s  ×${(worker / alone).toFixed(2)} of parser alone`);
-    console.log(`  main thread from File (sliced, no worker)                ${fromFile.toFixed(1).padStart(7)} MB/s  ×${(fromFile / alone).toFixed(2)} of parser alone`);
+    console.log(
+      `\n${set.name}: ${set.files.length} file(s), ${mb.toFixed(1)} MB, ${r.rows.toLocaleString("en")} rows${r.worker ? "" : " (NO worker: fallback measured)"}`,
+    );
+    console.log(
+      `  worker end to end (File → worker → transferred arrays)  ${worker.toFixed(1).padStart(7)} MB/s  ×${(worker / alone).toFixed(2)} of parser alone`,
+    );
+    console.log(
+      `  main thread from File (sliced, no worker)                ${fromFile.toFixed(1).padStart(7)} MB/s  ×${(fromFile / alone).toFixed(2)} of parser alone`,
+    );
     console.log(`  parser alone on the main thread (text already decoded)   ${alone.toFixed(1).padStart(7)} MB/s`);
-    console.log(`  main-thread long tasks during the worker runs: ${r.longTasks.count} (longest ${r.longTasks.maxMs.toFixed(0)} ms); progress messages: ${r.progressMessages}`);
+    console.log(
+      `  main-thread long tasks during the worker runs: ${r.longTasks.count} (longest ${r.longTasks.maxMs.toFixed(0)} ms); progress messages: ${r.progressMessages}`,
+    );
   }
 } finally {
   await browser?.close();

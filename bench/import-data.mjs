@@ -10,17 +10,24 @@ export const OUT = join(ROOT, "bench", ".out");
 
 /** Where make-curves.mjs lives: ../shared/bench next to the repository (also in CI), or $AXBAND_SHARED/bench. */
 function makeCurvesScript() {
-  const candidates = [process.env.AXBAND_SHARED && join(process.env.AXBAND_SHARED, "bench", "make-curves.mjs"), join(ROOT, "..", "shared", "bench", "make-curves.mjs")];
+  const candidates = [
+    process.env.AXBAND_SHARED && join(process.env.AXBAND_SHARED, "bench", "make-curves.mjs"),
+    join(ROOT, "..", "shared", "bench", "make-curves.mjs"),
+  ];
   const found = candidates.find((p) => p && existsSync(p));
   if (!found) {
-    throw new Error(`make-curves.mjs not found (looked in ${candidates.filter(Boolean).join(", ")}); set AXBAND_SHARED to the shared folder`);
+    throw new Error(
+      `make-curves.mjs not found (looked in ${candidates.filter(Boolean).join(", ")}); set AXBAND_SHARED to the shared folder`,
+    );
   }
   return found;
 }
 
 function ensureSet(dir, args) {
   if (existsSync(join(dir, "manifest.json"))) return;
-  const r = spawnSync(process.execPath, [makeCurvesScript(), "--out", dir, ...args], { stdio: ["ignore", "inherit", "inherit"] });
+  const r = spawnSync(process.execPath, [makeCurvesScript(), "--out", dir, ...args], {
+    stdio: ["ignore", "inherit", "inherit"],
+  });
   if (r.status !== 0) throw new Error(`make-curves.mjs failed (${r.status ?? r.signal})`);
 }
 

@@ -1,7 +1,12 @@
 // Page driven by bench/import-browser.mjs: imports the bench files through the import worker (end to end:
 // File → worker stream read → parse → transferred Float64Arrays) and, for comparison, on the main thread.
-import { parseCurveText } from "../src/data/csv";
-import { disposeImportWorker, importInWorker, importWorkerAvailable, setImportWorkerEnabled } from "../src/worker/import-client";
+import { parseCurveText } from "../src/formats/csv";
+import {
+  disposeImportWorker,
+  importInWorker,
+  importWorkerAvailable,
+  setImportWorkerEnabled,
+} from "../src/worker/import-client";
 
 export interface BenchFile {
   name: string;
@@ -33,7 +38,9 @@ async function timeRuns(runs: number, fn: () => Promise<unknown>): Promise<numbe
 }
 
 async function runSet(files: BenchFile[], runs: number): Promise<BenchSetResult> {
-  const blobs = await Promise.all(files.map(async (f) => new File([await (await fetch(f.url)).blob()], f.name, { type: "text/csv" })));
+  const blobs = await Promise.all(
+    files.map(async (f) => new File([await (await fetch(f.url)).blob()], f.name, { type: "text/csv" })),
+  );
   const texts = await Promise.all(blobs.map((b) => b.text()));
   const bytes = blobs.reduce((s, b) => s + b.size, 0);
   let rows = 0;
@@ -60,7 +67,9 @@ async function runSet(files: BenchFile[], runs: number): Promise<BenchSetResult>
   });
   await new Promise((resolve) => setTimeout(resolve, 200));
   observer.disconnect();
-  const longTasks = entries.filter((e) => windows.some(([a, b]) => e.start >= a && e.start <= b)).map((e) => e.duration);
+  const longTasks = entries
+    .filter((e) => windows.some(([a, b]) => e.start >= a && e.start <= b))
+    .map((e) => e.duration);
 
   setImportWorkerEnabled(false);
   const mainThreadFromFile = await timeRuns(runs, async () => {

@@ -8,7 +8,7 @@ import { csvParseRows } from "d3-dsv";
 import { arg, benchSets, median } from "./import-data.mjs";
 
 const runs = Number(arg("runs", "7"));
-const csv = await tsImport("../src/data/csv.ts", import.meta.url);
+const csv = await tsImport("../src/formats/csv.ts", import.meta.url);
 
 /** What a user of d3-dsv would write for the same job: rows of strings, then numbers into typed arrays. */
 function d3ToArrays(text) {
@@ -43,7 +43,8 @@ const methods = [
 
 function same(a, b) {
   if (a.massEv.length !== b.massEv.length) return false;
-  for (let i = 0; i < a.massEv.length; i++) if (a.massEv[i] !== b.massEv[i] || a.gInvGeV[i] !== b.gInvGeV[i]) return false;
+  for (let i = 0; i < a.massEv.length; i++)
+    if (a.massEv[i] !== b.massEv[i] || a.gInvGeV[i] !== b.gInvGeV[i]) return false;
   return true;
 }
 
@@ -53,7 +54,9 @@ for (const set of benchSets()) {
   const bytes = set.files.reduce((s, f) => s + f.bytes, 0);
   const rows = texts.reduce((s, t) => s + csv.parseCurveText(t).massEv.length, 0);
   const agree = texts.every((t) => same(csv.parseCurveText(t), d3ToArrays(t)));
-  console.log(`\n${set.name}: ${set.files.length} file(s), ${(bytes / 1e6).toFixed(1)} MB, ${rows.toLocaleString("en")} rows; axband and d3-dsv give identical arrays: ${agree ? "yes" : "NO"}`);
+  console.log(
+    `\n${set.name}: ${set.files.length} file(s), ${(bytes / 1e6).toFixed(1)} MB, ${rows.toLocaleString("en")} rows; axband and d3-dsv give identical arrays: ${agree ? "yes" : "NO"}`,
+  );
   // Methods take turns within each run, so a change in machine load hits all of them alike.
   const times = methods.map(() => []);
   for (let r = 0; r <= runs; r++) {
@@ -70,6 +73,8 @@ for (const set of benchSets()) {
   });
   const base = results[2].mbps;
   for (const r of results) {
-    console.log(`  ${r.label.padEnd(54)} ${r.mbps.toFixed(1).padStart(7)} MB/s  (${(r.t * 1000).toFixed(0)} ms)  ×${(r.mbps / base).toFixed(2)} vs d3-dsv + Number()`);
+    console.log(
+      `  ${r.label.padEnd(54)} ${r.mbps.toFixed(1).padStart(7)} MB/s  (${(r.t * 1000).toFixed(0)} ms)  ×${(r.mbps / base).toFixed(2)} vs d3-dsv + Number()`,
+    );
   }
 }

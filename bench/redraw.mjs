@@ -36,7 +36,11 @@ function ensureCurves() {
   }
   const generator = resolve(repoRoot, "../shared/bench/make-curves.mjs");
   if (!existsSync(generator)) throw new Error(`benchmark input generator not found at ${generator}`);
-  const r = spawnSync(process.execPath, [generator, "--curves", String(CURVES), "--points", String(POINTS), "--out", curvesDir], { stdio: "inherit" });
+  const r = spawnSync(
+    process.execPath,
+    [generator, "--curves", String(CURVES), "--points", String(POINTS), "--out", curvesDir],
+    { stdio: "inherit" },
+  );
   if (r.status !== 0) throw new Error(`make-curves.mjs exited with ${r.status}`);
   return JSON.parse(readFileSync(manifestPath, "utf8"));
 }
@@ -76,11 +80,23 @@ async function buildPage() {
     configFile: false,
     logLevel: "warn",
     base: "./",
-    build: { outDir: pageDist, emptyOutDir: true, sourcemap: false, minify: process.env.AXBAND_BENCH_MINIFY !== "0", target: "es2022" },
+    build: {
+      outDir: pageDist,
+      emptyOutDir: true,
+      sourcemap: false,
+      minify: process.env.AXBAND_BENCH_MINIFY !== "0",
+      target: "es2022",
+    },
   });
 }
 
-const TYPES = { ".html": "text/html", ".js": "text/javascript", ".json": "application/json", ".bin": "application/octet-stream", ".css": "text/css" };
+const TYPES = {
+  ".html": "text/html",
+  ".js": "text/javascript",
+  ".json": "application/json",
+  ".bin": "application/octet-stream",
+  ".css": "text/css",
+};
 
 function serve(files) {
   const server = createServer((req, res) => {
@@ -116,7 +132,15 @@ async function main() {
   const browser = await chromium.launch({
     executablePath,
     headless: true,
-    args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+    args: [
+      "--no-sandbox",
+      "--disable-gpu",
+      "--disable-quic",
+      "--no-first-run",
+      "--disable-background-networking",
+      "--disable-component-update",
+      "--disable-sync",
+    ],
   });
   try {
     const page = await browser.newPage({ viewport: { width: 1280, height: 800 } });
@@ -127,7 +151,9 @@ async function main() {
     if (process.env.AXBAND_BENCH_DOM_ONLY) {
       for (const strip of [undefined, "text", "legend-text", "axes-text", "curves", "clip"]) {
         const d = await page.evaluate((o) => window.domOnly(o), { steps: STEPS, strip });
-        log(`DOM only (the app's scene renderer)${strip ? ` without ${strip}` : ""}: set ${d.setMs.toFixed(2)} ms, set + geometry ${d.domMs.toFixed(2)} ms`);
+        log(
+          `DOM only (the app's scene renderer)${strip ? ` without ${strip}` : ""}: set ${d.setMs.toFixed(2)} ms, set + geometry ${d.domMs.toFixed(2)} ms`,
+        );
       }
       return;
     }
@@ -135,17 +161,30 @@ async function main() {
     if (errors.length) log("page errors:", errors.join("\n"));
     if (process.env.AXBAND_BENCH_DETAIL) {
       const steps = await page.evaluate(() => window.benchSteps);
-      for (const st of steps) log(`  span ${st.span.toFixed(3)} dec  build ${st.build.toFixed(1)}  set ${st.set.toFixed(1)}  dom ${st.dom.toFixed(1)}  chars ${st.chars}`);
+      for (const st of steps)
+        log(
+          `  span ${st.span.toFixed(3)} dec  build ${st.build.toFixed(1)}  set ${st.set.toFixed(1)}  dom ${st.dom.toFixed(1)}  chars ${st.chars}`,
+        );
     }
     const f = (x) => x.toFixed(2).padStart(9);
-    log(`inputs: ${r.curves} invented curves, ${r.points.toLocaleString("en")} points; slide preset 960×540, devicePixelRatio ${r.devicePixelRatio}, legend ${LEGEND}`);
+    log(
+      `inputs: ${r.curves} invented curves, ${r.points.toLocaleString("en")} points; slide preset 960×540, devicePixelRatio ${r.devicePixelRatio}, legend ${LEGEND}`,
+    );
     log(`first draw (builds the per-curve caches): ${r.firstDrawMs.toFixed(1)} ms`);
     log(`zoom step, median over ${r.steps} steps (in ×0.8 per step, then out), drawn by the app's SceneSvg:`);
     log(`                      build ms    DOM ms  total ms   path chars`);
-    log(`  thinned (axband)   ${f(r.thinned.buildMs)} ${f(r.thinned.domMs)} ${f(r.thinned.totalMs)}  ${String(Math.round(r.thinned.pathChars)).padStart(11)}`);
-    log(`  plain full draw    ${f(r.plain.buildMs)} ${f(r.plain.domMs)} ${f(r.plain.totalMs)}  ${String(Math.round(r.plain.pathChars)).padStart(11)}   (${r.plain.steps} steps)`);
-    log(`ratio thinned/plain: total ${(r.thinned.totalMs / r.plain.totalMs).toFixed(4)}, path size ${(r.thinned.pathChars / r.plain.pathChars).toFixed(4)}`);
-    log(`  (of the thinned DOM time, ${r.thinned.setMs.toFixed(2)} ms is setting attributes and text, the rest the forced geometry)`);
+    log(
+      `  thinned (axband)   ${f(r.thinned.buildMs)} ${f(r.thinned.domMs)} ${f(r.thinned.totalMs)}  ${String(Math.round(r.thinned.pathChars)).padStart(11)}`,
+    );
+    log(
+      `  plain full draw    ${f(r.plain.buildMs)} ${f(r.plain.domMs)} ${f(r.plain.totalMs)}  ${String(Math.round(r.plain.pathChars)).padStart(11)}   (${r.plain.steps} steps)`,
+    );
+    log(
+      `ratio thinned/plain: total ${(r.thinned.totalMs / r.plain.totalMs).toFixed(4)}, path size ${(r.thinned.pathChars / r.plain.pathChars).toFixed(4)}`,
+    );
+    log(
+      `  (of the thinned DOM time, ${r.thinned.setMs.toFixed(2)} ms is setting attributes and text, the rest the forced geometry)`,
+    );
     // The same zoom steps with time between them (a wheel turned notch by notch), so that the browser has
     // painted each frame before the next step starts: the main thread then does not share the two cores
     // with the painting of the frame before (see the painting line below).
@@ -153,10 +192,19 @@ async function main() {
     const calm = await browser.newPage({ viewport: { width: 1280, height: 800 } });
     await calm.goto(`http://127.0.0.1:${port}/`);
     await calm.waitForSelector("body[data-ready='1']", { timeout: 60000 });
-    const settled = await calm.evaluate((o) => window.runBench(o), { steps: STEPS, plainSteps: 0, settleMs: 100, legend: LEGEND });
+    const settled = await calm.evaluate((o) => window.runBench(o), {
+      steps: STEPS,
+      plainSteps: 0,
+      settleMs: 100,
+      legend: LEGEND,
+    });
     await calm.close();
-    log(`  isolated steps     ${f(settled.thinned.buildMs)} ${f(settled.thinned.domMs)} ${f(settled.thinned.totalMs)}   (each frame painted before the next step, 100 ms apart)`);
-    log(`target: median zoom step ≤ 8 ms; measured ${r.thinned.totalMs.toFixed(2)} ms back to back (one step per frame), ${settled.thinned.totalMs.toFixed(2)} ms for isolated steps`);
+    log(
+      `  isolated steps     ${f(settled.thinned.buildMs)} ${f(settled.thinned.domMs)} ${f(settled.thinned.totalMs)}   (each frame painted before the next step, 100 ms apart)`,
+    );
+    log(
+      `target: median zoom step ≤ 8 ms; measured ${r.thinned.totalMs.toFixed(2)} ms back to back (one step per frame), ${settled.thinned.totalMs.toFixed(2)} ms for isolated steps`,
+    );
     log(`  (DOM time includes a forced getBBox of the curves layer, i.e. the browser's layout of the new paths)`);
     if (!process.env.AXBAND_BENCH_NO_TRACE) {
       // The browser paints each frame on its raster threads, outside the times above but on the same two cores:
@@ -166,8 +214,15 @@ async function main() {
       const tab = await browser.newPage({ viewport: { width: 1280, height: 800 } });
       await tab.goto(`http://127.0.0.1:${port}/`);
       await tab.waitForSelector("body[data-ready='1']", { timeout: 60000 });
-      await browser.startTracing(tab, { categories: ["devtools.timeline", "disabled-by-default-devtools.timeline", "blink.user_timing"] });
-      const t = await tab.evaluate((o) => window.runBench(o), { steps: STEPS, plainSteps: 0, settleMs: 100, legend: LEGEND });
+      await browser.startTracing(tab, {
+        categories: ["devtools.timeline", "disabled-by-default-devtools.timeline", "blink.user_timing"],
+      });
+      const t = await tab.evaluate((o) => window.runBench(o), {
+        steps: STEPS,
+        plainSteps: 0,
+        settleMs: 100,
+        legend: LEGEND,
+      });
       const events = JSON.parse((await browser.stopTracing()).toString()).traceEvents;
       // Only the painting of the zoom steps: between the page's marks (first draws and earlier frames left out).
       const mark = (name) => events.find((e) => e.name === name)?.ts;
@@ -175,8 +230,12 @@ async function main() {
       const to = mark("axband-zoom-end") ?? Infinity;
       const raster = events.filter((e) => e.ph === "X" && e.name === "RasterTask" && e.ts >= from && e.ts <= to);
       const rasterMs = raster.reduce((sum, e) => sum + (e.dur ?? 0), 0) / 1000;
-      log(`painting (the browser's raster threads, software, no GPU): ${(rasterMs / t.steps).toFixed(1)} ms per zoom step on average;`);
-      log(`  (the painting of a frame runs on the same two cores: back to back, it overlaps the next step's work; traced run ${t.thinned.totalMs.toFixed(2)} ms a step)`);
+      log(
+        `painting (the browser's raster threads, software, no GPU): ${(rasterMs / t.steps).toFixed(1)} ms per zoom step on average;`,
+      );
+      log(
+        `  (the painting of a frame runs on the same two cores: back to back, it overlaps the next step's work; traced run ${t.thinned.totalMs.toFixed(2)} ms a step)`,
+      );
     }
   } finally {
     await browser.close();

@@ -31,26 +31,53 @@ function ensureCurves() {
   const manifestPath = join(CURVES, "manifest.json");
   if (existsSync(manifestPath)) {
     const m = JSON.parse(readFileSync(manifestPath, "utf8"));
-    if (m.curves?.length === CURVE_COUNT && m.curves.every((c) => c.points === POINTS && existsSync(join(CURVES, c.file)))) return m;
+    if (
+      m.curves?.length === CURVE_COUNT &&
+      m.curves.every((c) => c.points === POINTS && existsSync(join(CURVES, c.file)))
+    )
+      return m;
   }
   mkdirSync(OUT, { recursive: true });
   const maker = join(SHARED, "bench/make-curves.mjs");
   if (!existsSync(maker)) throw new Error(`input generator not found: ${maker}`);
-  const r = spawnSync(process.execPath, [maker, "--out", CURVES, "--curves", String(CURVE_COUNT), "--points", String(POINTS)], { stdio: "inherit" });
+  const r = spawnSync(
+    process.execPath,
+    [maker, "--out", CURVES, "--curves", String(CURVE_COUNT), "--points", String(POINTS)],
+    { stdio: "inherit" },
+  );
   if (r.status !== 0) throw new Error("make-curves.mjs failed");
   return JSON.parse(readFileSync(manifestPath, "utf8"));
 }
 
 function cliArgs(manifest, outSvg, extra = []) {
   const files = manifest.curves.flatMap((c) => ["--role", ROLE_OF_KIND[c.kind] ?? "exclusion", join(CURVES, c.file)]);
-  return ["src/cli/run.mjs", ...files, "--model", "0", "--model", "8/3", "--model", "44/3", "--preset", "double-column", "--mass-range", MASS_RANGE, "--g-range", G_RANGE, "-o", outSvg, ...extra];
+  return [
+    "src/cli/run.mjs",
+    ...files,
+    "--model",
+    "0",
+    "--model",
+    "8/3",
+    "--model",
+    "44/3",
+    "--preset",
+    "double-column",
+    "--mass-range",
+    MASS_RANGE,
+    "--g-range",
+    G_RANGE,
+    "-o",
+    outSvg,
+    ...extra,
+  ];
 }
 
 function timed(cmd, args, env = process.env) {
   const t0 = performance.now();
   const r = spawnSync(cmd, args, { cwd: ROOT, encoding: "utf8", env, maxBuffer: 64 * 1024 * 1024 });
   const ms = performance.now() - t0;
-  if (r.status !== 0) throw new Error(`${cmd} ${args.slice(0, 4).join(" ")} … exited ${r.status ?? r.signal}:\n${r.stderr}`);
+  if (r.status !== 0)
+    throw new Error(`${cmd} ${args.slice(0, 4).join(" ")} … exited ${r.status ?? r.signal}:\n${r.stderr}`);
   return ms;
 }
 
@@ -137,7 +164,13 @@ function segDist(px, py, ax, ay, bx, by) {
  * point only looks at nearby segments; beyond 4 px it counts as 4 px (reported as "≥").
  */
 function thinningError(fullScene, thinScene) {
-  const nodesOf = (scene) => new Map(scene.layers.flatMap((l) => l.nodes).filter((n) => n.kind === "path" && /^curve-\d+-/.test(n.id ?? "")).map((n) => [n.id, n.d]));
+  const nodesOf = (scene) =>
+    new Map(
+      scene.layers
+        .flatMap((l) => l.nodes)
+        .filter((n) => n.kind === "path" && /^curve-\d+-/.test(n.id ?? ""))
+        .map((n) => [n.id, n.d]),
+    );
   const full = nodesOf(fullScene);
   const thin = nodesOf(thinScene);
   const { x: X0, y: Y0, w: W, h: H } = fullScene.plot;
@@ -147,7 +180,8 @@ function thinningError(fullScene, thinScene) {
   let count = 0;
   for (const [id, d] of full) {
     const segs = [];
-    for (const p of polylines(thin.get(id) ?? "")) for (let i = 0; i + 3 < p.length; i += 2) segs.push(p[i], p[i + 1], p[i + 2], p[i + 3]);
+    for (const p of polylines(thin.get(id) ?? ""))
+      for (let i = 0; i + 3 < p.length; i += 2) segs.push(p[i], p[i + 1], p[i + 2], p[i + 3]);
     const grid = new Map();
     for (let s = 0; s < segs.length; s += 4) {
       const x0 = Math.floor(Math.min(segs[s], segs[s + 2]));
@@ -198,7 +232,7 @@ async function measureThinning(manifest) {
   const { loadProject } = await import("../src/cli/inputs.ts");
   const { buildScene } = await import("../src/plot/scene.ts");
   const { presetOf } = await import("../src/plot/layout.ts");
-  const { EXPORT_RESOLUTION, rasterResolution } = await import("../src/plot/figure-file.ts");
+  const { EXPORT_RESOLUTION, rasterResolution } = await import("../src/formats/figure-file.ts");
   const args = parseArgs(cliArgs(manifest, join(OUT, "unused.svg")).slice(3));
   if (!args.ok) throw new Error(args.error);
   const { project } = loadProject(args.options);
@@ -209,7 +243,12 @@ async function measureThinning(manifest) {
   const png300 = rasterResolution(300);
   for (const resolution of [...new Set([1, EXPORT_RESOLUTION, png300])]) {
     const e = thinningError(full, buildScene(project, { ...base, resolution }));
-    const used = [resolution === EXPORT_RESOLUTION ? "the SVG export" : "", resolution === png300 ? "a 300 dpi PNG" : ""].filter(Boolean).join(", ");
+    const used = [
+      resolution === EXPORT_RESOLUTION ? "the SVG export" : "",
+      resolution === png300 ? "a 300 dpi PNG" : "",
+    ]
+      .filter(Boolean)
+      .join(", ");
     results.push({ resolution, ...e, used, png300: resolution === png300 });
   }
   return { results, size };
@@ -218,17 +257,39 @@ async function measureThinning(manifest) {
 // ----------------------------------------------------------------------------------------------------- main
 
 const manifest = ensureCurves();
-console.log(`inputs: ${manifest.curves.length} invented curves × ${POINTS} points (${CURVES}), preset double-column, models E/N = 0, 8/3, 44/3, axes ${MASS_RANGE} eV × ${G_RANGE} GeV^-1; median of ${RUNS} runs`);
+console.log(
+  `inputs: ${manifest.curves.length} invented curves × ${POINTS} points (${CURVES}), preset double-column, models E/N = 0, 8/3, 44/3, axes ${MASS_RANGE} eV × ${G_RANGE} GeV^-1; median of ${RUNS} runs`,
+);
 
 const thinningOnly = process.argv.includes("--thinning-only");
-const cliEmbed = thinningOnly ? null : measure("axband CLI, project embedded (default)", process.execPath, cliArgs(manifest, join(OUT, "cli.svg")), join(OUT, "cli.svg"));
-const cliBare = thinningOnly ? null : measure("axband CLI, --no-embed (figure only)", process.execPath, cliArgs(manifest, join(OUT, "cli-noembed.svg"), ["--no-embed"]), join(OUT, "cli-noembed.svg"));
+const cliEmbed = thinningOnly
+  ? null
+  : measure(
+      "axband CLI, project embedded (default)",
+      process.execPath,
+      cliArgs(manifest, join(OUT, "cli.svg")),
+      join(OUT, "cli.svg"),
+    );
+const cliBare = thinningOnly
+  ? null
+  : measure(
+      "axband CLI, --no-embed (figure only)",
+      process.execPath,
+      cliArgs(manifest, join(OUT, "cli-noembed.svg"), ["--no-embed"]),
+      join(OUT, "cli-noembed.svg"),
+    );
 // The same with two CSV parse workers forced (the default uses none on ≤ 2 CPUs), to see what they bring here.
 const cliWorkers = thinningOnly
   ? null
-  : measure("axband CLI, --no-embed, AXBAND_PARSE_THREADS=2 (two parse workers)", process.execPath, cliArgs(manifest, join(OUT, "cli-workers.svg"), ["--no-embed"]), join(OUT, "cli-workers.svg"), {
-      env: { ...process.env, AXBAND_PARSE_THREADS: "2" },
-    });
+  : measure(
+      "axband CLI, --no-embed, AXBAND_PARSE_THREADS=2 (two parse workers)",
+      process.execPath,
+      cliArgs(manifest, join(OUT, "cli-workers.svg"), ["--no-embed"]),
+      join(OUT, "cli-workers.svg"),
+      {
+        env: { ...process.env, AXBAND_PARSE_THREADS: "2" },
+      },
+    );
 
 const python = thinningOnly ? null : findPython();
 let ref = null;
@@ -237,7 +298,13 @@ if (python) {
   // Older OpenBLAS workarounds slow a current numpy; unset both together for the reference only.
   delete env.OPENBLAS_CORETYPE;
   delete env.OPENBLAS_L2_SIZE;
-  ref = measure(`reference script (matplotlib ${python.version}, ${python.py})`, python.py, [join(SHARED, "bench/reference-figure.py"), CURVES, join(OUT, "reference.svg")], join(OUT, "reference.svg"), { env });
+  ref = measure(
+    `reference script (matplotlib ${python.version}, ${python.py})`,
+    python.py,
+    [join(SHARED, "bench/reference-figure.py"), CURVES, join(OUT, "reference.svg")],
+    join(OUT, "reference.svg"),
+    { env },
+  );
 } else if (!thinningOnly) {
   console.log("  reference script: skipped (no python3 with matplotlib; Debian: apt-get install python3-matplotlib)");
 }
@@ -251,12 +318,16 @@ if (ref) {
 }
 if (cliBare && cliWorkers) {
   const same = readFileSync(join(OUT, "cli-noembed.svg")).equals(readFileSync(join(OUT, "cli-workers.svg")));
-  console.log(`--no-embed: ${sec(cliBare.ms)} default, ${sec(cliWorkers.ms)} with two parse workers; SVG bytes ${same ? "identical" : "DIFFER"}`);
+  console.log(
+    `--no-embed: ${sec(cliBare.ms)} default, ${sec(cliWorkers.ms)} with two parse workers; SVG bytes ${same ? "identical" : "DIFFER"}`,
+  );
 }
 
 try {
   const { results, size } = await measureThinning(manifest);
-  console.log(`thinning error at the export size (${size.widthPhysical} × ${size.heightPhysical}, ${size.widthPx} × ${size.heightPx} scene px), distance from every unthinned point inside the plot to the drawn line:`);
+  console.log(
+    `thinning error at the export size (${size.widthPhysical} × ${size.heightPhysical}, ${size.widthPx} × ${size.heightPx} scene px), distance from every unthinned point inside the plot to the drawn line:`,
+  );
   for (const e of results) {
     console.log(
       `  resolution ${e.resolution}${e.used ? ` (used by ${e.used})` : ""}: max ${e.capped ? "≥ " : ""}${e.max.toFixed(4)} scene px, mean ${e.mean.toFixed(4)} px over ${e.count} points` +

@@ -6,15 +6,38 @@ import reactHooks from "eslint-plugin-react-hooks";
 
 const pureCoreFence = {
   patterns: [
-    { group: ["react", "react-dom", "react-dom/*", "zustand", "zustand/*"], message: "Pure cores must not import React or the store." },
+    {
+      group: ["react", "react-dom", "react-dom/*", "zustand", "zustand/*"],
+      message: "Pure cores must not import React or the store.",
+    },
     { group: ["**/ui/**", "**/ui", "**/worker/**"], message: "Pure cores must not import the UI or the worker." },
   ],
 };
 
+const LAYERS = ["physics", "project", "analysis", "plot", "formats"];
+function layerFences() {
+  return LAYERS.slice(0, -1).map((layer, i) => ({
+    files: [`src/${layer}/**/*.ts`],
+    rules: {
+      "no-restricted-imports": [
+        "error",
+        {
+          patterns: [
+            ...pureCoreFence.patterns,
+            {
+              group: [...LAYERS.slice(i + 1), "data", "cli"].map((above) => `**/${above}/**`),
+              message: `src/${layer} sits below ${LAYERS.slice(i + 1).join(", ")}: it must not import them.`,
+            },
+          ],
+        },
+      ],
+    },
+  }));
+}
+
 export default tseslint.config(
   { ignores: ["**/dist/**", "**/node_modules/**", "**/.out/**", "**/.artifacts/**"] },
   {
-    basePath: "..",
     files: ["**/*.{ts,tsx,mjs,js}"],
     extends: [js.configs.recommended, ...tseslint.configs.recommended],
     languageOptions: { ecmaVersion: 2023, sourceType: "module" },
@@ -24,14 +47,19 @@ export default tseslint.config(
     },
   },
   {
-    basePath: "..",
     files: ["src/ui/**/*.{ts,tsx}"],
     plugins: { "react-hooks": reactHooks },
     rules: { "react-hooks/rules-of-hooks": "error", "react-hooks/exhaustive-deps": "warn" },
   },
   {
-    basePath: "..",
-    files: ["src/physics/**/*.ts", "src/data/**/*.ts", "src/plot/**/*.ts"],
+    files: [
+      "src/physics/**/*.ts",
+      "src/project/**/*.ts",
+      "src/analysis/**/*.ts",
+      "src/plot/**/*.ts",
+      "src/formats/**/*.ts",
+      "src/data/**/*.ts",
+    ],
     languageOptions: { globals: {} },
     rules: {
       "no-restricted-imports": ["error", pureCoreFence],
@@ -39,9 +67,19 @@ export default tseslint.config(
       "no-restricted-globals": ["error", "window", "document", "navigator", "localStorage", "HTMLElement", "location"],
     },
   },
+  // Layers point one way: physics <- project <- analysis <- plot <- formats (file input and output may draw).
+  ...layerFences(),
   {
-    basePath: "..",
     files: ["bench/**/*.{mjs,js}", "tests/**/*.mjs", ".ci/**/*.mjs"],
-    languageOptions: { globals: { process: "readonly", console: "readonly", URL: "readonly", performance: "readonly", setTimeout: "readonly", Buffer: "readonly" } },
+    languageOptions: {
+      globals: {
+        process: "readonly",
+        console: "readonly",
+        URL: "readonly",
+        performance: "readonly",
+        setTimeout: "readonly",
+        Buffer: "readonly",
+      },
+    },
   },
 );

@@ -1,4 +1,4 @@
-// `npm test`: typecheck, lint, then the Vitest projects (unit + ui together, then browser alone); ends with
+// `npm test`: typecheck, lint, format check, then the Vitest projects (unit + ui together, then browser alone); ends with
 // the plain summary line "N passed, N failed" that CI reads. Exit code 0 only when everything passed.
 import { spawnSync } from "node:child_process";
 import { mkdirSync, readFileSync, rmSync, existsSync } from "node:fs";
@@ -17,7 +17,11 @@ function step(label, cmd, args) {
 
 for (const [label, cmd, args] of [
   ["typecheck", bin("tsc"), ["--noEmit", "-p", "src/tsconfig.json"]],
-  ["lint", bin("eslint"), ["-c", "tests/eslint.config.mjs", "--no-error-on-unmatched-pattern", "src", "tests", "bench"]],
+  [
+    "lint",
+    bin("eslint"),
+    ["-c", "tests/eslint.config.mjs", "--no-error-on-unmatched-pattern", "src", "tests", "bench"],
+  ],
 ]) {
   if (step(label, cmd, args)) passed++;
   else failed++;
@@ -30,7 +34,13 @@ for (const projects of [["unit", "ui"], ["browser"]]) {
   const name = projects.join("+");
   const report = `tests/.artifacts/vitest-${name}.json`;
   rmSync(report, { force: true });
-  const args = ["run", ...projects.flatMap((p) => ["--project", p]), "--reporter=default", "--reporter=json", `--outputFile.json=${report}`];
+  const args = [
+    "run",
+    ...projects.flatMap((p) => ["--project", p]),
+    "--reporter=default",
+    "--reporter=json",
+    `--outputFile.json=${report}`,
+  ];
   const ok = step(`vitest ${name}`, bin("vitest"), args);
   if (!existsSync(report)) {
     failed++;

@@ -1,14 +1,19 @@
 // Benchmark page: loads the invented benchmark curves, then times zoom steps (buildScene + the app's SceneSvg update +
 // forced geometry) against a plain full-resolution draw of the same data. Driven by bench/redraw.mjs.
 import { buildScene, massScale, yScale, type PathNode, type Scene } from "../../src/plot/index";
-import type { Curve, CurveRole, Model, Project } from "../../src/data/types";
+import type { Curve, CurveRole, Model, Project } from "../../src/project/types";
 import { createAppRenderer, createSceneDomRenderer } from "./render-app";
 
 interface Manifest {
   curves: { file: string; kind: string; points: number }[];
 }
 
-const ROLE: Record<string, CurveRole> = { scan: "exclusion", plateau: "exclusion", projection: "projection", region: "region" };
+const ROLE: Record<string, CurveRole> = {
+  scan: "exclusion",
+  plateau: "exclusion",
+  projection: "projection",
+  region: "region",
+};
 const COLOURS = ["#D55E00", "#CC79A7", "#E69F00", "#009E73", "#000000", "#56B4E9", "#0072B2", "#F0E442"];
 
 async function loadProject(legend: Project["figure"]["legend"] = "outside-right"): Promise<Project> {
@@ -66,8 +71,15 @@ async function loadProject(legend: Project["figure"]["legend"] = "outside-right"
   return {
     version: 1,
     name: "redraw benchmark",
-    physics: { ref: "2019", custom: { cGamma: 1.92, cGammaSigma: 0.04, kMuEv: 5.691, kMuEvSigma: 0.051, label: "custom" } },
-    models: [model("ksvz", "0", "0", "#117A8B"), model("dfsz", "8/3", "8/3", "#1F4E8C"), model("window", "5/3", "44/3", "#2A9D8F")],
+    physics: {
+      ref: "2019",
+      custom: { cGamma: 1.92, cGammaSigma: 0.04, kMuEv: 5.691, kMuEvSigma: 0.051, label: "custom" },
+    },
+    models: [
+      model("ksvz", "0", "0", "#117A8B"),
+      model("dfsz", "8/3", "8/3", "#1F4E8C"),
+      model("window", "5/3", "44/3", "#2A9D8F"),
+    ],
     curves,
     figure: {
       preset: "slide",
@@ -102,7 +114,11 @@ function zoomSequence(full: [number, number], steps: number): [number, number][]
 
 /** The plain full-resolution draw: every point of every curve through the D3 scales into one path each. */
 function plainScene(project: Project, range: [number, number]): Scene {
-  const hidden = { ...project, curves: project.curves.map((c) => ({ ...c, visible: false })), figure: { ...project.figure, massRangeEv: range } };
+  const hidden = {
+    ...project,
+    curves: project.curves.map((c) => ({ ...c, visible: false })),
+    figure: { ...project.figure, massRangeEv: range },
+  };
   const scene = buildScene(hidden);
   const xs = massScale(scene);
   const ys = yScale(scene);
@@ -119,9 +135,25 @@ function plainScene(project: Project, range: [number, number]): Scene {
       const j = order ? order[k] : k;
       d += (k ? "L" : "M") + Math.round(xs(c.massEv[j]) * 100) / 100 + " " + Math.round(ys(c.gInvGeV[j]) * 100) / 100;
     }
-    if (c.role === "region") fills.push({ kind: "path", id: `curve-${i + 1}-region`, d: d + "Z", fill: c.colour, fillOpacity: 0.25, stroke: c.colour, strokeWidth: 1.8 });
+    if (c.role === "region")
+      fills.push({
+        kind: "path",
+        id: `curve-${i + 1}-region`,
+        d: d + "Z",
+        fill: c.colour,
+        fillOpacity: 0.25,
+        stroke: c.colour,
+        strokeWidth: 1.8,
+      });
     else {
-      if (c.role === "exclusion") fills.push({ kind: "path", id: `curve-${i + 1}-fill`, d: `${d}L${xs(c.massEv[order![n - 1]])} ${scene.plot.y - 10}L${xs(c.massEv[order![0]])} ${scene.plot.y - 10}Z`, fill: c.colour, fillOpacity: 0.25 });
+      if (c.role === "exclusion")
+        fills.push({
+          kind: "path",
+          id: `curve-${i + 1}-fill`,
+          d: `${d}L${xs(c.massEv[order![n - 1]])} ${scene.plot.y - 10}L${xs(c.massEv[order![0]])} ${scene.plot.y - 10}Z`,
+          fill: c.colour,
+          fillOpacity: 0.25,
+        });
       lines.push({ kind: "path", id: `curve-${i + 1}-line`, d, stroke: c.colour, strokeWidth: 1.8, fill: "none" });
     }
   });
@@ -146,7 +178,18 @@ export interface BenchResult {
   devicePixelRatio: number;
 }
 
-async function run(opts: { steps: number; plainSteps: number; legend?: Project["figure"]["legend"]; warmSteps?: number; profile?: boolean; repeat?: number; renderer?: "app" | "scene-dom"; strip?: "text" | "curves"; settleMs?: number; look?: "nofill" | "nostroke" | "noclip" | "noopacity" | "nodash" | "thin" | "boxfill" }): Promise<BenchResult> {
+async function run(opts: {
+  steps: number;
+  plainSteps: number;
+  legend?: Project["figure"]["legend"];
+  warmSteps?: number;
+  profile?: boolean;
+  repeat?: number;
+  renderer?: "app" | "scene-dom";
+  strip?: "text" | "curves";
+  settleMs?: number;
+  look?: "nofill" | "nostroke" | "noclip" | "noopacity" | "nodash" | "thin" | "boxfill";
+}): Promise<BenchResult> {
   const project = await loadProject(opts.legend);
   const host = document.getElementById("plot")!;
   host.textContent = "";
@@ -154,10 +197,13 @@ async function run(opts: { steps: number; plainSteps: number; legend?: Project["
   const render = opts.renderer === "scene-dom" ? createSceneDomRenderer(host) : createAppRenderer(host);
   const sync = () => (host.querySelector("#bench-curves") as SVGGElement | null)?.getBBox();
   // repeat > 1 runs the same zoom sequence again (for profiling: more samples of the same steps).
-  const ranges = Array.from({ length: opts.repeat ?? 1 }, () => zoomSequence(project.figure.massRangeEv, opts.steps)).flat();
+  const ranges = Array.from({ length: opts.repeat ?? 1 }, () =>
+    zoomSequence(project.figure.massRangeEv, opts.steps),
+  ).flat();
   const resolution = window.devicePixelRatio || 1;
   const at = (r: [number, number]): Project => ({ ...project, figure: { ...project.figure, massRangeEv: r } });
-  const pathChars = (s: Scene) => s.layers.reduce((n, l) => n + l.nodes.reduce((k, nd) => k + (nd.kind === "path" ? nd.d.length : 0), 0), 0);
+  const pathChars = (s: Scene) =>
+    s.layers.reduce((n, l) => n + l.nodes.reduce((k, nd) => k + (nd.kind === "path" ? nd.d.length : 0), 0), 0);
 
   let t = performance.now();
   const resting = buildScene(at(ranges[0]), { resolution });
@@ -189,7 +235,9 @@ async function run(opts: { steps: number; plainSteps: number; legend?: Project["
     const t0 = performance.now();
     const scene = buildScene(at(r), { resolution, holdLegend });
     // Diagnostics: leave out all text or all curves before drawing (the build time above stays whole).
-    if (opts.strip) for (const l of scene.layers) l.nodes = l.nodes.filter((n) => (opts.strip === "text" ? n.kind !== "text" : l.id !== "curves"));
+    if (opts.strip)
+      for (const l of scene.layers)
+        l.nodes = l.nodes.filter((n) => (opts.strip === "text" ? n.kind !== "text" : l.id !== "curves"));
     // Diagnostics: how the look of the curves changes the browser's painting (raster) cost.
     if (opts.look) {
       for (const l of scene.layers) {
@@ -201,7 +249,13 @@ async function run(opts: { steps: number; plainSteps: number; legend?: Project["
           // The same fills as plain boxes of half the plot (what filling costs apart from the curve's edges).
           if (opts.look === "boxfill" && nd.stroke && nd.fill && nd.fill !== "none") {
             const { x, y, w, h } = scene.plot;
-            boxes.push({ kind: "path", id: `${nd.id}-box`, d: `M${x} ${y}h${w}v${h / 2}h${-w}Z`, fill: nd.fill, fillOpacity: nd.fillOpacity });
+            boxes.push({
+              kind: "path",
+              id: `${nd.id}-box`,
+              d: `M${x} ${y}h${w}v${h / 2}h${-w}Z`,
+              fill: nd.fill,
+              fillOpacity: nd.fillOpacity,
+            });
             nd.fill = "none";
           }
           if (opts.look === "nofill" && nd.stroke) nd.fill = "none";
@@ -248,13 +302,25 @@ async function run(opts: { steps: number; plainSteps: number; legend?: Project["
     pc.push(pathChars(scene));
     await new Promise((res) => requestAnimationFrame(() => res(null)));
   }
-  (window as unknown as { benchSteps: unknown }).benchSteps = ranges.map((r, i) => ({ span: Math.log10(r[1] / r[0]), build: b[i], set: set[i], dom: d[i], chars: chars[i] }));
+  (window as unknown as { benchSteps: unknown }).benchSteps = ranges.map((r, i) => ({
+    span: Math.log10(r[1] / r[0]),
+    build: b[i],
+    set: set[i],
+    dom: d[i],
+    chars: chars[i],
+  }));
   return {
     points: project.curves.reduce((n, c) => n + c.massEv.length, 0),
     curves: project.curves.length,
     steps: ranges.length,
     firstDrawMs,
-    thinned: { buildMs: median(b), domMs: median(d), setMs: median(set), totalMs: median(tot), pathChars: median(chars) },
+    thinned: {
+      buildMs: median(b),
+      domMs: median(d),
+      setMs: median(set),
+      totalMs: median(tot),
+      pathChars: median(chars),
+    },
     plain: { buildMs: median(pb), domMs: median(pd), totalMs: median(pt), pathChars: median(pc), steps: pt.length },
     devicePixelRatio: resolution,
   };
@@ -282,7 +348,10 @@ async function buildOnly(opts: { reps: number; depths: number[] }): Promise<{ de
 document.body.dataset.ready = "1";
 
 /** DOM-only timing (diagnostics): prebuilt scenes put into a fresh <svg>, optionally with parts stripped. */
-async function domOnly(opts: { steps: number; strip?: "text" | "fill" | "stroke" | "clip" | "legend-text" | "axes-text" | "curves" }): Promise<{ setMs: number; domMs: number }> {
+async function domOnly(opts: {
+  steps: number;
+  strip?: "text" | "fill" | "stroke" | "clip" | "legend-text" | "axes-text" | "curves";
+}): Promise<{ setMs: number; domMs: number }> {
   const project = await loadProject();
   const host = document.createElement("div");
   document.body.appendChild(host);

@@ -1,6 +1,6 @@
 // Command-line arguments of the renderer (`npm run render -- …`): a pure parser from argv to options, and
 // the usage text. Kept apart from render.ts so the rules (roles per file, ranges, presets) are unit-testable.
-import type { CurveRole, SizePreset } from "../data/types";
+import type { CurveRole, SizePreset } from "../project/types";
 
 export const ROLES: readonly CurveRole[] = ["exclusion", "projection", "region"];
 export const PRESET_NAMES: readonly SizePreset[] = ["slide", "single-column", "double-column", "custom"];
@@ -89,7 +89,8 @@ function parseRange(flag: string, text: string): [number, number] | string {
   const parts = text.split(/[:,]/).map((s) => s.trim());
   if (parts.length !== 2) return `${flag}: expected LO:HI, e.g. 1e-7:1e-2, got "${text}"`;
   const [lo, hi] = parts.map(Number);
-  if (!(Number.isFinite(lo) && Number.isFinite(hi) && lo > 0 && hi > 0)) return `${flag}: both ends must be positive numbers (log axis), got "${text}"`;
+  if (!(Number.isFinite(lo) && Number.isFinite(hi) && lo > 0 && hi > 0))
+    return `${flag}: both ends must be positive numbers (log axis), got "${text}"`;
   if (lo >= hi) return `${flag}: LO must be below HI, got "${text}"`;
   return [lo, hi];
 }
@@ -183,11 +184,13 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
         o.heightMm = r;
         break;
       case "--preset":
-        if (!PRESET_NAMES.includes(value as SizePreset)) return { ok: false, error: `--preset: expected one of ${PRESET_NAMES.join(", ")}, got "${value}"` };
+        if (!PRESET_NAMES.includes(value as SizePreset))
+          return { ok: false, error: `--preset: expected one of ${PRESET_NAMES.join(", ")}, got "${value}"` };
         o.preset = value as SizePreset;
         break;
       case "--role":
-        if (!ROLES.includes(value as CurveRole)) return { ok: false, error: `--role: expected one of ${ROLES.join(", ")}, got "${value}"` };
+        if (!ROLES.includes(value as CurveRole))
+          return { ok: false, error: `--role: expected one of ${ROLES.join(", ")}, got "${value}"` };
         roles.push(value as CurveRole);
         break;
       case "--model":
@@ -218,21 +221,31 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
     role: roleCount > 0 ? roles[roleCount - 1] : (roles[0] ?? "exclusion"),
   }));
   if (o.help) return { ok: true, options: o };
-  if (o.inputs.length === 0) return { ok: false, error: "no input file (a .axband.json project, an exported .svg, or CSV files)" };
-  if (!o.out && !o.png && !o.modelsCsv) return { ok: false, error: "nothing to write: give -o FILE.svg, --png FILE.png or --models-csv FILE.csv" };
+  if (o.inputs.length === 0)
+    return { ok: false, error: "no input file (a .axband.json project, an exported .svg, or CSV files)" };
+  if (!o.out && !o.png && !o.modelsCsv)
+    return { ok: false, error: "nothing to write: give -o FILE.svg, --png FILE.png or --models-csv FILE.csv" };
   const projects = o.inputs.filter((f) => f.kind !== "csv");
   if (projects.length > 0 && o.inputs.length > 1) {
-    return { ok: false, error: "give either one project (.json or exported .svg) or CSV files, not both or several projects" };
+    return {
+      ok: false,
+      error: "give either one project (.json or exported .svg) or CSV files, not both or several projects",
+    };
   }
   if (projects.length > 0 && (o.models.length > 0 || roles.length > 0)) {
-    return { ok: false, error: "--model and --role apply to CSV input only; edit the project in the app to change its models" };
+    return {
+      ok: false,
+      error: "--model and --role apply to CSV input only; edit the project in the app to change its models",
+    };
   }
-  if (o.scale !== undefined && argv.some((a) => a === "--dpi" || a.startsWith("--dpi="))) return { ok: false, error: "give --dpi or --scale, not both" };
+  if (o.scale !== undefined && argv.some((a) => a === "--dpi" || a.startsWith("--dpi=")))
+    return { ok: false, error: "give --dpi or --scale, not both" };
   if ((o.widthMm !== undefined || o.heightMm !== undefined) && o.preset !== "custom") {
     return { ok: false, error: "--width-mm/--height-mm need --preset custom" };
   }
   const outs = [o.out, o.png, o.modelsCsv].filter((p): p is string => !!p);
   if (new Set(outs).size !== outs.length) return { ok: false, error: "two outputs have the same path" };
-  if (outs.some((p) => o.inputs.some((f) => f.path === p))) return { ok: false, error: "an output path is also an input file" };
+  if (outs.some((p) => o.inputs.some((f) => f.path === p)))
+    return { ok: false, error: "an output path is also an input file" };
   return { ok: true, options: o };
 }

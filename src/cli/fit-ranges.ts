@@ -1,6 +1,6 @@
 // Axis ranges for a quick figure from CSV files: the decades that enclose every positive data point, so a
 // figure made from files alone shows all of them without the user choosing ranges first.
-import type { Curve } from "../data/types";
+import type { Curve } from "../project/types";
 
 /** Mass range (eV) and coupling range (GeV⁻¹) of a figure, ends at whole decades. */
 export interface FittedRanges {
@@ -26,7 +26,10 @@ function decades(lo: number, hi: number, minDecades: number): [number, number] {
  * go on a log axis and are ignored here. Returns undefined when no curve has a usable point.
  * @param minDecades smallest span of each axis in decades. @default 1
  */
-export function fitRanges(curves: readonly Pick<Curve, "massEv" | "gInvGeV">[], minDecades = 1): FittedRanges | undefined {
+export function fitRanges(
+  curves: readonly Pick<Curve, "massEv" | "gInvGeV">[],
+  minDecades = 1,
+): FittedRanges | undefined {
   let mLo = Infinity;
   let mHi = -Infinity;
   let gLo = Infinity;

@@ -2,12 +2,18 @@
 // validation as the app, or CSV files through the app's importer and factories with ranges fitted to the data.
 import { readFileSync } from "node:fs";
 import { basename } from "node:path";
-import type { Curve, Model, Project } from "../data/types";
-import { defaultFigure, emptyProject, newCurve, newModel } from "../data/defaults";
-import { formatProblem, formatRejection, labelFromFileName, parseCurveText, type CurveParseResult } from "../data/csv";
-import { projectFromFile } from "../data/project-file";
+import type { Curve, Model, Project } from "../project/types";
+import { defaultFigure, emptyProject, newCurve, newModel } from "../project/defaults";
+import {
+  formatProblem,
+  formatRejection,
+  labelFromFileName,
+  parseCurveText,
+  type CurveParseResult,
+} from "../formats/csv";
+import { projectFromFile } from "../formats/project-file";
 import { parseEOverN } from "../physics/eovern-parse";
-import { extractProjectFromSvg } from "../plot/figure-file";
+import { extractProjectFromSvg } from "../formats/figure-file";
 import type { CliInput, CliOptions } from "./args";
 import { fitRanges } from "./fit-ranges";
 
@@ -28,7 +34,14 @@ function readText(path: string): string {
     return readFileSync(path, "utf8");
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
-    const why = code === "ENOENT" ? "no such file" : code === "EISDIR" ? "is a directory" : code === "EACCES" ? "permission denied" : (e as Error).message;
+    const why =
+      code === "ENOENT"
+        ? "no such file"
+        : code === "EISDIR"
+          ? "is a directory"
+          : code === "EACCES"
+            ? "permission denied"
+            : (e as Error).message;
     throw new InputError(`${path}: cannot read the file (${why})`);
   }
 }
@@ -57,14 +70,19 @@ function loadCsv(inputs: CliInput[], opts: CliOptions, preParsed: PreParsed): Lo
   for (const [index, input] of inputs.entries()) {
     const fileName = basename(input.path);
     // The app's import code: the same parser, unit detection and messages.
-    const r = preParsed[index] ?? parseCurveText(readText(input.path), { fileName, massUnit: opts.massUnit, couplingUnit: opts.couplingUnit });
+    const r =
+      preParsed[index] ??
+      parseCurveText(readText(input.path), { fileName, massUnit: opts.massUnit, couplingUnit: opts.couplingUnit });
     if (r.fatal) throw new InputError(formatProblem(input.path, r.fatal));
     for (const bad of r.rejected) badRows.push(formatRejection(input.path, bad));
     badCount += r.rejectedCount;
-    if (r.rejectedCount > 0 && opts.skipBadRows) notes.push(`${input.path}: skipped ${r.rejectedCount} row(s) that could not be read (--skip-bad-rows)`);
+    if (r.rejectedCount > 0 && opts.skipBadRows)
+      notes.push(`${input.path}: skipped ${r.rejectedCount} row(s) that could not be read (--skip-bad-rows)`);
     for (const m of r.messages) if (m.level !== "info") notes.push(`${input.path}: ${m.text}`);
-    if (r.nonPositive > 0) notes.push(`${input.path}: ${r.nonPositive} point(s) with a mass or coupling ≤ 0 cannot be drawn on log axes`);
-    if (r.massEv.length === 0) throw new InputError(`${input.path}: no data rows (two numeric columns: mass, coupling)`);
+    if (r.nonPositive > 0)
+      notes.push(`${input.path}: ${r.nonPositive} point(s) with a mass or coupling ≤ 0 cannot be drawn on log axes`);
+    if (r.massEv.length === 0)
+      throw new InputError(`${input.path}: no data rows (two numeric columns: mass, coupling)`);
     // Ids by position, not random: the same files give the same SVG bytes (paper figures rebuilt by scripts).
     const curve = newCurve(
       {
@@ -85,7 +103,13 @@ function loadCsv(inputs: CliInput[], opts: CliOptions, preParsed: PreParsed): Lo
     const shown = badRows.slice(0, MAX_ROW_MESSAGES);
     const more = badCount > shown.length ? [`… and ${badCount - shown.length} more`] : [];
     if (!opts.skipBadRows) {
-      throw new InputError([...shown, ...more, `${badCount} row(s) could not be read; fix them, or pass --skip-bad-rows to leave them out`].join("\n"));
+      throw new InputError(
+        [
+          ...shown,
+          ...more,
+          `${badCount} row(s) could not be read; fix them, or pass --skip-bad-rows to leave them out`,
+        ].join("\n"),
+      );
     }
     notes.unshift(...shown, ...more);
   }
@@ -123,8 +147,13 @@ export function undrawablePointNotes(project: Project, source: string): string[]
   for (const c of project.curves) {
     let bad = 0;
     const n = Math.min(c.massEv.length, c.gInvGeV.length);
-    for (let i = 0; i < n; i++) if (!(c.massEv[i] > 0 && c.gInvGeV[i] > 0 && Number.isFinite(c.massEv[i]) && Number.isFinite(c.gInvGeV[i]))) bad++;
-    if (bad > 0) notes.push(`${source}: curve "${c.label}" has ${bad} point(s) with a mass or coupling ≤ 0 (or not finite); they are not drawn on the log axes`);
+    for (let i = 0; i < n; i++)
+      if (!(c.massEv[i] > 0 && c.gInvGeV[i] > 0 && Number.isFinite(c.massEv[i]) && Number.isFinite(c.gInvGeV[i])))
+        bad++;
+    if (bad > 0)
+      notes.push(
+        `${source}: curve "${c.label}" has ${bad} point(s) with a mass or coupling ≤ 0 (or not finite); they are not drawn on the log axes`,
+      );
     if (c.massEv.length === 0) notes.push(`${source}: curve "${c.label}" has no data points`);
   }
   return notes;
@@ -137,7 +166,12 @@ export function undrawablePointNotes(project: Project, source: string): string[]
  */
 export function loadProject(opts: CliOptions, preParsed: PreParsed = []): LoadedProject {
   const first = opts.inputs[0];
-  const loaded = first.kind === "project" ? loadProjectFile(first) : first.kind === "svg" ? loadSvg(first) : loadCsv(opts.inputs, opts, preParsed);
+  const loaded =
+    first.kind === "project"
+      ? loadProjectFile(first)
+      : first.kind === "svg"
+        ? loadSvg(first)
+        : loadCsv(opts.inputs, opts, preParsed);
   const extra = first.kind === "csv" ? [] : undrawablePointNotes(loaded.project, first.path);
   return { project: applyFigureOptions(loaded.project, opts), notes: [...loaded.notes, ...extra] };
 }

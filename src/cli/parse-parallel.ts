@@ -4,7 +4,7 @@
 import { availableParallelism } from "node:os";
 import { basename } from "node:path";
 import { Worker } from "node:worker_threads";
-import type { CurveParseResult } from "../data/csv";
+import type { CurveParseResult } from "../formats/csv";
 import { seedPreparedCurve, type PreparedTransfer } from "../plot/prepare-transfer";
 import type { CliOptions } from "./args";
 
@@ -37,10 +37,23 @@ export interface ParseReply {
  * Never throws.
  * @param threads most workers to start. @default os.availableParallelism()
  */
-export async function parseCsvInWorkers(opts: CliOptions, workerUrl: URL, threads: number = availableParallelism()): Promise<(CurveParseResult | undefined)[]> {
+export async function parseCsvInWorkers(
+  opts: CliOptions,
+  workerUrl: URL,
+  threads: number = availableParallelism(),
+): Promise<(CurveParseResult | undefined)[]> {
   const jobs: ParseJob[] = opts.inputs
     // A CSV curve keeps its file order only as a region (inputs.ts), and a CSV figure starts in the g_aγγ view.
-    .map((input, index) => ({ index, path: input.path, fileName: basename(input.path), massUnit: opts.massUnit, couplingUnit: opts.couplingUnit, sorted: input.role !== "region", closed: input.role === "region", kind: input.kind }))
+    .map((input, index) => ({
+      index,
+      path: input.path,
+      fileName: basename(input.path),
+      massUnit: opts.massUnit,
+      couplingUnit: opts.couplingUnit,
+      sorted: input.role !== "region",
+      closed: input.role === "region",
+      kind: input.kind,
+    }))
     .filter((j) => j.kind === "csv")
     .map(({ kind: _kind, ...job }) => job);
   const results: (CurveParseResult | undefined)[] = new Array(opts.inputs.length).fill(undefined);
@@ -61,7 +74,13 @@ export async function parseCsvInWorkers(opts: CliOptions, workerUrl: URL, thread
         if (reply.result) {
           results[reply.index] = reply.result;
           // Into this thread's plot cache under the arrays the curve is drawn from; a misfit is ignored (prepared when drawn).
-          if (reply.prepared) seedPreparedCurve(reply.result.massEv, reply.result.gInvGeV, jobs.find((j) => j.index === reply.index)?.sorted ?? true, reply.prepared);
+          if (reply.prepared)
+            seedPreparedCurve(
+              reply.result.massEv,
+              reply.result.gInvGeV,
+              jobs.find((j) => j.index === reply.index)?.sorted ?? true,
+              reply.prepared,
+            );
         }
         feed();
       });

@@ -2,7 +2,7 @@
 // main thread, so that several files are handled at once on a machine with more than one CPU (parse-parallel.ts).
 import { readFileSync } from "node:fs";
 import { parentPort } from "node:worker_threads";
-import { parseCurveText } from "../data/csv";
+import { parseCurveText } from "../formats/csv";
 import { computePrepared, preparedTransferables } from "../plot/prepare-transfer";
 import type { ParseJob, ParseReply } from "./parse-parallel";
 
@@ -16,17 +16,32 @@ if (port) {
     let reply: ParseReply;
     try {
       const text = readFileSync(job.path, "utf8");
-      const result = parseCurveText(text, { fileName: job.fileName, massUnit: job.massUnit, couplingUnit: job.couplingUnit });
+      const result = parseCurveText(text, {
+        fileName: job.fileName,
+        massUnit: job.massUnit,
+        couplingUnit: job.couplingUnit,
+      });
       // The same preparation the figure would build on first drawing (identical by construction), for the
       // g_aγγ view a CSV figure starts in; the main thread seeds its plot cache with it.
-      const prepared = !result.fatal && result.massEv.length > 0 ? computePrepared(result.massEv, result.gInvGeV, job.sorted, { slopes: [0], closed: job.closed }) : undefined;
+      const prepared =
+        !result.fatal && result.massEv.length > 0
+          ? computePrepared(result.massEv, result.gInvGeV, job.sorted, { slopes: [0], closed: job.closed })
+          : undefined;
       reply = { index: job.index, result, prepared };
     } catch {
       // The main thread reads and parses this file again itself, and reports any problem in its own words.
       reply = { index: job.index, result: null };
     }
     // Moved, not copied: the point arrays are most of the result's bytes.
-    const buffers = reply.result ? [...new Set([reply.result.massEv.buffer, reply.result.gInvGeV.buffer, ...(reply.prepared ? preparedTransferables(reply.prepared) : [])])] : [];
+    const buffers = reply.result
+      ? [
+          ...new Set([
+            reply.result.massEv.buffer,
+            reply.result.gInvGeV.buffer,
+            ...(reply.prepared ? preparedTransferables(reply.prepared) : []),
+          ]),
+        ]
+      : [];
     port.postMessage(reply, buffers as ArrayBuffer[]);
   });
 }

@@ -7,9 +7,15 @@ import { parseArgs, USAGE } from "./args";
 import { InputError, loadProject, type PreParsed } from "./inputs";
 import { pickFallbackFont, pngPixelSize, renderPng } from "./png";
 import { writeAllOrNothing, type OutputFile } from "./write-atomic";
-import { embedCapText, embedProjectInSvgWithInfo, exportFigureSvg, exportSizeInches, rasterResolution } from "../plot/figure-file";
+import {
+  embedCapText,
+  embedProjectInSvgWithInfo,
+  exportFigureSvg,
+  exportSizeInches,
+  rasterResolution,
+} from "../formats/figure-file";
 import { presetOf } from "../plot/layout";
-import { modelsToCsv } from "../plot/model-csv";
+import { modelsToCsv } from "../formats/model-csv";
 
 /** Where the renderer writes its messages (tests pass their own). */
 export interface Io {
@@ -27,7 +33,8 @@ function size(bytes: number): string {
 
 function checkOutputDir(path: string): void {
   const dir = dirname(resolve(path));
-  if (!existsSync(dir) || !statSync(dir).isDirectory()) throw new InputError(`${path}: the directory ${dir} does not exist`);
+  if (!existsSync(dir) || !statSync(dir).isDirectory())
+    throw new InputError(`${path}: the directory ${dir} does not exist`);
   if (existsSync(path) && statSync(path).isDirectory()) throw new InputError(`${path}: is a directory`);
 }
 
@@ -76,9 +83,15 @@ function run(argv: readonly string[], io: Io, preParsed: PreParsed): number {
           `note: project embedded without curve data (${embedded.omittedPoints} points exceed ${embedCapText(embedded.omittedBecause ?? "size")}); the SVG reopens with models, figure and constants only: keep the project file or the CSV files for the data`,
         );
       }
-      const embedNote = embedded ? (embedded.embeddedCurves ? ", project embedded" : ", project embedded without curve data") : "";
+      const embedNote = embedded
+        ? embedded.embeddedCurves
+          ? ", project embedded"
+          : ", project embedded without curve data"
+        : "";
       files.push({ path: opts.out, data: svg });
-      report.push(`wrote ${opts.out} (${size(Buffer.byteLength(svg))}, ${preset.widthPhysical} × ${preset.heightPhysical}, ${project.curves.length} curve(s), ${project.models.length} model(s)${embedNote})`);
+      report.push(
+        `wrote ${opts.out} (${size(Buffer.byteLength(svg))}, ${preset.widthPhysical} × ${preset.heightPhysical}, ${project.curves.length} curve(s), ${project.models.length} model(s)${embedNote})`,
+      );
     }
     if (opts.png) {
       const inches = exportSizeInches(project);
@@ -88,15 +101,22 @@ function run(argv: readonly string[], io: Io, preParsed: PreParsed): number {
       if (font.note) io.err(`note: ${font.note}`);
       // Thinned for the PNG's own pixels (≤ 0.5 PNG px), not the 96/in scene px of the SVG.
       const resolution = rasterResolution(dpi);
-      const forPng = bare && resolution === rasterResolution(96) ? bare : exportFigureSvg(project, { embedProject: false, resolution });
+      const forPng =
+        bare && resolution === rasterResolution(96)
+          ? bare
+          : exportFigureSvg(project, { embedProject: false, resolution });
       const png = renderPng(forPng, px.widthPx, dpi, font.family);
       files.push({ path: opts.png, data: png });
-      report.push(`wrote ${opts.png} (${size(png.length)}, ${px.widthPx} × ${px.heightPx} px, ${Math.round(dpi * 100) / 100} dpi)`);
+      report.push(
+        `wrote ${opts.png} (${size(png.length)}, ${px.widthPx} × ${px.heightPx} px, ${Math.round(dpi * 100) / 100} dpi)`,
+      );
     }
     if (opts.modelsCsv) {
       const csv = modelsToCsv(project);
       files.push({ path: opts.modelsCsv, data: csv });
-      report.push(`wrote ${opts.modelsCsv} (${size(Buffer.byteLength(csv))}, ${project.models.filter((m) => m.visible).length} model(s))`);
+      report.push(
+        `wrote ${opts.modelsCsv} (${size(Buffer.byteLength(csv))}, ${project.models.filter((m) => m.visible).length} model(s))`,
+      );
     }
     writeAllOrNothing(files);
     for (const line of report) io.out(line);

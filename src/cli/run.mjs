@@ -23,7 +23,15 @@ function newestMtime(dir) {
 }
 
 const bundles = [out, worker];
-const stale = !bundles.every((f) => existsSync(f)) || Math.min(...bundles.map((f) => statSync(f).mtimeMs)) < Math.max(newestMtime(join(repo, "src")), ...["package.json", "package-lock.json"].filter((f) => existsSync(join(repo, f))).map((f) => statSync(join(repo, f)).mtimeMs));
+const stale =
+  !bundles.every((f) => existsSync(f)) ||
+  Math.min(...bundles.map((f) => statSync(f).mtimeMs)) <
+    Math.max(
+      newestMtime(join(repo, "src")),
+      ...["package.json", "package-lock.json"]
+        .filter((f) => existsSync(join(repo, f)))
+        .map((f) => statSync(join(repo, f)).mtimeMs),
+    );
 if (stale) {
   mkdirSync(cache, { recursive: true });
   // Chunk names carry content hashes: drop the previous build's so they do not pile up.
@@ -31,7 +39,10 @@ if (stale) {
   // Packages are bundled too (one file to load instead of zod's and d3's many: ~40 ms less start-up), except
   // resvg, a native module loaded only for PNG output; a package upgrade touches package-lock.json, so rebuilds.
   await build({
-    entryPoints: { render: join(repo, "src", "cli", "start.ts"), "parse-worker": join(repo, "src", "cli", "parse-worker.ts") },
+    entryPoints: {
+      render: join(repo, "src", "cli", "start.ts"),
+      "parse-worker": join(repo, "src", "cli", "parse-worker.ts"),
+    },
     bundle: true,
     platform: "node",
     format: "esm",

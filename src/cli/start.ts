@@ -24,9 +24,16 @@ function parseThreads(): number {
  * AXBAND_PARSE_THREADS=n in the environment caps the workers (1: parse in-process, to compare timings).
  * @param io where messages go. @default stdout and stderr
  */
-export async function mainAsync(argv: readonly string[], io?: Io, options: { parseWorker?: URL } = {}): Promise<number> {
+export async function mainAsync(
+  argv: readonly string[],
+  io?: Io,
+  options: { parseWorker?: URL } = {},
+): Promise<number> {
   const args = parseArgs(argv);
-  const pending = args.ok && !args.options.help && options.parseWorker ? parseCsvInWorkers(args.options, options.parseWorker, parseThreads()) : Promise.resolve([]);
+  const pending =
+    args.ok && !args.options.help && options.parseWorker
+      ? parseCsvInWorkers(args.options, options.parseWorker, parseThreads())
+      : Promise.resolve([]);
   const render = await import("./render");
   return render.mainWithPreParsed(argv, io ?? render.consoleIo, await pending);
 }

@@ -136,11 +136,7 @@ function readCharges(ew: ElectroweakInput | undefined, rd: FieldReader): Rationa
       const s = ew.rep === "3" ? 1 : -1;
       const half = new Fraction(1, 2);
       const bHalf = b.div(2);
-      return [
-        half.add(bHalf).mul(s).add(x),
-        half.neg().add(bHalf).mul(s).add(x),
-        b.mul(-s).add(x),
-      ];
+      return [half.add(bHalf).mul(s).add(x), half.neg().add(bHalf).mul(s).add(x), b.mul(-s).add(x)];
     }
     case "explicit": {
       const list: unknown = ew.charges;
@@ -155,7 +151,10 @@ function readCharges(ew: ElectroweakInput | undefined, rd: FieldReader): Rationa
       // A caller (e.g. the UI table) may state the multiplet size next to the list; it must agree.
       const dim: unknown = (ew as { dim?: unknown }).dim;
       if (dim !== undefined && dim !== list.length) {
-        rd.fail("ew.charges", `explicit charges: ${list.length} charges given for a multiplet of dimension ${show(dim)}`);
+        rd.fail(
+          "ew.charges",
+          `explicit charges: ${list.length} charges given for a multiplet of dimension ${show(dim)}`,
+        );
         return null;
       }
       const out = list.map((c, k) => rd.rational(`ew.charges[${k}]`, `electric charge ${k + 1}`, c));
@@ -181,7 +180,8 @@ function readFermion(f: FermionInput, i: number, errors: AnomalyFieldError[]): A
     rd.fail("colour", f.colour === undefined ? "colour representation is missing" : `colour ${colour.reason}`);
   }
   const charges = readCharges(f.ew, rd);
-  if (f.chirality !== "L" && f.chirality !== "R") rd.fail("chirality", `chirality ${show(f.chirality)} must be "L" or "R"`);
+  if (f.chirality !== "L" && f.chirality !== "R")
+    rd.fail("chirality", `chirality ${show(f.chirality)} must be "L" or "R"`);
   const pq = rd.rational("pq", "PQ charge", f.pq);
   const copies = f.copies ?? 1;
   const copiesOk = Number.isSafeInteger(copies) && copies >= 0;
@@ -226,10 +226,19 @@ export function tryAnomaly(
   if (opts.scalarCharge !== undefined) {
     const r = parseRational(opts.scalarCharge);
     xs = r.ok ? r.value : null;
-    if (!r.ok) errors.push({ index: -1, field: "scalarCharge", message: `scalar PQ charge X_S ${show(opts.scalarCharge)} ${r.reason}` });
+    if (!r.ok)
+      errors.push({
+        index: -1,
+        field: "scalarCharge",
+        message: `scalar PQ charge X_S ${show(opts.scalarCharge)} ${r.reason}`,
+      });
     else if (r.value.equals(0)) {
       xs = null;
-      errors.push({ index: -1, field: "scalarCharge", message: "scalar PQ charge X_S must not be 0 (N_DW = |2N/X_S|)" });
+      errors.push({
+        index: -1,
+        field: "scalarCharge",
+        message: "scalar PQ charge X_S must not be 0 (N_DW = |2N/X_S|)",
+      });
     }
   }
   const contributions = fermions.map((f, i) => readFermion(f, i, errors));
@@ -247,7 +256,9 @@ export function tryAnomaly(
     eOverN = E.div(N);
     domainWallExact = N.mul(2).div(xs).abs();
     if (!domainWallExact.equals(domainWallExact.floor())) {
-      notes.push(`N_DW = |2N/X_S| = ${domainWallExact.toFraction()} is not an integer: check the PQ charges against X_S`);
+      notes.push(
+        `N_DW = |2N/X_S| = ${domainWallExact.toFraction()} is not an integer: check the PQ charges against X_S`,
+      );
     }
   }
   return {

@@ -10,7 +10,10 @@ const FRACTION_RE = /^([+-]?\d+)\/([+-]?\d+)$/;
 const DECIMAL_RE = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
 
 function normalise(token: string): string {
-  return token.trim().replace(/\u2212/g, "-").replace(/\s*\/\s*/g, "/");
+  return token
+    .trim()
+    .replace(/\u2212/g, "-")
+    .replace(/\s*\/\s*/g, "/");
 }
 
 /**
@@ -39,7 +42,8 @@ const SEPARATORS: RegExp[] = [/\.\.\.?|…/, /\s*[\u2013\u2014]\s*/, /\s+to\s+/i
 export function parseEOverN(text: string): EOverNParse {
   if (typeof text !== "string") return { ok: false, error: "E/N: expected text" };
   const trimmed = text.trim();
-  if (trimmed === "") return { ok: false, error: "E/N: empty; enter a value such as 8/3 or an interval such as 5/3..44/3" };
+  if (trimmed === "")
+    return { ok: false, error: "E/N: empty; enter a value such as 8/3 or an interval such as 5/3..44/3" };
   let parts: string[] = [trimmed];
   for (const sep of SEPARATORS) {
     const split = trimmed.split(sep);
@@ -58,11 +62,15 @@ export function parseEOverN(text: string): EOverNParse {
     const value = rationalToNumber(token);
     if (Number.isNaN(value)) {
       const zeroDen = FRACTION_RE.test(token) && Number(FRACTION_RE.exec(token)?.[2]) === 0;
-      return { ok: false, error: `${what}: "${token}" ${zeroDen ? "has a zero denominator" : "is not a number or fraction"}` };
+      return {
+        ok: false,
+        error: `${what}: "${token}" ${zeroDen ? "has a zero denominator" : "is not a number or fraction"}`,
+      };
     }
     if (!Number.isFinite(value)) return { ok: false, error: `${what}: "${token}" is not a finite number` };
     ends.push({ text: token.replace(/^\+/, ""), value });
   }
-  const [a, b] = ends.length === 2 && ends[1].value < ends[0].value ? [ends[1], ends[0]] : [ends[0], ends[ends.length - 1]];
+  const [a, b] =
+    ends.length === 2 && ends[1].value < ends[0].value ? [ends[1], ends[0]] : [ends[0], ends[ends.length - 1]];
   return { ok: true, min: a.text, max: b.text, minValue: a.value, maxValue: b.value, isBand: a.value < b.value };
 }

@@ -55,7 +55,21 @@ const NAMED: Record<string, Su3Irrep> = {
 };
 
 /** The shortcut names parseColour understands, in display order (Object.keys would put "1", "3"… first). */
-export const COLOUR_NAMES: readonly string[] = ["1", "3", "3bar", "6", "6bar", "8", "10", "10bar", "15", "15bar", "15'", "15'bar", "27"];
+export const COLOUR_NAMES: readonly string[] = [
+  "1",
+  "3",
+  "3bar",
+  "6",
+  "6bar",
+  "8",
+  "10",
+  "10bar",
+  "15",
+  "15bar",
+  "15'",
+  "15'bar",
+  "27",
+];
 
 /** Largest Dynkin label accepted: keeps d(p,q)·C₂ far inside the exact range of doubles. */
 const MAX_LABEL = 1000;
@@ -74,10 +88,18 @@ export function colourName(irrep: Su3Irrep): string {
 export function parseColour(input: unknown): ColourParse {
   if (typeof input === "object" && input !== null) {
     const { p, q } = input as { p?: unknown; q?: unknown };
-    if (typeof p !== "number" || typeof q !== "number" || !Number.isSafeInteger(p) || !Number.isSafeInteger(q) || p < 0 || q < 0) {
+    if (
+      typeof p !== "number" ||
+      typeof q !== "number" ||
+      !Number.isSafeInteger(p) ||
+      !Number.isSafeInteger(q) ||
+      p < 0 ||
+      q < 0
+    ) {
       return { ok: false, reason: `(${String(p)},${String(q)}) is not a pair of non-negative integer Dynkin labels` };
     }
-    if (p > MAX_LABEL || q > MAX_LABEL) return { ok: false, reason: `(${p},${q}) has a Dynkin label above ${MAX_LABEL}` };
+    if (p > MAX_LABEL || q > MAX_LABEL)
+      return { ok: false, reason: `(${p},${q}) has a Dynkin label above ${MAX_LABEL}` };
     return { ok: true, irrep: { p, q }, name: colourName({ p, q }) };
   }
   if (typeof input === "number") return parseColour(String(input));
@@ -96,5 +118,8 @@ export function parseColour(input: unknown): ColourParse {
   // "3bar'" and "15bar'" are the same as "15'bar".
   const named = NAMED[text] ?? NAMED[text.replace(/^(\d+)bar'$/, "$1'bar")];
   if (named) return { ok: true, irrep: { ...named }, name: colourName(named) };
-  return { ok: false, reason: `"${input}" is not a known SU(3) representation (use ${COLOUR_NAMES.join(", ")} or Dynkin labels "(p,q)")` };
+  return {
+    ok: false,
+    reason: `"${input}" is not a known SU(3) representation (use ${COLOUR_NAMES.join(", ")} or Dynkin labels "(p,q)")`,
+  };
 }

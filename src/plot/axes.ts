@@ -1,7 +1,7 @@
 // Axes of the figure: frame, inward ticks on all four sides, tick labels, axis titles with real
 // sub/superscripts, the optional top axis (f_a or frequency, in step with the mass axis) and the decade grid.
 import { PLANCK_EV_S, type AxionConstants } from "../physics/constants";
-import type { TopAxis, YView } from "../data/types";
+import type { TopAxis, YView } from "../project/types";
 import type { PathNode, SceneNode, TextNode, TextRun } from "./scene-types";
 import { plainOrScientificRuns, r2 } from "./format";
 import type { Fonts, Layout } from "./layout";
@@ -18,7 +18,13 @@ export const FA_TITLE: TextRun[] = [{ text: "f", italic: true }, { text: "a", sh
 export function yTitle(view: YView): TextRun[] {
   if (view === "normalized") return [{ text: "|E/N − c" }, { text: "γ", shift: "sub" }, { text: "|" }];
   if (view === "g-gamma") return [{ text: "|g" }, { text: "γ", shift: "sub" }, { text: "|" }];
-  return [{ text: "g", italic: true }, { text: "aγγ", shift: "sub" }, { text: " [GeV" }, { text: "−1", shift: "sup" }, { text: "]" }];
+  return [
+    { text: "g", italic: true },
+    { text: "aγγ", shift: "sub" },
+    { text: " [GeV" },
+    { text: "−1", shift: "sup" },
+    { text: "]" },
+  ];
 }
 
 /** Title of the frequency top axis in its unit: ν [GHz]. */
@@ -61,15 +67,24 @@ export function axisTicks(f: AxesFrame): AxisTicks {
   const ppdX = map.bx;
   const ppdY = -map.by;
   const xPx = (m: number) => map.ax + map.bx * Math.log10(m);
-  const x = logTicks(massDomainEv[0], massDomainEv[1], horizontalTickOpts(ppdX, fonts)).map((t) => ({ ...t, px: xPx(t.value) }));
+  const x = logTicks(massDomainEv[0], massDomainEv[1], horizontalTickOpts(ppdX, fonts)).map((t) => ({
+    ...t,
+    px: xPx(t.value),
+  }));
   const yFormat = f.yView && f.yView !== "coupling" ? plainOrScientificRuns : undefined;
-  const y = logTicks(yDomain[0], yDomain[1], { ...verticalTickOpts(ppdY, fonts), format: yFormat }).map((t) => ({ ...t, px: map.ay + map.by * Math.log10(t.value) }));
+  const y = logTicks(yDomain[0], yDomain[1], { ...verticalTickOpts(ppdY, fonts), format: yFormat }).map((t) => ({
+    ...t,
+    px: map.ay + map.by * Math.log10(t.value),
+  }));
   let top: AxisTicks["top"] = null;
   let topTitle: TextRun[] | null = null;
   let frequencyUnit: FrequencyUnit | null = null;
   if (f.topAxis === "fa") {
     const k = f.constants.kMuEv * 1e6;
-    top = faTicks(massDomainEv, f.constants, horizontalTickOpts(ppdX, fonts)).map((t) => ({ ...t, px: xPx(k / t.value) }));
+    top = faTicks(massDomainEv, f.constants, horizontalTickOpts(ppdX, fonts)).map((t) => ({
+      ...t,
+      px: xPx(k / t.value),
+    }));
     topTitle = FA_TITLE;
   } else if (f.topAxis === "frequency") {
     const ft = frequencyTicks(massDomainEv, horizontalTickOpts(ppdX, fonts));
@@ -88,8 +103,27 @@ function valueKey(v: number): string {
     .replace(/[^A-Za-z0-9-]/g, "_");
 }
 
-function text(id: string, x: number, y: number, runs: TextRun[], sizePx: number, anchor: TextNode["anchor"], extra: Partial<TextNode> = {}): TextNode {
-  return { kind: "text", id, x: r2(x), y: r2(y), runs, sizePx: r2(sizePx), anchor, baseline: "alphabetic", fill: "#1a1a1a", ...extra };
+function text(
+  id: string,
+  x: number,
+  y: number,
+  runs: TextRun[],
+  sizePx: number,
+  anchor: TextNode["anchor"],
+  extra: Partial<TextNode> = {},
+): TextNode {
+  return {
+    kind: "text",
+    id,
+    x: r2(x),
+    y: r2(y),
+    runs,
+    sizePx: r2(sizePx),
+    anchor,
+    baseline: "alphabetic",
+    fill: "#1a1a1a",
+    ...extra,
+  };
 }
 
 /** Frame, ticks, tick labels and titles. */
@@ -126,9 +160,28 @@ export function axesNodes(f: AxesFrame, t: AxisTicks, layout: Layout, yTitleRuns
   }
   const lw = r2(fonts.axisLinePx);
   const nodes: SceneNode[] = [];
-  if (minor) nodes.push({ kind: "path", id: "ticks-minor", d: minor, stroke: "#1a1a1a", strokeWidth: r2(lw * 0.8), fill: "none" });
-  if (major) nodes.push({ kind: "path", id: "ticks-major", d: major, stroke: "#1a1a1a", strokeWidth: lw, fill: "none" });
-  nodes.push({ kind: "rect", id: "frame", x: r2(x0), y: r2(y0), w: r2(plot.w), h: r2(plot.h), fill: "none", stroke: "#1a1a1a", strokeWidth: lw });
+  if (minor)
+    nodes.push({
+      kind: "path",
+      id: "ticks-minor",
+      d: minor,
+      stroke: "#1a1a1a",
+      strokeWidth: r2(lw * 0.8),
+      fill: "none",
+    });
+  if (major)
+    nodes.push({ kind: "path", id: "ticks-major", d: major, stroke: "#1a1a1a", strokeWidth: lw, fill: "none" });
+  nodes.push({
+    kind: "rect",
+    id: "frame",
+    x: r2(x0),
+    y: r2(y0),
+    w: r2(plot.w),
+    h: r2(plot.h),
+    fill: "none",
+    stroke: "#1a1a1a",
+    strokeWidth: lw,
+  });
 
   // Label ids follow the tick value, so a label keeps its id (and its element on screen) while zooming.
   // Labels of the horizontal axes that would cross the figure edge are left out.
@@ -136,13 +189,31 @@ export function axesNodes(f: AxesFrame, t: AxisTicks, layout: Layout, yTitleRuns
     const half = runsWidthPx(tk.label ?? [], fonts.tickPx) / 2;
     return tk.px - half >= 0 && tk.px + half <= layout.figureWidthPx;
   };
-  for (const tk of t.x) if (tk.label && inX(tk.px) && fitsX(tk)) nodes.push(text(`xlabel-${valueKey(tk.value)}`, tk.px, layout.xLabelBaseline, tk.label, fonts.tickPx, "middle"));
-  for (const tk of t.y) if (tk.label && inY(tk.px)) nodes.push(text(`ylabel-${valueKey(tk.value)}`, layout.yLabelRight, tk.px + 0.36 * fonts.tickPx, tk.label, fonts.tickPx, "end"));
-  for (const tk of t.top ?? []) if (tk.label && inX(tk.px) && fitsX(tk)) nodes.push(text(`toplabel-${valueKey(tk.value)}`, tk.px, layout.topLabelBaseline, tk.label, fonts.tickPx, "middle"));
+  for (const tk of t.x)
+    if (tk.label && inX(tk.px) && fitsX(tk))
+      nodes.push(text(`xlabel-${valueKey(tk.value)}`, tk.px, layout.xLabelBaseline, tk.label, fonts.tickPx, "middle"));
+  for (const tk of t.y)
+    if (tk.label && inY(tk.px))
+      nodes.push(
+        text(
+          `ylabel-${valueKey(tk.value)}`,
+          layout.yLabelRight,
+          tk.px + 0.36 * fonts.tickPx,
+          tk.label,
+          fonts.tickPx,
+          "end",
+        ),
+      );
+  for (const tk of t.top ?? [])
+    if (tk.label && inX(tk.px) && fitsX(tk))
+      nodes.push(
+        text(`toplabel-${valueKey(tk.value)}`, tk.px, layout.topLabelBaseline, tk.label, fonts.tickPx, "middle"),
+      );
 
   nodes.push(text("xtitle", x0 + plot.w / 2, layout.xTitleBaseline, MASS_TITLE, fonts.titlePx, "middle"));
   nodes.push(text("ytitle", layout.yTitleX, y0 + plot.h / 2, yTitleRuns, fonts.titlePx, "middle", { rotate: -90 }));
-  if (t.top && t.topTitle) nodes.push(text("toptitle", x0 + plot.w / 2, layout.topTitleBaseline, t.topTitle, fonts.titlePx, "middle"));
+  if (t.top && t.topTitle)
+    nodes.push(text("toptitle", x0 + plot.w / 2, layout.topTitleBaseline, t.topTitle, fonts.titlePx, "middle"));
   return nodes;
 }
 
@@ -150,7 +221,23 @@ export function axesNodes(f: AxesFrame, t: AxisTicks, layout: Layout, yTitleRuns
 export function gridNodes(f: AxesFrame, t: AxisTicks): PathNode[] {
   const { plot } = f;
   let d = "";
-  for (const tk of t.x) if (tk.major && tk.px > plot.x + 0.5 && tk.px < plot.x + plot.w - 0.5) d += `M${r2(tk.px)} ${r2(plot.y)}V${r2(plot.y + plot.h)}`;
-  for (const tk of t.y) if (tk.major && tk.px > plot.y + 0.5 && tk.px < plot.y + plot.h - 0.5) d += `M${r2(plot.x)} ${r2(tk.px)}H${r2(plot.x + plot.w)}`;
-  return d ? [{ kind: "path", id: "grid-decades", d, stroke: "#000000", strokeOpacity: 0.1, strokeWidth: r2(Math.max(0.5, f.fonts.axisLinePx * 0.8)), fill: "none" }] : [];
+  for (const tk of t.x)
+    if (tk.major && tk.px > plot.x + 0.5 && tk.px < plot.x + plot.w - 0.5)
+      d += `M${r2(tk.px)} ${r2(plot.y)}V${r2(plot.y + plot.h)}`;
+  for (const tk of t.y)
+    if (tk.major && tk.px > plot.y + 0.5 && tk.px < plot.y + plot.h - 0.5)
+      d += `M${r2(plot.x)} ${r2(tk.px)}H${r2(plot.x + plot.w)}`;
+  return d
+    ? [
+        {
+          kind: "path",
+          id: "grid-decades",
+          d,
+          stroke: "#000000",
+          strokeOpacity: 0.1,
+          strokeWidth: r2(Math.max(0.5, f.fonts.axisLinePx * 0.8)),
+          fill: "none",
+        },
+      ]
+    : [];
 }

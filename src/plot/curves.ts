@@ -1,6 +1,6 @@
 // Curves as scene nodes by role: exclusion (filled from the curve up past the plot top, plus the line),
 // projection (a line), region (a closed, filled and outlined polygon), at pixel resolution via decimate.ts.
-import type { Curve, YView } from "../data/types";
+import type { Curve, YView } from "../project/types";
 import type { AxionConstants } from "../physics/constants";
 import type { PathNode } from "./scene-types";
 import type { Shape } from "./legend-place";
@@ -76,11 +76,40 @@ export function curveGeometry(curve: Curve, f: CurveFrame, nodeId: string): Curv
     // stroke also marks the vertical ends of the excluded region where they lie inside the plot.
     const topY = r2(f.plot.y - 4 * lw - 2);
     const closeUp = `L${r2(pl.xs[pl.n - 1])} ${topY}L${r2(pl.xs[0])} ${topY}Z`;
-    fills.push({ kind: "path", id: `${nodeId}-exclusion`, d: pathDataCompact(pl, closeUp), fill: colour, fillOpacity: opacity, stroke: colour, strokeWidth: lw, dash, data: { ...data } });
+    fills.push({
+      kind: "path",
+      id: `${nodeId}-exclusion`,
+      d: pathDataCompact(pl, closeUp),
+      fill: colour,
+      fillOpacity: opacity,
+      stroke: colour,
+      strokeWidth: lw,
+      dash,
+      data: { ...data },
+    });
   } else if (curve.role === "projection") {
-    lines.push({ kind: "path", id: `${nodeId}-line`, d: pathDataCompact(pl), stroke: colour, strokeWidth: lw, dash, fill: "none", data: { ...data } });
+    lines.push({
+      kind: "path",
+      id: `${nodeId}-line`,
+      d: pathDataCompact(pl),
+      stroke: colour,
+      strokeWidth: lw,
+      dash,
+      fill: "none",
+      data: { ...data },
+    });
   } else {
-    fills.push({ kind: "path", id: `${nodeId}-region`, d: pathDataCompact(pl), fill: colour, fillOpacity: opacity, stroke: colour, strokeWidth: lw, dash, data: { ...data } });
+    fills.push({
+      kind: "path",
+      id: `${nodeId}-region`,
+      d: pathDataCompact(pl),
+      fill: colour,
+      fillOpacity: opacity,
+      stroke: colour,
+      strokeWidth: lw,
+      dash,
+      data: { ...data },
+    });
   }
   return out;
 }

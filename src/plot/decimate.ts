@@ -148,7 +148,11 @@ export function installPrepared(massEv: Float64Array, gInvGeV: Float64Array, pre
 }
 
 /** The prepared curve cached for these arrays and order, if any (nothing is computed). */
-export function cachedPrepared(massEv: Float64Array, gInvGeV: Float64Array, sorted: boolean): PreparedCurve | undefined {
+export function cachedPrepared(
+  massEv: Float64Array,
+  gInvGeV: Float64Array,
+  sorted: boolean,
+): PreparedCurve | undefined {
   const entry = cache.get(massEv);
   return entry && entry.g === gInvGeV ? entry[sorted ? "sorted" : "file"] : undefined;
 }
@@ -421,7 +425,13 @@ interface PixelMap {
  * (written while their values are at hand: a second pass over the indices would fetch them from memory
  * again); returns their count.
  */
-function thinColumnsInto(lm: Float64Array, v: Float64Array, pyr: Pyramid | null, p: ColumnParams, map: PixelMap | null = null): number {
+function thinColumnsInto(
+  lm: Float64Array,
+  v: Float64Array,
+  pyr: Pyramid | null,
+  p: ColumnParams,
+  map: PixelMap | null = null,
+): number {
   const n = lm.length;
   if (n === 0) return 0;
   const start = Math.max(0, lowerBound(lm, p.lmLo) - 1);
@@ -845,7 +855,18 @@ function levelOf(va: ViewArrays, key: string): LevelSelection {
  * path between them stays beyond that edge, so this is exact culling, found without touching its points.
  * Visible chunks are thinned on first use and kept in the level.
  */
-function gatherRuns(prep: PreparedCurve, va: ViewArrays, sel: LevelSelection, tx: number, ty: number, lmLo: number, lmHi: number, vLo: number, vHi: number, map: PixelMap): number {
+function gatherRuns(
+  prep: PreparedCurve,
+  va: ViewArrays,
+  sel: LevelSelection,
+  tx: number,
+  ty: number,
+  lmLo: number,
+  lmHi: number,
+  vLo: number,
+  vHi: number,
+  map: PixelMap,
+): number {
   const boxes = va.boxes as Float64Array;
   const n = prep.n;
   const lm = prep.lm;

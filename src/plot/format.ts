@@ -1,7 +1,7 @@
 // Small formatting helpers of the plot core: rounded numbers for path data, powers of ten as text runs with
 // a real superscript and a real minus sign, and safe colours and dash patterns from user input.
 import type { TextRun } from "./scene-types";
-import type { LineStyle } from "../data/types";
+import type { LineStyle } from "../project/types";
 
 /** Real minus sign (U+2212), never a hyphen, in every label. */
 export const MINUS = "\u2212";

@@ -2,10 +2,56 @@
 // decimation functions, for the app's renderer, the export and the command-line renderer.
 export type * from "./scene-types";
 export { buildScene, FONT_FAMILY, FALLBACK_MASS_RANGE_EV, fallbackYRange, type BuildSceneOpts } from "./scene";
-export { writeSvg, escapeXml, fmt, nodeAttributes, textPlacement, textSpans, isSafePathData, type WriteSvgOpts, type SvgAttribute } from "./svg";
-export { PRESETS, presetOf, fontsFor, computeLayout, PX_PER_IN, PX_PER_MM, CUSTOM_MM_LIMITS, type Preset, type Fonts, type Layout, type PlotRect } from "./layout";
-export { massToX, xToMass, yToPx, pxToY, massScale, yScale, gToView, viewToG, viewTransform, logAffine, sanitizeDomain, type LogAffine } from "./scales";
-export { logTicks, faTicks, faDomain, frequencyTicks, frequencyDomain, frequencyUnit, decadeLabelStep, type LogTick, type LogTickOpts, type FrequencyUnit } from "./ticks";
+export {
+  writeSvg,
+  escapeXml,
+  fmt,
+  nodeAttributes,
+  textPlacement,
+  textSpans,
+  isSafePathData,
+  type WriteSvgOpts,
+  type SvgAttribute,
+} from "./svg";
+export {
+  PRESETS,
+  presetOf,
+  fontsFor,
+  computeLayout,
+  PX_PER_IN,
+  PX_PER_MM,
+  CUSTOM_MM_LIMITS,
+  type Preset,
+  type Fonts,
+  type Layout,
+  type PlotRect,
+} from "./layout";
+export {
+  massToX,
+  xToMass,
+  yToPx,
+  pxToY,
+  massScale,
+  yScale,
+  gToView,
+  viewToG,
+  viewTransform,
+  logAffine,
+  sanitizeDomain,
+  type LogAffine,
+} from "./scales";
+export {
+  logTicks,
+  faTicks,
+  faDomain,
+  frequencyTicks,
+  frequencyDomain,
+  frequencyUnit,
+  decadeLabelStep,
+  type LogTick,
+  type LogTickOpts,
+  type FrequencyUnit,
+} from "./ticks";
 export { axisTicks, yTitle, MASS_TITLE, FA_TITLE, frequencyTitle, type AxisTicks } from "./axes";
 export { constantsOf, physicsOptsOf, eOverNValue, rescaleFactor, isRescaled, rescaleNote } from "./physics-settings";
 export {

@@ -1,6 +1,6 @@
 // Figure sizes and layout: the size presets with their physical sizes, font sizes per preset, and the
 // margins around the plot area computed from font sizes and estimated label widths (no DOM needed).
-import type { Figure, LegendPlace, SizePreset } from "../data/types";
+import type { Figure, LegendPlace, SizePreset } from "../project/types";
 import { CAP_HEIGHT, SUP_RAISE, SHIFT_SCALE } from "./text";
 
 /** CSS pixels per inch: scene coordinates are CSS px at 96 per inch. */
@@ -64,7 +64,8 @@ export const CUSTOM_MM_LIMITS: readonly [number, number] = [20, 1000];
  */
 export function presetOf(figure: Pick<Figure, "preset" | "customWidthMm" | "customHeightMm">): Preset {
   if (figure.preset !== "custom") return PRESETS[figure.preset] ?? PRESETS.slide;
-  const clamp = (v: number, d: number) => (Number.isFinite(v) ? Math.min(CUSTOM_MM_LIMITS[1], Math.max(CUSTOM_MM_LIMITS[0], v)) : d);
+  const clamp = (v: number, d: number) =>
+    Number.isFinite(v) ? Math.min(CUSTOM_MM_LIMITS[1], Math.max(CUSTOM_MM_LIMITS[0], v)) : d;
   return preset("custom", "Custom", clamp(figure.customWidthMm, 160), clamp(figure.customHeightMm, 90), 1);
 }
 
@@ -154,7 +155,13 @@ export type LegendCorner = "top-left" | "top-right" | "bottom-left" | "bottom-ri
  * Top-left corner (scene px) of a legend box of the given size in an inner corner of the plot area, inset
  * by 0.6 tick-label sizes from the frame.
  */
-export function cornerLegendOrigin(plot: PlotRect, corner: LegendCorner, widthPx: number, heightPx: number, fonts: Pick<Fonts, "tickPx">): { x: number; y: number } {
+export function cornerLegendOrigin(
+  plot: PlotRect,
+  corner: LegendCorner,
+  widthPx: number,
+  heightPx: number,
+  fonts: Pick<Fonts, "tickPx">,
+): { x: number; y: number } {
   const inset = fonts.tickPx * 0.6;
   const left = corner === "top-left" || corner === "bottom-left";
   const top = corner === "top-left" || corner === "top-right";

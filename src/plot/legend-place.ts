@@ -1,6 +1,6 @@
 // Automatic legend placement: the inner corner where the legend box covers the least drawn content, read
 // from the scene's curve and model paths on a coarse occupancy grid over the plot area (our own rule).
-import type { Curve } from "../data/types";
+import type { Curve } from "../project/types";
 import type { SceneNode } from "./scene-types";
 import type { LegendCorner, PlotRect } from "./layout";
 import { drawsSorted, preparedOf } from "./curves";
@@ -52,7 +52,10 @@ const standIns = new WeakMap<PreparedCurve, Map<number, { massEv: Float64Array; 
  * order, ends included), which outlines it far finer than the 4 px cells need. Depends on the data and the
  * view only, never on the resolution, so screen and export still agree.
  */
-export function placementCurve<C extends Pick<Curve, "role" | "keepOrder" | "massEv" | "gInvGeV">>(curve: C, slope: number): C {
+export function placementCurve<C extends Pick<Curve, "role" | "keepOrder" | "massEv" | "gInvGeV">>(
+  curve: C,
+  slope: number,
+): C {
   if (drawsSorted(curve)) return curve;
   const prep = preparedOf(curve);
   if (prep.n <= PLACEMENT_MAX_POINTS) return curve;
@@ -375,7 +378,11 @@ export interface FillScratch {
 
 /** Fresh {@link FillScratch} for a grid. */
 export function fillScratch(g: OccupancyGrid): FillScratch {
-  return { wind: new Int32Array(g.rows * g.cols), rowMin: new Int32Array(g.rows).fill(g.cols), rowMax: new Int32Array(g.rows).fill(-1) };
+  return {
+    wind: new Int32Array(g.rows * g.cols),
+    rowMin: new Int32Array(g.rows).fill(g.cols),
+    rowMax: new Int32Array(g.rows).fill(-1),
+  };
 }
 
 /**
@@ -454,7 +461,12 @@ function paints(colour: string | undefined): boolean {
  * @param plot the plot area, scene px
  * @param cellPx side of a cell, scene px. @default OCCUPANCY_CELL_PX
  */
-export function occupancyGrid(nodes: readonly SceneNode[], plot: PlotRect, cellPx: number = OCCUPANCY_CELL_PX, shapes: readonly Shape[] = []): OccupancyGrid {
+export function occupancyGrid(
+  nodes: readonly SceneNode[],
+  plot: PlotRect,
+  cellPx: number = OCCUPANCY_CELL_PX,
+  shapes: readonly Shape[] = [],
+): OccupancyGrid {
   const g = emptyGrid(plot, cellPx);
   const scratch = fillScratch(g);
   for (const shape of shapes) {
@@ -463,14 +475,21 @@ export function occupancyGrid(nodes: readonly SceneNode[], plot: PlotRect, cellP
   }
   for (const node of nodes) {
     if (node.kind === "text") continue;
-    const stroke = paints(node.stroke) && (node.strokeWidth ?? 1) > 0 && (node.kind === "rect" || (node.strokeOpacity ?? 1) > 0);
+    const stroke =
+      paints(node.stroke) && (node.strokeWidth ?? 1) > 0 && (node.kind === "rect" || (node.strokeOpacity ?? 1) > 0);
     // An absent fill is black in SVG, for paths and rects alike.
     const fill = paints(node.fill ?? "#000") && (node.fillOpacity ?? 1) > 0;
     if (!stroke && !fill) continue;
     const subpaths: Subpath[] =
       node.kind === "path"
         ? parsePathData(node.d)
-        : [{ xs: [node.x, node.x + node.w, node.x + node.w, node.x], ys: [node.y, node.y, node.y + node.h, node.y + node.h], closed: true }];
+        : [
+            {
+              xs: [node.x, node.x + node.w, node.x + node.w, node.x],
+              ys: [node.y, node.y, node.y + node.h, node.y + node.h],
+              closed: true,
+            },
+          ];
     if (fill) markFill(g, subpaths, scratch);
     if (stroke) markStroke(g, subpaths);
   }

@@ -75,11 +75,48 @@ export function legendNodes(entries: LegendEntry[], box: LegendBox, x: number, y
     const id = `legend-${i + 1}`;
     const lw = r2(e.lineWidthPx);
     if (e.kind === "model-line" || e.kind === "projection") {
-      if (e.spread) nodes.push({ kind: "rect", id: `${id}-spread`, x: r2(sx), y: r2(cy - sh / 2), w: r2(sw), h: r2(sh), fill: e.colour, fillOpacity: 0.12 });
-      nodes.push({ kind: "path", id: `${id}-swatch`, d: `M${r2(sx)} ${r2(cy)}L${r2(sx + sw)} ${r2(cy)}`, stroke: e.colour, strokeWidth: lw, dash: e.dash, fill: "none" });
+      if (e.spread)
+        nodes.push({
+          kind: "rect",
+          id: `${id}-spread`,
+          x: r2(sx),
+          y: r2(cy - sh / 2),
+          w: r2(sw),
+          h: r2(sh),
+          fill: e.colour,
+          fillOpacity: 0.12,
+        });
+      nodes.push({
+        kind: "path",
+        id: `${id}-swatch`,
+        d: `M${r2(sx)} ${r2(cy)}L${r2(sx + sw)} ${r2(cy)}`,
+        stroke: e.colour,
+        strokeWidth: lw,
+        dash: e.dash,
+        fill: "none",
+      });
     } else if (e.kind === "model-band") {
-      if (e.spread) nodes.push({ kind: "rect", id: `${id}-spread`, x: r2(sx), y: r2(cy - sh / 2 - sh * 0.2), w: r2(sw), h: r2(sh * 1.4), fill: e.colour, fillOpacity: 0.12 });
-      nodes.push({ kind: "rect", id: `${id}-swatch`, x: r2(sx), y: r2(cy - sh / 2), w: r2(sw), h: r2(sh), fill: e.colour, fillOpacity: e.fillOpacity });
+      if (e.spread)
+        nodes.push({
+          kind: "rect",
+          id: `${id}-spread`,
+          x: r2(sx),
+          y: r2(cy - sh / 2 - sh * 0.2),
+          w: r2(sw),
+          h: r2(sh * 1.4),
+          fill: e.colour,
+          fillOpacity: 0.12,
+        });
+      nodes.push({
+        kind: "rect",
+        id: `${id}-swatch`,
+        x: r2(sx),
+        y: r2(cy - sh / 2),
+        w: r2(sw),
+        h: r2(sh),
+        fill: e.colour,
+        fillOpacity: e.fillOpacity,
+      });
       nodes.push({
         kind: "path",
         id: `${id}-edges`,
@@ -90,10 +127,38 @@ export function legendNodes(entries: LegendEntry[], box: LegendBox, x: number, y
         fill: "none",
       });
     } else if (e.kind === "exclusion") {
-      nodes.push({ kind: "rect", id: `${id}-swatch`, x: r2(sx), y: r2(cy - sh / 2), w: r2(sw), h: r2(sh), fill: e.colour, fillOpacity: e.fillOpacity });
-      nodes.push({ kind: "path", id: `${id}-edge`, d: `M${r2(sx)} ${r2(cy + sh / 2)}L${r2(sx + sw)} ${r2(cy + sh / 2)}`, stroke: e.colour, strokeWidth: lw, dash: e.dash, fill: "none" });
+      nodes.push({
+        kind: "rect",
+        id: `${id}-swatch`,
+        x: r2(sx),
+        y: r2(cy - sh / 2),
+        w: r2(sw),
+        h: r2(sh),
+        fill: e.colour,
+        fillOpacity: e.fillOpacity,
+      });
+      nodes.push({
+        kind: "path",
+        id: `${id}-edge`,
+        d: `M${r2(sx)} ${r2(cy + sh / 2)}L${r2(sx + sw)} ${r2(cy + sh / 2)}`,
+        stroke: e.colour,
+        strokeWidth: lw,
+        dash: e.dash,
+        fill: "none",
+      });
     } else {
-      nodes.push({ kind: "rect", id: `${id}-swatch`, x: r2(sx), y: r2(cy - sh / 2), w: r2(sw), h: r2(sh), fill: e.colour, fillOpacity: e.fillOpacity, stroke: e.colour, strokeWidth: lw });
+      nodes.push({
+        kind: "rect",
+        id: `${id}-swatch`,
+        x: r2(sx),
+        y: r2(cy - sh / 2),
+        w: r2(sw),
+        h: r2(sh),
+        fill: e.colour,
+        fillOpacity: e.fillOpacity,
+        stroke: e.colour,
+        strokeWidth: lw,
+      });
     }
     nodes.push({
       kind: "text",

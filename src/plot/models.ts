@@ -2,7 +2,7 @@
 // visible range), a band is the polygon between its edges, reaching below the plot when it cancels, with the
 // theory spread as a lighter band around it.
 import { bandCancels, bandEdges, gAgg, type AxionConstants } from "../physics/index";
-import type { Model, YView } from "../data/types";
+import type { Model, YView } from "../project/types";
 import type { PathNode } from "./scene-types";
 import { clipToRect, pathData, type Polyline, type Rect } from "./decimate";
 import { dashFor, safeColour, unitInterval } from "./format";
@@ -89,7 +89,14 @@ export function modelGeometry(model: Model, f: ModelFrame, nodeId: string): Mode
     const s = bandPx(f, a, b, sigmas);
     spreadCancels = s.cancels && !bandCancels(a, b, { constants: f.constants });
     const d = pathData(poly([s.x0, s.x1, s.x1, s.x0], [s.hi[0], s.hi[1], s.lo[1], s.lo[0]], true, f));
-    fills.push({ kind: "path", id: `${nodeId}-spread`, d, fill: colour, fillOpacity: Math.max(0.06, opacity * 0.45), data: { ...base, spread: String(sigmas) } });
+    fills.push({
+      kind: "path",
+      id: `${nodeId}-spread`,
+      d,
+      fill: colour,
+      fillOpacity: Math.max(0.06, opacity * 0.45),
+      data: { ...base, spread: String(sigmas) },
+    });
   }
 
   if (isLine) {
@@ -124,6 +131,15 @@ export function modelGeometry(model: Model, f: ModelFrame, nodeId: string): Mode
   });
   let d = pathData(poly([c.x0, c.x1], c.hi, false, f));
   if (!c.cancels) d += pathData(poly([c.x0, c.x1], c.lo, false, f));
-  lines.push({ kind: "path", id: `${nodeId}-edges`, d, stroke: colour, strokeWidth: lw, dash, fill: "none", data: { ...base } });
+  lines.push({
+    kind: "path",
+    id: `${nodeId}-edges`,
+    d,
+    stroke: colour,
+    strokeWidth: lw,
+    dash,
+    fill: "none",
+    data: { ...base },
+  });
   return { kind: "band", cancels: c.cancels, vanishes: false, spread: sigmas > 0, spreadCancels, fills, lines };
 }

@@ -114,9 +114,9 @@ export function compactPath(xs: Float64Array, ys: Float64Array, n: number, close
   let p = 0;
   let px = Math.round(xs[0] * 100);
   let py = Math.round(ys[0] * 100);
-  b[p++] = 77 /* M */;
+  b[p++] = 77; /* M */
   p = putHundredths(b, p, px);
-  b[p++] = 32 /* space */;
+  b[p++] = 32; /* space */
   p = putHundredths(b, p, py);
   for (let k = 1; k < n; k++) {
     const qx = Math.round(xs[k] * 100);
@@ -125,24 +125,24 @@ export function compactPath(xs: Float64Array, ys: Float64Array, n: number, close
     const dy = qy - py;
     if (dx === 0) {
       if (dy !== 0) {
-        b[p++] = 118 /* v */;
+        b[p++] = 118; /* v */
         p = putHundredths(b, p, dy);
       }
     } else if (dy === 0) {
-      b[p++] = 104 /* h */;
+      b[p++] = 104; /* h */
       p = putHundredths(b, p, dx);
     } else {
-      b[p++] = 108 /* l */;
+      b[p++] = 108; /* l */
       p = putHundredths(b, p, dx);
       // A minus sign separates the two numbers by itself.
-      if (dy > 0) b[p++] = 32 /* space */;
+      if (dy > 0) b[p++] = 32; /* space */
       p = putHundredths(b, p, dy);
     }
     px = qx;
     py = qy;
   }
   if (extra) p = appendAscii(b, p, extra);
-  if (closed) b[p++] = 90 /* Z */;
+  if (closed) b[p++] = 90; /* Z */
   pos = p;
   return finishPath();
 }
@@ -154,13 +154,13 @@ export function absolutePath(xs: Float64Array, ys: Float64Array, n: number, clos
   const b = buf;
   let p = 0;
   for (let k = 0; k < n; k++) {
-    b[p++] = k === 0 ? 77 /* M */ : 76 /* L */;
+    b[p++] = k === 0 ? 77 /* M */ : 76; /* L */
     p = putHundredths(b, p, Math.round(xs[k] * 100));
-    b[p++] = 32 /* space */;
+    b[p++] = 32; /* space */
     p = putHundredths(b, p, Math.round(ys[k] * 100));
   }
   if (extra) p = appendAscii(b, p, extra);
-  if (closed) b[p++] = 90 /* Z */;
+  if (closed) b[p++] = 90; /* Z */
   pos = p;
   return finishPath();
 }
@@ -189,7 +189,8 @@ export function finishPath(): string {
   if (d.length >= 256 && d.length <= RECENT_MAX_CHARS / 4) {
     recent.push(d);
     recentChars += d.length;
-    while (recent.length > RECENT_MAX || recentChars > RECENT_MAX_CHARS) recentChars -= (recent.shift() as string).length;
+    while (recent.length > RECENT_MAX || recentChars > RECENT_MAX_CHARS)
+      recentChars -= (recent.shift() as string).length;
   }
   return d;
 }
@@ -200,4 +201,3 @@ export function isRecentPath(d: string): boolean {
   for (let i = recent.length - 1; i >= 0; i--) if (recent[i] === d) return true;
   return false;
 }
-

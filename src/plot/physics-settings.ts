@@ -2,9 +2,14 @@
 // and a curve's rescale settings into a factor, so every layer of the figure uses the same numbers.
 import { rationalToNumber } from "../physics/eovern-parse";
 import type { PhysicsOpts } from "../physics/constants";
-import { constantsOf } from "../data/physics-constants";
-import type { CurveRescale, PhysicsSettings } from "../data/types";
-import { isRescaled as dataIsRescaled, rescaleFactor as dataRescaleFactor, rescaleLegendSuffix, validateRescale } from "../data/rescale";
+import { constantsOf } from "../project/physics-constants";
+import type { CurveRescale, PhysicsSettings } from "../project/types";
+import {
+  isRescaled as dataIsRescaled,
+  rescaleFactor as dataRescaleFactor,
+  rescaleLegendSuffix,
+  validateRescale,
+} from "../analysis/rescale";
 
 export { constantsOf };
 
@@ -28,7 +33,7 @@ export function eOverNValue(text: string | number): number {
 const eOverNValues = new Map<string, number>();
 
 /**
- * Factor the curve's couplings are multiplied by, √(ρ_assumed/ρ_shown)/√f (src/data/rescale.ts; common
+ * Factor the curve's couplings are multiplied by, √(ρ_assumed/ρ_shown)/√f (src/analysis/rescale.ts; common
  * practice); 1 when the settings are missing or invalid, so a half-typed form never breaks the figure.
  */
 export function rescaleFactor(rescale: CurveRescale | undefined): number {

@@ -1,8 +1,15 @@
 // A curve's drawing preparation (log10 arrays, and per y view the thinning pyramid or the Douglas–Peucker
 // order) as plain typed arrays: built off the main thread (the import worker), moved without copying, and
 // put into the plot cache there, so the first scene of a million-point curve does not block the page.
-import type { Curve, Figure, PhysicsSettings, YView } from "../data/types";
-import { cachedPrepared, installPrepared, prepareCurve, viewArrays, type PreparedCurve, type ViewArrays } from "./decimate";
+import type { Curve, Figure, PhysicsSettings, YView } from "../project/types";
+import {
+  cachedPrepared,
+  installPrepared,
+  prepareCurve,
+  viewArrays,
+  type PreparedCurve,
+  type ViewArrays,
+} from "./decimate";
 import { drawsSorted } from "./curves";
 import { constantsOf } from "./physics-settings";
 import { viewTransform } from "./scales";
@@ -51,9 +58,17 @@ export interface PrepareSpec {
  * The preparation a curve with this role and order needs for the figure's y view (as buildScene draws it).
  * @param physics the project's constants (the slope does not depend on them, the view factor does).
  */
-export function prepareSpecOf(curve: Pick<Curve, "role" | "keepOrder">, yView: Figure["yView"], physics?: PhysicsSettings): PrepareSpec {
+export function prepareSpecOf(
+  curve: Pick<Curve, "role" | "keepOrder">,
+  yView: Figure["yView"],
+  physics?: PhysicsSettings,
+): PrepareSpec {
   const view: YView = yView === "normalized" || yView === "g-gamma" ? yView : "coupling";
-  return { sorted: drawsSorted(curve), closed: curve.role === "region", slopes: [viewTransform(view, constantsOf(physics)).slope] };
+  return {
+    sorted: drawsSorted(curve),
+    closed: curve.role === "region",
+    slopes: [viewTransform(view, constantsOf(physics)).slope],
+  };
 }
 
 /**
@@ -63,7 +78,12 @@ export function prepareSpecOf(curve: Pick<Curve, "role" | "keepOrder">, yView: F
  * @param massEv masses (eV) as imported. @param gInvGeV couplings (GeV⁻¹) as imported.
  * @param sorted drawn in mass order (see drawsSorted: exclusions and projections unless keepOrder).
  */
-export function computePrepared(massEv: Float64Array, gInvGeV: Float64Array, sorted: boolean, opts: ComputePreparedOpts = {}): PreparedTransfer {
+export function computePrepared(
+  massEv: Float64Array,
+  gInvGeV: Float64Array,
+  sorted: boolean,
+  opts: ComputePreparedOpts = {},
+): PreparedTransfer {
   const prep = prepareCurve(massEv, gInvGeV, sorted);
   const closed = opts.closed ?? !sorted;
   const views: ViewTransfer[] = [];
@@ -119,13 +139,20 @@ function viewOk(t: PreparedTransfer, v: ViewTransfer): boolean {
  * transfer's y views that the entry lacks are added to it, so a later switch to that view builds nothing here.
  * @returns whether it was installed or merged (or an entry was already cached).
  */
-export function seedPreparedCurve(massEv: Float64Array, gInvGeV: Float64Array, sorted: boolean, t: PreparedTransfer): boolean {
+export function seedPreparedCurve(
+  massEv: Float64Array,
+  gInvGeV: Float64Array,
+  sorted: boolean,
+  t: PreparedTransfer,
+): boolean {
   const len = Math.min(massEv.length, gInvGeV.length);
   const fits = t.sorted === sorted && t.n + t.skipped === len && t.lm.length === t.n && t.lg.length === t.n;
   const cached = cachedPrepared(massEv, gInvGeV, sorted);
   if (cached) {
     // The same arrays give the same preparation (computePrepared runs the same code), so the views fit it.
-    if (fits && cached.n === t.n) for (const v of t.views) if (!cached.views.has(v.slope) && viewOk(t, v)) cached.views.set(v.slope, viewOf(v, cached.lg));
+    if (fits && cached.n === t.n)
+      for (const v of t.views)
+        if (!cached.views.has(v.slope) && viewOk(t, v)) cached.views.set(v.slope, viewOf(v, cached.lg));
     return true;
   }
   if (!fits) return false;
@@ -138,8 +165,19 @@ export function seedPreparedCurve(massEv: Float64Array, gInvGeV: Float64Array, s
 
 /** The plot cache's form of one transferred y view; `lg` stands in for the view values of the g_aγγ view. */
 function viewOf(v: ViewTransfer, lg: Float64Array): ViewArrays {
-  const pyramid = v.pyramidMin && v.pyramidMax ? { levels: v.pyramidMin.map((min, i) => ({ min, max: (v.pyramidMax as Int32Array[])[i] })) } : null;
-  return { v: v.v ?? lg, pyramid, importance: v.importance, boxes: v.boxes, levels: new Map(), order: v.order, impDesc: v.impDesc };
+  const pyramid =
+    v.pyramidMin && v.pyramidMax
+      ? { levels: v.pyramidMin.map((min, i) => ({ min, max: (v.pyramidMax as Int32Array[])[i] })) }
+      : null;
+  return {
+    v: v.v ?? lg,
+    pyramid,
+    importance: v.importance,
+    boxes: v.boxes,
+    levels: new Map(),
+    order: v.order,
+    impDesc: v.impDesc,
+  };
 }
 
 /** Whether the curve's preparation for the spec's order and y views is already cached (nothing to build). */

@@ -2,7 +2,7 @@
 // uses for hit-testing (mass ↔ x, y ↔ px), and the y views (g_aγγ, |E/N − c_γ|, |g_γ|).
 import { scaleLog, type ScaleLogarithmic } from "d3-scale";
 import { ALPHA, type AxionConstants } from "../physics/constants";
-import type { YView } from "../data/types";
+import type { YView } from "../project/types";
 import type { Scene, ScaleConfig } from "./scene-types";
 
 type SceneLike = Pick<Scene, "plot" | "scales">;
@@ -10,13 +10,17 @@ type SceneLike = Pick<Scene, "plot" | "scales">;
 /** D3 log scale of the mass axis: massDomainEv → [plot.x, plot.x + plot.w]. */
 export function massScale(scene: SceneLike): ScaleLogarithmic<number, number> {
   const { plot, scales } = scene;
-  return scaleLog().domain(scales.massDomainEv).range([plot.x, plot.x + plot.w]);
+  return scaleLog()
+    .domain(scales.massDomainEv)
+    .range([plot.x, plot.x + plot.w]);
 }
 
 /** D3 log scale of the y axis (units of the y view): yDomain → [plot.y + plot.h, plot.y] (up is larger). */
 export function yScale(scene: SceneLike): ScaleLogarithmic<number, number> {
   const { plot, scales } = scene;
-  return scaleLog().domain(scales.yDomain).range([plot.y + plot.h, plot.y]);
+  return scaleLog()
+    .domain(scales.yDomain)
+    .range([plot.y + plot.h, plot.y]);
 }
 
 /** x in scene px of a mass in eV. */
@@ -85,7 +89,10 @@ export function logAffine(scales: ScaleConfig, plot: Scene["plot"]): LogAffine {
 }
 
 /** A usable log domain: both ends positive and finite, ascending, at least a tiny span; else the fallback. */
-export function sanitizeDomain(d: readonly number[] | undefined, fallback: readonly [number, number]): [number, number] {
+export function sanitizeDomain(
+  d: readonly number[] | undefined,
+  fallback: readonly [number, number],
+): [number, number] {
   if (!d || d.length < 2) return [fallback[0], fallback[1]];
   let [a, b] = [Number(d[0]), Number(d[1])];
   if (!(a > 0 && b > 0 && Number.isFinite(a) && Number.isFinite(b))) return [fallback[0], fallback[1]];

@@ -1,14 +1,30 @@
 // The scene builder: a project in, the complete figure out as plain layers of paths, rects and text, drawn
 // the same way on screen (SceneSvg and scene-dom.ts) and in the exported SVG (writeSvg). All defaults of a figure live here.
 import { bandCancels } from "../physics/coupling";
-import type { Curve, LegendPlace, Model, Project, YView } from "../data/types";
+import type { Curve, LegendPlace, Model, Project, YView } from "../project/types";
 import type { PathNode, Scene, SceneLayer, SceneNode, ScaleConfig } from "./scene-types";
 import { axesNodes, axisTicks, gridNodes, verticalTickOpts, yTitle, type AxesFrame } from "./axes";
 import { curveGeometry, curveShape } from "./curves";
 import { dashFor, plainOrScientificRuns, powerOfTenRuns, r2, safeColour, unitInterval } from "./format";
-import { computeLayout, cornerLegendOrigin, fontsFor, presetOf, PX_PER_IN, type Fonts, type Layout, type LegendCorner } from "./layout";
+import {
+  computeLayout,
+  cornerLegendOrigin,
+  fontsFor,
+  presetOf,
+  PX_PER_IN,
+  type Fonts,
+  type Layout,
+  type LegendCorner,
+} from "./layout";
 import { legendLabelText, legendNodes, measureLegend, type LegendBox, type LegendEntry } from "./legend";
-import { LEGEND_CORNERS, OUTSIDE_MIN_PLOT_FRACTION, PLACEMENT_RESOLUTION, pickLegendPlace, placementCurve, type Shape } from "./legend-place";
+import {
+  LEGEND_CORNERS,
+  OUTSIDE_MIN_PLOT_FRACTION,
+  PLACEMENT_RESOLUTION,
+  pickLegendPlace,
+  placementCurve,
+  type Shape,
+} from "./legend-place";
 import { modelGeometry } from "./models";
 import { constantsOf, eOverNValue, rescaleNote } from "./physics-settings";
 import { logAffine, sanitizeDomain, viewTransform } from "./scales";
@@ -138,12 +154,30 @@ function autoLegendPlace(project: Project, f: AutoLegendFrame): LegendCorner | "
   const shapes: Shape[] = [];
   project.curves.forEach((cv) => {
     if (!cv.visible) return;
-    const shape = curveShape(placementCurve(cv, slope), { constants: f.constants, view: f.view, map, plot, lineWidthPx: f.fonts.dataLinePx, resolution: PLACEMENT_RESOLUTION });
+    const shape = curveShape(placementCurve(cv, slope), {
+      constants: f.constants,
+      view: f.view,
+      map,
+      plot,
+      lineWidthPx: f.fonts.dataLinePx,
+      resolution: PLACEMENT_RESOLUTION,
+    });
     if (shape) shapes.push(shape);
   });
   project.models.forEach((m, i) => {
     if (!m.visible) return;
-    const g = modelGeometry(m, { constants: f.constants, view: f.view, map, massDomainEv: f.scales.massDomainEv, plot, lineWidthPx: f.fonts.dataLinePx }, `place-model-${i + 1}`);
+    const g = modelGeometry(
+      m,
+      {
+        constants: f.constants,
+        view: f.view,
+        map,
+        massDomainEv: f.scales.massDomainEv,
+        plot,
+        lineWidthPx: f.fonts.dataLinePx,
+      },
+      `place-model-${i + 1}`,
+    );
     if (g) nodes.push(...g.fills, ...g.lines);
   });
   const boxes = {} as Record<LegendCorner, { x: number; y: number; w: number; h: number }>;
@@ -182,7 +216,8 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   const legendSetting = fig.legend ?? "top-right";
 
   const entries = legendSetting === "hidden" ? [] : legendEntries(project, fonts, c);
-  const measureFor = (place: LegendPlace) => measureLegend(entries, fonts.legendPx, place === "outside-right" ? widthPx * 0.3 : widthPx * 0.5);
+  const measureFor = (place: LegendPlace) =>
+    measureLegend(entries, fonts.legendPx, place === "outside-right" ? widthPx * 0.3 : widthPx * 0.5);
 
   const ySpan = Math.log10(yDomain[1] / yDomain[0]);
   // Right margin: half of a wide decade label ("10⁻¹⁰"), fixed for the font size so the plot area does not
@@ -196,7 +231,10 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
       hasTopAxis: topAxis !== "none",
       hasTitle: !!fig.title?.trim(),
       yLabelWidthPx: (plotH) =>
-        logTicks(yDomain[0], yDomain[1], { ...verticalTickOpts(plotH / ySpan, fonts), format: view === "coupling" ? undefined : plainOrScientificRuns }).reduce((w, t) => (t.label ? Math.max(w, runsWidthPx(t.label, fonts.tickPx)) : w), 0),
+        logTicks(yDomain[0], yDomain[1], {
+          ...verticalTickOpts(plotH / ySpan, fonts),
+          format: view === "coupling" ? undefined : plainOrScientificRuns,
+        }).reduce((w, t) => (t.label ? Math.max(w, runsWidthPx(t.label, fonts.tickPx)) : w), 0),
       xLabelHalfWidthPx: xHalf,
       legend: { place, widthPx: box.widthPx, heightPx: box.heightPx },
     });
@@ -216,7 +254,8 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
     const inside = layoutFor("auto", legendBox);
     legendPlace = !entries.length
       ? LEGEND_CORNERS[0]
-      : (opts.holdLegend ?? autoLegendPlace(project, { constants: c, view, scales, fonts, box: legendBox, layout: inside, outsideFits }));
+      : (opts.holdLegend ??
+        autoLegendPlace(project, { constants: c, view, scales, fonts, box: legendBox, layout: inside, outsideFits }));
     autoPlace = legendPlace;
     // Outside right keeps the box: outsideFits found no label cut at the narrower limit, so none is cut at
     // either. An inner corner leaves the margins as they are: only the legend's origin changes.
@@ -237,7 +276,19 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   const curveLineById = new Map<string, PathNode[]>();
   project.curves.forEach((cv, i) => {
     if (!cv.visible) return;
-    const g = curveGeometry(cv, { constants: c, view, map, plot, lineWidthPx: fonts.dataLinePx, resolution: opts.resolution ?? 1, thin: opts.thin }, `curve-${i + 1}`);
+    const g = curveGeometry(
+      cv,
+      {
+        constants: c,
+        view,
+        map,
+        plot,
+        lineWidthPx: fonts.dataLinePx,
+        resolution: opts.resolution ?? 1,
+        thin: opts.thin,
+      },
+      `curve-${i + 1}`,
+    );
     curveFills.push(...g.fills);
     curveLines.push(...g.lines);
     curveLineById.set(cv.id, g.lines.length ? g.lines : g.fills);
@@ -247,7 +298,11 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   const modelLineById = new Map<string, PathNode[]>();
   project.models.forEach((m, i) => {
     if (!m.visible) return;
-    const g = modelGeometry(m, { constants: c, view, map, massDomainEv, plot, lineWidthPx: fonts.dataLinePx }, `model-${i + 1}`);
+    const g = modelGeometry(
+      m,
+      { constants: c, view, map, massDomainEv, plot, lineWidthPx: fonts.dataLinePx },
+      `model-${i + 1}`,
+    );
     if (!g) return;
     modelFills.push(...g.fills);
     modelLines.push(...g.lines);
@@ -265,9 +320,22 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
     if (hl.modelId) data["model-id"] = hl.modelId;
     if (hl.curveId) data["curve-id"] = hl.curveId;
     if (hi > lo) {
-      highlight.push({ kind: "rect", id: "highlight-range", x: r2(lo), y: plot.y, w: r2(Math.max(hi - lo, 0.5)), h: plot.h, fill: "#1f3b57", fillOpacity: 0.1, data });
+      highlight.push({
+        kind: "rect",
+        id: "highlight-range",
+        x: r2(lo),
+        y: plot.y,
+        w: r2(Math.max(hi - lo, 0.5)),
+        h: plot.h,
+        fill: "#1f3b57",
+        fillOpacity: 0.1,
+        data,
+      });
     }
-    const halo = [...(hl.modelId ? (modelLineById.get(hl.modelId) ?? []) : []), ...(hl.curveId ? (curveLineById.get(hl.curveId) ?? []) : [])];
+    const halo = [
+      ...(hl.modelId ? (modelLineById.get(hl.modelId) ?? []) : []),
+      ...(hl.curveId ? (curveLineById.get(hl.curveId) ?? []) : []),
+    ];
     halo.forEach((node, k) =>
       highlight.push({
         kind: "path",
@@ -299,13 +367,22 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   }
 
   const layers: SceneLayer[] = [
-    { id: "background", clip: false, nodes: [{ kind: "rect", id: "background-fill", x: 0, y: 0, w: r2(widthPx), h: r2(heightPx), fill: "#ffffff" }] },
+    {
+      id: "background",
+      clip: false,
+      nodes: [{ kind: "rect", id: "background-fill", x: 0, y: 0, w: r2(widthPx), h: r2(heightPx), fill: "#ffffff" }],
+    },
     { id: "grid", clip: true, nodes: fig.grid ? gridNodes(frame, ticks) : [] },
     { id: "curves", clip: true, nodes: [...curveFills, ...curveLines] },
     { id: "models", clip: true, nodes: [...modelFills, ...modelLines] },
     { id: "highlight", clip: true, nodes: highlight },
     { id: "axes", clip: false, nodes: axes },
-    { id: "legend", clip: false, nodes: legendNodes(entries, legendBox, layout.legendX, layout.legendY, fonts.legendPx), data: { testid: "legend" } },
+    {
+      id: "legend",
+      clip: false,
+      nodes: legendNodes(entries, legendBox, layout.legendX, layout.legendY, fonts.legendPx),
+      data: { testid: "legend" },
+    },
   ];
   const scene: Scene = { widthPx: r2(widthPx), heightPx: r2(heightPx), plot, scales, fontFamily: FONT_FAMILY, layers };
   if (autoPlace && entries.length) scene.autoLegendPlace = autoPlace;

@@ -7,15 +7,17 @@ import { isRecentPath } from "./path-writer";
 
 /** XML-escape text and attribute values: & < > " ' (so nothing in a label can open a tag or end an attribute). */
 export function escapeXml(s: string): string {
-  return String(s)
-    .replace(/&/g, "&amp;")
-    .replace(/</g, "&lt;")
-    .replace(/>/g, "&gt;")
-    .replace(/"/g, "&quot;")
-    .replace(/'/g, "&apos;")
-    // eslint-disable-next-line no-control-regex
-    .replace(/[\u0000-\u0008\u000b\u000c\u000e-\u001f\ufffe\uffff]/g, "")
-    .replace(/[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/g, "");
+  return (
+    String(s)
+      .replace(/&/g, "&amp;")
+      .replace(/</g, "&lt;")
+      .replace(/>/g, "&gt;")
+      .replace(/"/g, "&quot;")
+      .replace(/'/g, "&apos;")
+      // eslint-disable-next-line no-control-regex
+      .replace(/[\u0000-\u0008\u000b\u000c\u000e-\u001f\ufffe\uffff]/g, "")
+      .replace(/[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/g, "")
+  );
 }
 
 /** A number rounded to 2 decimals as SVG text ("-0" written as "0"). */
@@ -237,7 +239,10 @@ function nodeEl(n: SceneNode, id: string | undefined): string {
   const head = `<${tag}${id ? ` id="${escapeXml(id)}"` : ""}${attrsText(nodeAttributes(n))}`;
   if (n.kind !== "text") return head + "/>";
   let inner = "";
-  for (const span of textSpans(n)) inner += span.attrs.length ? `<tspan${attrsText(span.attrs)}>${escapeXml(span.text)}</tspan>` : escapeXml(span.text);
+  for (const span of textSpans(n))
+    inner += span.attrs.length
+      ? `<tspan${attrsText(span.attrs)}>${escapeXml(span.text)}</tspan>`
+      : escapeXml(span.text);
   return `<g transform="${escapeXml(textPlacement(n))}">${head}>${inner}</text></g>`;
 }
 
@@ -262,7 +267,9 @@ export function writeSvg(scene: Scene, opts: WriteSvgOpts = {}): string {
       ' stroke-linecap="butt">\n',
   );
   if (opts.metadata !== undefined) out.push(`<metadata>${escapeXml(opts.metadata)}</metadata>\n`);
-  out.push(`<defs><clipPath id="${clipId}"><rect x="${fmt(plot.x)}" y="${fmt(plot.y)}" width="${fmt(plot.w)}" height="${fmt(plot.h)}"/></clipPath></defs>\n`);
+  out.push(
+    `<defs><clipPath id="${clipId}"><rect x="${fmt(plot.x)}" y="${fmt(plot.y)}" width="${fmt(plot.w)}" height="${fmt(plot.h)}"/></clipPath></defs>\n`,
+  );
   scene.layers.forEach((layer, li) => {
     out.push(`<g${attrsText(layerAttributes(layer, ids.layers[li], clipId))}>`);
     layer.nodes.forEach((node, ni) => out.push("\n" + nodeEl(node, ids.nodes[li][ni])));

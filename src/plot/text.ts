@@ -126,9 +126,17 @@ export interface PlacedRun {
  * offset, since renderers disagree on dominant-baseline) and per run its dy and size. Both renderers must
  * use this so the screen and the export agree.
  */
-export function placeRuns(node: Pick<TextNode, "y" | "runs" | "sizePx" | "baseline">): { baselineY: number; runs: PlacedRun[] } {
+export function placeRuns(node: Pick<TextNode, "y" | "runs" | "sizePx" | "baseline">): {
+  baselineY: number;
+  runs: PlacedRun[];
+} {
   const s = node.sizePx;
-  const baselineY = node.baseline === "middle" ? node.y + (CAP_HEIGHT / 2) * s : node.baseline === "hanging" ? node.y + CAP_HEIGHT * s : node.y;
+  const baselineY =
+    node.baseline === "middle"
+      ? node.y + (CAP_HEIGHT / 2) * s
+      : node.baseline === "hanging"
+        ? node.y + CAP_HEIGHT * s
+        : node.y;
   let offset = 0; // current baseline offset, px, positive = down
   const runs: PlacedRun[] = [];
   for (const r of node.runs) {
@@ -136,7 +144,12 @@ export function placeRuns(node: Pick<TextNode, "y" | "runs" | "sizePx" | "baseli
     const want = r.shift === "sup" ? -SUP_RAISE * s : r.shift === "sub" ? SUB_DROP * s : 0;
     const dy = Math.round((want - offset) * 100) / 100;
     offset += dy;
-    runs.push({ text: r.text, dyPx: dy, sizePx: r.shift ? Math.round(s * SHIFT_SCALE * 100) / 100 : undefined, italic: !!r.italic });
+    runs.push({
+      text: r.text,
+      dyPx: dy,
+      sizePx: r.shift ? Math.round(s * SHIFT_SCALE * 100) / 100 : undefined,
+      italic: !!r.italic,
+    });
   }
   return { baselineY: Math.round(baselineY * 100) / 100, runs };
 }

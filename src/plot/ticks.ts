@@ -159,7 +159,11 @@ export function faDomain(massDomainEv: readonly [number, number], c: AxionConsta
 }
 
 /** Ticks of the f_a [GeV] top axis (values in GeV, labels as powers of ten). */
-export function faTicks(massDomainEv: readonly [number, number], c: AxionConstants, opts: Omit<LogTickOpts, "format">): LogTick[] {
+export function faTicks(
+  massDomainEv: readonly [number, number],
+  c: AxionConstants,
+  opts: Omit<LogTickOpts, "format">,
+): LogTick[] {
   const [lo, hi] = faDomain(massDomainEv, c);
   return logTicks(lo, hi, { ...opts, format: scientificRuns });
 }
@@ -202,7 +206,8 @@ export function frequencyTicks(
 ): { unit: FrequencyUnit; ticks: LogTick[] } {
   const [lo, hi] = frequencyDomain(massDomainEv);
   const unit = frequencyUnit(lo, hi);
-  const format = unit.plain ? (v: number) => plainOrScientificRuns(v / unit.hzPerUnit) : (v: number) => scientificRuns(v);
+  const format = unit.plain
+    ? (v: number) => plainOrScientificRuns(v / unit.hzPerUnit)
+    : (v: number) => scientificRuns(v);
   return { unit, ticks: logTicks(lo, hi, { ...opts, format }) };
 }
-

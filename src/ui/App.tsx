@@ -62,9 +62,9 @@ export function App() {
           <Figure />
           <HoverReadout />
           <p className="caution" role="note">
-            Predictions depend on the model assumptions (field content, charges, the constants chosen under
-            Constants) and on the curves you import. Take experimental curves from their original publications
-            and credit those publications when you show a figure.
+            Predictions depend on the model assumptions (field content, charges, the constants chosen under Constants)
+            and on the curves you import. Take experimental curves from their original publications and credit those
+            publications when you show a figure.
           </p>
           <OverlapPanel />
           <SourcesPanel />

@@ -12,7 +12,9 @@ async function start() {
     await initProject(useAxband);
   } catch (e) {
     // The app must open even when restoring fails in an unforeseen way; the demo project is already loaded.
-    useAxband.getState().pushMessage("alert", `The saved project could not be restored (${e instanceof Error ? e.message : String(e)}).`);
+    useAxband
+      .getState()
+      .pushMessage("alert", `The saved project could not be restored (${e instanceof Error ? e.message : String(e)}).`);
   }
   startAutosave(useAxband);
   createRoot(document.getElementById("root")!).render(

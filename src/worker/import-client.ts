@@ -9,7 +9,7 @@ import {
   type CurveParseOptions,
   type CurveParseResult,
   type ImportProgress,
-} from "../data/csv";
+} from "../formats/csv";
 import { seedPreparedCurve, type PrepareSpec, type PreparedTransfer } from "../plot/prepare-transfer";
 
 /** Messages to the worker. */
@@ -52,7 +52,10 @@ let workerBroken = false;
 let nextId = 1;
 const pending = new Map<number, Pending>();
 /** Preparation jobs ({@link prepareInWorker}) by id; resolved with false when the worker fails. */
-const preparing = new Map<number, { resolve: (seeded: boolean) => void; massEv: Float64Array; gInvGeV: Float64Array; sorted: boolean }>();
+const preparing = new Map<
+  number,
+  { resolve: (seeded: boolean) => void; massEv: Float64Array; gInvGeV: Float64Array; sorted: boolean }
+>();
 /** Set to false to force the main-thread path (tests, benchmarks). */
 let workerAllowed = true;
 
@@ -225,7 +228,11 @@ export async function previewFile(file: Blob, opts: CurveParseOptions = {}): Pro
   const check = checkImportFile({ name: o.fileName, size: file.size, firstBytes: bytes.subarray(0, 4096) });
   if (!check.ok) {
     const r = createCurveParser(o).finish();
-    return { ...r, fatal: check.problem, messages: [{ level: "error", text: `${o.fileName ?? "input"}: ${check.problem.message}` }] };
+    return {
+      ...r,
+      fatal: check.problem,
+      messages: [{ level: "error", text: `${o.fileName ?? "input"}: ${check.problem.message}` }],
+    };
   }
   let text = new TextDecoder(check.encoding).decode(bytes);
   const complete = file.size <= PREVIEW_BYTES;

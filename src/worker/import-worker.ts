@@ -1,8 +1,13 @@
 // Module Web Worker that parses curve files off the main thread: reads a File/Blob, bytes or text in slices,
 // posts progress, honours cancel, and returns the arrays as transferred buffers (no copy on arrival), with
 // the curve's drawing preparation (log10 arrays, thinning pyramid) built here so the first scene is quick.
-import { isImportCancelled, parseCurveSource, type CurveParseOptions } from "../data/csv";
-import { computePrepared, preparedTransferables, type PrepareSpec, type PreparedTransfer } from "../plot/prepare-transfer";
+import { isImportCancelled, parseCurveSource, type CurveParseOptions } from "../formats/csv";
+import {
+  computePrepared,
+  preparedTransferables,
+  type PrepareSpec,
+  type PreparedTransfer,
+} from "../plot/prepare-transfer";
 import type { ImportRequest, ImportResponse } from "./import-client";
 
 // The tsconfig mixes DOM and WebWorker libs; inside this file `self` is the dedicated worker scope.
@@ -14,7 +19,11 @@ const scope = self as unknown as {
 const running = new Map<number, AbortController>();
 
 /** The preparation for a spec, or null when there is nothing to prepare or it failed (then the page builds it). */
-function prepareFor(massEv: Float64Array, gInvGeV: Float64Array, spec: PrepareSpec | undefined): PreparedTransfer | null {
+function prepareFor(
+  massEv: Float64Array,
+  gInvGeV: Float64Array,
+  spec: PrepareSpec | undefined,
+): PreparedTransfer | null {
   if (!spec || massEv.length === 0) return null;
   try {
     return computePrepared(massEv, gInvGeV, spec.sorted, { slopes: spec.slopes, closed: spec.closed });
@@ -23,7 +32,12 @@ function prepareFor(massEv: Float64Array, gInvGeV: Float64Array, spec: PrepareSp
   }
 }
 
-async function run(id: number, source: string | ArrayBuffer | Blob, opts: CurveParseOptions, spec?: PrepareSpec): Promise<void> {
+async function run(
+  id: number,
+  source: string | ArrayBuffer | Blob,
+  opts: CurveParseOptions,
+  spec?: PrepareSpec,
+): Promise<void> {
   const controller = new AbortController();
   running.set(id, controller);
   try {

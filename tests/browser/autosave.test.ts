@@ -4,9 +4,9 @@
 import { afterAll, beforeAll, describe, expect, inject, test } from "vitest";
 import type { Browser, BrowserContext, Page } from "playwright-core";
 import { launchChromium, watchPage, type Watched } from "./chromium";
-import { defaultProject } from "../../src/data/demo";
-import { newModel } from "../../src/data/defaults";
-import { encodeLink } from "../../src/data/link";
+import { defaultProject } from "../../src/project/demo";
+import { newModel } from "../../src/project/defaults";
+import { encodeLink } from "../../src/formats/project-codec";
 import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
@@ -30,7 +30,9 @@ async function open(init?: () => void, hash = ""): Promise<{ context: BrowserCon
 }
 
 const legendTexts = (page: Page) =>
-  page.locator('[data-testid="legend"] [data-legend-entry]').evaluateAll((els) => els.map((e) => e.getAttribute("data-legend-entry") ?? ""));
+  page
+    .locator('[data-testid="legend"] [data-legend-entry]')
+    .evaluateAll((els) => els.map((e) => e.getAttribute("data-legend-entry") ?? ""));
 const massDomain = (page: Page) => page.locator('[data-testid="plot"] svg').getAttribute("data-mass-domain");
 
 async function addModel(page: Page, text: string) {
@@ -66,7 +68,10 @@ describe("autosave", () => {
     const file = join(dir, "chunked (invented).csv");
     // Invented data: 150,000 points over two decades, more than two 65,536-point chunks.
     const rows = ["# invented for the autosave test; not data from any experiment", "m_a [eV],g [GeV^-1]"];
-    for (let i = 0; i < 150_000; i++) rows.push(`${(2e-6 * 10 ** ((2 * i) / 149_999)).toExponential(10)},${(3e-13 * (1.2 + Math.sin(i / 500))).toExponential(8)}`);
+    for (let i = 0; i < 150_000; i++)
+      rows.push(
+        `${(2e-6 * 10 ** ((2 * i) / 149_999)).toExponential(10)},${(3e-13 * (1.2 + Math.sin(i / 500))).toExponential(8)}`,
+      );
     writeFileSync(file, rows.join("\n") + "\n");
     try {
       const { context, page, watched } = await open();
@@ -81,7 +86,9 @@ describe("autosave", () => {
       await page.waitForTimeout(2000); // debounce, then one chunk per task
       await page.reload({ waitUntil: "networkidle" });
       await page.locator('[data-testid="legend"] [data-legend-entry="chunked (invented)"]').waitFor();
-      expect(await page.locator(`[data-testid="plot"] path[data-curve-id="${curveId}"]`).first().getAttribute("d")).toBe(before);
+      expect(
+        await page.locator(`[data-testid="plot"] path[data-curve-id="${curveId}"]`).first().getAttribute("d"),
+      ).toBe(before);
       expect(await page.getByRole("alert").count()).toBe(0);
       expect(watched.consoleErrors).toEqual([]);
       await context.close();
@@ -144,7 +151,10 @@ describe("undo and redo", () => {
 describe("links at start", () => {
   test("a valid link opens its project (undoable) and the fragment is dropped from the address", async () => {
     const project = defaultProject();
-    project.models = [...project.models, newModel({ id: "from-link", eOverNMin: "44/3", label: "From the link, E/N = 44/3" }, project)];
+    project.models = [
+      ...project.models,
+      newModel({ id: "from-link", eOverNMin: "44/3", label: "From the link, E/N = 44/3" }, project),
+    ];
     const fragment = encodeLink(project, { includeCurves: false });
     const { context, page, watched } = await open(undefined, `#${fragment}`);
     await expect.poll(() => legendTexts(page)).toContain("From the link, E/N = 44/3");

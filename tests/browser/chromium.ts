@@ -17,7 +17,9 @@ export function findChromium(): string {
   const fromEnv = process.env.CHROMIUM_PATH;
   if (fromEnv) {
     if (existsSync(fromEnv)) return fromEnv;
-    throw new Error(`CHROMIUM_PATH is set to ${fromEnv}, but no file is there. Point it at a Chromium or Chrome binary.`);
+    throw new Error(
+      `CHROMIUM_PATH is set to ${fromEnv}, but no file is there. Point it at a Chromium or Chrome binary.`,
+    );
   }
   const found = CANDIDATES.find((p) => existsSync(p));
   if (!found) {

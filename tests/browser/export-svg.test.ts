@@ -11,7 +11,7 @@ import { DOMParser } from "@xmldom/xmldom";
 import type { Browser } from "playwright-core";
 import { launchChromium, watchPage } from "./chromium";
 import { download, exportSvg } from "./export-helpers";
-import { readPngDpi, readPngSize } from "../../src/plot/png-meta";
+import { readPngDpi, readPngSize } from "../../src/formats/png-meta";
 
 const SVG_NS = "http://www.w3.org/2000/svg";
 const SCRIPT = "<script>alert(1)</script>";
@@ -63,7 +63,11 @@ test("the SVG download is self-contained, valid XML at a physical size, and labe
     void d.dismiss();
   });
   await page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
-  const count = () => page.evaluate(() => ({ img: document.querySelectorAll("img").length, script: document.querySelectorAll("script").length }));
+  const count = () =>
+    page.evaluate(() => ({
+      img: document.querySelectorAll("img").length,
+      script: document.querySelectorAll("script").length,
+    }));
   const before = await count();
 
   // The corpus in a model label (typed), in a CSV header and in a file name (imported as a curve label).
@@ -87,13 +91,20 @@ test("the SVG download is self-contained, valid XML at a physical size, and labe
 
   // Valid XML in the SVG namespace, with viewBox and a physical size (slide preset: 254 mm wide).
   const errors: string[] = [];
-  const doc = new DOMParser({ onError: (level, msg) => void (level !== "warning" && errors.push(msg)) }).parseFromString(text, "image/svg+xml");
+  const doc = new DOMParser({
+    onError: (level, msg) => void (level !== "warning" && errors.push(msg)),
+  }).parseFromString(text, "image/svg+xml");
   expect(errors).toEqual([]);
   const root = doc.documentElement as unknown as XmlEl;
   expect(root.localName).toBe("svg");
   expect(root.namespaceURI).toBe(SVG_NS);
   const rootAttrs = Object.fromEntries(attrs(root).map((a) => [a.name, a.value]));
-  expect(rootAttrs.viewBox.trim().split(/[\s,]+/).map(Number)).toHaveLength(4);
+  expect(
+    rootAttrs.viewBox
+      .trim()
+      .split(/[\s,]+/)
+      .map(Number),
+  ).toHaveLength(4);
   expect(rootAttrs.width).toMatch(/^[\d.]+(cm|mm|in)$/);
   expect(rootAttrs.height).toMatch(/^[\d.]+(cm|mm|in)$/);
   expect(parseFloat(rootAttrs.width)).toBeCloseTo(25.4, 1);
@@ -114,7 +125,8 @@ test("the SVG download is self-contained, valid XML at a physical size, and labe
     for (const a of attrs(el)) {
       expect(a.name.toLowerCase().startsWith("on"), `${el.localName} ${a.name}`).toBe(false);
       if (/(^|:)href$/i.test(a.name)) expect(a.value.startsWith("#"), a.value).toBe(true);
-      for (const m of a.value.matchAll(/url\(\s*([^)]*)\)/g)) expect(m[1].trim().replace(/^['"]/, "").startsWith("#"), m[0]).toBe(true);
+      for (const m of a.value.matchAll(/url\(\s*([^)]*)\)/g))
+        expect(m[1].trim().replace(/^['"]/, "").startsWith("#"), m[0]).toBe(true);
     }
   }
   expect(text).not.toMatch(/url\(\s*['"]?(https?:|data:|\/\/)/i);

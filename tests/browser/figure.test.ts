@@ -92,7 +92,9 @@ describe("the demo figure", () => {
     expect(await entry.count()).toBe(1);
     const modelId = await entry.getAttribute("data-model-id");
     expect(modelId).toBeTruthy();
-    const d = await page.locator(`[data-testid="plot"] path[data-model-id="${modelId}"][data-eovern]`).getAttribute("d");
+    const d = await page
+      .locator(`[data-testid="plot"] path[data-model-id="${modelId}"][data-eovern]`)
+      .getAttribute("d");
     const pts = pathPoints(d ?? "");
     expect(pts.length).toBeGreaterThanOrEqual(2);
     const f = await frameOf(page);
@@ -177,7 +179,7 @@ describe("zoom and pan", () => {
     await expect.poll(async () => (await frameOf(page)).mass[0]).toBeGreaterThan(f0.mass[0]);
     const f1 = await frameOf(page);
     const spanDec = Math.log10(f0.mass[1] / f0.mass[0]);
-    const expectedShift = ((100 / scale) / f0.box.w) * spanDec;
+    const expectedShift = (100 / scale / f0.box.w) * spanDec;
     expect(Math.log10(f1.mass[0] / f0.mass[0])).toBeCloseTo(expectedShift, 2);
     expect(f1.y[0]).toBeCloseTo(f0.y[0], 25);
     await page.mouse.dblclick(x, y);

@@ -19,7 +19,10 @@ beforeAll(async () => {
   dir = mkdtempSync(join(tmpdir(), "axband-import-"));
   file = join(dir, "demo-million (invented).csv");
   // Invented data: a smooth, wiggly limit over three decades of mass; about 40 MB of text.
-  const parts: string[] = ["# invented for the axband import test; not data from any experiment\n", "m_a [eV],g_agg [GeV^-1]\n"];
+  const parts: string[] = [
+    "# invented for the axband import test; not data from any experiment\n",
+    "m_a [eV],g_agg [GeV^-1]\n",
+  ];
   for (let i = 0; i < ROWS; i++) {
     const m = 1e-6 * 10 ** ((3 * i) / (ROWS - 1));
     const g = 1e-13 * (1.5 + Math.sin(i / 997)) * (1 + (i % 7) * 1e-3);
@@ -72,7 +75,9 @@ test("a million-row file imports in the worker with progress, and no main-thread
   expect(detected).toContain(`${ROWS.toLocaleString("en")} points`);
   const tConfirm = await page.evaluate(() => performance.now());
   await page.click('[data-testid="import-confirm"]');
-  await page.waitForSelector('[data-testid="legend"] [data-legend-entry="demo-million (invented)"]', { timeout: 60_000 });
+  await page.waitForSelector('[data-testid="legend"] [data-legend-entry="demo-million (invented)"]', {
+    timeout: 60_000,
+  });
   // The figure and autosave react to the new curve after the click: keep measuring while they settle.
   await page.waitForTimeout(1500);
   const t1 = await page.evaluate(() => performance.now());

@@ -53,7 +53,9 @@ test("the demo shows a non-empty overlap table and its CSV export matches it", a
   await page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
   const table = page.locator('[data-testid="overlap-table"]');
   await table.locator("tbody tr").first().waitFor();
-  const cells = await table.locator("tbody tr").evaluateAll((trs) => trs.map((tr) => Array.from(tr.querySelectorAll("td")).map((td) => td.textContent ?? "")));
+  const cells = await table
+    .locator("tbody tr")
+    .evaluateAll((trs) => trs.map((tr) => Array.from(tr.querySelectorAll("td")).map((td) => td.textContent ?? "")));
   expect(cells.length).toBeGreaterThan(0);
 
   const { name, bytes } = await download(page, () => page.click('[data-testid="overlap-csv"]'));
@@ -68,8 +70,12 @@ test("the demo shows a non-empty overlap table and its CSV export matches it", a
     expect(shown[1]).toBe(r[col("curve")]);
     expect(shown[2]).toBe(r[col("role")]);
     expect(shown[3]).toBe(verdictText(r[col("kind")] as OverlapKind));
-    expect(shown[4]).toBe(`${siFormat(Number(r[col("m_a_min_eV")]), "eV")} – ${siFormat(Number(r[col("m_a_max_eV")]), "eV")}`);
-    expect(shown[6]).toBe(`${siFormat(Number(r[col("freq_min_Hz")]), "Hz")} – ${siFormat(Number(r[col("freq_max_Hz")]), "Hz")}`);
+    expect(shown[4]).toBe(
+      `${siFormat(Number(r[col("m_a_min_eV")]), "eV")} – ${siFormat(Number(r[col("m_a_max_eV")]), "eV")}`,
+    );
+    expect(shown[6]).toBe(
+      `${siFormat(Number(r[col("freq_min_Hz")]), "Hz")} – ${siFormat(Number(r[col("freq_max_Hz")]), "Hz")}`,
+    );
   });
   // At least one model is excluded or within reach somewhere in the invented demo.
   expect(rows.some((r) => r[col("kind")] !== "none")).toBe(true);

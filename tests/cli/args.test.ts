@@ -42,12 +42,26 @@ describe("parseArgs", () => {
       ["c.txt", "csv", "projection"],
       ["d.dat", "csv", "region"],
     ]);
-    expect(ok(["a.csv", "b.csv", "--role", "region", "-o", "x.svg"]).inputs.map((f) => f.role)).toEqual(["region", "region"]);
+    expect(ok(["a.csv", "b.csv", "--role", "region", "-o", "x.svg"]).inputs.map((f) => f.role)).toEqual([
+      "region",
+      "region",
+    ]);
     expect(ok(["a.csv", "-o", "x.svg"]).inputs[0].role).toBe("exclusion");
   });
 
   it("collects repeated --model values and reads ranges", () => {
-    const o = ok(["a.csv", "--model", "8/3", "--model", "0..44/3", "--mass-range", "1e-10:1e-1", "--g-range=1e-17,1e-7", "-o", "x.svg"]);
+    const o = ok([
+      "a.csv",
+      "--model",
+      "8/3",
+      "--model",
+      "0..44/3",
+      "--mass-range",
+      "1e-10:1e-1",
+      "--g-range=1e-17,1e-7",
+      "-o",
+      "x.svg",
+    ]);
     expect(o.models).toEqual(["8/3", "0..44/3"]);
     expect(o.massRangeEv).toEqual([1e-10, 1e-1]);
     expect(o.gRange).toEqual([1e-17, 1e-7]);
@@ -88,7 +102,9 @@ describe("fitRanges", () => {
   });
 
   it("ignores non-positive and non-finite points and widens a single point to a decade", () => {
-    const r = fitRanges([{ massEv: Float64Array.of(-1, 0, 1e-5, Number.NaN), gInvGeV: Float64Array.of(1, 1, 1e-13, 1) }]);
+    const r = fitRanges([
+      { massEv: Float64Array.of(-1, 0, 1e-5, Number.NaN), gInvGeV: Float64Array.of(1, 1, 1e-13, 1) },
+    ]);
     expect(r).toBeDefined();
     const [lo, hi] = r?.massRangeEv ?? [1, 1];
     expect(hi / lo).toBeCloseTo(10, 9);
@@ -116,7 +132,9 @@ describe("PNG sizing and fonts", () => {
 
   it("prefers an Arial-metric face, then DejaVu Sans, then says none was found", () => {
     expect(pickFallbackFont((p) => p.includes("DejaVuSans.ttf")).family).toBe("DejaVu Sans");
-    expect(pickFallbackFont((p) => p.includes("LiberationSans-Regular") || p.includes("DejaVuSans.ttf")).family).toBe("Liberation Sans");
+    expect(pickFallbackFont((p) => p.includes("LiberationSans-Regular") || p.includes("DejaVuSans.ttf")).family).toBe(
+      "Liberation Sans",
+    );
     const none = pickFallbackFont(() => false);
     expect(none.family).toBeUndefined();
     expect(none.note).toMatch(/fonts-liberation/);
@@ -151,7 +169,11 @@ describe("writeAllOrNothing", () => {
 describe("undrawablePointNotes", () => {
   it("names curves with points a log axis cannot show and counts them", () => {
     const p = smallProject();
-    const bad = { ...p.curves[0], massEv: Float64Array.of(1e-6, 0, 2e-6, 3e-6), gInvGeV: Float64Array.of(1e-13, 1e-13, -1, Number.NaN) };
+    const bad = {
+      ...p.curves[0],
+      massEv: Float64Array.of(1e-6, 0, 2e-6, 3e-6),
+      gInvGeV: Float64Array.of(1e-13, 1e-13, -1, Number.NaN),
+    };
     const notes = undrawablePointNotes({ ...p, curves: [bad, p.curves[1]] }, "x.axband.json");
     expect(notes).toHaveLength(1);
     expect(notes[0]).toMatch(/x\.axband\.json: curve "Demo scan \(invented\)" has 3 point\(s\)/);

@@ -1,4 +1,4 @@
-// The renderer with curve data too large to embed (over the 2 MB cap of src/plot/figure-file.ts): it says so on
+// The renderer with curve data too large to embed (over the 2 MB cap of src/formats/figure-file.ts): it says so on
 // stderr and in its report, writes the same SVG as the in-process export, and that SVG still renders again.
 import { describe, expect, it } from "vitest";
 import { readFileSync, writeFileSync } from "node:fs";
@@ -6,7 +6,7 @@ import { join } from "node:path";
 import { main } from "../../src/cli/render";
 import { parseArgs } from "../../src/cli/args";
 import { loadProject } from "../../src/cli/inputs";
-import { AXBAND_PROJECT_NS, exportFigureSvg, extractProjectFromSvg } from "../../src/plot/figure-file";
+import { AXBAND_PROJECT_NS, exportFigureSvg, extractProjectFromSvg } from "../../src/formats/figure-file";
 import { parseXml } from "./svg-checks";
 import { tempDir } from "./fixtures";
 
@@ -25,7 +25,8 @@ describe("render with curve data over the embedding cap", () => {
     let s = 777;
     const rnd = () => (s = (s * 48271) % 2147483647) / 2147483647;
     const rows = ["# invented test curve", "mass_eV,g_GeV^-1"];
-    for (let i = 0; i < 120_000; i++) rows.push(`${1e-6 * (1 + (9 * i) / 120_000) * (1 + 1e-9 * rnd())},${1e-13 * (1 + rnd())}`);
+    for (let i = 0; i < 120_000; i++)
+      rows.push(`${1e-6 * (1 + (9 * i) / 120_000) * (1 + 1e-9 * rnd())},${1e-13 * (1 + rnd())}`);
     writeFileSync(csv, rows.join("\n") + "\n");
     const svgPath = join(dir, "big.svg");
     const args = [csv, "-o", svgPath, "--model", "8/3"];

@@ -4,9 +4,9 @@ import { spawnSync } from "node:child_process";
 import { mkdtempSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join, resolve } from "node:path";
-import { emptyProject, newCurve, newModel } from "../../src/data/defaults";
-import { projectToFile } from "../../src/data/project-file";
-import type { Project } from "../../src/data/types";
+import { emptyProject, newCurve, newModel } from "../../src/project/defaults";
+import { projectToFile } from "../../src/formats/project-file";
+import type { Project } from "../../src/project/types";
 
 export const REPO = resolve(__dirname, "../..");
 
@@ -25,14 +25,37 @@ export function smallProject(labels: { model?: string; curve?: string; name?: st
   models.push(newModel({ id: "m-2", eOverNMin: "5/3", eOverNMax: "44/3", label: "Preferred window" }, { models }));
   const mass = Float64Array.from({ length: 200 }, (_, i) => 10 ** (-6 + (3 * i) / 199));
   const curves = [
-    newCurve({ id: "c-1", label: labels.curve ?? "Demo scan (invented)", role: "exclusion", massEv: mass, gInvGeV: mass.map((m) => 1e-13 * (1 + 0.3 * Math.sin(40 * Math.log10(m)))) }),
+    newCurve({
+      id: "c-1",
+      label: labels.curve ?? "Demo scan (invented)",
+      role: "exclusion",
+      massEv: mass,
+      gInvGeV: mass.map((m) => 1e-13 * (1 + 0.3 * Math.sin(40 * Math.log10(m)))),
+    }),
   ];
-  curves.push(newCurve({ id: "c-2", label: "Demo reach (invented)", role: "projection", massEv: mass, gInvGeV: mass.map((m) => 3e-15 * (m / 1e-5) ** 0.5) }, { curves }));
+  curves.push(
+    newCurve(
+      {
+        id: "c-2",
+        label: "Demo reach (invented)",
+        role: "projection",
+        massEv: mass,
+        gInvGeV: mass.map((m) => 3e-15 * (m / 1e-5) ** 0.5),
+      },
+      { curves },
+    ),
+  );
   return {
     ...p,
     models,
     curves,
-    figure: { ...p.figure, preset: "single-column", massRangeEv: [1e-6, 1e-3], yRange: [1e-17, 1e-11], title: labels.title ?? "" },
+    figure: {
+      ...p.figure,
+      preset: "single-column",
+      massRangeEv: [1e-6, 1e-3],
+      yRange: [1e-17, 1e-11],
+      title: labels.title ?? "",
+    },
   };
 }
 
@@ -49,6 +72,10 @@ export interface CliRun {
 
 /** Runs `tsx src/cli/render.ts ARGS` from the repository root and returns its exit code and output. */
 export function runCli(args: string[]): CliRun {
-  const r = spawnSync(process.execPath, ["--import", "tsx", "src/cli/render.ts", ...args], { cwd: REPO, encoding: "utf8", timeout: 60_000 });
+  const r = spawnSync(process.execPath, ["--import", "tsx", "src/cli/render.ts", ...args], {
+    cwd: REPO,
+    encoding: "utf8",
+    timeout: 60_000,
+  });
   return { status: r.status, stdout: r.stdout, stderr: r.stderr };
 }

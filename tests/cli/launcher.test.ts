@@ -6,12 +6,13 @@ import { spawnSync } from "node:child_process";
 import { readFileSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { REPO, runCli, tempDir } from "./fixtures";
-import { mulberry32 } from "../../src/data/demo";
+import { mulberry32 } from "../../src/project/demo";
 
 function invented(file: string, seed: number, rows: number): void {
   const r = mulberry32(seed);
   const lines = ["# invented test curve, not data from any experiment", "mass_eV,g_GeV^-1"];
-  for (let i = 0; i < rows; i++) lines.push(`${(10 ** (-6 + (2 * i) / rows)).toExponential(6)},${(10 ** (-13 + r())).toExponential(6)}`);
+  for (let i = 0; i < rows; i++)
+    lines.push(`${(10 ** (-6 + (2 * i) / rows)).toExponential(6)},${(10 ** (-13 + r())).toExponential(6)}`);
   writeFileSync(file, lines.join("\n") + "\n");
 }
 
@@ -30,7 +31,18 @@ describe("npm run render launcher", () => {
     const dir = tempDir("axband-launcher-");
     const files = [0, 1, 2].map((i) => join(dir, `curve-${i}.csv`));
     files.forEach((f, i) => invented(f, 7 + i, 2000));
-    const common = ["--role", "exclusion", files[0], files[1], "--role", "region", files[2], "--model", "8/3", "--no-embed"];
+    const common = [
+      "--role",
+      "exclusion",
+      files[0],
+      files[1],
+      "--role",
+      "region",
+      files[2],
+      "--model",
+      "8/3",
+      "--no-embed",
+    ];
     const two = launch([...common, "-o", join(dir, "two.svg")], "2");
     expect(two.status, two.stderr).toBe(0);
     const one = launch([...common, "-o", join(dir, "one.svg")], "1");

@@ -4,8 +4,8 @@ import { describe, expect, it } from "vitest";
 import { existsSync, readFileSync, readdirSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { main } from "../../src/cli/render";
-import { readPngDpi, readPngSize } from "../../src/plot/png-meta";
-import { MODEL_CSV_HEADER } from "../../src/plot/model-csv";
+import { readPngDpi, readPngSize } from "../../src/formats/png-meta";
+import { MODEL_CSV_HEADER } from "../../src/formats/model-csv";
 import { parseXml, texts } from "./svg-checks";
 import { projectFileText, smallProject, tempDir } from "./fixtures";
 
@@ -31,7 +31,7 @@ describe("main", () => {
     expect(r.status).toBe(0);
     const bytes = new Uint8Array(readFileSync(png));
     // 8.6 cm = 325.04 CSS px at 96/in (CSS Values and Units Level 3, §5.2); 2× → 650 px.
-    expect(readPngSize(bytes).widthPx).toBe(Math.round(((8.6 / 2.54) * 96 * 2)));
+    expect(readPngSize(bytes).widthPx).toBe(Math.round((8.6 / 2.54) * 96 * 2));
     // 192 dpi = 192 / 0.0254 m = 7559 px/m (ISO/IEC 15948 §11.3.5.3).
     expect(readPngDpi(bytes)?.pxPerUnitX).toBe(7559);
   });
@@ -40,7 +40,21 @@ describe("main", () => {
     const dir = tempDir();
     const svg = join(dir, "f.svg");
     const csv = join(dir, "models.csv");
-    const r = run([projectIn(dir), "-o", svg, "--preset", "custom", "--width-mm", "120", "--height-mm", "75", "--title", "Quick look (invented)", "--models-csv", csv]);
+    const r = run([
+      projectIn(dir),
+      "-o",
+      svg,
+      "--preset",
+      "custom",
+      "--width-mm",
+      "120",
+      "--height-mm",
+      "75",
+      "--title",
+      "Quick look (invented)",
+      "--models-csv",
+      csv,
+    ]);
     expect(r.status).toBe(0);
     const root = parseXml(readFileSync(svg, "utf8")).documentElement!;
     expect(root.getAttribute("width")).toBe("12cm");

@@ -4,11 +4,20 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import { readdirSync, readFileSync, writeFileSync, existsSync } from "node:fs";
 import { join } from "node:path";
-import { exportFigureSvg, extractProjectFromSvg } from "../../src/plot/figure-file";
-import { readPngDpi, readPngSize, pngChunksValid } from "../../src/plot/png-meta";
-import { projectsEqual } from "../../src/data/schema";
-import { projectFromFile } from "../../src/data/project-file";
-import { INJECTION_CORPUS, SVG_NS, elementNames, parseXml, shownLabels, texts, unsafeParts, withCorpusLabels } from "./svg-checks";
+import { exportFigureSvg, extractProjectFromSvg } from "../../src/formats/figure-file";
+import { readPngDpi, readPngSize, pngChunksValid } from "../../src/formats/png-meta";
+import { projectsEqual } from "../../src/project/schema";
+import { projectFromFile } from "../../src/formats/project-file";
+import {
+  INJECTION_CORPUS,
+  SVG_NS,
+  elementNames,
+  parseXml,
+  shownLabels,
+  texts,
+  unsafeParts,
+  withCorpusLabels,
+} from "./svg-checks";
 import { projectFileText, runCli, smallProject, tempDir } from "./fixtures";
 
 /** Length in cm of an SVG length attribute such as "8.6cm" or "86mm". */
@@ -55,7 +64,8 @@ describe("render a project file", () => {
 
   it("keeps axis titles and legend labels as text", () => {
     const all = shownLabels(parseXml(readFileSync(svgPath, "utf8"))).join("\n");
-    for (const label of ["DFSZ-type line", "Preferred window", "Demo scan (invented)", "Demo reach (invented)"]) expect(all).toContain(label);
+    for (const label of ["DFSZ-type line", "Preferred window", "Demo scan (invented)", "Demo reach (invented)"])
+      expect(all).toContain(label);
     expect(all).toMatch(/eV/); // mass axis title unit
     expect(all).toMatch(/GeV/); // coupling axis title unit
   });
@@ -116,7 +126,21 @@ describe("render CSV files directly", () => {
   });
 
   it("draws the files with roles and models, ranges fitted to the data", () => {
-    const r = runCli([a, "--role", "projection", b, "-o", out, "--model", "8/3", "--model", "0..44/3", "--preset", "double-column", "--no-embed"]);
+    const r = runCli([
+      a,
+      "--role",
+      "projection",
+      b,
+      "-o",
+      out,
+      "--model",
+      "8/3",
+      "--model",
+      "0..44/3",
+      "--preset",
+      "double-column",
+      "--no-embed",
+    ]);
     expect(r.stderr).toBe("");
     expect(r.status).toBe(0);
     const svg = readFileSync(out, "utf8");
@@ -203,12 +227,19 @@ describe("injection corpus", () => {
     const names = elementNames(doc);
     for (const n of ["script", "img", "iframe", "foreignObject"]) expect(names.has(n)).toBe(false);
     const shown = shownLabels(doc);
-    for (const label of [c[0], c[5], c[1], `${c[3]} ${c[4]}`]) expect(shown.some((s) => s.includes(label)), label).toBe(true);
+    for (const label of [c[0], c[5], c[1], `${c[3]} ${c[4]}`])
+      expect(
+        shown.some((s) => s.includes(label)),
+        label,
+      ).toBe(true);
     expect(texts(doc).join("\n")).toContain(`${c[2]} ${c[6]}`);
 
     // A CSV whose header and file name carry the corpus (file names cannot hold "/", so that one is left out).
     const csv = join(dir, `${INJECTION_CORPUS[1]}${INJECTION_CORPUS[2]}&amp;.csv`);
-    writeFileSync(csv, `# ${INJECTION_CORPUS.join(" ")}\nmass ${INJECTION_CORPUS[0]} [eV],g ${INJECTION_CORPUS[1]} [GeV^-1]\n1e-6,1e-13\n1e-5,2e-13\n`);
+    writeFileSync(
+      csv,
+      `# ${INJECTION_CORPUS.join(" ")}\nmass ${INJECTION_CORPUS[0]} [eV],g ${INJECTION_CORPUS[1]} [GeV^-1]\n1e-6,1e-13\n1e-5,2e-13\n`,
+    );
     const out2 = join(dir, "evil-csv.svg");
     const r2 = runCli([csv, "-o", out2]);
     expect(r2.status).toBe(0);

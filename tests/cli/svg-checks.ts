@@ -35,13 +35,16 @@ export function unsafeParts(doc: Document): string[] {
   const out: string[] = [];
   for (const el of allElements(doc)) {
     const name = (el.localName ?? el.nodeName).toLowerCase();
-    if (name === "script" || name === "foreignobject" || name === "iframe" || name === "embed" || name === "object") out.push(`<${el.nodeName}> element`);
-    if (name === "style" && /@import|url\(\s*['"]?(?!#)/i.test(el.textContent ?? "")) out.push("<style> with an external reference");
+    if (name === "script" || name === "foreignobject" || name === "iframe" || name === "embed" || name === "object")
+      out.push(`<${el.nodeName}> element`);
+    if (name === "style" && /@import|url\(\s*['"]?(?!#)/i.test(el.textContent ?? ""))
+      out.push("<style> with an external reference");
     for (const a of Array.from(el.attributes)) {
       const an = a.name.toLowerCase();
       const v = a.value;
       if (an.startsWith("on")) out.push(`${an}= on <${el.nodeName}>`);
-      if ((an === "href" || an.endsWith(":href") || an === "src") && !v.startsWith("#")) out.push(`${an}="${v}" on <${el.nodeName}>`);
+      if ((an === "href" || an.endsWith(":href") || an === "src") && !v.startsWith("#"))
+        out.push(`${an}="${v}" on <${el.nodeName}>`);
       if (/url\(\s*['"]?(?!#)/i.test(v)) out.push(`external url() in ${an} on <${el.nodeName}>`);
       if (/^\s*javascript:/i.test(v)) out.push(`javascript: in ${an}`);
     }
@@ -66,7 +69,9 @@ export function elementNames(doc: Document): Set<string> {
 }
 
 /** Sets hostile labels on every labelled thing of a project (two models, two curves, name, title). */
-export function withCorpusLabels<P extends { name: string; models: { label: string }[]; curves: { label: string }[]; figure: { title: string } }>(p: P): P {
+export function withCorpusLabels<
+  P extends { name: string; models: { label: string }[]; curves: { label: string }[]; figure: { title: string } },
+>(p: P): P {
   const c = INJECTION_CORPUS;
   return {
     ...p,
@@ -78,4 +83,12 @@ export function withCorpusLabels<P extends { name: string; models: { label: stri
 }
 
 /** Hostile label corpus (OWASP XSS Filter Evasion Cheat Sheet patterns, common practice) plus XML edge cases. */
-export const INJECTION_CORPUS = ["<script>alert(1)</script>", '"><img src=x onerror=alert(1)>', "]]>", "&amp;", "javascript:alert(1)", "<![CDATA[x]]>", "' onload='alert(1)"];
+export const INJECTION_CORPUS = [
+  "<script>alert(1)</script>",
+  '"><img src=x onerror=alert(1)>',
+  "]]>",
+  "&amp;",
+  "javascript:alert(1)",
+  "<![CDATA[x]]>",
+  "' onload='alert(1)",
+];

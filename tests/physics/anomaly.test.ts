@@ -36,7 +36,8 @@ describe("exact rationals", () => {
       const r = parseRational(input);
       expect(r.ok && toFractionString(r.value)).toBe(expected);
     }
-    for (const bad of ["abc", "0.3333", 0.5, "1/0", "", "1/3/4", NaN, undefined]) expect(parseRational(bad).ok).toBe(false);
+    for (const bad of ["abc", "0.3333", 0.5, "1/0", "", "1/3/4", NaN, undefined])
+      expect(parseRational(bad).ok).toBe(false);
   });
 });
 
@@ -81,7 +82,12 @@ describe("E and N (DESIGN.md §4: N = Σ X·T·n_w, E = Σ X·d·ΣQ²)", () => 
     ]);
   });
   test("colour by Dynkin labels, by name and by label string give the same result", () => {
-    const mk = (colour: FermionInput["colour"]): FermionInput => ({ colour, ew: { kind: "sm", dim: 1, y: "2/3" }, chirality: "L", pq: 1 });
+    const mk = (colour: FermionInput["colour"]): FermionInput => ({
+      colour,
+      ew: { kind: "sm", dim: 1, y: "2/3" },
+      chirality: "L",
+      pq: 1,
+    });
     const a = anomaly([mk("6bar")]);
     for (const c of [{ p: 0, q: 2 }, "(0,2)", "6̄"] as const) expect(anomaly([mk(c)]).E.equals(a.E)).toBe(true);
     // (6̄,1,2/3): E/N = 16/15 (DLMN 2017, Table I; from memory).
@@ -232,12 +238,18 @@ describe("invariances (property tests, fast-check)", () => {
   });
   test("colour singlets only always give N = 0 and E/N null (T(1) = 0)", () => {
     fc.assert(
-      fc.property(fc.array(fermionArb.map((f) => ({ ...f, colour: "1" })), { minLength: 1, maxLength: 4 }), (model) => {
-        const r = anomaly(model);
-        expect(r.N.equals(0)).toBe(true);
-        expect(r.eOverN).toBeNull();
-        expect(r.domainWall).toBeNull();
-      }),
+      fc.property(
+        fc.array(
+          fermionArb.map((f) => ({ ...f, colour: "1" })),
+          { minLength: 1, maxLength: 4 },
+        ),
+        (model) => {
+          const r = anomaly(model);
+          expect(r.N.equals(0)).toBe(true);
+          expect(r.eOverN).toBeNull();
+          expect(r.domainWall).toBeNull();
+        },
+      ),
     );
   });
 });
@@ -249,18 +261,38 @@ describe("bad input gives errors that name the fermion and the field", () => {
     { input: { pq: "0.3333" }, field: "pq", text: 'fermion 2 (Q_R): PQ charge "0.3333" is not a rational number' },
     { input: { pq: 0.5 }, field: "pq", text: "fermion 2 (Q_R): PQ charge 0.5 is not an exact rational" },
     { input: { pq: "1/0" }, field: "pq", text: "zero denominator" },
-    { input: { colour: "7" }, field: "colour", text: 'fermion 2 (Q_R): colour "7" is not a known SU(3) representation' },
+    {
+      input: { colour: "7" },
+      field: "colour",
+      text: 'fermion 2 (Q_R): colour "7" is not a known SU(3) representation',
+    },
     { input: { colour: { p: -1, q: 0 } }, field: "colour", text: "fermion 2 (Q_R): colour (-1,0)" },
     { input: { copies: -1 }, field: "copies", text: "fermion 2 (Q_R): copies -1 must be a non-negative integer" },
     { input: { copies: 1.5 }, field: "copies", text: "copies 1.5 must be a non-negative integer" },
     { input: { ew: { kind: "sm", dim: 0, y: 0 } }, field: "ew.dim", text: "fermion 2 (Q_R): SU(2) dimension 0" },
     { input: { ew: { kind: "sm", dim: 2.5, y: 0 } }, field: "ew.dim", text: "SU(2) dimension 2.5" },
-    { input: { ew: { kind: "sm", dim: 1, y: "x" } }, field: "ew.y", text: 'hypercharge Y "x" is not a rational number' },
+    {
+      input: { ew: { kind: "sm", dim: 1, y: "x" } },
+      field: "ew.y",
+      text: 'hypercharge Y "x" is not a rational number',
+    },
     { input: { ew: { kind: "su3l", rep: "3", x: "1/3", b: "q" } }, field: "ew.b", text: 'b = β/√3 "q"' },
-    { input: { ew: { kind: "su3l", rep: "6", x: 0, b: 0 } as never }, field: "ew.rep", text: 'SU(3)_L representation "6"' },
+    {
+      input: { ew: { kind: "su3l", rep: "6", x: 0, b: 0 } as never },
+      field: "ew.rep",
+      text: 'SU(3)_L representation "6"',
+    },
     { input: { ew: { kind: "explicit", charges: [] } }, field: "ew.charges", text: "at least one component charge" },
-    { input: { ew: { kind: "explicit", charges: ["1/3", "2/3"], dim: 3 } as never }, field: "ew.charges", text: "2 charges given for a multiplet of dimension 3" },
-    { input: { ew: { kind: "explicit", charges: ["1/3", "z"] } }, field: "ew.charges[1]", text: 'electric charge 2 "z"' },
+    {
+      input: { ew: { kind: "explicit", charges: ["1/3", "2/3"], dim: 3 } as never },
+      field: "ew.charges",
+      text: "2 charges given for a multiplet of dimension 3",
+    },
+    {
+      input: { ew: { kind: "explicit", charges: ["1/3", "z"] } },
+      field: "ew.charges[1]",
+      text: 'electric charge 2 "z"',
+    },
     { input: { ew: { kind: "weird" } as never }, field: "ew.kind", text: 'electroweak kind "weird"' },
     { input: { chirality: "X" as never }, field: "chirality", text: 'chirality "X" must be "L" or "R"' },
   ];

@@ -97,7 +97,13 @@ describe("DFSZ-type models against the PDG review 'Axions and other similar part
       { colour: "3", ew: { kind: "sm", dim: 1, y: "2/3" }, chirality: "R", pq: negate(xu), copies: 3 },
       { colour: "3", ew: { kind: "sm", dim: 1, y: "-1/3" }, chirality: "R", pq: negate(xd), copies: 3 },
       { colour: "1", ew: { kind: "sm", dim: 2, y: "-1/2" }, chirality: "L", pq: 0, copies: 3 },
-      { colour: "1", ew: { kind: "sm", dim: 1, y: "-1" }, chirality: "R", pq: leptonsLike === "down" ? negate(xd) : xu, copies: 3 },
+      {
+        colour: "1",
+        ew: { kind: "sm", dim: 1, y: "-1" },
+        chirality: "R",
+        pq: leptonsLike === "down" ? negate(xd) : xu,
+        copies: 3,
+      },
     ];
     fc.assert(
       fc.property(fc.integer({ min: -40, max: 40 }), fc.integer({ min: 1, max: 12 }), (num, den) => {

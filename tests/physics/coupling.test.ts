@@ -117,7 +117,7 @@ describe("haloscope convention g_γ = (E/N − c_γ)/2 (DESIGN.md §4; g_aγγ =
   test("g_aγγ = (α/π)·|g_γ|/f_a reproduces the model line (DESIGN.md §4)", () => {
     const massEv = 4e-6;
     for (const eOverN of [0, 8 / 3, 1.5]) {
-      relClose((ALPHA_CODATA2018 / Math.PI) * Math.abs(gGamma(eOverN)) / faFromMass(massEv), gAgg(massEv, eOverN));
+      relClose(((ALPHA_CODATA2018 / Math.PI) * Math.abs(gGamma(eOverN))) / faFromMass(massEv), gAgg(massEv, eOverN));
     }
   });
 });

@@ -46,15 +46,19 @@ describe("parseEOverN: intervals", () => {
   test("min ≤ max for any two numbers (property, fast-check)", () => {
     fc.assert(
       // "+ 0" turns −0 into 0: the text "${-0}" is "0".
-      fc.property(fc.double({ min: -100, max: 100, noNaN: true }).map((x) => x + 0), fc.double({ min: -100, max: 100, noNaN: true }).map((x) => x + 0), (a, b) => {
-        const r = parseEOverN(`${a}..${b}`);
-        expect(r.ok).toBe(true);
-        if (r.ok) {
-          expect(r.minValue).toBe(Math.min(a, b));
-          expect(r.maxValue).toBe(Math.max(a, b));
-          expect(r.isBand).toBe(a !== b);
-        }
-      }),
+      fc.property(
+        fc.double({ min: -100, max: 100, noNaN: true }).map((x) => x + 0),
+        fc.double({ min: -100, max: 100, noNaN: true }).map((x) => x + 0),
+        (a, b) => {
+          const r = parseEOverN(`${a}..${b}`);
+          expect(r.ok).toBe(true);
+          if (r.ok) {
+            expect(r.minValue).toBe(Math.min(a, b));
+            expect(r.maxValue).toBe(Math.max(a, b));
+            expect(r.isBand).toBe(a !== b);
+          }
+        },
+      ),
     );
   });
 });

@@ -52,13 +52,75 @@ describe("SU(3) irreps against Slansky, Phys. Rept. 79 (1981) 1", () => {
 
 /** Tensor-product decompositions (Slansky 1981, SU(3) tensor-product table; from memory). */
 const PRODUCTS: { a: [number, number]; b: [number, number]; sum: [number, number][]; label: string }[] = [
-  { label: "3⊗3 = 6⊕3̄", a: [1, 0], b: [1, 0], sum: [[2, 0], [0, 1]] },
-  { label: "3⊗3̄ = 8⊕1", a: [1, 0], b: [0, 1], sum: [[1, 1], [0, 0]] },
-  { label: "3⊗6 = 10⊕8", a: [1, 0], b: [2, 0], sum: [[3, 0], [1, 1]] },
-  { label: "3̄⊗6 = 15⊕3", a: [0, 1], b: [2, 0], sum: [[2, 1], [1, 0]] },
-  { label: "3⊗8 = 15⊕6̄⊕3", a: [1, 0], b: [1, 1], sum: [[2, 1], [0, 2], [1, 0]] },
-  { label: "6⊗6 = 15'⊕15⊕6̄", a: [2, 0], b: [2, 0], sum: [[4, 0], [2, 1], [0, 2]] },
-  { label: "8⊗8 = 27⊕10⊕10̄⊕8⊕8⊕1", a: [1, 1], b: [1, 1], sum: [[2, 2], [3, 0], [0, 3], [1, 1], [1, 1], [0, 0]] },
+  {
+    label: "3⊗3 = 6⊕3̄",
+    a: [1, 0],
+    b: [1, 0],
+    sum: [
+      [2, 0],
+      [0, 1],
+    ],
+  },
+  {
+    label: "3⊗3̄ = 8⊕1",
+    a: [1, 0],
+    b: [0, 1],
+    sum: [
+      [1, 1],
+      [0, 0],
+    ],
+  },
+  {
+    label: "3⊗6 = 10⊕8",
+    a: [1, 0],
+    b: [2, 0],
+    sum: [
+      [3, 0],
+      [1, 1],
+    ],
+  },
+  {
+    label: "3̄⊗6 = 15⊕3",
+    a: [0, 1],
+    b: [2, 0],
+    sum: [
+      [2, 1],
+      [1, 0],
+    ],
+  },
+  {
+    label: "3⊗8 = 15⊕6̄⊕3",
+    a: [1, 0],
+    b: [1, 1],
+    sum: [
+      [2, 1],
+      [0, 2],
+      [1, 0],
+    ],
+  },
+  {
+    label: "6⊗6 = 15'⊕15⊕6̄",
+    a: [2, 0],
+    b: [2, 0],
+    sum: [
+      [4, 0],
+      [2, 1],
+      [0, 2],
+    ],
+  },
+  {
+    label: "8⊗8 = 27⊕10⊕10̄⊕8⊕8⊕1",
+    a: [1, 1],
+    b: [1, 1],
+    sum: [
+      [2, 2],
+      [3, 0],
+      [0, 3],
+      [1, 1],
+      [1, 1],
+      [0, 0],
+    ],
+  },
 ];
 
 describe("index sum rule T(R₁⊗R₂) = d₁T₂ + d₂T₁ on SU(3) tensor products (Slansky 1981; from memory)", () => {
@@ -66,7 +128,9 @@ describe("index sum rule T(R₁⊗R₂) = d₁T₂ + d₂T₁ on SU(3) tensor pr
     test(label, () => {
       const dims = sum.reduce((acc, [p, q]) => acc + su3Dimension(p, q), 0);
       expect(dims).toBe(su3Dimension(...a) * su3Dimension(...b));
-      const lhs = su3Index(...a).mul(su3Dimension(...b)).add(su3Index(...b).mul(su3Dimension(...a)));
+      const lhs = su3Index(...a)
+        .mul(su3Dimension(...b))
+        .add(su3Index(...b).mul(su3Dimension(...a)));
       const rhs = sum.reduce((acc, [p, q]) => acc.add(su3Index(p, q)), su3Index(0, 0));
       expect(rhs.equals(lhs)).toBe(true);
     });

@@ -28,14 +28,27 @@ const plot = { x: 80, y: 20, w: 700, h: 460 };
 // 700 px over half a decade of mass (10^-6 … 10^-5.5 eV), 460 px over 0.6 decades of g (10^-13.25 … 10^-12.65).
 const bx = plot.w / 0.5;
 const by = -plot.h / 0.6;
-const params = (reuse: boolean): PixelParams => ({ ax: plot.x - bx * -6, bx, ay: plot.y + plot.h - by * -13.25, by, slope: 0, yOffset: 0, plot, resolution: 1, reuse });
+const params = (reuse: boolean): PixelParams => ({
+  ax: plot.x - bx * -6,
+  bx,
+  ay: plot.y + plot.h - by * -13.25,
+  by,
+  slope: 0,
+  yOffset: 0,
+  plot,
+  resolution: 1,
+  reuse,
+});
 
 describe("working buffers", () => {
   test("the first frame of a curve that outgrows the buffers equals the later frames and a fresh copy's", () => {
     const { massEv, gInvGeV } = noisyRegion(150_000, 5);
     const first = curvePixels(prepareCurve(massEv, gInvGeV, false), true, params(true));
     // A polyline's arrays may be longer than its n points (clipping sizes them for the worst case).
-    const points = (pl: { xs: Float64Array; ys: Float64Array; n: number }) => [Array.from(pl.xs.subarray(0, pl.n)), Array.from(pl.ys.subarray(0, pl.n))];
+    const points = (pl: { xs: Float64Array; ys: Float64Array; n: number }) => [
+      Array.from(pl.xs.subarray(0, pl.n)),
+      Array.from(pl.ys.subarray(0, pl.n)),
+    ];
     const [firstXs, firstYs] = points(first);
     // More points than the initial 4,096-point buffers hold, so this frame grew them while writing.
     expect(first.n).toBeGreaterThan(4096);

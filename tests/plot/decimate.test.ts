@@ -131,7 +131,16 @@ describe("column thinning of sorted curves", () => {
     const prep = prepareCurve(m, g, true);
     const plot = { x: 50, y: 20, w: 500, h: 300 };
     const bx = plot.w / 5;
-    const params: PixelParams = { ax: plot.x + 7 * bx, bx, ay: plot.y + plot.h - (-300 / 8) * -17, by: -300 / 8, slope: 0, yOffset: 0, plot, resolution: 2 };
+    const params: PixelParams = {
+      ax: plot.x + 7 * bx,
+      bx,
+      ay: plot.y + plot.h - (-300 / 8) * -17,
+      by: -300 / 8,
+      slope: 0,
+      yOffset: 0,
+      plot,
+      resolution: 2,
+    };
     const d = pathData(curvePixels(prep, false, params));
     expect(d).not.toMatch(/\d\.\d{3}/);
     const pts = parsePath(d)[0].points;
@@ -204,7 +213,10 @@ describe("simplification of unsorted curves and closed regions", () => {
     expect(worst).toBeLessThanOrEqual(0.5 + 0.01);
     // and the simplified outline only uses original points (no point is moved)
     const orig = new Set<string>();
-    for (let i = 0; i < n; i++) orig.add(`${Math.round((params.ax + bx * Math.log10(m[i])) * 100)},${Math.round((params.ay + by * Math.log10(g[i])) * 100)}`);
+    for (let i = 0; i < n; i++)
+      orig.add(
+        `${Math.round((params.ax + bx * Math.log10(m[i])) * 100)},${Math.round((params.ay + by * Math.log10(g[i])) * 100)}`,
+      );
     expect(sub.every(([x, y]) => orig.has(`${Math.round(x * 100)},${Math.round(y * 100)}`))).toBe(true);
   });
 
@@ -217,9 +229,22 @@ describe("simplification of unsorted curves and closed regions", () => {
     const at = (decades: number): PixelParams => {
       const bx = 900 / decades;
       const by = -600 / (0.75 * decades);
-      return { ax: -bx * (-4 - decades / 2), bx, ay: 600 - by * (-11 - 0.375 * decades), by, slope: 0, yOffset: 0, plot, resolution: 1, reuse: true };
+      return {
+        ax: -bx * (-4 - decades / 2),
+        bx,
+        ay: 600 - by * (-11 - 0.375 * decades),
+        by,
+        slope: 0,
+        yOffset: 0,
+        plot,
+        resolution: 1,
+        reuse: true,
+      };
     };
-    const points = (pl: { xs: Float64Array; ys: Float64Array; n: number }) => [Array.from(pl.xs.subarray(0, pl.n)), Array.from(pl.ys.subarray(0, pl.n))];
+    const points = (pl: { xs: Float64Array; ys: Float64Array; n: number }) => [
+      Array.from(pl.xs.subarray(0, pl.n)),
+      Array.from(pl.ys.subarray(0, pl.n)),
+    ];
     let kinds = 0;
     for (const decades of [2, 1.8, 1.65, 1.65, 1.8, 2, 2.5, 4, 1.7, 3]) {
       const carried = points(curvePixels(prep, true, at(decades)));
@@ -285,7 +310,8 @@ describe("run thinning and path encoding", () => {
     for (let i = 0; i < n; i++) {
       while (k < kept.length - 2 && kept[k + 1] <= i) k++;
       let d = Infinity;
-      for (let q = Math.max(0, k - 3); q <= Math.min(kept.length - 2, k + 3); q++) d = Math.min(d, segDist(x[i], y[i], q));
+      for (let q = Math.max(0, k - 3); q <= Math.min(kept.length - 2, k + 3); q++)
+        d = Math.min(d, segDist(x[i], y[i], q));
       worst = Math.max(worst, d);
     }
     expect(worst).toBeLessThanOrEqual(tau + 1e-9);
@@ -319,7 +345,9 @@ describe("run thinning and path encoding", () => {
     const rel = parsePath(pathDataCompact(poly))[0];
     expect(rel.closed).toBe(true);
     // repeated vertices are dropped by the compact form; compare the distinct sequence
-    const distinct = abs.points.filter((p, i) => i === 0 || p[0] !== abs.points[i - 1][0] || p[1] !== abs.points[i - 1][1]);
+    const distinct = abs.points.filter(
+      (p, i) => i === 0 || p[0] !== abs.points[i - 1][0] || p[1] !== abs.points[i - 1][1],
+    );
     expect(rel.points.length).toBe(distinct.length);
     rel.points.forEach(([x, y], i) => {
       expect(x).toBeCloseTo(distinct[i][0], 6);
@@ -331,7 +359,12 @@ describe("run thinning and path encoding", () => {
 
 describe("clipping and caching", () => {
   test("Sutherland–Hodgman keeps the part of a polygon inside the rectangle (Sutherland & Hodgman, CACM 17 (1974) 32)", () => {
-    const sq = { xs: Float64Array.from([-10, 10, 10, -10]), ys: Float64Array.from([-10, -10, 10, 10]), n: 4, closed: true };
+    const sq = {
+      xs: Float64Array.from([-10, 10, 10, -10]),
+      ys: Float64Array.from([-10, -10, 10, 10]),
+      n: 4,
+      closed: true,
+    };
     const c = clipToRect(sq, { x0: 0, y0: 0, x1: 100, y1: 100 });
     let area = 0;
     for (let i = 0; i < c.n; i++) {

@@ -1,8 +1,8 @@
 // A fixed small project for the plot tests (invented curves generated from formulas, textbook E/N values),
 // and helpers to read path data and text back out of a scene.
-import type { Curve, Model, Project } from "../../src/data/types";
+import type { Curve, Model, Project } from "../../src/project/types";
 import type { PathNode, Scene, SceneNode, TextNode } from "../../src/plot/scene-types";
-import { mulberry32 } from "../../src/data/demo";
+import { mulberry32 } from "../../src/project/demo";
 
 /** Deterministic 32-bit generator (the demo's mulberry32), so fixtures and property tests are reproducible. */
 export const rng = mulberry32;
@@ -64,8 +64,24 @@ export function fixtureCurves(): Curve[] {
   }
   return [
     curve({ id: "dip", label: "Test dip (invented)", role: "exclusion", massEv: m1, gInvGeV: g1, colour: "#D55E00" }),
-    curve({ id: "reach", label: "Test reach (invented)", role: "projection", massEv: m2, gInvGeV: g2, colour: "#CC79A7", lineStyle: "dashed" }),
-    curve({ id: "blob", label: "Test region (invented)", role: "region", massEv: m3, gInvGeV: g3, colour: "#009E73", keepOrder: true }),
+    curve({
+      id: "reach",
+      label: "Test reach (invented)",
+      role: "projection",
+      massEv: m2,
+      gInvGeV: g2,
+      colour: "#CC79A7",
+      lineStyle: "dashed",
+    }),
+    curve({
+      id: "blob",
+      label: "Test region (invented)",
+      role: "region",
+      massEv: m3,
+      gInvGeV: g3,
+      colour: "#009E73",
+      keepOrder: true,
+    }),
   ];
 }
 
@@ -73,11 +89,22 @@ export function fixtureProject(): Project {
   return {
     version: 1,
     name: "plot fixture",
-    physics: { ref: "2019", custom: { cGamma: 1.92, cGammaSigma: 0.04, kMuEv: 5.691, kMuEvSigma: 0.051, label: "custom" } },
+    physics: {
+      ref: "2019",
+      custom: { cGamma: 1.92, cGammaSigma: 0.04, kMuEv: 5.691, kMuEvSigma: 0.051, label: "custom" },
+    },
     models: [
       model({ id: "ksvz", label: "KSVZ-type, E/N = 0", eOverNMin: "0", colour: "#117A8B" }),
       model({ id: "dfsz", label: "DFSZ-type, E/N = 8/3", eOverNMin: "8/3", colour: "#1F4E8C", lineStyle: "dashed" }),
-      model({ id: "window", label: "Window, E/N = 5/3..44/3", eOverNMin: "5/3", eOverNMax: "44/3", colour: "#2A9D8F", fillOpacity: 0.2, sigmas: 1 }),
+      model({
+        id: "window",
+        label: "Window, E/N = 5/3..44/3",
+        eOverNMin: "5/3",
+        eOverNMax: "44/3",
+        colour: "#2A9D8F",
+        fillOpacity: 0.2,
+        sigmas: 1,
+      }),
     ],
     curves: fixtureCurves(),
     figure: {

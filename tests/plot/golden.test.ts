@@ -6,7 +6,7 @@ import { existsSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { describe, expect, test } from "vitest";
-import type { Project } from "../../src/data/types";
+import type { Project } from "../../src/project/types";
 import { buildScene, writeSvg } from "../../src/plot/index";
 import { parseXml, unsafeParts } from "../cli/svg-checks";
 import { fixtureProject } from "./fixture";
@@ -57,7 +57,9 @@ describe("golden SVG figures", () => {
         writeFileSync(goldenPath, svg);
         rmSync(changedPath, { force: true });
       }
-      expect(existsSync(goldenPath), `missing golden ${goldenPath}; run with AXBAND_UPDATE_GOLDEN=1 to create it`).toBe(true);
+      expect(existsSync(goldenPath), `missing golden ${goldenPath}; run with AXBAND_UPDATE_GOLDEN=1 to create it`).toBe(
+        true,
+      );
       const same = normaliseSvg(readFileSync(goldenPath, "utf8")) === normaliseSvg(svg);
       if (!same) writeFileSync(changedPath, svg);
       else rmSync(changedPath, { force: true });

@@ -7,10 +7,10 @@
 // (1984) 1).
 import { describe, expect, test, vi } from "vitest";
 import fc from "fast-check";
-import { defaultProject } from "../../src/data/demo";
-import type { Curve, LegendPlace, Project, SizePreset } from "../../src/data/types";
+import { defaultProject } from "../../src/project/demo";
+import type { Curve, LegendPlace, Project, SizePreset } from "../../src/project/types";
 import { pathData, pathDataCompact } from "../../src/plot/decimate";
-import { exportFigureSvg, exportScene, rasterResolution } from "../../src/plot/figure-file";
+import { exportFigureSvg, exportScene, rasterResolution } from "../../src/formats/figure-file";
 import type { LegendCorner } from "../../src/plot/layout";
 import {
   CROWDED_COVERAGE,
@@ -50,10 +50,22 @@ function placeOf(scene: Scene): LegendCorner | "outside-right" {
 }
 
 /** A closed region (file order) through the given (mass eV, g GeV⁻¹) corners: an invented block of data. */
-function block(id: string, massEv: [number, number], gInvGeV: [number, number], label = `Block ${id} (invented)`): Curve {
+function block(
+  id: string,
+  massEv: [number, number],
+  gInvGeV: [number, number],
+  label = `Block ${id} (invented)`,
+): Curve {
   const [m0, m1] = massEv;
   const [g0, g1] = gInvGeV;
-  return curve({ id, label, role: "region", keepOrder: true, massEv: Float64Array.from([m0, m1, m1, m0]), gInvGeV: Float64Array.from([g0, g0, g1, g1]) });
+  return curve({
+    id,
+    label,
+    role: "region",
+    keepOrder: true,
+    massEv: Float64Array.from([m0, m1, m1, m0]),
+    gInvGeV: Float64Array.from([g0, g0, g1, g1]),
+  });
 }
 
 /** A slide figure over 10⁻⁷..10⁻² eV × 10⁻¹⁷..10⁻⁹ GeV⁻¹ with the given curves and an "auto" legend. */
@@ -69,14 +81,25 @@ function project(curves: Curve[], preset: SizePreset = "slide", models: Project[
 function coverageOf(scene: Scene): Record<LegendCorner, number> {
   const b = legendBox(scene);
   const p = scene.plot;
-  const inset = 0.6 * (scene.layers.find((l) => l.id === "axes")!.nodes.find((n) => n.kind === "text" && n.id?.startsWith("xlabel-")) as { sizePx: number }).sizePx;
+  const inset =
+    0.6 *
+    (
+      scene.layers
+        .find((l) => l.id === "axes")!
+        .nodes.find((n) => n.kind === "text" && n.id?.startsWith("xlabel-")) as { sizePx: number }
+    ).sizePx;
   const boxes = {
     "top-left": { x: p.x + inset, y: p.y + inset, w: b.w, h: b.h },
     "top-right": { x: p.x + p.w - inset - b.w, y: p.y + inset, w: b.w, h: b.h },
     "bottom-left": { x: p.x + inset, y: p.y + p.h - inset - b.h, w: b.w, h: b.h },
     "bottom-right": { x: p.x + p.w - inset - b.w, y: p.y + p.h - inset - b.h, w: b.w, h: b.h },
   };
-  return pickLegendPlace({ nodes: [...nodes(scene, "curves"), ...nodes(scene, "models")], plot: p, boxes, outsideFits: () => false }).coverage;
+  return pickLegendPlace({
+    nodes: [...nodes(scene, "curves"), ...nodes(scene, "models")],
+    plot: p,
+    boxes,
+    outsideFits: () => false,
+  }).coverage;
 }
 
 // Far outside the plot on every side, so a block reaching them fills a corner (regions are clipped to the plot).
@@ -92,7 +115,9 @@ describe("automatic legend placement in the scene", () => {
     // An exclusion limit at 10⁻¹³ GeV⁻¹ above 10⁻⁴ eV: everything above it, up to the plot top, is filled.
     const m = Float64Array.from({ length: 50 }, (_, i) => 10 ** (-4 + (3 * i) / 49));
     const g = Float64Array.from(m, () => 1e-13);
-    const scene = buildScene(project([curve({ id: "x", label: "Limit (invented)", role: "exclusion", massEv: m, gInvGeV: g })]));
+    const scene = buildScene(
+      project([curve({ id: "x", label: "Limit (invented)", role: "exclusion", massEv: m, gInvGeV: g })]),
+    );
     const cov = coverageOf(scene);
     expect(cov["top-right"]).toBeGreaterThan(0.95);
     expect(cov["top-left"]).toBe(0);
@@ -120,7 +145,9 @@ describe("automatic legend placement in the scene", () => {
     expect(placeOf(buildScene(project(curves)))).toBe("bottom-right");
     // E/N ∈ [1.8, 2.1] contains c_γ = 1.92 (Grilli di Cortona et al., JHEP 01 (2016) 034), so the band reaches
     // g = 0 and fills everything below its upper edge g ∝ m·|2.1 − c_γ|, which rises to the right (DESIGN.md §4).
-    const band = buildScene(project(curves, "slide", [model({ id: "b", label: "Band", eOverNMin: "1.8", eOverNMax: "2.1" })]));
+    const band = buildScene(
+      project(curves, "slide", [model({ id: "b", label: "Band", eOverNMin: "1.8", eOverNMax: "2.1" })]),
+    );
     const cov = coverageOf(band);
     expect(cov["bottom-right"]).toBe(1);
     expect(cov["bottom-left"]).toBeGreaterThan(0);
@@ -154,10 +181,16 @@ describe("automatic legend placement in the scene", () => {
     // Exactly the figure a fixed "outside-right" legend gives, and the scene says where it went.
     const { autoLegendPlace: slidePlace, ...slideRest } = slide;
     expect(slidePlace).toBe("outside-right");
-    expect(slideRest).toEqual(buildScene({ ...project(curves), figure: { ...project(curves).figure, legend: "outside-right" } }));
+    expect(slideRest).toEqual(
+      buildScene({ ...project(curves), figure: { ...project(curves).figure, legend: "outside-right" } }),
+    );
     // The same content with the demo's seven long labels on the single-column preset (8.6 cm): no room outside.
     const demo = defaultProject();
-    const crowded = { ...demo, curves: [...demo.curves, block("all", [M_LO, M_HI], [G_LO, G_HI])], figure: { ...demo.figure, preset: "single-column" as const, legend: "auto" as const } };
+    const crowded = {
+      ...demo,
+      curves: [...demo.curves, block("all", [M_LO, M_HI], [G_LO, G_HI])],
+      figure: { ...demo.figure, preset: "single-column" as const, legend: "auto" as const },
+    };
     const column = buildScene(crowded);
     const cov = coverageOf(column);
     expect(Math.min(...Object.values(cov))).toBeGreaterThan(CROWDED_COVERAGE);
@@ -223,15 +256,28 @@ describe("automatic legend placement in the scene", () => {
       }
       return curve({ id: "noisy", label: "Noisy (invented)", role: "exclusion", massEv: m, gInvGeV: g });
     })();
-    const projects: Project[] = [defaultProject(), project([noisy, block("br", [1e-4, M_HI], [G_LO, 1e-15])], "slide", [model({ id: "k", eOverNMin: "0" })])];
+    const projects: Project[] = [
+      defaultProject(),
+      project([noisy, block("br", [1e-4, M_HI], [G_LO, 1e-15])], "slide", [model({ id: "k", eOverNMin: "0" })]),
+    ];
     for (const base of projects) {
       for (const preset of ["slide", "single-column", "double-column", "custom"] as const) {
         const p = { ...base, figure: { ...base.figure, preset, legend: "auto" as const } };
         const exported = exportScene(p);
-        const svgBox = /<rect id="legend-box" x="([\d.]+)" y="([\d.]+)"/.exec(exportFigureSvg(p, { embedProject: false }));
-        expect(svgBox && [Number(svgBox[1]), Number(svgBox[2])]).toEqual([legendBox(exported).x, legendBox(exported).y]);
+        const svgBox = /<rect id="legend-box" x="([\d.]+)" y="([\d.]+)"/.exec(
+          exportFigureSvg(p, { embedProject: false }),
+        );
+        expect(svgBox && [Number(svgBox[1]), Number(svgBox[2])]).toEqual([
+          legendBox(exported).x,
+          legendBox(exported).y,
+        ]);
         for (const resolution of [0.25, 0.75, 1, 1.25, 3, rasterResolution(300)]) {
-          const screen = buildScene(p, { widthPx: exported.widthPx, heightPx: exported.heightPx, resolution, physical: false });
+          const screen = buildScene(p, {
+            widthPx: exported.widthPx,
+            heightPx: exported.heightPx,
+            resolution,
+            physical: false,
+          });
           expect(legendBox(screen), `${preset} at resolution ${resolution}`).toEqual(legendBox(exported));
         }
         // Unthinned drawing (comparisons) picks the same corner as well.
@@ -248,8 +294,20 @@ describe("automatic legend placement in the scene", () => {
       const n = 4000;
       const lm = Float64Array.from({ length: n }, (_, i) => -7 + (2 * i) / (n - 1));
       const lg = Float64Array.from(lm, (x) => -10 + 0.3 * Math.sin(7 * x) + 0.06 * (r() - 0.5));
-      const left = curve({ id: "a", label: "Left (invented)", role: "projection", massEv: lm.map((x) => 10 ** x), gInvGeV: lg.map((y) => 10 ** y) });
-      const right = curve({ id: "b", label: "Right (invented)", role: "projection", massEv: lm.map((_, i) => 10 ** (-9 - lm[n - 1 - i])), gInvGeV: lg.map((_, i) => 10 ** lg[n - 1 - i]) });
+      const left = curve({
+        id: "a",
+        label: "Left (invented)",
+        role: "projection",
+        massEv: lm.map((x) => 10 ** x),
+        gInvGeV: lg.map((y) => 10 ** y),
+      });
+      const right = curve({
+        id: "b",
+        label: "Right (invented)",
+        role: "projection",
+        massEv: lm.map((_, i) => 10 ** (-9 - lm[n - 1 - i])),
+        gInvGeV: lg.map((_, i) => 10 ** lg[n - 1 - i]),
+      });
       return project([left, right, block("low", [M_LO, M_HI], [G_LO, 1e-13])]);
     };
     let disagreements = 0;
@@ -267,7 +325,10 @@ describe("automatic legend placement in the scene", () => {
       if (own.size > 1) disagreements++;
     }
     // Without this the check above would be vacuous (thinning that no longer depends on resolution would end it).
-    expect(disagreements, "no near tie among the seeds: the test no longer exercises the fixed placement resolution").toBeGreaterThan(0);
+    expect(
+      disagreements,
+      "no near tie among the seeds: the test no longer exercises the fixed placement resolution",
+    ).toBeGreaterThan(0);
   });
 
   test("the demo on the single-column preset (7 entries) gets the corner that covers least of it", () => {
@@ -348,15 +409,26 @@ describe("pickLegendPlace", () => {
     "bottom-left": { x: 4, y: 66, w: 60, h: 30 },
     "bottom-right": { x: 136, y: 66, w: 60, h: 30 },
   };
-  const rect = (x: number, y: number, w: number, h: number) => ({ kind: "path" as const, d: `M${x} ${y}H${x + w}V${y + h}H${x}Z`, fill: "#000" });
+  const rect = (x: number, y: number, w: number, h: number) => ({
+    kind: "path" as const,
+    d: `M${x} ${y}H${x + w}V${y + h}H${x}Z`,
+    fill: "#000",
+  });
 
   test("ties go top-right, top-left, bottom-right, bottom-left", () => {
     expect(LEGEND_CORNERS).toEqual(["top-right", "top-left", "bottom-right", "bottom-left"]);
     const none = pickLegendPlace({ nodes: [], plot, boxes, outsideFits: () => true });
     expect(none).toMatchObject({ place: "top-right", crowded: false });
-    expect(pickLegendPlace({ nodes: [rect(100, 0, 100, 50)], plot, boxes, outsideFits: () => true }).place).toBe("top-left");
-    expect(pickLegendPlace({ nodes: [rect(0, 0, 200, 50)], plot, boxes, outsideFits: () => true }).place).toBe("bottom-right");
-    expect(pickLegendPlace({ nodes: [rect(0, 0, 200, 50), rect(100, 50, 100, 50)], plot, boxes, outsideFits: () => true }).place).toBe("bottom-left");
+    expect(pickLegendPlace({ nodes: [rect(100, 0, 100, 50)], plot, boxes, outsideFits: () => true }).place).toBe(
+      "top-left",
+    );
+    expect(pickLegendPlace({ nodes: [rect(0, 0, 200, 50)], plot, boxes, outsideFits: () => true }).place).toBe(
+      "bottom-right",
+    );
+    expect(
+      pickLegendPlace({ nodes: [rect(0, 0, 200, 50), rect(100, 50, 100, 50)], plot, boxes, outsideFits: () => true })
+        .place,
+    ).toBe("bottom-left");
   });
 
   test("crowded above the threshold: outside right when it fits, else the least covered corner; room is asked only then", () => {
@@ -387,9 +459,19 @@ describe("pickLegendPlace", () => {
       { ...line, stroke: "none" },
       { kind: "path" as const, d: "M0 0H200V100H0Z", fill: "none" },
       { kind: "path" as const, d: "M0 0H200V100H0Z", fill: "#000", fillOpacity: 0 },
-      { kind: "text" as const, x: 10, y: 10, runs: [{ text: "hello" }], sizePx: 40, anchor: "start" as const, baseline: "middle" as const },
+      {
+        kind: "text" as const,
+        x: 10,
+        y: 10,
+        runs: [{ text: "hello" }],
+        sizePx: 40,
+        anchor: "start" as const,
+        baseline: "middle" as const,
+      },
     ];
-    expect(Object.values(pickLegendPlace({ nodes: ghost, plot, boxes, outsideFits: () => false }).coverage)).toEqual([0, 0, 0, 0]);
+    expect(Object.values(pickLegendPlace({ nodes: ghost, plot, boxes, outsideFits: () => false }).coverage)).toEqual([
+      0, 0, 0, 0,
+    ]);
   });
 });
 
@@ -406,7 +488,14 @@ function cellsMetBySegment(g: OccupancyGrid, xa: number, ya: number, xb: number,
       let t1 = 1;
       const dx = xb - xa;
       const dy = yb - ya;
-      const ok = ([[-dx, xa - x0], [dx, x0 + g.cellPx - xa], [-dy, ya - y0], [dy, y0 + g.cellPx - ya]] as const).every(([p, q]) => {
+      const ok = (
+        [
+          [-dx, xa - x0],
+          [dx, x0 + g.cellPx - xa],
+          [-dy, ya - y0],
+          [dy, y0 + g.cellPx - ya],
+        ] as const
+      ).every(([p, q]) => {
         if (p === 0) return q >= 0;
         const t = q / p;
         if (p < 0) t0 = Math.max(t0, t);
@@ -425,7 +514,7 @@ function winding(xs: number[], ys: number[], px: number, py: number): number {
   for (let i = 0; i < xs.length; i++) {
     const j = (i + 1) % xs.length;
     const [xa, ya, xb, yb] = [xs[i], ys[i], xs[j], ys[j]];
-    if ((ya <= py) !== (yb <= py)) {
+    if (ya <= py !== yb <= py) {
       const x = xa + ((py - ya) * (xb - xa)) / (yb - ya);
       if (x < px) w += yb > ya ? 1 : -1;
     }
@@ -445,11 +534,17 @@ describe("occupancy grid", () => {
 
   test("a segment marks exactly the cells it meets (property, 300 random segments in and around the grid)", () => {
     fc.assert(
-      fc.property(coord(plot.x, plot.w), coord(plot.y, plot.h), coord(plot.x, plot.w), coord(plot.y, plot.h), (xa, ya, xb, yb) => {
-        const g = emptyGrid(plot, 4);
-        markSegment(g, xa, ya, xb, yb);
-        expect(marked(g)).toEqual(cellsMetBySegment(g, xa, ya, xb, yb));
-      }),
+      fc.property(
+        coord(plot.x, plot.w),
+        coord(plot.y, plot.h),
+        coord(plot.x, plot.w),
+        coord(plot.y, plot.h),
+        (xa, ya, xb, yb) => {
+          const g = emptyGrid(plot, 4);
+          markSegment(g, xa, ya, xb, yb);
+          expect(marked(g)).toEqual(cellsMetBySegment(g, xa, ya, xb, yb));
+        },
+      ),
       { numRuns: 300, seed: 42 },
     );
   });
@@ -463,7 +558,9 @@ describe("occupancy grid", () => {
         const ys = pts.map((p) => p[1]);
         markFill(g, [{ xs, ys, closed: false }]);
         const expected = new Set<number>();
-        for (let r = 0; r < g.rows; r++) for (let c = 0; c < g.cols; c++) if (winding(xs, ys, g.x0 + (c + 0.5) * 4, g.y0 + (r + 0.5) * 4) !== 0) expected.add(r * g.cols + c);
+        for (let r = 0; r < g.rows; r++)
+          for (let c = 0; c < g.cols; c++)
+            if (winding(xs, ys, g.x0 + (c + 0.5) * 4, g.y0 + (r + 0.5) * 4) !== 0) expected.add(r * g.cols + c);
         expect(marked(g)).toEqual(expected);
       }),
       { numRuns: 300, seed: 7 },
@@ -471,9 +568,17 @@ describe("occupancy grid", () => {
   });
 
   test("nonzero, not even-odd: a square drawn twice the same way round stays filled (SVG 1.1 §11.3)", () => {
-    const g = occupancyGrid([{ kind: "path", d: "M0 0H40V40H0ZM0 0H40V40H0Z", fill: "#000" }], { x: 0, y: 0, w: 40, h: 40 }, 4);
+    const g = occupancyGrid(
+      [{ kind: "path", d: "M0 0H40V40H0ZM0 0H40V40H0Z", fill: "#000" }],
+      { x: 0, y: 0, w: 40, h: 40 },
+      4,
+    );
     expect(g.cells.every((v) => v === 1)).toBe(true);
-    const holed = occupancyGrid([{ kind: "path", d: "M0 0H40V40H0ZM10 10V30H30V10Z", fill: "#000" }], { x: 0, y: 0, w: 40, h: 40 }, 4);
+    const holed = occupancyGrid(
+      [{ kind: "path", d: "M0 0H40V40H0ZM10 10V30H30V10Z", fill: "#000" }],
+      { x: 0, y: 0, w: 40, h: 40 },
+      4,
+    );
     // The inner square runs the other way round: a hole of 20 px, five 4-px cells each way.
     expect(holed.cells.reduce((a, v) => a + v, 0)).toBe(100 - 25);
   });
@@ -496,7 +601,9 @@ describe("parsePathData", () => {
       { xs: [1, 4, 4.5, 3.5, 3.5], ys: [2, 6, 5.75, 5.75, 7.75], closed: true },
       { xs: [1, 2], ys: [2, 3], closed: false },
     ]);
-    expect(parsePathData("M0,0 C1,1 2,2 3,0 Q4 4 5 0 A1 1 0 0 1 6 0")).toEqual([{ xs: [0, 3, 5, 6], ys: [0, 0, 0, 0], closed: false }]);
+    expect(parsePathData("M0,0 C1,1 2,2 3,0 Q4 4 5 0 A1 1 0 0 1 6 0")).toEqual([
+      { xs: [0, 3, 5, 6], ys: [0, 0, 0, 0], closed: false },
+    ]);
     expect(parsePathData("M1e1 2E-1L-1.5e+1 .5")).toEqual([{ xs: [10, -15], ys: [0.2, 0.5], closed: false }]);
     expect(parsePathData("M1 2L3 4 x 5")).toEqual([{ xs: [1, 3], ys: [2, 4], closed: false }]);
     expect(parsePathData("")).toEqual([]);
@@ -504,20 +611,34 @@ describe("parsePathData", () => {
 
   test("reads back the scene's own path forms: compact curve paths and absolute paths (property, random polylines)", () => {
     fc.assert(
-      fc.property(fc.array(fc.tuple(fc.integer({ min: -50_000, max: 90_000 }), fc.integer({ min: -50_000, max: 90_000 })), { minLength: 1, maxLength: 40 }), fc.boolean(), (pts, closed) => {
-        const poly = { xs: Float64Array.from(pts, (p) => p[0] / 100), ys: Float64Array.from(pts, (p) => p[1] / 100), n: pts.length, closed };
-        // The compact form drops repeated vertices, the absolute form keeps them.
-        for (const [d, dropsRepeats] of [
-          [pathDataCompact(poly), true],
-          [pathData(poly), false],
-        ] as const) {
-          const [sub] = parsePathData(d);
-          expect(sub.closed).toBe(closed);
-          const keep = dropsRepeats ? pts.filter((p, i) => i === 0 || p[0] !== pts[i - 1][0] || p[1] !== pts[i - 1][1]) : pts;
-          expect(sub.xs.map((x) => Math.round(x * 100))).toEqual(keep.map((p) => p[0]));
-          expect(sub.ys.map((y) => Math.round(y * 100))).toEqual(keep.map((p) => p[1]));
-        }
-      }),
+      fc.property(
+        fc.array(fc.tuple(fc.integer({ min: -50_000, max: 90_000 }), fc.integer({ min: -50_000, max: 90_000 })), {
+          minLength: 1,
+          maxLength: 40,
+        }),
+        fc.boolean(),
+        (pts, closed) => {
+          const poly = {
+            xs: Float64Array.from(pts, (p) => p[0] / 100),
+            ys: Float64Array.from(pts, (p) => p[1] / 100),
+            n: pts.length,
+            closed,
+          };
+          // The compact form drops repeated vertices, the absolute form keeps them.
+          for (const [d, dropsRepeats] of [
+            [pathDataCompact(poly), true],
+            [pathData(poly), false],
+          ] as const) {
+            const [sub] = parsePathData(d);
+            expect(sub.closed).toBe(closed);
+            const keep = dropsRepeats
+              ? pts.filter((p, i) => i === 0 || p[0] !== pts[i - 1][0] || p[1] !== pts[i - 1][1])
+              : pts;
+            expect(sub.xs.map((x) => Math.round(x * 100))).toEqual(keep.map((p) => p[0]));
+            expect(sub.ys.map((y) => Math.round(y * 100))).toEqual(keep.map((p) => p[1]));
+          }
+        },
+      ),
       { numRuns: 200, seed: 3 },
     );
   });

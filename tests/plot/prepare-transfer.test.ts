@@ -2,10 +2,16 @@
 // exactly as curves prepared where they are drawn: the reference is the plot core's own main-thread path
 // (prepareCurve + viewArrays via buildScene), compared as whole SVG strings from writeSvg.
 import { describe, expect, test } from "vitest";
-import type { Curve, Project, YView } from "../../src/data/types";
+import type { Curve, Project, YView } from "../../src/project/types";
 import { buildScene, writeSvg } from "../../src/plot/index";
 import { cachedPrepared } from "../../src/plot/decimate";
-import { computePrepared, hasPrepared, preparedTransferables, prepareSpecOf, seedPreparedCurve } from "../../src/plot/prepare-transfer";
+import {
+  computePrepared,
+  hasPrepared,
+  preparedTransferables,
+  prepareSpecOf,
+  seedPreparedCurve,
+} from "../../src/plot/prepare-transfer";
 import { curve, fixtureProject, rng } from "./fixture";
 
 /** Invented curves (formula plus seeded noise): a long exclusion in shuffled order with unusable points, a noisy projection kept in file order, a closed region. */
@@ -48,7 +54,14 @@ function bigCurves(): Curve[] {
   }
   return [
     curve({ id: "long", role: "exclusion", massEv: m1, gInvGeV: g1 }),
-    curve({ id: "noisy", role: "projection", keepOrder: true, massEv: m2, gInvGeV: g2, rescale: { rhoAssumed: 0.45, rhoShown: 0.3, fraction: 1 } }),
+    curve({
+      id: "noisy",
+      role: "projection",
+      keepOrder: true,
+      massEv: m2,
+      gInvGeV: g2,
+      rescale: { rhoAssumed: 0.45, rhoShown: 0.3, fraction: 1 },
+    }),
     curve({ id: "closed", role: "region", keepOrder: true, massEv: m3, gInvGeV: g3 }),
   ];
 }
@@ -66,7 +79,10 @@ function copies(curves: Curve[]): Curve[] {
 /** What the import worker does: prepare its own copy of the arrays and post it, transferring every buffer. */
 function viaWorker(c: Curve, yView: YView) {
   const spec = prepareSpecOf(c, yView);
-  const t = computePrepared(c.massEv.slice(), c.gInvGeV.slice(), spec.sorted, { slopes: spec.slopes, closed: spec.closed });
+  const t = computePrepared(c.massEv.slice(), c.gInvGeV.slice(), spec.sorted, {
+    slopes: spec.slopes,
+    closed: spec.closed,
+  });
   const buffers = preparedTransferables(t);
   // structuredClone with a transfer list follows postMessage's rules: a buffer listed twice would throw.
   const moved = structuredClone(t, { transfer: buffers });
@@ -99,7 +115,9 @@ describe("seeding a curve prepared elsewhere", () => {
       ] as const) {
         const at = (p: Project): Project => ({ ...p, figure: { ...p.figure, massRangeEv: [...massRangeEv] } });
         const fresh = copies(base);
-        expect(writeSvg(buildScene(at(projectWith(seeded, yView)), { resolution }))).toBe(writeSvg(buildScene(at(projectWith(fresh, yView)), { resolution })));
+        expect(writeSvg(buildScene(at(projectWith(seeded, yView)), { resolution }))).toBe(
+          writeSvg(buildScene(at(projectWith(fresh, yView)), { resolution })),
+        );
       }
     });
   }
@@ -115,12 +133,17 @@ describe("seeding a curve prepared elsewhere", () => {
       expect(cached).toBeDefined();
       expect(hasPrepared(c.massEv, c.gInvGeV, specN)).toBe(false);
       // The worker's reply for the normalized view is merged into that entry, which stays the one drawn from.
-      const t = computePrepared(c.massEv.slice(), c.gInvGeV.slice(), specN.sorted, { slopes: specN.slopes, closed: specN.closed });
+      const t = computePrepared(c.massEv.slice(), c.gInvGeV.slice(), specN.sorted, {
+        slopes: specN.slopes,
+        closed: specN.closed,
+      });
       expect(seedPreparedCurve(c.massEv, c.gInvGeV, specN.sorted, t)).toBe(true);
       expect(cachedPrepared(c.massEv, c.gInvGeV, spec0.sorted)).toBe(cached);
       expect(hasPrepared(c.massEv, c.gInvGeV, specN)).toBe(true);
       const fresh = copies([c]);
-      expect(writeSvg(buildScene(projectWith([c], "normalized"), { resolution: 1.5 }))).toBe(writeSvg(buildScene(projectWith(fresh, "normalized"), { resolution: 1.5 })));
+      expect(writeSvg(buildScene(projectWith([c], "normalized"), { resolution: 1.5 }))).toBe(
+        writeSvg(buildScene(projectWith(fresh, "normalized"), { resolution: 1.5 })),
+      );
     }
   });
 

@@ -115,7 +115,10 @@ describe("model bands", () => {
     expect(band.data?.cancels).toBe("false");
     const pts = parsePath(band.d)[0].points;
     const mLeft = xToMass(scene, scene.plot.x);
-    const ys = pts.filter(([x]) => Math.abs(x - scene.plot.x) < 0.01).map(([, y]) => y).sort((a, b) => a - b);
+    const ys = pts
+      .filter(([x]) => Math.abs(x - scene.plot.x) < 0.01)
+      .map(([, y]) => y)
+      .sort((a, b) => a - b);
     expect(Math.abs(ys[0] - yToPx(scene, gAgg(mLeft, 3)))).toBeLessThan(0.01); // upper edge (smaller px)
     expect(Math.abs(ys[1] - yToPx(scene, gAgg(mLeft, 2.5)))).toBeLessThan(0.01); // lower edge
     const entry = textNodes(scene, "legend").find((t) => t.data?.["model-id"] === "b")!;
@@ -129,7 +132,9 @@ describe("model bands", () => {
     const spread = paths(scene, "models").find((n) => n.id?.endsWith("-spread"))!;
     expect(spread.fillOpacity!).toBeLessThan(0.25);
     const line = lineOf(scene, "s");
-    const xs = parsePath(spread.d)[0].points.filter(([x]) => Math.abs(x - line[0][0]) < 0.01).map(([, y]) => y);
+    const xs = parsePath(spread.d)[0]
+      .points.filter(([x]) => Math.abs(x - line[0][0]) < 0.01)
+      .map(([, y]) => y);
     expect(Math.min(...xs)).toBeLessThan(line[0][1]);
     expect(Math.max(...xs)).toBeGreaterThan(line[0][1]);
   });
@@ -174,10 +179,19 @@ describe("curves", () => {
     const p = fixtureProject();
     const m = Float64Array.from([1e-5, 2e-5]);
     const g = Float64Array.from([3e-13, 3e-13]);
-    p.curves = [curve({ id: "r", label: "Scaled", role: "projection", massEv: m, gInvGeV: g, rescale: { rhoAssumed: 0.45, rhoShown: 0.3, fraction: 0.5 } })];
+    p.curves = [
+      curve({
+        id: "r",
+        label: "Scaled",
+        role: "projection",
+        massEv: m,
+        gInvGeV: g,
+        rescale: { rhoAssumed: 0.45, rhoShown: 0.3, fraction: 0.5 },
+      }),
+    ];
     const scene = buildScene(p);
     const pts = parsePath(paths(scene, "curves")[0].d)[0].points;
-    const expected = 3e-13 * Math.sqrt(0.45 / 0.3) / Math.sqrt(0.5);
+    const expected = (3e-13 * Math.sqrt(0.45 / 0.3)) / Math.sqrt(0.5);
     expect(Math.abs(pts[0][1] - yToPx(scene, expected))).toBeLessThan(0.01);
     const entry = textNodes(scene, "legend").find((t) => t.data?.["curve-id"] === "r")!;
     expect(entry.data?.["legend-entry"]).toMatch(/^Scaled \(rescaled.*ρ = 0\.3 GeV\/cm³, f = 0\.5\)$/);
@@ -185,7 +199,14 @@ describe("curves", () => {
 
   test("non-positive points are skipped, never drawn as NaN", () => {
     const p = fixtureProject();
-    p.curves = [curve({ id: "z", role: "exclusion", massEv: Float64Array.from([1e-6, 2e-6, 3e-6, 4e-6]), gInvGeV: Float64Array.from([1e-13, 0, -1, 2e-13]) })];
+    p.curves = [
+      curve({
+        id: "z",
+        role: "exclusion",
+        massEv: Float64Array.from([1e-6, 2e-6, 3e-6, 4e-6]),
+        gInvGeV: Float64Array.from([1e-13, 0, -1, 2e-13]),
+      }),
+    ];
     const scene = buildScene(p);
     const excl = paths(scene, "curves").find((n) => n.id?.endsWith("-exclusion"))!;
     expect(excl.d).not.toMatch(/NaN|Infinity/);
@@ -255,7 +276,15 @@ describe("legend, layers and sizes", () => {
 
   test("layers in order with the plot-area clip on curves, models, highlight and grid; axis titles with sub/superscripts", () => {
     const scene = buildScene(fixtureProject(), { highlight: { massMinEv: 1e-5, massMaxEv: 2e-5, modelId: "dfsz" } });
-    expect(scene.layers.map((l) => l.id)).toEqual(["background", "grid", "curves", "models", "highlight", "axes", "legend"]);
+    expect(scene.layers.map((l) => l.id)).toEqual([
+      "background",
+      "grid",
+      "curves",
+      "models",
+      "highlight",
+      "axes",
+      "legend",
+    ]);
     expect(scene.layers.filter((l) => l.clip).map((l) => l.id)).toEqual(["grid", "curves", "models", "highlight"]);
     const hl = scene.layers.find((l) => l.id === "highlight")!.nodes;
     const rect = hl.find((n) => n.kind === "rect")!;
@@ -279,10 +308,16 @@ describe("legend, layers and sizes", () => {
       const p = fixtureProject();
       p.figure.preset = preset;
       const scene = buildScene(p);
-      const xl = textNodes(scene, "axes").filter((t) => t.id?.startsWith("xlabel-")).map((t) => t.x);
-      for (let i = 1; i < xl.length; i++) expect(xl[i] - xl[i - 1]).toBeGreaterThan(textNodes(scene, "axes")[0].sizePx * 2);
-      const yl = textNodes(scene, "axes").filter((t) => t.id?.startsWith("ylabel-")).map((t) => t.y);
-      for (let i = 1; i < yl.length; i++) expect(Math.abs(yl[i] - yl[i - 1])).toBeGreaterThan(textNodes(scene, "axes")[0].sizePx);
+      const xl = textNodes(scene, "axes")
+        .filter((t) => t.id?.startsWith("xlabel-"))
+        .map((t) => t.x);
+      for (let i = 1; i < xl.length; i++)
+        expect(xl[i] - xl[i - 1]).toBeGreaterThan(textNodes(scene, "axes")[0].sizePx * 2);
+      const yl = textNodes(scene, "axes")
+        .filter((t) => t.id?.startsWith("ylabel-"))
+        .map((t) => t.y);
+      for (let i = 1; i < yl.length; i++)
+        expect(Math.abs(yl[i] - yl[i - 1])).toBeGreaterThan(textNodes(scene, "axes")[0].sizePx);
     }
   });
 
@@ -298,7 +333,9 @@ describe("legend, layers and sizes", () => {
       p.figure.massRangeEv = range;
       const scene = buildScene(p);
       rects.add(JSON.stringify(scene.plot));
-      for (const t of textNodes(scene, "axes").filter((n) => n.id?.startsWith("xlabel-") || n.id?.startsWith("toplabel-"))) {
+      for (const t of textNodes(scene, "axes").filter(
+        (n) => n.id?.startsWith("xlabel-") || n.id?.startsWith("toplabel-"),
+      )) {
         expect(t.x).toBeGreaterThan(0);
         expect(t.x).toBeLessThan(scene.widthPx);
       }

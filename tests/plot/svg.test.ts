@@ -17,7 +17,8 @@ describe("document structure", () => {
     expect(root.getAttribute("width")).toBe("8.6cm");
     expect(root.getAttribute("height")).toBe("6.45cm");
     expect(root.getAttribute("viewBox")).toBe("0 0 325.04 243.78");
-    for (const id of ["background", "grid", "curves", "models", "highlight", "axes", "legend"]) expect(doc.getElementById(id)?.nodeName).toBe("g");
+    for (const id of ["background", "grid", "curves", "models", "highlight", "axes", "legend"])
+      expect(doc.getElementById(id)?.nodeName).toBe("g");
     const clip = doc.getElementsByTagName("clipPath")[0];
     const clipId = clip.getAttribute("id");
     expect(doc.getElementById("curves")!.getAttribute("clip-path")).toBe(`url(#${clipId})`);
@@ -53,7 +54,9 @@ describe("document structure", () => {
     expect(writeSvg(buildScene(fixtureProject()))).toBe(writeSvg(scene));
     expect(a).not.toMatch(/\d\.\d{3}/);
     const doc = parseXml(a);
-    const ids = Array.from(doc.getElementsByTagName("*")).map((e) => e.getAttribute("id")).filter(Boolean) as string[];
+    const ids = Array.from(doc.getElementsByTagName("*"))
+      .map((e) => e.getAttribute("id"))
+      .filter(Boolean) as string[];
     expect(ids.every((id) => id.startsWith("fig1-"))).toBe(true);
     expect(new Set(ids).size).toBe(ids.length);
     expect(doc.getElementById("fig1-axes")).not.toBeNull();
@@ -62,18 +65,26 @@ describe("document structure", () => {
 
 describe("escaping (W3C XML 1.0 5th ed. §2.4 and §3.3.3; OWASP XSS filter evasion patterns, common practice)", () => {
   test("escapeXml turns the five special characters into entities", () => {
-    expect(escapeXml(`<a href="x" title='y'>&</a>`)).toBe("&lt;a href=&quot;x&quot; title=&apos;y&apos;&gt;&amp;&lt;/a&gt;");
+    expect(escapeXml(`<a href="x" title='y'>&</a>`)).toBe(
+      "&lt;a href=&quot;x&quot; title=&apos;y&apos;&gt;&amp;&lt;/a&gt;",
+    );
   });
 
   test("hostile labels, title and metadata come out as literal text; the file stays inert and parses", () => {
     const p = fixtureProject();
     p.models = INJECTION_CORPUS.map((label, i) => model({ id: `m${i}`, label, eOverNMin: String(i) }));
     p.curves = INJECTION_CORPUS.map((label, i) =>
-      curve({ id: `c${i}"><x`, label, role: "projection", massEv: Float64Array.from([1e-6 * (i + 1), 2e-6 * (i + 1)]), gInvGeV: Float64Array.from([1e-13, 2e-13]) }),
+      curve({
+        id: `c${i}"><x`,
+        label,
+        role: "projection",
+        massEv: Float64Array.from([1e-6 * (i + 1), 2e-6 * (i + 1)]),
+        gInvGeV: Float64Array.from([1e-13, 2e-13]),
+      }),
     );
     p.figure.title = '<script>alert("t")</script>';
     p.figure.legend = "top-left";
-    const metadata = 'project]]><script>alert(1)</script><!-- & "q" \'a\'';
+    const metadata = "project]]><script>alert(1)</script><!-- & \"q\" 'a'";
     const svg = writeSvg(buildScene(p), { metadata });
     const doc = parseXml(svg);
     // A label "javascript:…" is kept verbatim in data-legend-entry: user agents never interpret custom data

@@ -1,7 +1,18 @@
 // Checks of the log axes: decade labels with real superscripts and minus signs, minor ticks at log10(k),
 // label thinning, narrow ranges, and the f_a and frequency top axes against published constants.
 import { describe, expect, test } from "vitest";
-import { buildScene, logTicks, frequencyUnit, massToX, xToMass, yToPx, pxToY, decadeLabelStep, runsWidthPx, type LogTick } from "../../src/plot/index";
+import {
+  buildScene,
+  logTicks,
+  frequencyUnit,
+  massToX,
+  xToMass,
+  yToPx,
+  pxToY,
+  decadeLabelStep,
+  runsWidthPx,
+  type LogTick,
+} from "../../src/plot/index";
 import { fixtureProject, rng, textNodes, textOf } from "./fixture";
 
 const opts = (pxPerDecade: number) => ({ pxPerDecade, labelExtentPx: () => 20 });
@@ -61,7 +72,9 @@ describe("decade ticks", () => {
 
   test("a range under one decade gets labels at 2× and 5×, written 2×10⁻⁶ (ISO 80000-1 multiplication sign)", () => {
     const ticks = logTicks(1.5e-6, 8e-6, opts(600));
-    const texts = labelled(ticks).map((t) => (t.label ?? []).map((r) => (r.shift === "sup" ? `^${r.text}` : r.text)).join(""));
+    const texts = labelled(ticks).map((t) =>
+      (t.label ?? []).map((r) => (r.shift === "sup" ? `^${r.text}` : r.text)).join(""),
+    );
     expect(texts).toEqual(["2×10^\u22126", "5×10^\u22126"]);
     expect(labelled(ticks).every((t) => t.value >= 1.5e-6 && t.value <= 8e-6)).toBe(true);
   });

@@ -4,7 +4,7 @@
 // DOMException when the new value does not fit.
 import { afterEach, beforeEach, describe, expect, test, vi } from "vitest";
 import { createAxbandStore, type AxbandStore } from "../../src/ui/store";
-import { emptyProject } from "../../src/data/defaults";
+import { emptyProject } from "../../src/project/defaults";
 import {
   STORAGE_KEY,
   STORAGE_PROBLEM,
@@ -18,7 +18,7 @@ import {
   joinChunks,
   chunkKey,
 } from "../../src/ui/store/autosave";
-import type { Curve } from "../../src/data/types";
+import type { Curve } from "../../src/project/types";
 
 class MemoryStorage implements KeyValueStorage {
   items = new Map<string, string>();
@@ -211,7 +211,12 @@ describe("restoring", () => {
     auto.stop();
     const next = createAxbandStore();
     let cleared = false;
-    await initProject(next, { local, curves, fragment: "v1.this-is-not-a-valid-link", clearFragment: () => (cleared = true) });
+    await initProject(next, {
+      local,
+      curves,
+      fragment: "v1.this-is-not-a-valid-link",
+      clearFragment: () => (cleared = true),
+    });
     expect(next.getState().project.models.some((m) => m.label === "mine")).toBe(true);
     const alerts = next.getState().ui.messages.filter((m) => m.kind === "alert");
     expect(alerts).toHaveLength(1);
@@ -263,7 +268,10 @@ describe("full or missing storage", () => {
 describe("chunked curve records (IndexedDB layout)", () => {
   test("split and join give back the same numbers, for sizes around the chunk size", () => {
     for (const n of [0, 1, 9, 10, 11, 35]) {
-      const data = { massEv: Float64Array.from({ length: n }, (_, i) => 1e-6 * (1 + i)), gInvGeV: Float64Array.from({ length: n }, (_, i) => 1e-13 / (1 + i)) };
+      const data = {
+        massEv: Float64Array.from({ length: n }, (_, i) => 1e-6 * (1 + i)),
+        gInvGeV: Float64Array.from({ length: n }, (_, i) => 1e-13 / (1 + i)),
+      };
       const { head, chunks } = splitChunks(data, 10);
       expect(head).toEqual({ v: 1, length: n, chunks: Math.ceil(n / 10) });
       expect(chunks.every((c) => c.massEv.length <= 10 && c.massEv.buffer !== data.massEv.buffer)).toBe(true);
@@ -274,12 +282,17 @@ describe("chunked curve records (IndexedDB layout)", () => {
   });
 
   test("a missing or damaged chunk reads as missing, never as wrong data", () => {
-    const data = { massEv: Float64Array.from({ length: 25 }, (_, i) => i + 1), gInvGeV: Float64Array.from({ length: 25 }, (_, i) => i + 2) };
+    const data = {
+      massEv: Float64Array.from({ length: 25 }, (_, i) => i + 1),
+      gInvGeV: Float64Array.from({ length: 25 }, (_, i) => i + 2),
+    };
     const { head, chunks } = splitChunks(data, 10);
     expect(joinChunks(head, chunks.slice(0, 2))).toBeUndefined();
     expect(joinChunks(head, [chunks[0], undefined, chunks[2]])).toBeUndefined();
     expect(joinChunks({ ...head, length: 24 }, chunks)).toBeUndefined();
-    expect(joinChunks(head, [chunks[0], { massEv: chunks[1].massEv, gInvGeV: new Float64Array(3) }, chunks[2]])).toBeUndefined();
+    expect(
+      joinChunks(head, [chunks[0], { massEv: chunks[1].massEv, gInvGeV: new Float64Array(3) }, chunks[2]]),
+    ).toBeUndefined();
   });
 
   test("chunk keys sort in chunk order after the curve's own key and before any other id", () => {

@@ -11,8 +11,24 @@ import { captureDownloads, useProject } from "./export-helpers";
 
 function project() {
   const p = emptyProject("curves test");
-  const a = newCurve({ id: "c-a", label: "Demo A (invented)", massEv: new Float64Array([1e-6, 2e-6, 4e-6]), gInvGeV: new Float64Array([1e-13, 2e-13, 3e-13]) }, p);
-  const b = newCurve({ id: "c-b", label: "Demo B (invented)", massEv: new Float64Array([1e-5, 2e-5]), gInvGeV: new Float64Array([5e-13, 6e-13]) }, { curves: [a] });
+  const a = newCurve(
+    {
+      id: "c-a",
+      label: "Demo A (invented)",
+      massEv: new Float64Array([1e-6, 2e-6, 4e-6]),
+      gInvGeV: new Float64Array([1e-13, 2e-13, 3e-13]),
+    },
+    p,
+  );
+  const b = newCurve(
+    {
+      id: "c-b",
+      label: "Demo B (invented)",
+      massEv: new Float64Array([1e-5, 2e-5]),
+      gInvGeV: new Float64Array([5e-13, 6e-13]),
+    },
+    { curves: [a] },
+  );
   return { ...p, curves: [a, b] };
 }
 

@@ -2,7 +2,7 @@
 // click) in jsdom, which has no URL.createObjectURL, and resets the app store to a given project.
 import { vi } from "vitest";
 import { useAxband } from "../../src/ui/store";
-import type { Project } from "../../src/data/types";
+import type { Project } from "../../src/project/types";
 
 export interface CapturedDownload {
   fileName: string;

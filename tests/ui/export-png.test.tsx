@@ -1,6 +1,6 @@
 // PNG export of the export menu in jsdom, with the browser's rasteriser replaced by resvg (jsdom has no
 // canvas): the SVG handed to the rasteriser is the figure thinned for the PNG's pixels, two columns per PNG
-// pixel (rasterResolution in src/plot/figure-file.ts, the command-line renderer's rule), without the embedded
+// pixel (rasterResolution in src/formats/figure-file.ts, the command-line renderer's rule), without the embedded
 // project, and the downloaded PNG has the pixel size and the dpi of the choice. Sources: 1 in = 2.54 cm
 // exactly (international inch, 1959); 96 CSS px per inch (W3C CSS Values and Units Level 3); pHYs stores
 // pixels per metre with unit specifier 1 (PNG specification, ISO/IEC 15948:2004, §11.3.5.3); thinning to
@@ -12,10 +12,10 @@ import { ExportMenu } from "../../src/ui/export/ExportMenu";
 import { pngFigure, presetSvgSize, rasteriseSvg, svgSize } from "../../src/ui/export/png";
 import { useAxband } from "../../src/ui/store";
 import { defaultProject, newCurve } from "../../src/data";
-import type { Project } from "../../src/data/types";
-import { AXBAND_PROJECT_NS, EXPORT_RESOLUTION, exportFigureSvg, rasterResolution } from "../../src/plot/figure-file";
+import type { Project } from "../../src/project/types";
+import { AXBAND_PROJECT_NS, EXPORT_RESOLUTION, exportFigureSvg, rasterResolution } from "../../src/formats/figure-file";
 import { presetOf } from "../../src/plot/layout";
-import { pngChunksValid, readPngDpi, readPngSize } from "../../src/plot/png-meta";
+import { pngChunksValid, readPngDpi, readPngSize } from "../../src/formats/png-meta";
 import { captureDownloads, useProject, type CapturedDownload } from "./export-helpers";
 
 // The browser's Image + canvas rasteriser, replaced by resvg at the requested width (the height follows
@@ -25,7 +25,18 @@ vi.mock("../../src/ui/export/png", async (importOriginal) => {
   return {
     ...actual,
     rasteriseSvg: vi.fn((svg: string, widthPx: number) =>
-      Promise.resolve(new Uint8Array(new Resvg(svg, { fitTo: { mode: "width", value: widthPx }, background: "#ffffff", font: { loadSystemFonts: false }, logLevel: "off" }).render().asPng())),
+      Promise.resolve(
+        new Uint8Array(
+          new Resvg(svg, {
+            fitTo: { mode: "width", value: widthPx },
+            background: "#ffffff",
+            font: { loadSystemFonts: false },
+            logLevel: "off",
+          })
+            .render()
+            .asPng(),
+        ),
+      ),
     ),
   };
 });
@@ -65,7 +76,9 @@ async function bytesOf(d: CapturedDownload): Promise<Uint8Array> {
   });
 }
 
-async function exportPng(scale: "1x" | "2x" | "300dpi"): Promise<{ svg: string; widthPx: number; heightPx: number; png: Uint8Array; fileName: string }> {
+async function exportPng(
+  scale: "1x" | "2x" | "300dpi",
+): Promise<{ svg: string; widthPx: number; heightPx: number; png: Uint8Array; fileName: string }> {
   const downloads = captureDownloads();
   render(<ExportMenu />);
   fireEvent.click(screen.getByTestId("export-menu"));
@@ -88,7 +101,9 @@ describe("PNG export", () => {
     const { svg, widthPx, heightPx, png, fileName } = await exportPng("300dpi");
     const project = useAxband.getState().project;
     expect(rasterResolution(300)).toBeCloseTo((2 * 300) / 96, 12);
-    expect(svg).toBe(exportFigureSvg(project, { preset: "single-column", embedProject: false, resolution: rasterResolution(300) }));
+    expect(svg).toBe(
+      exportFigureSvg(project, { preset: "single-column", embedProject: false, resolution: rasterResolution(300) }),
+    );
     expect(svg).not.toContain(AXBAND_PROJECT_NS);
     expect(svg).not.toContain("<metadata>");
     // 8.6 cm × 6.45 cm at 300 dpi.
@@ -114,7 +129,9 @@ describe("PNG export", () => {
     const dpi = widthPx / widthIn;
     expect(widthPx).toBe(Math.round(presetOf(project.figure).widthPx * 2));
     expect(dpi).toBeCloseTo(192, 0);
-    expect(svg).toBe(exportFigureSvg(project, { preset: "single-column", embedProject: false, resolution: rasterResolution(dpi) }));
+    expect(svg).toBe(
+      exportFigureSvg(project, { preset: "single-column", embedProject: false, resolution: rasterResolution(dpi) }),
+    );
     expect(svg).not.toContain(AXBAND_PROJECT_NS);
     expect(readPngSize(png).widthPx).toBe(widthPx);
     expect(readPngDpi(png)?.pxPerUnitX).toBe(Math.round(dpi / 0.0254));

@@ -8,7 +8,7 @@ import { ExportMenu } from "../../src/ui/export/ExportMenu";
 import { pngTarget, svgSize } from "../../src/ui/export/png";
 import { useAxband } from "../../src/ui/store";
 import { defaultProject } from "../../src/data";
-import { exportFigureSvg, extractProjectFromSvg } from "../../src/plot/figure-file";
+import { exportFigureSvg, extractProjectFromSvg } from "../../src/formats/figure-file";
 import { captureDownloads, useProject } from "./export-helpers";
 
 beforeEach(() => useProject({ ...defaultProject(), name: "Export test" }));
@@ -71,7 +71,11 @@ describe("PNG sizes", () => {
     expect(pngTarget(s, "1x")).toMatchObject({ widthPx: 325, heightPx: 244 });
     expect(pngTarget(s, "2x")).toMatchObject({ widthPx: 650, heightPx: 488 });
     const t = pngTarget(s, "300dpi");
-    expect(t).toMatchObject({ widthPx: Math.round((8.6 / 2.54) * 300), heightPx: Math.round((6.45 / 2.54) * 300), dpi: 300 });
+    expect(t).toMatchObject({
+      widthPx: Math.round((8.6 / 2.54) * 300),
+      heightPx: Math.round((6.45 / 2.54) * 300),
+      dpi: 300,
+    });
     // 2× of a scene at 96 px/in is 192 dpi at the physical size.
     expect(pngTarget(s, "2x").dpi).toBeCloseTo(650 / (8.6 / 2.54), 9);
   });

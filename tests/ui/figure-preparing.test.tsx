@@ -11,7 +11,12 @@ import type { PrepareSpec, PreparedTransfer } from "../../src/plot/prepare-trans
 type PrepareFn = (m: Float64Array, g: Float64Array, spec: PrepareSpec) => Promise<boolean>;
 const worker = vi.hoisted(() => ({
   available: true,
-  calls: [] as { massEv: Float64Array; gInvGeV: Float64Array; spec: PrepareSpec; reply: (t: PreparedTransfer | null) => void }[],
+  calls: [] as {
+    massEv: Float64Array;
+    gInvGeV: Float64Array;
+    spec: PrepareSpec;
+    reply: (t: PreparedTransfer | null) => void;
+  }[],
   /** prepareCurve calls that computed (no cached entry) for arrays of at least 50,000 points. */
   computed: [] as { massEv: Float64Array; sorted: boolean }[],
 }));
@@ -32,7 +37,12 @@ vi.mock("../../src/worker/import-client", async (importOriginal) => {
   const { seedPreparedCurve } = await import("../../src/plot/prepare-transfer");
   const prepareInWorker: PrepareFn = (massEv, gInvGeV, spec) =>
     new Promise<boolean>((resolve) => {
-      worker.calls.push({ massEv, gInvGeV, spec, reply: (t) => resolve(!!t && seedPreparedCurve(massEv, gInvGeV, spec.sorted, t)) });
+      worker.calls.push({
+        massEv,
+        gInvGeV,
+        spec,
+        reply: (t) => resolve(!!t && seedPreparedCurve(massEv, gInvGeV, spec.sorted, t)),
+      });
     });
   return { ...actual, importWorkerAvailable: () => worker.available, prepareInWorker };
 });
@@ -41,7 +51,7 @@ vi.mock("../../src/worker/import-client", async (importOriginal) => {
 import { computePrepared } from "../../src/plot/prepare-transfer";
 import { buildScene } from "../../src/plot/scene";
 import { emptyProject, newCurve, serializeForStorage } from "../../src/data";
-import type { Curve, Project } from "../../src/data/types";
+import type { Curve, Project } from "../../src/project/types";
 import { FigureView } from "../../src/ui/figure/FigureView";
 import { HoverReadout } from "../../src/ui/figure/HoverReadout";
 import { useAxband } from "../../src/ui/store";
@@ -77,7 +87,10 @@ function savedProject(project: Project) {
 
 /** What the worker sends back: the same preparation, built from copies of the arrays. */
 function workerReply(c: Curve, spec: PrepareSpec): PreparedTransfer {
-  return computePrepared(c.massEv.slice(), c.gInvGeV.slice(), spec.sorted, { slopes: spec.slopes, closed: spec.closed });
+  return computePrepared(c.massEv.slice(), c.gInvGeV.slice(), spec.sorted, {
+    slopes: spec.slopes,
+    closed: spec.closed,
+  });
 }
 
 const curvePaths = (id: string) => screen.getByTestId("plot").querySelectorAll(`path[data-curve-id="${id}"]`);
@@ -109,7 +122,9 @@ describe("a big curve restored from autosave", () => {
     render(<FigureView />);
     // Not drawn yet, and the figure says why; the store keeps the whole curve for exports and the table.
     expect(curvePaths("big")).toHaveLength(0);
-    expect(screen.getByTestId("figure-preparing")).toHaveTextContent("Preparing curve “Demo big big (invented)” for drawing");
+    expect(screen.getByTestId("figure-preparing")).toHaveTextContent(
+      "Preparing curve “Demo big big (invented)” for drawing",
+    );
     expect(useAxband.getState().project.curves[0].massEv).toBe(restored.massEv);
     expect(worker.computed.filter((c) => c.massEv === restored.massEv)).toEqual([]);
 
@@ -123,11 +138,19 @@ describe("a big curve restored from autosave", () => {
     // The page never computed a preparation of the big arrays; it drew from the seeded one.
     expect(worker.computed).toEqual([]);
     // Drawn exactly as a same-thread preparation of the same data would be (prepare-transfer.ts contract).
-    const fresh = { ...useAxband.getState().project, curves: [{ ...restored, massEv: restored.massEv.slice(), gInvGeV: restored.gInvGeV.slice() }] };
+    const fresh = {
+      ...useAxband.getState().project,
+      curves: [{ ...restored, massEv: restored.massEv.slice(), gInvGeV: restored.gInvGeV.slice() }],
+    };
     const svg = screen.getByTestId("plot").querySelector("svg")!;
     const size = svg.getAttribute("data-scene-size")!.split(",").map(Number);
     const expected = buildScene(fresh, { widthPx: size[0], heightPx: size[1], resolution: 1, physical: false });
-    const d = JSON.stringify(expected.layers.flatMap((l) => l.nodes).filter((n) => n.kind === "path" && n.data?.["curve-id"] === "big").map((n) => (n.kind === "path" ? n.d : "")));
+    const d = JSON.stringify(
+      expected.layers
+        .flatMap((l) => l.nodes)
+        .filter((n) => n.kind === "path" && n.data?.["curve-id"] === "big")
+        .map((n) => (n.kind === "path" ? n.d : "")),
+    );
     expect(JSON.stringify(Array.from(paths).map((p) => p.getAttribute("d")))).toBe(d);
   });
 
@@ -177,7 +200,11 @@ describe("a big curve restored from autosave", () => {
     // Below the threshold a curve is prepared on the page (≤ ~35 ms, under the 50 ms of a long task: W3C
     // Long Tasks API, https://w3c.github.io/longtasks/; the per-point cost is measured, see preparation.ts).
     const small = bigCurve("small");
-    const cut = { ...small, massEv: small.massEv.slice(0, OFF_THREAD_PREPARE_POINTS - 1), gInvGeV: small.gInvGeV.slice(0, OFF_THREAD_PREPARE_POINTS - 1) };
+    const cut = {
+      ...small,
+      massEv: small.massEv.slice(0, OFF_THREAD_PREPARE_POINTS - 1),
+      gInvGeV: small.gInvGeV.slice(0, OFF_THREAD_PREPARE_POINTS - 1),
+    };
     await act(async () => useAxband.getState().addCurves([cut]));
     expect(worker.calls).toHaveLength(1);
     expect(curvePaths("small").length).toBeGreaterThan(0);

@@ -3,7 +3,7 @@
 import { beforeEach, describe, expect, test } from "vitest";
 import { render, screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
-import { defaultProject } from "../../src/data/demo";
+import { defaultProject } from "../../src/project/demo";
 import { FigureSettings } from "../../src/ui/settings/FigureSettings";
 import { useAxband } from "../../src/ui/store";
 import { blankProject, resetStore } from "./helpers";
@@ -17,7 +17,15 @@ describe("Legend setting", () => {
     render(<FigureSettings />);
     const select = screen.getByLabelText("Legend");
     const options = within(select).getAllByRole("option") as HTMLOptionElement[];
-    expect(options.map((o) => o.value)).toEqual(["auto", "top-left", "top-right", "bottom-left", "bottom-right", "outside-right", "hidden"]);
+    expect(options.map((o) => o.value)).toEqual([
+      "auto",
+      "top-left",
+      "top-right",
+      "bottom-left",
+      "bottom-right",
+      "outside-right",
+      "hidden",
+    ]);
     expect(options[0]).toHaveTextContent("best corner (automatic)");
   });
 

@@ -8,10 +8,10 @@ import { Profiler } from "react";
 import { act, fireEvent, render, screen } from "@testing-library/react";
 import { buildScene } from "../../src/plot/scene";
 import { writeSvg } from "../../src/plot/svg";
-import { defaultProject } from "../../src/data/demo";
+import { defaultProject } from "../../src/project/demo";
 import { SceneSvg } from "../../src/ui/figure/SceneSvg";
 import { FigureView, LEGEND_HOLD_MS } from "../../src/ui/figure/FigureView";
-import { newCurve } from "../../src/data/defaults";
+import { newCurve } from "../../src/project/defaults";
 import { ModelsPanel } from "../../src/ui/models/ModelsPanel";
 import { FigureSettings } from "../../src/ui/settings/FigureSettings";
 import { ConstantsPanel } from "../../src/ui/settings/ConstantsPanel";
@@ -53,7 +53,14 @@ describe("screen and export agree", () => {
       "normalized view, frequency top axis, legend outside, a spread, a highlight",
       () => {
         const p = defaultProject();
-        p.figure = { ...p.figure, yView: "normalized", yRange: [1e-2, 1e2], topAxis: "frequency", legend: "outside-right", title: "A <title> & more" };
+        p.figure = {
+          ...p.figure,
+          yView: "normalized",
+          yRange: [1e-2, 1e2],
+          topAxis: "frequency",
+          legend: "outside-right",
+          title: "A <title> & more",
+        };
         p.models[0] = { ...p.models[0], sigmas: 2, lineStyle: "dashed" };
         return p;
       },
@@ -61,9 +68,15 @@ describe("screen and export agree", () => {
   ])("%s: every element and attribute on screen equals the writer's, also after updates in place", (_name, make) => {
     const project = make();
     const opts = { widthPx: 960, heightPx: 540, resolution: 1, physical: false } as const;
-    const scene = buildScene(project, { ...opts, highlight: { massMinEv: 1e-5, massMaxEv: 1e-4, modelId: project.models[0].id } });
+    const scene = buildScene(project, {
+      ...opts,
+      highlight: { massMinEv: 1e-5, massMaxEv: 1e-4, modelId: project.models[0].id },
+    });
     // A different scene first (other range, no highlight, legend elsewhere), so the final one is an update.
-    const other = buildScene({ ...project, figure: { ...project.figure, massRangeEv: [3e-9, 2e-3], legend: "top-left", title: "" } }, opts);
+    const other = buildScene(
+      { ...project, figure: { ...project.figure, massRangeEv: [3e-9, 2e-3], legend: "top-left", title: "" } },
+      opts,
+    );
     const { container, rerender } = render(
       <SceneSvg scene={other} idPrefix="t-">
         <rect data-testid="overlay-mark" />
@@ -116,7 +129,16 @@ describe("FigureView", () => {
     // three decades to the right, the block sits top left and the free corner is top right.
     const p = defaultProject();
     p.models = [];
-    p.curves = [newCurve({ id: "block", label: "Block (invented)", role: "region", keepOrder: true, massEv: Float64Array.from([1e-4, 1e-2, 1e-2, 1e-4]), gInvGeV: Float64Array.from([1e-12, 1e-12, 1e-9, 1e-9]) })];
+    p.curves = [
+      newCurve({
+        id: "block",
+        label: "Block (invented)",
+        role: "region",
+        keepOrder: true,
+        massEv: Float64Array.from([1e-4, 1e-2, 1e-2, 1e-4]),
+        gInvGeV: Float64Array.from([1e-12, 1e-12, 1e-9, 1e-9]),
+      }),
+    ];
     p.figure = { ...p.figure, massRangeEv: [1e-7, 1e-2], yRange: [1e-17, 1e-9], legend: "auto" };
     resetStore(p);
     render(<FigureView />);

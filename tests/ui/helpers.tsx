@@ -1,5 +1,5 @@
 // Test helpers for component tests: a clean app store with a known project before each test.
-import { PROJECT_VERSION, type Project } from "../../src/data/types";
+import { PROJECT_VERSION, type Project } from "../../src/project/types";
 import { useAxband } from "../../src/ui/store";
 
 /** A project with no models or curves and the 2019 constants (c_γ = 1.92, K = 5.691 μeV). */
@@ -8,7 +8,10 @@ export function blankProject(): Project {
   return {
     version: PROJECT_VERSION,
     name: "Test",
-    physics: { ref: "2019", custom: { cGamma: 1.92, cGammaSigma: 0.04, kMuEv: 5.691, kMuEvSigma: 0.051, label: "custom" } },
+    physics: {
+      ref: "2019",
+      custom: { cGamma: 1.92, cGammaSigma: 0.04, kMuEv: 5.691, kMuEvSigma: 0.051, label: "custom" },
+    },
     models: [],
     curves: [],
     figure: { ...base.figure, yView: "coupling" },

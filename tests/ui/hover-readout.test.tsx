@@ -7,7 +7,7 @@ import { beforeEach, describe, expect, test } from "vitest";
 import { act, render, screen } from "@testing-library/react";
 import { HoverReadout } from "../../src/ui/figure/HoverReadout";
 import { curveGAt, curvesAtPoint, insideRegion } from "../../src/ui/figure/hit";
-import { newCurve } from "../../src/data/defaults";
+import { newCurve } from "../../src/project/defaults";
 import { useAxband } from "../../src/ui/store";
 import { blankProject, resetStore } from "./helpers";
 
@@ -16,8 +16,20 @@ const H_EV_S = 4.135667696e-15;
 const ALPHA = 7.2973525693e-3;
 const C_GAMMA = 1.92;
 
-const exclusion = newCurve({ id: "ex", label: "Invented limit", role: "exclusion", massEv: new Float64Array([1e-6, 1e-4]), gInvGeV: new Float64Array([1e-12, 1e-14]) });
-const reach = newCurve({ id: "pr", label: "Invented reach", role: "projection", massEv: new Float64Array([1e-6, 1e-4]), gInvGeV: new Float64Array([1e-15, 1e-15]) });
+const exclusion = newCurve({
+  id: "ex",
+  label: "Invented limit",
+  role: "exclusion",
+  massEv: new Float64Array([1e-6, 1e-4]),
+  gInvGeV: new Float64Array([1e-12, 1e-14]),
+});
+const reach = newCurve({
+  id: "pr",
+  label: "Invented reach",
+  role: "projection",
+  massEv: new Float64Array([1e-6, 1e-4]),
+  gInvGeV: new Float64Array([1e-15, 1e-15]),
+});
 const region = newCurve({
   id: "rg",
   label: "Invented region",
@@ -66,7 +78,9 @@ describe("readout", () => {
     const text = screen.getByTestId("hover-eovern").textContent ?? "";
     expect(text).toContain((C_GAMMA + d).toPrecision(3));
     expect(text).toContain((C_GAMMA - d).toPrecision(3).replace("-", "−"));
-    expect(screen.getByTestId("hover-curves")).toHaveTextContent("excluded by Invented limit; within reach of Invented reach");
+    expect(screen.getByTestId("hover-curves")).toHaveTextContent(
+      "excluded by Invented limit; within reach of Invented reach",
+    );
   });
 
   test("in the normalized view the y value is |E/N − c_γ| and g_aγγ is derived from it", () => {
@@ -77,6 +91,8 @@ describe("readout", () => {
     const g = (ALPHA * 10) / (2 * Math.PI * ((K_MU_EV * 1e6) / 1e-5));
     const m = g / 10 ** Math.floor(Math.log10(g));
     expect(screen.getByTestId("hover-g")).toHaveTextContent(m.toPrecision(3));
-    expect(screen.getByTestId("hover-eovern")).toHaveTextContent(`${(C_GAMMA - 10).toPrecision(3).replace("-", "−")} or ${(C_GAMMA + 10).toPrecision(3)}`);
+    expect(screen.getByTestId("hover-eovern")).toHaveTextContent(
+      `${(C_GAMMA - 10).toPrecision(3).replace("-", "−")} or ${(C_GAMMA + 10).toPrecision(3)}`,
+    );
   });
 });

@@ -9,7 +9,7 @@ import { ImportControls, ImportDialog } from "../../src/ui/importer/ImportDialog
 import { useImport } from "../../src/ui/importer/import-store";
 import { useAxband } from "../../src/ui/store";
 import { defaultProject, emptyProject } from "../../src/data";
-import { exportFigureSvg } from "../../src/plot/figure-file";
+import { exportFigureSvg } from "../../src/formats/figure-file";
 
 function Step() {
   return (
@@ -139,17 +139,25 @@ describe("dropping files on the page", () => {
   test("an exported axband SVG reopens its project with a status message", async () => {
     const saved = { ...defaultProject(), name: "Dropped figure project" };
     render(<Step />);
-    const ev = drop([new File([exportFigureSvg(saved, { embedProject: true })], "figure.svg", { type: "image/svg+xml" })]);
+    const ev = drop([
+      new File([exportFigureSvg(saved, { embedProject: true })], "figure.svg", { type: "image/svg+xml" }),
+    ]);
     expect(ev.defaultPrevented).toBe(true);
     await waitFor(() => expect(useAxband.getState().project.name).toBe("Dropped figure project"));
     expect(useAxband.getState().project.curves.map((c) => c.label)).toEqual(saved.curves.map((c) => c.label));
-    expect(useAxband.getState().ui.messages.at(-1)).toMatchObject({ kind: "status", text: expect.stringContaining("figure.svg") });
+    expect(useAxband.getState().ui.messages.at(-1)).toMatchObject({
+      kind: "status",
+      text: expect.stringContaining("figure.svg"),
+    });
   });
 
   test("a bad project file gives an alert and changes nothing; a dropped CSV opens the import step", async () => {
     render(<Step />);
     const before = useAxband.getState().project;
-    drop([new File(["<svg xmlns='http://www.w3.org/2000/svg'></svg>"], "other.svg"), new File(["1e-6,1e-12\n1e-5,1e-12\n"], "dropped.csv")]);
+    drop([
+      new File(["<svg xmlns='http://www.w3.org/2000/svg'></svg>"], "other.svg"),
+      new File(["1e-6,1e-12\n1e-5,1e-12\n"], "dropped.csv"),
+    ]);
     await waitFor(() => expect(useAxband.getState().ui.messages.at(-1)?.kind).toBe("alert"));
     expect(useAxband.getState().ui.messages.at(-1)?.text).toMatch(/^other\.svg was not opened: .*no axband project/);
     expect(useAxband.getState().project).toBe(before);

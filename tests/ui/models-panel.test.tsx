@@ -19,7 +19,12 @@ describe("typed E/N", () => {
     await user.type(screen.getByTestId("model-eovern"), "8/3");
     await user.click(screen.getByTestId("add-model"));
     expect(models()).toHaveLength(1);
-    expect(models()[0]).toMatchObject({ label: "E/N = 8/3", eOverNMin: "8/3", eOverNMax: "8/3", source: { kind: "typed" } });
+    expect(models()[0]).toMatchObject({
+      label: "E/N = 8/3",
+      eOverNMin: "8/3",
+      eOverNMax: "8/3",
+      source: { kind: "typed" },
+    });
     expect(screen.getByDisplayValue("E/N = 8/3")).toBeInTheDocument();
     expect(screen.getByTestId("model-eovern")).toHaveValue("");
   });

@@ -10,7 +10,15 @@ import { emptyProject, newCurve, newModel, overlapTable, type OverlapKind, type 
 import { gAgg } from "../../src/physics";
 import { defaultOrder, nextSort, sortRows, verdictRank, type SortState } from "../../src/ui/overlap/table-logic";
 
-const ALL_KINDS: OverlapKind[] = ["excluded-whole", "excluded-part", "reach-whole", "reach-part", "inside-whole", "inside-part", "none"];
+const ALL_KINDS: OverlapKind[] = [
+  "excluded-whole",
+  "excluded-part",
+  "reach-whole",
+  "reach-part",
+  "inside-whole",
+  "inside-part",
+  "none",
+];
 
 /** Two models (listed Z before A, so project order and label order differ) against an exclusion, a projection and a region. */
 function project() {
@@ -27,9 +35,21 @@ function project() {
     newModel({ id: "m-a", label: "Alpha band", eOverNMin: "0", eOverNMax: "4" }),
   ];
   p.curves = [
-    newCurve({ id: "c-region", label: "Box (invented)", role: "region", massEv: Float64Array.from([2e-6, 2e-5, 2e-5, 2e-6]), gInvGeV: Float64Array.from([k * 1e-6, k * 1e-6, k * 1e-4, k * 1e-4]) }),
+    newCurve({
+      id: "c-region",
+      label: "Box (invented)",
+      role: "region",
+      massEv: Float64Array.from([2e-6, 2e-5, 2e-5, 2e-6]),
+      gInvGeV: Float64Array.from([k * 1e-6, k * 1e-6, k * 1e-4, k * 1e-4]),
+    }),
     newCurve({ id: "c-excl", label: "Flat limit (invented)", role: "exclusion", massEv: masses, gInvGeV: flat(gExcl) }),
-    newCurve({ id: "c-proj", label: "Flat reach (invented)", role: "projection", massEv: masses, gInvGeV: flat(gProj) }),
+    newCurve({
+      id: "c-proj",
+      label: "Flat reach (invented)",
+      role: "projection",
+      massEv: masses,
+      gInvGeV: flat(gProj),
+    }),
   ];
   return p;
 }
@@ -37,7 +57,8 @@ function project() {
 function indexer(p: ReturnType<typeof project>) {
   const model = new Map(p.models.map((m, i) => [m.id, i]));
   const curve = new Map(p.curves.map((c, i) => [c.id, i]));
-  return (r: OverlapRow) => [verdictRank(r.kind), model.get(r.modelId) ?? -1, curve.get(r.curveId) ?? -1, r.massMinEv] as const;
+  return (r: OverlapRow) =>
+    [verdictRank(r.kind), model.get(r.modelId) ?? -1, curve.get(r.curveId) ?? -1, r.massMinEv] as const;
 }
 
 /** True when the keys of consecutive rows never decrease (lexicographically). */

@@ -8,7 +8,14 @@ import { fireEvent, render, screen, waitFor, within } from "@testing-library/rea
 import { OverlapPanel } from "../../src/ui/overlap/OverlapPanel";
 import { sortRows, verdictText } from "../../src/ui/overlap/table-logic";
 import { useAxband } from "../../src/ui/store";
-import { emptyProject, newCurve, newModel, overlapTable, overlapTableToCsv, overlapTableToMarkdown } from "../../src/data";
+import {
+  emptyProject,
+  newCurve,
+  newModel,
+  overlapTable,
+  overlapTableToCsv,
+  overlapTableToMarkdown,
+} from "../../src/data";
 import { gAgg } from "../../src/physics";
 import { siFormat } from "../../src/ui/format";
 import { captureDownloads, useProject } from "./export-helpers";
@@ -23,7 +30,16 @@ function project() {
   const line = newModel({ id: "m-dfsz", label: "DFSZ-type line", eOverNMin: "8/3" }, p);
   const band = newModel({ id: "m-band", label: "Wide band", eOverNMin: "0", eOverNMax: "4" }, { models: [line] });
   const masses = new Float64Array(41).map((_, i) => M1 * 10 ** (i / 20));
-  const flat = newCurve({ id: "c-flat", label: "Flat limit (invented)", role: "exclusion", massEv: masses, gInvGeV: new Float64Array(41).fill(G) }, p);
+  const flat = newCurve(
+    {
+      id: "c-flat",
+      label: "Flat limit (invented)",
+      role: "exclusion",
+      massEv: masses,
+      gInvGeV: new Float64Array(41).fill(G),
+    },
+    p,
+  );
   return { ...p, models: [line, band], curves: [flat] };
 }
 
@@ -41,7 +57,9 @@ describe("overlap panel", () => {
     const lineRow = expected.find((r) => r.modelId === "m-dfsz" && r.kind === "excluded-whole")!;
     expect(lineRow.massMinEv).toBeCloseTo(1e-5, 15);
     expect(lineRow.massMaxEv).toBeCloseTo(M2, 15);
-    const shown = bodyRows().find((tr) => tr.textContent?.includes("DFSZ-type line") && tr.textContent.includes("excluded"))!;
+    const shown = bodyRows().find(
+      (tr) => tr.textContent?.includes("DFSZ-type line") && tr.textContent.includes("excluded"),
+    )!;
     expect(shown.textContent).toContain(`${siFormat(lineRow.massMinEv, "eV")} – ${siFormat(lineRow.massMaxEv, "eV")}`);
   });
 
@@ -104,7 +122,12 @@ describe("overlap panel", () => {
     expect(await downloads[1].text()).toBe(overlapTableToMarkdown(rows));
     const i = rows.findIndex((r) => r.kind === "excluded-whole");
     fireEvent.click(bodyRows()[i]);
-    expect(useAxband.getState().ui.highlight).toEqual({ massMinEv: rows[i].massMinEv, massMaxEv: rows[i].massMaxEv, modelId: rows[i].modelId, curveId: rows[i].curveId });
+    expect(useAxband.getState().ui.highlight).toEqual({
+      massMinEv: rows[i].massMinEv,
+      massMaxEv: rows[i].massMaxEv,
+      modelId: rows[i].modelId,
+      curveId: rows[i].curveId,
+    });
     expect(bodyRows()[i]).toHaveAttribute("aria-selected", "true");
     fireEvent.click(bodyRows()[i]);
     expect(useAxband.getState().ui.highlight).toBeNull();

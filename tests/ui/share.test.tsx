@@ -6,7 +6,15 @@ import { fireEvent, render, screen, waitFor } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { ProjectMenu } from "../../src/ui/share/ProjectMenu";
 import { useAxband } from "../../src/ui/store";
-import { decodeLink, defaultProject, encodeLink, LINK_MAX_CHARS, newCurve, projectFromFile, projectToFile } from "../../src/data";
+import {
+  decodeLink,
+  defaultProject,
+  encodeLink,
+  LINK_MAX_CHARS,
+  newCurve,
+  projectFromFile,
+  projectToFile,
+} from "../../src/data";
 import { captureDownloads, useProject } from "./export-helpers";
 
 beforeEach(() => useProject(defaultProject()));
@@ -37,7 +45,10 @@ describe("share link", () => {
     // Equal projects encode to the same link (the codec is deterministic), curves included.
     expect(encodeLink(r.project)).toBe(encodeLink(project));
     expect(r.project.curves.map((c) => c.label)).toEqual(project.curves.map((c) => c.label));
-    expect(useAxband.getState().ui.messages.at(-1)).toMatchObject({ kind: "status", text: expect.stringMatching(/^Link copied/) });
+    expect(useAxband.getState().ui.messages.at(-1)).toMatchObject({
+      kind: "status",
+      text: expect.stringMatching(/^Link copied/),
+    });
   });
 
   test("without clipboard access the link is still shown, selected, and the message says so", async () => {
@@ -64,7 +75,9 @@ describe("share link", () => {
     const r = decodeLink(linkField().value.split("#")[1]);
     expect(r.ok && r.project.curves.length).toBe(0);
     expect(r.ok && r.project.models.map((m) => m.label)).toEqual(p.models.map((m) => m.label));
-    expect(useAxband.getState().ui.messages.at(-1)?.text).toMatch(/leaves out .*Big demo scan \(invented\).*project file/);
+    expect(useAxband.getState().ui.messages.at(-1)?.text).toMatch(
+      /leaves out .*Big demo scan \(invented\).*project file/,
+    );
     expect(screen.getByRole("button", { name: "Save the project file instead" })).toBeInTheDocument();
   });
 });
@@ -88,12 +101,18 @@ describe("project files", () => {
     render(<ProjectMenu />);
     fireEvent.click(screen.getByTestId("project-menu"));
     const other = { ...defaultProject(), name: "Other project", curves: [] };
-    await user.upload(screen.getByTestId("open-project"), new File([projectToFile(other)], "other.axband.json", { type: "application/json" }));
+    await user.upload(
+      screen.getByTestId("open-project"),
+      new File([projectToFile(other)], "other.axband.json", { type: "application/json" }),
+    );
     await waitFor(() => expect(useAxband.getState().project.name).toBe("Other project"));
     expect(useAxband.getState().ui.messages.at(-1)).toMatchObject({ kind: "status" });
     fireEvent.click(screen.getByTestId("project-menu"));
     const before = useAxband.getState().project;
-    await user.upload(screen.getByTestId("open-project"), new File(["{ not json"], "broken.axband.json", { type: "application/json" }));
+    await user.upload(
+      screen.getByTestId("open-project"),
+      new File(["{ not json"], "broken.axband.json", { type: "application/json" }),
+    );
     await waitFor(() => expect(useAxband.getState().ui.messages.at(-1)?.kind).toBe("alert"));
     expect(useAxband.getState().ui.messages.at(-1)?.text).toMatch(/broken\.axband\.json/);
     expect(useAxband.getState().project).toBe(before);

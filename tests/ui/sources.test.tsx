@@ -17,8 +17,25 @@ const BIB = `@article{Demo2099,
 
 beforeEach(() => {
   const p = defaultProject();
-  const cited = newCurve({ id: "c-bib", label: "Cited demo (invented)", massEv: new Float64Array([1e-6, 1e-5]), gInvGeV: new Float64Array([1e-12, 1e-12]), citation: BIB }, p);
-  const plain = newCurve({ id: "c-uncited", label: "Uncited demo (invented)", massEv: new Float64Array([1e-6, 1e-5]), gInvGeV: new Float64Array([1e-11, 1e-11]) }, p);
+  const cited = newCurve(
+    {
+      id: "c-bib",
+      label: "Cited demo (invented)",
+      massEv: new Float64Array([1e-6, 1e-5]),
+      gInvGeV: new Float64Array([1e-12, 1e-12]),
+      citation: BIB,
+    },
+    p,
+  );
+  const plain = newCurve(
+    {
+      id: "c-uncited",
+      label: "Uncited demo (invented)",
+      massEv: new Float64Array([1e-6, 1e-5]),
+      gInvGeV: new Float64Array([1e-11, 1e-11]),
+    },
+    p,
+  );
   useProject({ ...p, curves: [...p.curves, cited, plain] });
 });
 afterEach(() => vi.restoreAllMocks());

@@ -3,8 +3,8 @@
 // the redo stack; one undo reverts one user step; a burst of zoom steps is one step.
 import { afterEach, beforeEach, describe, expect, test, vi } from "vitest";
 import { createAxbandStore, HISTORY_LIMIT, COALESCE_MS, type AxbandStore } from "../../src/ui/store";
-import { emptyProject } from "../../src/data/defaults";
-import type { Curve } from "../../src/data/types";
+import { emptyProject } from "../../src/project/defaults";
+import type { Curve } from "../../src/project/types";
 
 let store: AxbandStore;
 beforeEach(() => {
@@ -77,7 +77,9 @@ describe("undo and redo", () => {
     const other = { ...original, name: "Opened from a link", models: [] };
     store.getState().replaceProject(other, "Project opened from the link.");
     expect(store.getState().project).toBe(other);
-    expect(store.getState().ui.messages).toEqual([expect.objectContaining({ kind: "status", text: "Project opened from the link." })]);
+    expect(store.getState().ui.messages).toEqual([
+      expect.objectContaining({ kind: "status", text: "Project opened from the link." }),
+    ]);
     store.getState().undo();
     expect(store.getState().project).toBe(original);
   });

@@ -3,7 +3,7 @@
 // chosen units. Every edit goes through the store, so it is undoable and autosaved.
 import { useState } from "react";
 import { useShallow } from "zustand/react/shallow";
-import type { Curve, CurveRole, LineStyle } from "../../data/types";
+import type { Curve, CurveRole, LineStyle } from "../../project/types";
 import { LINE_STYLES, ROLES } from "./roles";
 import { ImportControls } from "../importer/ImportDialog";
 import { selectCurve, selectCurveIds, useAxband } from "../store";
@@ -31,7 +31,8 @@ function CurveCard({ id, index, count }: { id: string; index: number; count: num
   const [csvRescaled, setCsvRescaled] = useState(true);
   if (!curve) return null;
   const rs = curve.rescale;
-  const setRescale = (patch: Partial<Curve["rescale"]>) => updateCurve(id, { rescale: { ...curve.rescale, ...patch } }, { coalesceKey: `curve:${id}:rescale` });
+  const setRescale = (patch: Partial<Curve["rescale"]>) =>
+    updateCurve(id, { rescale: { ...curve.rescale, ...patch } }, { coalesceKey: `curve:${id}:rescale` });
   const points = curve.massEv.length;
 
   return (
@@ -59,13 +60,30 @@ function CurveCard({ id, index, count }: { id: string; index: number; count: num
           onChange={(e) => updateCurve(id, { visible: e.target.checked })}
         />
         <span className="ax-curve-order">
-          <button type="button" className="icon" aria-label={`Move ${curve.label} up`} disabled={index === 0} onClick={() => moveCurve(id, -1)}>
+          <button
+            type="button"
+            className="icon"
+            aria-label={`Move ${curve.label} up`}
+            disabled={index === 0}
+            onClick={() => moveCurve(id, -1)}
+          >
             ↑
           </button>
-          <button type="button" className="icon" aria-label={`Move ${curve.label} down`} disabled={index === count - 1} onClick={() => moveCurve(id, 1)}>
+          <button
+            type="button"
+            className="icon"
+            aria-label={`Move ${curve.label} down`}
+            disabled={index === count - 1}
+            onClick={() => moveCurve(id, 1)}
+          >
             ↓
           </button>
-          <button type="button" className="icon danger" aria-label={`Remove ${curve.label}`} onClick={() => removeCurve(id)}>
+          <button
+            type="button"
+            className="icon danger"
+            aria-label={`Remove ${curve.label}`}
+            onClick={() => removeCurve(id)}
+          >
             ×
           </button>
         </span>
@@ -73,7 +91,11 @@ function CurveCard({ id, index, count }: { id: string; index: number; count: num
       <div className="ax-curve-row">
         <label className="ax-field">
           <span>Role</span>
-          <select aria-label="Curve role" value={curve.role} onChange={(e) => updateCurve(id, { role: e.target.value as CurveRole })}>
+          <select
+            aria-label="Curve role"
+            value={curve.role}
+            onChange={(e) => updateCurve(id, { role: e.target.value as CurveRole })}
+          >
             {ROLES.map((r) => (
               <option key={r.value} value={r.value}>
                 {r.label}
@@ -83,7 +105,11 @@ function CurveCard({ id, index, count }: { id: string; index: number; count: num
         </label>
         <label className="ax-field">
           <span>Line</span>
-          <select aria-label="Line style" value={curve.lineStyle} onChange={(e) => updateCurve(id, { lineStyle: e.target.value as LineStyle })}>
+          <select
+            aria-label="Line style"
+            value={curve.lineStyle}
+            onChange={(e) => updateCurve(id, { lineStyle: e.target.value as LineStyle })}
+          >
             {LINE_STYLES.map((s) => (
               <option key={s} value={s}>
                 {s}
@@ -101,7 +127,9 @@ function CurveCard({ id, index, count }: { id: string; index: number; count: num
             aria-label="Fill opacity"
             value={curve.fillOpacity}
             disabled={curve.role === "projection"}
-            onChange={(e) => updateCurve(id, { fillOpacity: Number(e.target.value) }, { coalesceKey: `curve:${id}:fill` })}
+            onChange={(e) =>
+              updateCurve(id, { fillOpacity: Number(e.target.value) }, { coalesceKey: `curve:${id}:fill` })
+            }
           />
         </label>
       </div>
@@ -112,19 +140,42 @@ function CurveCard({ id, index, count }: { id: string; index: number; count: num
       <details className="ax-curve-more">
         <summary>Rescale (haloscope limits)</summary>
         <p className="ax-hint">
-          A limit that assumed a local dark-matter density ρ₀ becomes g·√(ρ₀/ρ) at density ρ, and g/√f when axions are a fraction f
-          of the dark matter.
+          A limit that assumed a local dark-matter density ρ₀ becomes g·√(ρ₀/ρ) at density ρ, and g/√f when axions are a
+          fraction f of the dark matter.
         </p>
         <div className="ax-curve-row">
-          <NumberField label="ρ assumed" unit="GeV/cm³" value={rs.rhoAssumed} validate={positive} onCommit={(n) => setRescale({ rhoAssumed: n })} />
-          <NumberField label="ρ shown" unit="GeV/cm³" value={rs.rhoShown} validate={positive} onCommit={(n) => setRescale({ rhoShown: n })} />
-          <NumberField label="axion fraction f" value={rs.fraction} validate={fractionRule} onCommit={(n) => setRescale({ fraction: n })} />
+          <NumberField
+            label="ρ assumed"
+            unit="GeV/cm³"
+            value={rs.rhoAssumed}
+            validate={positive}
+            onCommit={(n) => setRescale({ rhoAssumed: n })}
+          />
+          <NumberField
+            label="ρ shown"
+            unit="GeV/cm³"
+            value={rs.rhoShown}
+            validate={positive}
+            onCommit={(n) => setRescale({ rhoShown: n })}
+          />
+          <NumberField
+            label="axion fraction f"
+            value={rs.fraction}
+            validate={fractionRule}
+            onCommit={(n) => setRescale({ fraction: n })}
+          />
         </div>
       </details>
       <details className="ax-curve-more">
         <summary>Export as CSV</summary>
         <div className="ax-curve-row">
-          <ChoiceField label="Mass unit" ariaLabel="CSV mass unit" value={csvMassUnit} choices={MASS_UNIT_OPTIONS} onChange={(v) => setCsvMassUnit(v as MassUnit)} />
+          <ChoiceField
+            label="Mass unit"
+            ariaLabel="CSV mass unit"
+            value={csvMassUnit}
+            choices={MASS_UNIT_OPTIONS}
+            onChange={(v) => setCsvMassUnit(v as MassUnit)}
+          />
           <ChoiceField
             label="Coupling"
             ariaLabel="CSV coupling unit"
@@ -135,7 +186,13 @@ function CurveCard({ id, index, count }: { id: string; index: number; count: num
           {csvCouplingUnit === "model-line" ? (
             <label className="ax-field">
               <span>of the line E/N =</span>
-              <input type="text" size={6} aria-label="CSV model line E/N" value={csvEOverN} onChange={(e) => setCsvEOverN(e.target.value)} />
+              <input
+                type="text"
+                size={6}
+                aria-label="CSV model line E/N"
+                value={csvEOverN}
+                onChange={(e) => setCsvEOverN(e.target.value)}
+              />
             </label>
           ) : null}
           {isRescaled(curve.rescale) ? (
@@ -148,10 +205,16 @@ function CurveCard({ id, index, count }: { id: string; index: number; count: num
             type="button"
             onClick={() => {
               try {
-                const gInvGeV = isRescaled(curve.rescale) && csvRescaled ? rescaleCurve(curve.gInvGeV, curve.rescale) : curve.gInvGeV;
+                const gInvGeV =
+                  isRescaled(curve.rescale) && csvRescaled ? rescaleCurve(curve.gInvGeV, curve.rescale) : curve.gInvGeV;
                 const text = curveToCsv(
                   { massEv: curve.massEv, gInvGeV, label: curve.label, citation: curve.citation },
-                  { massUnit: csvMassUnit, couplingUnit: csvCouplingUnit, modelEOverN: csvCouplingUnit === "model-line" ? csvEOverN : undefined, physics: physicsOptsOf(physics) },
+                  {
+                    massUnit: csvMassUnit,
+                    couplingUnit: csvCouplingUnit,
+                    modelEOverN: csvCouplingUnit === "model-line" ? csvEOverN : undefined,
+                    physics: physicsOptsOf(physics),
+                  },
                 );
                 const name = curveCsvFileName(curve.label);
                 downloadText(name, text, "text/csv");

@@ -1,5 +1,5 @@
 // Choices shared by the import step and the curves panel: curve roles (DESIGN.md §2) and line styles.
-import type { CurveRole, LineStyle } from "../../data/types";
+import type { CurveRole, LineStyle } from "../../project/types";
 
 export const ROLES: { value: CurveRole; label: string }[] = [
   { value: "exclusion", label: "exclusion (filled above)" },

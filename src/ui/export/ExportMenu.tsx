@@ -3,11 +3,11 @@
 // file (drawn from an SVG thinned for the PNG's pixels, without the project), and the model lines and bands
 // as CSV. All files come from the same scene builder as the screen.
 import { useState } from "react";
-import type { SizePreset } from "../../data/types";
-import { embedCapText, exportFigureSvgWithInfo } from "../../plot/figure-file";
+import type { SizePreset } from "../../project/types";
+import { embedCapText, exportFigureSvgWithInfo } from "../../formats/figure-file";
 import { PRESETS, presetOf, CUSTOM_MM_LIMITS } from "../../plot/layout";
-import { modelsToCsv } from "../../plot/model-csv";
-import { setPngDpi } from "../../plot/png-meta";
+import { modelsToCsv } from "../../formats/model-csv";
+import { setPngDpi } from "../../formats/png-meta";
 import { useAxband } from "../store";
 import { downloadBlob, downloadText, safeFileName } from "./download";
 import { pngFigure, rasteriseSvg, type PngScale } from "./png";
@@ -31,7 +31,10 @@ const PNG_SCALES: { value: PngScale; label: string }[] = [
 
 /** Base name of exported figure files: the project name, or "axband-figure". */
 export function figureBaseName(projectName: string): string {
-  return safeFileName(projectName.trim() === "" || projectName === "Untitled" ? "axband-figure" : projectName, "axband-figure");
+  return safeFileName(
+    projectName.trim() === "" || projectName === "Untitled" ? "axband-figure" : projectName,
+    "axband-figure",
+  );
 }
 
 /** The export controls. */
@@ -43,7 +46,8 @@ export function ExportMenu() {
   const [busy, setBusy] = useState(false);
   const [open, setOpen] = useState(false);
   const size = presetOf(figure);
-  const mmRule = (n: number) => (n >= CUSTOM_MM_LIMITS[0] && n <= CUSTOM_MM_LIMITS[1] ? null : `${CUSTOM_MM_LIMITS[0]}–${CUSTOM_MM_LIMITS[1]} mm`);
+  const mmRule = (n: number) =>
+    n >= CUSTOM_MM_LIMITS[0] && n <= CUSTOM_MM_LIMITS[1] ? null : `${CUSTOM_MM_LIMITS[0]}–${CUSTOM_MM_LIMITS[1]} mm`;
 
   const svgNow = () => {
     const project = useAxband.getState().project;
@@ -77,7 +81,10 @@ export function ExportMenu() {
       const png = setPngDpi(await rasteriseSvg(target.svg, target.widthPx, target.heightPx), target.dpi);
       const name = `${figureBaseName(project.name)}${pngScale === "1x" ? "" : `@${pngScale}`}.png`;
       downloadBlob(name, new Blob([png as BlobPart], { type: "image/png" }));
-      pushMessage("status", `Saved ${name} (${target.widthPx} × ${target.heightPx} px, ${Math.round(target.dpi)} dpi).`);
+      pushMessage(
+        "status",
+        `Saved ${name} (${target.widthPx} × ${target.heightPx} px, ${Math.round(target.dpi)} dpi).`,
+      );
     } catch (e) {
       pushMessage("alert", `The PNG could not be made: ${e instanceof Error ? e.message : String(e)}`);
     } finally {
@@ -102,14 +109,24 @@ export function ExportMenu() {
 
   return (
     <span className="ax-header-group ax-panel ax-export">
-      <button type="button" className="primary" data-testid="export-svg" title={`Download the figure as SVG (${size.label})`} onClick={saveSvg}>
+      <button
+        type="button"
+        className="primary"
+        data-testid="export-svg"
+        title={`Download the figure as SVG (${size.label})`}
+        onClick={saveSvg}
+      >
         Export SVG
       </button>
       <Popover label="▾" ariaLabel="More export options" open={open} onOpenChange={setOpen} testId="export-menu">
         <section>
           <h3>Figure size</h3>
           <div className="ax-export-row">
-            <select aria-label="Figure size preset" value={figure.preset} onChange={(e) => setFigure({ preset: e.target.value as SizePreset })}>
+            <select
+              aria-label="Figure size preset"
+              value={figure.preset}
+              onChange={(e) => setFigure({ preset: e.target.value as SizePreset })}
+            >
               {PRESET_OPTIONS.map((p) => (
                 <option key={p.value} value={p.value}>
                   {p.label}
@@ -122,15 +139,31 @@ export function ExportMenu() {
           </div>
           {figure.preset === "custom" ? (
             <div className="ax-export-row">
-              <NumberField label="width" unit="mm" value={figure.customWidthMm} validate={mmRule} onCommit={(n) => setFigure({ customWidthMm: n }, { coalesceKey: "figure:customWidthMm" })} />
-              <NumberField label="height" unit="mm" value={figure.customHeightMm} validate={mmRule} onCommit={(n) => setFigure({ customHeightMm: n }, { coalesceKey: "figure:customHeightMm" })} />
+              <NumberField
+                label="width"
+                unit="mm"
+                value={figure.customWidthMm}
+                validate={mmRule}
+                onCommit={(n) => setFigure({ customWidthMm: n }, { coalesceKey: "figure:customWidthMm" })}
+              />
+              <NumberField
+                label="height"
+                unit="mm"
+                value={figure.customHeightMm}
+                validate={mmRule}
+                onCommit={(n) => setFigure({ customHeightMm: n }, { coalesceKey: "figure:customHeightMm" })}
+              />
             </div>
           ) : null}
         </section>
         <section>
           <h3>Image</h3>
           <div className="ax-export-row">
-            <select aria-label="PNG resolution" value={pngScale} onChange={(e) => setPngScale(e.target.value as PngScale)}>
+            <select
+              aria-label="PNG resolution"
+              value={pngScale}
+              onChange={(e) => setPngScale(e.target.value as PngScale)}
+            >
               {PNG_SCALES.map((s) => (
                 <option key={s.value} value={s.value}>
                   {s.label}

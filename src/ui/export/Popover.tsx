@@ -33,7 +33,14 @@ export function Popover({ label, open, onOpenChange, children, ariaLabel, testId
   }, [open, onOpenChange]);
   return (
     <span className="ax-popover" ref={root}>
-      <button type="button" aria-expanded={open} aria-controls={id} aria-label={ariaLabel} data-testid={testId} onClick={() => onOpenChange(!open)}>
+      <button
+        type="button"
+        aria-expanded={open}
+        aria-controls={id}
+        aria-label={ariaLabel}
+        data-testid={testId}
+        onClick={() => onOpenChange(!open)}
+      >
         {label}
       </button>
       {open ? (

@@ -9,8 +9,11 @@ export interface DownloadResult {
 
 /** Keeps a file name safe on every file system: no path separators, no control characters, not empty. */
 export function safeFileName(name: string, fallback = "axband"): string {
-  // eslint-disable-next-line no-control-regex
-  const cleaned = name.replace(/[\u0000-\u001f\u007f/\\:*?"<>|]+/g, "-").replace(/^[.\s-]+|[.\s]+$/g, "").trim();
+  const cleaned = name
+    // eslint-disable-next-line no-control-regex
+    .replace(/[\u0000-\u001f\u007f/\\:*?"<>|]+/g, "-")
+    .replace(/^[.\s-]+|[.\s]+$/g, "")
+    .trim();
   return (cleaned || fallback).slice(0, 120);
 }
 

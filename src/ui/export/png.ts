@@ -1,8 +1,8 @@
 // Rasterises an exported SVG figure to PNG in the browser (Image of a blob URL drawn into a canvas), works
 // out the pixel size for 1×, 2× and 300 dpi from the SVG's viewBox and physical size, and builds the SVG a
 // PNG is drawn from: thinned for the PNG's pixels, without the embedded project.
-import type { Project } from "../../data/types";
-import { exportFigureSvg, rasterResolution } from "../../plot/figure-file";
+import type { Project } from "../../project/types";
+import { exportFigureSvg, rasterResolution } from "../../formats/figure-file";
 import { presetOf, type Preset } from "../../plot/layout";
 
 /** PNG resolutions offered by the export menu. */
@@ -17,7 +17,15 @@ export interface SvgSize {
   heightIn: number | null;
 }
 
-const INCHES_PER_UNIT: Record<string, number> = { cm: 1 / 2.54, mm: 1 / 25.4, in: 1, pt: 1 / 72, pc: 1 / 6, px: 1 / 96, "": 1 / 96 };
+const INCHES_PER_UNIT: Record<string, number> = {
+  cm: 1 / 2.54,
+  mm: 1 / 25.4,
+  in: 1,
+  pt: 1 / 72,
+  pc: 1 / 6,
+  px: 1 / 96,
+  "": 1 / 96,
+};
 
 function lengthInches(value: string | null): number | null {
   if (!value) return null;
@@ -37,7 +45,10 @@ function rootAttribute(svgText: string, name: string): string | null {
 
 /** Reads the viewBox and the physical width/height of an SVG document's root element. */
 export function svgSize(svgText: string): SvgSize {
-  const vb = (rootAttribute(svgText, "viewBox") ?? "").trim().split(/[\s,]+/).map(Number);
+  const vb = (rootAttribute(svgText, "viewBox") ?? "")
+    .trim()
+    .split(/[\s,]+/)
+    .map(Number);
   const wAttr = rootAttribute(svgText, "width");
   const hAttr = rootAttribute(svgText, "height");
   const widthIn = lengthInches(wAttr);
@@ -66,8 +77,15 @@ export function pngTarget(size: SvgSize, scale: PngScale): { widthPx: number; he
  * preset's physical size. For the fixed presets it is what {@link svgSize} reads from the file; for a custom
  * size the file rounds its physical size from the px size to 0.01 cm, so the two can differ by that much.
  */
-export function presetSvgSize(preset: Pick<Preset, "widthPx" | "heightPx" | "widthPhysical" | "heightPhysical">): SvgSize {
-  return { widthPx: preset.widthPx, heightPx: preset.heightPx, widthIn: lengthInches(preset.widthPhysical), heightIn: lengthInches(preset.heightPhysical) };
+export function presetSvgSize(
+  preset: Pick<Preset, "widthPx" | "heightPx" | "widthPhysical" | "heightPhysical">,
+): SvgSize {
+  return {
+    widthPx: preset.widthPx,
+    heightPx: preset.heightPx,
+    widthIn: lengthInches(preset.widthPhysical),
+    heightIn: lengthInches(preset.heightPhysical),
+  };
 }
 
 /** The SVG a PNG is drawn from, its pixel size and dpi, and the thinning resolution it was built with. */

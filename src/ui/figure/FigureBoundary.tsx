@@ -35,8 +35,8 @@ export class FigureBoundary extends Component<Props, State> {
       return (
         <section className="figure-card figure-failed" role="alert" data-testid="plot">
           <p>
-            The figure could not be drawn: {this.state.error.message}. Undo the last change, or check the figure settings and the
-            imported curves.
+            The figure could not be drawn: {this.state.error.message}. Undo the last change, or check the figure
+            settings and the imported curves.
           </p>
         </section>
       );

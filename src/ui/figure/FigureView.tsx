@@ -2,11 +2,21 @@
 // with wheel zoom about the cursor, drag to pan, keyboard zoom/pan, double-click reset and a hover point.
 // Zoom and pan go through setView (one undo step per burst) and are batched to one commit per frame.
 // Big curves whose drawing preparation is still being built in the worker are left out, with a note.
-import { useCallback, useDeferredValue, useEffect, useId, useMemo, useRef, useState, type KeyboardEvent, type PointerEvent } from "react";
+import {
+  useCallback,
+  useDeferredValue,
+  useEffect,
+  useId,
+  useMemo,
+  useRef,
+  useState,
+  type KeyboardEvent,
+  type PointerEvent,
+} from "react";
 import { buildScene } from "../../plot/scene";
 import { presetOf } from "../../plot/layout";
 import type { Scene } from "../../plot/scene-types";
-import type { Curve } from "../../data/types";
+import type { Curve } from "../../project/types";
 import { selectHighlight, selectHover, selectPreparing, selectProject, useAxband } from "../store";
 import { withoutPreparing } from "../store/preparation";
 import { SceneSvg } from "./SceneSvg";
@@ -74,7 +84,10 @@ function wheelPixels(e: WheelEvent, heightPx: number): number {
 /** Scene coordinates (px) of a client point over the svg. */
 function scenePoint(svg: SVGSVGElement, scene: Scene, clientX: number, clientY: number): { x: number; y: number } {
   const r = svg.getBoundingClientRect();
-  return { x: ((clientX - r.left) * scene.widthPx) / (r.width || 1), y: ((clientY - r.top) * scene.heightPx) / (r.height || 1) };
+  return {
+    x: ((clientX - r.left) * scene.widthPx) / (r.width || 1),
+    y: ((clientY - r.top) * scene.heightPx) / (r.height || 1),
+  };
 }
 
 /** log10 mass and log10 y under a scene point. */
@@ -122,7 +135,14 @@ function Crosshair({ scene }: { scene: Scene }) {
   if (!(x >= plot.x && x <= plot.x + plot.w && y >= plot.y && y <= plot.y + plot.h)) return null;
   return (
     <g className="crosshair" pointerEvents="none" aria-hidden="true">
-      <path d={`M${plot.x},${y}H${plot.x + plot.w}M${x},${plot.y}V${plot.y + plot.h}`} stroke="#2b3440" strokeOpacity={0.45} strokeWidth={0.75} strokeDasharray="3 3" fill="none" />
+      <path
+        d={`M${plot.x},${y}H${plot.x + plot.w}M${x},${plot.y}V${plot.y + plot.h}`}
+        stroke="#2b3440"
+        strokeOpacity={0.45}
+        strokeWidth={0.75}
+        strokeDasharray="3 3"
+        fill="none"
+      />
       <circle cx={x} cy={y} r={2.5} fill="none" stroke="#2b3440" strokeWidth={1} />
     </g>
   );
@@ -157,7 +177,15 @@ export function FigureView() {
   const restingPlace = useRef<Scene["autoLegendPlace"]>(undefined);
   const holdLegend = moving ? restingPlace.current : undefined;
   const scene = useMemo(
-    () => buildScene(project, { widthPx: preset.widthPx, heightPx: preset.heightPx, resolution, highlight, physical: false, holdLegend }),
+    () =>
+      buildScene(project, {
+        widthPx: preset.widthPx,
+        heightPx: preset.heightPx,
+        resolution,
+        highlight,
+        physical: false,
+        holdLegend,
+      }),
     [project, preset.widthPx, preset.heightPx, resolution, highlight, holdLegend],
   );
   useEffect(() => {
@@ -273,7 +301,10 @@ export function FigureView() {
       const dy = ((e.clientY - d.y) * sc.heightPx) / (r.height || 1);
       const spanM = Math.log10(d.start.mass[1] / d.start.mass[0]);
       const spanY = Math.log10(d.start.y[1] / d.start.y[0]);
-      schedule({ mass: panRange(d.start.mass, (-dx / sc.plot.w) * spanM), y: panRange(d.start.y, (dy / sc.plot.h) * spanY) });
+      schedule({
+        mass: panRange(d.start.mass, (-dx / sc.plot.w) * spanM),
+        y: panRange(d.start.y, (dy / sc.plot.h) * spanY),
+      });
       return;
     }
     scheduleHover(scenePoint(svg, sc, e.clientX, e.clientY));
@@ -332,7 +363,12 @@ export function FigureView() {
   const aspect = scene.widthPx / scene.heightPx;
   return (
     <section className="figure-card" aria-label="Figure">
-      <div className="figure-box" ref={boxRef} data-testid="plot" style={{ maxWidth: `max(320px, calc((100vh - 190px) * ${aspect.toFixed(4)}))` }}>
+      <div
+        className="figure-box"
+        ref={boxRef}
+        data-testid="plot"
+        style={{ maxWidth: `max(320px, calc((100vh - 190px) * ${aspect.toFixed(4)}))` }}
+      >
         <SceneSvg
           ref={svgRef}
           scene={scene}
@@ -361,13 +397,23 @@ export function FigureView() {
           <Crosshair scene={scene} />
         </SceneSvg>
         {waiting.length > 0 ? (
-          <p className="note figure-preparing" data-testid="figure-preparing" aria-live="polite" style={{ ...PREPARING_STYLE, left: `${((plot.x + plot.w / 2) / scene.widthPx) * 100}%`, top: `${((plot.y + 8) / scene.heightPx) * 100}%` }}>
+          <p
+            className="note figure-preparing"
+            data-testid="figure-preparing"
+            aria-live="polite"
+            style={{
+              ...PREPARING_STYLE,
+              left: `${((plot.x + plot.w / 2) / scene.widthPx) * 100}%`,
+              top: `${((plot.y + 8) / scene.heightPx) * 100}%`,
+            }}
+          >
             {preparingNote(waiting)}
           </p>
         ) : null}
       </div>
       <p className="figure-hint" id={hintId}>
-        Scroll to zoom (Shift: mass axis only, Alt: y axis only), drag to pan, double-click to reset. With the figure focused: + and − zoom, arrow keys pan, 0 resets.
+        Scroll to zoom (Shift: mass axis only, Alt: y axis only), drag to pan, double-click to reset. With the figure
+        focused: + and − zoom, arrow keys pan, 0 resets.
       </p>
     </section>
   );

@@ -19,13 +19,18 @@ export function HoverReadout() {
   const preparing = useAxband(selectPreparing);
   // A curve still being prepared in the worker is not drawn yet: testing the point against it would prepare it
   // here, on the page, the long task the worker is there to avoid.
-  const curves = useMemo(() => (preparing.length === 0 ? allCurves : allCurves.filter((c) => !isPreparing(preparing, c))), [allCurves, preparing]);
+  const curves = useMemo(
+    () => (preparing.length === 0 ? allCurves : allCurves.filter((c) => !isPreparing(preparing, c))),
+    [allCurves, preparing],
+  );
   const constants = useMemo(() => constantsOf(physics), [physics]);
 
   if (!hover) {
     return (
       <div className="readout" data-testid="hover-readout" aria-live="off">
-        <span className="readout-empty">Point at the figure to read off m_a, g_aγγ, f_a, the frequency and the E/N values there.</span>
+        <span className="readout-empty">
+          Point at the figure to read off m_a, g_aγγ, f_a, the frequency and the E/N values there.
+        </span>
       </div>
     );
   }
@@ -50,15 +55,41 @@ export function HoverReadout() {
   );
   return (
     <div className="readout" data-testid="hover-readout" aria-live="off">
-      {item(<>m<sub>a</sub></>, siFormat(hover.massEv, "eV"), "hover-mass")}
+      {item(
+        <>
+          m<sub>a</sub>
+        </>,
+        siFormat(hover.massEv, "eV"),
+        "hover-mass",
+      )}
       {yName ? item(yName, sciFormat(hover.y)) : null}
-      {item(<>g<sub>aγγ</sub></>, `${sciFormat(g)} GeV⁻¹`, "hover-g")}
-      {item(<>f<sub>a</sub></>, `${sciFormat(faFromMass(hover.massEv, { constants }))} GeV`, "hover-fa")}
+      {item(
+        <>
+          g<sub>aγγ</sub>
+        </>,
+        `${sciFormat(g)} GeV⁻¹`,
+        "hover-g",
+      )}
+      {item(
+        <>
+          f<sub>a</sub>
+        </>,
+        `${sciFormat(faFromMass(hover.massEv, { constants }))} GeV`,
+        "hover-fa",
+      )}
       {item("frequency", siFormat(frequencyFromMass(hover.massEv), "Hz"), "hover-freq")}
-      {item("E/N of lines through it", `${minus(enLo.toPrecision(3))} or ${minus(enHi.toPrecision(3))}`, "hover-eovern")}
+      {item(
+        "E/N of lines through it",
+        `${minus(enLo.toPrecision(3))} or ${minus(enHi.toPrecision(3))}`,
+        "hover-eovern",
+      )}
       <div className="readout-item readout-wide" data-testid="hover-curves">
         <span>curves</span>
-        <span>{hits.length === 0 ? "not excluded, reached or contained by any visible curve" : hits.map((h) => `${ROLE_WORD[h.role]} ${h.label}`).join("; ")}</span>
+        <span>
+          {hits.length === 0
+            ? "not excluded, reached or contained by any visible curve"
+            : hits.map((h) => `${ROLE_WORD[h.role]} ${h.label}`).join("; ")}
+        </span>
       </div>
     </div>
   );

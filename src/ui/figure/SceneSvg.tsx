@@ -44,7 +44,14 @@ export function SceneSvg({ scene, idPrefix, children, ref, ...rest }: SceneSvgPr
     dom.current?.update(scene);
   }, [scene, idPrefix]);
   return (
-    <svg ref={setSvg} xmlns="http://www.w3.org/2000/svg" viewBox={`0 0 ${fmt(scene.widthPx)} ${fmt(scene.heightPx)}`} fontFamily={scene.fontFamily} strokeLinecap="butt" {...rest}>
+    <svg
+      ref={setSvg}
+      xmlns="http://www.w3.org/2000/svg"
+      viewBox={`0 0 ${fmt(scene.widthPx)} ${fmt(scene.heightPx)}`}
+      fontFamily={scene.fontFamily}
+      strokeLinecap="butt"
+      {...rest}
+    >
       <g ref={overlayRef} data-overlay="">
         {children}
       </g>

@@ -1,7 +1,7 @@
 // Which curves a point (m_a, g_aγγ) lies in: below an exclusion or projection curve interpolated linearly in
 // log-log space at that mass, or inside a closed region. Uses the plot core's cached log10 arrays (by data
 // array), so the first hover after a big import reuses what the import worker prepared for the figure.
-import type { Curve } from "../../data/types";
+import type { Curve } from "../../project/types";
 import { prepareCurve, type PreparedCurve } from "../../plot/decimate";
 import { rescaleFactor } from "../../plot/physics-settings";
 
@@ -34,7 +34,11 @@ export function curveGAt(c: Pick<Curve, "massEv" | "gInvGeV" | "role" | "rescale
 }
 
 /** True when (m, g) lies inside the closed polygon of a region curve (even-odd rule in log-log space). */
-export function insideRegion(c: Pick<Curve, "massEv" | "gInvGeV" | "role" | "rescale">, massEv: number, gInvGeV: number): boolean {
+export function insideRegion(
+  c: Pick<Curve, "massEv" | "gInvGeV" | "role" | "rescale">,
+  massEv: number,
+  gInvGeV: number,
+): boolean {
   const { lm, lg } = prepare(c);
   const n = lm.length;
   if (n < 3 || !(massEv > 0 && gInvGeV > 0)) return false;

@@ -78,7 +78,8 @@ function sameValue(a: unknown, b: unknown): boolean {
   }
   const ka = Object.keys(a);
   if (ka.length !== Object.keys(b).length) return false;
-  for (const k of ka) if (!sameValue((a as Record<string, unknown>)[k], (b as Record<string, unknown>)[k])) return false;
+  for (const k of ka)
+    if (!sameValue((a as Record<string, unknown>)[k], (b as Record<string, unknown>)[k])) return false;
   return true;
 }
 

@@ -3,9 +3,16 @@
 // header and units, the settings to change and the unreadable rows; one click on Import adds them all.
 // Dropped project files and exported SVG figures reopen the project instead (see import-store).
 import { useEffect, useId, useState } from "react";
-import type { CurveRole } from "../../data/types";
+import type { CurveRole } from "../../project/types";
 import { delimiterName, MAX_IMPORT_BYTES } from "../../data";
-import { DELIMITERS, formatBytes, importable, rejectionLines, type ImportItem, type ImportSettings } from "./import-items";
+import {
+  DELIMITERS,
+  formatBytes,
+  importable,
+  rejectionLines,
+  type ImportItem,
+  type ImportSettings,
+} from "./import-items";
 import { useImport } from "./import-store";
 import { COUPLING_UNIT_OPTIONS, MASS_UNIT_OPTIONS } from "./unit-options";
 import { ChoiceField } from "../layout/ChoiceField";
@@ -100,7 +107,8 @@ export function ImportDialog() {
 
   const parsing = items.filter((it) => it.status === "parsing");
   const totalBytes = parsing.reduce((n, it) => n + Math.max(1, it.sizeBytes), 0);
-  const overall = parsing.length === 0 ? 1 : parsing.reduce((n, it) => n + it.progress * Math.max(1, it.sizeBytes), 0) / totalBytes;
+  const overall =
+    parsing.length === 0 ? 1 : parsing.reduce((n, it) => n + it.progress * Math.max(1, it.sizeBytes), 0) / totalBytes;
   const readyCount = items.filter(importable).length;
   const rejectedTotal = items.filter(importable).reduce((n, it) => n + (it.result?.rejectedCount ?? 0), 0);
   const curvesWord = readyCount + parsing.length > 1 ? `${readyCount + parsing.length} curves` : "curve";
@@ -122,7 +130,12 @@ export function ImportDialog() {
             <div className="ax-modal-body">
               {pasteOpen ? <PasteBox /> : null}
               {items.map((it) => (
-                <ItemCard key={it.key} item={it} onChange={(p) => changeSettings(it.key, p)} onRemove={() => removeItem(it.key)} />
+                <ItemCard
+                  key={it.key}
+                  item={it}
+                  onChange={(p) => changeSettings(it.key, p)}
+                  onRemove={() => removeItem(it.key)}
+                />
               ))}
             </div>
             <footer className="ax-modal-foot">
@@ -139,7 +152,8 @@ export function ImportDialog() {
                     <div className="ax-progress-fill" style={{ width: `${(overall * 100).toFixed(1)}%` }} />
                   </div>
                   <span className="ax-hint">
-                    Reading {parsing.length === 1 ? "1 file" : `${parsing.length} files`} · {Math.round(overall * 100)} %
+                    Reading {parsing.length === 1 ? "1 file" : `${parsing.length} files`} · {Math.round(overall * 100)}{" "}
+                    %
                   </span>
                 </div>
               ) : null}
@@ -178,26 +192,46 @@ function unitNote(source: string | undefined): string {
   return source === "header" ? " (from the header)" : source === "default" ? " (assumed)" : "";
 }
 
-function ItemCard({ item, onChange, onRemove }: { item: ImportItem; onChange: (p: Partial<ImportSettings>) => void; onRemove: () => void }) {
+function ItemCard({
+  item,
+  onChange,
+  onRemove,
+}: {
+  item: ImportItem;
+  onChange: (p: Partial<ImportSettings>) => void;
+  onRemove: () => void;
+}) {
   const s = item.settings;
   const r = item.result;
   const rej = r ? rejectionLines(item.fileName, r) : { lines: [], more: 0 };
   const header = r?.header ?? null;
   const columns = Math.max(2, r?.columnCount ?? 2);
-  const columnChoices = Array.from({ length: columns }, (_, i) => ({ value: i + 1, label: `column ${i + 1}${header?.[i] ? ` · ${header[i]}` : ""}` }));
+  const columnChoices = Array.from({ length: columns }, (_, i) => ({
+    value: i + 1,
+    label: `column ${i + 1}${header?.[i] ? ` · ${header[i]}` : ""}`,
+  }));
   const preview = r ? r.preview.slice(0, 6) : [];
   const canEdit = r !== null && !(r.fatal && r.fatal.code !== "single-column" && r.fatal.code !== "no-data");
   // The parser's own sentences about delimiter, units, unreadable rows and values ≤ 0 are shown above in
   // the step's own words; any other warning (e.g. a guess it made) is passed on as it is.
-  const notes = r ? r.messages.filter((m) => m.level === "warning" && !/cannot be read|could not be read|≤ 0|<= 0/.test(m.text)) : [];
+  const notes = r
+    ? r.messages.filter((m) => m.level === "warning" && !/cannot be read|could not be read|≤ 0|<= 0/.test(m.text))
+    : [];
 
   return (
     <article className="ax-import-item" data-testid="import-item" aria-label={`Import ${item.fileName}`}>
       <header className="ax-import-item-head">
         <strong>{item.fileName}</strong>
         <span className="ax-hint">{formatBytes(item.sizeBytes)}</span>
-        {item.status === "parsing" ? <span className="ax-hint">reading… {Math.round(item.progress * 100)} %</span> : null}
-        <button type="button" className="icon danger ax-small" aria-label={`Leave out ${item.fileName}`} onClick={onRemove}>
+        {item.status === "parsing" ? (
+          <span className="ax-hint">reading… {Math.round(item.progress * 100)} %</span>
+        ) : null}
+        <button
+          type="button"
+          className="icon danger ax-small"
+          aria-label={`Leave out ${item.fileName}`}
+          onClick={onRemove}
+        >
           ×
         </button>
       </header>
@@ -221,7 +255,10 @@ function ItemCard({ item, onChange, onRemove }: { item: ImportItem; onChange: (p
               <tr key={row.row} className={row.problem ? "ax-preview-bad" : undefined} title={row.problem ?? undefined}>
                 <th scope="row">{row.row}</th>
                 {row.fields.slice(0, 6).map((c, i) => (
-                  <td key={i} className={i + 1 === s.massColumn || i + 1 === s.couplingColumn ? "ax-preview-used" : undefined}>
+                  <td
+                    key={i}
+                    className={i + 1 === s.massColumn || i + 1 === s.couplingColumn ? "ax-preview-used" : undefined}
+                  >
                     {c}
                   </td>
                 ))}
@@ -237,11 +274,17 @@ function ItemCard({ item, onChange, onRemove }: { item: ImportItem; onChange: (p
             {s.delimiter === "auto" ? " (detected)" : " (chosen)"}
             {r.decimalComma ? ", decimal comma" : ""} · Header: {header ? <b>{header.join(" | ")}</b> : "none"} · Mass:{" "}
             <b>{MASS_UNIT_OPTIONS.find((u) => u.value === r.massUnit)?.label ?? r.massUnit}</b>
-            {unitNote(r.massUnitSource)} · Coupling: <b>{COUPLING_UNIT_OPTIONS.find((u) => u.value === r.couplingUnit)?.label ?? r.couplingUnit}</b>
+            {unitNote(r.massUnitSource)} · Coupling:{" "}
+            <b>{COUPLING_UNIT_OPTIONS.find((u) => u.value === r.couplingUnit)?.label ?? r.couplingUnit}</b>
             {unitNote(r.couplingUnitSource)} · <b>{r.massEv.length.toLocaleString("en")}</b> points
           </p>
           <div className="ax-import-settings">
-            <ChoiceField label="Delimiter" value={s.delimiter} choices={DELIMITERS} onChange={(v) => onChange({ delimiter: v })} />
+            <ChoiceField
+              label="Delimiter"
+              value={s.delimiter}
+              choices={DELIMITERS}
+              onChange={(v) => onChange({ delimiter: v })}
+            />
             <ChoiceField
               label="Mass unit"
               value={s.massUnit ?? r.massUnit}
@@ -257,21 +300,40 @@ function ItemCard({ item, onChange, onRemove }: { item: ImportItem; onChange: (p
             {(s.couplingUnit ?? r.couplingUnit) === "model-line" ? (
               <label className="ax-field">
                 <span>of the line E/N =</span>
-                <input type="text" size={6} aria-label="E/N of the model line" value={s.modelEOverN} onChange={(e) => onChange({ modelEOverN: e.target.value })} />
+                <input
+                  type="text"
+                  size={6}
+                  aria-label="E/N of the model line"
+                  value={s.modelEOverN}
+                  onChange={(e) => onChange({ modelEOverN: e.target.value })}
+                />
               </label>
             ) : null}
             <label className="ax-check">
-              <input type="checkbox" checked={s.log10Mass} onChange={(e) => onChange({ log10Mass: e.target.checked })} />
+              <input
+                type="checkbox"
+                checked={s.log10Mass}
+                onChange={(e) => onChange({ log10Mass: e.target.checked })}
+              />
               mass as log10
             </label>
             <label className="ax-check">
-              <input type="checkbox" checked={s.log10Coupling} onChange={(e) => onChange({ log10Coupling: e.target.checked })} />
+              <input
+                type="checkbox"
+                checked={s.log10Coupling}
+                onChange={(e) => onChange({ log10Coupling: e.target.checked })}
+              />
               coupling as log10
             </label>
           </div>
           {columns > 2 ? (
             <div className="ax-import-settings">
-              <ChoiceField label="Mass from" value={s.massColumn ?? r.massColumn} choices={columnChoices} onChange={(v) => onChange({ massColumn: Number(v) })} />
+              <ChoiceField
+                label="Mass from"
+                value={s.massColumn ?? r.massColumn}
+                choices={columnChoices}
+                onChange={(v) => onChange({ massColumn: Number(v) })}
+              />
               <ChoiceField
                 label="Coupling from"
                 value={s.couplingColumn ?? r.couplingColumn}
@@ -283,11 +345,20 @@ function ItemCard({ item, onChange, onRemove }: { item: ImportItem; onChange: (p
           <div className="ax-import-settings">
             <label className="ax-field">
               <span>Label</span>
-              <input type="text" aria-label="Label" value={s.label} onChange={(e) => onChange({ label: e.target.value })} />
+              <input
+                type="text"
+                aria-label="Label"
+                value={s.label}
+                onChange={(e) => onChange({ label: e.target.value })}
+              />
             </label>
             <label className="ax-field">
               <span>Role</span>
-              <select aria-label="Role" value={s.role} onChange={(e) => onChange({ role: e.target.value as CurveRole })}>
+              <select
+                aria-label="Role"
+                value={s.role}
+                onChange={(e) => onChange({ role: e.target.value as CurveRole })}
+              >
                 {ROLES.map((ro) => (
                   <option key={ro.value} value={ro.value}>
                     {ro.label}
@@ -295,8 +366,16 @@ function ItemCard({ item, onChange, onRemove }: { item: ImportItem; onChange: (p
                 ))}
               </select>
             </label>
-            <label className="ax-check" title="Regions always keep the file order (the contour is closed in that order).">
-              <input type="checkbox" checked={!s.keepOrder} disabled={s.role === "region"} onChange={(e) => onChange({ keepOrder: !e.target.checked })} />
+            <label
+              className="ax-check"
+              title="Regions always keep the file order (the contour is closed in that order)."
+            >
+              <input
+                type="checkbox"
+                checked={!s.keepOrder}
+                disabled={s.role === "region"}
+                onChange={(e) => onChange({ keepOrder: !e.target.checked })}
+              />
               sort by mass
             </label>
           </div>
@@ -328,15 +407,19 @@ function ItemCard({ item, onChange, onRemove }: { item: ImportItem; onChange: (p
       ) : null}
       {r && r.nonPositive > 0 ? (
         <p className="ax-import-warn" data-testid="import-nonpositive">
-          {r.nonPositive.toLocaleString("en")} row{r.nonPositive === 1 ? " has" : "s have"} a value ≤ 0: kept in the data, but not drawn on the log axes
-          {r.nonPositiveRows.length > 0 ? ` (rows ${r.nonPositiveRows.slice(0, 5).join(", ")}${r.nonPositive > 5 ? ", …" : ""})` : ""}.
+          {r.nonPositive.toLocaleString("en")} row{r.nonPositive === 1 ? " has" : "s have"} a value ≤ 0: kept in the
+          data, but not drawn on the log axes
+          {r.nonPositiveRows.length > 0
+            ? ` (rows ${r.nonPositiveRows.slice(0, 5).join(", ")}${r.nonPositive > 5 ? ", …" : ""})`
+            : ""}
+          .
         </p>
       ) : null}
       {rej.lines.length > 0 ? (
         <div className="ax-import-rejected" data-testid="import-rejected">
           <p>
-            {r?.rejectedCount.toLocaleString("en")} row{r?.rejectedCount === 1 ? "" : "s"} could not be read. Import skips {r?.rejectedCount === 1 ? "it" : "them"}; Cancel
-            imports nothing.
+            {r?.rejectedCount.toLocaleString("en")} row{r?.rejectedCount === 1 ? "" : "s"} could not be read. Import
+            skips {r?.rejectedCount === 1 ? "it" : "them"}; Cancel imports nothing.
           </p>
           <pre>{rej.lines.join("\n") + (rej.more > 0 ? `\n… and ${rej.more.toLocaleString("en")} more` : "")}</pre>
         </div>

@@ -1,7 +1,14 @@
 // The state of one file (or pasted text) in the import step, and the pure steps on it: the parser options
 // its settings stand for, the settings a first parse detected, and the wording of rejected rows.
-import type { CurveRole, PhysicsSettings } from "../../data/types";
-import { formatProblem, formatRejection, type CouplingUnit, type CurveParseOptions, type CurveParseResult, type MassUnit } from "../../data";
+import type { CurveRole, PhysicsSettings } from "../../project/types";
+import {
+  formatProblem,
+  formatRejection,
+  type CouplingUnit,
+  type CurveParseOptions,
+  type CurveParseResult,
+  type MassUnit,
+} from "../../data";
 import { physicsOptsOf } from "../../plot/physics-settings";
 
 /** Delimiter choices of the import step; "auto" lets the parser detect it. */
@@ -93,7 +100,10 @@ export function initialSettings(label: string): ImportSettings {
 }
 
 /** The parser options an item's settings stand for (undefined fields are left to detection). */
-export function parseOptsOf(item: Pick<ImportItem, "fileName" | "settings">, physics: PhysicsSettings): CurveParseOptions {
+export function parseOptsOf(
+  item: Pick<ImportItem, "fileName" | "settings">,
+  physics: PhysicsSettings,
+): CurveParseOptions {
   const s = item.settings;
   const opts: CurveParseOptions = {
     fileName: item.fileName,
@@ -137,7 +147,10 @@ export function problemOf(fileName: string, r: CurveParseResult): string | null 
 export const REJECTED_SHOWN = 20;
 
 /** Rejected rows as `file:row:column: reason`, the first {@link REJECTED_SHOWN}, and how many more there are. */
-export function rejectionLines(fileName: string, r: Pick<CurveParseResult, "rejected" | "rejectedCount">): { lines: string[]; more: number } {
+export function rejectionLines(
+  fileName: string,
+  r: Pick<CurveParseResult, "rejected" | "rejectedCount">,
+): { lines: string[]; more: number } {
   const lines = r.rejected.slice(0, REJECTED_SHOWN).map((x) => formatRejection(fileName, x));
   return { lines, more: Math.max(0, r.rejectedCount - lines.length) };
 }

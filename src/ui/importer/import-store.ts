@@ -3,11 +3,20 @@
 // dialog share. Transient: never saved or undone; the curves it creates go to the project store in one step.
 import { create } from "zustand";
 import { labelFromFileName, newCurve, type CurveParseResult } from "../../data";
-import type { Curve } from "../../data/types";
+import type { Curve } from "../../project/types";
 import { useAxband } from "../store";
 import { prepareSpecOf } from "../../plot/prepare-transfer";
 import { ensurePrepared, startParse, type ParseJob } from "./parse-runner";
-import { importable, initialSettings, PARSE_KEYS, parseOptsOf, problemOf, settingsAfterParse, type ImportItem, type ImportSettings } from "./import-items";
+import {
+  importable,
+  initialSettings,
+  PARSE_KEYS,
+  parseOptsOf,
+  problemOf,
+  settingsAfterParse,
+  type ImportItem,
+  type ImportSettings,
+} from "./import-items";
 import { isProjectFileName, openProjectFile } from "../share/open-project";
 
 export interface ImportState {
@@ -42,7 +51,11 @@ function plural(n: number, one: string, many = `${one}s`): string {
 
 export const useImport = create<ImportState>()((set, get) => {
   const patchItem = (key: string, patch: Partial<ImportItem> | ((it: ImportItem) => Partial<ImportItem>)) =>
-    set((s) => ({ items: s.items.map((it) => (it.key === key ? { ...it, ...(typeof patch === "function" ? patch(it) : patch) } : it)) }));
+    set((s) => ({
+      items: s.items.map((it) =>
+        it.key === key ? { ...it, ...(typeof patch === "function" ? patch(it) : patch) } : it,
+      ),
+    }));
 
   const runParse = (item: ImportItem) => {
     jobs.get(item.key)?.job.cancel();
@@ -79,7 +92,10 @@ export const useImport = create<ImportState>()((set, get) => {
         if (jobs.get(item.key)?.id !== id) return;
         jobs.delete(item.key);
         if (isAbort(e)) return;
-        patchItem(item.key, { status: "failed", problem: `${item.fileName} could not be read: ${e instanceof Error ? e.message : String(e)}` });
+        patchItem(item.key, {
+          status: "failed",
+          problem: `${item.fileName} could not be read: ${e instanceof Error ? e.message : String(e)}`,
+        });
       },
     );
   };
@@ -157,7 +173,10 @@ export const useImport = create<ImportState>()((set, get) => {
       const ready = list.filter(importable);
       const rejected = ready.reduce((n, it) => n + (it.result?.rejectedCount ?? 0), 0);
       if (unseen && rejected > 0) {
-        set({ busy: false, notice: "Some rows could not be read (listed above). Click Import again to skip them, or Cancel." });
+        set({
+          busy: false,
+          notice: "Some rows could not be read (listed above). Click Import again to skip them, or Cancel.",
+        });
         return 0;
       }
       if (ready.length === 0) {
@@ -166,7 +185,11 @@ export const useImport = create<ImportState>()((set, get) => {
       }
       const { figure, physics } = useAxband.getState().project;
       // A big curve's drawing preparation is built in the worker, so adding it does not block the page.
-      await Promise.all(ready.map((it) => ensurePrepared(it.result as CurveParseResult, prepareSpecOf(it.settings, figure.yView, physics))));
+      await Promise.all(
+        ready.map((it) =>
+          ensurePrepared(it.result as CurveParseResult, prepareSpecOf(it.settings, figure.yView, physics)),
+        ),
+      );
       // Cancelled meanwhile: nothing is imported.
       if (!get().busy) return 0;
       const project = useAxband.getState().project;
@@ -194,7 +217,8 @@ export const useImport = create<ImportState>()((set, get) => {
       const nonPositive = ready.reduce((n, it) => n + (it.result?.nonPositive ?? 0), 0);
       const parts = [`Imported ${plural(curves.length, "curve")}: ${curves.map((c) => c.label).join(", ")}.`];
       if (rejected > 0) parts.push(`${plural(rejected, "unreadable row")} skipped.`);
-      if (nonPositive > 0) parts.push(`${plural(nonPositive, "row")} with a value ≤ 0 kept but not drawn on the log axes.`);
+      if (nonPositive > 0)
+        parts.push(`${plural(nonPositive, "row")} with a value ≤ 0 kept but not drawn on the log axes.`);
       const left = list.length - ready.length;
       if (left > 0) parts.push(`${plural(left, "source")} not imported.`);
       useAxband.getState().pushMessage("status", parts.join(" "));

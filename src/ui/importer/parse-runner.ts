@@ -16,8 +16,14 @@ export interface ParseJob {
  * @param onProgress fraction 0..1 of the bytes read
  * @param prepare the drawing preparation the worker should build too (see prepareSpecOf)
  */
-export function startParse(source: Blob, opts: CurveParseOptions, onProgress: (fraction: number) => void, prepare?: PrepareSpec): ParseJob {
-  if (importWorkerAvailable() || typeof source.stream === "function") return importInWorker(source, opts, onProgress, prepare);
+export function startParse(
+  source: Blob,
+  opts: CurveParseOptions,
+  onProgress: (fraction: number) => void,
+  prepare?: PrepareSpec,
+): ParseJob {
+  if (importWorkerAvailable() || typeof source.stream === "function")
+    return importInWorker(source, opts, onProgress, prepare);
   let cancelled = false;
   let inner: ParseJob | null = null;
   const promise = readBytes(source).then((bytes) => {
@@ -41,8 +47,12 @@ export const PREPARE_OFF_THREAD_POINTS = 50_000;
  * Makes sure a large parsed curve's drawing preparation for the final settings is in the plot cache before
  * the curve is added (the parse prepared for the settings at that time; role, order or view may have changed).
  */
-export async function ensurePrepared(r: Pick<CurveParseResult, "massEv" | "gInvGeV">, spec: PrepareSpec): Promise<void> {
-  if (r.massEv.length < PREPARE_OFF_THREAD_POINTS || !importWorkerAvailable() || hasPrepared(r.massEv, r.gInvGeV, spec)) return;
+export async function ensurePrepared(
+  r: Pick<CurveParseResult, "massEv" | "gInvGeV">,
+  spec: PrepareSpec,
+): Promise<void> {
+  if (r.massEv.length < PREPARE_OFF_THREAD_POINTS || !importWorkerAvailable() || hasPrepared(r.massEv, r.gInvGeV, spec))
+    return;
   await prepareInWorker(r.massEv, r.gInvGeV, spec);
 }
 

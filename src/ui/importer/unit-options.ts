@@ -5,7 +5,13 @@ import { COUPLING_UNITS, MASS_UNITS, type CouplingUnit, type MassUnit } from "..
 export type { CouplingUnit, MassUnit };
 
 /** Mass units in menu order, with their labels (μeV shown with the Greek μ). */
-export const MASS_UNIT_OPTIONS: { value: MassUnit; label: string }[] = MASS_UNITS.map((u) => ({ value: u.id, label: u.label }));
+export const MASS_UNIT_OPTIONS: { value: MassUnit; label: string }[] = MASS_UNITS.map((u) => ({
+  value: u.id,
+  label: u.label,
+}));
 
 /** Coupling column meanings in menu order. */
-export const COUPLING_UNIT_OPTIONS: { value: CouplingUnit; label: string }[] = COUPLING_UNITS.map((u) => ({ value: u.id, label: u.label }));
+export const COUPLING_UNIT_OPTIONS: { value: CouplingUnit; label: string }[] = COUPLING_UNITS.map((u) => ({
+  value: u.id,
+  label: u.label,
+}));

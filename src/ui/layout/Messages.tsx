@@ -16,7 +16,12 @@ function MessageItem({ message }: { message: Message }) {
   return (
     <div role={message.kind} className={`message message-${message.kind}`} data-message-id={message.id}>
       <span className="message-text">{message.text}</span>
-      <button type="button" className="message-dismiss" aria-label="Dismiss message" onClick={() => dismiss(message.id)}>
+      <button
+        type="button"
+        className="message-dismiss"
+        aria-label="Dismiss message"
+        onClick={() => dismiss(message.id)}
+      >
         ×
       </button>
     </div>

@@ -1,7 +1,17 @@
 // A collapsible sidebar section (native <details>, so it is keyboard- and screen-reader-friendly).
 import type { ReactNode } from "react";
 
-export function Section({ title, children, open = true, id }: { title: string; children: ReactNode; open?: boolean; id?: string }) {
+export function Section({
+  title,
+  children,
+  open = true,
+  id,
+}: {
+  title: string;
+  children: ReactNode;
+  open?: boolean;
+  id?: string;
+}) {
   return (
     <details className="section" open={open} id={id}>
       <summary className="section-title">

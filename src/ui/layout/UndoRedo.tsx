@@ -10,7 +10,8 @@ function typingTarget(t: EventTarget | null): boolean {
   if (!(t instanceof HTMLElement)) return false;
   if (t.isContentEditable) return true;
   if (t instanceof HTMLTextAreaElement || t instanceof HTMLSelectElement) return true;
-  if (t instanceof HTMLInputElement) return !["checkbox", "radio", "button", "submit", "range", "color"].includes(t.type);
+  if (t instanceof HTMLInputElement)
+    return !["checkbox", "radio", "button", "submit", "range", "color"].includes(t.type);
   return false;
 }
 
@@ -41,7 +42,13 @@ export function UndoRedo() {
       <button type="button" onClick={undo} disabled={!canUndo} title={`Undo (${MOD}Z)`} data-testid="undo">
         ↶ Undo
       </button>
-      <button type="button" onClick={redo} disabled={!canRedo} title={`Redo (${isMac ? "⇧⌘Z" : "Ctrl+Y"})`} data-testid="redo">
+      <button
+        type="button"
+        onClick={redo}
+        disabled={!canRedo}
+        title={`Redo (${isMac ? "⇧⌘Z" : "Ctrl+Y"})`}
+        data-testid="redo"
+      >
         ↷ Redo
       </button>
     </div>

@@ -18,7 +18,12 @@ export function AddModel() {
       setError(r.error);
       return;
     }
-    addModel({ eOverNMin: r.min, eOverNMax: r.max, label: `E/N = ${text.trim().replace(/\s+/g, " ")}`, source: { kind: "typed" } });
+    addModel({
+      eOverNMin: r.min,
+      eOverNMax: r.max,
+      label: `E/N = ${text.trim().replace(/\s+/g, " ")}`,
+      source: { kind: "typed" },
+    });
     setText("");
     setError(null);
   };

@@ -57,7 +57,14 @@ function text(v: unknown): string {
 /** A table row for a FermionInput (catalogue load). */
 export function draftFromFermion(f: FermionInput): FermionDraft {
   const colour = typeof f.colour === "string" ? f.colour : `(${f.colour.p},${f.colour.q})`;
-  const base = blankRow({ name: f.name ?? "", colour, chirality: f.chirality, pq: text(f.pq), copies: text(f.copies ?? 1), ewKind: f.ew.kind });
+  const base = blankRow({
+    name: f.name ?? "",
+    colour,
+    chirality: f.chirality,
+    pq: text(f.pq),
+    copies: text(f.copies ?? 1),
+    ewKind: f.ew.kind,
+  });
   if (f.ew.kind === "sm") return { ...base, dim: text(f.ew.dim), y: text(f.ew.y) };
   if (f.ew.kind === "su3l") return { ...base, rep: f.ew.rep, x: text(f.ew.x), b: text(f.ew.b) };
   return { ...base, charges: f.ew.charges.map(text).join(", ") };
@@ -133,7 +140,17 @@ function colourOptionLabel(name: string): string {
   return p.ok ? `${colourDisplay(name)}  (${p.irrep.p},${p.irrep.q})` : name;
 }
 
-function ColourCell({ row, onChange, invalid, label }: { row: FermionDraft; onChange: (v: string) => void; invalid: boolean; label: string }) {
+function ColourCell({
+  row,
+  onChange,
+  invalid,
+  label,
+}: {
+  row: FermionDraft;
+  onChange: (v: string) => void;
+  invalid: boolean;
+  label: string;
+}) {
   const named = COLOUR_NAMES.includes(row.colour);
   const [other, setOther] = useState(!named);
   return (
@@ -199,7 +216,11 @@ export function AnomalyCalculator() {
       eOverNMin: en,
       eOverNMax: en,
       label: `Calculator model, E/N = ${minus(en)}`,
-      source: { kind: "calculator", fermions: state.rows.map(fermionFromDraft), scalarCharge: state.scalarCharge.trim() },
+      source: {
+        kind: "calculator",
+        fermions: state.rows.map(fermionFromDraft),
+        scalarCharge: state.scalarCharge.trim(),
+      },
     });
   };
 
@@ -220,7 +241,8 @@ export function AnomalyCalculator() {
           type="button"
           onClick={() => {
             const row = catalogueRows.find((r) => r.entry.id === loadId);
-            if (row) dispatch({ type: "load", fermions: row.entry.fermions, scalarCharge: String(row.entry.scalarCharge) });
+            if (row)
+              dispatch({ type: "load", fermions: row.entry.fermions, scalarCharge: String(row.entry.scalarCharge) });
           }}
         >
           Load
@@ -236,7 +258,9 @@ export function AnomalyCalculator() {
               <th scope="col">
                 Electroweak <span className="th-detail">(SU(2) dim, Y · SU(3)_L rep, X, b · charges)</span>
               </th>
-              <th scope="col" title="Chirality of the Weyl field">L/R</th>
+              <th scope="col" title="Chirality of the Weyl field">
+                L/R
+              </th>
               <th scope="col">PQ charge</th>
               <th scope="col">Copies</th>
               <th scope="col">
@@ -250,50 +274,133 @@ export function AnomalyCalculator() {
               return (
                 <tr key={row.key} data-fermion-row={i}>
                   <td>
-                    <input type="text" className="narrow" aria-label={`Name of fermion ${i + 1}`} value={row.name} onChange={(e) => edit(row.key, { name: e.target.value })} />
+                    <input
+                      type="text"
+                      className="narrow"
+                      aria-label={`Name of fermion ${i + 1}`}
+                      value={row.name}
+                      onChange={(e) => edit(row.key, { name: e.target.value })}
+                    />
                   </td>
                   <td>
-                    <ColourCell row={row} label={label} invalid={hasError(errors, i, "colour")} onChange={(v) => edit(row.key, { colour: v })} />
+                    <ColourCell
+                      row={row}
+                      label={label}
+                      invalid={hasError(errors, i, "colour")}
+                      onChange={(v) => edit(row.key, { colour: v })}
+                    />
                   </td>
                   <td className="ew-cell">
-                    <select aria-label={`Electroweak kind of ${label}`} value={row.ewKind} onChange={(e) => edit(row.key, { ewKind: e.target.value as FermionDraft["ewKind"] })}>
+                    <select
+                      aria-label={`Electroweak kind of ${label}`}
+                      value={row.ewKind}
+                      onChange={(e) => edit(row.key, { ewKind: e.target.value as FermionDraft["ewKind"] })}
+                    >
                       <option value="sm">SU(2)×U(1)</option>
                       <option value="su3l">SU(3)_L</option>
                       <option value="explicit">charges</option>
                     </select>
                     {row.ewKind === "sm" ? (
                       <>
-                        <input type="text" className="tiny" aria-label={`SU(2) dimension of ${label}`} title="SU(2)_L dimension" placeholder="dim" value={row.dim} aria-invalid={hasError(errors, i, "ew.dim") || undefined} onChange={(e) => edit(row.key, { dim: e.target.value })} />
-                        <input type="text" className="narrow" aria-label={`Hypercharge Y of ${label}`} title="Hypercharge Y (Q = T₃ + Y)" placeholder="Y" value={row.y} aria-invalid={hasError(errors, i, "ew.y") || undefined} onChange={(e) => edit(row.key, { y: e.target.value })} />
+                        <input
+                          type="text"
+                          className="tiny"
+                          aria-label={`SU(2) dimension of ${label}`}
+                          title="SU(2)_L dimension"
+                          placeholder="dim"
+                          value={row.dim}
+                          aria-invalid={hasError(errors, i, "ew.dim") || undefined}
+                          onChange={(e) => edit(row.key, { dim: e.target.value })}
+                        />
+                        <input
+                          type="text"
+                          className="narrow"
+                          aria-label={`Hypercharge Y of ${label}`}
+                          title="Hypercharge Y (Q = T₃ + Y)"
+                          placeholder="Y"
+                          value={row.y}
+                          aria-invalid={hasError(errors, i, "ew.y") || undefined}
+                          onChange={(e) => edit(row.key, { y: e.target.value })}
+                        />
                       </>
                     ) : row.ewKind === "su3l" ? (
                       <>
-                        <select aria-label={`SU(3)_L representation of ${label}`} value={row.rep} onChange={(e) => edit(row.key, { rep: e.target.value as FermionDraft["rep"] })}>
+                        <select
+                          aria-label={`SU(3)_L representation of ${label}`}
+                          value={row.rep}
+                          onChange={(e) => edit(row.key, { rep: e.target.value as FermionDraft["rep"] })}
+                        >
                           <option value="1">1</option>
                           <option value="3">3</option>
                           <option value="3bar">3̅</option>
                         </select>
-                        <input type="text" className="narrow" aria-label={`X charge of ${label}`} title="X (Q = T₃ + βT₈ + X)" value={row.x} aria-invalid={hasError(errors, i, "ew.x") || undefined} onChange={(e) => edit(row.key, { x: e.target.value })} />
-                        <input type="text" className="narrow" aria-label={`b = β/√3 of ${label}`} title="b = β/√3" value={row.b} aria-invalid={hasError(errors, i, "ew.b") || undefined} onChange={(e) => edit(row.key, { b: e.target.value })} />
+                        <input
+                          type="text"
+                          className="narrow"
+                          aria-label={`X charge of ${label}`}
+                          title="X (Q = T₃ + βT₈ + X)"
+                          value={row.x}
+                          aria-invalid={hasError(errors, i, "ew.x") || undefined}
+                          onChange={(e) => edit(row.key, { x: e.target.value })}
+                        />
+                        <input
+                          type="text"
+                          className="narrow"
+                          aria-label={`b = β/√3 of ${label}`}
+                          title="b = β/√3"
+                          value={row.b}
+                          aria-invalid={hasError(errors, i, "ew.b") || undefined}
+                          onChange={(e) => edit(row.key, { b: e.target.value })}
+                        />
                       </>
                     ) : (
-                      <input type="text" aria-label={`Electric charges of ${label}`} title="Component charges, e.g. 2/3, -1/3" value={row.charges} aria-invalid={hasError(errors, i, "ew.charges") || undefined} onChange={(e) => edit(row.key, { charges: e.target.value })} />
+                      <input
+                        type="text"
+                        aria-label={`Electric charges of ${label}`}
+                        title="Component charges, e.g. 2/3, -1/3"
+                        value={row.charges}
+                        aria-invalid={hasError(errors, i, "ew.charges") || undefined}
+                        onChange={(e) => edit(row.key, { charges: e.target.value })}
+                      />
                     )}
                   </td>
                   <td>
-                    <select aria-label={`Chirality of ${label}`} value={row.chirality} onChange={(e) => edit(row.key, { chirality: e.target.value as "L" | "R" })}>
+                    <select
+                      aria-label={`Chirality of ${label}`}
+                      value={row.chirality}
+                      onChange={(e) => edit(row.key, { chirality: e.target.value as "L" | "R" })}
+                    >
                       <option value="L">L</option>
                       <option value="R">R</option>
                     </select>
                   </td>
                   <td>
-                    <input type="text" className="narrow" aria-label={`PQ charge of ${label}`} value={row.pq} aria-invalid={hasError(errors, i, "pq") || undefined} onChange={(e) => edit(row.key, { pq: e.target.value })} />
+                    <input
+                      type="text"
+                      className="narrow"
+                      aria-label={`PQ charge of ${label}`}
+                      value={row.pq}
+                      aria-invalid={hasError(errors, i, "pq") || undefined}
+                      onChange={(e) => edit(row.key, { pq: e.target.value })}
+                    />
                   </td>
                   <td>
-                    <input type="text" className="tiny" aria-label={`Copies of ${label}`} value={row.copies} aria-invalid={hasError(errors, i, "copies") || undefined} onChange={(e) => edit(row.key, { copies: e.target.value })} />
+                    <input
+                      type="text"
+                      className="tiny"
+                      aria-label={`Copies of ${label}`}
+                      value={row.copies}
+                      aria-invalid={hasError(errors, i, "copies") || undefined}
+                      onChange={(e) => edit(row.key, { copies: e.target.value })}
+                    />
                   </td>
                   <td>
-                    <button type="button" className="icon danger" aria-label={`Remove ${label}`} onClick={() => dispatch({ type: "remove", key: row.key })}>
+                    <button
+                      type="button"
+                      className="icon danger"
+                      aria-label={`Remove ${label}`}
+                      onClick={() => dispatch({ type: "remove", key: row.key })}
+                    >
                       ✕
                     </button>
                   </td>
@@ -393,7 +500,13 @@ export function AnomalyCalculator() {
           <p className="note">Enter the fermions to see E, N and E/N.</p>
         )}
       </div>
-      <button type="button" className="primary" onClick={addAsModel} disabled={!current.ok || !current.result.eOverN} data-testid="calc-add-model">
+      <button
+        type="button"
+        className="primary"
+        onClick={addAsModel}
+        disabled={!current.ok || !current.result.eOverN}
+        data-testid="calc-add-model"
+      >
         {current.ok && current.result.eOverN ? `Add E/N = ${frac(current.result.eOverN)} as model` : "Add as model"}
       </button>
     </div>

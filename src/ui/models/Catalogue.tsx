@@ -63,7 +63,9 @@ export function Catalogue() {
                 <li key={r.entry.id} className="catalogue-entry" data-catalogue-id={r.entry.id}>
                   <details>
                     <summary title={r.entry.note}>
-                      <span className="catalogue-label">{g.id === "ksvz" ? r.entry.label.replace(/^KSVZ-type /, "") : r.entry.label}</span>
+                      <span className="catalogue-label">
+                        {g.id === "ksvz" ? r.entry.label.replace(/^KSVZ-type /, "") : r.entry.label}
+                      </span>
                       <span className="catalogue-eovern">E/N = {r.eOverN ? minus(r.eOverN) : "undefined"}</span>
                     </summary>
                     <div className="catalogue-fields">

@@ -5,7 +5,7 @@ import { useShallow } from "zustand/react/shallow";
 import { bandCancels } from "../../physics/coupling";
 import { parseEOverN } from "../../physics/eovern-parse";
 import { eOverNValue, physicsOptsOf } from "../../plot/physics-settings";
-import type { LineStyle, Model } from "../../data/types";
+import type { LineStyle, Model } from "../../project/types";
 import { selectModelIds, selectPhysics, useAxband, type AxbandState } from "../store";
 import { minus } from "../format";
 
@@ -41,7 +41,8 @@ function EOverNField({ model }: { model: Model }) {
     }
     setError(null);
     setDraft(null);
-    if (r.min !== model.eOverNMin || r.max !== model.eOverNMax) updateModel(model.id, { eOverNMin: r.min, eOverNMax: r.max });
+    if (r.min !== model.eOverNMin || r.max !== model.eOverNMax)
+      updateModel(model.id, { eOverNMin: r.min, eOverNMax: r.max });
   };
   return (
     <span className="model-eovern-edit">
@@ -106,7 +107,8 @@ function SpreadField({ model }: { model: Model }) {
           value={model.sigmas}
           onChange={(e) => {
             const k = Number(e.target.value);
-            if (Number.isFinite(k) && k >= 0 && k <= 10) updateModel(model.id, { sigmas: k }, { coalesceKey: `model:${model.id}:sigmas` });
+            if (Number.isFinite(k) && k >= 0 && k <= 10)
+              updateModel(model.id, { sigmas: k }, { coalesceKey: `model:${model.id}:sigmas` });
           }}
         />
       ) : null}
@@ -118,12 +120,19 @@ function ModelRow({ id, index, count }: { id: string; index: number; count: numb
   const model = useAxband(useCallback((s: AxbandState) => s.project.models.find((m) => m.id === id), [id]));
   const physics = useAxband(selectPhysics);
   const { updateModel, removeModel, moveModel } = useAxband(
-    useShallow((s: AxbandState) => ({ updateModel: s.updateModel, removeModel: s.removeModel, moveModel: s.moveModel })),
+    useShallow((s: AxbandState) => ({
+      updateModel: s.updateModel,
+      removeModel: s.removeModel,
+      moveModel: s.moveModel,
+    })),
   );
   if (!model) return null;
   const lo = eOverNValue(model.eOverNMin);
   const hi = eOverNValue(model.eOverNMax);
-  const cancels = Number.isFinite(lo) && Number.isFinite(hi) && bandCancels(lo, hi, { ...physicsOptsOf(physics), sigmas: model.sigmas });
+  const cancels =
+    Number.isFinite(lo) &&
+    Number.isFinite(hi) &&
+    bandCancels(lo, hi, { ...physicsOptsOf(physics), sigmas: model.sigmas });
   return (
     <li className={`model-row${model.visible ? "" : " hidden-model"}`} data-model-id={model.id}>
       <div className="model-row-main">
@@ -132,7 +141,9 @@ function ModelRow({ id, index, count }: { id: string; index: number; count: numb
           className="swatch"
           aria-label={`Colour of ${model.label}`}
           value={/^#[0-9a-f]{6}$/i.test(model.colour) ? model.colour : "#1f4e8c"}
-          onChange={(e) => updateModel(model.id, { colour: e.target.value }, { coalesceKey: `model:${model.id}:colour` })}
+          onChange={(e) =>
+            updateModel(model.id, { colour: e.target.value }, { coalesceKey: `model:${model.id}:colour` })
+          }
         />
         <input
           type="text"
@@ -143,24 +154,49 @@ function ModelRow({ id, index, count }: { id: string; index: number; count: numb
           onChange={(e) => updateModel(model.id, { label: e.target.value }, { coalesceKey: `model:${model.id}:label` })}
         />
         <label className="check" title="Show on the figure">
-          <input type="checkbox" checked={model.visible} onChange={(e) => updateModel(model.id, { visible: e.target.checked })} />
+          <input
+            type="checkbox"
+            checked={model.visible}
+            onChange={(e) => updateModel(model.id, { visible: e.target.checked })}
+          />
           <span className="visually-hidden">Show {model.label}</span>
         </label>
         <span className="row-buttons">
-          <button type="button" className="icon" aria-label={`Move ${model.label} up`} disabled={index === 0} onClick={() => moveModel(model.id, -1)}>
+          <button
+            type="button"
+            className="icon"
+            aria-label={`Move ${model.label} up`}
+            disabled={index === 0}
+            onClick={() => moveModel(model.id, -1)}
+          >
             ↑
           </button>
-          <button type="button" className="icon" aria-label={`Move ${model.label} down`} disabled={index === count - 1} onClick={() => moveModel(model.id, 1)}>
+          <button
+            type="button"
+            className="icon"
+            aria-label={`Move ${model.label} down`}
+            disabled={index === count - 1}
+            onClick={() => moveModel(model.id, 1)}
+          >
             ↓
           </button>
-          <button type="button" className="icon danger" aria-label={`Remove ${model.label}`} onClick={() => removeModel(model.id)}>
+          <button
+            type="button"
+            className="icon danger"
+            aria-label={`Remove ${model.label}`}
+            onClick={() => removeModel(model.id)}
+          >
             ✕
           </button>
         </span>
       </div>
       <div className="model-row-detail">
         <EOverNField model={model} />
-        <select aria-label={`Line style of ${model.label}`} value={model.lineStyle} onChange={(e) => updateModel(model.id, { lineStyle: e.target.value as LineStyle })}>
+        <select
+          aria-label={`Line style of ${model.label}`}
+          value={model.lineStyle}
+          onChange={(e) => updateModel(model.id, { lineStyle: e.target.value as LineStyle })}
+        >
           {LINE_STYLES.map((s) => (
             <option key={s.value} value={s.value}>
               {s.label}
@@ -170,7 +206,11 @@ function ModelRow({ id, index, count }: { id: string; index: number; count: numb
         <SpreadField model={model} />
       </div>
       {cancels ? (
-        <p className="model-note" data-testid="cancellation-note" title="The E/N interval contains c_γ, so g_aγγ cancels inside the band and no finite limit excludes all of it">
+        <p
+          className="model-note"
+          data-testid="cancellation-note"
+          title="The E/N interval contains c_γ, so g_aγγ cancels inside the band and no finite limit excludes all of it"
+        >
           reaches g = 0 (cancellation)
         </p>
       ) : null}
@@ -180,7 +220,12 @@ function ModelRow({ id, index, count }: { id: string; index: number; count: numb
 
 export function ModelList() {
   const ids = useAxband(useShallow(selectModelIds));
-  if (ids.length === 0) return <p className="empty">No models yet: type an E/N above, pick one from the catalogue, or build one in the anomaly calculator.</p>;
+  if (ids.length === 0)
+    return (
+      <p className="empty">
+        No models yet: type an E/N above, pick one from the catalogue, or build one in the anomaly calculator.
+      </p>
+    );
   return (
     <ul className="model-list" aria-label="Models">
       {ids.map((id, i) => (

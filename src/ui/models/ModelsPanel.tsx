@@ -21,7 +21,14 @@ function CalculatorDialog({ open, onClose }: { open: boolean; onClose: () => voi
   // A portal: the sidebar is a sticky stacking context, and the dialog must cover the whole page.
   return createPortal(
     <div className="dialog-backdrop" hidden={!open} onMouseDown={(e) => e.target === e.currentTarget && onClose()}>
-      <div className="dialog" role="dialog" aria-modal="true" aria-labelledby="calculator-title" ref={panel} tabIndex={-1}>
+      <div
+        className="dialog"
+        role="dialog"
+        aria-modal="true"
+        aria-labelledby="calculator-title"
+        ref={panel}
+        tabIndex={-1}
+      >
         <div className="dialog-head">
           <h2 id="calculator-title">Anomaly calculator</h2>
           <button type="button" className="icon" aria-label="Close the anomaly calculator" onClick={onClose}>
@@ -29,7 +36,8 @@ function CalculatorDialog({ open, onClose }: { open: boolean; onClose: () => voi
           </button>
         </div>
         <p className="note">
-          Left-handed Weyl fermions (a right-handed field enters with its PQ charge negated): N = Σ X·T(R)·n_w, E = Σ X·d(R)·Σ Q², N_DW = |2N/X_S|.
+          Left-handed Weyl fermions (a right-handed field enters with its PQ charge negated): N = Σ X·T(R)·n_w, E = Σ
+          X·d(R)·Σ Q², N_DW = |2N/X_S|.
         </p>
         <AnomalyCalculator />
       </div>

@@ -9,7 +9,18 @@ import { siFormat, sciFormat } from "../format";
 import { useAxband } from "../store";
 import { downloadText, safeFileName } from "../export/download";
 import { copyText } from "../share/clipboard";
-import { filterRows, nextSort, NO_FILTER, rowKey, sortRows, VERDICT_GROUPS, verdictText, type RowFilter, type SortKey, type SortState } from "./table-logic";
+import {
+  filterRows,
+  nextSort,
+  NO_FILTER,
+  rowKey,
+  sortRows,
+  VERDICT_GROUPS,
+  verdictText,
+  type RowFilter,
+  type SortKey,
+  type SortState,
+} from "./table-logic";
 import { ChoiceField, type Choice } from "../layout/ChoiceField";
 import "../curves/curves.css";
 import "./overlap.css";
@@ -61,12 +72,25 @@ export function OverlapPanel() {
   // Only models, curves and constants change the table; the figure (zoom, preset) does not.
   const { rows, pending } = useOverlapRows(models, curves, physics);
   const shown = useMemo(() => sortRows(filterRows(rows, filter), sort), [rows, filter, sort]);
-  const modelChoices = useMemo(() => withAll([...new Map(rows.map((r) => [r.modelId, r.modelLabel])).entries()]), [rows]);
-  const curveChoices = useMemo(() => withAll([...new Map(rows.map((r) => [r.curveId, r.curveLabel])).entries()]), [rows]);
+  const modelChoices = useMemo(
+    () => withAll([...new Map(rows.map((r) => [r.modelId, r.modelLabel])).entries()]),
+    [rows],
+  );
+  const curveChoices = useMemo(
+    () => withAll([...new Map(rows.map((r) => [r.curveId, r.curveLabel])).entries()]),
+    [rows],
+  );
   const base = safeFileName(projectName === "Untitled" ? "axband" : projectName, "axband");
 
   const selectedKey =
-    highlight && shown.find((r) => r.massMinEv === highlight.massMinEv && r.massMaxEv === highlight.massMaxEv && r.modelId === highlight.modelId && r.curveId === highlight.curveId);
+    highlight &&
+    shown.find(
+      (r) =>
+        r.massMinEv === highlight.massMinEv &&
+        r.massMaxEv === highlight.massMaxEv &&
+        r.modelId === highlight.modelId &&
+        r.curveId === highlight.curveId,
+    );
 
   const visibleModels = models.filter((m) => m.visible).length;
   const visibleCurves = curves.filter((c) => c.visible).length;
@@ -77,8 +101,8 @@ export function OverlapPanel() {
         <h2 id="ax-overlap-title">Overlap table</h2>
         <span className="ax-hint" aria-live="polite">
           {pending ? "updating… · " : ""}
-          {shown.length === rows.length ? `${rows.length} rows` : `${shown.length} of ${rows.length} rows`} · {visibleModels} model{visibleModels === 1 ? "" : "s"} ×{" "}
-          {visibleCurves} curve{visibleCurves === 1 ? "" : "s"}
+          {shown.length === rows.length ? `${rows.length} rows` : `${shown.length} of ${rows.length} rows`} ·{" "}
+          {visibleModels} model{visibleModels === 1 ? "" : "s"} × {visibleCurves} curve{visibleCurves === 1 ? "" : "s"}
         </span>
       </div>
       {rows.length === 0 ? (
@@ -90,8 +114,20 @@ export function OverlapPanel() {
       ) : (
         <>
           <div className="ax-overlap-tools">
-            <ChoiceField label="Model" ariaLabel="Filter by model" value={filter.modelId ?? ""} choices={modelChoices} onChange={(v) => setFilter({ ...filter, modelId: v || null })} />
-            <ChoiceField label="Curve" ariaLabel="Filter by curve" value={filter.curveId ?? ""} choices={curveChoices} onChange={(v) => setFilter({ ...filter, curveId: v || null })} />
+            <ChoiceField
+              label="Model"
+              ariaLabel="Filter by model"
+              value={filter.modelId ?? ""}
+              choices={modelChoices}
+              onChange={(v) => setFilter({ ...filter, modelId: v || null })}
+            />
+            <ChoiceField
+              label="Curve"
+              ariaLabel="Filter by curve"
+              value={filter.curveId ?? ""}
+              choices={curveChoices}
+              onChange={(v) => setFilter({ ...filter, curveId: v || null })}
+            />
             <ChoiceField
               label="Verdict"
               ariaLabel="Filter by verdict"
@@ -100,10 +136,18 @@ export function OverlapPanel() {
               onChange={(v) => setFilter({ ...filter, verdict: v || null })}
             />
             <span className="ax-overlap-export">
-              <button type="button" data-testid="overlap-csv" onClick={() => downloadText(`${base}-overlap.csv`, overlapTableToCsv(shown), "text/csv")}>
+              <button
+                type="button"
+                data-testid="overlap-csv"
+                onClick={() => downloadText(`${base}-overlap.csv`, overlapTableToCsv(shown), "text/csv")}
+              >
                 CSV
               </button>
-              <button type="button" data-testid="overlap-md" onClick={() => downloadText(`${base}-overlap.md`, overlapTableToMarkdown(shown), "text/markdown")}>
+              <button
+                type="button"
+                data-testid="overlap-md"
+                onClick={() => downloadText(`${base}-overlap.md`, overlapTableToMarkdown(shown), "text/markdown")}
+              >
                 Markdown
               </button>
               <button
@@ -111,7 +155,12 @@ export function OverlapPanel() {
                 data-testid="overlap-copy-md"
                 onClick={() =>
                   void copyText(overlapTableToMarkdown(shown)).then((ok) =>
-                    pushMessage(ok ? "status" : "alert", ok ? "Overlap table copied as Markdown." : "The browser gave no clipboard access; use the Markdown download instead."),
+                    pushMessage(
+                      ok ? "status" : "alert",
+                      ok
+                        ? "Overlap table copied as Markdown."
+                        : "The browser gave no clipboard access; use the Markdown download instead.",
+                    ),
                   )
                 }
               >
@@ -126,9 +175,18 @@ export function OverlapPanel() {
                   {COLUMNS.map((c) => {
                     const active = c.key !== null && sort?.key === c.key;
                     return (
-                      <th key={c.label} scope="col" title={c.title} aria-sort={active ? (sort?.dir === 1 ? "ascending" : "descending") : undefined}>
+                      <th
+                        key={c.label}
+                        scope="col"
+                        title={c.title}
+                        aria-sort={active ? (sort?.dir === 1 ? "ascending" : "descending") : undefined}
+                      >
                         {c.key ? (
-                          <button type="button" className="ax-sort" onClick={() => setSort(nextSort(sort, c.key as SortKey))}>
+                          <button
+                            type="button"
+                            className="ax-sort"
+                            onClick={() => setSort(nextSort(sort, c.key as SortKey))}
+                          >
                             {c.label}
                             <span aria-hidden="true" className="ax-sort-mark">
                               {active ? (sort?.dir === 1 ? "▲" : "▼") : ""}
@@ -152,11 +210,31 @@ export function OverlapPanel() {
                       className={`ax-kind-${r.kind}${selected ? " ax-selected" : ""}`}
                       aria-selected={selected}
                       tabIndex={0}
-                      onClick={() => setHighlight(selected ? null : { massMinEv: r.massMinEv, massMaxEv: r.massMaxEv, modelId: r.modelId, curveId: r.curveId })}
+                      onClick={() =>
+                        setHighlight(
+                          selected
+                            ? null
+                            : {
+                                massMinEv: r.massMinEv,
+                                massMaxEv: r.massMaxEv,
+                                modelId: r.modelId,
+                                curveId: r.curveId,
+                              },
+                        )
+                      }
                       onKeyDown={(e) => {
                         if (e.key === "Enter" || e.key === " ") {
                           e.preventDefault();
-                          setHighlight(selected ? null : { massMinEv: r.massMinEv, massMaxEv: r.massMaxEv, modelId: r.modelId, curveId: r.curveId });
+                          setHighlight(
+                            selected
+                              ? null
+                              : {
+                                  massMinEv: r.massMinEv,
+                                  massMaxEv: r.massMaxEv,
+                                  modelId: r.modelId,
+                                  curveId: r.curveId,
+                                },
+                          );
                         }
                       }}
                     >
@@ -179,13 +257,17 @@ export function OverlapPanel() {
           </div>
           {shown.length > ROWS_SHOWN ? (
             <p className="ax-hint">
-              Showing {showAll ? "all" : `the first ${ROWS_SHOWN}`} of {shown.length} rows (the exports always hold all of them).{" "}
+              Showing {showAll ? "all" : `the first ${ROWS_SHOWN}`} of {shown.length} rows (the exports always hold all
+              of them).{" "}
               <button type="button" onClick={() => setShowAll(!showAll)}>
                 {showAll ? `Show the first ${ROWS_SHOWN}` : "Show all"}
               </button>
             </p>
           ) : null}
-          <p className="ax-hint">Click a row to highlight its interval on the figure. Curves are interpolated linearly in log–log between their points; nothing is claimed outside a curve&apos;s mass range.</p>
+          <p className="ax-hint">
+            Click a row to highlight its interval on the figure. Curves are interpolated linearly in log–log between
+            their points; nothing is claimed outside a curve&apos;s mass range.
+          </p>
         </>
       )}
     </section>

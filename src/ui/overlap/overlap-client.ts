@@ -3,7 +3,7 @@
 // or the worker fails to start. `useOverlapRows` gives the rows for the current models, curves and constants.
 import { useEffect, useMemo, useRef, useState } from "react";
 import { overlapTable, type OverlapRow } from "../../data";
-import type { Curve, Model, PhysicsSettings, Project } from "../../data/types";
+import type { Curve, Model, PhysicsSettings, Project } from "../../project/types";
 import { useAxband } from "../store";
 
 type CurveMeta = Omit<Curve, "massEv" | "gInvGeV">;
@@ -107,9 +107,16 @@ export function computeOverlapRows(project: Project): Promise<OverlapRow[]> {
  * The overlap rows for the current models, curves and constants (the figure does not change them), and
  * whether a newer computation is still running. Synchronous where there is no Worker.
  */
-export function useOverlapRows(models: Model[], curves: Curve[], physics: PhysicsSettings): { rows: OverlapRow[]; pending: boolean } {
+export function useOverlapRows(
+  models: Model[],
+  curves: Curve[],
+  physics: PhysicsSettings,
+): { rows: OverlapRow[]; pending: boolean } {
   const sync = !overlapWorkerAvailable();
-  const syncRows = useMemo(() => (sync ? overlapTable({ ...useAxband.getState().project, models, curves, physics }) : null), [sync, models, curves, physics]);
+  const syncRows = useMemo(
+    () => (sync ? overlapTable({ ...useAxband.getState().project, models, curves, physics }) : null),
+    [sync, models, curves, physics],
+  );
   const [state, setState] = useState<{ rows: OverlapRow[]; job: number }>({ rows: [], job: 0 });
   const latest = useRef(0);
   useEffect(() => {

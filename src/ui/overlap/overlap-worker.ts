@@ -1,9 +1,9 @@
 // Module Web Worker that computes the overlap table off the main thread (a million-point curve takes a
 // good fraction of a second per model). Curve arrays arrive once per array and are kept by id, so later
 // requests (a model edited, a curve restyled) send only ids.
-import { overlapTable } from "../../data/overlap-table";
+import { overlapTable } from "../../analysis/overlap-table";
 import type { OverlapRequest, OverlapResponse } from "./overlap-client";
-import type { Project } from "../../data/types";
+import type { Project } from "../../project/types";
 
 const scope = self as unknown as {
   onmessage: ((ev: MessageEvent<OverlapRequest>) => void) | null;

@@ -57,7 +57,10 @@ function verdictMatches(kind: OverlapKind, v: string): boolean {
 /** Rows passing the filter, in their original order. */
 export function filterRows(rows: readonly OverlapRow[], f: RowFilter): OverlapRow[] {
   return rows.filter(
-    (r) => (f.modelId === null || r.modelId === f.modelId) && (f.curveId === null || r.curveId === f.curveId) && (f.verdict === null || verdictMatches(r.kind, f.verdict)),
+    (r) =>
+      (f.modelId === null || r.modelId === f.modelId) &&
+      (f.curveId === null || r.curveId === f.curveId) &&
+      (f.verdict === null || verdictMatches(r.kind, f.verdict)),
   );
 }
 

@@ -2,7 +2,7 @@
 // own values with uncertainties and a label), each published set shown with its source.
 import { useState } from "react";
 import { REF_2016, REF_2019, type AxionConstants } from "../../physics/constants";
-import type { PhysicsSettings } from "../../data/types";
+import type { PhysicsSettings } from "../../project/types";
 import { selectPhysics, useAxband } from "../store";
 
 type CustomKey = "cGamma" | "cGammaSigma" | "kMuEv" | "kMuEvSigma";
@@ -11,11 +11,22 @@ function refSummary(c: AxionConstants): string {
   return `c_γ = ${c.cGamma} ± ${c.cGammaSigma}, K = ${c.kMuEv} ± ${c.kMuEvSigma} μeV`;
 }
 
-function CustomNumber({ label, field, value, positive }: { label: string; field: CustomKey; value: number; positive: boolean }) {
+function CustomNumber({
+  label,
+  field,
+  value,
+  positive,
+}: {
+  label: string;
+  field: CustomKey;
+  value: number;
+  positive: boolean;
+}) {
   const setPhysics = useAxband((s) => s.setPhysics);
   const [draft, setDraft] = useState<string | null>(null);
   const v = Number((draft ?? "").trim());
-  const bad = draft !== null && (draft.trim() === "" || !Number.isFinite(v) || (positive ? v <= 0 : v < 0 && field !== "cGamma"));
+  const bad =
+    draft !== null && (draft.trim() === "" || !Number.isFinite(v) || (positive ? v <= 0 : v < 0 && field !== "cGamma"));
   return (
     <label className="setting">
       <span className="field-label">{label}</span>
@@ -30,11 +41,19 @@ function CustomNumber({ label, field, value, positive }: { label: string; field:
           setDraft(t);
           const n = Number(t.trim());
           const ok = t.trim() !== "" && Number.isFinite(n) && (positive ? n > 0 : n >= 0 || field === "cGamma");
-          if (ok) setPhysics({ custom: { [field]: n } as Partial<PhysicsSettings["custom"]> }, { coalesceKey: `physics:${field}` });
+          if (ok)
+            setPhysics(
+              { custom: { [field]: n } as Partial<PhysicsSettings["custom"]> },
+              { coalesceKey: `physics:${field}` },
+            );
         }}
         onBlur={() => setDraft(null)}
       />
-      {bad ? <span className="field-error">{positive ? "must be a positive number" : "must be a number ≥ 0"}; kept {value}</span> : null}
+      {bad ? (
+        <span className="field-error">
+          {positive ? "must be a positive number" : "must be a number ≥ 0"}; kept {value}
+        </span>
+      ) : null}
     </label>
   );
 }
@@ -44,7 +63,13 @@ export function ConstantsPanel() {
   const setPhysics = useAxband((s) => s.setPhysics);
   const radio = (ref: PhysicsSettings["ref"], label: string, detail: string) => (
     <label className="radio">
-      <input type="radio" name="physics-ref" value={ref} checked={physics.ref === ref} onChange={() => setPhysics({ ref })} />
+      <input
+        type="radio"
+        name="physics-ref"
+        value={ref}
+        checked={physics.ref === ref}
+        onChange={() => setPhysics({ ref })}
+      />
       <span>
         <span className="radio-title">{label}</span>
         <span className="radio-detail">{detail}</span>
@@ -68,7 +93,11 @@ export function ConstantsPanel() {
           </div>
           <label className="setting">
             <span className="field-label">Label (shown in the sources)</span>
-            <input type="text" value={physics.custom.label} onChange={(e) => setPhysics({ custom: { label: e.target.value } }, { coalesceKey: "physics:label" })} />
+            <input
+              type="text"
+              value={physics.custom.label}
+              onChange={(e) => setPhysics({ custom: { label: e.target.value } }, { coalesceKey: "physics:label" })}
+            />
           </label>
         </div>
       ) : null}

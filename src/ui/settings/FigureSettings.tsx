@@ -1,7 +1,7 @@
 // The Figure settings section: size preset, typed axis ranges (validated; the previous range is kept on a
 // bad entry), y view, top axis, grid, legend place, font size and title.
 import { useId, useState } from "react";
-import type { Figure, LegendPlace, SizePreset, TopAxis, YView } from "../../data/types";
+import type { Figure, LegendPlace, SizePreset, TopAxis, YView } from "../../project/types";
 import { useShallow } from "zustand/react/shallow";
 import { useAxband, type AxbandState } from "../store";
 
@@ -41,18 +41,36 @@ export function rangeText(v: number): string {
 }
 
 /** Validates a typed axis range; returns the range or a message naming what is wrong. */
-export function checkRange(minText: string, maxText: string, what: string): { ok: true; range: [number, number] } | { ok: false; error: string } {
+export function checkRange(
+  minText: string,
+  maxText: string,
+  what: string,
+): { ok: true; range: [number, number] } | { ok: false; error: string } {
   const lo = Number(minText.trim().replace(/\u2212/g, "-"));
   const hi = Number(maxText.trim().replace(/\u2212/g, "-"));
-  if (minText.trim() === "" || !Number.isFinite(lo)) return { ok: false, error: `${what} min: “${minText}” is not a number` };
-  if (maxText.trim() === "" || !Number.isFinite(hi)) return { ok: false, error: `${what} max: “${maxText}” is not a number` };
+  if (minText.trim() === "" || !Number.isFinite(lo))
+    return { ok: false, error: `${what} min: “${minText}” is not a number` };
+  if (maxText.trim() === "" || !Number.isFinite(hi))
+    return { ok: false, error: `${what} max: “${maxText}” is not a number` };
   if (lo <= 0 || hi <= 0) return { ok: false, error: `${what}: both ends must be positive (log axis)` };
   if (lo >= hi) return { ok: false, error: `${what}: min must be less than max` };
   if (hi / lo > 1e40) return { ok: false, error: `${what}: at most 40 decades` };
   return { ok: true, range: [lo, hi] };
 }
 
-function RangeFields({ label, unit, range, onApply, testid }: { label: string; unit: string; range: [number, number]; onApply: (r: [number, number]) => void; testid: string }) {
+function RangeFields({
+  label,
+  unit,
+  range,
+  onApply,
+  testid,
+}: {
+  label: string;
+  unit: string;
+  range: [number, number];
+  onApply: (r: [number, number]) => void;
+  testid: string;
+}) {
   const [draft, setDraft] = useState<[string, string] | null>(null);
   const [error, setError] = useState<string | null>(null);
   const errId = useId();
@@ -113,7 +131,17 @@ function RangeFields({ label, unit, range, onApply, testid }: { label: string; u
   );
 }
 
-function Select<T extends string>({ label, value, options, onChange }: { label: string; value: T; options: { value: T; label: string }[]; onChange: (v: T) => void }) {
+function Select<T extends string>({
+  label,
+  value,
+  options,
+  onChange,
+}: {
+  label: string;
+  value: T;
+  options: { value: T; label: string }[];
+  onChange: (v: T) => void;
+}) {
   return (
     <label className="setting">
       <span className="field-label">{label}</span>
@@ -128,7 +156,21 @@ function Select<T extends string>({ label, value, options, onChange }: { label: 
   );
 }
 
-function NumberSetting({ label, value, min, max, step, onChange }: { label: string; value: number; min: number; max: number; step: number; onChange: (v: number) => void }) {
+function NumberSetting({
+  label,
+  value,
+  min,
+  max,
+  step,
+  onChange,
+}: {
+  label: string;
+  value: number;
+  min: number;
+  max: number;
+  step: number;
+  onChange: (v: number) => void;
+}) {
   const [draft, setDraft] = useState<string | null>(null);
   return (
     <label className="setting">
@@ -154,15 +196,31 @@ function NumberSetting({ label, value, min, max, step, onChange }: { label: stri
 /** The typed axis ranges: the only part of the settings that follows zoom and pan. */
 function ViewRanges() {
   const { massRangeEv, yRange, yView } = useAxband(
-    useShallow((s: AxbandState) => ({ massRangeEv: s.project.figure.massRangeEv, yRange: s.project.figure.yRange, yView: s.project.figure.yView })),
+    useShallow((s: AxbandState) => ({
+      massRangeEv: s.project.figure.massRangeEv,
+      yRange: s.project.figure.yRange,
+      yView: s.project.figure.yView,
+    })),
   );
   const setView = useAxband((s) => s.setView);
   const resetView = useAxband((s) => s.resetView);
   const yLabel = yView === "coupling" ? "g_aγγ" : yView === "normalized" ? "|E/N − c_γ|" : "|g_γ|";
   return (
     <>
-      <RangeFields label="m_a" unit="eV" testid="range-mass" range={massRangeEv} onApply={(r) => setView(r, useAxband.getState().project.figure.yRange)} />
-      <RangeFields label={yLabel} unit={yView === "coupling" ? "GeV⁻¹" : ""} testid="range-y" range={yRange} onApply={(r) => setView(useAxband.getState().project.figure.massRangeEv, r)} />
+      <RangeFields
+        label="m_a"
+        unit="eV"
+        testid="range-mass"
+        range={massRangeEv}
+        onApply={(r) => setView(r, useAxband.getState().project.figure.yRange)}
+      />
+      <RangeFields
+        label={yLabel}
+        unit={yView === "coupling" ? "GeV⁻¹" : ""}
+        testid="range-y"
+        range={yRange}
+        onApply={(r) => setView(useAxband.getState().project.figure.massRangeEv, r)}
+      />
       <button type="button" onClick={resetView}>
         Reset view
       </button>
@@ -187,8 +245,22 @@ export function FigureSettings() {
       <Select label="Size" value={figure.preset} options={PRESETS} onChange={(v) => set({ preset: v })} />
       {figure.preset === "custom" ? (
         <div className="inline-row">
-          <NumberSetting label="Width (mm)" value={figure.customWidthMm} min={20} max={1000} step={1} onChange={(v) => set({ customWidthMm: v }, "figure:width")} />
-          <NumberSetting label="Height (mm)" value={figure.customHeightMm} min={20} max={1000} step={1} onChange={(v) => set({ customHeightMm: v }, "figure:height")} />
+          <NumberSetting
+            label="Width (mm)"
+            value={figure.customWidthMm}
+            min={20}
+            max={1000}
+            step={1}
+            onChange={(v) => set({ customWidthMm: v }, "figure:width")}
+          />
+          <NumberSetting
+            label="Height (mm)"
+            value={figure.customHeightMm}
+            min={20}
+            max={1000}
+            step={1}
+            onChange={(v) => set({ customHeightMm: v }, "figure:height")}
+          />
         </div>
       ) : null}
       <ViewRanges />
@@ -196,7 +268,14 @@ export function FigureSettings() {
       <Select label="Top axis" value={figure.topAxis} options={TOP_AXES} onChange={(v) => set({ topAxis: v })} />
       <Select label="Legend" value={figure.legend} options={LEGEND} onChange={(v) => set({ legend: v })} />
       <div className="inline-row">
-        <NumberSetting label="Font (pt)" value={figure.fontPt} min={5} max={36} step={0.5} onChange={(v) => set({ fontPt: v }, "figure:font")} />
+        <NumberSetting
+          label="Font (pt)"
+          value={figure.fontPt}
+          min={5}
+          max={36}
+          step={0.5}
+          onChange={(v) => set({ fontPt: v }, "figure:font")}
+        />
         <label className="check setting">
           <input type="checkbox" checked={figure.grid} onChange={(e) => set({ grid: e.target.checked })} />
           Grid
@@ -204,7 +283,12 @@ export function FigureSettings() {
       </div>
       <label className="setting">
         <span className="field-label">Title</span>
-        <input type="text" value={figure.title} placeholder="(none)" onChange={(e) => set({ title: e.target.value }, "figure:title")} />
+        <input
+          type="text"
+          value={figure.title}
+          placeholder="(none)"
+          onChange={(e) => set({ title: e.target.value }, "figure:title")}
+        />
       </label>
     </div>
   );

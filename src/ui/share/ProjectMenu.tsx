@@ -15,7 +15,10 @@ import "../importer/importer.css";
 import "./share.css";
 
 /** The page address with a fragment (the share link). */
-export function linkUrl(fragment: string, loc: Pick<Location, "origin" | "pathname" | "search"> = window.location): string {
+export function linkUrl(
+  fragment: string,
+  loc: Pick<Location, "origin" | "pathname" | "search"> = window.location,
+): string {
   return `${loc.origin}${loc.pathname}${loc.search}#${fragment}`;
 }
 
@@ -80,17 +83,29 @@ export function ProjectMenu() {
     setOpen(true);
     const copied = await copyText(url);
     const left = auto.omittedCurves.length;
-    const leftOut = left > 0 ? ` It leaves out ${left === 1 ? "the curve" : `${left} curves`} (too much data for a link): ${auto.omittedCurves.join(", ")}. Save the project file to share ${left === 1 ? "it" : "them"}.` : "";
-    if (copied) pushMessage("status", `Link copied to the clipboard (${url.length.toLocaleString("en")} characters).${leftOut}`);
+    const leftOut =
+      left > 0
+        ? ` It leaves out ${left === 1 ? "the curve" : `${left} curves`} (too much data for a link): ${auto.omittedCurves.join(", ")}. Save the project file to share ${left === 1 ? "it" : "them"}.`
+        : "";
+    if (copied)
+      pushMessage("status", `Link copied to the clipboard (${url.length.toLocaleString("en")} characters).${leftOut}`);
     else {
       field.current?.select();
-      pushMessage("status", `Link ready: it is selected in the Project menu, copy it with Ctrl+C (the browser gave no clipboard access).${leftOut}`);
+      pushMessage(
+        "status",
+        `Link ready: it is selected in the Project menu, copy it with Ctrl+C (the browser gave no clipboard access).${leftOut}`,
+      );
     }
   }, [pushMessage]);
 
   return (
     <span className="ax-header-group ax-panel ax-project">
-      <button type="button" data-testid="share-link" title="Copy a link that reopens this exact figure" onClick={() => void share()}>
+      <button
+        type="button"
+        data-testid="share-link"
+        title="Copy a link that reopens this exact figure"
+        onClick={() => void share()}
+      >
         Copy link
       </button>
       <Popover label="Project ▾" ariaLabel="Project menu" open={open} onOpenChange={setOpen} testId="project-menu">
@@ -111,19 +126,27 @@ export function ProjectMenu() {
               {link.auto.omittedCurves.length > 0 ? (
                 <div className="ax-link-omitted" data-testid="share-omitted">
                   <p>
-                    Left out of the link (too much data): <b>{link.auto.omittedCurves.join(", ")}</b>. The link keeps the models, the figure and
-                    the constants.
+                    Left out of the link (too much data): <b>{link.auto.omittedCurves.join(", ")}</b>. The link keeps
+                    the models, the figure and the constants.
                   </p>
-                  <button type="button" onClick={() => pushMessage("status", `Saved ${saveProjectFile()} with every curve.`)}>
+                  <button
+                    type="button"
+                    onClick={() => pushMessage("status", `Saved ${saveProjectFile()} with every curve.`)}
+                  >
                     Save the project file instead
                   </button>
                 </div>
               ) : (
-                <p className="ax-hint">Opens this exact figure{project.curves.length > 0 ? ", curves included" : ""}.</p>
+                <p className="ax-hint">
+                  Opens this exact figure{project.curves.length > 0 ? ", curves included" : ""}.
+                </p>
               )}
             </>
           ) : (
-            <p className="ax-hint">&ldquo;Copy link&rdquo; puts the whole project into a link (nothing is uploaded: it all sits in the part after #).</p>
+            <p className="ax-hint">
+              &ldquo;Copy link&rdquo; puts the whole project into a link (nothing is uploaded: it all sits in the part
+              after #).
+            </p>
           )}
         </section>
         <section>
@@ -141,7 +164,11 @@ export function ProjectMenu() {
             />
           </label>
           <div className="ax-export-row">
-            <button type="button" data-testid="save-project" onClick={() => pushMessage("status", `Saved ${saveProjectFile()}.`)}>
+            <button
+              type="button"
+              data-testid="save-project"
+              onClick={() => pushMessage("status", `Saved ${saveProjectFile()}.`)}
+            >
               Save project
             </button>
             <label className="ax-button-like ax-button-plain">
@@ -165,7 +192,9 @@ export function ProjectMenu() {
               />
             </label>
           </div>
-          <p className="ax-hint">A project file holds everything, curve data included. An SVG exported by axband opens as well.</p>
+          <p className="ax-hint">
+            A project file holds everything, curve data included. An SVG exported by axband opens as well.
+          </p>
         </section>
       </Popover>
     </span>

@@ -2,8 +2,8 @@
 // exported by axband (the project travels in its <metadata>). Validation is the data core's; this only
 // routes the file and words the outcome.
 import { MAX_IMPORT_BYTES, projectFromFile } from "../../data";
-import { extractProjectFromSvg } from "../../plot/figure-file";
-import type { Project } from "../../data/types";
+import { extractProjectFromSvg } from "../../formats/figure-file";
+import type { Project } from "../../project/types";
 
 export type OpenOutcome = { ok: true; project: Project; message: string } | { ok: false; error: string };
 
@@ -18,7 +18,10 @@ export function isProjectFileName(name: string): boolean {
 export async function openProjectFile(file: Blob & { name: string }): Promise<OpenOutcome> {
   if (file.size === 0) return { ok: false, error: `${file.name} is empty.` };
   if (file.size > MAX_IMPORT_BYTES) {
-    return { ok: false, error: `${file.name} is ${(file.size / 1e6).toFixed(0)} MB; the limit is ${(MAX_IMPORT_BYTES / 1e6).toFixed(0)} MB.` };
+    return {
+      ok: false,
+      error: `${file.name} is ${(file.size / 1e6).toFixed(0)} MB; the limit is ${(MAX_IMPORT_BYTES / 1e6).toFixed(0)} MB.`,
+    };
   }
   let text: string;
   try {
@@ -26,7 +29,8 @@ export async function openProjectFile(file: Blob & { name: string }): Promise<Op
   } catch {
     return { ok: false, error: `${file.name} could not be read.` };
   }
-  const isSvg = /\.svg$/i.test(file.name) || /^\s*(<\?xml[^>]*>\s*)?(<!--[\s\S]*?-->\s*)*<svg\b/i.test(text.slice(0, 4096));
+  const isSvg =
+    /\.svg$/i.test(file.name) || /^\s*(<\?xml[^>]*>\s*)?(<!--[\s\S]*?-->\s*)*<svg\b/i.test(text.slice(0, 4096));
   try {
     if (isSvg) {
       const r = extractProjectFromSvg(text);

@@ -17,7 +17,20 @@ const KIND_TITLE: Record<SourceEntry["kind"], string> = {
   curve: "Curves (citations typed at import)",
 };
 
-const FIELD_ORDER = ["author", "title", "journal", "volume", "number", "pages", "year", "eprint", "doi", "url", "note", "howpublished"];
+const FIELD_ORDER = [
+  "author",
+  "title",
+  "journal",
+  "volume",
+  "number",
+  "pages",
+  "year",
+  "eprint",
+  "doi",
+  "url",
+  "note",
+  "howpublished",
+];
 
 function fieldsInOrder(e: SourceEntry): [string, string][] {
   const names = Object.keys(e.fields);
@@ -36,7 +49,9 @@ function Entry({ e }: { e: SourceEntry }) {
         </p>
       ) : null}
       <details>
-        <summary>Details ({e.entryType}, key {e.key})</summary>
+        <summary>
+          Details ({e.entryType}, key {e.key})
+        </summary>
         <dl className="ax-source-fields">
           {fieldsInOrder(e).map(([name, value]) => (
             <div key={name} className={e.fromMemory.includes(name) ? "ax-memory-field" : undefined}>
@@ -63,7 +78,9 @@ export function SourcesPanel() {
     const p = useAxband.getState().project;
     return projectSources({ ...p, models, curves, physics });
   }, [models, curves, physics]);
-  const groups = (Object.keys(KIND_TITLE) as SourceEntry["kind"][]).map((k) => ({ kind: k, items: entries.filter((e) => e.kind === k) })).filter((g) => g.items.length > 0);
+  const groups = (Object.keys(KIND_TITLE) as SourceEntry["kind"][])
+    .map((k) => ({ kind: k, items: entries.filter((e) => e.kind === k) }))
+    .filter((g) => g.items.length > 0);
   const uncited = curves.filter((c) => c.visible && c.citation.trim() === "");
 
   return (
@@ -72,7 +89,12 @@ export function SourcesPanel() {
         <h2 id="ax-sources-title">Sources</h2>
         <span className="ax-hint">{entries.length} references</span>
         <span className="ax-overlap-export">
-          <button type="button" data-testid="sources-bibtex" disabled={entries.length === 0} onClick={() => downloadText("references.bib", sourcesToBibtex(entries), "application/x-bibtex")}>
+          <button
+            type="button"
+            data-testid="sources-bibtex"
+            disabled={entries.length === 0}
+            onClick={() => downloadText("references.bib", sourcesToBibtex(entries), "application/x-bibtex")}
+          >
             BibTeX
           </button>
           <button
@@ -80,7 +102,12 @@ export function SourcesPanel() {
             disabled={entries.length === 0}
             onClick={() =>
               void copyText(sourcesToBibtex(entries)).then((ok) =>
-                pushMessage(ok ? "status" : "alert", ok ? "BibTeX copied to the clipboard." : "The browser gave no clipboard access; use the BibTeX download instead."),
+                pushMessage(
+                  ok ? "status" : "alert",
+                  ok
+                    ? "BibTeX copied to the clipboard."
+                    : "The browser gave no clipboard access; use the BibTeX download instead.",
+                ),
               )
             }
           >
@@ -100,7 +127,8 @@ export function SourcesPanel() {
       ))}
       {uncited.length > 0 ? (
         <p className="ax-source-missing" data-testid="sources-uncited">
-          No citation yet for: {uncited.map((c) => c.label).join(", ")}. Add the publication the data came from (curve list → label and citation) before you show the figure.
+          No citation yet for: {uncited.map((c) => c.label).join(", ")}. Add the publication the data came from (curve
+          list → label and citation) before you show the figure.
         </p>
       ) : null}
     </section>

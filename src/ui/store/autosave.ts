@@ -2,11 +2,11 @@
 // in IndexedDB keyed by curve id) and restores it on start; a link in the URL fragment wins over it.
 // Storage that is full or missing is reported once (role="alert") and never stops the app.
 import type { StoreApi } from "zustand";
-import type { Project } from "../../data/types";
-import { defaultProject } from "../../data/demo";
-import { decodeLink } from "../../data/link";
-import { deserializeFromStorage, serializeForStorage } from "../../data/project-file";
-import { PROJECT_LIMITS } from "../../data/schema";
+import type { Project } from "../../project/types";
+import { defaultProject } from "../../project/demo";
+import { decodeLink } from "../../formats/project-codec";
+import { deserializeFromStorage, serializeForStorage } from "../../formats/project-file";
+import { PROJECT_LIMITS } from "../../project/schema";
 import type { AxbandState } from "./types";
 
 /** localStorage key of the saved project (without curve data). */
@@ -110,7 +110,14 @@ export function chunkJoiner(head: ChunkedHead): ChunkJoiner {
     add(c) {
       if (!ok) return false;
       count++;
-      if (count > head.chunks || !c || !(c.massEv instanceof Float64Array) || !(c.gInvGeV instanceof Float64Array) || c.massEv.length !== c.gInvGeV.length || o + c.massEv.length > head.length) {
+      if (
+        count > head.chunks ||
+        !c ||
+        !(c.massEv instanceof Float64Array) ||
+        !(c.gInvGeV instanceof Float64Array) ||
+        c.massEv.length !== c.gInvGeV.length ||
+        o + c.massEv.length > head.length
+      ) {
         ok = false;
         return false;
       }
@@ -206,7 +213,10 @@ const NO_DATA = new Float64Array(0);
  * the text anyway, and converting millions of numbers on every save would stall zooming.
  */
 function metaOf(project: Project): string {
-  return serializeForStorage({ ...project, curves: project.curves.map((c) => ({ ...c, massEv: NO_DATA, gInvGeV: NO_DATA })) }).meta;
+  return serializeForStorage({
+    ...project,
+    curves: project.curves.map((c) => ({ ...c, massEv: NO_DATA, gInvGeV: NO_DATA })),
+  }).meta;
 }
 
 export interface Autosave {
@@ -282,7 +292,10 @@ export function startAutosave(store: StoreApi<AxbandState>, opts: AutosaveOpts =
     if (s.project !== prev.project) schedule();
   });
   const onPageHide = () => void save();
-  const target = globalThis as { addEventListener?: typeof addEventListener; removeEventListener?: typeof removeEventListener };
+  const target = globalThis as {
+    addEventListener?: typeof addEventListener;
+    removeEventListener?: typeof removeEventListener;
+  };
   target.addEventListener?.("pagehide", onPageHide);
 
   return {
@@ -342,7 +355,8 @@ export async function restoreAutosave(store: StoreApi<AxbandState>, opts: Autosa
       [...ids].map(async (id) => {
         try {
           const d = await withTimeout(curves.get(id), CURVE_READ_TIMEOUT_MS);
-          if (d && d.massEv instanceof Float64Array && d.gInvGeV instanceof Float64Array) data.push({ id, massEv: d.massEv, gInvGeV: d.gInvGeV });
+          if (d && d.massEv instanceof Float64Array && d.gInvGeV instanceof Float64Array)
+            data.push({ id, massEv: d.massEv, gInvGeV: d.gInvGeV });
         } catch {
           // A curve that cannot be read is reported as missing.
         }
@@ -389,10 +403,17 @@ export async function initProject(store: StoreApi<AxbandState>, opts: StartOpts 
   const r = decodeLink(fragment);
   if (r.ok) {
     const left = r.omittedCurveCount;
-    const note = left > 0 ? ` The link leaves out the data of ${left === 1 ? "one curve" : `${left} curves`}; ask the sender for the project file to see ${left === 1 ? "it" : "them"}.` : "";
-    store.getState().replaceProject(r.project, `Opened the project from the link. Undo returns to your previous project.${note}`);
+    const note =
+      left > 0
+        ? ` The link leaves out the data of ${left === 1 ? "one curve" : `${left} curves`}; ask the sender for the project file to see ${left === 1 ? "it" : "them"}.`
+        : "";
+    store
+      .getState()
+      .replaceProject(r.project, `Opened the project from the link. Undo returns to your previous project.${note}`);
   } else {
-    store.getState().pushMessage("alert", `This link could not be opened: ${sentence(r.error)} Your previous project is unchanged.`);
+    store
+      .getState()
+      .pushMessage("alert", `This link could not be opened: ${sentence(r.error)} Your previous project is unchanged.`);
   }
   (opts.clearFragment ?? (() => loc && history.replaceState(null, "", loc.pathname + loc.search)))();
 }

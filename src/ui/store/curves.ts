@@ -18,7 +18,9 @@ export const createCurvesSlice: SliceCreator<CurvesSlice> = (_set, get) => ({
     }, opts);
   },
   removeCurve(id) {
-    get().commit((p) => (p.curves.some((c) => c.id === id) ? { ...p, curves: p.curves.filter((c) => c.id !== id) } : p));
+    get().commit((p) =>
+      p.curves.some((c) => c.id === id) ? { ...p, curves: p.curves.filter((c) => c.id !== id) } : p,
+    );
   },
   moveCurve(id, delta) {
     get().commit((p) => {

@@ -1,6 +1,6 @@
 // History slice: holds the project and is the only place that changes it (commit), with bounded undo/redo
 // and coalescing of rapid steps that share a key (zoom/pan, typing in one field).
-import type { Project } from "../../data/types";
+import type { Project } from "../../project/types";
 import { COALESCE_MS, HISTORY_LIMIT, type HistorySlice, type SliceCreator } from "./types";
 
 function pushBounded(past: Project[], p: Project): Project[] {
@@ -24,7 +24,12 @@ export function createHistorySlice(initial: Project): SliceCreator<HistorySlice>
         if (next === project) return;
         const now = Date.now();
         const key = opts?.coalesceKey;
-        const merge = key !== undefined && last !== null && last.key === key && now - last.at <= COALESCE_MS && history.past.length > 0;
+        const merge =
+          key !== undefined &&
+          last !== null &&
+          last.key === key &&
+          now - last.at <= COALESCE_MS &&
+          history.past.length > 0;
         last = key !== undefined ? { key, at: now } : null;
         set({
           project: next,
@@ -37,7 +42,10 @@ export function createHistorySlice(initial: Project): SliceCreator<HistorySlice>
         if (history.past.length === 0) return;
         last = null;
         const past = history.past.slice(0, -1);
-        set({ project: history.past[history.past.length - 1], history: { past, future: [project, ...history.future] } });
+        set({
+          project: history.past[history.past.length - 1],
+          history: { past, future: [project, ...history.future] },
+        });
       },
 
       redo() {

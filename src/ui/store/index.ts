@@ -2,7 +2,7 @@
 // middleware (subscribeWithSelector) applied once to the combined store. Components select small pieces.
 //
 // State
-//   project: Project                 plain data (src/data/types); curve arrays are never mutated, only replaced
+//   project: Project                 plain data (src/project/types); curve arrays are never mutated, only replaced
 //   history: { past, future }        bounded to HISTORY_LIMIT (100) projects each way
 //   ui: { messages, highlight, hover }  transient: never saved, never undone
 //   preparing: PreparingCurve[]      big curves whose drawing preparation is being built off the main thread
@@ -24,8 +24,8 @@ import { create } from "zustand";
 import { createStore } from "zustand/vanilla";
 import { subscribeWithSelector } from "zustand/middleware";
 import type { StateCreator } from "zustand";
-import type { Project } from "../../data/types";
-import { defaultProject } from "../../data/demo";
+import type { Project } from "../../project/types";
+import { defaultProject } from "../../project/demo";
 import { createHistorySlice } from "./history";
 import { createModelsSlice } from "./models";
 import { createCurvesSlice } from "./curves";

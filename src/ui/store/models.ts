@@ -1,5 +1,5 @@
 // Models slice: add, edit, remove and reorder model lines and bands (all through commit, so undoable).
-import { newModel } from "../../data/defaults";
+import { newModel } from "../../project/defaults";
 import type { ModelsSlice, SliceCreator } from "./types";
 import { moveItem } from "./move";
 
@@ -19,7 +19,9 @@ export const createModelsSlice: SliceCreator<ModelsSlice> = (_set, get) => ({
     }, opts);
   },
   removeModel(id) {
-    get().commit((p) => (p.models.some((m) => m.id === id) ? { ...p, models: p.models.filter((m) => m.id !== id) } : p));
+    get().commit((p) =>
+      p.models.some((m) => m.id === id) ? { ...p, models: p.models.filter((m) => m.id !== id) } : p,
+    );
   },
   moveModel(id, delta) {
     get().commit((p) => {

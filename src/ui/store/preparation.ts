@@ -2,7 +2,7 @@
 // restore, a link, a project file, undo/redo, a changed role or order): the figure leaves them out until
 // the import worker has built their preparation and it is in the plot cache, so the page never freezes.
 import type { StoreApi } from "zustand";
-import type { Curve, Project } from "../../data/types";
+import type { Curve, Project } from "../../project/types";
 import { cachedPrepared } from "../../plot/decimate";
 import { drawsSorted } from "../../plot/curves";
 import { prepareSpecOf, type PrepareSpec } from "../../plot/prepare-transfer";
@@ -37,7 +37,10 @@ function isFor(p: PreparingCurve, c: Pick<Curve, "massEv" | "gInvGeV" | "role" |
 }
 
 /** True while the figure waits for this curve's preparation. */
-export function isPreparing(preparing: readonly PreparingCurve[], c: Pick<Curve, "massEv" | "gInvGeV" | "role" | "keepOrder">): boolean {
+export function isPreparing(
+  preparing: readonly PreparingCurve[],
+  c: Pick<Curve, "massEv" | "gInvGeV" | "role" | "keepOrder">,
+): boolean {
   return preparing.length > 0 && preparing.some((p) => isFor(p, c));
 }
 
@@ -45,11 +48,17 @@ export function isPreparing(preparing: readonly PreparingCurve[], c: Pick<Curve,
  * The project the figure draws now, without the curves still being prepared, and the visible ones left out
  * (for the note). The same project object when nothing is left out, so the scene is not rebuilt for nothing.
  */
-export function withoutPreparing(project: Project, preparing: readonly PreparingCurve[]): { project: Project; waiting: Curve[] } {
+export function withoutPreparing(
+  project: Project,
+  preparing: readonly PreparingCurve[],
+): { project: Project; waiting: Curve[] } {
   if (preparing.length === 0) return { project, waiting: [] };
   const left = project.curves.filter((c) => isPreparing(preparing, c));
   if (left.length === 0) return { project, waiting: [] };
-  return { project: { ...project, curves: project.curves.filter((c) => !left.includes(c)) }, waiting: left.filter((c) => c.visible) };
+  return {
+    project: { ...project, curves: project.curves.filter((c) => !left.includes(c)) },
+    waiting: left.filter((c) => c.visible),
+  };
 }
 
 /**
@@ -61,7 +70,10 @@ export function withoutPreparing(project: Project, preparing: readonly Preparing
  * @param client @default the import worker (import-client.ts)
  * @returns a function that stops watching (jobs already sent still finish and update the store).
  */
-export function watchCurvePreparation(store: StoreApi<AxbandState>, client: PreparationClient = importWorkerClient): () => void {
+export function watchCurvePreparation(
+  store: StoreApi<AxbandState>,
+  client: PreparationClient = importWorkerClient,
+): () => void {
   // Arrays already sent, by mass array: each is sent once per coupling array and order, even if it fails.
   const sent = new WeakMap<Float64Array, { g: Float64Array; sorted: boolean }[]>();
   const finish = (entry: PreparingCurve) => {

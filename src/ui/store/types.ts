@@ -1,7 +1,7 @@
 // Types of the axband store: the project (plain, saved data), its undo history, and transient UI state.
 // Split by slice so each slice creator states exactly what it adds.
 import type { StateCreator } from "zustand";
-import type { Curve, Figure, Model, PhysicsSettings, Project } from "../../data/types";
+import type { Curve, Figure, Model, PhysicsSettings, Project } from "../../project/types";
 
 /** Options of one project change. */
 export interface CommitOpts {

@@ -1,6 +1,6 @@
 // Default visible ranges per y view (what "reset view", the 0 key and double-click return to).
-import type { YView } from "../../data/types";
-import { DEFAULT_MASS_RANGE_EV, defaultYRange } from "../../data/defaults";
+import type { YView } from "../../project/types";
+import { DEFAULT_MASS_RANGE_EV, defaultYRange } from "../../project/defaults";
 
 /** Default [mass range eV, y range] for a y view (the ranges of a new project's figure). */
 export function defaultView(yView: YView): { massRangeEv: [number, number]; yRange: [number, number] } {

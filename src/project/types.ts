@@ -1,0 +1,98 @@
+// The project: the whole user state as plain data (models, curves with their data, figure, constants).
+// Everything else (lines, bands, scenes, overlap tables) is derived from it and never stored.
+import type { FermionInput } from "../physics/anomaly-types";
+
+export const PROJECT_VERSION = 1 as const;
+
+export type LineStyle = "solid" | "dashed" | "dotted" | "dashdot";
+export type CurveRole = "exclusion" | "projection" | "region";
+/** Where the legend goes; "auto" is the inner corner where it covers the least drawn content (src/plot/legend-place.ts). */
+export type LegendPlace =
+  "auto" | "top-left" | "top-right" | "bottom-left" | "bottom-right" | "outside-right" | "hidden";
+export type SizePreset = "slide" | "single-column" | "double-column" | "custom";
+export type TopAxis = "none" | "fa" | "frequency";
+/** y axis: g_aγγ itself, |E/N − c_γ|, or |g_γ| = |E/N − c_γ|/2 (model lines horizontal in the last two). */
+export type YView = "coupling" | "normalized" | "g-gamma";
+
+/** Which constants the project uses: a published set, or the user's own values. */
+export interface PhysicsSettings {
+  ref: "2016" | "2019" | "custom";
+  /** Used when ref = "custom" (kept otherwise so a switch back restores them). */
+  custom: { cGamma: number; cGammaSigma: number; kMuEv: number; kMuEvSigma: number; label: string };
+}
+
+/** Where a model's E/N came from. */
+export type ModelSource =
+  | { kind: "typed" }
+  | { kind: "catalogue"; catalogueId: string }
+  | { kind: "calculator"; fermions: FermionInput[]; scalarCharge: string };
+
+export interface Model {
+  id: string;
+  label: string;
+  /** E/N interval as exact rational or decimal strings ("8/3", "0.5"); min = max for a model line. */
+  eOverNMin: string;
+  eOverNMax: string;
+  source: ModelSource;
+  colour: string;
+  lineStyle: LineStyle;
+  /** Opacity of the band fill (0..1). */
+  fillOpacity: number;
+  visible: boolean;
+  /** Theory spread k in ±kσ (0 = none). */
+  sigmas: number;
+}
+
+export interface CurveRescale {
+  /** Local dark-matter density the publication assumed, GeV/cm³. */
+  rhoAssumed: number;
+  /** Local dark-matter density to show, GeV/cm³. */
+  rhoShown: number;
+  /** Fraction of the dark matter made of axions (0 < f ≤ 1). */
+  fraction: number;
+}
+
+export interface Curve {
+  id: string;
+  label: string;
+  role: CurveRole;
+  /** Data in internal units, as imported (before rescaling). Never mutated: replaced as a whole. */
+  massEv: Float64Array;
+  gInvGeV: Float64Array;
+  /** Keep file order instead of sorting by mass (regions always keep file order). */
+  keepOrder: boolean;
+  colour: string;
+  lineStyle: LineStyle;
+  fillOpacity: number;
+  visible: boolean;
+  rescale: CurveRescale;
+  /** Publication the data came from (free text or a BibTeX entry), shown in the sources list. */
+  citation: string;
+  fileName: string;
+}
+
+export interface Figure {
+  preset: SizePreset;
+  /** Used when preset = "custom". */
+  customWidthMm: number;
+  customHeightMm: number;
+  /** Visible ranges (the last zoom), in eV and in the units of the y view. */
+  massRangeEv: [number, number];
+  yRange: [number, number];
+  yView: YView;
+  topAxis: TopAxis;
+  grid: boolean;
+  legend: LegendPlace;
+  /** Base font size in pt at the physical size. */
+  fontPt: number;
+  title: string;
+}
+
+export interface Project {
+  version: typeof PROJECT_VERSION;
+  name: string;
+  physics: PhysicsSettings;
+  models: Model[];
+  curves: Curve[];
+  figure: Figure;
+}

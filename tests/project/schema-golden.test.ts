@@ -1,0 +1,71 @@
+// Golden links and project files, one folder per schema version (tests/project/golden/vN): each NAME.link.txt and
+// NAME.axband.json must decode, forever, to NAME.expected.json. Goldens are written once and never regenerated;
+// a new schema version adds a folder and keeps the old ones.
+import { readdirSync, readFileSync } from "node:fs";
+import { join } from "node:path";
+import { describe, expect, it } from "vitest";
+import { CURRENT_VERSION, LINK_FORMAT_VERSION, decodeLink, projectFromFile, projectsEqual } from "../../src/data/index";
+import type { Project } from "../../src/project/types";
+
+const GOLDEN = join(import.meta.dirname, "golden");
+
+/** Expected project from its plain JSON (curve data as number arrays), without going through the code under test. */
+function expectedProject(path: string): Project {
+  const raw = JSON.parse(readFileSync(path, "utf8")) as Project & { curves: { massEv: number[]; gInvGeV: number[] }[] };
+  return {
+    ...raw,
+    curves: raw.curves.map((c) => ({
+      ...c,
+      massEv: Float64Array.from(c.massEv),
+      gInvGeV: Float64Array.from(c.gInvGeV),
+    })),
+  };
+}
+
+const versions = readdirSync(GOLDEN)
+  .filter((d) => /^v\d+$/.test(d))
+  .map((d) => Number(d.slice(1)))
+  .sort((a, b) => a - b);
+
+describe("golden links and files", () => {
+  it("there is a golden folder with a link and a file for every schema version up to the current one", () => {
+    expect(versions).toEqual(Array.from({ length: CURRENT_VERSION }, (_, i) => i + 1));
+    expect(LINK_FORMAT_VERSION).toBe(CURRENT_VERSION);
+    for (const v of versions) {
+      const files = readdirSync(join(GOLDEN, `v${v}`));
+      expect(files.some((f) => f.endsWith(".link.txt"))).toBe(true);
+      expect(files.some((f) => f.endsWith(".axband.json"))).toBe(true);
+    }
+  });
+
+  for (const v of versions) {
+    const dir = join(GOLDEN, `v${v}`);
+    const files = readdirSync(dir);
+    for (const f of files.filter((x) => x.endsWith(".link.txt"))) {
+      it(`v${v}/${f} decodes to its expected project`, () => {
+        const fragment = readFileSync(join(dir, f), "utf8").trim();
+        expect(fragment.startsWith(`v${v}.`)).toBe(true);
+        const r = decodeLink(fragment);
+        if (!r.ok) throw new Error(r.error);
+        expect(r.repairs).toEqual([]);
+        const expected = expectedProject(join(dir, f.replace(/\.link\.txt$/, ".expected.json")));
+        expect(projectsEqual(r.project, expected)).toBe(true);
+      });
+    }
+    for (const f of files.filter((x) => x.endsWith(".axband.json"))) {
+      it(`v${v}/${f} opens to its expected project`, () => {
+        const r = projectFromFile(readFileSync(join(dir, f), "utf8"), f);
+        if (!r.ok) throw new Error(r.error);
+        expect(r.repairs).toEqual([]);
+        const expected = expectedProject(join(dir, f.replace(/\.axband\.json$/, ".expected.json")));
+        expect(projectsEqual(r.project, expected)).toBe(true);
+      });
+    }
+  }
+
+  it("the curve-less demo link carries no curves but says how many were left out", () => {
+    const r = decodeLink(readFileSync(join(GOLDEN, "v1", "demo-nocurves.link.txt"), "utf8"));
+    expect(r.ok && r.project.curves.length).toBe(0);
+    expect(r.ok && r.omittedCurveCount).toBe(4);
+  });
+});
