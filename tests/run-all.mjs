@@ -4,6 +4,11 @@ import { spawnSync } from "node:child_process";
 import { mkdirSync, readFileSync, rmSync, existsSync } from "node:fs";
 
 const bin = (name) => `node_modules/.bin/${name}`;
+// The same files as `npm run format` (package.json), without npm's start-up.
+const FORMAT_GLOBS = JSON.parse(readFileSync("package.json", "utf8"))
+  .scripts["format:check"].match(/"[^"]+"|\S+/g)
+  .slice(2)
+  .map((g) => g.replace(/"/g, ""));
 let passed = 0;
 let failed = 0;
 
@@ -22,6 +27,7 @@ for (const [label, cmd, args] of [
     bin("eslint"),
     ["-c", "tests/eslint.config.mjs", "--no-error-on-unmatched-pattern", "src", "tests", "bench"],
   ],
+  ["format", bin("prettier"), ["--check", "--log-level=warn", ...FORMAT_GLOBS]],
 ]) {
   if (step(label, cmd, args)) passed++;
   else failed++;
