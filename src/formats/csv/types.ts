@@ -47,7 +47,7 @@ export interface RejectedRow {
   reason: string;
 }
 
-export type ImportProblemCode = "empty" | "no-data" | "single-column" | "binary" | "too-large" | "bad-options";
+type ImportProblemCode = "empty" | "no-data" | "single-column" | "binary" | "too-large" | "bad-options";
 
 /** Why a file gave no curve at all. */
 export interface ImportProblem {
