@@ -1,6 +1,7 @@
 // Command-line arguments of the renderer (`npm run render -- …`): a pure parser from argv to options, and
 // the usage text. Kept apart from render.ts so the rules (roles per file, ranges, presets) are unit-testable.
 import type { CurveRole, SizePreset } from "../project/types";
+import type { FigureFontFamily } from "../formats/pdf/fonts";
 
 export const ROLES: readonly CurveRole[] = ["exclusion", "projection", "region"];
 export const PRESET_NAMES: readonly SizePreset[] = ["slide", "single-column", "double-column", "custom"];
@@ -8,7 +9,7 @@ export const PRESET_NAMES: readonly SizePreset[] = ["slide", "single-column", "d
 /** One input file; `role` is set for CSV files (from the --role in effect for it). */
 export interface CliInput {
   path: string;
-  kind: "project" | "svg" | "csv";
+  kind: "project" | "svg" | "pdf" | "csv";
   role: CurveRole;
 }
 
@@ -38,6 +39,8 @@ export interface CliOptions {
   massRangeEv?: [number, number];
   gRange?: [number, number];
   title?: string;
+  /** Font family of a PDF figure. @default "sans" */
+  font: FigureFontFamily;
   help: boolean;
 }
 
@@ -48,10 +51,13 @@ export const USAGE = `axband render: figures from a project without a browser
 usage:
   npm run render -- PROJECT.axband.json -o figure.svg [--png figure.png --dpi 300] [--preset single-column]
   npm run render -- exported.svg -o figure.svg        (an SVG exported by axband carries its project)
+  npm run render -- exported.pdf -o figure.pdf        (so does a PDF exported by axband, as an attachment)
   npm run render -- a.csv [--role projection] b.csv -o figure.svg [--model 8/3 --model 0..44/3]
 
 output (at least one of -o, --png, --models-csv):
-  -o, --out FILE.svg        write the figure as SVG (the same SVG the app exports)
+  -o, --out FILE.svg|.pdf   write the figure as SVG (the same SVG the app exports) or, for a name ending in
+                            .pdf, as a vector PDF of the figure's physical size with the project attached
+  --font sans|serif         the PDF's font: Computer Modern Sans or Serif, LaTeX's own look (default sans)
   --png FILE.png            write the figure as PNG
   --dpi N                   PNG dots per inch at the figure's physical size (default 300)
   --scale K                 PNG at K times the 96-px-per-inch size instead (1 or 2, as the app's 1x/2x)
@@ -82,6 +88,7 @@ function kindOf(path: string): CliInput["kind"] {
   const p = path.toLowerCase();
   if (p.endsWith(".json")) return "project";
   if (p.endsWith(".svg")) return "svg";
+  if (p.endsWith(".pdf")) return "pdf";
   return "csv";
 }
 
@@ -117,6 +124,7 @@ const WITH_VALUE = new Set([
   "--mass-range",
   "--g-range",
   "--title",
+  "--font",
 ]);
 const FLAGS = new Set(["-h", "--help", "--no-embed", "--skip-bad-rows"]);
 
@@ -125,7 +133,15 @@ const FLAGS = new Set(["-h", "--help", "--no-embed", "--skip-bad-rows"]);
  * `--` ends the options. Input kind goes by extension: `.json` project, `.svg` exported figure, else CSV.
  */
 export function parseArgs(argv: readonly string[]): ArgsResult {
-  const o: CliOptions = { inputs: [], dpi: 300, embed: true, models: [], skipBadRows: false, help: false };
+  const o: CliOptions = {
+    inputs: [],
+    dpi: 300,
+    embed: true,
+    models: [],
+    skipBadRows: false,
+    font: "sans",
+    help: false,
+  };
   const roles: CurveRole[] = [];
   const pending: { path: string; roleCount: number }[] = [];
   let onlyFiles = false;
@@ -195,6 +211,11 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
         break;
       case "--model":
         o.models.push(value);
+        break;
+      case "--font":
+        if (value !== "sans" && value !== "serif")
+          return { ok: false, error: `--font: expected sans or serif, got "${value}"` };
+        o.font = value;
         break;
       case "--mass-unit":
         o.massUnit = value;
