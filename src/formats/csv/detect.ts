@@ -92,6 +92,10 @@ export function detectLayout(lines: SniffLine[], o: CurveParseOptions): Layout |
   if ("code" in mass) return mass;
   const coupling = chooseCouplingUnit(o, units[gCol] ?? null, gCol, messages);
   if ("code" in coupling) return coupling;
+  const unknown =
+    (mass.source === "default" && unknownUnit(header?.[massCol], massCol, "mass")) ||
+    (coupling.source === "default" && unknownUnit(header?.[gCol], gCol, "coupling"));
+  if (unknown) return unknown;
   return {
     delim,
     comma,
@@ -262,6 +266,25 @@ function chooseCouplingUnit(
     return badOptions("the coupling is a multiple of a model line: choose the model line's E/N");
   }
   return { unit, source, eOverN };
+}
+
+/**
+ * A header field that names, in brackets, something that reads like a unit of this kind (ends in eV or Hz;
+ * holds eV for a coupling; or holds a character that could not be decoded) but is no unit the import knows:
+ * reading such a column in a default unit would be a silent guess, so the file stops until one is chosen.
+ */
+function unknownUnit(field: string | undefined, col: number, kind: "mass" | "coupling"): ImportProblem | null {
+  if (field === undefined) return null;
+  for (const m of field.matchAll(/[[(]([^\])]*)[\])]/g)) {
+    const t = m[1].trim();
+    if (!(t.includes("\ufffd") || (kind === "mass" ? /(?:ev|hz)$/i : /ev/i).test(t))) continue;
+    const why = t.includes("\ufffd") ? " (a character could not be decoded: is the file in another encoding?)" : "";
+    return {
+      code: "unknown-unit",
+      message: `the header of column ${col + 1} ("${field}") names the unit "${t}", which the import does not know${why}; choose the ${kind} unit`,
+    };
+  }
+  return null;
 }
 
 /** How many sample lines read as numbers in both columns with this delimiter and decimal mark. */

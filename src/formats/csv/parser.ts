@@ -103,6 +103,12 @@ export class Parser implements CurveParser {
     this.previewMax = opts.previewRows ?? 20;
     this.maxRows = opts.maxDataRows ?? Infinity;
     this.maxRejected = opts.maxRejected ?? 10000;
+    if (opts.encoding === "windows-1252") {
+      this.messages.push({
+        level: "warning",
+        text: "the file is not valid UTF-8: read as Windows-1252 (Latin-1); check the units and labels it names",
+      });
+    }
     const cap = Math.max(16, Math.min(1 << 24, Math.ceil((opts.sizeHint ?? 0) / 24)));
     this.m = new Float64Array(cap);
     this.g = new Float64Array(cap);

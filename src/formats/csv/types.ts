@@ -35,6 +35,8 @@ export interface CurveParseOptions {
   maxDataRows?: number;
   /** Keep at most this many rejected rows in the list (rejectedCount stays exact). @default 10000 */
   maxRejected?: number;
+  /** The encoding the text was decoded from (set by parseCurveSource and decodeImportBytes); a warning names it when it is not UTF-8 or UTF-16. */
+  encoding?: string;
   /** Expected number of characters, to size the arrays once. */
   sizeHint?: number;
 }
@@ -47,7 +49,8 @@ export interface RejectedRow {
   reason: string;
 }
 
-type ImportProblemCode = "empty" | "no-data" | "single-column" | "binary" | "too-large" | "bad-options";
+type ImportProblemCode =
+  "empty" | "no-data" | "single-column" | "binary" | "too-large" | "bad-options" | "unknown-unit";
 
 /** Why a file gave no curve at all. */
 export interface ImportProblem {
