@@ -3,7 +3,7 @@
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { parseArgs } from "../../src/cli/args";
-import { loadProject } from "../../src/cli/inputs";
+import { InputError, loadProject } from "../../src/cli/inputs";
 
 const REPRO = join(__dirname, "../formats/csv/repro");
 
@@ -11,6 +11,16 @@ function load(...files: string[]) {
   const a = parseArgs([...files.map((f) => join(REPRO, f)), "-o", "/tmp/unused.svg"]);
   if (!a.ok) throw new Error(a.error);
   return loadProject(a.options);
+}
+
+function refusal(file: string): string {
+  try {
+    load(file);
+  } catch (e) {
+    if (e instanceof InputError) return e.message;
+    throw e;
+  }
+  return "";
 }
 
 describe("encodings", () => {
@@ -26,5 +36,14 @@ describe("encodings", () => {
     // Header "m_a [ueV]", first row "1, 1e-14".
     expect(r.project.curves[0].massEv[0]).toBe(1e-6);
     expect(r.project.curves[0].gInvGeV[0]).toBe(1e-14);
+  });
+});
+
+describe("rows that disagree with the header are refused with file:row:column", () => {
+  it("mixed delimiters (mixed_sep.csv)", () => {
+    expect(refusal("mixed_sep.csv")).toMatch(/mixed_sep\.csv:2:1: .*mixes delimiters/);
+  });
+  it("a decimal comma with a comma delimiter (dec_comma_comma.csv)", () => {
+    expect(refusal("dec_comma_comma.csv")).toMatch(/dec_comma_comma\.csv:2:3: this row has 4 fields/);
   });
 });

@@ -50,13 +50,24 @@ export interface RejectedRow {
 }
 
 type ImportProblemCode =
-  "empty" | "no-data" | "single-column" | "binary" | "too-large" | "bad-options" | "unknown-unit";
+  | "empty"
+  | "no-data"
+  | "single-column"
+  | "binary"
+  | "too-large"
+  | "bad-options"
+  | "unknown-unit"
+  | "column-count"
+  | "mixed-delimiters";
 
 /** Why a file gave no curve at all. */
 export interface ImportProblem {
   code: ImportProblemCode;
   /** A plain sentence for the user. */
   message: string;
+  /** 1-based line and column the problem was found at, for problems of one row. */
+  row?: number;
+  column?: number;
 }
 
 export interface ImportMessage {
@@ -148,7 +159,7 @@ export function formatRejection(fileName: string, r: RejectedRow): string {
 
 /** `file: message` for a problem that stopped the import of a whole file. */
 export function formatProblem(fileName: string, p: ImportProblem): string {
-  return `${fileName}: ${p.message}`;
+  return `${fileName}${p.row === undefined ? "" : `:${p.row}:${p.column ?? 1}`}: ${p.message}`;
 }
 
 /** Human name of a delimiter for the import step. */
