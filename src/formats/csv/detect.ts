@@ -123,20 +123,15 @@ function chooseDialect(
     const d = DELIM_NAMES[o.delimiter] ?? DELIM_NAMES[o.delimiter.toLowerCase()];
     if (d === undefined) return badOptions(`unknown delimiter "${o.delimiter}" (use comma, semicolon, tab or spaces)`);
     const comma =
-      o.decimalComma ??
-      (d === 59
-        ? true
-        : d === 44
-          ? false
-          : score(sample, d, true, probeM, probeG) > score(sample, d, false, probeM, probeG));
+      o.decimalComma ?? (d !== 44 && score(sample, d, true, probeM, probeG) > score(sample, d, false, probeM, probeG));
     return { delim: d, comma };
   }
   const marks = o.decimalComma === undefined ? [false, true] : [o.decimalComma];
   const candidates: [number, boolean][] = [];
   for (const d of [44, 59, 9, WS]) {
     for (const m of marks) {
-      // Unless told otherwise, a comma delimiter goes with decimal points and a semicolon with commas.
-      if (o.decimalComma === undefined && ((d === 44 && m) || (d === 59 && !m))) continue;
+      // Unless told otherwise, a comma delimiter goes with decimal points (a decimal comma would need quotes).
+      if (o.decimalComma === undefined && d === 44 && m) continue;
       candidates.push([d, m]);
     }
   }
@@ -157,12 +152,12 @@ function chooseDialect(
       const k = consistentFields(sample, d);
       if (k > bestCount) {
         bestCount = k;
-        best = [d, d === 59];
+        best = [d, false];
       }
     }
   }
   const [delim, comma] = best;
-  return { delim, comma: o.decimalComma === undefined && delim === 59 ? true : comma };
+  return { delim, comma };
 }
 
 /** Columns: the user's, else the ones the header units point at, else 1 and 2. */

@@ -67,6 +67,8 @@ export class Parser implements CurveParser {
   private headerCols = 0;
   /** Look for rows split by another delimiter: only when the delimiter was detected, not chosen. */
   private readonly checkMixed: boolean;
+  /** Look for fields written with the other decimal mark: only when the mark was detected, not chosen. */
+  private readonly checkMark: boolean;
   massUnit: MassUnit = "eV";
   couplingUnit: CouplingUnit = "GeV^-1";
   massUnitSource: UnitSource = "default";
@@ -108,6 +110,7 @@ export class Parser implements CurveParser {
     this.previewMax = opts.previewRows ?? 20;
     this.maxRows = opts.maxDataRows ?? Infinity;
     this.maxRejected = opts.maxRejected ?? 10000;
+    this.checkMark = opts.decimalComma === undefined;
     this.checkMixed = opts.delimiter === undefined || opts.delimiter === "" || opts.delimiter === "auto";
     if (opts.encoding === "windows-1252") {
       this.messages.push({
@@ -355,6 +358,8 @@ export class Parser implements CurveParser {
     if (errCol >= 0) {
       if (onlyDelimiters(t, s, e, delim)) return;
       if (this.checkMixed && this.mixedDelimiters(t, s, e, row)) return;
+      // In a comma-separated file a decimal comma needs quotes; the column count check covers bare ones.
+      if (this.checkMark && delim !== 44 && this.mixedMarks(t, s, e, row, errCol)) return;
       this.dataRows++;
       this.reject(row, errCol + 1, reason, t, s, e);
       return;
@@ -446,6 +451,20 @@ export class Parser implements CurveParser {
       return true;
     }
     return false;
+  }
+
+  /** Stops the file when an unreadable field reads with the other decimal mark (the rows disagree on it). */
+  private mixedMarks(t: string, s: number, e: number, row: number, col: number): boolean {
+    const field = splitFields(t.slice(s, e), this.delim)[col];
+    if (field === undefined || isNumberText(field, this.comma) || !isNumberText(field, !this.comma)) return false;
+    const [here, above] = this.comma ? ["a decimal point", "decimal commas"] : ["a decimal comma", "decimal points"];
+    this.stop({
+      code: "mixed-decimal",
+      row,
+      column: col + 1,
+      message: `"${field}" writes ${here} where the rows above use ${above}: the file mixes decimal marks; choose the decimal mark`,
+    });
+    return true;
   }
 
   private reject(row: number, column: number, reason: string, t: string, s: number, e: number): void {

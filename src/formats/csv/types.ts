@@ -13,7 +13,7 @@ export interface CurveParseOptions {
   couplingUnit?: string;
   /** `,` `;` tab or ` ` (runs of spaces and tabs); also the names comma, semicolon, tab, space, whitespace. @default auto-detected */
   delimiter?: string;
-  /** Accept `,` as the decimal point. @default true for `;`, detected for tab and spaces, false for `,` */
+  /** `,` is the decimal point (and `.` is not). @default detected for `;`, tab and spaces; false for `,` */
   decimalComma?: boolean;
   /** Whether the first non-comment line names the columns. @default detected (a line with letters that is not numeric) */
   header?: boolean;
@@ -53,6 +53,7 @@ type ImportProblemCode =
   | "empty"
   | "no-data"
   | "single-column"
+  | "mixed-decimal"
   | "binary"
   | "too-large"
   | "bad-options"
