@@ -23,8 +23,8 @@ import {
   PLACEMENT_RESOLUTION,
   pickLegendPlace,
   placementCurve,
-  type Shape,
 } from "./legend-place";
+import type { Shape } from "./occupancy";
 import { modelGeometry } from "./models";
 import { constantsOf, eOverNValue, rescaleNote } from "./physics-settings";
 import { logAffine, sanitizeDomain, viewTransform } from "./scales";
@@ -143,14 +143,13 @@ interface AutoLegendFrame {
 /**
  * The place of an "auto" legend (legend-place.ts): the curves (big file-order ones reduced by placementCurve)
  * are built again at the fixed PLACEMENT_RESOLUTION (the scene's own paths follow the display resolution, and the screen must pick the
- * corner the export picks); model paths do not depend on resolution. The highlight is left out (the
+ * corner the export picks); models come as vertices and do not depend on resolution. The highlight is left out (the
  * legend must not move when a table row is hovered).
  */
 function autoLegendPlace(project: Project, f: AutoLegendFrame): LegendCorner | "outside-right" {
   const plot = { x: r2(f.layout.plot.x), y: r2(f.layout.plot.y), w: r2(f.layout.plot.w), h: r2(f.layout.plot.h) };
   const map = logAffine(f.scales, plot);
   const slope = viewTransform(f.view, f.constants).slope;
-  const nodes: SceneNode[] = [];
   const shapes: Shape[] = [];
   project.curves.forEach((cv) => {
     if (!cv.visible) return;
@@ -178,14 +177,14 @@ function autoLegendPlace(project: Project, f: AutoLegendFrame): LegendCorner | "
       },
       `place-model-${i + 1}`,
     );
-    if (g) nodes.push(...g.fills, ...g.lines);
+    if (g) shapes.push(...g.shapes);
   });
   const boxes = {} as Record<LegendCorner, { x: number; y: number; w: number; h: number }>;
   for (const corner of LEGEND_CORNERS) {
     const o = cornerLegendOrigin(f.layout.plot, corner, f.box.widthPx, f.box.heightPx, f.fonts);
     boxes[corner] = { x: o.x, y: o.y, w: f.box.widthPx, h: f.box.heightPx };
   }
-  return pickLegendPlace({ nodes, shapes, plot, boxes, outsideFits: f.outsideFits }).place;
+  return pickLegendPlace({ shapes, plot, boxes, outsideFits: f.outsideFits }).place;
 }
 
 function physicalOf(px: number): string {
