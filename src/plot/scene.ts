@@ -1,6 +1,7 @@
 // The scene builder: a project in, the complete figure out as plain layers of paths, rects and text, drawn
 // the same way on screen (SceneSvg and scene-dom.ts) and in the exported SVG (writeSvg). All defaults of a figure live here.
 import { bandCancels } from "../physics/coupling";
+import { DEFAULT_MASS_RANGE_EV, defaultYRange } from "../project/defaults";
 import type { Curve, LegendPlace, Model, Project, YView } from "../project/types";
 import type { PathNode, Scene, SceneLayer, SceneNode, ScaleConfig } from "./scene-types";
 import { axesNodes, axisTicks, gridNodes, verticalTickOpts, yTitle, type AxesFrame } from "./axes";
@@ -33,16 +34,6 @@ import { logTicks } from "./ticks";
 
 /** Font stack of every figure: Helvetica-metric faces first (the width table assumes them), then fallbacks. */
 export const FONT_FAMILY = "Helvetica, Arial, 'Liberation Sans', 'DejaVu Sans', sans-serif";
-
-/** Mass range used when the figure's is unusable, eV. */
-export const FALLBACK_MASS_RANGE_EV: [number, number] = [1e-7, 1e-2];
-
-/** y range used when the figure's is unusable, in the units of the y view. */
-export function fallbackYRange(view: YView): [number, number] {
-  if (view === "normalized") return [1e-2, 1e2];
-  if (view === "g-gamma") return [5e-3, 50];
-  return [1e-17, 1e-9];
-}
 
 export interface BuildSceneOpts {
   /** Scene size in CSS px (96/in). @default the preset's size */
@@ -209,8 +200,9 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   const widthPx = opts.widthPx && opts.widthPx > 0 ? opts.widthPx : preset.widthPx;
   const heightPx = opts.heightPx && opts.heightPx > 0 ? opts.heightPx : preset.heightPx;
   const fonts = fontsFor(fig.fontPt, preset.fontScale);
-  const massDomainEv = sanitizeDomain(fig.massRangeEv, FALLBACK_MASS_RANGE_EV);
-  const yDomain = sanitizeDomain(fig.yRange, fallbackYRange(view));
+  // An unusable range falls back to the default figure's.
+  const massDomainEv = sanitizeDomain(fig.massRangeEv, DEFAULT_MASS_RANGE_EV);
+  const yDomain = sanitizeDomain(fig.yRange, defaultYRange(view));
   const topAxis = fig.topAxis === "fa" || fig.topAxis === "frequency" ? fig.topAxis : "none";
   const legendSetting = fig.legend ?? "top-right";
 
