@@ -68,8 +68,6 @@ export {
   clipToRect,
   curvePixels,
   pathData,
-  lowerBound,
-  upperBound,
   type PreparedCurve,
   type Pyramid,
   type ColumnParams,
