@@ -1,6 +1,7 @@
 // The scene builder: a project in, the complete figure out as plain layers of paths, rects and text, drawn
 // the same way on screen (SceneSvg and scene-dom.ts) and in the exported SVG (writeSvg). All defaults of a figure live here.
 import { bandCancels } from "../physics/coupling";
+import { DEFAULT_MASS_RANGE_EV, defaultYRange } from "../project/defaults";
 import type { Curve, LegendPlace, Model, Project, YView } from "../project/types";
 import type { PathNode, Scene, SceneLayer, SceneNode, ScaleConfig } from "./scene-types";
 import { axesNodes, axisTicks, gridNodes, verticalTickOpts, yTitle, type AxesFrame } from "./axes";
@@ -23,8 +24,8 @@ import {
   PLACEMENT_RESOLUTION,
   pickLegendPlace,
   placementCurve,
-  type Shape,
 } from "./legend-place";
+import type { Shape } from "./occupancy";
 import { modelGeometry } from "./models";
 import { constantsOf, eOverNValue, rescaleNote } from "./physics-settings";
 import { logAffine, sanitizeDomain, viewTransform } from "./scales";
@@ -33,16 +34,6 @@ import { logTicks } from "./ticks";
 
 /** Font stack of every figure: Helvetica-metric faces first (the width table assumes them), then fallbacks. */
 export const FONT_FAMILY = "Helvetica, Arial, 'Liberation Sans', 'DejaVu Sans', sans-serif";
-
-/** Mass range used when the figure's is unusable, eV. */
-export const FALLBACK_MASS_RANGE_EV: [number, number] = [1e-7, 1e-2];
-
-/** y range used when the figure's is unusable, in the units of the y view. */
-export function fallbackYRange(view: YView): [number, number] {
-  if (view === "normalized") return [1e-2, 1e2];
-  if (view === "g-gamma") return [5e-3, 50];
-  return [1e-17, 1e-9];
-}
 
 export interface BuildSceneOpts {
   /** Scene size in CSS px (96/in). @default the preset's size */
@@ -143,14 +134,13 @@ interface AutoLegendFrame {
 /**
  * The place of an "auto" legend (legend-place.ts): the curves (big file-order ones reduced by placementCurve)
  * are built again at the fixed PLACEMENT_RESOLUTION (the scene's own paths follow the display resolution, and the screen must pick the
- * corner the export picks); model paths do not depend on resolution. The highlight is left out (the
+ * corner the export picks); models come as vertices and do not depend on resolution. The highlight is left out (the
  * legend must not move when a table row is hovered).
  */
 function autoLegendPlace(project: Project, f: AutoLegendFrame): LegendCorner | "outside-right" {
   const plot = { x: r2(f.layout.plot.x), y: r2(f.layout.plot.y), w: r2(f.layout.plot.w), h: r2(f.layout.plot.h) };
   const map = logAffine(f.scales, plot);
   const slope = viewTransform(f.view, f.constants).slope;
-  const nodes: SceneNode[] = [];
   const shapes: Shape[] = [];
   project.curves.forEach((cv) => {
     if (!cv.visible) return;
@@ -178,14 +168,14 @@ function autoLegendPlace(project: Project, f: AutoLegendFrame): LegendCorner | "
       },
       `place-model-${i + 1}`,
     );
-    if (g) nodes.push(...g.fills, ...g.lines);
+    if (g) shapes.push(...g.shapes);
   });
   const boxes = {} as Record<LegendCorner, { x: number; y: number; w: number; h: number }>;
   for (const corner of LEGEND_CORNERS) {
     const o = cornerLegendOrigin(f.layout.plot, corner, f.box.widthPx, f.box.heightPx, f.fonts);
     boxes[corner] = { x: o.x, y: o.y, w: f.box.widthPx, h: f.box.heightPx };
   }
-  return pickLegendPlace({ nodes, shapes, plot, boxes, outsideFits: f.outsideFits }).place;
+  return pickLegendPlace({ shapes, plot, boxes, outsideFits: f.outsideFits }).place;
 }
 
 function physicalOf(px: number): string {
@@ -210,8 +200,9 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   const widthPx = opts.widthPx && opts.widthPx > 0 ? opts.widthPx : preset.widthPx;
   const heightPx = opts.heightPx && opts.heightPx > 0 ? opts.heightPx : preset.heightPx;
   const fonts = fontsFor(fig.fontPt, preset.fontScale);
-  const massDomainEv = sanitizeDomain(fig.massRangeEv, FALLBACK_MASS_RANGE_EV);
-  const yDomain = sanitizeDomain(fig.yRange, fallbackYRange(view));
+  // An unusable range falls back to the default figure's.
+  const massDomainEv = sanitizeDomain(fig.massRangeEv, DEFAULT_MASS_RANGE_EV);
+  const yDomain = sanitizeDomain(fig.yRange, defaultYRange(view));
   const topAxis = fig.topAxis === "fa" || fig.topAxis === "frequency" ? fig.topAxis : "none";
   const legendSetting = fig.legend ?? "top-right";
 
