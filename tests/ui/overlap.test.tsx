@@ -14,7 +14,6 @@ import { gAgg } from "../../src/physics";
 import { captureDownloads, useProject } from "./export-helpers";
 
 const M1 = 1e-6;
-const M2 = 1e-4;
 // The flat level where the E/N = 8/3 line crosses at m = 1e-5 eV.
 const G = gAgg(1e-5, 8 / 3, { ref: "2019" });
 
