@@ -1,5 +1,6 @@
 // Command-line renderer (`npm run render -- …`): a project file, an exported SVG or CSV files in, the same
 // SVG the app exports (and optionally PNG and model CSV) out, without a browser and without any download.
+import { overlapOutputs } from "./overlap-out";
 import { existsSync, statSync } from "node:fs";
 import { dirname, resolve } from "node:path";
 import { pathToFileURL } from "node:url";
@@ -71,7 +72,7 @@ async function run(argv: readonly string[], io: Io, preParsed: PreParsed): Promi
     return 0;
   }
   try {
-    for (const p of [opts.out, opts.png, opts.modelsCsv]) if (p) checkOutputDir(p);
+    for (const p of [opts.out, opts.png, opts.modelsCsv, opts.overlap, opts.overlapIntervals]) if (p) checkOutputDir(p);
     const { project, notes } = await loadAnyProject(opts, preParsed);
     for (const n of notes) io.err(`note: ${n}`);
     const files: OutputFile[] = [];
@@ -137,6 +138,10 @@ async function run(argv: readonly string[], io: Io, preParsed: PreParsed): Promi
       report.push(
         `wrote ${opts.modelsCsv} (${size(Buffer.byteLength(csv))}, ${project.models.filter((m) => m.visible).length} model(s))`,
       );
+    }
+    for (const o of overlapOutputs(project, opts.overlap, opts.overlapIntervals)) {
+      files.push({ path: o.path, data: o.data });
+      report.push(o.report);
     }
     writeAllOrNothing(files);
     for (const line of report) io.out(line);

@@ -65,6 +65,38 @@ describe("main", () => {
     expect(r.out).toMatch(/wrote .*models\.csv/);
   });
 
+  it("writes the overlap summary (.csv, .md, .tex) and its intervals beside the figure", async () => {
+    const dir = tempDir();
+    const csv = join(dir, "a.csv");
+    // A flat limit 1e-15 GeV⁻¹ meets the E/N = 0 line at 2.55212 μeV (worked by hand in
+    // tests/analysis/overlap.test.ts from α, c_γ = 1.92 and K = 5.691 μeV): excluded from there to 10 μeV.
+    writeFileSync(csv, "1e-6,1e-15\n1e-5,1e-15\n");
+    for (const ext of ["csv", "md", "tex"]) {
+      const out = join(dir, `overlap.${ext}`);
+      const r = await run([csv, "--model", "0", "--overlap", out, "--overlap-intervals", join(dir, `iv-${ext}.csv`)]);
+      expect(r.err).toBe("");
+      expect(r.status).toBe(0);
+      const text = readFileSync(out, "utf8");
+      if (ext === "csv") {
+        const [header, row] = text.trimEnd().split("\n");
+        const cols = header.split(",");
+        const cells = row.split(",");
+        expect(Number(cells[cols.indexOf("m_a_min_eV")])).toBe(1e-6);
+        expect(cells[cols.indexOf("intervals")]).toBe("1");
+        // Share in log m: ln(10 μeV/2.55212 μeV)/ln 10 = 0.59312 (by hand).
+        expect(Number(cells[cols.indexOf("share_mass")])).toBeCloseTo(0.59312, 4);
+      }
+      if (ext === "md") expect(text).toMatch(/With c_γ = 1\.92\(4\) and K = 5\.691\(51\) μeV/);
+      if (ext === "tex") expect(text).toContain("\\toprule");
+      const iv = readFileSync(join(dir, `iv-${ext}.csv`), "utf8")
+        .trimEnd()
+        .split("\n");
+      expect(iv.length).toBe(2);
+      expect(Number(iv[1].split(",")[5])).toBeCloseTo(2.55212e-6, 10);
+    }
+    expect((await run([csv, "--overlap", join(dir, "o.txt")])).status).toBe(2);
+  });
+
   it("exits 2 without writing when an output directory does not exist", async () => {
     const dir = tempDir();
     const p = projectIn(dir);
