@@ -1,5 +1,5 @@
 // The on-screen figure: the scene renderer (scene-dom.ts inside SceneSvg) draws exactly the elements and
-// attributes the SVG writer writes (one scene, two outputs: DESIGN.md §1 — so the export matches the screen),
+// attributes the SVG writer writes (one scene, two outputs, so the export matches the screen),
 // also after updating in place from one scene to the next, keyboard zoom and reset go
 // through the store, and zooming does not re-render the sidebar panels (zustand's documented selector model:
 // a component re-renders only when the slice it selects changes).
