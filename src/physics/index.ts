@@ -6,5 +6,6 @@ export * from "./su3";
 export * from "./anomaly";
 export * from "./catalogue";
 export * from "./eovern-parse";
+export * from "./ensemble";
 export type * from "./anomaly-types";
 export * from "./charges";

@@ -6,6 +6,7 @@ import { AddModel } from "./AddModel";
 import { Catalogue } from "./Catalogue";
 import { ModelList } from "./ModelList";
 import { AnomalyCalculator } from "./AnomalyCalculator";
+import { EnsemblePanel } from "./ensemble/EnsemblePanel";
 
 function CalculatorDialog({ open, onClose }: { open: boolean; onClose: () => void }) {
   const panel = useRef<HTMLDivElement>(null);
@@ -48,12 +49,23 @@ function CalculatorDialog({ open, onClose }: { open: boolean; onClose: () => voi
 
 export function ModelsPanel() {
   const [calcOpen, setCalcOpen] = useState(false);
+  const [ensembleOpen, setEnsembleOpen] = useState(false);
   return (
     <div className="models-panel">
       <AddModel />
       <div className="inline-row">
         <Catalogue />
       </div>
+      <button
+        type="button"
+        className="calc-open"
+        data-testid="ensemble-open"
+        onClick={() => setEnsembleOpen(true)}
+        aria-haspopup="dialog"
+      >
+        Heavy-quark ensemble…
+      </button>
+      {ensembleOpen ? <EnsemblePanel open onClose={() => setEnsembleOpen(false)} /> : null}
       <button type="button" className="calc-open" onClick={() => setCalcOpen(true)} aria-haspopup="dialog">
         Anomaly calculator…
       </button>
