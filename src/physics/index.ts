@@ -8,3 +8,4 @@ export * from "./catalogue";
 export * from "./eovern-parse";
 export type * from "./anomaly-types";
 export * from "./charges";
+export * from "./beta";
