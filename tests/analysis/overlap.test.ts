@@ -410,9 +410,9 @@ describe("mass range, ordering and gaps", () => {
     return { curve, gapLo, gapHi, first: curve.massEv[0], last: curve.massEv[n - 1] };
   }
 
-  test("a gap narrower than one sample (h < d) is merged, and reported", () => {
+  test("a gap narrower than one sample (h < d) is kept by default, merged and reported with mergeGaps", () => {
     const { curve, gapLo, gapHi, first, last } = spike(0.5, 1.5);
-    const raw = overlapDetail({ eOverNMin: 0, eOverNMax: 0 }, curve, { mergeGaps: false });
+    const raw = overlapDetail({ eOverNMin: 0, eOverNMax: 0 }, curve);
     expectIntervals(
       raw.whole,
       [
@@ -421,14 +421,15 @@ describe("mass range, ordering and gaps", () => {
       ],
       1e-9,
     );
-    const merged = overlapDetail({ eOverNMin: 0, eOverNMax: 0 }, curve);
+    expect(raw.bridgedGapsEv).toEqual([]);
+    const merged = overlapDetail({ eOverNMin: 0, eOverNMax: 0 }, curve, { mergeGaps: true });
     expect(merged.whole).toEqual([[first, last]]);
     expectIntervals(merged.bridgedGapsEv, [[gapLo, gapHi]], 1e-9);
   });
 
   test("a gap wider than one sample (h > d) is kept", () => {
     const { curve, gapLo, gapHi, first, last } = spike(1.5, 0.5);
-    const d = overlapDetail({ eOverNMin: 0, eOverNMax: 0 }, curve);
+    const d = overlapDetail({ eOverNMin: 0, eOverNMax: 0 }, curve, { mergeGaps: true });
     expectIntervals(
       d.whole,
       [
@@ -443,7 +444,7 @@ describe("mass range, ordering and gaps", () => {
   test("for a band, a merged gap of whole leaves no part inside it", () => {
     // Band E/N ∈ [0, 0.5]: lower edge k(0.5); the spike pokes above the lower edge only.
     const { curve } = spike(0.1, 1.5);
-    const d = overlapDetail({ eOverNMin: 0, eOverNMax: 0.5 }, curve);
+    const d = overlapDetail({ eOverNMin: 0, eOverNMax: 0.5 }, curve, { mergeGaps: true });
     const lowerEdgeShift = Math.log(slope(0) / slope(0.5)); // 0.30: the spike rises above the lower edge
     expect(lowerEdgeShift).toBeLessThan(1.5);
     // Gaps (analytic, as above): whole 2w·0.40/1.60 ≈ 0.50w and touch 2w·0.1/1.6 ≈ 0.13w, both bridged.

@@ -9,7 +9,7 @@ import { describe, expect, test, vi } from "vitest";
 import fc from "fast-check";
 import { defaultProject } from "../../src/project/demo";
 import type { Curve, LegendPlace, Project, SizePreset } from "../../src/project/types";
-import { pathData, pathDataCompact } from "../../src/plot/decimate";
+import { pathData, pathDataCompact } from "../../src/plot/thinning/index";
 import { exportFigureSvg, exportScene, rasterResolution } from "../../src/formats/figure-file";
 import type { LegendCorner } from "../../src/plot/layout";
 import {

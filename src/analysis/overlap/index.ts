@@ -2,7 +2,8 @@
 // (within reach, inside a region), solved per segment in log-log space sheared by v = ln g − ln m (O(n) per pair).
 import { resolveConstants, type AxionConstants } from "../../physics/constants";
 import { assemble } from "./assemble";
-import { eOverNWithAbsIn, modelLevels, normalizedOfLevel } from "./levels";
+import { polygonAreaShare, sortedAreaShare } from "./area";
+import { eOverNWithAbsIn, modelLevels, normalizedOfLevel, type Levels } from "./levels";
 import { polygonOverlap, polygonRangeOver } from "./polygon";
 import { preparePolygon, prepareSorted } from "./prepare";
 import { lowerBound, sortedOverlap, sortedRangeOver } from "./sorted";
@@ -10,8 +11,27 @@ import type { OverlapCurve, OverlapDetail, OverlapModel, OverlapOptions, Overlap
 
 export type { Interval, OverlapCurve, OverlapDetail, OverlapModel, OverlapOptions, OverlapResult } from "./types";
 
-function constantsFor(model: OverlapModel, opts: OverlapOptions): AxionConstants {
-  return opts.constants ?? model.constants ?? resolveConstants({ ref: model.ref });
+function levelsFor(model: OverlapModel, curve: OverlapCurve, opts: OverlapOptions): { L: Levels; lnFactor: number } {
+  const c: AxionConstants = opts.constants ?? model.constants ?? resolveConstants({ ref: model.ref });
+  const factor = curve.gFactor ?? 1;
+  const lnFactor = factor > 0 && Number.isFinite(factor) ? Math.log(factor) : 0;
+  return { L: modelLevels(model, c, lnFactor), lnFactor };
+}
+
+/**
+ * The share of the model band's area (log m × log g over the curve's mass range, theory spread included) that
+ * the curve excludes (reaches, contains): 1 when the whole band is covered everywhere. Null for a line without
+ * spread (use the mass share), a band reaching g = 0, or a curve with too few usable points.
+ */
+export function overlapAreaShare(model: OverlapModel, curve: OverlapCurve, opts: OverlapOptions = {}): number | null {
+  if (!Number.isFinite(model.eOverNMin) || !Number.isFinite(model.eOverNMax)) return null;
+  const { L } = levelsFor(model, curve, opts);
+  if (curve.role === "region") {
+    const p = preparePolygon(curve.massEv, curve.gInvGeV);
+    return p.n < 3 ? null : polygonAreaShare(p, L);
+  }
+  const p = prepareSorted(curve.massEv, curve.gInvGeV);
+  return p.n < 2 ? null : sortedAreaShare(p, L);
 }
 
 /**
@@ -28,7 +48,7 @@ function constantsFor(model: OverlapModel, opts: OverlapOptions): AxionConstants
  * - the band edges are those of bandEdges (theory spread: c_γ ± kσ and K ± kσ). When the lower edge is 0
  *   (cancellation) `whole` is empty: no finite limit or bounded region covers g → 0.
  * - Nothing is claimed outside the curve's mass range; isolated touching points are not reported.
- * - Gap merging (`mergeGaps`, default on): two intervals of the same kind are joined when the gap between
+ * - Gap merging (`mergeGaps`, opt-in, default off): two intervals of the same kind are joined when the gap between
  *   them is narrower (in ln m) than one sample spacing: for exclusion and projection curves the smaller
  *   width of the two curve segments holding the gap's ends; for regions the smallest x-width of the
  *   polygon edges spanning either end (0 at a vertical edge, so a drawn notch is never bridged). Such a
@@ -40,14 +60,11 @@ function constantsFor(model: OverlapModel, opts: OverlapOptions): AxionConstants
  *
  * @param model E/N interval (min = max for a line), theory spread k (@default 0), reference (@default "2019").
  * @param curve masses in eV, couplings in GeV⁻¹, role; optional `gFactor` (@default 1) rescales the couplings.
- * @param opts custom constants; `mergeGaps` (@default true).
+ * @param opts custom constants; `mergeGaps` (@default false).
  */
 export function overlapDetail(model: OverlapModel, curve: OverlapCurve, opts: OverlapOptions = {}): OverlapDetail {
-  const c = constantsFor(model, opts);
-  const factor = curve.gFactor ?? 1;
-  const lnFactor = factor > 0 && Number.isFinite(factor) ? Math.log(factor) : 0;
-  const merge = opts.mergeGaps ?? true;
-  const L = modelLevels(model, c, lnFactor);
+  const { L, lnFactor } = levelsFor(model, curve, opts);
+  const merge = opts.mergeGaps ?? false;
   const cancels = L.lo === -Infinity;
   const line = model.eOverNMin === model.eOverNMax;
   const empty: OverlapDetail = {
@@ -106,11 +123,11 @@ export function overlapDetail(model: OverlapModel, curve: OverlapCurve, opts: Ov
 /**
  * Mass intervals (eV) where a model line or band overlaps a curve: `whole` where every E/N of the interval
  * is excluded (within reach, inside the region), `part` where some but not all are. Ascending, disjoint,
- * merged across gaps narrower than one sample; `part` is empty for a line without theory spread. See
+ * intervals only merged across gaps narrower than one sample with `mergeGaps`; `part` is empty for a line without theory spread. See
  * {@link overlapDetail} for the exact semantics and the extra detail (E/N sub-intervals, cancellation).
  * @param model E/N interval, theory spread `sigmas` (@default 0), `ref` (@default "2019").
  * @param curve masses in eV, couplings in GeV⁻¹, role.
- * @param opts custom constants (`constants`), `mergeGaps` (@default true).
+ * @param opts custom constants (`constants`), `mergeGaps` (@default false).
  */
 export function overlap(model: OverlapModel, curve: OverlapCurve, opts: OverlapOptions = {}): OverlapResult {
   const d = overlapDetail(model, curve, opts);

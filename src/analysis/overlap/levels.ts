@@ -15,6 +15,8 @@ export interface Levels {
   kHigh: number;
   eMin: number;
   eMax: number;
+  /** Smallest |E/N − c_γ| inside the band (c_γ-side floor of a between-lines band; 0 otherwise). */
+  nFloor: number;
 }
 
 /** ln of α/(2π K·10⁶) · n: the sheared level of |E/N − c_γ| = n with K in μeV (see gFromNormalized). */
@@ -32,7 +34,7 @@ export function modelLevels(model: OverlapModel, c: AxionConstants, lnFactor: nu
   const k = model.sigmas ?? 0;
   const eMin = Math.min(model.eOverNMin, model.eOverNMax);
   const eMax = Math.max(model.eOverNMin, model.eOverNMax);
-  const [nMin, nMax] = normalizedRange(eMin, eMax, c, k);
+  const [nMin, nMax] = model.between ? betweenRange(model.between, c, k) : normalizedRange(eMin, eMax, c, k);
   const kHigh = c.kMuEv + k * c.kMuEvSigma;
   const kLow = c.kMuEv - k * c.kMuEvSigma;
   // Scaling the curve by f is the same as lowering the model levels by ln f.
@@ -45,7 +47,20 @@ export function modelLevels(model: OverlapModel, c: AxionConstants, lnFactor: nu
     kHigh,
     eMin,
     eMax,
+    nFloor: model.between ? betweenRange(model.between, c, 0)[0] : 0,
   };
+}
+
+/** |E/N − c_γ| range of the band between the lines of `values`: each line widened by its own spread. */
+function betweenRange(values: number[], c: AxionConstants, k: number): [number, number] {
+  let lo = Infinity;
+  let hi = 0;
+  for (const e of values) {
+    const [a, b] = normalizedRange(e, e, c, k);
+    lo = Math.min(lo, a);
+    hi = Math.max(hi, b);
+  }
+  return values.length > 0 ? [lo, hi] : [0, 0];
 }
 
 /**
@@ -62,7 +77,7 @@ export function eOverNWithAbsIn(L: Levels, nA: number, nB: number): [number, num
     else out.push([a, b]);
   };
   const c = L.cGamma;
-  const a = Math.max(0, nA);
+  const a = Math.max(0, L.nFloor, nA);
   if (!(a <= nB)) return out;
   add(c - nB, c - a);
   add(c + a, c + nB);

@@ -16,6 +16,11 @@ export interface OverlapModel {
   ref?: RefId;
   /** A complete user-entered set of constants; wins over `ref`. */
   constants?: AxionConstants;
+  /**
+   * The E/N values of a "between lines" band: the region between their lines, lower edge min |E/N − c_γ| (0
+   * only when a line itself reaches g = 0), instead of every E/N of [min, max]. Absent for lines and intervals.
+   */
+  between?: number[];
 }
 
 /** The curve side: data in internal units (eV, GeV⁻¹) and its role. */
@@ -35,8 +40,8 @@ export interface OverlapOptions {
   /** A complete set of constants; wins over the model's `constants` and `ref`. */
   constants?: AxionConstants;
   /**
-   * Merge intervals whose gap is narrower than one curve sample spacing (see {@link overlapDetail}).
-   * @default true
+   * Merge intervals whose gap is narrower than one curve sample spacing (see {@link overlapDetail}); the
+   * bridged gaps are listed in `bridgedGapsEv`, never counted as excluded by the table. @default false
    */
   mergeGaps?: boolean;
 }
