@@ -2,7 +2,7 @@
 // validate, files without them (older ones) still do, and a link carries them unchanged.
 import { describe, expect, it } from "vitest";
 import { defaultFigure, defaultPhysics, newModel, restoreProject } from "../../src/data/index";
-import { decodeLink, encodeLink } from "../../src/formats/project-codec";
+import { decodeLink, encodeLink } from "../../src/formats/codec";
 import { PROJECT_VERSION, type Project } from "../../src/project/types";
 
 // The heavy-quark model (3,1,0) with the Yukawa Φ Q̄_L Q_R (Di Luzio, Mescia, Nardi, PRL 118 (2017) 031801).
