@@ -1,12 +1,12 @@
 // Figure export: the size preset (the same Figure.preset the screen uses), the SVG download (self-contained,
-// project embedded so the file reopens in axband), PNG at 1×, 2× or 300 dpi, and the model lines and bands as
-// CSV (export-actions.ts). All files come from the same scene builder as the screen.
+// project embedded so the file reopens in axband), the vector PDF (project attached), PNG at 1×, 2× or
+// 300 dpi, and the model lines and bands as CSV (export-actions.ts). All files come from the same scene builder as the screen.
 import { useState } from "react";
 import type { SizePreset } from "../../project/types";
 import { PRESETS, presetOf, CUSTOM_MM_LIMITS } from "../../plot/layout";
 import { useAxband } from "../store";
 import type { PngScale } from "./png";
-import { saveModelCsv, savePng, saveSvg } from "./export-actions";
+import { saveModelCsv, savePdf, savePng, saveSvg } from "./export-actions";
 import { NumberField } from "../curves/NumberField";
 import { Popover } from "./Popover";
 import "../curves/curves.css";
@@ -103,6 +103,29 @@ function ImageSection() {
   );
 }
 
+function PdfSection() {
+  const [busy, setBusy] = useState(false);
+  const onPdf = async () => {
+    setBusy(true);
+    try {
+      await savePdf();
+    } finally {
+      setBusy(false);
+    }
+  };
+  return (
+    <section>
+      <h3>PDF</h3>
+      <div className="ax-export-row">
+        <button type="button" data-testid="export-pdf" disabled={busy} aria-busy={busy} onClick={() => void onPdf()}>
+          {busy ? "Preparing PDF…" : "Download PDF"}
+        </button>
+      </div>
+      <p className="ax-hint">Vector PDF at the figure size, fonts embedded, project attached (for pdfLaTeX).</p>
+    </section>
+  );
+}
+
 function DataSection() {
   return (
     <section>
@@ -135,6 +158,7 @@ export function ExportMenu() {
       </button>
       <Popover label="▾" ariaLabel="More export options" open={open} onOpenChange={setOpen} testId="export-menu">
         <SizeSection />
+        <PdfSection />
         <ImageSection />
         <DataSection />
       </Popover>

@@ -10,7 +10,7 @@ import { useWindowDrop } from "./useWindowDrop";
 import { ImportItemCard } from "./ImportItemCard";
 import "./importer.css";
 
-const ACCEPT = ".csv,.tsv,.txt,.dat,.tab,.svg,.json,text/csv,text/plain,text/tab-separated-values";
+const ACCEPT = ".csv,.tsv,.txt,.dat,.tab,.svg,.pdf,.json,text/csv,text/plain,text/tab-separated-values";
 
 /** The import buttons (file picker with data-testid="import-files", and "Paste data"). */
 export function ImportControls() {
