@@ -1,7 +1,7 @@
 // Public face of the plot core (pure, no DOM): scene building, SVG writing, layout presets, scales and the
 // decimation functions, for the app's renderer, the export and the command-line renderer.
 export type * from "./scene-types";
-export { buildScene, FONT_FAMILY, type BuildSceneOpts } from "./scene";
+export { buildScene, FIGURE_FONT_CSS, type BuildSceneOpts } from "./scene";
 export {
   writeSvg,
   escapeXml,

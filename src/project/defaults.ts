@@ -99,6 +99,7 @@ export function defaultFigure(): Figure {
     grid: true,
     legend: "auto",
     fontPt: 12,
+    font: "sans",
     title: "",
   };
 }

@@ -29,6 +29,7 @@ import {
   rationalValue,
   sizePreset,
   topAxis,
+  figureFont,
   yView,
 } from "./schema";
 import { PROJECT_VERSION, type Curve, type Figure, type Model, type PhysicsSettings, type Project } from "./types";
@@ -293,6 +294,7 @@ function restoreFigure(raw: unknown, note: Note): Figure {
     grid: bool(own(f, "grid"), note, "grid") ?? d.grid,
     legend: valid(legendPlace, own(f, "legend"), note, "legend") ?? d.legend,
     fontPt: clamped(own(f, "fontPt"), 4, 72, note, "font size") ?? d.fontPt,
+    font: valid(figureFont, own(f, "font"), note, "figure font") ?? d.font,
     title: text(own(f, "title"), PROJECT_LIMITS.label, note, "title") ?? d.title,
   };
 }

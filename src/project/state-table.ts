@@ -81,6 +81,7 @@ export const FIGURE_STATE: { readonly [K in keyof Figure]-?: Persistence } = {
   grid: everywhere,
   legend: everywhere,
   fontPt: everywhere,
+  font: everywhere,
   title: everywhere,
 };
 
