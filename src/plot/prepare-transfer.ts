@@ -43,14 +43,11 @@ export interface PreparedTransfer {
 export interface ComputePreparedOpts {
   /** y-view slopes to build the view arrays of (the figure's current view is enough). @default [0] */
   slopes?: readonly number[];
-  /** The curve is a closed region (as curveGeometry passes it). @default !sorted */
-  closed?: boolean;
 }
 
 /** What to prepare for one curve: its drawing order and the y views it will be drawn in first. */
 export interface PrepareSpec {
   sorted: boolean;
-  closed: boolean;
   slopes: number[];
 }
 
@@ -66,7 +63,6 @@ export function prepareSpecOf(
   const view: YView = yView === "normalized" || yView === "g-gamma" ? yView : "coupling";
   return {
     sorted: drawsSorted(curve),
-    closed: curve.role === "region",
     slopes: [viewTransform(view, constantsOf(physics)).slope],
   };
 }
@@ -85,11 +81,10 @@ export function computePrepared(
   opts: ComputePreparedOpts = {},
 ): PreparedTransfer {
   const prep = prepareCurve(massEv, gInvGeV, sorted);
-  const closed = opts.closed ?? !sorted;
   const views: ViewTransfer[] = [];
   for (const slope of new Set(opts.slopes ?? [0])) {
     if (!Number.isFinite(slope)) continue;
-    const va = viewArrays(prep, slope, closed);
+    const va = viewArrays(prep, slope);
     views.push({
       slope,
       v: va.v === prep.lg ? null : va.v,

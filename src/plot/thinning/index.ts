@@ -8,10 +8,10 @@ export {
   type PreparedCurve,
   type ViewArrays,
 } from "./prepared";
-export { buildPyramid, type Pyramid } from "./pyramid";
-export { thinColumns, pixelColumn, type ColumnParams } from "./columns";
+export { buildPyramid } from "./pyramid";
+export { thinColumns, pixelColumn } from "./columns";
 export { dpImportance, simplifyIndices } from "./douglas-peucker";
 export { thinRunsLog } from "./runs";
-export { clipToRect, CULL_MARGIN_PX, type Polyline, type Rect } from "./clip";
+export { clipToRect, type Polyline, type Rect } from "./clip";
 export { curvePixels, type PixelParams } from "./pixels";
 export { pathData, pathDataCompact } from "./path-data";

@@ -141,7 +141,7 @@ export function cachedPrepared(
 }
 
 /** The view arrays of a prepared curve for a y-view slope (built once, then cached on the curve). */
-export function viewArrays(prep: PreparedCurve, slope: number, closed: boolean): ViewArrays {
+export function viewArrays(prep: PreparedCurve, slope: number): ViewArrays {
   let va = prep.views.get(slope);
   if (!va) {
     let v = prep.lg;
@@ -154,7 +154,7 @@ export function viewArrays(prep: PreparedCurve, slope: number, closed: boolean):
   }
   if (prep.sorted && !va.pyramid) va.pyramid = buildPyramid(va.v);
   if (!prep.sorted && !va.importance) {
-    const imp = dpImportance(prep.lm, va.v, closed);
+    const imp = dpImportance(prep.lm, va.v);
     va.importance = imp;
     va.boxes = chunkBoxes(prep.lm, va.v);
     const order = new Int32Array(prep.n);
