@@ -13,7 +13,8 @@ import {
 } from "./clip";
 import { thinColumnsInto } from "./columns";
 import { dpSelection } from "./douglas-peucker";
-import { viewArrays, type PreparedCurve, type ViewArrays } from "./prepared";
+import type { PreparedCurve } from "../../analysis/prepared-curve";
+import { viewArrays, type ViewArrays } from "./prepared";
 import { gatherRuns, levelOf } from "./runs";
 import { ensureBuffers, scratch } from "./scratch";
 
