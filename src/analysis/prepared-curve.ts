@@ -39,7 +39,7 @@ function entryOf(massEv: Float64Array, gInvGeV: Float64Array): CacheEntry {
 }
 
 /** Whether a point can go on log axes: mass and coupling positive and finite. */
-export function usablePoint(massEv: number, gInvGeV: number): boolean {
+function usablePoint(massEv: number, gInvGeV: number): boolean {
   return massEv > 0 && gInvGeV > 0 && massEv < Infinity && gInvGeV < Infinity;
 }
 
