@@ -46,7 +46,14 @@ export interface BuildSceneOpts {
    */
   resolution?: number;
   /** A mass interval to highlight (e.g. a row of the overlap table), optionally with its model or curve. */
-  highlight?: { massMinEv: number; massMaxEv: number; modelId?: string; curveId?: string } | null;
+  highlight?: {
+    massMinEv: number;
+    massMaxEv: number;
+    modelId?: string;
+    curveId?: string;
+    /** Mark these intervals (eV) instead of the whole span; neighbours closer than a pixel share one mark. */
+    intervalsEv?: [number, number][];
+  } | null;
   /** Write the physical size (cm) into the scene, for export. @default true */
   physical?: boolean;
   /** Thin curves to pixel resolution; false draws every point (only for comparisons). @default true */
@@ -310,19 +317,30 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
     const data: Record<string, string> = { highlight: "mass" };
     if (hl.modelId) data["model-id"] = hl.modelId;
     if (hl.curveId) data["curve-id"] = hl.curveId;
-    if (hi > lo) {
+    const spans: [number, number][] = [];
+    for (const [a, b] of hl.intervalsEv ?? [[hl.massMinEv, hl.massMaxEv]]) {
+      if (!(a > 0 && b > 0)) continue;
+      const pa = Math.max(lo, map.ax + map.bx * Math.log10(Math.min(a, b)));
+      const pb = Math.min(hi, map.ax + map.bx * Math.log10(Math.max(a, b)));
+      if (!(pb > pa)) continue;
+      // Thousands of narrow intervals become at most one mark per pixel column.
+      const last = spans[spans.length - 1];
+      if (last && pa <= last[1] + 1) last[1] = Math.max(last[1], pb);
+      else spans.push([pa, pb]);
+    }
+    spans.forEach(([a, b], k) =>
       highlight.push({
         kind: "rect",
-        id: "highlight-range",
-        x: r2(lo),
+        id: k === 0 ? "highlight-range" : `highlight-range-${k + 1}`,
+        x: r2(a),
         y: plot.y,
-        w: r2(Math.max(hi - lo, 0.5)),
+        w: r2(Math.max(b - a, 0.5)),
         h: plot.h,
         fill: "#1f3b57",
         fillOpacity: 0.1,
         data,
-      });
-    }
+      }),
+    );
     const halo = [
       ...(hl.modelId ? (modelLineById.get(hl.modelId) ?? []) : []),
       ...(hl.curveId ? (curveLineById.get(hl.curveId) ?? []) : []),

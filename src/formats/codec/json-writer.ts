@@ -1,5 +1,6 @@
 // Streaming JSON writer for the compact link object: the bytes JSON.stringify would give, with curve columns
 // written as digits straight into the buffer (no string or array per value), handed on in chunks.
+import { isPlainObject } from "../../project/json";
 import { NumberColumn, deltaForm } from "./numbers";
 import { POW10 } from "../pow10";
 
@@ -7,12 +8,6 @@ import { POW10 } from "../pow10";
 export const CHUNK_BYTES = 1 << 20;
 
 const UTF8 = new TextEncoder();
-
-function isPlainObject(v: unknown): v is Record<string, unknown> {
-  if (typeof v !== "object" || v === null) return false;
-  const proto = Object.getPrototypeOf(v) as unknown;
-  return proto === Object.prototype || proto === null;
-}
 
 /**
  * Writes the compact object as UTF-8 JSON, byte for byte what JSON.stringify gives for it (with each

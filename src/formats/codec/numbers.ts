@@ -1,5 +1,6 @@
 // The number codec of curve data in links: exact decimal "delta" form (digit steps and exponent steps) or plain lists.
-import { ShapeError, isRec } from "./compact";
+import { isPlainObject } from "../../project/json";
+import { ShapeError } from "./compact";
 import { MAX_EXACT_POW10, POW10 } from "../pow10";
 
 // Curve data (massEv, gInvGeV): either a JSON number array, or, when every value has at most 15 significant
@@ -109,7 +110,7 @@ function fromDecimal(m: number, e: number): number {
 /** Inverse of {@link encodeNumbers}; a number array passes through (the schema checks its values). */
 export function decodeNumbers(v: unknown): unknown {
   if (Array.isArray(v)) return v;
-  if (!isRec(v) || !Array.isArray(v.e) || !Array.isArray(v.d) || v.e.length !== v.d.length) {
+  if (!isPlainObject(v) || !Array.isArray(v.e) || !Array.isArray(v.d) || v.e.length !== v.d.length) {
     throw new ShapeError("curve data are neither a list of numbers nor a decimal delta list");
   }
   const e = v.e as unknown[];

@@ -12,7 +12,7 @@ export const read = { err: ERR_NONE, end: 0 };
 /**
  * Reads a number starting at t[s] and stopping at the first character that cannot continue it (read.end),
  * times 10^shift, correctly rounded; NaN with `read.err` set when no number starts there. Accepts a leading
- * + or − (also U+2212) and `,` as the decimal point when `comma`. The shift is applied to the decimal
+ * + or − (also U+2212); the decimal point is `,` when `comma`, else `.` (never both: a file has one mark). The shift is applied to the decimal
  * exponent, so `1.5` μeV becomes exactly the double nearest 1.5e-6. Callers check what follows read.end.
  */
 export function readNumber(t: string, s: number, e: number, shift: number, comma: boolean): number {
@@ -49,7 +49,7 @@ export function readNumber(t: string, s: number, e: number, shift: number, comma
       } else {
         long = true;
       }
-    } else if ((c === 46 || (c === 44 && comma)) && !point) {
+    } else if (c === (comma ? 44 : 46) && !point) {
       point = true;
     } else {
       hasExp = c === 101 || c === 69;
