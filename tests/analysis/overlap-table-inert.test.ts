@@ -12,7 +12,7 @@ function row(modelLabel: string, curveLabel: string, note: string): OverlapRow {
     curveId: "c-1",
     curveLabel,
     role: "exclusion",
-    kind: "full",
+    kind: "excluded-whole",
     massMinEv: 1e-6,
     massMaxEv: 2e-6,
     faMinGeV: 3e12,
