@@ -56,7 +56,7 @@ function loadProjectFile(input: CliInput): LoadedProject {
 function loadSvg(input: CliInput): LoadedProject {
   const r = extractProjectFromSvg(readText(input.path));
   if (!r.ok) throw new InputError(`${input.path}: ${r.error}`);
-  return { project: r.project, notes: [] };
+  return { project: r.project, notes: r.repairs.map((s) => `${input.path}: repaired on loading: ${s}`) };
 }
 
 /** Parse results found ahead of loading (by parse-parallel.ts), by input index; undefined: parse here. */
