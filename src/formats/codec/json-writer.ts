@@ -1,7 +1,8 @@
 // Streaming JSON writer for the compact link object: the bytes JSON.stringify would give, with curve columns
 // written as digits straight into the buffer (no string or array per value), handed on in chunks.
 import { isPlainObject } from "../../project/json";
-import { NumberColumn, POW10, deltaForm } from "./numbers";
+import { NumberColumn, deltaForm } from "./numbers";
+import { POW10 } from "../pow10";
 
 // The compact JSON goes out in chunks of about this size (the deflater takes them as they come).
 export const CHUNK_BYTES = 1 << 20;
