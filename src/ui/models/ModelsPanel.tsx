@@ -1,6 +1,6 @@
 // The Models section of the sidebar: typed E/N, the catalogue, the model list, and the anomaly calculator
 // (a wide table, so it opens in a dialog over the page; it stays mounted so its table survives closing).
-import { useEffect, useRef } from "react";
+import { useEffect, useRef, useState } from "react";
 import { createPortal } from "react-dom";
 import { AddModel } from "./AddModel";
 import { Catalogue } from "./Catalogue";
