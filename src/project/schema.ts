@@ -2,6 +2,7 @@
 // (./restore.ts) reads untrusted input with.
 import { z } from "zod";
 import { PROJECT_VERSION } from "./types";
+import { MIN_RANGE_DECADES, saneRange } from "./view-range";
 
 /** Size limits of a project; anything beyond is refused (or, for text, cut) rather than trusted. */
 export const PROJECT_LIMITS = {
@@ -141,7 +142,12 @@ export const curveData = z.unknown().transform((v, ctx) => {
 
 const positiveRange = z
   .tuple([z.number().positive(), z.number().positive()])
-  .refine(([lo, hi]) => lo < hi, "expected [low, high] with low < high");
+  .refine(([lo, hi]) => lo < hi, "expected [low, high] with low < high")
+  .refine((r) => sameRange(saneRange(r), r), `expected at least ${MIN_RANGE_DECADES} decades within 10^±300`);
+
+function sameRange(a: readonly [number, number] | null, b: readonly [number, number]): boolean {
+  return a !== null && a[0] === b[0] && a[1] === b[1];
+}
 
 // ----------------------------------------------------------------------------------------------- strict schema
 

@@ -3,6 +3,7 @@
 import { useEffect } from "react";
 import { decodeLink, projectFileName, projectToFile } from "../../data";
 import { useAxband } from "../store";
+import { UNVERIFIED_LINK_NOTE, repairsNote } from "../store/open-notes";
 import { downloadText } from "../export/download";
 
 /** The page address with a fragment (the share link). */
@@ -29,7 +30,11 @@ export function useHashLinks() {
       if (!fragment) return;
       const { replaceProject, pushMessage } = useAxband.getState();
       const r = decodeLink(fragment);
-      if (r.ok) replaceProject(r.project, "Opened the project from the link. Undo returns to your previous project.");
+      if (r.ok)
+        replaceProject(
+          r.project,
+          `Opened the project from the link. Undo returns to your previous project.${repairsNote(r.repairs, "The link")}${r.verified ? "" : UNVERIFIED_LINK_NOTE}`,
+        );
       else pushMessage("alert", `This link could not be opened: ${r.error} Your project is unchanged.`);
       history.replaceState(null, "", window.location.pathname + window.location.search);
     };

@@ -5,6 +5,7 @@ import type { StoreApi } from "zustand";
 import type { Project } from "../../project/types";
 import { defaultProject } from "../../project/demo";
 import { decodeLink } from "../../formats/codec";
+import { UNVERIFIED_LINK_NOTE, repairsNote } from "./open-notes";
 import { deserializeFromStorage, serializeForStorage } from "../../formats/project-file";
 import { PROJECT_LIMITS } from "../../project/schema";
 import type { AxbandState } from "./types";
@@ -409,7 +410,10 @@ export async function initProject(store: StoreApi<AxbandState>, opts: StartOpts 
         : "";
     store
       .getState()
-      .replaceProject(r.project, `Opened the project from the link. Undo returns to your previous project.${note}`);
+      .replaceProject(
+        r.project,
+        `Opened the project from the link. Undo returns to your previous project.${note}${repairsNote(r.repairs, "The link")}${r.verified ? "" : UNVERIFIED_LINK_NOTE}`,
+      );
   } else {
     store
       .getState()
