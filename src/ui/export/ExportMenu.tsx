@@ -8,6 +8,7 @@ import { useAxband } from "../store";
 import type { PngScale } from "./png";
 import { NumberField } from "../curves/NumberField";
 import { Popover } from "./Popover";
+import { ProjectNameField } from "../share/ProjectSections";
 import "../curves/curves.css";
 import "./export.css";
 
@@ -138,6 +139,10 @@ export function ExportMenu() {
         Export SVG
       </button>
       <Popover label="▾" ariaLabel="More export options" open={open} onOpenChange={setOpen} testId="export-menu">
+        <section>
+          <h3>File name</h3>
+          <ProjectNameField />
+        </section>
         <SizeSection />
         <ImageSection />
         <DataSection />
