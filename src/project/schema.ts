@@ -1,22 +1,11 @@
 // The project schema (zod): the strict form of the current version, and the field rules the restore step
 // (./restore.ts) reads untrusted input with.
 import { z } from "zod";
+import { PROJECT_LIMITS } from "./limits";
 import { PROJECT_VERSION } from "./types";
 import { MIN_RANGE_DECADES, saneRange } from "./view-range";
 
-/** Size limits of a project; anything beyond is refused (or, for text, cut) rather than trusted. */
-export const PROJECT_LIMITS = {
-  models: 500,
-  curves: 500,
-  /** Points per curve. */
-  points: 5_000_000,
-  fermions: 200,
-  id: 100,
-  label: 500,
-  citation: 100_000,
-  fileName: 1_000,
-  rational: 64,
-} as const;
+export { PROJECT_LIMITS };
 
 // ---------------------------------------------------------------------------------------------- building blocks
 
