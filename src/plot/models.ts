@@ -5,6 +5,7 @@ import { bandCancels, bandEdges, gAgg, type AxionConstants } from "../physics/in
 import type { Model, YView } from "../project/types";
 import type { PathNode } from "./scene-types";
 import { clipToRect, pathData, type Polyline, type Rect } from "./thinning/index";
+import { atHundredths, pathShape, type Shape } from "./occupancy";
 import { dashFor, safeColour, unitInterval } from "./format";
 import { gToView, type LogAffine } from "./scales";
 import { eOverNValue } from "./physics-settings";
@@ -31,6 +32,8 @@ export interface ModelGeometry {
   spreadCancels: boolean;
   fills: PathNode[];
   lines: PathNode[];
+  /** The same fills and lines as vertices, for the automatic legend placement (no path data read back). */
+  shapes: Shape[];
 }
 
 function pxOf(f: ModelFrame, massEv: number, gInvGeV: number): number {
@@ -83,20 +86,30 @@ export function modelGeometry(model: Model, f: ModelFrame, nodeId: string): Mode
   const base = { "model-id": model.id };
   const fills: PathNode[] = [];
   const lines: PathNode[] = [];
+  const shapes: Shape[] = [];
+  // Each node with the polylines its path data is written from.
+  const add = (to: PathNode[], node: Omit<PathNode, "d">, polys: Polyline[]) => {
+    const full: PathNode = { ...node, d: polys.map((p) => pathData(p)).join("") };
+    to.push(full);
+    shapes.push(pathShape(full, polys.map(atHundredths)));
+  };
 
   let spreadCancels = false;
   if (sigmas > 0) {
     const s = bandPx(f, a, b, sigmas);
     spreadCancels = s.cancels && !bandCancels(a, b, { constants: f.constants });
-    const d = pathData(poly([s.x0, s.x1, s.x1, s.x0], [s.hi[0], s.hi[1], s.lo[1], s.lo[0]], true, f));
-    fills.push({
-      kind: "path",
-      id: `${nodeId}-spread`,
-      d,
-      fill: colour,
-      fillOpacity: Math.max(0.06, opacity * 0.45),
-      data: { ...base, spread: String(sigmas) },
-    });
+    const outline = poly([s.x0, s.x1, s.x1, s.x0], [s.hi[0], s.hi[1], s.lo[1], s.lo[0]], true, f);
+    add(
+      fills,
+      {
+        kind: "path",
+        id: `${nodeId}-spread`,
+        fill: colour,
+        fillOpacity: Math.max(0.06, opacity * 0.45),
+        data: { ...base, spread: String(sigmas) },
+      },
+      [outline],
+    );
   }
 
   if (isLine) {
@@ -106,40 +119,41 @@ export function modelGeometry(model: Model, f: ModelFrame, nodeId: string): Mode
     const vanishes = !(g0 > 0 && g1 > 0);
     if (!vanishes) {
       const pl = poly([f.plot.x, f.plot.x + f.plot.w], [pxOf(f, m0, g0), pxOf(f, m1, g1)], false, f);
-      lines.push({
-        kind: "path",
-        id: `${nodeId}-line`,
-        d: pathData(pl),
-        stroke: colour,
-        strokeWidth: lw,
-        dash,
-        fill: "none",
-        data: { ...base, eovern: model.eOverNMin },
-      });
+      add(
+        lines,
+        {
+          kind: "path",
+          id: `${nodeId}-line`,
+          stroke: colour,
+          strokeWidth: lw,
+          dash,
+          fill: "none",
+          data: { ...base, eovern: model.eOverNMin },
+        },
+        [pl],
+      );
     }
-    return { kind: "line", cancels: vanishes, vanishes, spread: sigmas > 0, spreadCancels, fills, lines };
+    return { kind: "line", cancels: vanishes, vanishes, spread: sigmas > 0, spreadCancels, fills, lines, shapes };
   }
 
   const c = bandPx(f, a, b, 0);
-  fills.push({
-    kind: "path",
-    id: `${nodeId}-band`,
-    d: pathData(poly([c.x0, c.x1, c.x1, c.x0], [c.hi[0], c.hi[1], c.lo[1], c.lo[0]], true, f)),
-    fill: colour,
-    fillOpacity: opacity,
-    data: { ...base, "eovern-min": model.eOverNMin, "eovern-max": model.eOverNMax, cancels: String(c.cancels) },
-  });
-  let d = pathData(poly([c.x0, c.x1], c.hi, false, f));
-  if (!c.cancels) d += pathData(poly([c.x0, c.x1], c.lo, false, f));
-  lines.push({
-    kind: "path",
-    id: `${nodeId}-edges`,
-    d,
-    stroke: colour,
-    strokeWidth: lw,
-    dash,
-    fill: "none",
-    data: { ...base },
-  });
-  return { kind: "band", cancels: c.cancels, vanishes: false, spread: sigmas > 0, spreadCancels, fills, lines };
+  add(
+    fills,
+    {
+      kind: "path",
+      id: `${nodeId}-band`,
+      fill: colour,
+      fillOpacity: opacity,
+      data: { ...base, "eovern-min": model.eOverNMin, "eovern-max": model.eOverNMax, cancels: String(c.cancels) },
+    },
+    [poly([c.x0, c.x1, c.x1, c.x0], [c.hi[0], c.hi[1], c.lo[1], c.lo[0]], true, f)],
+  );
+  const edges = [poly([c.x0, c.x1], c.hi, false, f)];
+  if (!c.cancels) edges.push(poly([c.x0, c.x1], c.lo, false, f));
+  add(
+    lines,
+    { kind: "path", id: `${nodeId}-edges`, stroke: colour, strokeWidth: lw, dash, fill: "none", data: { ...base } },
+    edges,
+  );
+  return { kind: "band", cancels: c.cancels, vanishes: false, spread: sigmas > 0, spreadCancels, fills, lines, shapes };
 }

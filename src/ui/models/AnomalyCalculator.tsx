@@ -20,6 +20,8 @@ import { LagrangianPanel } from "./LagrangianPanel";
 import { termLines } from "./lagrangian";
 import { FermionRow } from "./FermionRow";
 import { CalculatorResult, frac } from "./CalculatorResult";
+import { isScanState } from "./calculator-scan";
+import { CalculatorScan } from "./CalculatorScan";
 
 function CatalogueLoad({ dispatch, dirty }: { dispatch: (a: CalcAction) => void; dirty: boolean }) {
   const catalogueRows = useCatalogueRows();
@@ -162,7 +164,9 @@ export function AnomalyCalculator() {
   // The last valid result, adjusted during render (React's pattern for state derived from a previous render).
   const [lastGood, setLastGood] = useState<AnomalyResult | null>(null);
   if (current.ok && current.result !== lastGood) setLastGood(current.result);
-  const errors = current.ok ? [] : current.errors;
+  const scanning = isScanState(state);
+  // In scan mode the lists are read by the scan, which reports its own errors.
+  const errors = current.ok || scanning ? [] : current.errors;
   const shown = current.ok ? current.result : lastGood;
   const stale = !current.ok && shown !== null;
   const eOverN = current.ok ? current.result.eOverN : null;
@@ -220,6 +224,11 @@ export function AnomalyCalculator() {
           onChange={(e) => dispatch({ type: "scalar", value: e.target.value })}
         />
       </div>
+      <p className="note">
+        A PQ charge, copies or X_S may be a list or range ({"{-1, 0, 1}"}, {"1..3"}): the calculator then scans every
+        combination.
+      </p>
+      {scanning ? <CalculatorScan state={state} /> : null}
       {errors.length > 0 ? (
         <ul className="field-errors" aria-live="polite" data-testid="calc-errors">
           {errors.map((e, k) => (

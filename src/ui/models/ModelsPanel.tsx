@@ -1,11 +1,12 @@
 // The Models section of the sidebar: typed E/N, the catalogue, the model list, and the anomaly calculator
 // (a wide table, so it opens in a dialog over the page; it stays mounted so its table survives closing).
-import { useEffect, useRef } from "react";
+import { useEffect, useRef, useState } from "react";
 import { createPortal } from "react-dom";
 import { AddModel } from "./AddModel";
 import { Catalogue } from "./Catalogue";
 import { ModelList } from "./ModelList";
 import { AnomalyCalculator } from "./AnomalyCalculator";
+import { EnsemblePanel } from "./ensemble/EnsemblePanel";
 import { useCalculatorRequest } from "./calculator-draft";
 
 function CalculatorDialog({ open, onClose }: { open: boolean; onClose: () => void }) {
@@ -50,12 +51,23 @@ function CalculatorDialog({ open, onClose }: { open: boolean; onClose: () => voi
 export function ModelsPanel() {
   const calcOpen = useCalculatorRequest((s) => s.open);
   const setCalcOpen = useCalculatorRequest((s) => s.setOpen);
+  const [ensembleOpen, setEnsembleOpen] = useState(false);
   return (
     <div className="models-panel">
       <AddModel />
       <div className="inline-row">
         <Catalogue />
       </div>
+      <button
+        type="button"
+        className="calc-open"
+        data-testid="ensemble-open"
+        onClick={() => setEnsembleOpen(true)}
+        aria-haspopup="dialog"
+      >
+        Heavy-quark ensemble…
+      </button>
+      {ensembleOpen ? <EnsemblePanel open onClose={() => setEnsembleOpen(false)} /> : null}
       <button type="button" className="calc-open" onClick={() => setCalcOpen(true)} aria-haspopup="dialog">
         Anomaly calculator…
       </button>
