@@ -1,6 +1,6 @@
 // Figure export: the size preset (the same Figure.preset the screen uses), the SVG download (self-contained,
-// project embedded so the file reopens in axband), PNG at 1×, 2× or 300 dpi, and the model lines and bands as
-// CSV (export-actions.ts). All files come from the same scene builder as the screen.
+// project embedded so the file reopens in axband), the vector PDF (project attached), PNG at 1×, 2× or
+// 300 dpi, and the model lines and bands as CSV (export-actions.ts). All files come from the same scene builder as the screen.
 import { useState } from "react";
 import type { SizePreset } from "../../project/types";
 import { PRESETS, presetOf, CUSTOM_MM_LIMITS } from "../../plot/layout";
@@ -108,6 +108,29 @@ function ImageSection() {
   );
 }
 
+function PdfSection() {
+  const [busy, setBusy] = useState(false);
+  const onPdf = async () => {
+    setBusy(true);
+    try {
+      await (await actions()).savePdf();
+    } finally {
+      setBusy(false);
+    }
+  };
+  return (
+    <section>
+      <h3>PDF</h3>
+      <div className="ax-export-row">
+        <button type="button" data-testid="export-pdf" disabled={busy} aria-busy={busy} onClick={() => void onPdf()}>
+          {busy ? "Preparing PDF…" : "Download PDF"}
+        </button>
+      </div>
+      <p className="ax-hint">Vector PDF at the figure size, fonts embedded, project attached (for pdfLaTeX).</p>
+    </section>
+  );
+}
+
 function DataSection() {
   return (
     <section>
@@ -144,6 +167,7 @@ export function ExportMenu() {
           <ProjectNameField />
         </section>
         <SizeSection />
+        <PdfSection />
         <ImageSection />
         <DataSection />
       </Popover>

@@ -1,5 +1,6 @@
-// What the export menu's buttons do: write the figure as SVG (project embedded) or PNG (dpi in the file), or
-// the model lines and bands as CSV, download it, and say so. The writers load with this module, on demand.
+// What the export menu's buttons do: write the figure as SVG (project embedded), PDF (project attached) or PNG
+// (dpi in the file), or the model lines and bands as CSV, download it, and say so. The writers load with this
+// module, on demand; the PDF writer, its fonts and pdf-lib only when a PDF is asked for.
 import { embedCapText, exportFigureSvgWithInfo } from "../../formats/figure-file";
 import { modelsToCsv } from "../../formats/model-csv";
 import { setPngDpi } from "../../formats/png-meta";
@@ -63,6 +64,27 @@ export async function savePng(pngScale: PngScale): Promise<void> {
     push("status", `Saved ${name} (${target.widthPx} × ${target.heightPx} px, ${Math.round(target.dpi)} dpi).`);
   } catch (e) {
     push("alert", `The PNG could not be made: ${e instanceof Error ? e.message : String(e)}`);
+  }
+}
+
+/** Writes the figure as a vector PDF with the project attached; pdf-lib, fontkit and the font files load here. */
+export async function savePdf(): Promise<void> {
+  try {
+    const project = useAxband.getState().project;
+    const { projectPdf } = await import("./pdf");
+    const r = await projectPdf(project, "sans");
+    const name = `${figureBaseName(project)}.pdf`;
+    downloadBlob(name, new Blob([r.pdf as BlobPart], { type: "application/pdf" }));
+    const size = presetOf(project.figure);
+    const cm = `${(size.widthMm / 10).toFixed(1)} × ${(size.heightMm / 10).toFixed(1)} cm`;
+    if (r.embeddedCurves) return push("status", `Saved ${name} (${cm}; drop it on axband to reopen the project).`);
+    const n = r.omittedCurves.length;
+    push(
+      "alert",
+      `Saved ${name} (${cm}) without the data of ${n === 1 ? "its curve" : `its ${n} curves`} (too large to embed): dropped on axband it reopens the models and figure only. Save the project file to keep the data.`,
+    );
+  } catch (e) {
+    push("alert", `The PDF could not be made: ${e instanceof Error ? e.message : String(e)}.`);
   }
 }
 

@@ -7,7 +7,7 @@ import "./importer.css";
 
 const ImportModal = lazy(() => import("./ImportModal").then((m) => ({ default: m.ImportModal })));
 
-const ACCEPT = ".csv,.tsv,.txt,.dat,.tab,.svg,.json,text/csv,text/plain,text/tab-separated-values";
+const ACCEPT = ".csv,.tsv,.txt,.dat,.tab,.svg,.pdf,.json,text/csv,text/plain,text/tab-separated-values";
 
 /** The import buttons (file picker with data-testid="import-files", and "Paste data"). */
 export function ImportControls() {

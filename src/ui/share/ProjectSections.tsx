@@ -69,7 +69,7 @@ export function ProjectFileSection({ onOpened }: { onOpened: () => void }) {
             className="visually-hidden"
             type="file"
             data-testid="open-project"
-            accept=".axband.json,.json,.svg,application/json,image/svg+xml"
+            accept=".axband.json,.json,.svg,.pdf,application/json,image/svg+xml,application/pdf"
             onChange={(e) => {
               const file = e.currentTarget.files?.[0];
               e.currentTarget.value = "";
@@ -86,7 +86,7 @@ export function ProjectFileSection({ onOpened }: { onOpened: () => void }) {
         </label>
       </div>
       <p className="ax-hint">
-        A project file holds everything, curve data included. An SVG exported by axband opens as well.
+        A project file holds everything, curve data included. An SVG or PDF exported by axband opens as well.
       </p>
     </section>
   );

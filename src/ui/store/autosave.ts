@@ -4,9 +4,7 @@
 import type { StoreApi } from "zustand";
 import type { Project } from "../../project/types";
 import { defaultProject } from "../../project/demo";
-import { decodeLink } from "../../formats/codec";
 import { UNVERIFIED_LINK_NOTE, repairsNote } from "./open-notes";
-import { deserializeFromStorage, serializeForStorage } from "../../formats/project-file";
 import { PROJECT_LIMITS } from "../../project/limits";
 import type { AxbandState } from "./types";
 
