@@ -9,3 +9,4 @@ export * from "./eovern-parse";
 export * from "./ensemble";
 export type * from "./anomaly-types";
 export * from "./charges";
+export * from "./beta";

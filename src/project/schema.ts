@@ -70,13 +70,21 @@ const eOverNText = z
 
 /** What the anomaly calculator stores per fermion; values are checked by the calculator, not here. */
 const rationalInput = z.union([z.string().max(PROJECT_LIMITS.rational), z.number()]);
+const colourInput = z.union([z.object({ p: z.int().min(0).max(100), q: z.int().min(0).max(100) }), z.string().max(32)]);
+const ewInput = z.discriminatedUnion("kind", [
+  z.object({ kind: z.literal("sm"), dim: z.int().min(1).max(100), y: rationalInput }),
+  z.object({ kind: z.literal("su3l"), rep: z.enum(["1", "3", "3bar"]), x: rationalInput, b: rationalInput }),
+  z.object({ kind: z.literal("explicit"), charges: z.array(rationalInput).max(100) }),
+]);
+const scalarInput = z.object({
+  name: z.string().max(PROJECT_LIMITS.label),
+  colour: colourInput.optional(),
+  ew: ewInput,
+});
+const termText = z.string().max(PROJECT_LIMITS.label);
 const fermionInput = z.object({
-  colour: z.union([z.object({ p: z.int().min(0).max(100), q: z.int().min(0).max(100) }), z.string().max(32)]),
-  ew: z.discriminatedUnion("kind", [
-    z.object({ kind: z.literal("sm"), dim: z.int().min(1).max(100), y: rationalInput }),
-    z.object({ kind: z.literal("su3l"), rep: z.enum(["1", "3", "3bar"]), x: rationalInput, b: rationalInput }),
-    z.object({ kind: z.literal("explicit"), charges: z.array(rationalInput).max(100) }),
-  ]),
+  colour: colourInput,
+  ew: ewInput,
   chirality: z.enum(["L", "R"]),
   pq: rationalInput,
   copies: z.int().min(1).max(1000).optional(),
@@ -89,6 +97,10 @@ export const modelSource = z.discriminatedUnion("kind", [
     kind: z.literal("calculator"),
     fermions: z.array(fermionInput).max(PROJECT_LIMITS.fermions),
     scalarCharge: rationalInput.transform(String),
+    scalars: z.array(scalarInput).max(PROJECT_LIMITS.fermions).optional(),
+    terms: z.array(termText).max(PROJECT_LIMITS.fermions).optional(),
+    forbidden: z.array(termText).max(PROJECT_LIMITS.fermions).optional(),
+    normalize: z.string().max(PROJECT_LIMITS.label).optional(),
   }),
 ]);
 

@@ -7,6 +7,7 @@ import { parseEOverN } from "../../physics/eovern-parse";
 import { eOverNValue, physicsOptsOf } from "../../plot/physics-settings";
 import type { LineStyle, Model } from "../../project/types";
 import { selectModelIds, selectPhysics, useAxband, type AxbandState } from "../store";
+import { useCalculatorRequest } from "./calculator-draft";
 import { minus } from "../format";
 
 const LINE_STYLES: { value: LineStyle; label: string }[] = [
@@ -119,6 +120,7 @@ function SpreadField({ model }: { model: Model }) {
 function ModelRow({ id, index, count }: { id: string; index: number; count: number }) {
   const model = useAxband(useCallback((s: AxbandState) => s.project.models.find((m) => m.id === id), [id]));
   const physics = useAxband(selectPhysics);
+  const requestEdit = useCalculatorRequest((s) => s.requestEdit);
   const { updateModel, removeModel, moveModel } = useAxband(
     useShallow((s: AxbandState) => ({
       updateModel: s.updateModel,
@@ -162,6 +164,17 @@ function ModelRow({ id, index, count }: { id: string; index: number; count: numb
           <span className="visually-hidden">Show {model.label}</span>
         </label>
         <span className="row-buttons">
+          {model.source.kind === "calculator" ? (
+            <button
+              type="button"
+              className="icon"
+              aria-label={`Edit ${model.label} in the anomaly calculator`}
+              title="Reopen in the anomaly calculator"
+              onClick={() => requestEdit(model)}
+            >
+              ✎
+            </button>
+          ) : null}
           <button
             type="button"
             className="icon"

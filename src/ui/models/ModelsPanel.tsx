@@ -6,6 +6,7 @@ import { createPortal } from "react-dom";
 import { AddModel } from "./AddModel";
 import { Catalogue } from "./Catalogue";
 import { ModelList } from "./ModelList";
+import { useCalculatorRequest } from "./calculator-draft";
 
 // Both load on first opening, apart from the first figure.
 const AnomalyCalculator = lazy(() => import("./AnomalyCalculator").then((m) => ({ default: m.AnomalyCalculator })));
@@ -43,8 +44,8 @@ function CalculatorDialog({ open, onClose }: { open: boolean; onClose: () => voi
           </button>
         </div>
         <p className="note">
-          Left-handed Weyl fermions (a right-handed field enters with its PQ charge negated): N = Σ X·T(R)·n_w, E = Σ
-          X·d(R)·Σ Q², N_DW = |2N/X_S|.
+          Left-handed Weyl fermions (a right-handed field enters with its PQ charge 𝒳 negated): N = Σ 𝒳·T(R)·n_w, E = Σ
+          𝒳·d(R)·Σ Q², N_DW = |2N/𝒳_S|.
         </p>
         {opened ? (
           <Suspense fallback={<p className="note loading">Loading the anomaly calculator…</p>}>
@@ -58,7 +59,8 @@ function CalculatorDialog({ open, onClose }: { open: boolean; onClose: () => voi
 }
 
 export function ModelsPanel() {
-  const [calcOpen, setCalcOpen] = useState(false);
+  const calcOpen = useCalculatorRequest((s) => s.open);
+  const setCalcOpen = useCalculatorRequest((s) => s.setOpen);
   const [ensembleOpen, setEnsembleOpen] = useState(false);
   return (
     <div className="models-panel">
