@@ -68,6 +68,21 @@ function bandPx(f: ModelFrame, a: number, b: number, sigmas: number) {
   return { x0, x1, hi, lo, cancels };
 }
 
+/** The nodes of one model, fills and lines apart, and their shapes for the legend placement. */
+class ModelNodes {
+  fills: PathNode[] = [];
+  lines: PathNode[] = [];
+  shapes: Shape[] = [];
+}
+
+/** A node with the path data of its polylines, and its shape from the same polylines (no path data read back). */
+function addNode(to: PathNode[], shapes: Shape[], node: Omit<PathNode, "d">, polys: Polyline[]): void {
+  const d = polys.map((p) => pathData(p)).join("");
+  const full: PathNode = { ...node, d, writtenD: d };
+  to.push(full);
+  shapes.push(pathShape(full, polys.map(atHundredths)));
+}
+
 /**
  * Scene nodes of one model (fills and lines separately, so fills can go under every line). Returns null
  * when its E/N does not read as a number.
@@ -84,15 +99,8 @@ export function modelGeometry(model: Model, f: ModelFrame, nodeId: string): Mode
   const lw = isLine ? f.lineWidthPx * 1.15 : f.lineWidthPx;
   const dash = dashFor(model.lineStyle, lw);
   const base = { "model-id": model.id };
-  const fills: PathNode[] = [];
-  const lines: PathNode[] = [];
-  const shapes: Shape[] = [];
-  // Each node with the polylines its path data is written from.
-  const add = (to: PathNode[], node: Omit<PathNode, "d">, polys: Polyline[]) => {
-    const full: PathNode = { ...node, d: polys.map((p) => pathData(p)).join("") };
-    to.push(full);
-    shapes.push(pathShape(full, polys.map(atHundredths)));
-  };
+  const { fills, lines, shapes } = new ModelNodes();
+  const add = (to: PathNode[], node: Omit<PathNode, "d">, polys: Polyline[]) => addNode(to, shapes, node, polys);
 
   let spreadCancels = false;
   if (sigmas > 0) {

@@ -1,21 +1,11 @@
 // The project schema (zod): the strict form of the current version, and the field rules the restore step
 // (./restore.ts) reads untrusted input with.
 import { z } from "zod";
+import { PROJECT_LIMITS } from "./limits";
 import { PROJECT_VERSION } from "./types";
+import { MIN_RANGE_DECADES, saneRange } from "./view-range";
 
-/** Size limits of a project; anything beyond is refused (or, for text, cut) rather than trusted. */
-export const PROJECT_LIMITS = {
-  models: 500,
-  curves: 500,
-  /** Points per curve. */
-  points: 5_000_000,
-  fermions: 200,
-  id: 100,
-  label: 500,
-  citation: 100_000,
-  fileName: 1_000,
-  rational: 64,
-} as const;
+export { PROJECT_LIMITS };
 
 // ---------------------------------------------------------------------------------------------- building blocks
 
@@ -144,7 +134,12 @@ export const curveData = z.unknown().transform((v, ctx) => {
 
 const positiveRange = z
   .tuple([z.number().positive(), z.number().positive()])
-  .refine(([lo, hi]) => lo < hi, "expected [low, high] with low < high");
+  .refine(([lo, hi]) => lo < hi, "expected [low, high] with low < high")
+  .refine((r) => sameRange(saneRange(r), r), `expected at least ${MIN_RANGE_DECADES} decades within 10^±300`);
+
+function sameRange(a: readonly [number, number] | null, b: readonly [number, number]): boolean {
+  return a !== null && a[0] === b[0] && a[1] === b[1];
+}
 
 // ----------------------------------------------------------------------------------------------- strict schema
 

@@ -6,9 +6,9 @@ import type { SizePreset } from "../../project/types";
 import { PRESETS, presetOf, CUSTOM_MM_LIMITS } from "../../plot/layout";
 import { useAxband } from "../store";
 import type { PngScale } from "./png";
-import { saveModelCsv, savePdf, savePng, saveSvg } from "./export-actions";
 import { NumberField } from "../curves/NumberField";
 import { Popover } from "./Popover";
+import { ProjectNameField } from "../share/ProjectSections";
 import "../curves/curves.css";
 import "./export.css";
 
@@ -24,6 +24,11 @@ const PNG_SCALES: { value: PngScale; label: string }[] = [
   { value: "2x", label: "2× (sharp on high-dpi screens)" },
   { value: "300dpi", label: "300 dpi at the physical size" },
 ];
+
+// The writers (SVG, PNG, CSV) load on the first export, apart from the first figure.
+const actions = () => import("./export-actions");
+const saveSvg = () => void actions().then((a) => a.saveSvg());
+const saveModelCsv = () => void actions().then((a) => a.saveModelCsv());
 
 const mmRule = (n: number) =>
   n >= CUSTOM_MM_LIMITS[0] && n <= CUSTOM_MM_LIMITS[1] ? null : `${CUSTOM_MM_LIMITS[0]}–${CUSTOM_MM_LIMITS[1]} mm`;
@@ -79,7 +84,7 @@ function ImageSection() {
   const onPng = async () => {
     setBusy(true);
     try {
-      await savePng(pngScale);
+      await (await actions()).savePng(pngScale);
     } finally {
       setBusy(false);
     }
@@ -108,7 +113,7 @@ function PdfSection() {
   const onPdf = async () => {
     setBusy(true);
     try {
-      await savePdf();
+      await (await actions()).savePdf();
     } finally {
       setBusy(false);
     }
@@ -157,6 +162,10 @@ export function ExportMenu() {
         Export SVG
       </button>
       <Popover label="▾" ariaLabel="More export options" open={open} onOpenChange={setOpen} testId="export-menu">
+        <section>
+          <h3>File name</h3>
+          <ProjectNameField />
+        </section>
         <SizeSection />
         <PdfSection />
         <ImageSection />

@@ -5,16 +5,27 @@ import { embedCapText, exportFigureSvgWithInfo } from "../../formats/figure-file
 import { modelsToCsv } from "../../formats/model-csv";
 import { setPngDpi } from "../../formats/png-meta";
 import { presetOf } from "../../plot/layout";
+import { defaultProject } from "../../project/demo";
+import type { Project } from "../../project/types";
 import { useAxband } from "../store";
 import { downloadBlob, downloadText, safeFileName } from "./download";
 import { pngFigure, rasteriseSvg, type PngScale } from "./png";
 
-/** Base name of exported figure files: the project name, or "axband-figure". */
-function figureBaseName(projectName: string): string {
-  return safeFileName(
-    projectName.trim() === "" || projectName === "Untitled" ? "axband-figure" : projectName,
-    "axband-figure",
-  );
+/** The demo's name, and the ids of its models and curves (the demo content). */
+function demoOf(): { name: string; ids: Set<string> } {
+  const d = defaultProject();
+  return { name: d.name, ids: new Set([...d.models, ...d.curves].map((x) => x.id)) };
+}
+
+/**
+ * Base name of exported figure files: the project name, or "axband-figure" when there is none, or when the
+ * project still has the demo's name but none of the demo's content (new work is not named after the demo).
+ */
+function figureBaseName(project: Project): string {
+  const name = project.name.trim();
+  const demo = demoOf();
+  const leftDemo = name === demo.name && ![...project.models, ...project.curves].some((x) => demo.ids.has(x.id));
+  return safeFileName(name === "" || name === "Untitled" || leftDemo ? "axband-figure" : name, "axband-figure");
 }
 
 const push = (level: "status" | "alert", text: string): void => {
@@ -29,7 +40,7 @@ export function saveSvg(): void {
       preset: project.figure.preset,
       embedProject: true,
     });
-    const name = `${figureBaseName(project.name)}.svg`;
+    const name = `${figureBaseName(project)}.svg`;
     downloadBlob(name, new Blob([svg], { type: "image/svg+xml" }));
     const cm = `${(size.widthMm / 10).toFixed(1)} × ${(size.heightMm / 10).toFixed(1)} cm`;
     if (embeddedCurves) return push("status", `Saved ${name} (${cm}; drop it on axband to reopen the project).`);
@@ -52,7 +63,7 @@ export async function savePng(pngScale: PngScale): Promise<void> {
     const css = await fontFaceCss(target.svg, project.figure.font).catch(() => null);
     const svg = css ? withFontFaces(target.svg, css) : target.svg;
     const png = setPngDpi(await rasteriseSvg(svg, target.widthPx, target.heightPx), target.dpi);
-    const name = `${figureBaseName(project.name)}${pngScale === "1x" ? "" : `@${pngScale}`}.png`;
+    const name = `${figureBaseName(project)}${pngScale === "1x" ? "" : `@${pngScale}`}.png`;
     downloadBlob(name, new Blob([png as BlobPart], { type: "image/png" }));
     const note = css ? "" : " The figure font could not be loaded, so the text uses a system font.";
     push("status", `Saved ${name} (${target.widthPx} × ${target.heightPx} px, ${Math.round(target.dpi)} dpi).${note}`);
@@ -67,7 +78,7 @@ export async function savePdf(): Promise<void> {
     const project = useAxband.getState().project;
     const { projectPdf } = await import("./pdf");
     const r = await projectPdf(project, project.figure.font);
-    const name = `${figureBaseName(project.name)}.pdf`;
+    const name = `${figureBaseName(project)}.pdf`;
     downloadBlob(name, new Blob([r.pdf as BlobPart], { type: "application/pdf" }));
     const size = presetOf(project.figure);
     const cm = `${(size.widthMm / 10).toFixed(1)} × ${(size.heightMm / 10).toFixed(1)} cm`;
@@ -86,7 +97,7 @@ export function saveModelCsv(): void {
   const project = useAxband.getState().project;
   if (project.models.length === 0) return push("alert", "There are no models to export.");
   try {
-    const name = `${figureBaseName(project.name)}-models.csv`;
+    const name = `${figureBaseName(project)}-models.csv`;
     downloadText(name, modelsToCsv(project), "text/csv");
     push("status", `Saved ${name}.`);
   } catch (e) {

@@ -4,6 +4,7 @@
 import { MAX_IMPORT_BYTES, projectFromFile } from "../../data";
 import { extractProjectFromSvg } from "../../formats/figure-file";
 import type { Project } from "../../project/types";
+import { repairsNote } from "../store/open-notes";
 
 export type OpenOutcome = { ok: true; project: Project; message: string } | { ok: false; error: string };
 
@@ -69,11 +70,16 @@ export async function openProjectFile(file: Blob & { name: string }): Promise<Op
       const r = extractProjectFromSvg(text);
       if (!r.ok) return { ok: false, error: `${file.name} was not opened: ${r.error}.` };
       const left = r.note ? ` Note: ${r.note}.` : "";
-      return { ok: true, project: r.project, message: `Opened the project embedded in ${file.name}.${left}` };
+      const repaired = repairsNote(r.repairs, file.name);
+      return {
+        ok: true,
+        project: r.project,
+        message: `Opened the project embedded in ${file.name}.${left}${repaired}`,
+      };
     }
     const r = projectFromFile(text, file.name);
     if (!r.ok) return { ok: false, error: r.error };
-    return { ok: true, project: r.project, message: `Opened ${file.name}.` };
+    return { ok: true, project: r.project, message: `Opened ${file.name}.${repairsNote(r.repairs, file.name)}` };
   } catch (e) {
     return { ok: false, error: `${file.name} was not opened: ${e instanceof Error ? e.message : String(e)}` };
   }

@@ -1,0 +1,15 @@
+// The size limits of a project, apart from the schema so that code which only checks a size (the autosave
+// reader) does not load the schema and its validator.
+/** Size limits of a project; anything beyond is refused (or, for text, cut) rather than trusted. */
+export const PROJECT_LIMITS = {
+  models: 500,
+  curves: 500,
+  /** Points per curve. */
+  points: 5_000_000,
+  fermions: 200,
+  id: 100,
+  label: 500,
+  citation: 100_000,
+  fileName: 1_000,
+  rational: 64,
+} as const;
