@@ -15,15 +15,15 @@ export function pngPixelSize(widthIn: number, heightIn: number, dpi: number): { 
 }
 
 /**
- * PNG bytes of an SVG at exactly `widthPx` wide (the height follows the viewBox's aspect ratio), on white
- * like the app's PNG export, with pHYs set to `dpi`. Text uses only the figure font's files (no system
- * fonts), so the PNG is the same on every machine and matches the PDF.
+ * The SVG drawn by resvg at exactly `widthPx` wide (the height follows the viewBox's aspect ratio), on white
+ * like the app's PNG export. Text uses only the figure font's files (no system fonts), so the pixels are the
+ * same on every machine and match the PDF's.
  */
-export function renderPng(svg: string, widthPx: number, dpi: number, font: FigureFontFamily = "sans"): Uint8Array {
+export function rasterise(svg: string, widthPx: number, font: FigureFontFamily = "sans") {
   // Loaded on first use: SVG-only runs skip the native module's start-up.
   const { Resvg } = createRequire(import.meta.url)("@resvg/resvg-js") as typeof import("@resvg/resvg-js");
   const family = FAMILY_NAME[font];
-  const r = new Resvg(svg, {
+  return new Resvg(svg, {
     fitTo: { mode: "width", value: widthPx },
     background: "#ffffff",
     font: {
@@ -34,6 +34,10 @@ export function renderPng(svg: string, widthPx: number, dpi: number, font: Figur
       serifFamily: font === "serif" ? family : undefined,
     },
     logLevel: "off",
-  });
-  return setPngDpi(new Uint8Array(r.render().asPng()), dpi);
+  }).render();
+}
+
+/** PNG bytes of {@link rasterise}'s image, with pHYs set to `dpi`. */
+export function renderPng(svg: string, widthPx: number, dpi: number, font: FigureFontFamily = "sans"): Uint8Array {
+  return setPngDpi(new Uint8Array(rasterise(svg, widthPx, font).asPng()), dpi);
 }
