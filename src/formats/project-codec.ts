@@ -20,6 +20,11 @@
 //   string-based encoder's, which tests/formats/link-large.test.ts keeps as its reference.)
 //   Without curves ("c" absent), a link carries name, constants, figure and models only; "o" says how many
 //   curves the sender had.
+//
+// Link format v2 (frozen): v1 plus four model keys: "t" kind (base: "line" when min and max E/N are the same
+// text, else "interval"), "e" members as [E/N, count] or [E/N, count, N_DW] lists (base: none), "d" set
+// drawing (base "extremes"), "h" set share (base 0.68). Everything else as in v1; v1 links decode through the
+// v1 → v2 migration.
 import { Deflate, Inflate, deflateSync, inflateSync } from "fflate";
 import { parseJsonSafely, projectsEqual, restoreProject } from "../project/schema";
 import {
@@ -352,6 +357,31 @@ const MODEL_V1: Codec = {
   ],
 };
 
+/** Members as short lists ([E/N, count] or [E/N, count, N_DW]); anything else passes to the schema, which reports it. */
+function encodeMembers(v: unknown): unknown {
+  if (!Array.isArray(v)) return v;
+  return v.map((m: Rec) => (m.nDW === undefined ? [m.eOverN, m.count] : [m.eOverN, m.count, m.nDW]));
+}
+
+function decodeMembers(v: unknown): unknown {
+  if (!Array.isArray(v)) throw new ShapeError("the members of a model are not a list");
+  return v.map((m) => {
+    if (!Array.isArray(m) || m.length < 2 || m.length > 3) throw new ShapeError("a model member is not [E/N, count]");
+    return m.length === 3 ? { eOverN: m[0], count: m[1], nDW: m[2] } : { eOverN: m[0], count: m[1] };
+  });
+}
+
+const MODEL_V2: Codec = {
+  table: MODEL_STATE,
+  fields: [
+    ...MODEL_V1.fields,
+    { full: "kind", short: "t", base: (m) => (str(m.eOverNMin) === str(m.eOverNMax) ? "line" : "interval") },
+    { full: "members", short: "e", base: () => [], enc: encodeMembers, dec: decodeMembers },
+    { full: "setDraw", short: "d", base: () => "extremes" },
+    { full: "setShare", short: "h", base: () => 0.68 },
+  ],
+};
+
 const CURVE_V1: Codec = {
   table: CURVE_STATE,
   fields: [
@@ -434,7 +464,7 @@ function toCompact(project: Project, includeCurves: boolean): Rec {
     if (Object.keys(f).length > 0) out.f = f;
   }
   if (goesTo(PROJECT_STATE.models, target) && project.models.length > 0) {
-    out.m = project.models.map((m, i) => encodeWith(MODEL_V1, m as unknown as Rec, i, target));
+    out.m = project.models.map((m, i) => encodeWith(MODEL_V2, m as unknown as Rec, i, target));
   }
   if (goesTo(PROJECT_STATE.curves, target)) {
     if (project.curves.length > 0)
@@ -445,7 +475,7 @@ function toCompact(project: Project, includeCurves: boolean): Rec {
   return out;
 }
 
-function fromCompactV1(compact: unknown): { project: Rec; omitted: number } {
+function fromCompact(compact: unknown, version: 1 | 2): { project: Rec; omitted: number } {
   if (!isRec(compact)) throw new ShapeError("the content is not an object");
   const list = (key: string, what: string): unknown[] => {
     const v = Object.hasOwn(compact, key) ? compact[key] : [];
@@ -455,13 +485,14 @@ function fromCompactV1(compact: unknown): { project: Rec; omitted: number } {
   const models = list("m", "models");
   const curves = list("c", "curves");
   const omitted = Object.hasOwn(compact, "o") ? compact.o : 0;
+  const modelCodec = version === 1 ? MODEL_V1 : MODEL_V2;
   return {
     project: {
-      version: 1,
+      version,
       name: Object.hasOwn(compact, "n") ? compact.n : "Untitled",
       physics: decodeWith(PHYSICS_V1, compact.p, 0, "the constants"),
       figure: decodeWith(FIGURE_V1, compact.f, 0, "the figure"),
-      models: models.map((m, i) => decodeWith(MODEL_V1, m, i, `model ${i + 1}`)),
+      models: models.map((m, i) => decodeWith(modelCodec, m, i, `model ${i + 1}`)),
       curves: curves.map((c, i) => decodeWith(CURVE_V1, c, i, `curve ${i + 1}`)),
     },
     omitted: typeof omitted === "number" && Number.isInteger(omitted) && omitted >= 0 ? omitted : 0,
@@ -470,7 +501,8 @@ function fromCompactV1(compact: unknown): { project: Rec; omitted: number } {
 
 /** Decoders of every link format ever written, by version: compact JSON → project object of that schema version. */
 const LINK_DECODERS: Readonly<Record<number, (compact: unknown) => { project: Rec; omitted: number }>> = {
-  1: fromCompactV1,
+  1: (c) => fromCompact(c, 1),
+  2: (c) => fromCompact(c, 2),
 };
 
 // ------------------------------------------------------------------------------------------------------ encoding

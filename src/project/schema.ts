@@ -2,7 +2,6 @@
 // untrusted input, migrates old versions, fills defaults, repairs or drops what is broken, and says what it did.
 import { z } from "zod";
 import {
-  autoModelLabel,
   defaultCurveLineStyle,
   defaultFigure,
   defaultPhysics,
@@ -13,8 +12,12 @@ import {
   newModel,
 } from "./defaults";
 import { newId, uniqueId } from "./ids";
+import { settleModelKind } from "./model-kind";
 import { migrate } from "./migrate";
+import { MAX_RATIONAL_CHARS, isRationalText, rationalValue } from "./rational-text";
 import { PROJECT_VERSION, type Curve, type Figure, type Model, type PhysicsSettings, type Project } from "./types";
+
+export { isRationalText, rationalValue };
 
 /** Size limits of a project; anything beyond is refused (or, for text, cut) rather than trusted. */
 export const PROJECT_LIMITS = {
@@ -27,7 +30,9 @@ export const PROJECT_LIMITS = {
   label: 500,
   citation: 100_000,
   fileName: 1_000,
-  rational: 64,
+  rational: MAX_RATIONAL_CHARS,
+  /** Members of a model set or between-lines band (distinct E/N values). */
+  members: 20_000,
 } as const;
 
 // ---------------------------------------------------------------------------------------------- building blocks
@@ -35,36 +40,6 @@ export const PROJECT_LIMITS = {
 // C0 controls other than tab, LF and CR (and DEL) are invalid in the XML of an exported SVG.
 // eslint-disable-next-line no-control-regex
 const CONTROL_RE = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/g;
-
-// One pass: optional sign, then "p/q" (integers, spaces around "/" allowed) or a decimal with exponent.
-const RATIONAL_RE =
-  /^\s*([+\-\u2212]?)(?:(\d+)\s*\/\s*([+\-\u2212]?)(\d+)|((?:\d+\.?\d*|\.\d+)(?:[eE][+\-\u2212]?\d+)?))\s*$/;
-
-/**
- * Numeric value of E/N text as the E/N field stores it ("8/3", "-1/3", "0.5", "1e-1"; spaces around "/" and a
- * Unicode minus are tolerated); NaN when it is neither a number nor a fraction, the denominator is 0, or the
- * value is not finite.
- */
-export function rationalValue(s: string): number {
-  if (typeof s !== "string" || s.length > PROJECT_LIMITS.rational) return Number.NaN;
-  const m = RATIONAL_RE.exec(s);
-  if (!m) return Number.NaN;
-  const sign = m[1] === "" || m[1] === "+" ? 1 : -1;
-  let v: number;
-  if (m[2] !== undefined) {
-    const den = Number(m[4]) * (m[3] === "" || m[3] === "+" ? 1 : -1);
-    if (den === 0) return Number.NaN;
-    v = (sign * Number(m[2])) / den;
-  } else {
-    v = sign * Number(m[5].replace("\u2212", "-"));
-  }
-  return Number.isFinite(v) ? v : Number.NaN;
-}
-
-/** Whether a string is E/N text accepted by {@link rationalValue}. */
-export function isRationalText(s: string): boolean {
-  return !Number.isNaN(rationalValue(s));
-}
 
 const hexColour = z
   .string()
@@ -78,6 +53,8 @@ const sizePreset = z.enum(["slide", "single-column", "double-column", "custom"])
 const topAxis = z.enum(["none", "fa", "frequency"]);
 const yView = z.enum(["coupling", "normalized", "g-gamma"]);
 const physicsRef = z.enum(["2016", "2019", "custom"]);
+const modelKind = z.enum(["line", "interval", "between", "set"]);
+const setDraw = z.enum(["lines", "extremes", "central"]);
 
 const eOverNText = z
   .string()
@@ -106,6 +83,8 @@ const modelSource = z.discriminatedUnion("kind", [
     fermions: z.array(fermionInput).max(PROJECT_LIMITS.fermions),
     scalarCharge: rationalInput.transform(String),
   }),
+  z.object({ kind: z.literal("ensemble"), settings: z.record(z.string().max(PROJECT_LIMITS.id), z.unknown()) }),
+  z.object({ kind: z.literal("scan") }),
 ]);
 
 function isFiniteNumberArray(v: unknown, max: number): v is ArrayLike<number> {
@@ -161,8 +140,20 @@ export const ProjectSchema = z.object({
       z.object({
         id: z.string().min(1).max(PROJECT_LIMITS.id),
         label: z.string().max(PROJECT_LIMITS.label),
+        kind: modelKind,
         eOverNMin: eOverNText,
         eOverNMax: eOverNText,
+        members: z
+          .array(
+            z.object({
+              eOverN: eOverNText,
+              count: z.int().min(1),
+              nDW: z.string().max(PROJECT_LIMITS.rational).optional(),
+            }),
+          )
+          .max(PROJECT_LIMITS.members),
+        setDraw,
+        setShare: z.number().gt(0).max(1),
         source: modelSource,
         colour: hexColour,
         lineStyle,
@@ -327,8 +318,23 @@ const eOverNLenient = z.unknown().transform((v, ctx) => {
 const lenientModel = z.object({
   id: lenient(z.string().min(1).max(PROJECT_LIMITS.id), "id"),
   label: text(PROJECT_LIMITS.label, "label"),
-  eOverNMin: eOverNLenient,
+  kind: lenient(modelKind, "kind"),
+  eOverNMin: eOverNLenient.optional(),
   eOverNMax: eOverNLenient.optional(),
+  members: lenient(
+    z
+      .array(
+        z.object({
+          eOverN: eOverNLenient,
+          count: z.int().min(1).max(Number.MAX_SAFE_INTEGER).optional(),
+          nDW: z.string().max(PROJECT_LIMITS.rational).optional(),
+        }),
+      )
+      .max(PROJECT_LIMITS.members),
+    "members",
+  ),
+  setDraw: lenient(setDraw, "set drawing"),
+  setShare: lenient(z.number().gt(0).max(1), "set share"),
   source: lenient(modelSource, "source"),
   colour: lenient(hexColour, "colour"),
   lineStyle: lenient(lineStyle, "line style"),
@@ -405,15 +411,24 @@ function restoreModels(raw: unknown[], repairs: string[]): Model[] {
       return;
     }
     const m = r.data;
-    let [min, max] = [m.eOverNMin, m.eOverNMax ?? m.eOverNMin];
-    if (rationalValue(max) < rationalValue(min)) {
-      note("E/N", "the ends were swapped");
-      [min, max] = [max, min];
+    const settled = settleModelKind({
+      kind: m.kind,
+      eOverNMin: m.eOverNMin,
+      eOverNMax: m.eOverNMax,
+      members: m.members?.map((x) => ({ ...x, count: x.count ?? 1 })),
+    });
+    if (!settled.ok) {
+      repairs.push(`model ${i + 1}${labelOf(item)} was left out: ${settled.error}`);
+      return;
     }
+    for (const msg of settled.notes) note("E/N", msg);
+    const { kind, eOverNMin: min, eOverNMax: max, members } = settled;
     const d = newModel({
       id: "",
+      kind,
       eOverNMin: min,
       eOverNMax: max,
+      members,
       colour: MODEL_COLOURS[out.length % MODEL_COLOURS.length],
     });
     const id = uniqueId(m.id ?? `m-${out.length + 1}`, taken);
@@ -421,9 +436,13 @@ function restoreModels(raw: unknown[], repairs: string[]): Model[] {
     taken.add(id);
     out.push({
       id,
-      label: m.label ?? autoModelLabel(min, max),
+      label: m.label ?? d.label,
+      kind,
       eOverNMin: min,
       eOverNMax: max,
+      members,
+      setDraw: m.setDraw ?? d.setDraw,
+      setShare: m.setShare ?? d.setShare,
       source: m.source ?? d.source,
       colour: m.colour ?? d.colour,
       lineStyle: m.lineStyle ?? d.lineStyle,

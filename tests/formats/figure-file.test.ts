@@ -85,8 +85,8 @@ describe("exportFigureSvg", () => {
     expect(el).toHaveLength(1);
     expect(el[0].parentNode?.nodeName).toBe("metadata");
     expect(el[0].getAttribute("encoding")).toBe(EMBED_ENCODING);
-    // "v1." and the base64url alphabet only (RFC 4648 §5), so the payload needs no XML escaping.
-    expect(el[0].textContent).toMatch(/^v1\.[A-Za-z0-9_-]+$/);
+    // "v2." and the base64url alphabet only (RFC 4648 §5), so the payload needs no XML escaping.
+    expect(el[0].textContent).toMatch(/^v2\.[A-Za-z0-9_-]+$/);
     expect(exportFigureSvg(canonical(), { embedProject: false })).not.toContain(AXBAND_PROJECT_NS);
   });
 
@@ -138,7 +138,7 @@ describe("extractProjectFromSvg", () => {
       ["not svg at all", /not an SVG/],
       [exportFigureSvg(canonical(), { embedProject: false }), /carries no axband project/],
       [
-        svg.replace(/(encoding="deflate-base64url"[^>]*>v1\.)[A-Za-z0-9_-]{20}/, "$1AAAAAAAAAAAAAAAAAAAA"),
+        svg.replace(/(encoding="deflate-base64url"[^>]*>v2\.)[A-Za-z0-9_-]{20}/, "$1AAAAAAAAAAAAAAAAAAAA"),
         /cannot be read/,
       ],
       [svg.replace(`encoding="${EMBED_ENCODING}"`, 'encoding="rot13"'), /unknown encoding/],

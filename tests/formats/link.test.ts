@@ -57,7 +57,7 @@ describe("encodeLink / decodeLink", () => {
   it("the demo state's link without curve data is at most 300 characters", () => {
     const link = encodeLink(defaultProject(), { includeCurves: false });
     expect(link.length).toBeLessThanOrEqual(300);
-    expect(link).toMatch(/^v1\.[A-Za-z0-9_-]+$/);
+    expect(link).toMatch(/^v2\.[A-Za-z0-9_-]+$/);
   });
 
   it("the payload is raw DEFLATE of UTF-8 JSON with short keys (readable by any inflater)", () => {

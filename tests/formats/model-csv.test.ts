@@ -8,8 +8,12 @@ function model(id: string, label: string, min: string, max = min, extra: Partial
   return {
     id,
     label,
+    kind: min === max ? "line" : "interval",
     eOverNMin: min,
     eOverNMax: max,
+    members: [],
+    setDraw: "extremes",
+    setShare: 0.68,
     source: { kind: "typed" },
     colour: "#1f6f8b",
     lineStyle: "solid",
@@ -22,7 +26,7 @@ function model(id: string, label: string, min: string, max = min, extra: Partial
 
 function project(models: Model[], massRangeEv: [number, number] = [1e-6, 1e-3]): Project {
   return {
-    version: 1,
+    version: 2,
     name: "test",
     physics: { ref: "2019", custom: { cGamma: 1.92, cGammaSigma: 0.04, kMuEv: 5.691, kMuEvSigma: 0.051, label: "x" } },
     models,

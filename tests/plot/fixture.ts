@@ -10,7 +10,11 @@ export const rng = mulberry32;
 export function model(partial: Partial<Model> & Pick<Model, "id" | "eOverNMin">): Model {
   return {
     label: `E/N = ${partial.eOverNMin}`,
+    kind: partial.eOverNMax === undefined || partial.eOverNMax === partial.eOverNMin ? "line" : "interval",
     eOverNMax: partial.eOverNMin,
+    members: [],
+    setDraw: "extremes",
+    setShare: 0.68,
     source: { kind: "typed" },
     colour: "#117A8B",
     lineStyle: "solid",
@@ -87,7 +91,7 @@ export function fixtureCurves(): Curve[] {
 
 export function fixtureProject(): Project {
   return {
-    version: 1,
+    version: 2,
     name: "plot fixture",
     physics: {
       ref: "2019",
