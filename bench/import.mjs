@@ -8,7 +8,7 @@ import { csvParseRows } from "d3-dsv";
 import { arg, benchSets, median } from "./import-data.mjs";
 
 const runs = Number(arg("runs", "7"));
-const csv = await tsImport("../src/formats/csv.ts", import.meta.url);
+const csv = await tsImport("../src/formats/csv/index.ts", import.meta.url);
 
 /** What a user of d3-dsv would write for the same job: rows of strings, then numbers into typed arrays. */
 function d3ToArrays(text) {

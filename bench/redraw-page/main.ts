@@ -213,7 +213,7 @@ async function run(opts: {
   const resting = buildScene(at(ranges[0]), { resolution });
   render(resting);
   // The zoom steps are one gesture: an automatic legend keeps this first frame's place meanwhile, as the app's
-  // figure holds it (FigureView, LEGEND_HOLD_MS); a fixed place is unaffected.
+  // figure holds it (useFigureGestures, LEGEND_HOLD_MS); a fixed place is unaffected.
   const holdLegend = resting.autoLegendPlace;
   sync();
   const firstDrawMs = performance.now() - t;

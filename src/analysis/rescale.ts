@@ -2,7 +2,7 @@
 // legend text that says a curve is shown rescaled.
 //
 // A haloscope's signal power grows as g² · ρ_a, with ρ_a = f · ρ the local axion density; a limit on the
-// power therefore moves as g ∝ 1/√(f ρ): g_shown = g · √(ρ₀/ρ) / √f (common practice, DESIGN.md §4).
+// power therefore moves as g ∝ 1/√(f ρ): g_shown = g · √(ρ₀/ρ) / √f (common practice).
 import type { CurveRescale } from "../project/types";
 
 export interface RescaleOpts {

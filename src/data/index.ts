@@ -5,7 +5,7 @@ export * from "../project/demo";
 export * from "../project/migrate";
 export * from "../project/schema";
 export * from "../project/state-table";
-export * from "../formats/project-codec";
+export * from "../formats/codec";
 export * from "../formats/project-file";
 export * from "../analysis/overlap";
 export * from "../analysis/overlap-table";

@@ -6,7 +6,7 @@ import type { Scene } from "../plot/scene-types";
 import { PX_PER_IN, presetOf } from "../plot/layout";
 import { buildScene } from "../plot/scene";
 import { writeSvg } from "../plot/svg";
-import { decodeLink, encodeLink, encodeLinkWithin } from "./project-codec";
+import { decodeLink, encodeLink, encodeLinkWithin } from "./codec";
 
 /** Namespace URI of our <metadata> element (a URN of our own: nothing is fetched from it). */
 export const AXBAND_PROJECT_NS = "urn:axband:project";
@@ -124,8 +124,8 @@ export function embedCapText(
 
 /**
  * The <metadata> content that carries the project, and what it holds: one element in our namespace whose
- * text is the share-link fragment of the project ("v1." + base64url of raw DEFLATE of the compact JSON; see
- * src/formats/project-codec.ts), so reading it back goes through the link decoder's size cap, schema check and repair.
+ * text is the share-link fragment of the project ("v2." + base64url of raw DEFLATE of the compact JSON; see
+ * src/formats/codec/v1.ts), so reading it back goes through the link decoder's size cap, schema check and repair.
  * Curve data are included while the curves have at most `maxPoints` points (checked first, at no cost) and the
  * fragment stays within `maxChars`; the encoder stops as soon as it cannot, so a project over the character
  * cap costs about the cap's worth of packing. Otherwise the fragment carries name,

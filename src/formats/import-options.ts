@@ -1,7 +1,7 @@
 // The per-file choices of the import step as parser options: what a first parse (or preview) detected,
 // pinned so that a re-parse with one choice changed, or the full parse after a preview, reads the same way.
 import type { CurveParseOptions, CurveParseResult } from "./csv";
-import { COUPLING_UNITS, MASS_UNITS } from "./units";
+import { MASS_UNITS } from "./units";
 
 /** Delimiter choices with their labels; "auto" lets the parser detect it. */
 export const DELIMITER_CHOICES: readonly { value: string; label: string }[] = [
@@ -14,12 +14,6 @@ export const DELIMITER_CHOICES: readonly { value: string; label: string }[] = [
 
 /** Mass unit choices (value as the parser takes it, label with μ). */
 export const MASS_UNIT_CHOICES: readonly { value: string; label: string }[] = MASS_UNITS.map((u) => ({
-  value: u.id,
-  label: u.label,
-}));
-
-/** Coupling unit choices. */
-export const COUPLING_UNIT_CHOICES: readonly { value: string; label: string }[] = COUPLING_UNITS.map((u) => ({
   value: u.id,
   label: u.label,
 }));

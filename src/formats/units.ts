@@ -202,7 +202,7 @@ function scalePow10(value: number, pow10: number): number {
  * |E/N − c_γ| it is α m /(2π K·10⁶) (physics core's gFromNormalized); twice that for |g_γ|; and the model
  * line's g_aγγ(m, E/N) for "model-line". NaN when a model line is asked for without an E/N.
  */
-export function couplingScale(massEv: number, unit: CouplingUnit, ctx: CouplingContext): number {
+function couplingScale(massEv: number, unit: CouplingUnit, ctx: CouplingContext): number {
   switch (unit) {
     case "GeV^-1":
       return 1;
@@ -230,9 +230,4 @@ export function couplingToInvGeV(value: number, massEv: number, unit: CouplingUn
 export function couplingFromInvGeV(gInvGeV: number, massEv: number, unit: CouplingUnit, ctx: CouplingContext): number {
   if (unit === "GeV^-1") return gInvGeV;
   return gInvGeV / couplingScale(massEv, unit, ctx);
-}
-
-/** Label of a mass unit for headers and menus ("μeV"). */
-export function massUnitLabel(unit: MassUnit): string {
-  return massUnitInfo(unit).label;
 }

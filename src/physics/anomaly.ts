@@ -1,4 +1,4 @@
-// The anomaly calculator: exact E, N, E/N and N_DW of a list of Weyl multiplets (DESIGN.md §4), with a
+// The anomaly calculator: exact E, N, E/N and N_DW of a list of Weyl multiplets, with a
 // per-field breakdown for the UI and input errors that name the fermion and the field at fault.
 import Fraction from "fraction.js";
 import type { ElectroweakInput, FermionInput } from "./anomaly-types";
@@ -277,7 +277,7 @@ export function tryAnomaly(
 }
 
 /**
- * E, N, E/N and N_DW of a field content (DESIGN.md §4): N = Σ X·T(R_c)·n_w·copies,
+ * E, N, E/N and N_DW of a field content: N = Σ X·T(R_c)·n_w·copies,
  * E = Σ X·d(R_c)·Σ Q²·copies, with X negated for right-handed fields.
  * @param opts.scalarCharge X_S for N_DW = |2N/X_S|. @default 1
  * @throws AnomalyInputError naming the first bad field (all problems in `errors`).

@@ -1,6 +1,7 @@
 // The catalogue: ready-made KSVZ-type and DFSZ-type models given by their field content only; E/N and N_DW
 // always come from the anomaly calculator, never from typed-in numbers.
-import type { FermionInput } from "./anomaly-types";
+import type { ElectroweakInput, FermionInput } from "./anomaly-types";
+import type { ScalarInput } from "./charges/types";
 
 /** One ready-made model. */
 export interface CatalogueEntry {
@@ -11,7 +12,12 @@ export interface CatalogueEntry {
   scalarCharge: string | number;
   note?: string;
   group: "ksvz" | "dfsz";
+  /** The scalars and the kept and forbidden terms (term syntax of ./charges/syntax.ts) the charges follow from. */
+  lagrangian: { scalars: ScalarInput[]; terms: string[]; forbidden: string[]; normalize: string };
 }
+
+const SINGLET: ElectroweakInput = { kind: "sm", dim: 1, y: "0" };
+const PHI: ScalarInput = { name: "Phi", ew: SINGLET };
 
 /** A heavy quark representation (colour, SU(2)_L dimension, hypercharge) as in the heavy-quark tables. */
 interface HeavyQuarkRep {
@@ -62,6 +68,8 @@ function heavyQuark(r: HeavyQuarkRep, id: string, label: string): CatalogueEntry
       { name: "Q_R", colour: r.colour, ew, chirality: "R", pq: 0 },
     ],
     note: `Heavy quark ${repLabel(r)}: Q_L with X = 1, Q_R with X = 0, scalar Φ with X_S = 1 (Yukawa Φ Q̄_L Q_R).`,
+    // The Yukawa fixes X_L − X_R = X_Φ; the bare mass Q̄_L Q_R is what the PQ symmetry must forbid.
+    lagrangian: { scalars: [PHI], terms: ["Qbar_L Phi Q_R"], forbidden: ["Qbar_L Q_R"], normalize: "Phi" },
   };
 }
 
@@ -97,6 +105,22 @@ function dfsz(id: string, label: string, leptonsLike: "down" | "up"): CatalogueE
     note:
       "Three SM generations, two Higgs doublets and a singlet Φ (X_S = 1) coupled as H_2† H_1 Φ†²; " +
       `X(q_L) = X(l_L) = 0, X(u_R) = X(d_R) = −1; ${lepton}.`,
+    lagrangian: {
+      scalars: [
+        { name: "H1", ew: { kind: "sm", dim: 2, y: "1/2" } },
+        { name: "H2", ew: { kind: "sm", dim: 2, y: "1/2" } },
+        PHI,
+      ],
+      // H̃₂ = iσ₂H₂* carries the charges of H₂†; the portal with Φ†² (not Φ†) gives N_DW = 6.
+      terms: [
+        "qbar_L H1 d_R",
+        "qbar_L H2^† u_R",
+        leptonsLike === "down" ? "lbar_L H1 e_R" : "lbar_L H2 e_R",
+        "H2^† H1 Phi^†2",
+      ],
+      forbidden: ["H2^† H1", "H2^† H1 Phi^†"],
+      normalize: "Phi",
+    },
   };
 }
 

@@ -7,3 +7,4 @@ export * from "./anomaly";
 export * from "./catalogue";
 export * from "./eovern-parse";
 export type * from "./anomaly-types";
+export * from "./charges";

@@ -1,10 +1,10 @@
 // Curves as scene nodes by role: exclusion (filled from the curve up past the plot top, plus the line),
-// projection (a line), region (a closed, filled and outlined polygon), at pixel resolution via decimate.ts.
+// projection (a line), region (a closed, filled and outlined polygon), at pixel resolution via thinning/.
 import type { Curve, YView } from "../project/types";
 import type { AxionConstants } from "../physics/constants";
 import type { PathNode } from "./scene-types";
 import type { Shape } from "./legend-place";
-import { curvePixels, pathDataCompact, prepareCurve, type PreparedCurve } from "./decimate";
+import { curvePixels, pathDataCompact, prepareCurve, type PreparedCurve } from "./thinning/index";
 import { dashFor, r2, safeColour, unitInterval } from "./format";
 import { viewTransform, type LogAffine } from "./scales";
 import { rescaleFactor } from "./physics-settings";

@@ -76,7 +76,7 @@ export {
   type Polyline,
   type PixelParams,
   type Rect,
-} from "./decimate";
+} from "./thinning/index";
 export { curveGeometry, drawsSorted, preparedOf, type CurveGeometry } from "./curves";
 export { modelGeometry, type ModelGeometry } from "./models";
 export { placeRuns, runsWidthPx, stringWidthPx, runsText, truncateRuns, type PlacedRun } from "./text";

@@ -4,7 +4,7 @@ import type { Curve } from "../project/types";
 import type { SceneNode } from "./scene-types";
 import type { LegendCorner, PlotRect } from "./layout";
 import { drawsSorted, preparedOf } from "./curves";
-import { viewArrays, type PreparedCurve } from "./decimate";
+import { viewArrays, type PreparedCurve } from "./thinning/index";
 
 /** Corners in the order ties are broken: the first of equally covered corners wins. */
 export const LEGEND_CORNERS: readonly LegendCorner[] = ["top-right", "top-left", "bottom-right", "bottom-left"];

@@ -4,7 +4,7 @@
 import { bandCancels, bandEdges, gAgg, type AxionConstants } from "../physics/index";
 import type { Model, YView } from "../project/types";
 import type { PathNode } from "./scene-types";
-import { clipToRect, pathData, type Polyline, type Rect } from "./decimate";
+import { clipToRect, pathData, type Polyline, type Rect } from "./thinning/index";
 import { dashFor, safeColour, unitInterval } from "./format";
 import { gToView, type LogAffine } from "./scales";
 import { eOverNValue } from "./physics-settings";

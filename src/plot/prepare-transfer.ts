@@ -9,7 +9,7 @@ import {
   viewArrays,
   type PreparedCurve,
   type ViewArrays,
-} from "./decimate";
+} from "./thinning/index";
 import { drawsSorted } from "./curves";
 import { constantsOf } from "./physics-settings";
 import { viewTransform } from "./scales";

@@ -107,7 +107,7 @@ export function defaultPhysics(): PhysicsSettings {
 /**
  * Figure of a new project: a 16:9 slide, f_a on the top axis, grid on, the legend in the inner corner where
  * it covers the least of the curves and models ("auto"). Share links keep their own frozen base value for the
- * legend ("bottom-right", src/formats/project-codec.ts), so links written before "auto" existed decode as they did.
+ * legend ("bottom-right", src/formats/codec/v1.ts), so links written before "auto" existed decode as they did.
  */
 export function defaultFigure(): Figure {
   return {

@@ -133,7 +133,7 @@ describe("exclusion curves: exact intervals = brute-force classification", () =>
           role: c.role,
         };
         const raw = overlapDetail(model, curve, { mergeGaps: false });
-        const merged = overlapDetail(model, curve);
+        const merged = overlapDetail(model, curve, { mergeGaps: true });
         // Everything raw reports is still reported, as the same or a stronger kind.
         for (const [a, b] of raw.whole) expect(inList((a + b) / 2, merged.whole)).toBe(true);
         for (const [a, b] of raw.part)

@@ -47,6 +47,22 @@ describe("flat exclusion against a model line (analytic: crossing at m = G/k)", 
     expect(r.whole[0][1]).toBe(m2);
   });
 
+  test("hand-derived number: G = 1e-15 GeV⁻¹ meets the E/N = 0 line at m = 2.55212 μeV", () => {
+    // k = α·|0 − c_γ|/(2π·K·10⁶) with α = 1/137.035999084 (CODATA 2018, Tiesinga et al., RMP 93 (2021) 025010),
+    // c_γ = 1.92 (Grilli di Cortona et al., JHEP 01 (2016) 034), K = 5.691 μeV (Gorghetto & Villadoro, JHEP 03
+    // (2019) 033): k = 1.92/(137.035999084 · 2π · 5.691·10⁶) = 3.91830·10⁻¹⁰ GeV⁻¹/eV, so m = G/k = 2.55212·10⁻⁶ eV
+    // (worked by hand with a pocket calculator, not with the code under test).
+    const r = overlap({ eOverNMin: 0, eOverNMax: 0 }, flat(m1, m2, 1e-15));
+    expect(r.whole.length).toBe(1);
+    expect(r.whole[0][0]).toBeCloseTo(2.55212e-6, 10);
+    expect(r.whole[0][1]).toBe(m2);
+    // E/N = 8/3: |8/3 − 1.92| = 0.746667, k = 1.52378·10⁻¹⁰, m = 6.56261·10⁻⁶ eV (same inputs, same way).
+    expect(overlap({ eOverNMin: 8 / 3, eOverNMax: 8 / 3 }, flat(m1, m2, 1e-15)).whole[0][0]).toBeCloseTo(
+      6.56261e-6,
+      10,
+    );
+  });
+
   test("crossing below the range: the whole range [m1, m2] is excluded, nothing outside it", () => {
     const G = k * 1e-7;
     const r = overlap({ eOverNMin: 0, eOverNMax: 0 }, flat(m1, m2, G));
@@ -394,9 +410,9 @@ describe("mass range, ordering and gaps", () => {
     return { curve, gapLo, gapHi, first: curve.massEv[0], last: curve.massEv[n - 1] };
   }
 
-  test("a gap narrower than one sample (h < d) is merged, and reported", () => {
+  test("a gap narrower than one sample (h < d) is kept by default, merged and reported with mergeGaps", () => {
     const { curve, gapLo, gapHi, first, last } = spike(0.5, 1.5);
-    const raw = overlapDetail({ eOverNMin: 0, eOverNMax: 0 }, curve, { mergeGaps: false });
+    const raw = overlapDetail({ eOverNMin: 0, eOverNMax: 0 }, curve);
     expectIntervals(
       raw.whole,
       [
@@ -405,14 +421,15 @@ describe("mass range, ordering and gaps", () => {
       ],
       1e-9,
     );
-    const merged = overlapDetail({ eOverNMin: 0, eOverNMax: 0 }, curve);
+    expect(raw.bridgedGapsEv).toEqual([]);
+    const merged = overlapDetail({ eOverNMin: 0, eOverNMax: 0 }, curve, { mergeGaps: true });
     expect(merged.whole).toEqual([[first, last]]);
     expectIntervals(merged.bridgedGapsEv, [[gapLo, gapHi]], 1e-9);
   });
 
   test("a gap wider than one sample (h > d) is kept", () => {
     const { curve, gapLo, gapHi, first, last } = spike(1.5, 0.5);
-    const d = overlapDetail({ eOverNMin: 0, eOverNMax: 0 }, curve);
+    const d = overlapDetail({ eOverNMin: 0, eOverNMax: 0 }, curve, { mergeGaps: true });
     expectIntervals(
       d.whole,
       [
@@ -427,7 +444,7 @@ describe("mass range, ordering and gaps", () => {
   test("for a band, a merged gap of whole leaves no part inside it", () => {
     // Band E/N ∈ [0, 0.5]: lower edge k(0.5); the spike pokes above the lower edge only.
     const { curve } = spike(0.1, 1.5);
-    const d = overlapDetail({ eOverNMin: 0, eOverNMax: 0.5 }, curve);
+    const d = overlapDetail({ eOverNMin: 0, eOverNMax: 0.5 }, curve, { mergeGaps: true });
     const lowerEdgeShift = Math.log(slope(0) / slope(0.5)); // 0.30: the spike rises above the lower edge
     expect(lowerEdgeShift).toBeLessThan(1.5);
     // Gaps (analytic, as above): whole 2w·0.40/1.60 ≈ 0.50w and touch 2w·0.1/1.6 ≈ 0.13w, both bridged.

@@ -6,7 +6,7 @@ import type { Browser, BrowserContext, Page } from "playwright-core";
 import { launchChromium, watchPage, type Watched } from "./chromium";
 import { defaultProject } from "../../src/project/demo";
 import { newModel } from "../../src/project/defaults";
-import { encodeLink } from "../../src/formats/project-codec";
+import { encodeLink } from "../../src/formats/codec";
 import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";

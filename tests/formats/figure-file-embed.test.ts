@@ -3,7 +3,7 @@
 // the SVG still reopens with models, figure and constants and says what was left out.
 import { describe, expect, it } from "vitest";
 import { newCurve } from "../../src/project/defaults";
-import { encodeLink } from "../../src/formats/project-codec";
+import { encodeLink } from "../../src/formats/codec";
 import { projectsEqual, restoreProject } from "../../src/project/schema";
 import type { Project } from "../../src/project/types";
 import {

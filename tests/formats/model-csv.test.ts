@@ -136,7 +136,7 @@ describe("modelCsvBlocks", () => {
   });
 
   it("uses the project's custom constants", () => {
-    // c_γ = 1.95, the older coefficient behind the often quoted g_γ = −0.97 for E/N = 0 (DESIGN.md §4; PDG
+    // c_γ = 1.95, the older coefficient behind the often quoted g_γ = −0.97 for E/N = 0 (PDG
     // review "Axions and other similar particles", earlier editions, from memory); K = 5.70 μeV (JHEP 01 (2016) 034).
     const q = project([model("k", "KSVZ-type", "0")]);
     q.physics = {

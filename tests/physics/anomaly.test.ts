@@ -59,7 +59,7 @@ describe("electric charges", () => {
     expect(str(electricCharges({ kind: "su3l", rep: "3bar", x: 0, b: "-1/3" }))).toEqual(["-1/3", "2/3", "-1/3"]);
     expect(str(electricCharges({ kind: "su3l", rep: "1", x: "2/3", b: "-1/3" }))).toEqual(["2/3"]);
   });
-  test("the SU(3)_L charges sum to 3X (T₃ and T₈ are traceless; DESIGN.md §4)", () => {
+  test("the SU(3)_L charges sum to 3X (T₃ and T₈ are traceless; Q = T₃ + βT₈ + X as in Pisano, Pleitez, PRD 46 (1992) 410, from memory)", () => {
     fc.assert(
       fc.property(rational(), rational(), fc.constantFrom("3" as const, "3bar" as const), (x, b, rep) => {
         const sum = electricCharges({ kind: "su3l", rep, x, b }).reduce((a, c) => a.add(c), new Fraction(0));
@@ -69,7 +69,7 @@ describe("electric charges", () => {
   });
 });
 
-describe("E and N (DESIGN.md §4: N = Σ X·T·n_w, E = Σ X·d·ΣQ²)", () => {
+describe("E and N (N = Σ X·T·n_w, E = Σ X·d·ΣQ²: Di Luzio, Giannotti, Nardi, Visinelli, Phys. Rept. 870 (2020) 1, eqs. 2.44–2.45 from memory)", () => {
   test("one heavy quark (3,1,−1/3) with X_L = 1: E = 1/3, N = 1/2, E/N = 2/3, N_DW = 1 (Di Luzio, Mescia, Nardi, PRL 118 (2017) 031801; from memory)", () => {
     const r = anomaly([
       { name: "Q_L", colour: "3", ew: { kind: "sm", dim: 1, y: "-1/3" }, chirality: "L", pq: 1 },
@@ -101,7 +101,7 @@ describe("E and N (DESIGN.md §4: N = Σ X·T·n_w, E = Σ X·d·ΣQ²)", () => 
     // E = X·d·ΣQ²·copies = 1/2·3·(4+1+25)/9·2 = 10, N = X·T·n_w·copies = 1/2·1/2·3·2 = 3/2.
     expect([frac(a.E), frac(a.N)]).toEqual(["10", "3/2"]);
   });
-  test("N_DW = |2N/X_S| with the scalar charge as given (DESIGN.md §4; common practice)", () => {
+  test("N_DW = |2N/X_S| with the scalar charge as given (common practice; e.g. Di Luzio, Mescia, Nardi, PRL 118 (2017) 031801)", () => {
     const q: FermionInput[] = [{ colour: "8", ew: { kind: "sm", dim: 1, y: -1 }, chirality: "L", pq: 1 }];
     expect(anomaly(q).domainWall).toBe(6);
     expect(anomaly(q, { scalarCharge: 2 }).domainWall).toBe(3);

@@ -71,7 +71,7 @@ describe("heavy-quark models against Di Luzio, Mescia, Nardi, PRL 118 (2017) 031
       expect(r.domainWall).toBe(row.nDW);
     });
   }
-  test("N_DW: fundamental = 1, (8,1,−1) = 6, (15,1,−1/3) = 20 with X_S = 1 (DESIGN.md §4)", () => {
+  test("N_DW: fundamental = 1, (8,1,−1) = 6, (15,1,−1/3) = 20 with X_S = 1 (Di Luzio, Mescia, Nardi, PRD 96 (2017) 075003, table of representations, from memory)", () => {
     expect(computed("ksvz-r1").domainWall).toBe(1);
     expect(computed("ksvz-r12").domainWall).toBe(6);
     expect(computed("ksvz-r14").domainWall).toBe(20);

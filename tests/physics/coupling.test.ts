@@ -96,7 +96,7 @@ describe("g_aγγ", () => {
       expect(Math.abs(gAgg(massEv, eOverN, { ref: "2016" }) - pdg)).toBeLessThanOrEqual(tolerance);
     }
   });
-  test("a user-entered c_γ replaces the published one (DESIGN.md §4: own c_γ ± σ)", () => {
+  test("a user-entered c_γ replaces the published one (g_aγγ = α/(2π f_a)·(E/N − c_γ), Grilli di Cortona et al., JHEP 01 (2016) 034, eq. 2.9 from memory)", () => {
     relClose(gAgg(1e-5, 8 / 3, { cGamma: 2.1 }), gReference(1e-5, 8 / 3, K_2019, 2.1));
   });
   test("the coupling vanishes at E/N = c_γ (cancellation; JHEP 2016)", () => {
@@ -104,7 +104,7 @@ describe("g_aγγ", () => {
   });
 });
 
-describe("haloscope convention g_γ = (E/N − c_γ)/2 (DESIGN.md §4; g_aγγ = (α/π)·g_γ/f_a)", () => {
+describe("haloscope convention g_γ = (E/N − c_γ)/2 (g_aγγ = (α/π)·g_γ/f_a; PDG review “Axions and other similar particles”, from memory)", () => {
   test("g_γ = −0.96 (E/N = 0) and 0.37 (E/N = 8/3) with c_γ = 1.92 (JHEP 2016)", () => {
     expect(gGamma(0)).toBeCloseTo(-0.96, 10);
     expect(gGamma(8 / 3)).toBeCloseTo(0.37, 2);
@@ -114,7 +114,7 @@ describe("haloscope convention g_γ = (E/N − c_γ)/2 (DESIGN.md §4; g_aγγ =
     expect(Math.abs(gGamma(0, { cGamma: 1.95 }) - -0.97)).toBeLessThanOrEqual(0.0051);
     expect(gGamma(8 / 3, { cGamma: 1.95 })).toBeCloseTo(0.36, 2);
   });
-  test("g_aγγ = (α/π)·|g_γ|/f_a reproduces the model line (DESIGN.md §4)", () => {
+  test("g_aγγ = (α/π)·|g_γ|/f_a reproduces the model line (PDG review “Axions and other similar particles”, from memory)", () => {
     const massEv = 4e-6;
     for (const eOverN of [0, 8 / 3, 1.5]) {
       relClose(((ALPHA_CODATA2018 / Math.PI) * Math.abs(gGamma(eOverN))) / faFromMass(massEv), gAgg(massEv, eOverN));
@@ -122,7 +122,7 @@ describe("haloscope convention g_γ = (E/N − c_γ)/2 (DESIGN.md §4; g_aγγ =
   });
 });
 
-describe("band edges (DESIGN.md §4, constants from JHEP 2016 / JHEP 2019)", () => {
+describe("band edges (Di Luzio, Giannotti, Nardi, Visinelli, Phys. Rept. 870 (2020) 1, sec. 6, from memory; constants from JHEP 2016 / JHEP 2019)", () => {
   const m = 2e-5;
   test("lower edge is exactly 0 when c_γ = 1.92 lies inside [E/N_min, E/N_max] (cancellation)", () => {
     expect(bandEdges(m, 0, 8 / 3).lowInvGeV).toBe(0);
@@ -161,7 +161,7 @@ describe("band edges (DESIGN.md §4, constants from JHEP 2016 / JHEP 2019)", () 
   });
 });
 
-describe("inverse: eOverNAt (DESIGN.md §4: E/N = c_γ ± 2π f_a g/α)", () => {
+describe("inverse: eOverNAt (E/N = c_γ ± 2π f_a g/α, inverting eq. 2.9 of Grilli di Cortona et al., JHEP 01 (2016) 034, from memory)", () => {
   test("round trip E/N → g at m → two E/N, one equals the input (property, fast-check)", () => {
     fc.assert(
       fc.property(

@@ -10,7 +10,7 @@ describe("parseEOverN: single values", () => {
     ["\u22121/3", "-1/3", -1 / 3], // Unicode minus as pasted from a PDF
     ["0.5", "0.5", 0.5],
     ["1e-1", "1e-1", 0.1],
-    ["  44/3 ", "44/3", 44 / 3], // upper end of the single heavy-quark window (DLMN 2017, DESIGN.md §4)
+    ["  44/3 ", "44/3", 44 / 3], // upper end of the single heavy-quark window (Di Luzio, Mescia, Nardi, PRL 118 (2017) 031801)
     ["0", "0", 0], // KSVZ-type neutral heavy quark
     ["+2", "2", 2],
     ["5 / 3", "5/3", 5 / 3],
@@ -26,7 +26,7 @@ describe("parseEOverN: single values", () => {
 describe("parseEOverN: intervals", () => {
   const cases: [string, string, string, number, number][] = [
     ["0.5..14.7", "0.5", "14.7", 0.5, 14.7],
-    ["5/3..44/3", "5/3", "44/3", 5 / 3, 44 / 3], // preferred window (DESIGN.md §4)
+    ["5/3..44/3", "5/3", "44/3", 5 / 3, 44 / 3], // preferred window (Di Luzio, Mescia, Nardi, PRL 118 (2017) 031801)
     ["44/3 .. 5/3", "5/3", "44/3", 5 / 3, 44 / 3], // sorted
     ["0.25 – 12", "0.25", "12", 0.25, 12], // en dash
     ["1/6—44/3", "1/6", "44/3", 1 / 6, 44 / 3], // em dash

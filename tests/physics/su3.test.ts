@@ -6,10 +6,10 @@ import { COLOUR_NAMES, parseColour, su3Casimir, su3Dimension, su3Index, toFracti
 
 /**
  * Slansky, "Group theory for unified model building", Phys. Rept. 79 (1981) 1, SU(3) irreps table:
- * Dynkin labels, dimension, index ℓ with ℓ(3) = 1, i.e. T = ℓ/2. The first seven rows are also quoted in
- * DESIGN.md §4; the rows from 21 on are from memory.
+ * Dynkin labels, dimension, index ℓ with ℓ(3) = 1, i.e. T = ℓ/2. All rows are from memory (written down
+ * without the table at hand).
  */
-const SLANSKY: { p: number; q: number; dim: number; ell: number; memory?: true }[] = [
+const SLANSKY: { p: number; q: number; dim: number; ell: number }[] = [
   { p: 0, q: 0, dim: 1, ell: 0 },
   { p: 1, q: 0, dim: 3, ell: 1 },
   { p: 2, q: 0, dim: 6, ell: 5 },
@@ -18,15 +18,15 @@ const SLANSKY: { p: number; q: number; dim: number; ell: number; memory?: true }
   { p: 2, q: 1, dim: 15, ell: 20 },
   { p: 4, q: 0, dim: 15, ell: 35 },
   { p: 2, q: 2, dim: 27, ell: 54 },
-  { p: 5, q: 0, dim: 21, ell: 70, memory: true },
-  { p: 3, q: 1, dim: 24, ell: 50, memory: true },
-  { p: 6, q: 0, dim: 28, ell: 126, memory: true },
-  { p: 4, q: 1, dim: 35, ell: 105, memory: true },
+  { p: 5, q: 0, dim: 21, ell: 70 },
+  { p: 3, q: 1, dim: 24, ell: 50 },
+  { p: 6, q: 0, dim: 28, ell: 126 },
+  { p: 4, q: 1, dim: 35, ell: 105 },
 ];
 
 describe("SU(3) irreps against Slansky, Phys. Rept. 79 (1981) 1", () => {
   for (const row of SLANSKY) {
-    test(`(${row.p},${row.q}): d = ${row.dim}, T = ${row.ell}/2${row.memory ? " (from memory)" : ""}`, () => {
+    test(`(${row.p},${row.q}): d = ${row.dim}, T = ${row.ell}/2 (Slansky 1981, from memory)`, () => {
       expect(su3Dimension(row.p, row.q)).toBe(row.dim);
       expect(su3Index(row.p, row.q).equals(row.ell / 2)).toBe(true);
       // The conjugate (q,p) has the same dimension and index.
@@ -34,7 +34,7 @@ describe("SU(3) irreps against Slansky, Phys. Rept. 79 (1981) 1", () => {
       expect(su3Index(row.q, row.p).equals(row.ell / 2)).toBe(true);
     });
   }
-  test("T(3) = 1/2, T(6) = 5/2, T(8) = 3, T(10) = 15/2, T(15) = 10, T(15') = 35/2, T(27) = 27 as exact fractions (DESIGN.md §4)", () => {
+  test("T(3) = 1/2, T(6) = 5/2, T(8) = 3, T(10) = 15/2, T(15) = 10, T(15') = 35/2, T(27) = 27 as exact fractions (R. Slansky, Phys. Rept. 79 (1981) 1, Table 6, index ℓ/2; from memory)", () => {
     const byName = ["3", "6", "8", "10", "15", "15'", "27"].map((n) => {
       const c = parseColour(n);
       if (!c.ok) throw new Error(c.reason);

@@ -9,7 +9,7 @@ import { describe, expect, test, vi } from "vitest";
 import fc from "fast-check";
 import { defaultProject } from "../../src/project/demo";
 import type { Curve, LegendPlace, Project, SizePreset } from "../../src/project/types";
-import { pathData, pathDataCompact } from "../../src/plot/decimate";
+import { pathData, pathDataCompact } from "../../src/plot/thinning/index";
 import { exportFigureSvg, exportScene, rasterResolution } from "../../src/formats/figure-file";
 import type { LegendCorner } from "../../src/plot/layout";
 import {
@@ -144,7 +144,7 @@ describe("automatic legend placement in the scene", () => {
     // Without models both bottom corners are empty and the tie goes to bottom right.
     expect(placeOf(buildScene(project(curves)))).toBe("bottom-right");
     // E/N ∈ [1.8, 2.1] contains c_γ = 1.92 (Grilli di Cortona et al., JHEP 01 (2016) 034), so the band reaches
-    // g = 0 and fills everything below its upper edge g ∝ m·|2.1 − c_γ|, which rises to the right (DESIGN.md §4).
+    // g = 0 and fills everything below its upper edge g ∝ m·|2.1 − c_γ|, which rises to the right.
     const band = buildScene(
       project(curves, "slide", [model({ id: "b", label: "Band", eOverNMin: "1.8", eOverNMax: "2.1" })]),
     );

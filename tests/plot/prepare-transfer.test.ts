@@ -4,7 +4,7 @@
 import { describe, expect, test } from "vitest";
 import type { Curve, Project, YView } from "../../src/project/types";
 import { buildScene, writeSvg } from "../../src/plot/index";
-import { cachedPrepared } from "../../src/plot/decimate";
+import { cachedPrepared } from "../../src/plot/thinning/index";
 import {
   computePrepared,
   hasPrepared,

@@ -55,7 +55,7 @@ describe("model lines", () => {
     expect(scene.scales.yView).toBe("normalized");
   });
 
-  test("g-gamma view: E/N = 8/3 sits at |g_γ| = 0.37 (DESIGN.md §4: g_γ = (E/N − c_γ)/2, 0.37 for 8/3 with c_γ = 1.92)", () => {
+  test("g-gamma view: E/N = 8/3 sits at |g_γ| = 0.37 (g_γ = (E/N − c_γ)/2: (8/3 − 1.92)/2 = 0.373, c_γ from JHEP 01 (2016) 034)", () => {
     const p = fixtureProject();
     p.figure.yView = "g-gamma";
     p.figure.yRange = [5e-3, 50];
@@ -95,7 +95,7 @@ describe("model lines", () => {
 });
 
 describe("model bands", () => {
-  test("a band whose interval contains c_γ reaches the plot bottom and its legend says so (DESIGN.md §4)", () => {
+  test("a band whose interval contains c_γ reaches the plot bottom and its legend says so (g ∝ |E/N − c_γ| vanishes at E/N = c_γ, JHEP 01 (2016) 034)", () => {
     const p = fixtureProject();
     p.models = [model({ id: "w", label: "Window", eOverNMin: "5/3", eOverNMax: "44/3" })];
     const scene = buildScene(p);
@@ -175,7 +175,7 @@ describe("curves", () => {
     expect(lastFill).toBeLessThan(firstLine);
   });
 
-  test("rescaling multiplies g by √(ρ₀/ρ)/√f (DESIGN.md §4, common practice) and the legend says so", () => {
+  test("rescaling multiplies g by √(ρ₀/ρ)/√f (common practice) and the legend says so", () => {
     const p = fixtureProject();
     const m = Float64Array.from([1e-5, 2e-5]);
     const g = Float64Array.from([3e-13, 3e-13]);

@@ -1,6 +1,6 @@
 // The "auto" legend place in the project data: the default of new projects, valid in the schema, kept by
 // links, project files and browser storage, while links that leave the legend out still mean "bottom-right"
-// (the frozen v1 base value of the link format, src/formats/project-codec.ts) and older files keep their value.
+// (the frozen v1 base value of the link format, src/formats/codec/v1.ts) and older files keep their value.
 // Links are unpacked here by hand: base64url (RFC 4648 §5) of raw DEFLATE (RFC 1951) of the compact JSON.
 import { readFileSync } from "node:fs";
 import { join } from "node:path";

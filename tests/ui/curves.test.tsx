@@ -1,6 +1,6 @@
 // Curves panel in jsdom: style, order, removal and the rescaling fields go to the store (one undoable step
 // each); the CSV export writes the curve in the chosen units with the rescaling g·√(ρ₀/ρ)/√f applied
-// (common practice for haloscope limits, DESIGN.md §4). Unit factors: SI prefix micro = 10⁻⁶ (BIPM SI
+// (common practice for haloscope limits). Unit factors: SI prefix micro = 10⁻⁶ (BIPM SI
 // Brochure, 9th ed. 2019, table 7).
 import { afterEach, beforeEach, describe, expect, test, vi } from "vitest";
 import { fireEvent, render, screen, waitFor } from "@testing-library/react";

@@ -21,8 +21,8 @@ const worker = vi.hoisted(() => ({
   computed: [] as { massEv: Float64Array; sorted: boolean }[],
 }));
 
-vi.mock("../../src/plot/decimate", async (importOriginal) => {
-  const actual = await importOriginal<typeof import("../../src/plot/decimate")>();
+vi.mock("../../src/plot/thinning/index", async (importOriginal) => {
+  const actual = await importOriginal<typeof import("../../src/plot/thinning/index")>();
   return {
     ...actual,
     prepareCurve: vi.fn((m: Float64Array, g: Float64Array, sorted: boolean) => {

@@ -1,5 +1,5 @@
 // The on-screen figure: the scene renderer (scene-dom.ts inside SceneSvg) draws exactly the elements and
-// attributes the SVG writer writes (one scene, two outputs: DESIGN.md §1 — so the export matches the screen),
+// attributes the SVG writer writes (one scene, two outputs, so the export matches the screen),
 // also after updating in place from one scene to the next, keyboard zoom and reset go
 // through the store, and zooming does not re-render the sidebar panels (zustand's documented selector model:
 // a component re-renders only when the slice it selects changes).
@@ -10,7 +10,8 @@ import { buildScene } from "../../src/plot/scene";
 import { writeSvg } from "../../src/plot/svg";
 import { defaultProject } from "../../src/project/demo";
 import { SceneSvg } from "../../src/ui/figure/SceneSvg";
-import { FigureView, LEGEND_HOLD_MS } from "../../src/ui/figure/FigureView";
+import { FigureView } from "../../src/ui/figure/FigureView";
+import { LEGEND_HOLD_MS } from "../../src/ui/figure/useFigureGestures";
 import { newCurve } from "../../src/project/defaults";
 import { ModelsPanel } from "../../src/ui/models/ModelsPanel";
 import { FigureSettings } from "../../src/ui/settings/FigureSettings";

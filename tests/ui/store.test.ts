@@ -3,7 +3,7 @@
 // the redo stack; one undo reverts one user step; a burst of zoom steps is one step.
 import { afterEach, beforeEach, describe, expect, test, vi } from "vitest";
 import { createAxbandStore, HISTORY_LIMIT, COALESCE_MS, type AxbandStore } from "../../src/ui/store";
-import { emptyProject } from "../../src/project/defaults";
+import { DEFAULT_MASS_RANGE_EV, defaultYRange, emptyProject } from "../../src/project/defaults";
 import type { Curve } from "../../src/project/types";
 
 let store: AxbandStore;
@@ -201,8 +201,11 @@ describe("actions", () => {
     store.getState().setFigure({ yView: "coupling" });
     store.getState().resetView();
     const g = store.getState().project.figure;
-    expect(g.massRangeEv[0]).toBeLessThan(g.massRangeEv[1]);
-    expect(g.massRangeEv).not.toEqual([1e-3, 1e-2]);
+    // The start view: 0.1 μeV – 10 meV and 10⁻¹⁷ – 10⁻⁹ GeV⁻¹ (src/project/defaults.ts).
+    expect(g.massRangeEv).toEqual([...DEFAULT_MASS_RANGE_EV]);
+    expect(g.massRangeEv).toEqual([1e-7, 1e-2]);
+    expect(g.yRange).toEqual(defaultYRange("coupling"));
+    expect(g.yRange).toEqual([1e-17, 1e-9]);
   });
 
   test("setPhysics merges a partial custom set", () => {
@@ -210,7 +213,9 @@ describe("actions", () => {
     const ph = store.getState().project.physics;
     expect(ph.ref).toBe("custom");
     expect(ph.custom.cGamma).toBe(1.95);
-    expect(ph.custom.kMuEv).toBeGreaterThan(0);
+    // The untouched fields keep the 2019 values: K = 5.691(51) (Gorghetto & Villadoro, JHEP 03 (2019) 033).
+    expect(ph.custom.kMuEv).toBe(5.691);
+    expect(ph.custom.kMuEvSigma).toBe(0.051);
   });
 
   test("messages are transient: not part of the project, not undone", () => {

@@ -1,4 +1,4 @@
-// Choices shared by the import step and the curves panel: curve roles (DESIGN.md §2) and line styles.
+// Choices shared by the import step and the curves panel: curve roles and line styles.
 import type { CurveRole, LineStyle } from "../../project/types";
 
 export const ROLES: { value: CurveRole; label: string }[] = [

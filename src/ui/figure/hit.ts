@@ -2,7 +2,7 @@
 // log-log space at that mass, or inside a closed region. Uses the plot core's cached log10 arrays (by data
 // array), so the first hover after a big import reuses what the import worker prepared for the figure.
 import type { Curve } from "../../project/types";
-import { prepareCurve, type PreparedCurve } from "../../plot/decimate";
+import { prepareCurve, type PreparedCurve } from "../../plot/thinning/index";
 import { rescaleFactor } from "../../plot/physics-settings";
 
 /** log10 mass and g of the usable points (> 0, finite), sorted by mass (stable) for lines, file order for regions. */

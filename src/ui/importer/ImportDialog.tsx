@@ -3,21 +3,11 @@
 // header and units, the settings to change and the unreadable rows; one click on Import adds them all.
 // Dropped project files and exported SVG figures reopen the project instead (see import-store).
 import { useEffect, useId, useState } from "react";
-import type { CurveRole } from "../../project/types";
-import { delimiterName, MAX_IMPORT_BYTES } from "../../data";
-import {
-  DELIMITERS,
-  formatBytes,
-  importable,
-  rejectionLines,
-  type ImportItem,
-  type ImportSettings,
-} from "./import-items";
+import { MAX_IMPORT_BYTES } from "../../data";
+import { formatBytes, importable } from "./import-items";
 import { useImport } from "./import-store";
-import { COUPLING_UNIT_OPTIONS, MASS_UNIT_OPTIONS } from "./unit-options";
-import { ChoiceField } from "../layout/ChoiceField";
 import { useWindowDrop } from "./useWindowDrop";
-import { ROLES } from "../curves/roles";
+import { ImportItemCard } from "./ImportItemCard";
 import "./importer.css";
 
 const ACCEPT = ".csv,.tsv,.txt,.dat,.tab,.svg,.json,text/csv,text/plain,text/tab-separated-values";
@@ -85,13 +75,70 @@ function PasteBox() {
   );
 }
 
+/** Overall progress, the notice, Cancel and Import. */
+function ImportFooter() {
+  const items = useImport((s) => s.items);
+  const notice = useImport((s) => s.notice);
+  const busy = useImport((s) => s.busy);
+  const { cancelAll, confirm } = useImport.getState();
+  const parsing = items.filter((it) => it.status === "parsing");
+  const totalBytes = parsing.reduce((n, it) => n + Math.max(1, it.sizeBytes), 0);
+  const overall =
+    parsing.length === 0 ? 1 : parsing.reduce((n, it) => n + it.progress * Math.max(1, it.sizeBytes), 0) / totalBytes;
+  const readyCount = items.filter(importable).length;
+  const rejectedTotal = items.filter(importable).reduce((n, it) => n + (it.result?.rejectedCount ?? 0), 0);
+  const curvesWord = readyCount + parsing.length > 1 ? `${readyCount + parsing.length} curves` : "curve";
+  return (
+    <footer className="ax-modal-foot">
+      {parsing.length > 0 ? (
+        <div className="ax-progress-row">
+          <div
+            className="ax-progress"
+            role="progressbar"
+            aria-label="Reading files"
+            aria-valuemin={0}
+            aria-valuemax={100}
+            aria-valuenow={Math.round(overall * 100)}
+          >
+            <div className="ax-progress-fill" style={{ width: `${(overall * 100).toFixed(1)}%` }} />
+          </div>
+          <span className="ax-hint">
+            Reading {parsing.length === 1 ? "1 file" : `${parsing.length} files`} · {Math.round(overall * 100)} %
+          </span>
+        </div>
+      ) : null}
+      {notice ? (
+        <p className="ax-import-notice" role="alert">
+          {notice}
+        </p>
+      ) : null}
+      <div className="ax-import-actions">
+        <button type="button" onClick={cancelAll}>
+          Cancel
+        </button>
+        {items.length > 0 ? (
+          <button
+            type="button"
+            className="primary"
+            data-testid="import-confirm"
+            disabled={busy || (readyCount === 0 && parsing.length === 0)}
+            onClick={() => void confirm()}
+          >
+            {busy
+              ? "Importing…"
+              : `Import ${curvesWord}${rejectedTotal > 0 ? `, skipping ${rejectedTotal.toLocaleString("en")} unreadable row${rejectedTotal === 1 ? "" : "s"}` : ""}`}
+          </button>
+        ) : null}
+      </div>
+    </footer>
+  );
+}
+
 /** The import dialog and the page-wide drop target; render once in the app. */
 export function ImportDialog() {
   const items = useImport((s) => s.items);
   const pasteOpen = useImport((s) => s.pasteOpen);
-  const notice = useImport((s) => s.notice);
-  const busy = useImport((s) => s.busy);
-  const { addFiles, changeSettings, removeItem, cancelAll, confirm } = useImport.getState();
+  const { addFiles, changeSettings, removeItem, cancelAll } = useImport.getState();
   const dragging = useWindowDrop((files) => void addFiles(files));
   const titleId = useId();
   const open = items.length > 0 || pasteOpen;
@@ -104,14 +151,6 @@ export function ImportDialog() {
     window.addEventListener("keydown", onKey);
     return () => window.removeEventListener("keydown", onKey);
   }, [open, cancelAll]);
-
-  const parsing = items.filter((it) => it.status === "parsing");
-  const totalBytes = parsing.reduce((n, it) => n + Math.max(1, it.sizeBytes), 0);
-  const overall =
-    parsing.length === 0 ? 1 : parsing.reduce((n, it) => n + it.progress * Math.max(1, it.sizeBytes), 0) / totalBytes;
-  const readyCount = items.filter(importable).length;
-  const rejectedTotal = items.filter(importable).reduce((n, it) => n + (it.result?.rejectedCount ?? 0), 0);
-  const curvesWord = readyCount + parsing.length > 1 ? `${readyCount + parsing.length} curves` : "curve";
 
   return (
     <>
@@ -130,7 +169,7 @@ export function ImportDialog() {
             <div className="ax-modal-body">
               {pasteOpen ? <PasteBox /> : null}
               {items.map((it) => (
-                <ItemCard
+                <ImportItemCard
                   key={it.key}
                   item={it}
                   onChange={(p) => changeSettings(it.key, p)}
@@ -138,292 +177,10 @@ export function ImportDialog() {
                 />
               ))}
             </div>
-            <footer className="ax-modal-foot">
-              {parsing.length > 0 ? (
-                <div className="ax-progress-row">
-                  <div
-                    className="ax-progress"
-                    role="progressbar"
-                    aria-label="Reading files"
-                    aria-valuemin={0}
-                    aria-valuemax={100}
-                    aria-valuenow={Math.round(overall * 100)}
-                  >
-                    <div className="ax-progress-fill" style={{ width: `${(overall * 100).toFixed(1)}%` }} />
-                  </div>
-                  <span className="ax-hint">
-                    Reading {parsing.length === 1 ? "1 file" : `${parsing.length} files`} · {Math.round(overall * 100)}{" "}
-                    %
-                  </span>
-                </div>
-              ) : null}
-              {notice ? (
-                <p className="ax-import-notice" role="alert">
-                  {notice}
-                </p>
-              ) : null}
-              <div className="ax-import-actions">
-                <button type="button" onClick={cancelAll}>
-                  Cancel
-                </button>
-                {items.length > 0 ? (
-                  <button
-                    type="button"
-                    className="primary"
-                    data-testid="import-confirm"
-                    disabled={busy || (readyCount === 0 && parsing.length === 0)}
-                    onClick={() => void confirm()}
-                  >
-                    {busy
-                      ? "Importing…"
-                      : `Import ${curvesWord}${rejectedTotal > 0 ? `, skipping ${rejectedTotal.toLocaleString("en")} unreadable row${rejectedTotal === 1 ? "" : "s"}` : ""}`}
-                  </button>
-                ) : null}
-              </div>
-            </footer>
+            <ImportFooter />
           </div>
         </div>
       ) : null}
     </>
-  );
-}
-
-function unitNote(source: string | undefined): string {
-  return source === "header" ? " (from the header)" : source === "default" ? " (assumed)" : "";
-}
-
-function ItemCard({
-  item,
-  onChange,
-  onRemove,
-}: {
-  item: ImportItem;
-  onChange: (p: Partial<ImportSettings>) => void;
-  onRemove: () => void;
-}) {
-  const s = item.settings;
-  const r = item.result;
-  const rej = r ? rejectionLines(item.fileName, r) : { lines: [], more: 0 };
-  const header = r?.header ?? null;
-  const columns = Math.max(2, r?.columnCount ?? 2);
-  const columnChoices = Array.from({ length: columns }, (_, i) => ({
-    value: i + 1,
-    label: `column ${i + 1}${header?.[i] ? ` · ${header[i]}` : ""}`,
-  }));
-  const preview = r ? r.preview.slice(0, 6) : [];
-  const canEdit = r !== null && !(r.fatal && r.fatal.code !== "single-column" && r.fatal.code !== "no-data");
-  // The parser's own sentences about delimiter, units, unreadable rows and values ≤ 0 are shown above in
-  // the step's own words; any other warning (e.g. a guess it made) is passed on as it is.
-  const notes = r
-    ? r.messages.filter((m) => m.level === "warning" && !/cannot be read|could not be read|≤ 0|<= 0/.test(m.text))
-    : [];
-
-  return (
-    <article className="ax-import-item" data-testid="import-item" aria-label={`Import ${item.fileName}`}>
-      <header className="ax-import-item-head">
-        <strong>{item.fileName}</strong>
-        <span className="ax-hint">{formatBytes(item.sizeBytes)}</span>
-        {item.status === "parsing" ? (
-          <span className="ax-hint">reading… {Math.round(item.progress * 100)} %</span>
-        ) : null}
-        <button
-          type="button"
-          className="icon danger ax-small"
-          aria-label={`Leave out ${item.fileName}`}
-          onClick={onRemove}
-        >
-          ×
-        </button>
-      </header>
-      {item.problem ? (
-        <p className="ax-import-problem" role="alert">
-          {item.problem}
-        </p>
-      ) : null}
-      {preview.length > 0 || header ? (
-        <table className="ax-preview" aria-label={`First rows of ${item.fileName}`}>
-          <tbody>
-            {header && r?.headerRow ? (
-              <tr className="ax-preview-header">
-                <th scope="row">{r.headerRow}</th>
-                {header.slice(0, 6).map((c, i) => (
-                  <td key={i}>{c}</td>
-                ))}
-              </tr>
-            ) : null}
-            {preview.map((row) => (
-              <tr key={row.row} className={row.problem ? "ax-preview-bad" : undefined} title={row.problem ?? undefined}>
-                <th scope="row">{row.row}</th>
-                {row.fields.slice(0, 6).map((c, i) => (
-                  <td
-                    key={i}
-                    className={i + 1 === s.massColumn || i + 1 === s.couplingColumn ? "ax-preview-used" : undefined}
-                  >
-                    {c}
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      ) : null}
-      {r && canEdit ? (
-        <>
-          <p className="ax-import-detected" data-testid="import-detected">
-            Delimiter: <b>{delimiterName(r.delimiter)}</b>
-            {s.delimiter === "auto" ? " (detected)" : " (chosen)"}
-            {r.decimalComma ? ", decimal comma" : ""} · Header: {header ? <b>{header.join(" | ")}</b> : "none"} · Mass:{" "}
-            <b>{MASS_UNIT_OPTIONS.find((u) => u.value === r.massUnit)?.label ?? r.massUnit}</b>
-            {unitNote(r.massUnitSource)} · Coupling:{" "}
-            <b>{COUPLING_UNIT_OPTIONS.find((u) => u.value === r.couplingUnit)?.label ?? r.couplingUnit}</b>
-            {unitNote(r.couplingUnitSource)} · <b>{r.massEv.length.toLocaleString("en")}</b> points
-          </p>
-          <div className="ax-import-settings">
-            <ChoiceField
-              label="Delimiter"
-              value={s.delimiter}
-              choices={DELIMITERS}
-              onChange={(v) => onChange({ delimiter: v })}
-            />
-            <ChoiceField
-              label="Mass unit"
-              value={s.massUnit ?? r.massUnit}
-              choices={MASS_UNIT_OPTIONS}
-              onChange={(v) => onChange({ massUnit: v as ImportSettings["massUnit"] })}
-            />
-            <ChoiceField
-              label="Coupling"
-              value={s.couplingUnit ?? r.couplingUnit}
-              choices={COUPLING_UNIT_OPTIONS}
-              onChange={(v) => onChange({ couplingUnit: v as ImportSettings["couplingUnit"] })}
-            />
-            {(s.couplingUnit ?? r.couplingUnit) === "model-line" ? (
-              <label className="ax-field">
-                <span>of the line E/N =</span>
-                <input
-                  type="text"
-                  size={6}
-                  aria-label="E/N of the model line"
-                  value={s.modelEOverN}
-                  onChange={(e) => onChange({ modelEOverN: e.target.value })}
-                />
-              </label>
-            ) : null}
-            <label className="ax-check">
-              <input
-                type="checkbox"
-                checked={s.log10Mass}
-                onChange={(e) => onChange({ log10Mass: e.target.checked })}
-              />
-              mass as log10
-            </label>
-            <label className="ax-check">
-              <input
-                type="checkbox"
-                checked={s.log10Coupling}
-                onChange={(e) => onChange({ log10Coupling: e.target.checked })}
-              />
-              coupling as log10
-            </label>
-          </div>
-          {columns > 2 ? (
-            <div className="ax-import-settings">
-              <ChoiceField
-                label="Mass from"
-                value={s.massColumn ?? r.massColumn}
-                choices={columnChoices}
-                onChange={(v) => onChange({ massColumn: Number(v) })}
-              />
-              <ChoiceField
-                label="Coupling from"
-                value={s.couplingColumn ?? r.couplingColumn}
-                choices={columnChoices}
-                onChange={(v) => onChange({ couplingColumn: Number(v) })}
-              />
-            </div>
-          ) : null}
-          <div className="ax-import-settings">
-            <label className="ax-field">
-              <span>Label</span>
-              <input
-                type="text"
-                aria-label="Label"
-                value={s.label}
-                onChange={(e) => onChange({ label: e.target.value })}
-              />
-            </label>
-            <label className="ax-field">
-              <span>Role</span>
-              <select
-                aria-label="Role"
-                value={s.role}
-                onChange={(e) => onChange({ role: e.target.value as CurveRole })}
-              >
-                {ROLES.map((ro) => (
-                  <option key={ro.value} value={ro.value}>
-                    {ro.label}
-                  </option>
-                ))}
-              </select>
-            </label>
-            <label
-              className="ax-check"
-              title="Regions always keep the file order (the contour is closed in that order)."
-            >
-              <input
-                type="checkbox"
-                checked={!s.keepOrder}
-                disabled={s.role === "region"}
-                onChange={(e) => onChange({ keepOrder: !e.target.checked })}
-              />
-              sort by mass
-            </label>
-          </div>
-          <label className="ax-field ax-citation">
-            <span>Citation</span>
-            <textarea
-              rows={2}
-              aria-label="Citation"
-              placeholder="Publication the data came from: free text or a BibTeX entry"
-              value={s.citation}
-              onChange={(e) => onChange({ citation: e.target.value })}
-            />
-          </label>
-        </>
-      ) : null}
-      {r && r.massEv.length > 0 ? (
-        <p className="ax-hint" data-testid="import-first-point">
-          First point read: m_a = {r.massEv[0].toExponential(3)} eV, g_aγγ = {r.gInvGeV[0].toExponential(3)} GeV⁻¹
-        </p>
-      ) : null}
-      {notes.length > 0 ? (
-        <ul className="ax-import-notes">
-          {notes.map((m, i) => (
-            <li key={i} className={m.level === "warning" ? "ax-import-warn" : "ax-hint"}>
-              {m.text}
-            </li>
-          ))}
-        </ul>
-      ) : null}
-      {r && r.nonPositive > 0 ? (
-        <p className="ax-import-warn" data-testid="import-nonpositive">
-          {r.nonPositive.toLocaleString("en")} row{r.nonPositive === 1 ? " has" : "s have"} a value ≤ 0: kept in the
-          data, but not drawn on the log axes
-          {r.nonPositiveRows.length > 0
-            ? ` (rows ${r.nonPositiveRows.slice(0, 5).join(", ")}${r.nonPositive > 5 ? ", …" : ""})`
-            : ""}
-          .
-        </p>
-      ) : null}
-      {rej.lines.length > 0 ? (
-        <div className="ax-import-rejected" data-testid="import-rejected">
-          <p>
-            {r?.rejectedCount.toLocaleString("en")} row{r?.rejectedCount === 1 ? "" : "s"} could not be read. Import
-            skips {r?.rejectedCount === 1 ? "it" : "them"}; Cancel imports nothing.
-          </p>
-          <pre>{rej.lines.join("\n") + (rej.more > 0 ? `\n… and ${rej.more.toLocaleString("en")} more` : "")}</pre>
-        </div>
-      ) : null}
-    </article>
   );
 }

@@ -4,7 +4,7 @@
 import type { StoreApi } from "zustand";
 import type { Project } from "../../project/types";
 import { defaultProject } from "../../project/demo";
-import { decodeLink } from "../../formats/project-codec";
+import { decodeLink } from "../../formats/codec";
 import { deserializeFromStorage, serializeForStorage } from "../../formats/project-file";
 import { PROJECT_LIMITS } from "../../project/schema";
 import type { AxbandState } from "./types";

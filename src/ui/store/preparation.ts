@@ -3,7 +3,7 @@
 // the import worker has built their preparation and it is in the plot cache, so the page never freezes.
 import type { StoreApi } from "zustand";
 import type { Curve, Project } from "../../project/types";
-import { cachedPrepared } from "../../plot/decimate";
+import { cachedPrepared } from "../../plot/thinning/index";
 import { drawsSorted } from "../../plot/curves";
 import { prepareSpecOf, type PrepareSpec } from "../../plot/prepare-transfer";
 import { importWorkerAvailable, prepareInWorker } from "../../worker/import-client";

@@ -1,9 +1,9 @@
-// The thinning's reused working buffers (src/plot/decimate.ts): a frame that needs more room than they have
+// The thinning's reused working buffers (src/plot/thinning/): a frame that needs more room than they have
 // grows them without losing the points already written, so the first frame of a big curve is the same as
 // every later one. In a file of its own, so that the buffers start at their initial size.
 import { describe, expect, test } from "vitest";
-import { curvePixels, prepareCurve, type PixelParams } from "../../src/plot/index";
-import { rng } from "./fixture";
+import { curvePixels, prepareCurve, type PixelParams } from "../../../src/plot/index";
+import { rng } from "../fixture";
 
 /**
  * A closed outline in log space like the shared benchmark's regions (an ellipse with a slow wobble and a

@@ -11,7 +11,7 @@ import {
   readNumberText,
   type CurveParseOptions,
   type CurveParseResult,
-} from "../../src/data";
+} from "../../../src/data";
 
 function chunked(text: string, cuts: number[], opts: CurveParseOptions = {}): CurveParseResult {
   const p = createCurveParser(opts);

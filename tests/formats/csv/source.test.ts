@@ -1,13 +1,13 @@
 // Checks of reading an import source in slices (string, bytes, Blob/File; UTF-8 and UTF-16 per the BOM) with
 // progress and cancel, and of the import client's main-thread fallback where no Web Worker exists (Node).
 import { afterAll, describe, expect, test } from "vitest";
-import { isImportCancelled, MAX_IMPORT_BYTES, parseCurveSource, parseCurveText } from "../../src/data";
+import { isImportCancelled, MAX_IMPORT_BYTES, parseCurveSource, parseCurveText } from "../../../src/data";
 import {
   disposeImportWorker,
   importInWorker,
   importWorkerAvailable,
   previewFile,
-} from "../../src/worker/import-client";
+} from "../../../src/worker/import-client";
 
 function table(rows: number): string {
   let s = "# invented test table\nm_a [ueV],g [1/GeV]\n";

@@ -16,8 +16,8 @@ import {
   thinRunsLog,
   viewArrays,
   type PixelParams,
-} from "../../src/plot/index";
-import { parsePath, rng } from "./fixture";
+} from "../../../src/plot/index";
+import { parsePath, rng } from "../fixture";
 
 /** Random sorted log-mass data with noise and a few tall spikes. */
 function sortedData(n: number, seed: number) {

@@ -1,0 +1,20 @@
+// The PDF figure's font files for the command line and tests: read from the installed open-licence font
+// packages (Computer Modern Unicode, OFL; DejaVu Sans as the fallback for glyphs CMU lacks).
+import { readFileSync } from "node:fs";
+import { createRequire } from "node:module";
+import type { PdfFonts } from "../formats/pdf/write-pdf";
+import { FIGURE_FONT_FILES, type FigureFontFamily } from "../formats/pdf/fonts";
+
+const require = createRequire(import.meta.url);
+const read = (spec: string) => new Uint8Array(readFileSync(require.resolve(spec)));
+
+/** The faces of a figure font family as bytes. */
+export function nodePdfFonts(family: FigureFontFamily = "sans"): PdfFonts {
+  const files = FIGURE_FONT_FILES[family];
+  return {
+    regular: read(files.regular),
+    italic: read(files.italic),
+    bold: read(files.bold),
+    fallback: read(files.fallback),
+  };
+}

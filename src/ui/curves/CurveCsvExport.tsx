@@ -1,0 +1,83 @@
+// A curve's "Export as CSV" section: the units to write (with the model line's E/N), whether to apply the
+// rescaling, and the download.
+import { useState } from "react";
+import type { Curve } from "../../project/types";
+import { useAxband } from "../store";
+import { curveCsvFileName, curveToCsv, rescaleCurve } from "../../data";
+import { downloadText } from "../export/download";
+import { COUPLING_UNIT_OPTIONS, MASS_UNIT_OPTIONS, type CouplingUnit, type MassUnit } from "../importer/unit-options";
+import { ChoiceField } from "../layout/ChoiceField";
+import { isRescaled, physicsOptsOf } from "../../plot/physics-settings";
+
+export function CurveCsvExport({ curve }: { curve: Curve }) {
+  const pushMessage = useAxband((s) => s.pushMessage);
+  const physics = useAxband((s) => s.project.physics);
+  const [massUnit, setMassUnit] = useState<MassUnit>("eV");
+  const [couplingUnit, setCouplingUnit] = useState<CouplingUnit>("GeV^-1");
+  const [eOverN, setEOverN] = useState("0");
+  const [rescaled, setRescaled] = useState(true);
+
+  const download = () => {
+    try {
+      const gInvGeV =
+        isRescaled(curve.rescale) && rescaled ? rescaleCurve(curve.gInvGeV, curve.rescale) : curve.gInvGeV;
+      const text = curveToCsv(
+        { massEv: curve.massEv, gInvGeV, label: curve.label, citation: curve.citation },
+        {
+          massUnit,
+          couplingUnit,
+          modelEOverN: couplingUnit === "model-line" ? eOverN : undefined,
+          physics: physicsOptsOf(physics),
+        },
+      );
+      const name = curveCsvFileName(curve.label);
+      downloadText(name, text, "text/csv");
+      pushMessage("status", `Saved ${name}.`);
+    } catch (e) {
+      pushMessage("alert", `The CSV was not written: ${e instanceof Error ? e.message : String(e)}.`);
+    }
+  };
+
+  return (
+    <details className="ax-curve-more">
+      <summary>Export as CSV</summary>
+      <div className="ax-curve-row">
+        <ChoiceField
+          label="Mass unit"
+          ariaLabel="CSV mass unit"
+          value={massUnit}
+          choices={MASS_UNIT_OPTIONS}
+          onChange={(v) => setMassUnit(v as MassUnit)}
+        />
+        <ChoiceField
+          label="Coupling"
+          ariaLabel="CSV coupling unit"
+          value={couplingUnit}
+          choices={COUPLING_UNIT_OPTIONS}
+          onChange={(v) => setCouplingUnit(v as CouplingUnit)}
+        />
+        {couplingUnit === "model-line" ? (
+          <label className="ax-field">
+            <span>of the line E/N =</span>
+            <input
+              type="text"
+              size={6}
+              aria-label="CSV model line E/N"
+              value={eOverN}
+              onChange={(e) => setEOverN(e.target.value)}
+            />
+          </label>
+        ) : null}
+        {isRescaled(curve.rescale) ? (
+          <label className="ax-check">
+            <input type="checkbox" checked={rescaled} onChange={(e) => setRescaled(e.target.checked)} />
+            with the rescaling
+          </label>
+        ) : null}
+        <button type="button" onClick={download}>
+          Download CSV
+        </button>
+      </div>
+    </details>
+  );
+}
