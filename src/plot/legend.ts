@@ -10,10 +10,16 @@ import { runsText, runsWidthPx, truncateRuns } from "./text";
  * "model set: 820 models, lines" / "…, between extremes" / "…, central 68 %" (models counted with multiplicities);
  * null for a line or an interval, which the label already describes.
  */
-export function modelKindNote(m: Partial<Pick<Model, "kind" | "members" | "setDraw" | "setShare">>): string | null {
+export function modelKindNote(
+  m: Partial<Pick<Model, "kind" | "members" | "setDraw" | "setShare" | "label">>,
+): string | null {
   const members = m.members ?? [];
   if (members.length === 0) return null;
-  if (m.kind === "between") return `between lines ${members.map((x) => x.eOverN).join(" | ")}`;
+  if (m.kind === "between") {
+    const values = members.map((x) => x.eOverN).join(" | ");
+    // A label typed as "E/N = 5/3 | 44/3" already names the lines.
+    return m.label?.includes(values) ? "between lines" : `between lines ${values}`;
+  }
   if (m.kind !== "set") return null;
   const n = members.reduce((s, x) => s + x.count, 0);
   const draw =
