@@ -114,6 +114,23 @@ describe("modelCsvBlocks", () => {
     }
   });
 
+  it("between lines 5/3 | 44/3 (PRL 118 (2017) 031801) has the 5/3 line as g_low, never 0", () => {
+    const between = model("w", "window", "5/3", "44/3", {
+      kind: "between",
+      members: [
+        { eOverN: "5/3", count: 1 },
+        { eOverN: "44/3", count: 1 },
+      ],
+    });
+    const text = modelCsvBlocks(project([between])).blocks[0].text;
+    expect(text).toContain("# E/N lines = 5/3 | 44/3 (between lines 5/3 | 44/3)");
+    for (const [m, , lo, hi] of rows(text)) {
+      expect(lo).toBeGreaterThan(0);
+      expect(Math.abs(lo / pdgG(m, 5 / 3) - 1)).toBeLessThan(0.03);
+      expect(Math.abs(hi / pdgG(m, 44 / 3) - 1)).toBeLessThan(0.03);
+    }
+  });
+
   it("samples log-uniformly over the figure's mass range, ends included", () => {
     const ms = rows(blocks[0].text).map((r) => r[0]);
     expect(ms[0]).toBeCloseTo(1e-6, 12);
