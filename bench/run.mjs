@@ -8,6 +8,8 @@ const scripts = [
   ["CSV import end to end (worker + transfer, Chromium)", "bench/import-browser.mjs"],
   ["Figure redraw during a zoom step (Chromium)", "bench/redraw.mjs"],
   ["Command-line renderer vs reference plotting script", "bench/render.mjs"],
+  ["Overlap summary, benchmark set × demo models", "bench/overlap.mjs"],
+  ["Heavy-quark ensembles, N_Q ≤ 28 with the Landau-pole criterion", "bench/ensemble.mjs"],
 ];
 const only = process.argv.slice(2);
 let crashed = 0;

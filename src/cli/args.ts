@@ -1,6 +1,8 @@
 // Command-line arguments of the renderer (`npm run render -- …`): a pure parser from argv to options, and
 // the usage text. Kept apart from render.ts so the rules (roles per file, ranges, presets) are unit-testable.
 import type { CurveRole, SizePreset } from "../project/types";
+import type { FigureFontFamily } from "../formats/pdf/fonts";
+import { overlapFormat } from "./overlap-out";
 
 export const ROLES: readonly CurveRole[] = ["exclusion", "projection", "region"];
 export const PRESET_NAMES: readonly SizePreset[] = ["slide", "single-column", "double-column", "custom"];
@@ -8,7 +10,7 @@ export const PRESET_NAMES: readonly SizePreset[] = ["slide", "single-column", "d
 /** One input file; `role` is set for CSV files (from the --role in effect for it). */
 export interface CliInput {
   path: string;
-  kind: "project" | "svg" | "csv";
+  kind: "project" | "svg" | "pdf" | "csv";
   role: CurveRole;
 }
 
@@ -29,6 +31,9 @@ export interface CliOptions {
   embed: boolean;
   /** Also write model lines and bands as CSV to this path. */
   modelsCsv?: string;
+  /** Also write the overlap summary (.csv, .md or .tex) and its intervals (.csv or .md). */
+  overlap?: string;
+  overlapIntervals?: string;
   /** E/N texts from --model, in order ("8/3", "0..44/3"). */
   models: string[];
   massUnit?: string;
@@ -38,6 +43,8 @@ export interface CliOptions {
   massRangeEv?: [number, number];
   gRange?: [number, number];
   title?: string;
+  /** Font family of a PDF figure. @default "sans" */
+  font: FigureFontFamily;
   help: boolean;
 }
 
@@ -48,10 +55,13 @@ export const USAGE = `axband render: figures from a project without a browser
 usage:
   npm run render -- PROJECT.axband.json -o figure.svg [--png figure.png --dpi 300] [--preset single-column]
   npm run render -- exported.svg -o figure.svg        (an SVG exported by axband carries its project)
+  npm run render -- exported.pdf -o figure.pdf        (so does a PDF exported by axband, as an attachment)
   npm run render -- a.csv [--role projection] b.csv -o figure.svg [--model 8/3 --model 0..44/3]
 
-output (at least one of -o, --png, --models-csv):
-  -o, --out FILE.svg        write the figure as SVG (the same SVG the app exports)
+output (at least one of -o, --png, --models-csv, --overlap, --overlap-intervals):
+  -o, --out FILE.svg|.pdf   write the figure as SVG (the same SVG the app exports) or, for a name ending in
+                            .pdf, as a vector PDF of the figure's physical size with the project attached
+  --font sans|serif         the PDF's font: Computer Modern Sans or Serif, LaTeX's own look (default sans)
   --png FILE.png            write the figure as PNG
   --dpi N                   PNG dots per inch at the figure's physical size (default 300)
   --scale K                 PNG at K times the 96-px-per-inch size instead (1 or 2, as the app's 1x/2x)
@@ -60,6 +70,9 @@ output (at least one of -o, --png, --models-csv):
   --no-embed                leave the project out of the SVG's <metadata> (smaller file, cannot be reopened);
                             by default it is embedded, with curve data while that stays under 2 MB
   --models-csv FILE.csv     also write the model lines and bands as CSV (m_a, f_a, g_low, g_high)
+  --overlap FILE            also write the overlap summary, one row per model × curve that overlap:
+                            FILE.csv, FILE.md (with a caption paragraph) or FILE.tex (booktabs + siunitx)
+  --overlap-intervals FILE  also write every overlap interval: FILE.csv or FILE.md
   --mass-range LO:HI        mass axis in eV, e.g. 1e-7:1e-2 (CSV input: default fitted to the data)
   --g-range LO:HI           y axis in GeV^-1 (CSV input: default fitted to the data)
   --title TEXT              figure title
@@ -82,6 +95,7 @@ function kindOf(path: string): CliInput["kind"] {
   const p = path.toLowerCase();
   if (p.endsWith(".json")) return "project";
   if (p.endsWith(".svg")) return "svg";
+  if (p.endsWith(".pdf")) return "pdf";
   return "csv";
 }
 
@@ -110,6 +124,8 @@ const WITH_VALUE = new Set([
   "--width-mm",
   "--height-mm",
   "--models-csv",
+  "--overlap",
+  "--overlap-intervals",
   "--role",
   "--model",
   "--mass-unit",
@@ -117,6 +133,7 @@ const WITH_VALUE = new Set([
   "--mass-range",
   "--g-range",
   "--title",
+  "--font",
 ]);
 const FLAGS = new Set(["-h", "--help", "--no-embed", "--skip-bad-rows"]);
 
@@ -125,7 +142,15 @@ const FLAGS = new Set(["-h", "--help", "--no-embed", "--skip-bad-rows"]);
  * `--` ends the options. Input kind goes by extension: `.json` project, `.svg` exported figure, else CSV.
  */
 export function parseArgs(argv: readonly string[]): ArgsResult {
-  const o: CliOptions = { inputs: [], dpi: 300, embed: true, models: [], skipBadRows: false, help: false };
+  const o: CliOptions = {
+    inputs: [],
+    dpi: 300,
+    embed: true,
+    models: [],
+    skipBadRows: false,
+    font: "sans",
+    help: false,
+  };
   const roles: CurveRole[] = [];
   const pending: { path: string; roleCount: number }[] = [];
   let onlyFiles = false;
@@ -167,6 +192,13 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
       case "--models-csv":
         o.modelsCsv = value;
         break;
+      case "--overlap":
+      case "--overlap-intervals":
+        r = overlapFormat(name, value, name === "--overlap");
+        if (r !== "csv" && r !== "md" && r !== "tex") return { ok: false, error: r };
+        if (name === "--overlap") o.overlap = value;
+        else o.overlapIntervals = value;
+        break;
       case "--dpi":
         if (typeof (r = positive(name, value)) === "string") return { ok: false, error: r };
         o.dpi = r;
@@ -196,6 +228,11 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
       case "--model":
         o.models.push(value);
         break;
+      case "--font":
+        if (value !== "sans" && value !== "serif")
+          return { ok: false, error: `--font: expected sans or serif, got "${value}"` };
+        o.font = value;
+        break;
       case "--mass-unit":
         o.massUnit = value;
         break;
@@ -223,8 +260,11 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
   if (o.help) return { ok: true, options: o };
   if (o.inputs.length === 0)
     return { ok: false, error: "no input file (a .axband.json project, an exported .svg, or CSV files)" };
-  if (!o.out && !o.png && !o.modelsCsv)
-    return { ok: false, error: "nothing to write: give -o FILE.svg, --png FILE.png or --models-csv FILE.csv" };
+  if (!o.out && !o.png && !o.modelsCsv && !o.overlap && !o.overlapIntervals)
+    return {
+      ok: false,
+      error: "nothing to write: give -o FILE.svg, --png FILE.png, --models-csv FILE.csv or --overlap FILE",
+    };
   const projects = o.inputs.filter((f) => f.kind !== "csv");
   if (projects.length > 0 && o.inputs.length > 1) {
     return {
@@ -243,7 +283,7 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
   if ((o.widthMm !== undefined || o.heightMm !== undefined) && o.preset !== "custom") {
     return { ok: false, error: "--width-mm/--height-mm need --preset custom" };
   }
-  const outs = [o.out, o.png, o.modelsCsv].filter((p): p is string => !!p);
+  const outs = [o.out, o.png, o.modelsCsv, o.overlap, o.overlapIntervals].filter((p): p is string => !!p);
   if (new Set(outs).size !== outs.length) return { ok: false, error: "two outputs have the same path" };
   if (outs.some((p) => o.inputs.some((f) => f.path === p)))
     return { ok: false, error: "an output path is also an input file" };

@@ -5,6 +5,7 @@ import { basename } from "node:path";
 import type { Curve, Model, Project } from "../project/types";
 import { defaultFigure, emptyProject, newCurve, newModel } from "../project/defaults";
 import {
+  decodeImportBytes,
   formatProblem,
   formatRejection,
   labelFromFileName,
@@ -30,8 +31,19 @@ export interface LoadedProject {
 export const MAX_ROW_MESSAGES = 20;
 
 function readText(path: string): string {
+  return readBytes(path).toString("utf8");
+}
+
+/** A CSV file's text, decoded as the app's import decodes it (UTF-16 by its BOM, UTF-8, else Windows-1252). */
+function readCsvText(path: string): { text: string; encoding: string } {
+  const d = decodeImportBytes(readBytes(path));
+  if (!d.ok) throw new InputError(formatProblem(path, d.problem));
+  return d;
+}
+
+function readBytes(path: string): Buffer {
   try {
-    return readFileSync(path, "utf8");
+    return readFileSync(path);
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
     const why =
@@ -59,6 +71,17 @@ function loadSvg(input: CliInput): LoadedProject {
   return { project: r.project, notes: [] };
 }
 
+/** Reads and parses one CSV input as the app's import would (the worker threads call this too). */
+export function parseCsvFile(path: string, opts: Pick<CliOptions, "massUnit" | "couplingUnit">): CurveParseResult {
+  const { text, encoding } = readCsvText(path);
+  return parseCurveText(text, {
+    fileName: basename(path),
+    massUnit: opts.massUnit,
+    couplingUnit: opts.couplingUnit,
+    encoding,
+  });
+}
+
 /** Parse results found ahead of loading (by parse-parallel.ts), by input index; undefined: parse here. */
 export type PreParsed = readonly (CurveParseResult | undefined)[];
 
@@ -70,9 +93,7 @@ function loadCsv(inputs: CliInput[], opts: CliOptions, preParsed: PreParsed): Lo
   for (const [index, input] of inputs.entries()) {
     const fileName = basename(input.path);
     // The app's import code: the same parser, unit detection and messages.
-    const r =
-      preParsed[index] ??
-      parseCurveText(readText(input.path), { fileName, massUnit: opts.massUnit, couplingUnit: opts.couplingUnit });
+    const r = preParsed[index] ?? parseCsvFile(input.path, opts);
     if (r.fatal) throw new InputError(formatProblem(input.path, r.fatal));
     for (const bad of r.rejected) badRows.push(formatRejection(input.path, bad));
     badCount += r.rejectedCount;

@@ -1,8 +1,7 @@
 // Worker entry of the command-line renderer: reads, parses and prepares for drawing CSV curve files off the
 // main thread, so that several files are handled at once on a machine with more than one CPU (parse-parallel.ts).
-import { readFileSync } from "node:fs";
 import { parentPort } from "node:worker_threads";
-import { parseCurveText } from "../formats/csv";
+import { parseCsvFile } from "./inputs";
 import { computePrepared, preparedTransferables } from "../plot/prepare-transfer";
 import type { ParseJob, ParseReply } from "./parse-parallel";
 
@@ -15,12 +14,7 @@ if (port) {
     }
     let reply: ParseReply;
     try {
-      const text = readFileSync(job.path, "utf8");
-      const result = parseCurveText(text, {
-        fileName: job.fileName,
-        massUnit: job.massUnit,
-        couplingUnit: job.couplingUnit,
-      });
+      const result = parseCsvFile(job.path, job);
       // The same preparation the figure would build on first drawing (identical by construction), for the
       // g_aγγ view a CSV figure starts in; the main thread seeds its plot cache with it.
       const prepared =

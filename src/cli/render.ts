@@ -1,10 +1,12 @@
 // Command-line renderer (`npm run render -- …`): a project file, an exported SVG or CSV files in, the same
 // SVG the app exports (and optionally PNG and model CSV) out, without a browser and without any download.
+import { overlapOutputs } from "./overlap-out";
 import { existsSync, statSync } from "node:fs";
 import { dirname, resolve } from "node:path";
 import { pathToFileURL } from "node:url";
 import { parseArgs, USAGE } from "./args";
-import { InputError, loadProject, type PreParsed } from "./inputs";
+import { InputError, type PreParsed } from "./inputs";
+import { loadAnyProject } from "./pdf-input";
 import { pickFallbackFont, pngPixelSize, renderPng } from "./png";
 import { writeAllOrNothing, type OutputFile } from "./write-atomic";
 import {
@@ -16,6 +18,9 @@ import {
 } from "../formats/figure-file";
 import { presetOf } from "../plot/layout";
 import { modelsToCsv } from "../formats/model-csv";
+import { exportFigurePdfWithInfo } from "../formats/figure-pdf";
+import { nodePdfFonts } from "./pdf-fonts";
+import { AXBAND_VERSION } from "./version";
 
 /** Where the renderer writes its messages (tests pass their own). */
 export interface Io {
@@ -42,7 +47,7 @@ function checkOutputDir(path: string): void {
  * Runs the renderer on argv (without `node` and the script) and returns the exit code: 0 when every output
  * was written, 2 for bad input or options (nothing written), 1 for an unexpected failure.
  */
-export function main(argv: readonly string[], io: Io = consoleIo): number {
+export function main(argv: readonly string[], io: Io = consoleIo): Promise<number> {
   return run(argv, io, []);
 }
 
@@ -50,11 +55,11 @@ export function main(argv: readonly string[], io: Io = consoleIo): number {
  * As {@link main}, with CSV parse results already made (by start.ts on worker threads), by input index;
  * any file without one is read and parsed here, so output and messages are those of {@link main}.
  */
-export function mainWithPreParsed(argv: readonly string[], io: Io, preParsed: PreParsed): number {
+export function mainWithPreParsed(argv: readonly string[], io: Io, preParsed: PreParsed): Promise<number> {
   return run(argv, io, preParsed);
 }
 
-function run(argv: readonly string[], io: Io, preParsed: PreParsed): number {
+async function run(argv: readonly string[], io: Io, preParsed: PreParsed): Promise<number> {
   const args = parseArgs(argv);
   if (!args.ok) {
     io.err(`axband render: ${args.error}`);
@@ -67,15 +72,31 @@ function run(argv: readonly string[], io: Io, preParsed: PreParsed): number {
     return 0;
   }
   try {
-    for (const p of [opts.out, opts.png, opts.modelsCsv]) if (p) checkOutputDir(p);
-    const { project, notes } = loadProject(opts, preParsed);
+    for (const p of [opts.out, opts.png, opts.modelsCsv, opts.overlap, opts.overlapIntervals]) if (p) checkOutputDir(p);
+    const { project, notes } = await loadAnyProject(opts, preParsed);
     for (const n of notes) io.err(`note: ${n}`);
     const files: OutputFile[] = [];
     const report: string[] = [];
     const preset = presetOf(project.figure);
+    const asPdf = opts.out !== undefined && /\.pdf$/i.test(opts.out);
     // The project is embedded into the written SVG only; rasters are drawn from the lighter bare SVG.
-    const bare = opts.out ? exportFigureSvg(project, { embedProject: false }) : "";
-    if (opts.out) {
+    const bare = opts.out && !asPdf ? exportFigureSvg(project, { embedProject: false }) : "";
+    if (opts.out && asPdf) {
+      const r = await exportFigurePdfWithInfo(project, {
+        fonts: nodePdfFonts(opts.font),
+        creator: `axband ${AXBAND_VERSION}`,
+        embedProject: opts.embed,
+      });
+      if (r.embedded && !r.embeddedCurves)
+        io.err(
+          `note: project attached without curve data (${r.omittedCurves.length} curve(s) too large to embed); the PDF reopens with models, figure and constants only: keep the project file or the CSV files for the data`,
+        );
+      files.push({ path: opts.out, data: r.pdf });
+      report.push(
+        `wrote ${opts.out} (${size(r.pdf.length)}, ${preset.widthPhysical} × ${preset.heightPhysical}, ${project.curves.length} curve(s), ${project.models.length} model(s)${r.embedded ? ", project attached" : ""})`,
+      );
+    }
+    if (opts.out && !asPdf) {
       const embedded = opts.embed ? embedProjectInSvgWithInfo(bare, project) : undefined;
       const svg = embedded ? embedded.svg : bare;
       if (embedded && !embedded.embeddedCurves) {
@@ -118,6 +139,10 @@ function run(argv: readonly string[], io: Io, preParsed: PreParsed): number {
         `wrote ${opts.modelsCsv} (${size(Buffer.byteLength(csv))}, ${project.models.filter((m) => m.visible).length} model(s))`,
       );
     }
+    for (const o of overlapOutputs(project, opts.overlap, opts.overlapIntervals)) {
+      files.push({ path: o.path, data: o.data });
+      report.push(o.report);
+    }
     writeAllOrNothing(files);
     for (const line of report) io.out(line);
     return 0;
@@ -135,5 +160,5 @@ function run(argv: readonly string[], io: Io, preParsed: PreParsed): number {
 
 // Run only when executed as a script (tests import `main` without side effects).
 if (process.argv[1] && import.meta.url === pathToFileURL(resolve(process.argv[1])).href) {
-  process.exitCode = main(process.argv.slice(2));
+  void main(process.argv.slice(2)).then((code) => (process.exitCode = code));
 }

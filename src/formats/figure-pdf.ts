@@ -112,6 +112,7 @@ export async function extractProjectFromPdf(bytes: Uint8Array): Promise<PdfExtra
   let doc: PDFDocument;
   try {
     doc = await PDFDocument.load(bytes, { updateMetadata: false, throwOnInvalidObject: true });
+    if (doc.getPageCount() === 0) throw new Error("no pages");
   } catch {
     return { ok: false, error: "this PDF is damaged or incomplete (it may have been truncated)" };
   }

@@ -1,7 +1,8 @@
 // Project files (NAME.axband.json: the whole project, curve data included, as readable JSON) and the autosave
 // form for browser storage (the project without curve data as text, plus one binary record per curve).
 // Reading either goes through the same restore step as links, and never throws.
-import { parseJsonSafely, projectToJsonValue, restoreProject } from "../project/schema";
+import { parseJsonSafely, projectToJsonValue } from "../project/json";
+import { restoreProject } from "../project/restore";
 import { CURVE_STATE, PROJECT_STATE, keysFor, type PersistTarget } from "../project/state-table";
 import type { Curve, Project } from "../project/types";
 import { PROJECT_VERSION } from "../project/types";

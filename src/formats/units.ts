@@ -2,6 +2,7 @@
 // conversions to the internal units (eV for masses, GeV⁻¹ for couplings) through the physics core.
 import { PLANCK_EV_S, resolveConstants, type AxionConstants, type PhysicsOpts } from "../physics/constants";
 import { gFromNormalized } from "../physics/coupling";
+import { POW10 } from "./pow10";
 
 /** Mass column units: energies, or photon frequencies converted with ν = m_a / h. */
 export type MassUnit = "eV" | "meV" | "ueV" | "neV" | "peV" | "keV" | "MeV" | "GeV" | "Hz" | "kHz" | "MHz" | "GHz";
@@ -191,10 +192,11 @@ export function massFromEv(massEv: number, unit: MassUnit): number {
   return scalePow10(base, -u.pow10);
 }
 
-// Multiplying by 10^-k with k > 0 would round 10^-k first; dividing by the exact 10^k rounds once.
+// Multiplying by 10^-k with k > 0 would round 10^-k first; dividing by the exact 10^k rounds once. (Unit
+// powers stay within the table: ±12 at most.)
 function scalePow10(value: number, pow10: number): number {
   if (pow10 === 0) return value;
-  return pow10 > 0 ? value * 10 ** pow10 : value / 10 ** -pow10;
+  return pow10 > 0 ? value * POW10[pow10] : value / POW10[-pow10];
 }
 
 /**

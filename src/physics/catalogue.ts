@@ -20,7 +20,7 @@ const SINGLET: ElectroweakInput = { kind: "sm", dim: 1, y: "0" };
 const PHI: ScalarInput = { name: "Phi", ew: SINGLET };
 
 /** A heavy quark representation (colour, SU(2)_L dimension, hypercharge) as in the heavy-quark tables. */
-interface HeavyQuarkRep {
+export interface HeavyQuarkRep {
   tag: string;
   colour: string;
   dim: number;
@@ -28,7 +28,7 @@ interface HeavyQuarkRep {
 }
 
 // Di Luzio, Mescia, Nardi, PRL 118 (2017) 031801, Table I: the fifteen single representations R1…R15.
-const DLMN_REPS: HeavyQuarkRep[] = [
+export const DLMN_REPS: HeavyQuarkRep[] = [
   { tag: "R1", colour: "3", dim: 1, y: "-1/3" },
   { tag: "R2", colour: "3", dim: 1, y: "2/3" },
   { tag: "R3", colour: "3", dim: 2, y: "1/6" },

@@ -7,5 +7,7 @@ export * from "./su3";
 export * from "./anomaly";
 export * from "./catalogue";
 export * from "./eovern-parse";
+export * from "./ensemble";
 export type * from "./anomaly-types";
 export * from "./charges";
+export * from "./beta";

@@ -3,7 +3,7 @@
 import type { Curve, YView } from "../project/types";
 import type { AxionConstants } from "../physics/constants";
 import type { PathNode } from "./scene-types";
-import type { Shape } from "./legend-place";
+import type { Shape } from "./occupancy";
 import { curvePixels, pathDataCompact, prepareCurve, type PreparedCurve } from "./thinning/index";
 import { dashFor, r2, safeColour, unitInterval } from "./format";
 import { viewTransform, type LogAffine } from "./scales";

@@ -1,7 +1,7 @@
 // Public face of the plot core (pure, no DOM): scene building, SVG writing, layout presets, scales and the
 // decimation functions, for the app's renderer, the export and the command-line renderer.
 export type * from "./scene-types";
-export { buildScene, FONT_FAMILY, FALLBACK_MASS_RANGE_EV, fallbackYRange, type BuildSceneOpts } from "./scene";
+export { buildScene, FONT_FAMILY, type BuildSceneOpts } from "./scene";
 export {
   writeSvg,
   escapeXml,
@@ -68,8 +68,6 @@ export {
   clipToRect,
   curvePixels,
   pathData,
-  lowerBound,
-  upperBound,
   type PreparedCurve,
   type Pyramid,
   type ColumnParams,

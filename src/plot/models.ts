@@ -5,6 +5,7 @@ import { gAgg, gFromNormalized, type AxionConstants } from "../physics/index";
 import type { Model, YView } from "../project/types";
 import type { PathNode } from "./scene-types";
 import { clipToRect, pathData, type Polyline, type Rect } from "./thinning/index";
+import { atHundredths, pathShape, type Shape } from "./occupancy";
 import { dashFor, safeColour, unitInterval } from "./format";
 import { gToView, type LogAffine } from "./scales";
 import { modelShape, shapeCancels, shapeNormalizedRange, type ModelShape } from "./model-shape";
@@ -31,6 +32,8 @@ export interface ModelGeometry {
   spreadCancels: boolean;
   fills: PathNode[];
   lines: PathNode[];
+  /** The same fills and lines as vertices, for the automatic legend placement (no path data read back). */
+  shapes: Shape[];
 }
 
 function pxOf(f: ModelFrame, massEv: number, gInvGeV: number): number {
@@ -68,23 +71,20 @@ function bandPx(f: ModelFrame, shape: ModelShape, sigmas: number) {
   return { x0, x1, hi, lo, cancels };
 }
 
-function bandD(f: ModelFrame, b: ReturnType<typeof bandPx>): string {
-  return pathData(poly([b.x0, b.x1, b.x1, b.x0], [b.hi[0], b.hi[1], b.lo[1], b.lo[0]], true, f));
+function outlineOf(f: ModelFrame, b: ReturnType<typeof bandPx>): Polyline {
+  return poly([b.x0, b.x1, b.x1, b.x0], [b.hi[0], b.hi[1], b.lo[1], b.lo[0]], true, f);
 }
 
-/** Path data of the lines of `values` (one subpath each; lines with g = 0 are skipped). */
-function linesD(f: ModelFrame, values: readonly number[]): { d: string; drawn: number } {
+/** The lines of `values` as polylines (lines with g = 0 are skipped: they cannot be drawn on a log axis). */
+function linePolys(f: ModelFrame, values: readonly number[]): Polyline[] {
   const [m0, m1] = f.massDomainEv;
-  let d = "";
-  let drawn = 0;
+  const out: Polyline[] = [];
   for (const v of values) {
     const g0 = gAgg(m0, v, { constants: f.constants });
     const g1 = gAgg(m1, v, { constants: f.constants });
-    if (!(g0 > 0 && g1 > 0)) continue;
-    d += pathData(poly([f.plot.x, f.plot.x + f.plot.w], [pxOf(f, m0, g0), pxOf(f, m1, g1)], false, f));
-    drawn++;
+    if (g0 > 0 && g1 > 0) out.push(poly([f.plot.x, f.plot.x + f.plot.w], [pxOf(f, m0, g0), pxOf(f, m1, g1)], false, f));
   }
-  return { d, drawn };
+  return out;
 }
 
 /** Data attributes of a model's band fill: its E/N range, kind and whether it reaches g = 0. */
@@ -117,61 +117,66 @@ export function modelGeometry(model: Model, f: ModelFrame, nodeId: string): Mode
   const base = { "model-id": model.id };
   const fills: PathNode[] = [];
   const lines: PathNode[] = [];
+  const shapes: Shape[] = [];
+  // Each node with the polylines its path data is written from.
+  const add = (to: PathNode[], node: Omit<PathNode, "d">, polys: Polyline[]) => {
+    const full: PathNode = { ...node, d: polys.map((p) => pathData(p)).join("") };
+    to.push(full);
+    shapes.push(pathShape(full, polys.map(atHundredths)));
+  };
 
   let spreadCancels = false;
   if (sigmas > 0) {
     // A set drawn as lines gets one spread band per line; every other shape one band around the whole.
     const parts = shape.kind === "lines" ? shape.values.map((v): ModelShape => ({ kind: "line", value: v })) : [shape];
-    let d = "";
+    const outlines: Polyline[] = [];
     for (const part of parts) {
       const s = bandPx(f, part, sigmas);
       spreadCancels ||= s.cancels;
-      d += bandD(f, s);
+      outlines.push(outlineOf(f, s));
     }
     spreadCancels &&= !shapeCancels(shape, f.constants);
-    fills.push({
-      kind: "path",
-      id: `${nodeId}-spread`,
-      d,
-      fill: colour,
-      fillOpacity: Math.max(0.06, opacity * 0.45),
-      data: { ...base, spread: String(sigmas) },
-    });
+    add(
+      fills,
+      {
+        kind: "path",
+        id: `${nodeId}-spread`,
+        fill: colour,
+        fillOpacity: Math.max(0.06, opacity * 0.45),
+        data: { ...base, spread: String(sigmas) },
+      },
+      outlines,
+    );
   }
 
   if (isLine || shape.kind === "lines") {
-    const values = isLine ? [shape.value] : shape.values;
-    const { d, drawn } = linesD(f, values);
-    const vanishes = drawn === 0;
+    const polys = linePolys(f, isLine ? [shape.value] : shape.values);
+    const vanishes = polys.length === 0;
     if (!vanishes) {
       const data: Record<string, string> = isLine
         ? { ...base, eovern: model.eOverNMin }
-        : { ...base, "model-kind": "set", "set-draw": "lines", lines: String(drawn) };
-      lines.push({ kind: "path", id: `${nodeId}-line`, d, stroke: colour, strokeWidth: lw, dash, fill: "none", data });
+        : { ...base, "model-kind": "set", "set-draw": "lines", lines: String(polys.length) };
+      add(
+        lines,
+        { kind: "path", id: `${nodeId}-line`, stroke: colour, strokeWidth: lw, dash, fill: "none", data },
+        polys,
+      );
     }
-    return { kind: "line", cancels: vanishes, vanishes, spread: sigmas > 0, spreadCancels, fills, lines };
+    return { kind: "line", cancels: vanishes, vanishes, spread: sigmas > 0, spreadCancels, fills, lines, shapes };
   }
 
   const c = bandPx(f, shape, 0);
-  fills.push({
-    kind: "path",
-    id: `${nodeId}-band`,
-    d: bandD(f, c),
-    fill: colour,
-    fillOpacity: opacity,
-    data: bandData(model, shape, c.cancels),
-  });
-  let d = pathData(poly([c.x0, c.x1], c.hi, false, f));
-  if (!c.cancels) d += pathData(poly([c.x0, c.x1], c.lo, false, f));
-  lines.push({
-    kind: "path",
-    id: `${nodeId}-edges`,
-    d,
-    stroke: colour,
-    strokeWidth: lw,
-    dash,
-    fill: "none",
-    data: { ...base },
-  });
-  return { kind: "band", cancels: c.cancels, vanishes: false, spread: sigmas > 0, spreadCancels, fills, lines };
+  add(
+    fills,
+    { kind: "path", id: `${nodeId}-band`, fill: colour, fillOpacity: opacity, data: bandData(model, shape, c.cancels) },
+    [outlineOf(f, c)],
+  );
+  const edges = [poly([c.x0, c.x1], c.hi, false, f)];
+  if (!c.cancels) edges.push(poly([c.x0, c.x1], c.lo, false, f));
+  add(
+    lines,
+    { kind: "path", id: `${nodeId}-edges`, stroke: colour, strokeWidth: lw, dash, fill: "none", data: { ...base } },
+    edges,
+  );
+  return { kind: "band", cancels: c.cancels, vanishes: false, spread: sigmas > 0, spreadCancels, fills, lines, shapes };
 }

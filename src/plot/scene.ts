@@ -1,5 +1,6 @@
 // The scene builder: a project in, the complete figure out as plain layers of paths, rects and text, drawn
 // the same way on screen (SceneSvg and scene-dom.ts) and in the exported SVG (writeSvg). All defaults of a figure live here.
+import { DEFAULT_MASS_RANGE_EV, defaultYRange } from "../project/defaults";
 import type { Curve, LegendPlace, Model, Project, YView } from "../project/types";
 import type { PathNode, Scene, SceneLayer, SceneNode, ScaleConfig } from "./scene-types";
 import { axesNodes, axisTicks, gridNodes, verticalTickOpts, yTitle, type AxesFrame } from "./axes";
@@ -22,9 +23,9 @@ import {
   PLACEMENT_RESOLUTION,
   pickLegendPlace,
   placementCurve,
-  type Shape,
 } from "./legend-place";
 import { modelShape, shapeCancels, shapeNormalizedRange } from "./model-shape";
+import type { Shape } from "./occupancy";
 import { modelGeometry } from "./models";
 import { constantsOf, rescaleNote } from "./physics-settings";
 import { logAffine, sanitizeDomain, viewTransform } from "./scales";
@@ -33,16 +34,6 @@ import { logTicks } from "./ticks";
 
 /** Font stack of every figure: Helvetica-metric faces first (the width table assumes them), then fallbacks. */
 export const FONT_FAMILY = "Helvetica, Arial, 'Liberation Sans', 'DejaVu Sans', sans-serif";
-
-/** Mass range used when the figure's is unusable, eV. */
-export const FALLBACK_MASS_RANGE_EV: [number, number] = [1e-7, 1e-2];
-
-/** y range used when the figure's is unusable, in the units of the y view. */
-export function fallbackYRange(view: YView): [number, number] {
-  if (view === "normalized") return [1e-2, 1e2];
-  if (view === "g-gamma") return [5e-3, 50];
-  return [1e-17, 1e-9];
-}
 
 export interface BuildSceneOpts {
   /** Scene size in CSS px (96/in). @default the preset's size */
@@ -55,7 +46,14 @@ export interface BuildSceneOpts {
    */
   resolution?: number;
   /** A mass interval to highlight (e.g. a row of the overlap table), optionally with its model or curve. */
-  highlight?: { massMinEv: number; massMaxEv: number; modelId?: string; curveId?: string } | null;
+  highlight?: {
+    massMinEv: number;
+    massMaxEv: number;
+    modelId?: string;
+    curveId?: string;
+    /** Mark these intervals (eV) instead of the whole span; neighbours closer than a pixel share one mark. */
+    intervalsEv?: [number, number][];
+  } | null;
   /** Write the physical size (cm) into the scene, for export. @default true */
   physical?: boolean;
   /** Thin curves to pixel resolution; false draws every point (only for comparisons). @default true */
@@ -144,14 +142,13 @@ interface AutoLegendFrame {
 /**
  * The place of an "auto" legend (legend-place.ts): the curves (big file-order ones reduced by placementCurve)
  * are built again at the fixed PLACEMENT_RESOLUTION (the scene's own paths follow the display resolution, and the screen must pick the
- * corner the export picks); model paths do not depend on resolution. The highlight is left out (the
+ * corner the export picks); models come as vertices and do not depend on resolution. The highlight is left out (the
  * legend must not move when a table row is hovered).
  */
 function autoLegendPlace(project: Project, f: AutoLegendFrame): LegendCorner | "outside-right" {
   const plot = { x: r2(f.layout.plot.x), y: r2(f.layout.plot.y), w: r2(f.layout.plot.w), h: r2(f.layout.plot.h) };
   const map = logAffine(f.scales, plot);
   const slope = viewTransform(f.view, f.constants).slope;
-  const nodes: SceneNode[] = [];
   const shapes: Shape[] = [];
   project.curves.forEach((cv) => {
     if (!cv.visible) return;
@@ -179,14 +176,14 @@ function autoLegendPlace(project: Project, f: AutoLegendFrame): LegendCorner | "
       },
       `place-model-${i + 1}`,
     );
-    if (g) nodes.push(...g.fills, ...g.lines);
+    if (g) shapes.push(...g.shapes);
   });
   const boxes = {} as Record<LegendCorner, { x: number; y: number; w: number; h: number }>;
   for (const corner of LEGEND_CORNERS) {
     const o = cornerLegendOrigin(f.layout.plot, corner, f.box.widthPx, f.box.heightPx, f.fonts);
     boxes[corner] = { x: o.x, y: o.y, w: f.box.widthPx, h: f.box.heightPx };
   }
-  return pickLegendPlace({ nodes, shapes, plot, boxes, outsideFits: f.outsideFits }).place;
+  return pickLegendPlace({ shapes, plot, boxes, outsideFits: f.outsideFits }).place;
 }
 
 function physicalOf(px: number): string {
@@ -211,8 +208,9 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   const widthPx = opts.widthPx && opts.widthPx > 0 ? opts.widthPx : preset.widthPx;
   const heightPx = opts.heightPx && opts.heightPx > 0 ? opts.heightPx : preset.heightPx;
   const fonts = fontsFor(fig.fontPt, preset.fontScale);
-  const massDomainEv = sanitizeDomain(fig.massRangeEv, FALLBACK_MASS_RANGE_EV);
-  const yDomain = sanitizeDomain(fig.yRange, fallbackYRange(view));
+  // An unusable range falls back to the default figure's.
+  const massDomainEv = sanitizeDomain(fig.massRangeEv, DEFAULT_MASS_RANGE_EV);
+  const yDomain = sanitizeDomain(fig.yRange, defaultYRange(view));
   const topAxis = fig.topAxis === "fa" || fig.topAxis === "frequency" ? fig.topAxis : "none";
   const legendSetting = fig.legend ?? "top-right";
 
@@ -320,19 +318,30 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
     const data: Record<string, string> = { highlight: "mass" };
     if (hl.modelId) data["model-id"] = hl.modelId;
     if (hl.curveId) data["curve-id"] = hl.curveId;
-    if (hi > lo) {
+    const spans: [number, number][] = [];
+    for (const [a, b] of hl.intervalsEv ?? [[hl.massMinEv, hl.massMaxEv]]) {
+      if (!(a > 0 && b > 0)) continue;
+      const pa = Math.max(lo, map.ax + map.bx * Math.log10(Math.min(a, b)));
+      const pb = Math.min(hi, map.ax + map.bx * Math.log10(Math.max(a, b)));
+      if (!(pb > pa)) continue;
+      // Thousands of narrow intervals become at most one mark per pixel column.
+      const last = spans[spans.length - 1];
+      if (last && pa <= last[1] + 1) last[1] = Math.max(last[1], pb);
+      else spans.push([pa, pb]);
+    }
+    spans.forEach(([a, b], k) =>
       highlight.push({
         kind: "rect",
-        id: "highlight-range",
-        x: r2(lo),
+        id: k === 0 ? "highlight-range" : `highlight-range-${k + 1}`,
+        x: r2(a),
         y: plot.y,
-        w: r2(Math.max(hi - lo, 0.5)),
+        w: r2(Math.max(b - a, 0.5)),
         h: plot.h,
         fill: "#1f3b57",
         fillOpacity: 0.1,
         data,
-      });
-    }
+      }),
+    );
     const halo = [
       ...(hl.modelId ? (modelLineById.get(hl.modelId) ?? []) : []),
       ...(hl.curveId ? (curveLineById.get(hl.curveId) ?? []) : []),

@@ -1,5 +1,6 @@
 // Schema versions and the migration chain: a registry of steps, each turning a version-n project object
 // into a version-(n+1) one, so every file or link ever written keeps opening after the schema changes.
+import { isPlainObject } from "./json";
 import { kindOfRange } from "./model-kind";
 import { isRationalText } from "./rational-text";
 import { PROJECT_VERSION } from "./types";
@@ -50,10 +51,6 @@ export interface MigrateOpts {
   registry?: Readonly<Record<number, Migration>>;
   /** Version to migrate to. @default CURRENT_VERSION */
   target?: number;
-}
-
-function isPlainObject(x: unknown): x is Record<string, unknown> {
-  return typeof x === "object" && x !== null && !Array.isArray(x);
 }
 
 /**

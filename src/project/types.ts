@@ -1,6 +1,7 @@
 // The project: the whole user state as plain data (models, curves with their data, figure, constants).
 // Everything else (lines, bands, scenes, overlap tables) is derived from it and never stored.
 import type { FermionInput } from "../physics/anomaly-types";
+import type { ScalarInput } from "../physics/charges/types";
 
 export const PROJECT_VERSION = 2 as const;
 
@@ -25,7 +26,17 @@ export interface PhysicsSettings {
 export type ModelSource =
   | { kind: "typed" }
   | { kind: "catalogue"; catalogueId: string }
-  | { kind: "calculator"; fermions: FermionInput[]; scalarCharge: string }
+  | {
+      kind: "calculator";
+      fermions: FermionInput[];
+      scalarCharge: string;
+      /** Scalars and kept/forbidden terms (term syntax) the charges were solved from; absent in older files. */
+      scalars?: ScalarInput[];
+      terms?: string[];
+      forbidden?: string[];
+      /** The scalar whose PQ charge the solver set to 1. */
+      normalize?: string;
+    }
   | { kind: "ensemble"; settings: Record<string, unknown> }
   | { kind: "scan" };
 

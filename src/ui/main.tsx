@@ -4,7 +4,13 @@ import { createRoot } from "react-dom/client";
 import { App } from "./App";
 import { useAxband } from "./store";
 import { initProject, startAutosave } from "./store/autosave";
+// One cascade in the order of the former single sheet: the base, then the panels' own sheets.
 import "./styles.css";
+import "./models/models.css";
+import "./models/calculator.css";
+import "./settings/settings.css";
+import "./figure/figure.css";
+import "./layout/messages.css";
 
 async function start() {
   // Restore before saving starts, so the demo project never overwrites a saved one.

@@ -10,15 +10,15 @@ import { AXBAND_PROJECT_NS, exportFigureSvg, extractProjectFromSvg } from "../..
 import { parseXml } from "./svg-checks";
 import { tempDir } from "./fixtures";
 
-function run(argv: string[]) {
+async function run(argv: string[]) {
   const out: string[] = [];
   const err: string[] = [];
-  const status = main(argv, { out: (s) => out.push(s), err: (s) => err.push(s) });
+  const status = await main(argv, { out: (s) => out.push(s), err: (s) => err.push(s) });
   return { status, out: out.join("\n"), err: err.join("\n") };
 }
 
 describe("render with curve data over the embedding cap", () => {
-  it("embeds models and figure only, says so, and matches the in-process export byte for byte", () => {
+  it("embeds models and figure only, says so, and matches the in-process export byte for byte", async () => {
     const dir = tempDir();
     const csv = join(dir, "big-scan.csv");
     // 120,000 invented full-precision points: ~2.6 MB as a link, over the 2 MB cap.
@@ -30,7 +30,7 @@ describe("render with curve data over the embedding cap", () => {
     writeFileSync(csv, rows.join("\n") + "\n");
     const svgPath = join(dir, "big.svg");
     const args = [csv, "-o", svgPath, "--model", "8/3"];
-    const r = run(args);
+    const r = await run(args);
     expect(r.status).toBe(0);
     expect(r.err).toContain("note: project embedded without curve data (120000 points exceed the 2 MB cap)");
     expect(r.out).toContain("project embedded without curve data)");
@@ -46,6 +46,6 @@ describe("render with curve data over the embedding cap", () => {
     expect(back.ok && back.omittedCurveCount).toBe(1);
     expect(back.ok && back.project.models.map((m) => m.eOverNMin)).toEqual(["8/3"]);
     // The reopened project (no curves) renders again.
-    expect(run([svgPath, "-o", join(dir, "again.svg")]).status).toBe(0);
+    expect((await run([svgPath, "-o", join(dir, "again.svg")])).status).toBe(0);
   });
 });

@@ -9,10 +9,10 @@ import { MODEL_CSV_HEADER } from "../../src/formats/model-csv";
 import { parseXml, texts } from "./svg-checks";
 import { projectFileText, smallProject, tempDir } from "./fixtures";
 
-function run(argv: string[]) {
+async function run(argv: string[]) {
   const out: string[] = [];
   const err: string[] = [];
-  const status = main(argv, { out: (s) => out.push(s), err: (s) => err.push(s) });
+  const status = await main(argv, { out: (s) => out.push(s), err: (s) => err.push(s) });
   return { status, out: out.join("\n"), err: err.join("\n") };
 }
 
@@ -23,10 +23,10 @@ function projectIn(dir: string): string {
 }
 
 describe("main", () => {
-  it("writes a 2× PNG: twice the 96-px-per-inch size, 192 dpi in pHYs", () => {
+  it("writes a 2× PNG: twice the 96-px-per-inch size, 192 dpi in pHYs", async () => {
     const dir = tempDir();
     const png = join(dir, "f.png");
-    const r = run([projectIn(dir), "--png", png, "--scale", "2", "--preset", "single-column"]);
+    const r = await run([projectIn(dir), "--png", png, "--scale", "2", "--preset", "single-column"]);
     expect(r.err).toBe("");
     expect(r.status).toBe(0);
     const bytes = new Uint8Array(readFileSync(png));
@@ -36,11 +36,11 @@ describe("main", () => {
     expect(readPngDpi(bytes)?.pxPerUnitX).toBe(7559);
   });
 
-  it("draws a custom size with a title, and writes the model CSV", () => {
+  it("draws a custom size with a title, and writes the model CSV", async () => {
     const dir = tempDir();
     const svg = join(dir, "f.svg");
     const csv = join(dir, "models.csv");
-    const r = run([
+    const r = await run([
       projectIn(dir),
       "-o",
       svg,
@@ -65,37 +65,69 @@ describe("main", () => {
     expect(r.out).toMatch(/wrote .*models\.csv/);
   });
 
-  it("exits 2 without writing when an output directory does not exist", () => {
+  it("writes the overlap summary (.csv, .md, .tex) and its intervals beside the figure", async () => {
+    const dir = tempDir();
+    const csv = join(dir, "a.csv");
+    // A flat limit 1e-15 GeV⁻¹ meets the E/N = 0 line at 2.55212 μeV (worked by hand in
+    // tests/analysis/overlap.test.ts from α, c_γ = 1.92 and K = 5.691 μeV): excluded from there to 10 μeV.
+    writeFileSync(csv, "1e-6,1e-15\n1e-5,1e-15\n");
+    for (const ext of ["csv", "md", "tex"]) {
+      const out = join(dir, `overlap.${ext}`);
+      const r = await run([csv, "--model", "0", "--overlap", out, "--overlap-intervals", join(dir, `iv-${ext}.csv`)]);
+      expect(r.err).toBe("");
+      expect(r.status).toBe(0);
+      const text = readFileSync(out, "utf8");
+      if (ext === "csv") {
+        const [header, row] = text.trimEnd().split("\n");
+        const cols = header.split(",");
+        const cells = row.split(",");
+        expect(Number(cells[cols.indexOf("m_a_min_eV")])).toBe(1e-6);
+        expect(cells[cols.indexOf("intervals")]).toBe("1");
+        // Share in log m: ln(10 μeV/2.55212 μeV)/ln 10 = 0.59312 (by hand).
+        expect(Number(cells[cols.indexOf("share_mass")])).toBeCloseTo(0.59312, 4);
+      }
+      if (ext === "md") expect(text).toMatch(/With c_γ = 1\.92\(4\) and K = 5\.691\(51\) μeV/);
+      if (ext === "tex") expect(text).toContain("\\toprule");
+      const iv = readFileSync(join(dir, `iv-${ext}.csv`), "utf8")
+        .trimEnd()
+        .split("\n");
+      expect(iv.length).toBe(2);
+      expect(Number(iv[1].split(",")[5])).toBeCloseTo(2.55212e-6, 10);
+    }
+    expect((await run([csv, "--overlap", join(dir, "o.txt")])).status).toBe(2);
+  });
+
+  it("exits 2 without writing when an output directory does not exist", async () => {
     const dir = tempDir();
     const p = projectIn(dir);
-    const r = run([p, "-o", join(dir, "f.svg"), "--png", join(dir, "no-such-dir", "f.png")]);
+    const r = await run([p, "-o", join(dir, "f.svg"), "--png", join(dir, "no-such-dir", "f.png")]);
     expect(r.status).toBe(2);
     expect(r.err).toMatch(/does not exist/);
     expect(existsSync(join(dir, "f.svg"))).toBe(false);
     expect(readdirSync(dir)).toEqual(["p.axband.json"]);
   });
 
-  it("exits 2 on a bad --model and on a CSV with no data rows", () => {
+  it("exits 2 on a bad --model and on a CSV with no data rows", async () => {
     const dir = tempDir();
     const csv = join(dir, "a.csv");
     writeFileSync(csv, "1e-6,1e-13\n1e-5,2e-13\n");
-    const bad = run([csv, "-o", join(dir, "f.svg"), "--model", "eight thirds"]);
+    const bad = await run([csv, "-o", join(dir, "f.svg"), "--model", "eight thirds"]);
     expect(bad.status).toBe(2);
     expect(bad.err).toMatch(/--model eight thirds/);
     const empty = join(dir, "empty.csv");
     writeFileSync(empty, "# nothing here\n");
-    const r = run([empty, "-o", join(dir, "f.svg")]);
+    const r = await run([empty, "-o", join(dir, "f.svg")]);
     expect(r.status).toBe(2);
     expect(r.err).toMatch(/empty\.csv/);
     expect(existsSync(join(dir, "f.svg"))).toBe(false);
   });
 
-  it("reads CSV units from --mass-unit when the file has no header", () => {
+  it("reads CSV units from --mass-unit when the file has no header", async () => {
     const dir = tempDir();
     const csv = join(dir, "ueV.csv");
     writeFileSync(csv, "1,1e-13\n10,2e-13\n100,1e-13\n");
     const svg = join(dir, "f.svg");
-    expect(run([csv, "-o", svg, "--mass-unit", "ueV"]).status).toBe(0);
+    expect((await run([csv, "-o", svg, "--mass-unit", "ueV"])).status).toBe(0);
     // 1–100 μeV = 10⁻⁶–10⁻⁴ eV: the fitted mass axis spans those decades.
     const all = texts(parseXml(readFileSync(svg, "utf8"))).join(" ");
     expect(all).toContain("10−6");

@@ -6,7 +6,7 @@ import { readdirSync, readFileSync, writeFileSync, existsSync } from "node:fs";
 import { join } from "node:path";
 import { exportFigureSvg, extractProjectFromSvg } from "../../src/formats/figure-file";
 import { readPngDpi, readPngSize, pngChunksValid } from "../../src/formats/png-meta";
-import { projectsEqual } from "../../src/project/schema";
+import { projectsEqual } from "../../src/project/json";
 import { projectFromFile } from "../../src/formats/project-file";
 import {
   INJECTION_CORPUS,

@@ -4,7 +4,8 @@
 import { describe, expect, it } from "vitest";
 import { newCurve } from "../../src/project/defaults";
 import { encodeLink } from "../../src/formats/codec";
-import { projectsEqual, restoreProject } from "../../src/project/schema";
+import { projectsEqual } from "../../src/project/json";
+import { restoreProject } from "../../src/project/restore";
 import type { Project } from "../../src/project/types";
 import {
   AXBAND_PROJECT_NS,

@@ -11,7 +11,8 @@ import {
   exportSizeInches,
   extractProjectFromSvg,
 } from "../../src/formats/figure-file";
-import { projectsEqual, restoreProject } from "../../src/project/schema";
+import { projectsEqual } from "../../src/project/json";
+import { restoreProject } from "../../src/project/restore";
 import type { SizePreset } from "../../src/project/types";
 import {
   INJECTION_CORPUS,

@@ -9,7 +9,8 @@ import { describe, expect, it } from "vitest";
 import { exportFigurePdfWithInfo, extractProjectFromPdf } from "../../src/formats/figure-pdf";
 import { nodePdfFonts } from "../../src/cli/pdf-fonts";
 import { defaultProject } from "../../src/project/demo";
-import { projectsEqual, restoreProject } from "../../src/project/schema";
+import { projectsEqual } from "../../src/project/json";
+import { restoreProject } from "../../src/project/restore";
 import { newCurve } from "../../src/project/defaults";
 
 const fonts = nodePdfFonts("sans");

@@ -3,6 +3,7 @@
 import type { Curve, Model, Project } from "../../src/project/types";
 import type { PathNode, Scene, SceneNode, TextNode } from "../../src/plot/scene-types";
 import { mulberry32 } from "../../src/project/demo";
+import { pathShape, type Shape } from "../../src/plot/occupancy";
 
 /** Deterministic 32-bit generator (the demo's mulberry32), so fixtures and property tests are reproducible. */
 export const rng = mulberry32;
@@ -195,4 +196,23 @@ export function parsePath(d: string): { points: [number, number][]; closed: bool
     }
   }
   return out;
+}
+
+/**
+ * Scene nodes as the legend placement's shapes: path data read with {@link parsePath} (the reference reader
+ * above), painted as pathShape decides; other nodes (text, rects) are left out.
+ */
+export function shapesOf(list: readonly SceneNode[]): Shape[] {
+  return list
+    .filter((n): n is PathNode => n.kind === "path")
+    .map((n) =>
+      pathShape(
+        n,
+        parsePath(n.d).map((s) => ({
+          xs: s.points.map((p) => p[0]),
+          ys: s.points.map((p) => p[1]),
+          closed: s.closed,
+        })),
+      ),
+    );
 }

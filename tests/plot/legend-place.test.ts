@@ -1,35 +1,22 @@
 // Automatic legend placement ("auto", legend-place.ts): the inner corner whose legend box covers the least
-// drawn content. The rule is our own (keeping the legend off the data is common practice); the geometry it
-// rests on is checked against brute-force references: path data per the SVG 1.1 grammar (W3C, "Scalable
-// Vector Graphics (SVG) 1.1 (Second Edition)", 2011, §8.3), fills by the nonzero winding rule (same, §11.3
-// 'fill-rule'), line cells by exact segment–cell intersection (the grid walk of Amanatides & Woo, "A fast
-// voxel traversal algorithm for ray tracing", Eurographics 1987, clipped as in Liang & Barsky, ACM TOG 3
-// (1984) 1).
+// drawn content. The rule is our own (keeping the legend off the data is common practice); the occupancy grid
+// it rests on is checked in occupancy.test.ts. Scene paths are read back with the tests' reference reader.
 import { describe, expect, test, vi } from "vitest";
-import fc from "fast-check";
 import { defaultProject } from "../../src/project/demo";
 import type { Curve, LegendPlace, Project, SizePreset } from "../../src/project/types";
-import { pathData, pathDataCompact } from "../../src/plot/thinning/index";
 import { exportFigureSvg, exportScene, rasterResolution } from "../../src/formats/figure-file";
 import type { LegendCorner } from "../../src/plot/layout";
 import {
   CROWDED_COVERAGE,
   LEGEND_CORNERS,
   OUTSIDE_MIN_PLOT_FRACTION,
-  coveredFraction,
-  emptyGrid,
-  markFill,
-  markSegment,
-  occupancyGrid,
-  parsePathData,
   pickLegendPlace,
   placementCurve,
   PLACEMENT_MAX_POINTS,
-  type OccupancyGrid,
 } from "../../src/plot/legend-place";
 import { buildScene } from "../../src/plot/scene";
 import type { RectNode, Scene } from "../../src/plot/scene-types";
-import { curve, fixtureProject, model, nodes, parsePath, paths, rng } from "./fixture";
+import { curve, fixtureProject, model, nodes, rng, shapesOf } from "./fixture";
 
 // ------------------------------------------------------------------------------------------------ helpers
 
@@ -95,7 +82,7 @@ function coverageOf(scene: Scene): Record<LegendCorner, number> {
     "bottom-right": { x: p.x + p.w - inset - b.w, y: p.y + p.h - inset - b.h, w: b.w, h: b.h },
   };
   return pickLegendPlace({
-    nodes: [...nodes(scene, "curves"), ...nodes(scene, "models")],
+    shapes: shapesOf([...nodes(scene, "curves"), ...nodes(scene, "models")]),
     plot: p,
     boxes,
     outsideFits: () => false,
@@ -418,17 +405,21 @@ describe("pickLegendPlace", () => {
 
   test("ties go top-right, top-left, bottom-right, bottom-left", () => {
     expect(LEGEND_CORNERS).toEqual(["top-right", "top-left", "bottom-right", "bottom-left"]);
-    const none = pickLegendPlace({ nodes: [], plot, boxes, outsideFits: () => true });
+    const none = pickLegendPlace({ shapes: shapesOf([]), plot, boxes, outsideFits: () => true });
     expect(none).toMatchObject({ place: "top-right", crowded: false });
-    expect(pickLegendPlace({ nodes: [rect(100, 0, 100, 50)], plot, boxes, outsideFits: () => true }).place).toBe(
-      "top-left",
-    );
-    expect(pickLegendPlace({ nodes: [rect(0, 0, 200, 50)], plot, boxes, outsideFits: () => true }).place).toBe(
-      "bottom-right",
-    );
     expect(
-      pickLegendPlace({ nodes: [rect(0, 0, 200, 50), rect(100, 50, 100, 50)], plot, boxes, outsideFits: () => true })
-        .place,
+      pickLegendPlace({ shapes: shapesOf([rect(100, 0, 100, 50)]), plot, boxes, outsideFits: () => true }).place,
+    ).toBe("top-left");
+    expect(
+      pickLegendPlace({ shapes: shapesOf([rect(0, 0, 200, 50)]), plot, boxes, outsideFits: () => true }).place,
+    ).toBe("bottom-right");
+    expect(
+      pickLegendPlace({
+        shapes: shapesOf([rect(0, 0, 200, 50), rect(100, 50, 100, 50)]),
+        plot,
+        boxes,
+        outsideFits: () => true,
+      }).place,
     ).toBe("bottom-left");
   });
 
@@ -436,22 +427,22 @@ describe("pickLegendPlace", () => {
     const fits = vi.fn(() => true);
     // Everything filled except a 20 × 100 strip on the left: top-left and bottom-left are 16/60 uncovered.
     const most = [rect(20, 0, 180, 100)];
-    const a = pickLegendPlace({ nodes: most, plot, boxes, outsideFits: fits });
+    const a = pickLegendPlace({ shapes: shapesOf(most), plot, boxes, outsideFits: fits });
     expect(a.coverage["top-left"]).toBeCloseTo(44 / 60, 12);
     expect(a).toMatchObject({ place: "outside-right", crowded: true });
-    const b = pickLegendPlace({ nodes: most, plot, boxes, outsideFits: () => false });
+    const b = pickLegendPlace({ shapes: shapesOf(most), plot, boxes, outsideFits: () => false });
     expect(b.place).toBe("top-left");
     fits.mockClear();
     // 20 of the box's 60 px width covered = 1/3 < 35 %: not crowded, no question about room.
-    const c = pickLegendPlace({ nodes: [rect(44, 0, 156, 100)], plot, boxes, outsideFits: fits });
+    const c = pickLegendPlace({ shapes: shapesOf([rect(44, 0, 156, 100)]), plot, boxes, outsideFits: fits });
     expect(c.coverage["top-left"]).toBeCloseTo(1 / 3, 12);
     expect(c).toMatchObject({ place: "top-left", crowded: false });
     expect(fits).not.toHaveBeenCalled();
   });
 
-  test("lines count by the cells they cross, unpainted nodes and text not at all", () => {
+  test("lines count by the cells they cross, unpainted paths not at all", () => {
     const line = { kind: "path" as const, d: "M0 10H200", stroke: "#000", strokeWidth: 1, fill: "none" };
-    const r = pickLegendPlace({ nodes: [line], plot, boxes, outsideFits: () => false });
+    const r = pickLegendPlace({ shapes: shapesOf([line]), plot, boxes, outsideFits: () => false });
     // The row of cells 8..12 px: 4 of the box's 30 px height (the box spans y 4..34).
     expect(r.coverage["top-left"]).toBeCloseTo(4 / 30, 12);
     expect(r.coverage["bottom-left"]).toBe(0);
@@ -470,194 +461,8 @@ describe("pickLegendPlace", () => {
         baseline: "middle" as const,
       },
     ];
-    expect(Object.values(pickLegendPlace({ nodes: ghost, plot, boxes, outsideFits: () => false }).coverage)).toEqual([
-      0, 0, 0, 0,
-    ]);
-  });
-});
-
-// ------------------------------------------------------------------------------------------ geometry pieces
-
-/** Cells of the grid a segment meets (closed cells), by clipping it to each cell: the brute-force reference. */
-function cellsMetBySegment(g: OccupancyGrid, xa: number, ya: number, xb: number, yb: number): Set<number> {
-  const out = new Set<number>();
-  for (let r = 0; r < g.rows; r++) {
-    for (let c = 0; c < g.cols; c++) {
-      const x0 = g.x0 + c * g.cellPx;
-      const y0 = g.y0 + r * g.cellPx;
-      let t0 = 0;
-      let t1 = 1;
-      const dx = xb - xa;
-      const dy = yb - ya;
-      const ok = (
-        [
-          [-dx, xa - x0],
-          [dx, x0 + g.cellPx - xa],
-          [-dy, ya - y0],
-          [dy, y0 + g.cellPx - ya],
-        ] as const
-      ).every(([p, q]) => {
-        if (p === 0) return q >= 0;
-        const t = q / p;
-        if (p < 0) t0 = Math.max(t0, t);
-        else t1 = Math.min(t1, t);
-        return true;
-      });
-      if (ok && t0 <= t1) out.add(r * g.cols + c);
-    }
-  }
-  return out;
-}
-
-/** Winding number of a closed polygon around a point (the nonzero rule's count, by upward/downward crossings). */
-function winding(xs: number[], ys: number[], px: number, py: number): number {
-  let w = 0;
-  for (let i = 0; i < xs.length; i++) {
-    const j = (i + 1) % xs.length;
-    const [xa, ya, xb, yb] = [xs[i], ys[i], xs[j], ys[j]];
-    if (ya <= py !== yb <= py) {
-      const x = xa + ((py - ya) * (xb - xa)) / (yb - ya);
-      if (x < px) w += yb > ya ? 1 : -1;
-    }
-  }
-  return w;
-}
-
-function marked(g: OccupancyGrid): Set<number> {
-  const s = new Set<number>();
-  g.cells.forEach((v, i) => v && s.add(i));
-  return s;
-}
-
-describe("occupancy grid", () => {
-  const plot = { x: 10.3, y: 5.7, w: 61, h: 43 };
-  const coord = (lo: number, span: number) => fc.double({ min: lo - 20, max: lo + span + 20, noNaN: true });
-
-  test("a segment marks exactly the cells it meets (property, 300 random segments in and around the grid)", () => {
-    fc.assert(
-      fc.property(
-        coord(plot.x, plot.w),
-        coord(plot.y, plot.h),
-        coord(plot.x, plot.w),
-        coord(plot.y, plot.h),
-        (xa, ya, xb, yb) => {
-          const g = emptyGrid(plot, 4);
-          markSegment(g, xa, ya, xb, yb);
-          expect(marked(g)).toEqual(cellsMetBySegment(g, xa, ya, xb, yb));
-        },
-      ),
-      { numRuns: 300, seed: 42 },
-    );
-  });
-
-  test("a fill marks exactly the cells whose centre has nonzero winding (property, random self-crossing polygons)", () => {
-    const pt = fc.tuple(coord(plot.x, plot.w), coord(plot.y, plot.h));
-    fc.assert(
-      fc.property(fc.array(pt, { minLength: 3, maxLength: 12 }), (pts) => {
-        const g = emptyGrid(plot, 4);
-        const xs = pts.map((p) => p[0]);
-        const ys = pts.map((p) => p[1]);
-        markFill(g, [{ xs, ys, closed: false }]);
-        const expected = new Set<number>();
-        for (let r = 0; r < g.rows; r++)
-          for (let c = 0; c < g.cols; c++)
-            if (winding(xs, ys, g.x0 + (c + 0.5) * 4, g.y0 + (r + 0.5) * 4) !== 0) expected.add(r * g.cols + c);
-        expect(marked(g)).toEqual(expected);
-      }),
-      { numRuns: 300, seed: 7 },
-    );
-  });
-
-  test("nonzero, not even-odd: a square drawn twice the same way round stays filled (SVG 1.1 §11.3)", () => {
-    const g = occupancyGrid(
-      [{ kind: "path", d: "M0 0H40V40H0ZM0 0H40V40H0Z", fill: "#000" }],
-      { x: 0, y: 0, w: 40, h: 40 },
-      4,
-    );
-    expect(g.cells.every((v) => v === 1)).toBe(true);
-    const holed = occupancyGrid(
-      [{ kind: "path", d: "M0 0H40V40H0ZM10 10V30H30V10Z", fill: "#000" }],
-      { x: 0, y: 0, w: 40, h: 40 },
-      4,
-    );
-    // The inner square runs the other way round: a hole of 20 px, five 4-px cells each way.
-    expect(holed.cells.reduce((a, v) => a + v, 0)).toBe(100 - 25);
-  });
-
-  test("covered fraction weighs partly covered cells by their overlap", () => {
-    const g = emptyGrid({ x: 0, y: 0, w: 40, h: 40 }, 4);
-    for (let r = 0; r < g.rows; r++) for (let c = 0; c < 5; c++) g.cells[r * g.cols + c] = 1; // x < 20 px
-    expect(coveredFraction(g, { x: 0, y: 0, w: 40, h: 40 })).toBe(0.5);
-    expect(coveredFraction(g, { x: 10, y: 3, w: 20, h: 17 })).toBeCloseTo(0.5, 12);
-    expect(coveredFraction(g, { x: 18, y: 0, w: 4, h: 4 })).toBeCloseTo(0.5, 12);
-    // Outside the grid counts as empty.
-    expect(coveredFraction(g, { x: -40, y: 0, w: 80, h: 40 })).toBeCloseTo(0.25, 12);
-  });
-});
-
-describe("parsePathData", () => {
-  test("absolute and relative commands, implicit line-tos after M, H/V, Z back to the start (SVG 1.1 §8.3)", () => {
-    expect(parsePathData("M1 2L3 4 5 6H7V8Z")).toEqual([{ xs: [1, 3, 5, 7, 7], ys: [2, 4, 6, 6, 8], closed: true }]);
-    expect(parsePathData("m1 2 3 4l.5-.25h-1v2zl1 1")).toEqual([
-      { xs: [1, 4, 4.5, 3.5, 3.5], ys: [2, 6, 5.75, 5.75, 7.75], closed: true },
-      { xs: [1, 2], ys: [2, 3], closed: false },
-    ]);
-    expect(parsePathData("M0,0 C1,1 2,2 3,0 Q4 4 5 0 A1 1 0 0 1 6 0")).toEqual([
-      { xs: [0, 3, 5, 6], ys: [0, 0, 0, 0], closed: false },
-    ]);
-    expect(parsePathData("M1e1 2E-1L-1.5e+1 .5")).toEqual([{ xs: [10, -15], ys: [0.2, 0.5], closed: false }]);
-    expect(parsePathData("M1 2L3 4 x 5")).toEqual([{ xs: [1, 3], ys: [2, 4], closed: false }]);
-    expect(parsePathData("")).toEqual([]);
-  });
-
-  test("reads back the scene's own path forms: compact curve paths and absolute paths (property, random polylines)", () => {
-    fc.assert(
-      fc.property(
-        fc.array(fc.tuple(fc.integer({ min: -50_000, max: 90_000 }), fc.integer({ min: -50_000, max: 90_000 })), {
-          minLength: 1,
-          maxLength: 40,
-        }),
-        fc.boolean(),
-        (pts, closed) => {
-          const poly = {
-            xs: Float64Array.from(pts, (p) => p[0] / 100),
-            ys: Float64Array.from(pts, (p) => p[1] / 100),
-            n: pts.length,
-            closed,
-          };
-          // The compact form drops repeated vertices, the absolute form keeps them.
-          for (const [d, dropsRepeats] of [
-            [pathDataCompact(poly), true],
-            [pathData(poly), false],
-          ] as const) {
-            const [sub] = parsePathData(d);
-            expect(sub.closed).toBe(closed);
-            const keep = dropsRepeats
-              ? pts.filter((p, i) => i === 0 || p[0] !== pts[i - 1][0] || p[1] !== pts[i - 1][1])
-              : pts;
-            expect(sub.xs.map((x) => Math.round(x * 100))).toEqual(keep.map((p) => p[0]));
-            expect(sub.ys.map((y) => Math.round(y * 100))).toEqual(keep.map((p) => p[1]));
-          }
-        },
-      ),
-      { numRuns: 200, seed: 3 },
-    );
-  });
-
-  test("agrees with the plot tests' reference reader on every path of the demo scene", () => {
-    const scene = buildScene(defaultProject());
-    const all = paths(scene);
-    expect(all.length).toBeGreaterThan(10);
-    for (const node of all) {
-      const ref = parsePath(node.d);
-      const got = parsePathData(node.d);
-      expect(got.length).toBe(ref.length);
-      got.forEach((s, i) => {
-        expect(s.closed).toBe(ref[i].closed);
-        expect(s.xs.length).toBe(ref[i].points.length);
-        s.xs.forEach((x, k) => expect(x).toBeCloseTo(ref[i].points[k][0], 9));
-        s.ys.forEach((y, k) => expect(y).toBeCloseTo(ref[i].points[k][1], 9));
-      });
-    }
+    expect(
+      Object.values(pickLegendPlace({ shapes: shapesOf(ghost), plot, boxes, outsideFits: () => false }).coverage),
+    ).toEqual([0, 0, 0, 0]);
   });
 });

@@ -123,7 +123,7 @@ describe("kinds, members and their repairs", () => {
     expect(text).toMatch(/a line has one E\/N; 2 was dropped/);
     expect(text).toMatch(/members.*dropped/);
     expect(text).toMatch(/"between" has no members/);
-    expect(text).toMatch(/model 5 was left out: E\/N is missing/);
+    expect(text).toMatch(/model 5 was left out: (eOverNMin: )?E\/N is missing/);
     expect(text).toMatch(/set drawing/);
     expect(text).toMatch(/set share/);
   });

@@ -198,6 +198,19 @@ describe("restoreProject", () => {
     expect(r.repairs.length).toBe(2);
   });
 
+  it("returns each call's repairs with its project: a later call neither adds to nor empties an earlier list", () => {
+    const first = restored({ version: 1, figure: { fontPt: 1000 } });
+    const firstRepairs = [...first.repairs];
+    expect(firstRepairs).toEqual(["figure, font size: 1000 is out of range; set to 72"]);
+    const second = restored({ version: 1, models: [{ eOverNMin: "1", colour: "red" }] });
+    expect(second.repairs).toEqual(['model 1, colour: "red" is not valid; the default is used']);
+    expect(first.repairs).toEqual(firstRepairs);
+    // A refused input in between leaves both lists as they were.
+    expect(restoreProject({ version: 1, models: 3 }).ok).toBe(false);
+    expect(first.repairs).toEqual(firstRepairs);
+    expect(second.repairs).toHaveLength(1);
+  });
+
   it("refuses what is not a project, with a message", () => {
     for (const bad of [
       null,

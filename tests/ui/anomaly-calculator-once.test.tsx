@@ -12,7 +12,10 @@ vi.mock("../../src/physics/anomaly", async (importOriginal) => {
   return { ...real, tryAnomaly: vi.fn(real.tryAnomaly) };
 });
 
-beforeEach(() => resetStore());
+beforeEach(() => {
+  resetStore();
+  localStorage.clear(); // the calculator keeps its draft there
+});
 
 test("one keystroke in a charge field runs the anomaly computation once, and the breakdown shows its result", async () => {
   const user = userEvent.setup();

@@ -8,7 +8,10 @@ import { AnomalyCalculator } from "../../src/ui/models/AnomalyCalculator";
 import { useAxband } from "../../src/ui/store";
 import { resetStore } from "./helpers";
 
-beforeEach(() => resetStore());
+beforeEach(() => {
+  resetStore();
+  localStorage.clear(); // the calculator keeps its draft there
+});
 
 const eOverN = () => screen.getByTestId("calc-eovern").textContent;
 

@@ -36,7 +36,7 @@ async function paste(text: string) {
 
 describe("pasted data", () => {
   test("shows the first rows, the detected delimiter and the header units", async () => {
-    await paste("# invented demo table\nm_a [ueV];g [1/GeV]\n1,5;3e-14\n2,0;2.5e-14\n4,0;2e-14\n");
+    await paste("# invented demo table\nm_a [ueV];g [1/GeV]\n1,5;3e-14\n2,0;2,5e-14\n4,0;2e-14\n");
     const detected = screen.getByTestId("import-detected");
     expect(detected.textContent).toContain("Delimiter: semicolon (detected)");
     expect(detected.textContent).toContain("decimal comma");

@@ -8,7 +8,7 @@ import { modelSpec, type ModelSpec } from "./models";
 import { setGroups } from "./sets";
 import type { EOverNCover, OverlapSummaryRow, SummaryOptions } from "./types";
 
-export type { EOverNCover, IntervalList, OverlapSummaryRow, SummaryModelKind, SummaryOptions } from "./types";
+export type { EOverNCover, IntervalList, OverlapSummaryRow, SummaryOptions } from "./types";
 export { intervalEOverN } from "./intervals";
 
 const KINDS = {

@@ -1,12 +1,13 @@
 // Where a model line or band meets a curve: the exact mass intervals where the band is wholly or partly excluded
 // (within reach, inside a region), solved per segment in log-log space sheared by v = ln g − ln m (O(n) per pair).
+import { bisectLeft } from "d3-array";
 import { resolveConstants, type AxionConstants } from "../../physics/constants";
 import { assemble } from "./assemble";
 import { polygonAreaShare, sortedAreaShare } from "./area";
 import { eOverNWithAbsIn, modelLevels, normalizedOfLevel, type Levels } from "./levels";
 import { polygonOverlap, polygonRangeOver } from "./polygon";
 import { preparePolygon, prepareSorted } from "./prepare";
-import { lowerBound, sortedOverlap, sortedRangeOver } from "./sorted";
+import { sortedOverlap, sortedRangeOver } from "./sorted";
 import type { OverlapCurve, OverlapDetail, OverlapModel, OverlapOptions, OverlapResult } from "./types";
 
 export type { Interval, OverlapCurve, OverlapDetail, OverlapModel, OverlapOptions, OverlapResult } from "./types";
@@ -103,7 +104,7 @@ export function overlapDetail(model: OverlapModel, curve: OverlapCurve, opts: Ov
   if (p.n < 2 || !(p.x[p.n - 1] > p.x[0])) return empty;
   const toMass = (x: number): number => {
     // Boundaries at a sample keep the sample's own mass (no exp∘log round-off at the range ends).
-    const j = lowerBound(p.x, x);
+    const j = bisectLeft(p.x, x);
     if (j < p.n && p.x[j] === x) return p.mass[j];
     return Math.min(p.mass[p.n - 1], Math.max(p.mass[0], Math.exp(x)));
   };

@@ -1,9 +1,10 @@
 // Closed regions (a polygon in file order, even-odd rule) against the model levels.
+import { bisectLeft } from "d3-array";
 import { intersectFlat, pushMerged, subtractFlat, unionFlat, unionUnsorted, type Flat } from "./intervals";
 import { finish, type Raw } from "./assemble";
 import type { Levels } from "./levels";
 import type { PolygonPrep } from "./prepare";
-import { INSET, lowerBound } from "./sorted";
+import { INSET } from "./sorted";
 
 /** Masses (ln) where the horizontal line v = c lies inside the polygon (even-odd rule). */
 function insideAlongLevel(p: PolygonPrep, c: number): Flat {
@@ -74,7 +75,7 @@ function polygonSpacingAt(p: PolygonPrep, xs: Float64Array): Float64Array {
     const j = i + 1 === p.n ? 0 : i + 1;
     const e0 = Math.min(p.x[i], p.x[j]);
     const e1 = Math.max(p.x[i], p.x[j]);
-    for (let q = lowerBound(xs, e0); q < xs.length && xs[q] <= e1; q++) width[q] = Math.min(width[q], e1 - e0);
+    for (let q = bisectLeft(xs, e0); q < xs.length && xs[q] <= e1; q++) width[q] = Math.min(width[q], e1 - e0);
   }
   return width;
 }
@@ -87,7 +88,7 @@ function polygonBridge(p: PolygonPrep, lists: Flat[]): (lo: number, hi: number) 
   const xs = Float64Array.from(ends);
   const width = polygonSpacingAt(p, xs);
   const at = (x: number): number => {
-    const q = lowerBound(xs, x);
+    const q = bisectLeft(xs, x);
     return q < xs.length && xs[q] === x ? width[q] : 0;
   };
   return (lo, hi) => hi - lo < Math.min(at(lo), at(hi));
@@ -121,7 +122,7 @@ export function polygonRangeOver(p: PolygonPrep, parts: Flat): { min: number[]; 
     const xj = p.x[j];
     const e0 = Math.min(xi, xj);
     const e1 = Math.max(xi, xj);
-    for (let q = lowerBound(his, e0); q < k && parts[2 * q] <= e1; q++) {
+    for (let q = bisectLeft(his, e0); q < k && parts[2 * q] <= e1; q++) {
       const inset = INSET * (parts[2 * q + 1] - parts[2 * q]);
       const a = Math.max(e0, parts[2 * q] + inset);
       const b = Math.min(e1, parts[2 * q + 1] - inset);

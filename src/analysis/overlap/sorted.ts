@@ -1,4 +1,5 @@
 // Exclusion and projection curves (sorted by mass) against the model levels: one pass over the segments.
+import { bisectLeft, bisectRight } from "d3-array";
 import { pushMerged, type Flat } from "./intervals";
 import { finish, type Raw } from "./assemble";
 import type { Levels } from "./levels";
@@ -17,33 +18,9 @@ function segmentAtOrBelow(out: Flat, x0: number, x1: number, a: number, b: numbe
   else pushMerged(out, xc, x1);
 }
 
-/** Index of the first element ≥ value in an ascending array. */
-export function lowerBound(arr: Float64Array, value: number): number {
-  let lo = 0;
-  let hi = arr.length;
-  while (lo < hi) {
-    const mid = (lo + hi) >>> 1;
-    if (arr[mid] < value) lo = mid + 1;
-    else hi = mid;
-  }
-  return lo;
-}
-
-/** Index of the first element > value in an ascending array. */
-function upperBound(arr: Float64Array, value: number): number {
-  let lo = 0;
-  let hi = arr.length;
-  while (lo < hi) {
-    const mid = (lo + hi) >>> 1;
-    if (arr[mid] <= value) lo = mid + 1;
-    else hi = mid;
-  }
-  return lo;
-}
-
 /** Sheared curve value at x by linear interpolation (x inside the range; on a step, the lower side). */
 function sortedValueAt(p: SortedPrep, x: number): number {
-  let i = upperBound(p.x, x) - 1;
+  let i = bisectRight(p.x, x) - 1;
   if (i < 0) i = 0;
   if (i >= p.n - 1) return p.v[p.n - 1];
   const x0 = p.x[i];
@@ -54,8 +31,8 @@ function sortedValueAt(p: SortedPrep, x: number): number {
 
 /** Width in ln m of the curve segment holding the gap's start (x_j ≤ lo < x_j+1) and end (x_k < hi ≤ x_k+1). */
 function localSpacing(p: SortedPrep, lo: number, hi: number): number {
-  const j = upperBound(p.x, lo) - 1;
-  const k = lowerBound(p.x, hi) - 1;
+  const j = bisectRight(p.x, lo) - 1;
+  const k = bisectLeft(p.x, hi) - 1;
   const w = (i: number): number => (i >= 0 && i + 1 < p.n ? p.x[i + 1] - p.x[i] : Infinity);
   return Math.min(w(j), w(k));
 }
@@ -88,7 +65,7 @@ export function sortedRangeOver(p: SortedPrep, lo: number, hi: number): [number,
   const b = sortedValueAt(p, x1);
   let min = Math.min(a, b);
   let max = Math.max(a, b);
-  for (let j = lowerBound(p.x, x0); j < p.n && p.x[j] <= x1; j++) {
+  for (let j = bisectLeft(p.x, x0); j < p.n && p.x[j] <= x1; j++) {
     min = Math.min(min, p.v[j]);
     max = Math.max(max, p.v[j]);
   }

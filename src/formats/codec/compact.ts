@@ -1,6 +1,6 @@
 // Compact form of link formats: a table of fields per object (long name, short key, base value left out) and
 // the generic encode/decode through such tables; each link version defines its own frozen tables.
-import { projectsEqual } from "../../project/schema";
+import { isPlainObject, projectsEqual } from "../../project/json";
 import { goesTo, type Persistence, type PersistTarget } from "../../project/state-table";
 import type { Project } from "../../project/types";
 
@@ -34,10 +34,6 @@ export const always = { link: "always", file: true, storage: "meta" } as const s
 /** Thrown inside decoding for a compact object of the wrong shape; turned into a message by decodeLink. */
 export class ShapeError extends Error {}
 
-export function isRec(x: unknown): x is Rec {
-  return typeof x === "object" && x !== null && !Array.isArray(x);
-}
-
 export function encodeWith(codec: Codec, item: Rec, index: number, target: PersistTarget): Rec {
   const out: Rec = {};
   for (const f of codec.fields) {
@@ -45,7 +41,7 @@ export function encodeWith(codec: Codec, item: Rec, index: number, target: Persi
     if (rule && !goesTo(rule, target)) continue;
     const v = item[f.full];
     if (f.sub) {
-      const enc = encodeWith(f.sub, isRec(v) ? v : {}, index, target);
+      const enc = encodeWith(f.sub, isPlainObject(v) ? v : {}, index, target);
       if (Object.keys(enc).length > 0) out[f.short] = enc;
       continue;
     }
@@ -56,7 +52,7 @@ export function encodeWith(codec: Codec, item: Rec, index: number, target: Persi
 }
 
 export function decodeWith(codec: Codec, compact: unknown, index: number, what: string): Rec {
-  if (compact !== undefined && !isRec(compact)) throw new ShapeError(`${what} is not an object`);
+  if (compact !== undefined && !isPlainObject(compact)) throw new ShapeError(`${what} is not an object`);
   const c = compact ?? {};
   const out: Rec = {};
   for (const f of codec.fields) {

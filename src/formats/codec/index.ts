@@ -1,6 +1,7 @@
 // The project codec used by share links, SVG embedding and autosave: encodeLink / decodeLink and their limits.
 // Decoding never throws: it caps the unpacked size, validates through the shared restore step and explains failures.
-import { parseJsonSafely, restoreProject } from "../../project/schema";
+import { parseJsonSafely } from "../../project/json";
+import { restoreProject } from "../../project/restore";
 import type { Project } from "../../project/types";
 import { PROJECT_VERSION } from "../../project/types";
 import { base64Length, base64UrlDecode, base64UrlEncode } from "./base64url";

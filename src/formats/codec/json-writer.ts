@@ -1,17 +1,13 @@
 // Streaming JSON writer for the compact link object: the bytes JSON.stringify would give, with curve columns
 // written as digits straight into the buffer (no string or array per value), handed on in chunks.
-import { NumberColumn, POW10, deltaForm } from "./numbers";
+import { isPlainObject } from "../../project/json";
+import { NumberColumn, deltaForm } from "./numbers";
+import { POW10 } from "../pow10";
 
 // The compact JSON goes out in chunks of about this size (the deflater takes them as they come).
 export const CHUNK_BYTES = 1 << 20;
 
 const UTF8 = new TextEncoder();
-
-function isPlainObject(v: unknown): v is Record<string, unknown> {
-  if (typeof v !== "object" || v === null) return false;
-  const proto = Object.getPrototypeOf(v) as unknown;
-  return proto === Object.prototype || proto === null;
-}
 
 /**
  * Writes the compact object as UTF-8 JSON, byte for byte what JSON.stringify gives for it (with each

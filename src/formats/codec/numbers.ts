@@ -1,5 +1,7 @@
 // The number codec of curve data in links: exact decimal "delta" form (digit steps and exponent steps) or plain lists.
-import { ShapeError, isRec } from "./compact";
+import { isPlainObject } from "../../project/json";
+import { ShapeError } from "./compact";
+import { MAX_EXACT_POW10, POW10 } from "../pow10";
 
 // Curve data (massEv, gInvGeV): either a JSON number array, or, when every value has at most 15 significant
 // digits (data typed or digitised with few digits), the "decimal delta" form { e: [...], d: [...] } where
@@ -11,9 +13,6 @@ import { ShapeError, isRec } from "./compact";
 
 // Largest digit count whose integers stay exact in a double (10¹⁵ < 2⁵³ ≈ 9.007·10¹⁵).
 const MAX_DELTA_DIGITS = 15;
-// 10⁰ … 10²², each exact as a double (5²² < 2⁵³), parsed rather than computed so that no pow() rounding creeps in.
-export const POW10: readonly number[] = Array.from({ length: 23 }, (_, i) => Number(`1e${i}`));
-const MAX_EXACT_POW = 22;
 
 /**
  * Curve data on their way into the compact object: the JSON writer turns them straight into bytes (decimal
@@ -33,8 +32,8 @@ export function encodeNumbers(v: unknown): unknown {
  * integer (relative error ≤ 2⁻⁵² on integers below 10¹⁵, i.e. < 0.25).
  */
 function scaledRound(ax: number, s: number): number {
-  if (s >= 0) return s <= MAX_EXACT_POW ? Math.round(ax * POW10[s]) : NaN;
-  return s >= -MAX_EXACT_POW ? Math.round(ax / POW10[-s]) : NaN;
+  if (s >= 0) return s <= MAX_EXACT_POW10 ? Math.round(ax * POW10[s]) : NaN;
+  return s >= -MAX_EXACT_POW10 ? Math.round(ax / POW10[-s]) : NaN;
 }
 
 /**
@@ -103,15 +102,15 @@ export function deltaForm(a: Float64Array): { m: Float64Array; ex: Int32Array } 
 
 /** m × 10^e as the double nearest to it: one exactly rounded operation when 10^|e| is exact, else a parse. */
 function fromDecimal(m: number, e: number): number {
-  if (e >= 0 && e <= MAX_EXACT_POW) return m * POW10[e];
-  if (e < 0 && e >= -MAX_EXACT_POW) return m / POW10[-e];
+  if (e >= 0 && e <= MAX_EXACT_POW10) return m * POW10[e];
+  if (e < 0 && e >= -MAX_EXACT_POW10) return m / POW10[-e];
   return Number(`${m}e${e}`);
 }
 
 /** Inverse of {@link encodeNumbers}; a number array passes through (the schema checks its values). */
 export function decodeNumbers(v: unknown): unknown {
   if (Array.isArray(v)) return v;
-  if (!isRec(v) || !Array.isArray(v.e) || !Array.isArray(v.d) || v.e.length !== v.d.length) {
+  if (!isPlainObject(v) || !Array.isArray(v.e) || !Array.isArray(v.d) || v.e.length !== v.d.length) {
     throw new ShapeError("curve data are neither a list of numbers nor a decimal delta list");
   }
   const e = v.e as unknown[];

@@ -9,8 +9,9 @@ import {
   goesTo,
 } from "../../project/state-table";
 import type { PersistTarget } from "../../project/state-table";
+import { isPlainObject } from "../../project/json";
 import type { Project } from "../../project/types";
-import { ShapeError, always, decodeWith, encodeWith, isRec, type Codec, type CompactLayout, type Rec } from "./compact";
+import { ShapeError, always, decodeWith, encodeWith, type Codec, type CompactLayout, type Rec } from "./compact";
 import { decodeNumbers, encodeNumbers } from "./numbers";
 
 // Link format v1 (frozen):
@@ -159,7 +160,7 @@ function toCompactWith(k: LayoutCodecs, project: Project, includeCurves: boolean
 }
 
 function fromCompactWith(k: LayoutCodecs, version: number, compact: unknown): { project: Rec; omitted: number } {
-  if (!isRec(compact)) throw new ShapeError("the content is not an object");
+  if (!isPlainObject(compact)) throw new ShapeError("the content is not an object");
   const list = (key: string, what: string): unknown[] => {
     const v = Object.hasOwn(compact, key) ? compact[key] : [];
     if (!Array.isArray(v)) throw new ShapeError(`the ${what} are not a list`);

@@ -92,6 +92,10 @@ export function detectLayout(lines: SniffLine[], o: CurveParseOptions): Layout |
   if ("code" in mass) return mass;
   const coupling = chooseCouplingUnit(o, units[gCol] ?? null, gCol, messages);
   if ("code" in coupling) return coupling;
+  const unknown =
+    (mass.source === "default" && unknownUnit(header?.[massCol], massCol, "mass")) ||
+    (coupling.source === "default" && unknownUnit(header?.[gCol], gCol, "coupling"));
+  if (unknown) return unknown;
   return {
     delim,
     comma,
@@ -119,20 +123,15 @@ function chooseDialect(
     const d = DELIM_NAMES[o.delimiter] ?? DELIM_NAMES[o.delimiter.toLowerCase()];
     if (d === undefined) return badOptions(`unknown delimiter "${o.delimiter}" (use comma, semicolon, tab or spaces)`);
     const comma =
-      o.decimalComma ??
-      (d === 59
-        ? true
-        : d === 44
-          ? false
-          : score(sample, d, true, probeM, probeG) > score(sample, d, false, probeM, probeG));
+      o.decimalComma ?? (d !== 44 && score(sample, d, true, probeM, probeG) > score(sample, d, false, probeM, probeG));
     return { delim: d, comma };
   }
   const marks = o.decimalComma === undefined ? [false, true] : [o.decimalComma];
   const candidates: [number, boolean][] = [];
   for (const d of [44, 59, 9, WS]) {
     for (const m of marks) {
-      // Unless told otherwise, a comma delimiter goes with decimal points and a semicolon with commas.
-      if (o.decimalComma === undefined && ((d === 44 && m) || (d === 59 && !m))) continue;
+      // Unless told otherwise, a comma delimiter goes with decimal points (a decimal comma would need quotes).
+      if (o.decimalComma === undefined && d === 44 && m) continue;
       candidates.push([d, m]);
     }
   }
@@ -153,12 +152,12 @@ function chooseDialect(
       const k = consistentFields(sample, d);
       if (k > bestCount) {
         bestCount = k;
-        best = [d, d === 59];
+        best = [d, false];
       }
     }
   }
   const [delim, comma] = best;
-  return { delim, comma: o.decimalComma === undefined && delim === 59 ? true : comma };
+  return { delim, comma };
 }
 
 /** Columns: the user's, else the ones the header units point at, else 1 and 2. */
@@ -262,6 +261,25 @@ function chooseCouplingUnit(
     return badOptions("the coupling is a multiple of a model line: choose the model line's E/N");
   }
   return { unit, source, eOverN };
+}
+
+/**
+ * A header field that names, in brackets, something that reads like a unit of this kind (ends in eV or Hz;
+ * holds eV for a coupling; or holds a character that could not be decoded) but is no unit the import knows:
+ * reading such a column in a default unit would be a silent guess, so the file stops until one is chosen.
+ */
+function unknownUnit(field: string | undefined, col: number, kind: "mass" | "coupling"): ImportProblem | null {
+  if (field === undefined) return null;
+  for (const m of field.matchAll(/[[(]([^\])]*)[\])]/g)) {
+    const t = m[1].trim();
+    if (!(t.includes("\ufffd") || (kind === "mass" ? /(?:ev|hz)$/i : /ev/i).test(t))) continue;
+    const why = t.includes("\ufffd") ? " (a character could not be decoded: is the file in another encoding?)" : "";
+    return {
+      code: "unknown-unit",
+      message: `the header of column ${col + 1} ("${field}") names the unit "${t}", which the import does not know${why}; choose the ${kind} unit`,
+    };
+  }
+  return null;
 }
 
 /** How many sample lines read as numbers in both columns with this delimiter and decimal mark. */

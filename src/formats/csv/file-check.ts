@@ -5,9 +5,11 @@ import type { ImportProblem } from "./types";
 /** Largest file the import accepts: 200 MB (200 × 2²⁰ bytes), about 8 million rows of two numbers. */
 export const MAX_IMPORT_BYTES = 200 * 1024 * 1024;
 
+/** The encodings the import reads: UTF-16 by its byte order mark, UTF-8 when valid, else Windows-1252. */
+export type ImportEncoding = "utf-8" | "utf-16le" | "utf-16be" | "windows-1252";
+
 /** What the importer learns from a file's name, size and first bytes before reading it. */
-export type FileCheck =
-  { ok: true; encoding: "utf-8" | "utf-16le" | "utf-16be" } | { ok: false; problem: ImportProblem };
+export type FileCheck = { ok: true; encoding: ImportEncoding } | { ok: false; problem: ImportProblem };
 
 const MAGIC: [number[], string][] = [
   [
@@ -23,7 +25,7 @@ const MAGIC: [number[], string][] = [
 
 /**
  * Checks before reading a file: size cap ({@link MAX_IMPORT_BYTES}), empty file, known binary formats, NUL
- * bytes or mostly non-text in the first bytes (pass at least the first 4 KiB). Detects a UTF-16 BOM.
+ * bytes or mostly non-text in the first bytes (pass at least the first 4 KiB); the encoding (see ImportEncoding).
  */
 export function checkImportFile(file: { name?: string; size: number; firstBytes: Uint8Array }): FileCheck {
   if (file.size === 0) return { ok: false, problem: { code: "empty", message: "the file is empty" } };
@@ -56,9 +58,37 @@ export function checkImportFile(file: { name?: string; size: number; firstBytes:
     }
     if ((x & 0x80) === 0) break;
   }
-  const text = new TextDecoder("utf-8").decode(b.subarray(0, end));
-  if (looksBinary(text)) return { ok: false, problem: binaryProblem() };
-  return { ok: true, encoding: "utf-8" };
+  let encoding: ImportEncoding = "utf-8";
+  let text: string;
+  try {
+    text = new TextDecoder("utf-8", { fatal: true }).decode(b.subarray(0, end));
+  } catch {
+    // Not UTF-8: Windows-1252, the single-byte encoding spreadsheets on most desktops write (a superset of
+    // Latin-1 for printable characters; the WHATWG Encoding Standard maps the label "latin1" to it).
+    encoding = "windows-1252";
+    text = new TextDecoder(encoding).decode(b);
+  }
+  // A Latin-1 table is mostly ASCII (digits, delimiters): mostly high bytes is binary data, not text.
+  if (looksBinary(text) || (encoding === "windows-1252" && nonAsciiShare(text) > 0.1)) {
+    return { ok: false, problem: binaryProblem() };
+  }
+  return { ok: true, encoding };
+}
+
+/** Decoded text of a whole file held in memory (the command line's path), or why it cannot be read. */
+export function decodeImportBytes(
+  bytes: Uint8Array,
+): { ok: true; text: string; encoding: ImportEncoding } | { ok: false; problem: ImportProblem } {
+  const check = checkImportFile({ size: bytes.length, firstBytes: bytes.subarray(0, 4096) });
+  if (!check.ok) return check;
+  if (check.encoding === "utf-8") {
+    try {
+      return { ok: true, text: new TextDecoder("utf-8", { fatal: true }).decode(bytes), encoding: "utf-8" };
+    } catch {
+      return { ok: true, text: new TextDecoder("windows-1252").decode(bytes), encoding: "windows-1252" };
+    }
+  }
+  return { ok: true, text: new TextDecoder(check.encoding).decode(bytes), encoding: check.encoding };
 }
 
 export function binaryProblem(): ImportProblem {
@@ -75,4 +105,10 @@ export function looksBinary(sample: string): boolean {
     if ((c < 32 && c !== 9 && c !== 10 && c !== 12 && c !== 13) || c === 0xfffd) bad++;
   }
   return n > 0 && bad / n > 0.1;
+}
+
+function nonAsciiShare(text: string): number {
+  let n = 0;
+  for (let i = 0; i < text.length; i++) if (text.charCodeAt(i) > 127) n++;
+  return text.length > 0 ? n / text.length : 0;
 }

@@ -1,10 +1,7 @@
 // Reading numbers in place from the text, correctly rounded, with the unit's power of ten folded into the
 // exponent, so the import allocates nothing per row (Clinger's fast path, then the engine's Number()).
+import { MAX_EXACT_POW10, POW10 } from "../pow10";
 
-const POW10 = [
-  1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15, 1e16, 1e17, 1e18, 1e19, 1e20,
-  1e21, 1e22,
-];
 export const ERR_NONE = 0;
 const ERR_EMPTY = 1;
 const ERR_NAN = 2;
@@ -15,7 +12,7 @@ export const read = { err: ERR_NONE, end: 0 };
 /**
  * Reads a number starting at t[s] and stopping at the first character that cannot continue it (read.end),
  * times 10^shift, correctly rounded; NaN with `read.err` set when no number starts there. Accepts a leading
- * + or − (also U+2212) and `,` as the decimal point when `comma`. The shift is applied to the decimal
+ * + or − (also U+2212); the decimal point is `,` when `comma`, else `.` (never both: a file has one mark). The shift is applied to the decimal
  * exponent, so `1.5` μeV becomes exactly the double nearest 1.5e-6. Callers check what follows read.end.
  */
 export function readNumber(t: string, s: number, e: number, shift: number, comma: boolean): number {
@@ -52,7 +49,7 @@ export function readNumber(t: string, s: number, e: number, shift: number, comma
       } else {
         long = true;
       }
-    } else if ((c === 46 || (c === 44 && comma)) && !point) {
+    } else if (c === (comma ? 44 : 46) && !point) {
       point = true;
     } else {
       hasExp = c === 101 || c === 69;
@@ -92,8 +89,8 @@ export function readNumber(t: string, s: number, e: number, shift: number, comma
     const total = exp10 + exp + shift;
     // Clinger's fast path: an integer below 10¹⁵ and 10^|total| ≤ 10²² are exact doubles, so one IEEE
     // multiplication or division gives the correctly rounded result.
-    if (total >= 0 && total <= 22) return neg ? -(mant * POW10[total]) : mant * POW10[total];
-    if (total < 0 && total >= -22) return neg ? -(mant / POW10[-total]) : mant / POW10[-total];
+    if (total >= 0 && total <= MAX_EXACT_POW10) return neg ? -(mant * POW10[total]) : mant * POW10[total];
+    if (total < 0 && total >= -MAX_EXACT_POW10) return neg ? -(mant / POW10[-total]) : mant / POW10[-total];
   }
   let str = t.slice(s, mantEnd);
   if (comma) str = str.replace(",", ".");

@@ -1,6 +1,6 @@
 // Reading a string, bytes or a Blob/File in slices (in a worker, or on the main thread when no worker is
 // available), with progress, cancellation and the file checks first.
-import { checkImportFile } from "./file-check";
+import { binaryProblem, checkImportFile, type ImportEncoding } from "./file-check";
 import { createCurveParser, parseCurveText } from "./parser";
 import {
   formatProblem,
@@ -57,7 +57,8 @@ function turn(): Promise<void> {
 /**
  * Parses a string, bytes or a Blob/File in slices, reporting progress and yielding to the event loop so the
  * caller's thread stays responsive; rejects with {@link ImportCancelled} when `signal` aborts. Files go
- * through {@link checkImportFile} first (size cap, binary data, UTF-16 BOM).
+ * through {@link checkImportFile} first (size cap, binary data, encoding); bytes that are not valid UTF-8
+ * further on are read again as Windows-1252.
  */
 export async function parseCurveSource(
   source: string | ArrayBuffer | Uint8Array | Blob,
@@ -105,26 +106,32 @@ export async function parseCurveSource(
         : new Uint8Array(source, 0, Math.min(4096, source.byteLength));
   const check = checkImportFile({ name: opts.fileName, size, firstBytes: headBytes });
   if (!check.ok) return emptyResult(opts, check.problem);
-  const decoder = new TextDecoder(check.encoding);
-  const parser = createCurveParser({ sizeHint: size, ...opts });
+  const all = source instanceof Blob ? null : source instanceof Uint8Array ? source : new Uint8Array(source);
+  // 1 MB slices of a Blob: fewer round trips to the blob store than a stream's 64 KB chunks, still a smooth
+  // progress bar; bytes in memory in slices of about sliceChars characters.
+  const slice = source instanceof Blob ? (hooks.blobSliceBytes ?? 1 << 20) : (hooks.sliceChars ?? 1 << 20) * 2;
+  const bytesAt = async (i: number) =>
+    all
+      ? all.subarray(i, i + slice)
+      : new Uint8Array(await (source as Blob).slice(i, Math.min(size, i + slice)).arrayBuffer());
 
-  if (source instanceof Blob) {
-    // 1 MB slices: fewer round trips to the blob store than a stream's 64 KB chunks, still a smooth progress bar.
-    const slice = hooks.blobSliceBytes ?? 1 << 20;
-    for (let i = 0; i < size; i += slice) {
-      const bytes = new Uint8Array(await source.slice(i, Math.min(size, i + slice)).arrayBuffer());
-      if (signal?.aborted) throw new ImportCancelled();
-      parser.push(decoder.decode(bytes, { stream: true }));
-      await step(parser, Math.min(1, (i + slice) / size));
+  // Null when the bytes turn out not to be valid UTF-8 further on: the caller reads again as Windows-1252.
+  const readAs = async (encoding: ImportEncoding): Promise<CurveParseResult | null> => {
+    const decoder = new TextDecoder(encoding, { fatal: encoding === "utf-8" });
+    const parser = createCurveParser({ sizeHint: size, ...opts, encoding });
+    try {
+      for (let i = 0; i < size; i += slice) {
+        const bytes = await bytesAt(i);
+        if (signal?.aborted) throw new ImportCancelled();
+        parser.push(decoder.decode(bytes, { stream: true }));
+        await step(parser, Math.min(1, (i + slice) / size));
+      }
+      parser.push(decoder.decode());
+    } catch (e) {
+      if (e instanceof TypeError && encoding === "utf-8") return null;
+      throw e;
     }
-  } else {
-    const bytes = source instanceof Uint8Array ? source : new Uint8Array(source);
-    const slice = (hooks.sliceChars ?? 1 << 20) * 2;
-    for (let i = 0; i < bytes.length; i += slice) {
-      parser.push(decoder.decode(bytes.subarray(i, i + slice), { stream: true }));
-      await step(parser, Math.min(1, (i + slice) / bytes.length));
-    }
-  }
-  parser.push(decoder.decode());
-  return done(parser);
+    return done(parser);
+  };
+  return (await readAs(check.encoding)) ?? (await readAs("windows-1252")) ?? emptyResult(opts, binaryProblem());
 }

@@ -13,7 +13,7 @@ export interface CurveParseOptions {
   couplingUnit?: string;
   /** `,` `;` tab or ` ` (runs of spaces and tabs); also the names comma, semicolon, tab, space, whitespace. @default auto-detected */
   delimiter?: string;
-  /** Accept `,` as the decimal point. @default true for `;`, detected for tab and spaces, false for `,` */
+  /** `,` is the decimal point (and `.` is not). @default detected for `;`, tab and spaces; false for `,` */
   decimalComma?: boolean;
   /** Whether the first non-comment line names the columns. @default detected (a line with letters that is not numeric) */
   header?: boolean;
@@ -35,6 +35,8 @@ export interface CurveParseOptions {
   maxDataRows?: number;
   /** Keep at most this many rejected rows in the list (rejectedCount stays exact). @default 10000 */
   maxRejected?: number;
+  /** The encoding the text was decoded from (set by parseCurveSource and decodeImportBytes); a warning names it when it is not UTF-8 or UTF-16. */
+  encoding?: string;
   /** Expected number of characters, to size the arrays once. */
   sizeHint?: number;
 }
@@ -47,13 +49,26 @@ export interface RejectedRow {
   reason: string;
 }
 
-type ImportProblemCode = "empty" | "no-data" | "single-column" | "binary" | "too-large" | "bad-options";
+type ImportProblemCode =
+  | "empty"
+  | "no-data"
+  | "single-column"
+  | "mixed-decimal"
+  | "binary"
+  | "too-large"
+  | "bad-options"
+  | "unknown-unit"
+  | "column-count"
+  | "mixed-delimiters";
 
 /** Why a file gave no curve at all. */
 export interface ImportProblem {
   code: ImportProblemCode;
   /** A plain sentence for the user. */
   message: string;
+  /** 1-based line and column the problem was found at, for problems of one row. */
+  row?: number;
+  column?: number;
 }
 
 export interface ImportMessage {
@@ -145,7 +160,7 @@ export function formatRejection(fileName: string, r: RejectedRow): string {
 
 /** `file: message` for a problem that stopped the import of a whole file. */
 export function formatProblem(fileName: string, p: ImportProblem): string {
-  return `${fileName}: ${p.message}`;
+  return `${fileName}${p.row === undefined ? "" : `:${p.row}:${p.column ?? 1}`}: ${p.message}`;
 }
 
 /** Human name of a delimiter for the import step. */

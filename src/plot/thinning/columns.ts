@@ -1,35 +1,12 @@
 // Column thinning of curves sorted by mass: per pixel column the first, lowest, highest and last point
 // (at most 4 per column, no spike lost), found through the pyramid in O(columns · log n).
 
+import { bisectLeft, bisectRight } from "d3-array";
 import { levelValues, rangeMinMax, type MinMaxIndex, type Pyramid } from "./pyramid";
 import { ensureBuffers, ensureIdx, scratch } from "./scratch";
 
 // The answer of rangeMinMax, reused column after column.
 const extremes: MinMaxIndex = { min: 0, max: 0 };
-/** First index i in [0, n) with a[i] ≥ x (n when none). */
-export function lowerBound(a: Float64Array, x: number): number {
-  let lo = 0;
-  let hi = a.length;
-  while (lo < hi) {
-    const mid = (lo + hi) >>> 1;
-    if (a[mid] < x) lo = mid + 1;
-    else hi = mid;
-  }
-  return lo;
-}
-
-/** First index i in [0, n) with a[i] > x (n when none). */
-export function upperBound(a: Float64Array, x: number): number {
-  let lo = 0;
-  let hi = a.length;
-  while (lo < hi) {
-    const mid = (lo + hi) >>> 1;
-    if (a[mid] <= x) lo = mid + 1;
-    else hi = mid;
-  }
-  return lo;
-}
-
 /**
  * Pixel column of a log10 mass: floor((lm − colL0)·colK), where colK = px per decade × resolution. The
  * thinning and its tests both use this exact expression, so there is no disagreement at column edges.
@@ -85,8 +62,8 @@ export function thinColumnsInto(
 ): number {
   const n = lm.length;
   if (n === 0) return 0;
-  const start = Math.max(0, lowerBound(lm, p.lmLo) - 1);
-  const end = Math.min(n, upperBound(lm, p.lmHi) + 1);
+  const start = Math.max(0, bisectLeft(lm, p.lmLo) - 1);
+  const end = Math.min(n, bisectRight(lm, p.lmHi) + 1);
   const { colL0, colK } = p;
   if (pyr && pyr.levels.length) levelValues(pyr, v);
   const q = extremes;

@@ -9,7 +9,7 @@ export {
   type ViewArrays,
 } from "./prepared";
 export { buildPyramid, type Pyramid } from "./pyramid";
-export { thinColumns, pixelColumn, lowerBound, upperBound, type ColumnParams } from "./columns";
+export { thinColumns, pixelColumn, type ColumnParams } from "./columns";
 export { dpImportance, simplifyIndices } from "./douglas-peucker";
 export { thinRunsLog } from "./runs";
 export { clipToRect, CULL_MARGIN_PX, type Polyline, type Rect } from "./clip";

@@ -1,5 +1,6 @@
 // The public thinning step: a prepared curve to the pixels of one frame (column thinning for sorted curves,
 // Douglas–Peucker or run thinning for the rest, then culling and clipping).
+import { bisector, descending } from "d3-array";
 import {
   allInside,
   clipHalf,
@@ -78,17 +79,8 @@ function sortedPixels(prep: PreparedCurve, closed: boolean, p: PixelParams, res:
   return thinColumnsInto(prep.lm, va.v, va.pyramid, { lmLo: colL0, lmHi: (pl.x + pl.w - p.ax) / p.bx, colL0, colK }, p);
 }
 
-/** Number of leading entries of a decreasing array above t (the Douglas–Peucker selection at tolerance t). */
-function countAbove(desc: Float64Array, t: number): number {
-  let lo = 0;
-  let hi = desc.length;
-  while (lo < hi) {
-    const mid = (lo + hi) >>> 1;
-    if (desc[mid] > t) lo = mid + 1;
-    else hi = mid;
-  }
-  return lo;
-}
+// Over a decreasing array, the first index whose value is ≤ t: the count of entries above t.
+const countAbove = bisector<number, number>(descending).left;
 
 /** An unsorted curve's pixels (Douglas–Peucker or run thinning, whichever keeps fewer) in scratch.x/y. */
 function unsortedPixels(prep: PreparedCurve, closed: boolean, p: PixelParams, res: number, cullRect: Rect): number {

@@ -1,6 +1,7 @@
 // Which curves a point (m_a, g_aγγ) lies in: below an exclusion or projection curve interpolated linearly in
 // log-log space at that mass, or inside a closed region. Uses the plot core's cached log10 arrays (by data
 // array), so the first hover after a big import reuses what the import worker prepared for the figure.
+import { bisectRight } from "d3-array";
 import type { Curve } from "../../project/types";
 import { prepareCurve, type PreparedCurve } from "../../plot/thinning/index";
 import { rescaleFactor } from "../../plot/physics-settings";
@@ -20,13 +21,9 @@ export function curveGAt(c: Pick<Curve, "massEv" | "gInvGeV" | "role" | "rescale
   if (n === 0 || !(massEv > 0)) return null;
   const x = Math.log10(massEv);
   if (x < lm[0] || x > lm[n - 1]) return null;
-  let lo = 0;
-  let hi = n - 1;
-  while (hi - lo > 1) {
-    const mid = (lo + hi) >> 1;
-    if (lm[mid] <= x) lo = mid;
-    else hi = mid;
-  }
+  // The segment [lo, hi] holding x: lo the last point at or left of x (hi = lo for a single point).
+  const hi = Math.min(n - 1, bisectRight(lm, x));
+  const lo = Math.max(0, hi - 1);
   const t = lm[hi] === lm[lo] ? 0 : (x - lm[lo]) / (lm[hi] - lm[lo]);
   // At a vertical step (equal masses) take the lower value: the stronger limit at that mass.
   const y = lm[hi] === lm[lo] ? Math.min(lg[lo], lg[hi]) : lg[lo] + t * (lg[hi] - lg[lo]);

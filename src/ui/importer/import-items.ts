@@ -122,11 +122,14 @@ export function parseOptsOf(
 
 /**
  * The settings after a parse: detected values fill the `null` ones (so the menus show what was used), and a
- * citation written in the file (`# citation:`, as the CSV export writes it) fills an empty citation.
+ * citation written in the file (`# citation:`, as the CSV export writes it) fills an empty citation; a
+ * `# label:` comment sets the label unless the user edited it.
  */
-export function settingsAfterParse(s: ImportSettings, r: CurveParseResult): ImportSettings {
+export function settingsAfterParse(s: ImportSettings, r: CurveParseResult, labelEdited = false): ImportSettings {
   return {
     ...s,
+    // A `# label:` comment names the curve, as on the command line; a label the user typed wins.
+    label: !labelEdited && r.label ? r.label : s.label,
     massUnit: s.massUnit ?? r.massUnit,
     couplingUnit: s.couplingUnit ?? r.couplingUnit,
     modelEOverN: s.couplingUnit === null && r.modelEOverN !== null ? String(r.modelEOverN) : s.modelEOverN,

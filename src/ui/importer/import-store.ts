@@ -84,7 +84,7 @@ export const useImport = create<ImportState>()((set, get) => {
           status: "ready",
           progress: 1,
           result,
-          settings: settingsAfterParse(it.settings, result),
+          settings: settingsAfterParse(it.settings, result, it.labelEdited),
           problem: problemOf(it.fileName, result),
         }));
       },

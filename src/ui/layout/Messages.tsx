@@ -31,10 +31,10 @@ function MessageItem({ message }: { message: Message }) {
 export function Messages() {
   const messages = useAxband(selectMessages);
   return (
-    <div className="messages" aria-label="Messages">
+    <section className="messages" aria-label="Messages">
       {messages.map((m) => (
         <MessageItem key={m.id} message={m} />
       ))}
-    </div>
+    </section>
   );
 }

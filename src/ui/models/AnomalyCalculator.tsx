@@ -1,21 +1,46 @@
 // The anomaly calculator: an editable table of Weyl fermions with E, N, E/N and N_DW shown live as exact
 // fractions; the anomaly is computed once per edit, and the last valid result stays visible while a field is bad.
-import { useId, useMemo, useReducer, useState } from "react";
-import { tryAnomaly, type AnomalyResult } from "../../physics/anomaly";
+import { useEffect, useId, useMemo, useReducer, useState } from "react";
+import { tryAnomaly, type AnomalyFieldError, type AnomalyResult } from "../../physics/anomaly";
 import { toFractionString } from "../../physics/rational";
 import { useAxband } from "../store";
 import { minus } from "../format";
 import { useCatalogueRows } from "./Catalogue";
-import { calcReducer, fermionFromDraft, hasError, initialCalcState, type CalcAction } from "./calculator-state";
+import {
+  betaProblem,
+  calcReducer,
+  fermionFromDraft,
+  hasError,
+  scalarFromDraft,
+  type CalcAction,
+  type CalcState,
+} from "./calculator-state";
+import { loadDraft, saveDraft, useCalculatorRequest } from "./calculator-draft";
+import { LagrangianPanel } from "./LagrangianPanel";
+import { termLines } from "./lagrangian";
 import { FermionRow } from "./FermionRow";
 import { CalculatorResult, frac } from "./CalculatorResult";
+import { isScanState } from "./calculator-scan";
+import { CalculatorScan } from "./CalculatorScan";
 
-function CatalogueLoad({ dispatch }: { dispatch: (a: CalcAction) => void }) {
+function CatalogueLoad({ dispatch, dirty }: { dispatch: (a: CalcAction) => void; dirty: boolean }) {
   const catalogueRows = useCatalogueRows();
   const [loadId, setLoadId] = useState(catalogueRows[0]?.entry.id ?? "");
   const load = () => {
     const row = catalogueRows.find((r) => r.entry.id === loadId);
-    if (row) dispatch({ type: "load", fermions: row.entry.fermions, scalarCharge: String(row.entry.scalarCharge) });
+    if (!row) return;
+    if (dirty && !window.confirm(`Replace the calculator's current model with "${row.entry.label}"?`)) return;
+    const { scalars, terms, forbidden, normalize } = row.entry.lagrangian;
+    dispatch({
+      type: "load",
+      fermions: row.entry.fermions,
+      scalarCharge: String(row.entry.scalarCharge),
+      name: row.entry.label,
+      scalars,
+      terms,
+      forbidden,
+      normalize,
+    });
   };
   return (
     <div className="calc-load inline-row">
@@ -43,12 +68,14 @@ function TableHead() {
         <th scope="col">Name</th>
         <th scope="col">SU(3)_c</th>
         <th scope="col">
-          Electroweak <span className="th-detail">(SU(2) dim, Y · SU(3)_L rep, X, b · charges)</span>
+          Electroweak <span className="th-detail">(SU(2) dim, Y · SU(3)_L rep, X, β · charges)</span>
         </th>
         <th scope="col" title="Chirality of the Weyl field">
           L/R
         </th>
-        <th scope="col">PQ charge</th>
+        <th scope="col" title="Peccei–Quinn charge 𝒳 (distinct from the U(1)_X charge X of SU(3)_L models)">
+          PQ charge 𝒳
+        </th>
         <th scope="col">Copies</th>
         <th scope="col">
           <span className="visually-hidden">Remove</span>
@@ -58,41 +85,103 @@ function TableHead() {
   );
 }
 
+/** β problems of the rows, reported as the calculator's own errors would be (they replace its "b" errors). */
+function withBetaErrors(state: CalcState, errors: AnomalyFieldError[]): AnomalyFieldError[] {
+  const beta: AnomalyFieldError[] = [];
+  state.rows.forEach((r, i) => {
+    const p = betaProblem(r);
+    if (p)
+      beta.push({
+        index: i,
+        field: "ew.b",
+        message: `fermion ${i + 1}${r.name.trim() ? ` (${r.name.trim()})` : ""}: ${p}`,
+      });
+  });
+  return [...errors.filter((e) => !(e.field === "ew.b" && beta.some((b) => b.index === e.index))), ...beta];
+}
+
+/** Take a model the list asked to reopen: its fields and terms fill the calculator. */
+function useEditRequest(dispatch: (a: CalcAction) => void, dirty: boolean) {
+  const edit = useCalculatorRequest((s) => s.edit);
+  const takeEdit = useCalculatorRequest((s) => s.takeEdit);
+  useEffect(() => {
+    if (!edit || edit.source.kind !== "calculator") return;
+    takeEdit();
+    if (dirty && !window.confirm(`Replace the calculator's current model with "${edit.label}"?`)) return;
+    const src = edit.source;
+    // The label carries ", E/N = …" (added on save); the name is what precedes it.
+    dispatch({ type: "load", ...src, name: edit.label.replace(/, E\/N = [^,]*$/, ""), editingId: edit.id });
+  }, [edit, takeEdit, dispatch, dirty]);
+}
+
 export function AnomalyCalculator() {
-  const [state, dispatch] = useReducer(calcReducer, undefined, initialCalcState);
+  const [state, dispatch] = useReducer(calcReducer, undefined, loadDraft);
+  useEffect(() => saveDraft(state), [state]);
+  useEditRequest(dispatch, state.dirty);
   const addModel = useAxband((s) => s.addModel);
+  const updateModel = useAxband((s) => s.updateModel);
+  const models = useAxband((s) => s.project.models);
   // The one computation per edit, shared by the result, the breakdown and "Add as model".
-  const current = useMemo(
+  const computed = useMemo(
     () => tryAnomaly(state.rows.map(fermionFromDraft), { scalarCharge: state.scalarCharge }),
     [state.rows, state.scalarCharge],
   );
+  const betaErrors = useMemo(() => withBetaErrors(state, computed.ok ? [] : computed.errors), [state, computed]);
+  const current = betaErrors.length > 0 ? { ok: false as const, errors: betaErrors } : computed;
   // The last valid result, adjusted during render (React's pattern for state derived from a previous render).
   const [lastGood, setLastGood] = useState<AnomalyResult | null>(null);
   if (current.ok && current.result !== lastGood) setLastGood(current.result);
-  const errors = current.ok ? [] : current.errors;
+  const scanning = isScanState(state);
+  // In scan mode the lists are read by the scan, which reports its own errors.
+  const errors = current.ok || scanning ? [] : current.errors;
   const shown = current.ok ? current.result : lastGood;
   const stale = !current.ok && shown !== null;
   const eOverN = current.ok ? current.result.eOverN : null;
   const scalarId = useId();
+  const nameId = useId();
+  const editing = state.editingId !== null && models.some((m) => m.id === state.editingId);
 
   const addAsModel = () => {
     if (!eOverN) return;
     const en = toFractionString(eOverN);
-    addModel({
-      eOverNMin: en,
-      eOverNMax: en,
-      label: `Calculator model, E/N = ${minus(en)}`,
-      source: {
-        kind: "calculator",
-        fermions: state.rows.map(fermionFromDraft),
-        scalarCharge: state.scalarCharge.trim(),
-      },
-    });
+    const terms = termLines(state.terms).map((t) => t.text);
+    const source = {
+      kind: "calculator" as const,
+      fermions: state.rows.map(fermionFromDraft),
+      scalarCharge: state.scalarCharge.trim(),
+      ...(terms.length > 0
+        ? {
+            scalars: state.scalars.map(scalarFromDraft),
+            terms,
+            forbidden: termLines(state.forbidden).map((t) => t.text),
+            normalize: state.normalize,
+          }
+        : {}),
+    };
+    const label = `${state.name.trim() || "Calculator model"}, E/N = ${minus(en)}`;
+    if (editing && state.editingId) {
+      updateModel(state.editingId, { eOverNMin: en, eOverNMax: en, label, source });
+      dispatch({ type: "saved", editingId: state.editingId });
+    } else {
+      dispatch({ type: "saved", editingId: addModel({ eOverNMin: en, eOverNMax: en, label, source }) });
+    }
   };
 
   return (
     <div className="calculator" data-testid="anomaly-calculator">
-      <CatalogueLoad dispatch={dispatch} />
+      <CatalogueLoad dispatch={dispatch} dirty={state.dirty} />
+      <div className="inline-row">
+        <label className="inline-label" htmlFor={nameId}>
+          Model name
+        </label>
+        <input
+          id={nameId}
+          type="text"
+          value={state.name}
+          placeholder="Calculator model"
+          onChange={(e) => dispatch({ type: "text", field: "name", value: e.target.value })}
+        />
+      </div>
       <div className="table-scroll">
         <table className="fermion-table">
           <TableHead />
@@ -115,7 +204,7 @@ export function AnomalyCalculator() {
           + Fermion
         </button>
         <label className="inline-label" htmlFor={scalarId}>
-          Scalar PQ charge X_S
+          PQ charge 𝒳_S of the scalar that sets f_a
         </label>
         <input
           id={scalarId}
@@ -126,6 +215,11 @@ export function AnomalyCalculator() {
           onChange={(e) => dispatch({ type: "scalar", value: e.target.value })}
         />
       </div>
+      <p className="note">
+        A PQ charge, copies or X_S may be a list or range ({"{-1, 0, 1}"}, {"1..3"}): the calculator then scans every
+        combination.
+      </p>
+      {scanning ? <CalculatorScan state={state} /> : null}
       {errors.length > 0 ? (
         <ul className="field-errors" aria-live="polite" data-testid="calc-errors">
           {errors.map((e, k) => (
@@ -133,9 +227,12 @@ export function AnomalyCalculator() {
           ))}
         </ul>
       ) : null}
+      <LagrangianPanel state={state} dispatch={dispatch} />
       <CalculatorResult shown={shown} stale={stale} />
       <button type="button" className="primary" onClick={addAsModel} disabled={!eOverN} data-testid="calc-add-model">
-        {eOverN ? `Add E/N = ${frac(eOverN)} as model` : "Add as model"}
+        {eOverN
+          ? `${editing ? "Update model with" : "Add"} E/N = ${frac(eOverN)}${editing ? "" : " as model"}`
+          : "Add as model"}
       </button>
     </div>
   );

@@ -17,8 +17,15 @@ function Breakdown({ result }: { result: AnomalyResult }) {
             <th scope="col">d(R)</th>
             <th scope="col">T(R)</th>
             <th scope="col">Q</th>
-            <th scope="col">X (as L)</th>
-            <th scope="col">×</th>
+            <th scope="col" title="Number of electroweak components">
+              n_w
+            </th>
+            <th scope="col" title="PQ charge 𝒳 of the field as a left-handed field">
+              𝒳 (as L)
+            </th>
+            <th scope="col" title="Copies">
+              ×
+            </th>
             <th scope="col">ΔE</th>
             <th scope="col">ΔN</th>
           </tr>
@@ -30,6 +37,7 @@ function Breakdown({ result }: { result: AnomalyResult }) {
               <td>{c.colourDim}</td>
               <td>{frac(c.colourIndex)}</td>
               <td>{c.charges.map(frac).join(", ")}</td>
+              <td>{c.charges.length}</td>
               <td>{frac(c.pqLeft)}</td>
               <td>{c.copies}</td>
               <td>{frac(c.dE)}</td>

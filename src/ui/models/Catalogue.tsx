@@ -106,6 +106,23 @@ export function Catalogue() {
                           <li key={i}>{fermionSummary(f)}</li>
                         ))}
                       </ul>
+                      <p className="catalogue-terms">
+                        Charges follow from{" "}
+                        {r.entry.lagrangian.terms.map((t, k) => (
+                          <span key={k}>
+                            {k > 0 ? ", " : null}
+                            <code>{t}</code>
+                          </span>
+                        ))}{" "}
+                        with {r.entry.lagrangian.normalize} normalised to 1; forbidden:{" "}
+                        {r.entry.lagrangian.forbidden.map((t, k) => (
+                          <span key={k}>
+                            {k > 0 ? ", " : null}
+                            <code>{t}</code>
+                          </span>
+                        ))}
+                        .
+                      </p>
                       <p>
                         X_S = {minus(String(r.entry.scalarCharge))}, N_DW = {r.domainWall ? minus(r.domainWall) : "—"}
                       </p>

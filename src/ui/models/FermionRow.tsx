@@ -3,14 +3,16 @@
 import { useState } from "react";
 import type { AnomalyFieldError } from "../../physics/anomaly";
 import { COLOUR_NAMES, parseColour } from "../../physics/su3";
+import { parseBeta } from "../../physics/beta";
+import { toFractionString } from "../../physics/rational";
 import { colourDisplay } from "../format";
 import { hasError, type FermionDraft } from "./calculator-state";
 
 type Edit = (patch: Partial<FermionDraft>) => void;
-type TextKey = "name" | "dim" | "y" | "x" | "b" | "charges" | "pq" | "copies";
+type TextKey = "name" | "dim" | "y" | "x" | "beta" | "charges" | "pq" | "copies";
 
 /** The one text field of the table: its value is row[field], and the error field it answers to is errorField. */
-function DraftInput(props: {
+export function DraftInput(props: {
   row: FermionDraft;
   field: TextKey;
   label: string;
@@ -40,7 +42,23 @@ function colourOptionLabel(name: string): string {
   return p.ok ? `${colourDisplay(name)}  (${p.irrep.p},${p.irrep.q})` : name;
 }
 
-function ColourCell({ row, edit, invalid, label }: { row: FermionDraft; edit: Edit; invalid: boolean; label: string }) {
+/** b = β/√3, the rational the calculator uses, shown only as a detail of the β field. */
+function derivedB(beta: string): string {
+  const r = parseBeta(beta);
+  return r.ok ? ` (b = β/√3 = ${toFractionString(r.b)})` : "";
+}
+
+export function ColourCell({
+  row,
+  edit,
+  invalid,
+  label,
+}: {
+  row: FermionDraft;
+  edit: Edit;
+  invalid: boolean;
+  label: string;
+}) {
   const named = COLOUR_NAMES.includes(row.colour);
   const [other, setOther] = useState(!named);
   return (
@@ -82,7 +100,12 @@ function ColourCell({ row, edit, invalid, label }: { row: FermionDraft; edit: Ed
 }
 
 /** The electroweak cell: its kind, then the fields that kind needs. */
-function ElectroweakCell(props: { row: FermionDraft; label: string; edit: Edit; bad: (field: string) => boolean }) {
+export function ElectroweakCell(props: {
+  row: FermionDraft;
+  label: string;
+  edit: Edit;
+  bad: (field: string) => boolean;
+}) {
   const { row, label, edit, bad } = props;
   const field = { row, edit };
   return (
@@ -132,18 +155,21 @@ function ElectroweakCell(props: { row: FermionDraft; label: string; edit: Edit; 
             {...field}
             field="x"
             className="narrow"
-            label={`X charge of ${label}`}
-            title="X (Q = T₃ + βT₈ + X)"
+            label={`U(1)_X charge of ${label}`}
+            title="U(1)_X charge X (Q = T₃ + βT₈ + X)"
             invalid={bad("ew.x")}
           />
-          <DraftInput
-            {...field}
-            field="b"
-            className="narrow"
-            label={`b = β/√3 of ${label}`}
-            title="b = β/√3"
-            invalid={bad("ew.b")}
-          />
+          {row.rep === "1" ? null : (
+            <DraftInput
+              {...field}
+              field="beta"
+              className="narrow"
+              label={`β of ${label}`}
+              title={`β as in Q = T₃ + βT₈ + X, e.g. -1/√3, −√3, 1/sqrt(3)${derivedB(row.beta)}`}
+              placeholder="β"
+              invalid={bad("ew.b")}
+            />
+          )}
         </>
       ) : (
         <DraftInput

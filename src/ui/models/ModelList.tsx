@@ -8,6 +8,7 @@ import { modelShape, shapeCancels, shapeNormalizedRange } from "../../plot/model
 import { constantsOf } from "../../plot/physics-settings";
 import type { LineStyle, Model, SetDraw } from "../../project/types";
 import { selectModelIds, selectPhysics, useAxband, type AxbandState } from "../store";
+import { useCalculatorRequest } from "./calculator-draft";
 import { minus } from "../format";
 import { EOVERN_HINT, eOverNText, kindFieldsOf } from "./model-kind-text";
 
@@ -175,6 +176,7 @@ function SpreadField({ model }: { model: Model }) {
 function ModelRow({ id, index, count }: { id: string; index: number; count: number }) {
   const model = useAxband(useCallback((s: AxbandState) => s.project.models.find((m) => m.id === id), [id]));
   const physics = useAxband(selectPhysics);
+  const requestEdit = useCalculatorRequest((s) => s.requestEdit);
   const { updateModel, removeModel, moveModel } = useAxband(
     useShallow((s: AxbandState) => ({
       updateModel: s.updateModel,
@@ -223,6 +225,17 @@ function ModelRow({ id, index, count }: { id: string; index: number; count: numb
           <span className="visually-hidden">Show {model.label}</span>
         </label>
         <span className="row-buttons">
+          {model.source.kind === "calculator" ? (
+            <button
+              type="button"
+              className="icon"
+              aria-label={`Edit ${model.label} in the anomaly calculator`}
+              title="Reopen in the anomaly calculator"
+              onClick={() => requestEdit(model)}
+            >
+              ✎
+            </button>
+          ) : null}
           <button
             type="button"
             className="icon"

@@ -6,6 +6,8 @@ import { AddModel } from "./AddModel";
 import { Catalogue } from "./Catalogue";
 import { ModelList } from "./ModelList";
 import { AnomalyCalculator } from "./AnomalyCalculator";
+import { EnsemblePanel } from "./ensemble/EnsemblePanel";
+import { useCalculatorRequest } from "./calculator-draft";
 
 function CalculatorDialog({ open, onClose }: { open: boolean; onClose: () => void }) {
   const panel = useRef<HTMLDivElement>(null);
@@ -36,8 +38,8 @@ function CalculatorDialog({ open, onClose }: { open: boolean; onClose: () => voi
           </button>
         </div>
         <p className="note">
-          Left-handed Weyl fermions (a right-handed field enters with its PQ charge negated): N = Σ X·T(R)·n_w, E = Σ
-          X·d(R)·Σ Q², N_DW = |2N/X_S|.
+          Left-handed Weyl fermions (a right-handed field enters with its PQ charge 𝒳 negated): N = Σ 𝒳·T(R)·n_w, E = Σ
+          𝒳·d(R)·Σ Q², N_DW = |2N/𝒳_S|.
         </p>
         <AnomalyCalculator />
       </div>
@@ -47,13 +49,25 @@ function CalculatorDialog({ open, onClose }: { open: boolean; onClose: () => voi
 }
 
 export function ModelsPanel() {
-  const [calcOpen, setCalcOpen] = useState(false);
+  const calcOpen = useCalculatorRequest((s) => s.open);
+  const setCalcOpen = useCalculatorRequest((s) => s.setOpen);
+  const [ensembleOpen, setEnsembleOpen] = useState(false);
   return (
     <div className="models-panel">
       <AddModel />
       <div className="inline-row">
         <Catalogue />
       </div>
+      <button
+        type="button"
+        className="calc-open"
+        data-testid="ensemble-open"
+        onClick={() => setEnsembleOpen(true)}
+        aria-haspopup="dialog"
+      >
+        Heavy-quark ensemble…
+      </button>
+      {ensembleOpen ? <EnsemblePanel open onClose={() => setEnsembleOpen(false)} /> : null}
       <button type="button" className="calc-open" onClick={() => setCalcOpen(true)} aria-haspopup="dialog">
         Anomaly calculator…
       </button>

@@ -1,59 +1,105 @@
-// The overlap table: for every visible model × visible curve, the mass intervals where the curve excludes,
-// reaches or contains the whole model band, part of it, or none of it (computed by the data core, memoised
-// on the models, curves and constants). Strongest verdict first by default, sorting by column, filters, CSV
-// and Markdown export (rows in the order shown), and a click on a row highlights its interval on the figure.
+// The overlap table: one summary row per visible model × curve that overlap (computed in the overlap worker), with
+// its verdict, shares, interval count, widest interval and E/N; a row expands to its intervals (windowed list);
+// a click highlights the row's intervals (or one of them) on the figure; exports and a caption for a paper.
 import { useMemo, useState } from "react";
-import { overlapTableToCsv, overlapTableToMarkdown, type OverlapRow } from "../../data";
-import { useOverlapRows } from "./overlap-client";
-import { siFormat, sciFormat } from "../format";
+import type { OverlapSummaryRow } from "../../analysis/overlap-summary";
+import { useOverlapSummary } from "./overlap-client";
 import { useAxband } from "../store";
-import { downloadText, safeFileName } from "../export/download";
-import { copyText } from "../share/clipboard";
-import {
-  filterRows,
-  nextSort,
-  NO_FILTER,
-  rowKey,
-  sortRows,
-  VERDICT_GROUPS,
-  verdictText,
-  type RowFilter,
-  type SortKey,
-  type SortState,
-} from "./table-logic";
+import { rowView } from "../../formats/overlap/view";
+import { IntervalList } from "./IntervalList";
+import { OverlapExports } from "./OverlapExports";
+import { nextSort, rowKey, visibleRows, type SortKey, type SortState } from "./summary-logic";
 import { ChoiceField, type Choice } from "../layout/ChoiceField";
 import "../curves/curves.css";
 import "./overlap.css";
 
-/** Filter choices: "all" (the empty value) first, then the entries. */
+const COLUMNS: { key: SortKey | null; label: string; title?: string }[] = [
+  { key: null, label: "Details" },
+  { key: "model", label: "Model" },
+  { key: "curve", label: "Curve" },
+  { key: "verdict", label: "Verdict" },
+  { key: null, label: "Mass range", title: "Where the curve has data" },
+  { key: "share", label: "Share of range", title: "Share of the mass range (log m_a) covered" },
+  { key: "area", label: "Share of band area", title: "Share of the band's area in log m_a × log g covered" },
+  { key: "count", label: "Intervals", title: "Separate covered intervals" },
+  { key: null, label: "Widest" },
+  { key: null, label: "E/N covered", title: "E/N covered at the best point; all = the whole band" },
+];
+
 function withAll(entries: [string, string][]): Choice[] {
   return [{ value: "", label: "all" }, ...entries.map(([value, label]) => ({ value, label }))];
 }
-const VERDICT_CHOICES: Choice[] = [{ value: "", label: "all" }, ...VERDICT_GROUPS];
 
-const COLUMNS: { key: SortKey | null; label: string; title?: string }[] = [
-  { key: "model", label: "Model" },
-  { key: "curve", label: "Curve" },
-  { key: "role", label: "Role" },
-  { key: "verdict", label: "Verdict" },
-  { key: "mass", label: "m_a range", title: "Axion mass interval" },
-  { key: "fa", label: "f_a range (GeV)", title: "Decay constant interval (f_a falls as m_a grows)" },
-  { key: "freq", label: "Frequency", title: "Photon frequency ν = m_a/h" },
-  { key: null, label: "E/N excluded", title: "For a partial overlap: the E/N values of the band that are affected" },
-  { key: null, label: "Notes" },
-];
-
-/** Rows drawn before "Show all" (a wiggly million-point curve can give hundreds of intervals). */
-const ROWS_SHOWN = 100;
-
-function range(lo: number, hi: number, fmt: (v: number) => string): string {
-  return `${fmt(lo)} – ${fmt(hi)}`;
+function intervalsOf(r: OverlapSummaryRow, only: number | null): [number, number][] {
+  const l = r.intervals;
+  if (only !== null) return [[l.lo[only], l.hi[only]]];
+  const out: [number, number][] = [];
+  for (let i = 0; i < l.count; i++) if (!l.bridged[i]) out.push([l.lo[i], l.hi[i]]);
+  return out;
 }
 
-function eOverNText(r: OverlapRow): string {
-  const pieces = r.eOverNSubs ?? (r.eOverNSub ? [r.eOverNSub] : []);
-  if (pieces.length === 0) return "";
-  return pieces.map(([a, b]) => (a === b ? sciFormat(a) : `${sciFormat(a)} … ${sciFormat(b)}`)).join(" and ");
+function SummaryRow(props: {
+  r: OverlapSummaryRow;
+  expanded: boolean;
+  selected: boolean;
+  onExpand: () => void;
+  onSelect: () => void;
+}) {
+  const { r } = props;
+  const v = rowView(r);
+  const u = v.unit.name;
+  return (
+    <tr
+      className={`ax-kind-${r.verdict}${props.selected ? " ax-selected" : ""}`}
+      aria-selected={props.selected}
+      onClick={props.onSelect}
+    >
+      <td>
+        <button
+          type="button"
+          data-testid="overlap-expand"
+          aria-expanded={props.expanded}
+          aria-controls={props.expanded ? "ax-overlap-intervals" : undefined}
+          aria-label={`${props.expanded ? "Hide" : "List"} the ${r.intervalCount} intervals of ${r.modelLabel} × ${r.curveLabel}`}
+          onClick={(e) => {
+            e.stopPropagation();
+            props.onExpand();
+          }}
+        >
+          {props.expanded ? "▾" : "▸"}
+        </button>
+      </td>
+      <td>
+        <button
+          type="button"
+          className="ax-linkish"
+          aria-pressed={props.selected}
+          title="Highlight this row's intervals on the figure"
+          onClick={(e) => {
+            e.stopPropagation();
+            props.onSelect();
+          }}
+        >
+          {r.modelLabel}
+        </button>
+      </td>
+      <td>{r.curveLabel}</td>
+      <td>
+        <span className={`ax-verdict ax-verdict-${r.verdict.split("-")[0]}`}>{v.verdict}</span>
+      </td>
+      <td className="ax-num">
+        {v.range[0]}–{v.range[1]} {u}
+      </td>
+      <td className="ax-num">{v.shareWhole ? `${v.share} (whole band ${v.shareWhole})` : v.share}</td>
+      <td className="ax-num">{v.areaShare}</td>
+      <td className="ax-num">
+        {r.intervalCount}
+        {r.bridgedCount > 0 ? ` (+${r.bridgedCount} bridged)` : ""}
+      </td>
+      <td className="ax-num">{v.widest ? `${v.widest[0]}–${v.widest[1]} ${u}` : "—"}</td>
+      <td className="ax-num">{v.eOverN}</td>
+    </tr>
+  );
 }
 
 /** The overlap table panel. */
@@ -63,37 +109,41 @@ export function OverlapPanel() {
   const physics = useAxband((s) => s.project.physics);
   const highlight = useAxband((s) => s.ui.highlight);
   const setHighlight = useAxband((s) => s.setHighlight);
-  const pushMessage = useAxband((s) => s.pushMessage);
-  const projectName = useAxband((s) => s.project.name);
   const [sort, setSort] = useState<SortState | null>(null);
-  const [filter, setFilter] = useState<RowFilter>(NO_FILTER);
-
-  const [showAll, setShowAll] = useState(false);
-  // Only models, curves and constants change the table; the figure (zoom, preset) does not.
-  const { rows, pending } = useOverlapRows(models, curves, physics);
-  const shown = useMemo(() => sortRows(filterRows(rows, filter), sort), [rows, filter, sort]);
-  const modelChoices = useMemo(
-    () => withAll([...new Map(rows.map((r) => [r.modelId, r.modelLabel])).entries()]),
-    [rows],
+  const [showNone, setShowNone] = useState(false);
+  const [mergeGaps, setMergeGaps] = useState(false);
+  const [modelId, setModelId] = useState<string | null>(null);
+  const [curveId, setCurveId] = useState<string | null>(null);
+  const [expanded, setExpanded] = useState<string | null>(null);
+  const [picked, setPicked] = useState<number | null>(null);
+  const { rows, pending } = useOverlapSummary(models, curves, physics, mergeGaps);
+  const shown = useMemo(
+    () => visibleRows(rows, { showNone, modelId, curveId, sort }),
+    [rows, showNone, modelId, curveId, sort],
   );
-  const curveChoices = useMemo(
-    () => withAll([...new Map(rows.map((r) => [r.curveId, r.curveLabel])).entries()]),
-    [rows],
-  );
-  const base = safeFileName(projectName === "Untitled" ? "axband" : projectName, "axband");
-
+  const modelChoices = useMemo(() => withAll([...new Map(rows.map((r) => [r.modelId, r.modelLabel]))]), [rows]);
+  const curveChoices = useMemo(() => withAll([...new Map(rows.map((r) => [r.curveId, r.curveLabel]))]), [rows]);
+  const overlapping = rows.filter((r) => r.verdict !== "none").length;
   const selectedKey =
-    highlight &&
-    shown.find(
-      (r) =>
-        r.massMinEv === highlight.massMinEv &&
-        r.massMaxEv === highlight.massMaxEv &&
-        r.modelId === highlight.modelId &&
-        r.curveId === highlight.curveId,
-    );
+    highlight?.modelId && highlight.curveId ? rowKey(highlight as { modelId: string; curveId: string }) : null;
+  const open = shown.find((r) => rowKey(r) === expanded) ?? null;
 
-  const visibleModels = models.filter((m) => m.visible).length;
-  const visibleCurves = curves.filter((c) => c.visible).length;
+  const select = (r: OverlapSummaryRow, only: number | null) => {
+    const key = rowKey(r);
+    if (only === null && selectedKey === key && picked === null) {
+      setHighlight(null);
+      return;
+    }
+    const ivs = intervalsOf(r, only);
+    setPicked(only);
+    setHighlight({
+      massMinEv: ivs.length ? ivs[0][0] : r.massRangeEv[0],
+      massMaxEv: ivs.length ? ivs[ivs.length - 1][1] : r.massRangeEv[1],
+      modelId: r.modelId,
+      curveId: r.curveId,
+      intervalsEv: ivs,
+    });
+  };
 
   return (
     <section className="ax-panel ax-overlap" aria-labelledby="ax-overlap-title">
@@ -101,15 +151,13 @@ export function OverlapPanel() {
         <h2 id="ax-overlap-title">Overlap table</h2>
         <span className="ax-hint" aria-live="polite">
           {pending ? "updating… · " : ""}
-          {shown.length === rows.length ? `${rows.length} rows` : `${shown.length} of ${rows.length} rows`} ·{" "}
-          {visibleModels} model{visibleModels === 1 ? "" : "s"} × {visibleCurves} curve{visibleCurves === 1 ? "" : "s"}
+          {overlapping} of {rows.length} model × curve pairs overlap
+          {shown.length !== overlapping ? ` · ${shown.length} shown` : ""}
         </span>
       </div>
       {rows.length === 0 ? (
         <p className="ax-empty">
-          {visibleModels === 0 || visibleCurves === 0
-            ? "Add a model and import a curve (both shown) to see where the model is excluded or within reach."
-            : "No usable overlap: the curves have fewer than two usable points, or no model E/N could be read."}
+          Add a model and import a curve (both shown) to see where the model is excluded or within reach.
         </p>
       ) : (
         <>
@@ -117,59 +165,35 @@ export function OverlapPanel() {
             <ChoiceField
               label="Model"
               ariaLabel="Filter by model"
-              value={filter.modelId ?? ""}
+              value={modelId ?? ""}
               choices={modelChoices}
-              onChange={(v) => setFilter({ ...filter, modelId: v || null })}
+              onChange={(v) => setModelId(v || null)}
             />
             <ChoiceField
               label="Curve"
               ariaLabel="Filter by curve"
-              value={filter.curveId ?? ""}
+              value={curveId ?? ""}
               choices={curveChoices}
-              onChange={(v) => setFilter({ ...filter, curveId: v || null })}
+              onChange={(v) => setCurveId(v || null)}
             />
-            <ChoiceField
-              label="Verdict"
-              ariaLabel="Filter by verdict"
-              value={filter.verdict ?? ""}
-              choices={VERDICT_CHOICES}
-              onChange={(v) => setFilter({ ...filter, verdict: v || null })}
-            />
-            <span className="ax-overlap-export">
-              <button
-                type="button"
-                data-testid="overlap-csv"
-                onClick={() => downloadText(`${base}-overlap.csv`, overlapTableToCsv(shown), "text/csv")}
-              >
-                CSV
-              </button>
-              <button
-                type="button"
-                data-testid="overlap-md"
-                onClick={() => downloadText(`${base}-overlap.md`, overlapTableToMarkdown(shown), "text/markdown")}
-              >
-                Markdown
-              </button>
-              <button
-                type="button"
-                data-testid="overlap-copy-md"
-                onClick={() =>
-                  void copyText(overlapTableToMarkdown(shown)).then((ok) =>
-                    pushMessage(
-                      ok ? "status" : "alert",
-                      ok
-                        ? "Overlap table copied as Markdown."
-                        : "The browser gave no clipboard access; use the Markdown download instead.",
-                    ),
-                  )
-                }
-              >
-                Copy Markdown
-              </button>
-            </span>
+            <label className="ax-field ax-check">
+              <input type="checkbox" checked={showNone} onChange={(e) => setShowNone(e.target.checked)} />
+              <span>also pairs without overlap</span>
+            </label>
+            <label
+              className="ax-field ax-check"
+              title="Gaps narrower than one curve sample are listed as bridged, never counted as excluded"
+            >
+              <input type="checkbox" checked={mergeGaps} onChange={(e) => setMergeGaps(e.target.checked)} />
+              <span>mark one-sample gaps as bridged</span>
+            </label>
           </div>
           <div className="ax-overlap-scroll">
             <table className="ax-overlap-table" data-testid="overlap-table">
+              <caption className="visually-hidden">
+                One row per model and curve; strongest verdict first. Use a row&apos;s details button to list its
+                intervals.
+              </caption>
               <thead>
                 <tr>
                   {COLUMNS.map((c) => {
@@ -201,72 +225,35 @@ export function OverlapPanel() {
                 </tr>
               </thead>
               <tbody>
-                {(showAll ? shown : shown.slice(0, ROWS_SHOWN)).map((r) => {
-                  const key = rowKey(r);
-                  const selected = selectedKey ? rowKey(selectedKey) === key : false;
-                  return (
-                    <tr
-                      key={key}
-                      className={`ax-kind-${r.kind}${selected ? " ax-selected" : ""}`}
-                      aria-selected={selected}
-                      tabIndex={0}
-                      onClick={() =>
-                        setHighlight(
-                          selected
-                            ? null
-                            : {
-                                massMinEv: r.massMinEv,
-                                massMaxEv: r.massMaxEv,
-                                modelId: r.modelId,
-                                curveId: r.curveId,
-                              },
-                        )
-                      }
-                      onKeyDown={(e) => {
-                        if (e.key === "Enter" || e.key === " ") {
-                          e.preventDefault();
-                          setHighlight(
-                            selected
-                              ? null
-                              : {
-                                  massMinEv: r.massMinEv,
-                                  massMaxEv: r.massMaxEv,
-                                  modelId: r.modelId,
-                                  curveId: r.curveId,
-                                },
-                          );
-                        }
-                      }}
-                    >
-                      <td>{r.modelLabel}</td>
-                      <td>{r.curveLabel}</td>
-                      <td>{r.role}</td>
-                      <td>
-                        <span className={`ax-verdict ax-verdict-${r.kind.split("-")[0]}`}>{verdictText(r.kind)}</span>
-                      </td>
-                      <td className="ax-num">{range(r.massMinEv, r.massMaxEv, (v) => siFormat(v, "eV"))}</td>
-                      <td className="ax-num">{range(r.faMinGeV, r.faMaxGeV, (v) => sciFormat(v))}</td>
-                      <td className="ax-num">{range(r.freqMinHz, r.freqMaxHz, (v) => siFormat(v, "Hz"))}</td>
-                      <td className="ax-num">{eOverNText(r)}</td>
-                      <td className="ax-note">{r.note}</td>
-                    </tr>
-                  );
-                })}
+                {shown.map((r) => (
+                  <SummaryRow
+                    key={rowKey(r)}
+                    r={r}
+                    expanded={expanded === rowKey(r)}
+                    selected={selectedKey === rowKey(r)}
+                    onExpand={() => {
+                      setExpanded(expanded === rowKey(r) ? null : rowKey(r));
+                      setPicked(null);
+                    }}
+                    onSelect={() => select(r, null)}
+                  />
+                ))}
               </tbody>
             </table>
           </div>
-          {shown.length > ROWS_SHOWN ? (
-            <p className="ax-hint">
-              Showing {showAll ? "all" : `the first ${ROWS_SHOWN}`} of {shown.length} rows (the exports always hold all
-              of them).{" "}
-              <button type="button" onClick={() => setShowAll(!showAll)}>
-                {showAll ? `Show the first ${ROWS_SHOWN}` : "Show all"}
-              </button>
-            </p>
+          {open ? (
+            <IntervalList
+              row={open}
+              id="ax-overlap-intervals"
+              selected={selectedKey === rowKey(open) ? picked : null}
+              onPick={(i) => select(open, i)}
+            />
           ) : null}
+          <OverlapExports rows={shown} />
           <p className="ax-hint">
-            Click a row to highlight its interval on the figure. Curves are interpolated linearly in log–log between
-            their points; nothing is claimed outside a curve&apos;s mass range.
+            Click a row to highlight its intervals on the figure, or an interval in the expanded list for that one.
+            Curves are interpolated linearly in log–log between their points; gaps between samples are never bridged
+            silently, and nothing is claimed outside a curve&apos;s mass range.
           </p>
         </>
       )}

@@ -1,8 +1,8 @@
-// Main-thread side of the overlap table: computes the rows in a Web Worker (each curve array is copied
-// to the worker once and then named by id), and on the calling thread where Workers do not exist (jsdom)
-// or the worker fails to start. `useOverlapRows` gives the rows for the current models, curves and constants.
+// Main-thread side of the overlap summary: computed in a Web Worker (each curve array is copied to the worker once
+// and then named by id; the rows' interval arrays come back transferred), on the calling thread where Workers do
+// not exist (jsdom) or the worker fails. `useOverlapSummary` gives the rows for the current models, curves, constants.
 import { useEffect, useMemo, useRef, useState } from "react";
-import { overlapTable, type OverlapRow } from "../../data";
+import { overlapSummary, type OverlapSummaryRow } from "../../analysis/overlap-summary";
 import type { Curve, Model, PhysicsSettings, Project } from "../../project/types";
 import { useAxband } from "../store";
 
@@ -15,9 +15,11 @@ export interface OverlapRequest {
   arrays: [number, Float64Array][];
   /** Every array id still in use (the worker forgets the others). */
   keep: number[];
+  mergeGaps: boolean;
 }
 
-export type OverlapResponse = { id: number; ok: true; rows: OverlapRow[] } | { id: number; ok: false; error: string };
+export type OverlapResponse =
+  { id: number; ok: true; rows: OverlapSummaryRow[] } | { id: number; ok: false; error: string };
 
 let worker: Worker | null = null;
 let broken = false;
@@ -25,10 +27,10 @@ let nextJob = 1;
 let nextArray = 1;
 const arrayIds = new WeakMap<Float64Array, number>();
 let workerHas = new Set<number>();
-const waiting = new Map<number, { resolve: (rows: OverlapRow[]) => void; fallback: () => void }>();
+const waiting = new Map<number, { resolve: (rows: OverlapSummaryRow[]) => void; fallback: () => void }>();
 
 /** True when the overlap table is computed in a Web Worker here. */
-export function overlapWorkerAvailable(): boolean {
+function overlapWorkerAvailable(): boolean {
   return !broken && typeof Worker === "function";
 }
 
@@ -70,9 +72,9 @@ function arrayId(a: Float64Array): number {
   return id;
 }
 
-/** The overlap rows of a project, from the worker when there is one. Never rejects. */
-export function computeOverlapRows(project: Project): Promise<OverlapRow[]> {
-  const local = () => Promise.resolve().then(() => overlapTable(project));
+/** The overlap summary of a project, from the worker when there is one. Never rejects. */
+function computeSummary(project: Project, mergeGaps: boolean): Promise<OverlapSummaryRow[]> {
+  const local = () => Promise.resolve().then(() => overlapSummary(project, { mergeGaps }));
   const w = getWorker();
   if (!w) return local();
   const fresh: [number, Float64Array][] = [];
@@ -90,42 +92,43 @@ export function computeOverlapRows(project: Project): Promise<OverlapRow[]> {
     return { meta, massRef, gRef };
   });
   const id = nextJob++;
-  return new Promise<OverlapRow[]>((resolve) => {
-    waiting.set(id, { resolve, fallback: () => resolve(overlapTable(project)) });
+  return new Promise<OverlapSummaryRow[]>((resolve) => {
+    waiting.set(id, { resolve, fallback: () => resolve(overlapSummary(project, { mergeGaps })) });
     try {
-      w.postMessage({ id, project: { ...project, curves }, arrays: fresh, keep } satisfies OverlapRequest);
+      w.postMessage({ id, project: { ...project, curves }, arrays: fresh, keep, mergeGaps } satisfies OverlapRequest);
       for (const [aid] of fresh) workerHas.add(aid);
       workerHas = new Set(keep.filter((k) => workerHas.has(k)));
     } catch {
       waiting.delete(id);
-      resolve(overlapTable(project));
+      resolve(overlapSummary(project, { mergeGaps }));
     }
   });
 }
 
 /**
- * The overlap rows for the current models, curves and constants (the figure does not change them), and
- * whether a newer computation is still running. Synchronous where there is no Worker.
+ * The overlap summary for the current models, curves and constants (the figure does not change it), and whether a
+ * newer computation is still running. Synchronous where there is no Worker.
  */
-export function useOverlapRows(
+export function useOverlapSummary(
   models: Model[],
   curves: Curve[],
   physics: PhysicsSettings,
-): { rows: OverlapRow[]; pending: boolean } {
+  mergeGaps: boolean,
+): { rows: OverlapSummaryRow[]; pending: boolean } {
   const sync = !overlapWorkerAvailable();
   const syncRows = useMemo(
-    () => (sync ? overlapTable({ ...useAxband.getState().project, models, curves, physics }) : null),
-    [sync, models, curves, physics],
+    () => (sync ? overlapSummary({ ...useAxband.getState().project, models, curves, physics }, { mergeGaps }) : null),
+    [sync, models, curves, physics, mergeGaps],
   );
-  const [state, setState] = useState<{ rows: OverlapRow[]; job: number }>({ rows: [], job: 0 });
+  const [state, setState] = useState<{ rows: OverlapSummaryRow[]; job: number }>({ rows: [], job: 0 });
   const latest = useRef(0);
   useEffect(() => {
     if (sync) return;
     const job = ++latest.current;
-    void computeOverlapRows({ ...useAxband.getState().project, models, curves, physics }).then((rows) => {
+    void computeSummary({ ...useAxband.getState().project, models, curves, physics }, mergeGaps).then((rows) => {
       if (latest.current === job) setState({ rows, job });
     });
-  }, [sync, models, curves, physics]);
+  }, [sync, models, curves, physics, mergeGaps]);
   if (syncRows) return { rows: syncRows, pending: false };
   return { rows: state.rows, pending: state.job !== latest.current };
 }

@@ -1,13 +1,12 @@
-// Module Web Worker that computes the overlap table off the main thread (a million-point curve takes a
-// good fraction of a second per model). Curve arrays arrive once per array and are kept by id, so later
-// requests (a model edited, a curve restyled) send only ids.
-import { overlapTable } from "../../analysis/overlap-table";
+// Module Web Worker that computes the overlap summary off the main thread. Curve arrays arrive once per array and
+// are kept by id, so later requests (a model edited, a curve restyled) send only ids; intervals go back transferred.
+import { overlapSummary } from "../../analysis/overlap-summary";
 import type { OverlapRequest, OverlapResponse } from "./overlap-client";
 import type { Project } from "../../project/types";
 
 const scope = self as unknown as {
   onmessage: ((ev: MessageEvent<OverlapRequest>) => void) | null;
-  postMessage(message: OverlapResponse): void;
+  postMessage(message: OverlapResponse, transfer: Transferable[]): void;
 };
 
 const arrays = new Map<number, Float64Array>();
@@ -25,8 +24,13 @@ scope.onmessage = (ev) => {
       return { ...c.meta, massEv, gInvGeV };
     });
     const project = { ...msg.project, curves } as unknown as Project;
-    scope.postMessage({ id: msg.id, ok: true, rows: overlapTable(project) });
+    const rows = overlapSummary(project, { mergeGaps: msg.mergeGaps });
+    const transfer = rows.flatMap((r) => {
+      const l = r.intervals;
+      return [l.lo.buffer, l.hi.buffer, l.whole.buffer, l.eOverN.buffer, l.members.buffer, l.bridged.buffer];
+    });
+    scope.postMessage({ id: msg.id, ok: true, rows }, transfer);
   } catch (e) {
-    scope.postMessage({ id: msg.id, ok: false, error: e instanceof Error ? e.message : String(e) });
+    scope.postMessage({ id: msg.id, ok: false, error: e instanceof Error ? e.message : String(e) }, []);
   }
 };

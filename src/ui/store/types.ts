@@ -30,6 +30,8 @@ export interface Highlight {
   massMaxEv: number;
   modelId?: string;
   curveId?: string;
+  /** Several intervals (eV) inside [massMinEv, massMaxEv] to mark instead of the whole span (an overlap row's). */
+  intervalsEv?: [number, number][];
 }
 
 /** The point under the pointer, in data units (eV, units of the y view). */

@@ -28,8 +28,10 @@ describe("numbers", () => {
     for (const s of ["abc", "0x10", "Infinity", "NaN", "1.2.3", "1e", "e5", "--1", "1,5", ""])
       expect(readNumberText(s), s).toBeNaN();
   });
-  test("decimal comma with ; (dot also accepted there)", () => {
-    const r = parseCurveText("m_a [ueV];g [1/GeV]\n1,5;2,5e-12\n3.5;4e-12\n");
+  // Until issue 16 a decimal point was accepted beside the commas; rows that disagree on the mark now stop the
+  // file (decimal-mark.test.ts), so the second row is written with a comma here.
+  test("decimal comma with ;", () => {
+    const r = parseCurveText("m_a [ueV];g [1/GeV]\n1,5;2,5e-12\n3,5;4e-12\n");
     expect(r.decimalComma).toBe(true);
     expect(arr(r.massEv)).toEqual([1.5e-6, 3.5e-6]);
     expect(arr(r.gInvGeV)).toEqual([2.5e-12, 4e-12]);

@@ -1,0 +1,68 @@
+// What the export menu's buttons do: write the figure as SVG (project embedded) or PNG (dpi in the file), or
+// the model lines and bands as CSV, download it, and say so. The writers load with this module, on demand.
+import { embedCapText, exportFigureSvgWithInfo } from "../../formats/figure-file";
+import { modelsToCsv } from "../../formats/model-csv";
+import { setPngDpi } from "../../formats/png-meta";
+import { presetOf } from "../../plot/layout";
+import { useAxband } from "../store";
+import { downloadBlob, downloadText, safeFileName } from "./download";
+import { pngFigure, rasteriseSvg, type PngScale } from "./png";
+
+/** Base name of exported figure files: the project name, or "axband-figure". */
+function figureBaseName(projectName: string): string {
+  return safeFileName(
+    projectName.trim() === "" || projectName === "Untitled" ? "axband-figure" : projectName,
+    "axband-figure",
+  );
+}
+
+const push = (level: "status" | "alert", text: string): void => {
+  useAxband.getState().pushMessage(level, text);
+};
+
+export function saveSvg(): void {
+  try {
+    const project = useAxband.getState().project;
+    const size = presetOf(project.figure);
+    const { svg, embeddedCurves, omittedCurves, omittedPoints, omittedBecause } = exportFigureSvgWithInfo(project, {
+      preset: project.figure.preset,
+      embedProject: true,
+    });
+    const name = `${figureBaseName(project.name)}.svg`;
+    downloadBlob(name, new Blob([svg], { type: "image/svg+xml" }));
+    const cm = `${(size.widthMm / 10).toFixed(1)} × ${(size.heightMm / 10).toFixed(1)} cm`;
+    if (embeddedCurves) return push("status", `Saved ${name} (${cm}; drop it on axband to reopen the project).`);
+    const n = omittedCurves.length;
+    push(
+      "alert",
+      `Saved ${name} (${cm}) without the data of ${n === 1 ? "its curve" : `its ${n} curves`} (${omittedPoints.toLocaleString("en")} points, over ${embedCapText(omittedBecause ?? "size")} for embedded data): dropped on axband it reopens the models and figure only. Save the project file to keep the data.`,
+    );
+  } catch (e) {
+    push("alert", `The SVG could not be made: ${e instanceof Error ? e.message : String(e)}.`);
+  }
+}
+
+export async function savePng(pngScale: PngScale): Promise<void> {
+  try {
+    const project = useAxband.getState().project;
+    const target = pngFigure(project, pngScale);
+    const png = setPngDpi(await rasteriseSvg(target.svg, target.widthPx, target.heightPx), target.dpi);
+    const name = `${figureBaseName(project.name)}${pngScale === "1x" ? "" : `@${pngScale}`}.png`;
+    downloadBlob(name, new Blob([png as BlobPart], { type: "image/png" }));
+    push("status", `Saved ${name} (${target.widthPx} × ${target.heightPx} px, ${Math.round(target.dpi)} dpi).`);
+  } catch (e) {
+    push("alert", `The PNG could not be made: ${e instanceof Error ? e.message : String(e)}`);
+  }
+}
+
+export function saveModelCsv(): void {
+  const project = useAxband.getState().project;
+  if (project.models.length === 0) return push("alert", "There are no models to export.");
+  try {
+    const name = `${figureBaseName(project.name)}-models.csv`;
+    downloadText(name, modelsToCsv(project), "text/csv");
+    push("status", `Saved ${name}.`);
+  } catch (e) {
+    push("alert", `The model CSV could not be made: ${e instanceof Error ? e.message : String(e)}.`);
+  }
+}

@@ -1,0 +1,164 @@
+// Charges from the Lagrangian in the calculator: scalars beside the fermions, kept and forbidden terms (one per
+// line, readable syntax), and "Solve", which fills the fermion table's PQ charges and reports what the terms fix.
+import { useId, useState } from "react";
+import type { ChargeSolved } from "../../physics/charges";
+import { minus } from "../format";
+import { termLines, solveDraft } from "./lagrangian";
+import type { CalcAction, CalcState, FermionDraft } from "./calculator-state";
+import { ColourCell, DraftInput, ElectroweakCell } from "./FermionRow";
+
+const SYNTAX_HELP =
+  "One term per line, fields separated by spaces: Qbar_L Phi Q_R · H2^† H1 Phi^†2 · conj(Phi)^2 · Q̄_L Φ Q_R. " +
+  "Conjugate with bar, ^†, †, ^*, conj(…); powers with ^2 or ².";
+
+function ScalarRow(props: { row: FermionDraft; index: number; dispatch: (a: CalcAction) => void }) {
+  const { row, index, dispatch } = props;
+  const edit = (patch: Partial<FermionDraft>) => dispatch({ type: "scalar-edit", key: row.key, patch });
+  const label = row.name.trim() || `scalar ${index + 1}`;
+  return (
+    <tr data-scalar-row={index}>
+      <td>
+        <DraftInput row={row} edit={edit} field="name" className="narrow" label={`Name of scalar ${index + 1}`} />
+      </td>
+      <td>
+        <ColourCell row={row} label={label} invalid={false} edit={edit} />
+      </td>
+      <ElectroweakCell row={row} label={label} edit={edit} bad={() => false} />
+      <td>
+        <button
+          type="button"
+          className="icon danger"
+          aria-label={`Remove ${label}`}
+          onClick={() => dispatch({ type: "scalar-remove", key: row.key })}
+        >
+          ✕
+        </button>
+      </td>
+    </tr>
+  );
+}
+
+function TermList(props: { label: string; value: string; onChange: (v: string) => void; testId: string }) {
+  const id = useId();
+  return (
+    <div className="term-list">
+      <label htmlFor={id} className="field-label">
+        {props.label}
+      </label>
+      <textarea
+        id={id}
+        rows={3}
+        spellCheck={false}
+        value={props.value}
+        data-testid={props.testId}
+        onChange={(e) => props.onChange(e.target.value)}
+      />
+    </div>
+  );
+}
+
+function Report({ r, state }: { r: ChargeSolved; state: CalcState }) {
+  const forbidden = termLines(state.forbidden);
+  return (
+    <div className="charge-report" data-testid="charge-report">
+      <p>
+        Charges solved ({state.normalize} = 1), filled into the table:{" "}
+        {Object.entries(r.charges)
+          .map(([n, x]) => `${n} = ${minus(x)}`)
+          .join(", ")}
+        .
+      </p>
+      {!r.axion ? (
+        <p className="warning">N = 0 for every choice the terms allow: no colour anomaly, no QCD axion.</p>
+      ) : r.determined ? (
+        <p>
+          E/N = {minus(r.eOverN ?? "")} is determined by the terms
+          {r.nDW ? `; N_DW = ${minus(r.nDW)}` : "; N (and N_DW) still depends on free charges"}.
+        </p>
+      ) : (
+        <p className="warning">
+          E/N is not determined: it depends on the charges of {r.free.join(", ")}, which the terms leave free. Vary them
+          in the table (a charge scan) or add the terms that fix them.
+        </p>
+      )}
+      {r.forbiddenAllowed.map((i) => (
+        <p key={`a${i}`} className="warning">
+          Not forbidden by this symmetry: <code>{forbidden[i]?.text}</code>
+        </p>
+      ))}
+      {r.forbiddenByGauge.map((i) => (
+        <p key={`g${i}`} className="note">
+          Already forbidden by gauge symmetry: <code>{forbidden[i]?.text}</code>
+        </p>
+      ))}
+    </div>
+  );
+}
+
+export function LagrangianPanel({ state, dispatch }: { state: CalcState; dispatch: (a: CalcAction) => void }) {
+  const [report, setReport] = useState<ReturnType<typeof solveDraft> | null>(null);
+  const normId = useId();
+  const solve = () => {
+    const r = solveDraft(state);
+    setReport(r);
+    if (r.ok) dispatch({ type: "solved", charges: r.result.charges });
+  };
+  const text = (field: "terms" | "forbidden") => (v: string) => dispatch({ type: "text", field, value: v });
+  return (
+    <details className="lagrangian" open={state.terms !== "" || undefined}>
+      <summary>Charges from the Lagrangian</summary>
+      <div className="table-scroll">
+        <table className="fermion-table" aria-label="Scalars">
+          <thead>
+            <tr>
+              <th scope="col">Scalar</th>
+              <th scope="col">SU(3)_c</th>
+              <th scope="col">Electroweak</th>
+              <th scope="col">
+                <span className="visually-hidden">Remove</span>
+              </th>
+            </tr>
+          </thead>
+          <tbody>
+            {state.scalars.map((row, i) => (
+              <ScalarRow key={row.key} row={row} index={i} dispatch={dispatch} />
+            ))}
+          </tbody>
+        </table>
+      </div>
+      <div className="inline-row">
+        <button type="button" onClick={() => dispatch({ type: "scalar-add" })}>
+          + Scalar
+        </button>
+        <label className="inline-label" htmlFor={normId}>
+          PQ charge 𝒳 = 1 for
+        </label>
+        <select
+          id={normId}
+          value={state.normalize}
+          onChange={(e) => dispatch({ type: "text", field: "normalize", value: e.target.value })}
+        >
+          {state.scalars.map((s) => (
+            <option key={s.key} value={s.name.trim()}>
+              {s.name.trim() || "(unnamed)"}
+            </option>
+          ))}
+        </select>
+      </div>
+      <p className="note">{SYNTAX_HELP}</p>
+      <TermList label="Kept terms" value={state.terms} onChange={text("terms")} testId="terms-kept" />
+      <TermList label="Forbidden terms" value={state.forbidden} onChange={text("forbidden")} testId="terms-forbidden" />
+      <button type="button" onClick={solve} data-testid="solve-charges">
+        Solve charges
+      </button>
+      {report && !report.ok ? (
+        <ul className="field-errors" role="alert" data-testid="solve-errors">
+          {report.errors.map((e, k) => (
+            <li key={k}>{e}</li>
+          ))}
+        </ul>
+      ) : null}
+      {report?.ok ? <Report r={report.result} state={state} /> : null}
+    </details>
+  );
+}
