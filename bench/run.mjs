@@ -4,6 +4,7 @@ import { spawnSync } from "node:child_process";
 import { existsSync } from "node:fs";
 
 const scripts = [
+  ["Initial JavaScript and time to the first figure (Chromium)", "bench/bundle.mjs"],
   ["CSV import (parser alone vs a general CSV library)", "bench/import.mjs"],
   ["CSV import end to end (worker + transfer, Chromium)", "bench/import-browser.mjs"],
   ["Figure redraw during a zoom step (Chromium)", "bench/redraw.mjs"],

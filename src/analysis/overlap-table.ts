@@ -1,6 +1,7 @@
 // The overlap table: for every visible model × visible curve of a project, the mass (f_a, frequency)
 // intervals where the curve excludes, reaches or contains the whole model band, part of it, or none of it;
 // with CSV and Markdown exports. The UI sorts, filters and highlights rows; this module only computes them.
+import { csvTextCell, markdownTextCell } from "./table-cells";
 import type { AxionConstants } from "../physics/constants";
 import { faFromMass, frequencyFromMass } from "../physics/coupling";
 import { parseEOverN } from "../physics/eovern-parse";
@@ -199,9 +200,7 @@ const CSV_HEADER = [
   "note",
 ];
 
-function csvField(value: string): string {
-  return /[",\n\r]/.test(value) ? `"${value.replace(/"/g, '""')}"` : value;
-}
+const csvField = csvTextCell;
 
 /** Full precision: the shortest decimal that reads back as the same double. */
 function csvNumber(x: number | undefined): string {
@@ -252,9 +251,7 @@ export function formatSignificant(x: number, digits = 4): string {
   return `${String(Number(mant))}e${exp.replace(/^\+/, "")}`;
 }
 
-function mdCell(text: string): string {
-  return text.replace(/\\/g, "\\\\").replace(/\|/g, "\\|").replace(/\r?\n/g, " ");
-}
+const mdCell = markdownTextCell;
 
 /**
  * The table as a GitHub-style Markdown table with units in the header and 4 significant digits.

@@ -68,7 +68,7 @@ function loadProjectFile(input: CliInput): LoadedProject {
 function loadSvg(input: CliInput): LoadedProject {
   const r = extractProjectFromSvg(readText(input.path));
   if (!r.ok) throw new InputError(`${input.path}: ${r.error}`);
-  return { project: r.project, notes: [] };
+  return { project: r.project, notes: r.repairs.map((s) => `${input.path}: repaired on loading: ${s}`) };
 }
 
 /** Reads and parses one CSV input as the app's import would (the worker threads call this too). */

@@ -17,8 +17,6 @@ export interface ParseJob {
   couplingUnit?: string;
   /** Drawn in mass order (what drawsSorted says of a CSV curve of this role: all but regions). */
   sorted: boolean;
-  /** A closed region. */
-  closed: boolean;
 }
 
 /** A worker's answer; `result` is null when it could not read or parse the file (the caller redoes it). */
@@ -51,7 +49,6 @@ export async function parseCsvInWorkers(
       massUnit: opts.massUnit,
       couplingUnit: opts.couplingUnit,
       sorted: input.role !== "region",
-      closed: input.role === "region",
       kind: input.kind,
     }))
     .filter((j) => j.kind === "csv")

@@ -19,7 +19,7 @@ if (port) {
       // g_aγγ view a CSV figure starts in; the main thread seeds its plot cache with it.
       const prepared =
         !result.fatal && result.massEv.length > 0
-          ? computePrepared(result.massEv, result.gInvGeV, job.sorted, { slopes: [0], closed: job.closed })
+          ? computePrepared(result.massEv, result.gInvGeV, job.sorted, { slopes: [0] })
           : undefined;
       reply = { index: job.index, result, prepared };
     } catch {

@@ -1,10 +1,10 @@
 // Command-line renderer (`npm run render -- …`): a project file, an exported SVG or CSV files in, the same
 // SVG the app exports (and optionally PNG and model CSV) out, without a browser and without any download.
 import { overlapOutputs } from "./overlap-out";
-import { existsSync, statSync } from "node:fs";
-import { dirname, resolve } from "node:path";
+import { existsSync, realpathSync, statSync } from "node:fs";
+import { basename, dirname, join, resolve } from "node:path";
 import { pathToFileURL } from "node:url";
-import { parseArgs, USAGE } from "./args";
+import { parseArgs, USAGE, type CliOptions } from "./args";
 import { InputError, type PreParsed } from "./inputs";
 import { loadAnyProject } from "./pdf-input";
 import { pickFallbackFont, pngPixelSize, renderPng } from "./png";
@@ -34,6 +34,65 @@ function size(bytes: number): string {
   if (bytes >= 1e6) return `${(bytes / 1e6).toFixed(2)} MB`;
   if (bytes >= 1e3) return `${(bytes / 1e3).toFixed(1)} kB`;
   return `${bytes} bytes`;
+}
+
+/** Largest PNG the renderer draws: 100 megapixels (about 400 MB of RGBA while drawing). */
+const MAX_PNG_PIXELS = 100e6;
+
+function checkPngPixels(px: { widthPx: number; heightPx: number }, dpi: number): void {
+  const total = px.widthPx * px.heightPx;
+  if (Number.isFinite(total) && total <= MAX_PNG_PIXELS) return;
+  const mp = total / 1e6;
+  throw new InputError(
+    `--png at ${dpi} dpi would be ${px.widthPx.toPrecision(3)} × ${px.heightPx.toPrecision(3)} px (${mp.toPrecision(3)} megapixels); the limit is ${MAX_PNG_PIXELS / 1e6} megapixels: lower --dpi or --scale`,
+  );
+}
+
+/** The path a file is known by: its real path, or its real directory and name when it does not exist yet. */
+function realPathOf(path: string): string {
+  const abs = resolve(path);
+  try {
+    return realpathSync(abs);
+  } catch {
+    try {
+      return join(realpathSync(dirname(abs)), basename(abs));
+    } catch {
+      return abs;
+    }
+  }
+}
+
+/** Refuses an output that is an input, or two outputs that are one file, however the paths are spelled. */
+function checkDistinctPaths(opts: CliOptions): void {
+  const inputs = new Map(opts.inputs.map((i) => [realPathOf(i.path), i.path]));
+  const outputs = new Map<string, string>();
+  const named: [string, string | undefined][] = [
+    ["-o", opts.out],
+    ["--png", opts.png],
+    ["--models-csv", opts.modelsCsv],
+    ["--overlap", opts.overlap],
+    ["--overlap-intervals", opts.overlapIntervals],
+  ];
+  for (const [flag, path] of named) {
+    if (!path) continue;
+    const real = realPathOf(path);
+    const input = inputs.get(real);
+    if (input !== undefined) throw new InputError(`${flag} ${path}: is the input file ${input}; choose another output`);
+    const other = outputs.get(real);
+    if (other !== undefined) throw new InputError(`${flag} ${path}: is also the output of ${other}; choose another`);
+    outputs.set(real, flag);
+  }
+}
+
+/** A write failure as one line naming the file (disk full, permission, name too long…). */
+function writeError(e: unknown, files: readonly OutputFile[]): unknown {
+  const err = e as NodeJS.ErrnoException;
+  if (typeof err?.code !== "string") return e;
+  const why =
+    err.code === "EACCES" || err.code === "EPERM" ? "permission denied" : (err.message.split(",")[0] ?? err.code);
+  const target =
+    files.find((f) => err.path !== undefined && err.path.includes(basename(f.path)))?.path ?? err.path ?? "output";
+  return new InputError(`${target}: cannot write (${why})`);
 }
 
 function checkOutputDir(path: string): void {
@@ -73,6 +132,7 @@ async function run(argv: readonly string[], io: Io, preParsed: PreParsed): Promi
   }
   try {
     for (const p of [opts.out, opts.png, opts.modelsCsv, opts.overlap, opts.overlapIntervals]) if (p) checkOutputDir(p);
+    checkDistinctPaths(opts);
     const { project, notes } = await loadAnyProject(opts, preParsed);
     for (const n of notes) io.err(`note: ${n}`);
     const files: OutputFile[] = [];
@@ -118,6 +178,7 @@ async function run(argv: readonly string[], io: Io, preParsed: PreParsed): Promi
       const inches = exportSizeInches(project);
       const dpi = opts.scale !== undefined ? 96 * opts.scale : opts.dpi;
       const px = pngPixelSize(inches.widthIn, inches.heightIn, dpi);
+      checkPngPixels(px, dpi);
       const font = pickFallbackFont();
       if (font.note) io.err(`note: ${font.note}`);
       // Thinned for the PNG's own pixels (≤ 0.5 PNG px), not the 96/in scene px of the SVG.
@@ -143,7 +204,11 @@ async function run(argv: readonly string[], io: Io, preParsed: PreParsed): Promi
       files.push({ path: o.path, data: o.data });
       report.push(o.report);
     }
-    writeAllOrNothing(files);
+    try {
+      writeAllOrNothing(files);
+    } catch (e) {
+      throw writeError(e, files);
+    }
     for (const line of report) io.out(line);
     return 0;
   } catch (e) {

@@ -6,7 +6,7 @@ import type { Scene } from "../plot/scene-types";
 import { PX_PER_IN, presetOf } from "../plot/layout";
 import { buildScene } from "../plot/scene";
 import { writeSvg } from "../plot/svg";
-import { decodeLink, encodeLink, encodeLinkWithin } from "./codec";
+import { decodeEmbeddedProject, encodeLink, encodeLinkWithin } from "./codec";
 
 /** Namespace URI of our <metadata> element (a URN of our own: nothing is fetched from it). */
 export const AXBAND_PROJECT_NS = "urn:axband:project";
@@ -124,8 +124,8 @@ export function embedCapText(
 
 /**
  * The <metadata> content that carries the project, and what it holds: one element in our namespace whose
- * text is the share-link fragment of the project ("v2." + base64url of raw DEFLATE of the compact JSON; see
- * src/formats/codec/v1.ts), so reading it back goes through the link decoder's size cap, schema check and repair.
+ * text is the share-link fragment of the project ("v3." + base64url of raw DEFLATE of the compact JSON + "." +
+ * checksum; see src/formats/codec/formats.ts), so reading it back goes through the link decoder's size cap, schema check and repair.
  * Curve data are included while the curves have at most `maxPoints` points (checked first, at no cost) and the
  * fragment stays within `maxChars`; the encoder stops as soon as it cannot, so a project over the character
  * cap costs about the cap's worth of packing. Otherwise the fragment carries name,
@@ -242,6 +242,10 @@ export type ExtractResult =
       omittedCurveCount: number;
       /** A sentence for the user when curve data were left out (without a full stop at the end), else undefined. */
       note?: string;
+      /** What the restore step repaired or left out (empty for a figure axband wrote). */
+      repairs: string[];
+      /** Whether the embedded project carried a checksum that matched (figures exported before format v3 have none). */
+      verified: boolean;
     }
   | { ok: false; error: string };
 
@@ -270,12 +274,13 @@ export function extractProjectFromSvg(svgText: string): ExtractResult {
       continue;
     }
     const payload = m[3].replace(/\s+/g, "");
-    const r = decodeLink(payload);
-    if (!r.ok) return { ok: false, error: `the project embedded in this SVG cannot be read: ${r.error}` };
+    const r = decodeEmbeddedProject(payload);
+    if (!r.ok) return { ok: false, error: `the project embedded in this SVG ${r.error}` };
     const left = r.omittedCurveCount;
-    if (left === 0) return { ok: true, project: r.project, omittedCurveCount: 0 };
+    const read = { ok: true as const, project: r.project, repairs: r.repairs, verified: r.verified };
+    if (left === 0) return { ...read, omittedCurveCount: 0 };
     const note = `this figure was exported without the data of its ${left === 1 ? "curve" : `${left} curves`} (too large to embed in the SVG), so it reopens with the models, figure and constants only; open the project file (.axband.json) for the curves`;
-    return { ok: true, project: r.project, omittedCurveCount: left, note };
+    return { ...read, omittedCurveCount: left, note };
   }
   return { ok: false, error: "this SVG mentions axband but its embedded project element is missing or damaged" };
 }

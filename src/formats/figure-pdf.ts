@@ -34,6 +34,9 @@ export interface PdfWithInfo {
   omittedCurves: string[];
 }
 
+/** UTF-8 bytes in this realm's Uint8Array: pdf-lib checks `instanceof`, which another realm's (jsdom's) fails. */
+const realmBytes = (text: string) => new Uint8Array(new TextEncoder().encode(text));
+
 const OMITTED_DESC = /(\d+) curve\(s\) left out/;
 
 /**
@@ -61,7 +64,7 @@ export async function exportFigurePdfWithInfo(project: Project, opts: ExportPdfO
     title: p.name,
     creator: opts.creator,
     attachment: embed
-      ? { name: projectFileName(p), bytes: new TextEncoder().encode(projectToFile(attached)), description }
+      ? { name: projectFileName(p), bytes: realmBytes(projectToFile(attached)), description }
       : undefined,
   });
   return { pdf, embedded: embed, embeddedCurves: withCurves, omittedCurves: info?.omittedCurves ?? [] };

@@ -1,38 +1,12 @@
 // PNG metadata for exported rasters: set or read the physical pixel density (the pHYs chunk) and read the
 // pixel size (IHDR), so a PNG exported at 300 dpi says so to LaTeX and office tools. Pure: bytes in, bytes out.
+import { crc32 } from "./crc32";
 
 /** The eight bytes every PNG starts with (PNG specification, ISO/IEC 15948:2004, §5.2). */
 const PNG_SIGNATURE = [0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a] as const;
 
 /** One inch in metres (exact by definition of the international inch). */
 const METRES_PER_INCH = 0.0254;
-
-let crcTable: Uint32Array | undefined;
-
-/** Byte-wise table of the reflected CRC-32 polynomial 0xEDB88320 used by PNG (and zlib, gzip). */
-function table(): Uint32Array {
-  if (crcTable) return crcTable;
-  crcTable = new Uint32Array(256);
-  for (let n = 0; n < 256; n++) {
-    let c = n;
-    for (let k = 0; k < 8; k++) c = c & 1 ? 0xedb88320 ^ (c >>> 1) : c >>> 1;
-    crcTable[n] = c >>> 0;
-  }
-  return crcTable;
-}
-
-/**
- * CRC-32 as PNG defines it (ISO/IEC 15948 Annex D): reflected polynomial 0xEDB88320, initial value and
- * final xor 0xFFFFFFFF. Returns an unsigned 32-bit integer.
- * @param start first byte included. @default 0
- * @param end one past the last byte included. @default bytes.length
- */
-export function crc32(bytes: Uint8Array, start = 0, end = bytes.length): number {
-  const t = table();
-  let c = 0xffffffff;
-  for (let i = start; i < end; i++) c = t[(c ^ bytes[i]) & 0xff] ^ (c >>> 8);
-  return (c ^ 0xffffffff) >>> 0;
-}
 
 /** Pixels per metre for a density in dots per inch, rounded to the integer the pHYs chunk stores (300 → 11811). */
 export function dpiToPixelsPerMetre(dpi: number): number {

@@ -76,10 +76,12 @@ export function curveGeometry(curve: Curve, f: CurveFrame, nodeId: string): Curv
     // stroke also marks the vertical ends of the excluded region where they lie inside the plot.
     const topY = r2(f.plot.y - 4 * lw - 2);
     const closeUp = `L${r2(pl.xs[pl.n - 1])} ${topY}L${r2(pl.xs[0])} ${topY}Z`;
+    const exclusionD = pathDataCompact(pl, closeUp);
     fills.push({
       kind: "path",
       id: `${nodeId}-exclusion`,
-      d: pathDataCompact(pl, closeUp),
+      d: exclusionD,
+      writtenD: exclusionD,
       fill: colour,
       fillOpacity: opacity,
       stroke: colour,
@@ -88,10 +90,12 @@ export function curveGeometry(curve: Curve, f: CurveFrame, nodeId: string): Curv
       data: { ...data },
     });
   } else if (curve.role === "projection") {
+    const d = pathDataCompact(pl);
     lines.push({
       kind: "path",
       id: `${nodeId}-line`,
-      d: pathDataCompact(pl),
+      d,
+      writtenD: d,
       stroke: colour,
       strokeWidth: lw,
       dash,
@@ -99,10 +103,12 @@ export function curveGeometry(curve: Curve, f: CurveFrame, nodeId: string): Curv
       data: { ...data },
     });
   } else {
+    const d = pathDataCompact(pl);
     fills.push({
       kind: "path",
       id: `${nodeId}-region`,
-      d: pathDataCompact(pl),
+      d,
+      writtenD: d,
       fill: colour,
       fillOpacity: opacity,
       stroke: colour,

@@ -63,7 +63,7 @@ export function placementCurve<C extends Pick<Curve, "role" | "keepOrder" | "mas
   }
   let arrays = bySlope.get(slope);
   if (!arrays) {
-    const order = viewArrays(prep, slope, curve.role === "region").order as Int32Array;
+    const order = viewArrays(prep, slope).order as Int32Array;
     const keep = order.slice(0, PLACEMENT_MAX_POINTS).sort();
     const massEv = new Float64Array(keep.length);
     const gInvGeV = new Float64Array(keep.length);

@@ -120,7 +120,8 @@ export function modelGeometry(model: Model, f: ModelFrame, nodeId: string): Mode
   const shapes: Shape[] = [];
   // Each node with the polylines its path data is written from.
   const add = (to: PathNode[], node: Omit<PathNode, "d">, polys: Polyline[]) => {
-    const full: PathNode = { ...node, d: polys.map((p) => pathData(p)).join("") };
+    const d = polys.map((p) => pathData(p)).join("");
+    const full: PathNode = { ...node, d, writtenD: d };
     to.push(full);
     shapes.push(pathShape(full, polys.map(atHundredths)));
   };

@@ -171,33 +171,7 @@ export function writeAscii(s: string): void {
   for (let i = 0; i < s.length; i++) buf[pos++] = s.charCodeAt(i) & 0x7f;
 }
 
-// The latest paths written here, so that the SVG writer's check of path data (isSafePathData in svg.ts) need
-// not rescan tens of thousands of characters per curve on every frame: what this module writes holds only
-// command letters, digits, "-", "." and spaces by construction. A short ring compared by identity (the
-// screen checks a frame's paths right after building them), not a hashed set: hashing costs a pass over
-// every string, and a set holding many frames keeps their strings alive through the young-generation
-// collections, which then copy them. Bounded to RECENT_MAX paths and RECENT_MAX_CHARS characters.
-const RECENT_MAX = 256;
-const RECENT_MAX_CHARS = 8_000_000;
-const recent: string[] = [];
-let recentChars = 0;
-
 /** The path written since beginPath(). */
 export function finishPath(): string {
-  const d = decoder.decode(buf.subarray(0, pos));
-  // Short paths are checked faster than remembered.
-  if (d.length >= 256 && d.length <= RECENT_MAX_CHARS / 4) {
-    recent.push(d);
-    recentChars += d.length;
-    while (recent.length > RECENT_MAX || recentChars > RECENT_MAX_CHARS)
-      recentChars -= (recent.shift() as string).length;
-  }
-  return d;
-}
-
-/** Whether `d` equals path data lately returned by finishPath (so it is well-formed and safe by construction). */
-export function isRecentPath(d: string): boolean {
-  // Newest first: the caller almost always asks about the paths it has just built.
-  for (let i = recent.length - 1; i >= 0; i--) if (recent[i] === d) return true;
-  return false;
+  return decoder.decode(buf.subarray(0, pos));
 }

@@ -7,6 +7,7 @@ import {
   installPrepared,
   prepareCurve,
   viewArrays,
+  viewsOf,
   type PreparedCurve,
   type ViewArrays,
 } from "./thinning/index";
@@ -35,6 +36,7 @@ export interface PreparedTransfer {
   n: number;
   skipped: number;
   sorted: boolean;
+  index: Uint32Array;
   lm: Float64Array;
   lg: Float64Array;
   views: ViewTransfer[];
@@ -43,14 +45,11 @@ export interface PreparedTransfer {
 export interface ComputePreparedOpts {
   /** y-view slopes to build the view arrays of (the figure's current view is enough). @default [0] */
   slopes?: readonly number[];
-  /** The curve is a closed region (as curveGeometry passes it). @default !sorted */
-  closed?: boolean;
 }
 
 /** What to prepare for one curve: its drawing order and the y views it will be drawn in first. */
 export interface PrepareSpec {
   sorted: boolean;
-  closed: boolean;
   slopes: number[];
 }
 
@@ -66,7 +65,6 @@ export function prepareSpecOf(
   const view: YView = yView === "normalized" || yView === "g-gamma" ? yView : "coupling";
   return {
     sorted: drawsSorted(curve),
-    closed: curve.role === "region",
     slopes: [viewTransform(view, constantsOf(physics)).slope],
   };
 }
@@ -85,11 +83,10 @@ export function computePrepared(
   opts: ComputePreparedOpts = {},
 ): PreparedTransfer {
   const prep = prepareCurve(massEv, gInvGeV, sorted);
-  const closed = opts.closed ?? !sorted;
   const views: ViewTransfer[] = [];
   for (const slope of new Set(opts.slopes ?? [0])) {
     if (!Number.isFinite(slope)) continue;
-    const va = viewArrays(prep, slope, closed);
+    const va = viewArrays(prep, slope);
     views.push({
       slope,
       v: va.v === prep.lg ? null : va.v,
@@ -101,7 +98,7 @@ export function computePrepared(
       impDesc: va.impDesc,
     });
   }
-  return { n: prep.n, skipped: prep.skipped, sorted, lm: prep.lm, lg: prep.lg, views };
+  return { n: prep.n, skipped: prep.skipped, sorted, index: prep.index, lm: prep.lm, lg: prep.lg, views };
 }
 
 /** The distinct buffers of a transfer, for postMessage's transfer list (a buffer listed twice would throw). */
@@ -110,6 +107,7 @@ export function preparedTransferables(t: PreparedTransfer): ArrayBuffer[] {
   const add = (a: ArrayBufferView | null) => {
     if (a && a.buffer instanceof ArrayBuffer) seen.add(a.buffer);
   };
+  add(t.index);
   add(t.lm);
   add(t.lg);
   for (const v of t.views) {
@@ -145,20 +143,25 @@ export function seedPreparedCurve(
   sorted: boolean,
   t: PreparedTransfer,
 ): boolean {
-  const len = Math.min(massEv.length, gInvGeV.length);
-  const fits = t.sorted === sorted && t.n + t.skipped === len && t.lm.length === t.n && t.lg.length === t.n;
+  const len = Math.max(massEv.length, gInvGeV.length);
+  const fits =
+    t.sorted === sorted &&
+    t.n + t.skipped === len &&
+    t.index?.length === t.n &&
+    t.lm.length === t.n &&
+    t.lg.length === t.n;
   const cached = cachedPrepared(massEv, gInvGeV, sorted);
   if (cached) {
     // The same arrays give the same preparation (computePrepared runs the same code), so the views fit it.
+    const views = viewsOf(cached);
     if (fits && cached.n === t.n)
-      for (const v of t.views)
-        if (!cached.views.has(v.slope) && viewOk(t, v)) cached.views.set(v.slope, viewOf(v, cached.lg));
+      for (const v of t.views) if (!views.has(v.slope) && viewOk(t, v)) views.set(v.slope, viewOf(v, cached.lg));
     return true;
   }
   if (!fits) return false;
-  const views = new Map<number, ViewArrays>();
+  const prep: PreparedCurve = { n: t.n, skipped: t.skipped, index: t.index, lm: t.lm, lg: t.lg, sorted };
+  const views = viewsOf(prep);
   for (const v of t.views) if (viewOk(t, v)) views.set(v.slope, viewOf(v, t.lg));
-  const prep: PreparedCurve = { n: t.n, skipped: t.skipped, lm: t.lm, lg: t.lg, sorted, views };
   installPrepared(massEv, gInvGeV, prep);
   return true;
 }
@@ -183,5 +186,5 @@ function viewOf(v: ViewTransfer, lg: Float64Array): ViewArrays {
 /** Whether the curve's preparation for the spec's order and y views is already cached (nothing to build). */
 export function hasPrepared(massEv: Float64Array, gInvGeV: Float64Array, spec: PrepareSpec): boolean {
   const prep = cachedPrepared(massEv, gInvGeV, spec.sorted);
-  return !!prep && spec.slopes.every((s) => prep.views.has(s));
+  return !!prep && spec.slopes.every((s) => viewsOf(prep).has(s));
 }

@@ -15,6 +15,12 @@ export interface PathNode {
    * M, then relative l/h/v moves, fractions without a leading zero); everything else absolute M/L/H/V/Z.
    */
   d: string;
+  /**
+   * The path data as path-writer.ts returned it (only command letters, digits, signs, dots and spaces by
+   * construction), set by the plot core: while `d` is this same string the SVG writers take it without
+   * rescanning every curve per frame; a `d` changed afterwards is checked like any other.
+   */
+  writtenD?: string;
   stroke?: string;
   strokeWidth?: number;
   strokeOpacity?: number;

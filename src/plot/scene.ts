@@ -351,6 +351,7 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
         kind: "path",
         id: `highlight-halo-${k + 1}`,
         d: node.d,
+        writtenD: node.writtenD,
         stroke: node.stroke ?? node.fill ?? "#1f3b57",
         strokeWidth: r2((node.strokeWidth ?? fonts.dataLinePx) * 3),
         strokeOpacity: 0.35,

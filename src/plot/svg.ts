@@ -3,7 +3,6 @@
 import type { Scene, SceneLayer, SceneNode, TextNode } from "./scene-types";
 import { r2, safeColour } from "./format";
 import { placeRuns } from "./text";
-import { isRecentPath } from "./path-writer";
 
 /** XML-escape text and attribute values: & < > " ' (so nothing in a label can open a tag or end an attribute). */
 export function escapeXml(s: string): string {
@@ -36,11 +35,9 @@ const PATH_CHARS = (() => {
 
 /**
  * True when path data holds only path commands, digits, signs, dots, commas and spaces (nothing that could
- * close the attribute or reference anything). A table lookup: this runs over every curve on every frame.
+ * close the attribute or reference anything). A table lookup; path data a node holds as `writtenD` skips it.
  */
 export function isSafePathData(d: string): boolean {
-  // Path data just written by path-writer.ts is safe by construction: no rescan of every curve per frame.
-  if (isRecentPath(d)) return true;
   for (let i = 0; i < d.length; i++) {
     const c = d.charCodeAt(i);
     if (c >= 128 || PATH_CHARS[c] === 0) return false;
@@ -155,7 +152,8 @@ function pushData(out: SvgAttribute[], data: Record<string, string> | undefined)
 export function nodeAttributes(n: SceneNode): SvgAttribute[] {
   const out: SvgAttribute[] = [];
   if (n.kind === "path") {
-    push(out, "d", isSafePathData(n.d) ? n.d : "");
+    // Identity first: the same string object compares in O(1); a changed d is scanned.
+    push(out, "d", n.d === n.writtenD || isSafePathData(n.d) ? n.d : "");
     push(out, "fill", paint(n.fill) ?? "none");
     push(out, "fill-opacity", num(n.fillOpacity));
     if (n.stroke) {

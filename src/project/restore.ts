@@ -33,6 +33,7 @@ import {
   topAxis,
   yView,
 } from "./schema";
+import { MIN_RANGE_DECADES, saneRange } from "./view-range";
 import {
   PROJECT_VERSION,
   type Curve,
@@ -123,14 +124,23 @@ function text(v: unknown, max: number, note: Note, what: string): string | undef
   return t;
 }
 
-/** A [low, high] pair of positive finite numbers; a reversed pair is swapped (noted), an empty one invalid. */
+/**
+ * A [low, high] pair of positive finite numbers; a reversed pair is swapped, one too narrow to draw (or beyond
+ * 10^±300) is widened (both noted), an empty one is invalid.
+ */
 function range(v: unknown, note: Note, what: string): [number, number] | undefined {
   if (v === undefined) return undefined;
   if (!Array.isArray(v) || v.length !== 2) return invalid(note, what, v);
   const [a, b] = v as unknown[];
   if (!isFiniteNumber(a) || !isFiniteNumber(b) || a <= 0 || b <= 0 || a === b) return invalid(note, what, v);
   if (a > b) note(what, "low and high were swapped");
-  return a < b ? [a, b] : [b, a];
+  const sane = saneRange([a, b]) ?? [Math.min(a, b), Math.max(a, b)];
+  if (sane[0] !== Math.min(a, b) || sane[1] !== Math.max(a, b))
+    note(
+      what,
+      `[${a}, ${b}] cannot be drawn (narrower than ${MIN_RANGE_DECADES} decades or beyond 10^±300); set to [${sane[0]}, ${sane[1]}]`,
+    );
+  return sane;
 }
 
 /** E/N as stored (a string); a finite number from a hand-edited file is turned into text. Error text when bad. */

@@ -1,26 +1,12 @@
 // The project schema (zod): the strict form of the current version, and the field rules the restore step
 // (./restore.ts) reads untrusted input with.
 import { z } from "zod";
-import { MAX_RATIONAL_CHARS, isRationalText, rationalValue } from "./rational-text";
+import { PROJECT_LIMITS } from "./limits";
+import { isRationalText, rationalValue } from "./rational-text";
 import { PROJECT_VERSION } from "./types";
+import { MIN_RANGE_DECADES, saneRange } from "./view-range";
 
-export { isRationalText, rationalValue };
-
-/** Size limits of a project; anything beyond is refused (or, for text, cut) rather than trusted. */
-export const PROJECT_LIMITS = {
-  models: 500,
-  curves: 500,
-  /** Points per curve. */
-  points: 5_000_000,
-  fermions: 200,
-  id: 100,
-  label: 500,
-  citation: 100_000,
-  fileName: 1_000,
-  rational: MAX_RATIONAL_CHARS,
-  /** Members of a model set or between-lines band (distinct E/N values). */
-  members: 20_000,
-} as const;
+export { PROJECT_LIMITS, isRationalText, rationalValue };
 
 // ---------------------------------------------------------------------------------------------- building blocks
 
@@ -121,7 +107,12 @@ export const curveData = z.unknown().transform((v, ctx) => {
 
 const positiveRange = z
   .tuple([z.number().positive(), z.number().positive()])
-  .refine(([lo, hi]) => lo < hi, "expected [low, high] with low < high");
+  .refine(([lo, hi]) => lo < hi, "expected [low, high] with low < high")
+  .refine((r) => sameRange(saneRange(r), r), `expected at least ${MIN_RANGE_DECADES} decades within 10^±300`);
+
+function sameRange(a: readonly [number, number] | null, b: readonly [number, number]): boolean {
+  return a !== null && a[0] === b[0] && a[1] === b[1];
+}
 
 // ----------------------------------------------------------------------------------------------- strict schema
 

@@ -1,11 +1,10 @@
 // The application shell: header (name, undo/redo, project and export menus), the sidebar with collapsible
 // sections (models, curves, figure settings, constants), and the main area (figure, readout, overlap, sources).
+import { lazy, Suspense } from "react";
 import { CurvesPanel } from "./curves/CurvesPanel";
 import { ImportDialog } from "./importer/ImportDialog";
 import { ExportMenu } from "./export/ExportMenu";
 import { ProjectMenu } from "./share/ProjectMenu";
-import { OverlapPanel } from "./overlap/OverlapPanel";
-import { SourcesPanel } from "./sources/SourcesPanel";
 import { Messages } from "./layout/Messages";
 import { Section } from "./layout/Section";
 import { UndoRedo, useUndoKeys } from "./layout/UndoRedo";
@@ -16,6 +15,18 @@ import { FigureView } from "./figure/FigureView";
 import { FigureBoundary } from "./figure/FigureBoundary";
 import { selectProject, useAxband } from "./store";
 import { HoverReadout } from "./figure/HoverReadout";
+
+// Below the figure and not needed to draw it: loaded after the first figure, each with a loading note.
+const OverlapPanel = lazy(() => import("./overlap/OverlapPanel").then((m) => ({ default: m.OverlapPanel })));
+const SourcesPanel = lazy(() => import("./sources/SourcesPanel").then((m) => ({ default: m.SourcesPanel })));
+
+function Loading({ what }: { what: string }) {
+  return (
+    <p className="note loading" role="status">
+      Loading {what}…
+    </p>
+  );
+}
 
 /** The figure inside its error boundary (a new project retries after a drawing failure). */
 function Figure() {
@@ -66,8 +77,12 @@ export function App() {
             and on the curves you import. Take experimental curves from their original publications and credit those
             publications when you show a figure.
           </p>
-          <OverlapPanel />
-          <SourcesPanel />
+          <Suspense fallback={<Loading what="the overlap table" />}>
+            <OverlapPanel />
+          </Suspense>
+          <Suspense fallback={<Loading what="the sources" />}>
+            <SourcesPanel />
+          </Suspense>
         </main>
       </div>
       <ImportDialog />

@@ -1,15 +1,8 @@
 // Main-thread side of the curve import: runs parses in the import Web Worker (one shared worker, jobs by id)
 // with progress and cancel, and falls back to sliced parsing on the calling thread where Workers do not exist.
 // A curve's drawing preparation built in the worker is put into the plot cache here as the result arrives.
-import {
-  checkImportFile,
-  createCurveParser,
-  ImportCancelled,
-  parseCurveSource,
-  type CurveParseOptions,
-  type CurveParseResult,
-  type ImportProgress,
-} from "../formats/csv";
+import type { CurveParseOptions, CurveParseResult, ImportProgress } from "../formats/csv";
+import { ImportCancelled } from "../formats/csv/cancel";
 import { seedPreparedCurve, type PrepareSpec, type PreparedTransfer } from "../plot/prepare-transfer";
 
 /** Messages to the worker. */
@@ -126,12 +119,16 @@ export function disposeImportWorker(): void {
   preparing.clear();
 }
 
-function onMainThread(
+// The parser itself loads only where this thread parses (no worker, or a preview), apart from the first figure.
+const loadParser = () => import("../formats/csv");
+
+async function onMainThread(
   source: File | Blob | string | ArrayBuffer,
   opts: CurveParseOptions,
   onProgress: ProgressCallback | undefined,
   signal: AbortSignal,
 ): Promise<CurveParseResult> {
+  const { parseCurveSource } = await loadParser();
   // Short slices keep the page responsive even without a worker.
   return parseCurveSource(source, opts, {
     signal,
@@ -224,6 +221,7 @@ export const PREVIEW_BYTES = 64 * 1024;
 export async function previewFile(file: Blob, opts: CurveParseOptions = {}): Promise<CurveParseResult> {
   const o: CurveParseOptions = { ...opts };
   if (o.fileName === undefined && typeof File === "function" && file instanceof File) o.fileName = file.name;
+  const { checkImportFile, createCurveParser } = await loadParser();
   const bytes = new Uint8Array(await file.slice(0, PREVIEW_BYTES).arrayBuffer());
   const check = checkImportFile({ name: o.fileName, size: file.size, firstBytes: bytes.subarray(0, 4096) });
   if (!check.ok) {

@@ -26,7 +26,7 @@ function prepareFor(
 ): PreparedTransfer | null {
   if (!spec || massEv.length === 0) return null;
   try {
-    return computePrepared(massEv, gInvGeV, spec.sorted, { slopes: spec.slopes, closed: spec.closed });
+    return computePrepared(massEv, gInvGeV, spec.sorted, { slopes: spec.slopes });
   } catch {
     return null;
   }

@@ -35,6 +35,27 @@ const legendTexts = (page: Page) =>
     .evaluateAll((els) => els.map((e) => e.getAttribute("data-legend-entry") ?? ""));
 const massDomain = (page: Page) => page.locator('[data-testid="plot"] svg').getAttribute("data-mass-domain");
 
+/** The autosaved text in localStorage, parsed ({} when nothing is saved yet). */
+const savedMeta = (page: Page) =>
+  page.evaluate(() => JSON.parse(localStorage.getItem("axband:project") ?? "{}") as Record<string, unknown>);
+
+/** The keys IndexedDB holds for stored curve data (the curve's own record and its chunks). */
+const storedCurveKeys = (page: Page) =>
+  page.evaluate(
+    () =>
+      new Promise<string[]>((resolve, reject) => {
+        const req = indexedDB.open("axband");
+        req.onerror = () => reject(req.error);
+        req.onsuccess = () => {
+          const db = req.result;
+          if (!db.objectStoreNames.contains("curves")) return resolve([]);
+          const keys = db.transaction("curves").objectStore("curves").getAllKeys();
+          keys.onsuccess = () => resolve(keys.result.map(String));
+          keys.onerror = () => reject(keys.error);
+        };
+      }),
+  );
+
 async function addModel(page: Page, text: string) {
   await page.getByTestId("model-eovern").fill(text);
   await page.getByTestId("add-model").click();
@@ -48,7 +69,14 @@ describe("autosave", () => {
     await page.keyboard.press("+");
     await expect.poll(() => legendTexts(page)).toContain("E/N = 5/3..44/3 (reaches g = 0: cancellation)");
     const zoomed = await massDomain(page);
-    await page.waitForTimeout(800); // past the 300 ms debounce
+    // Saved after the debounce: wait until the stored text holds the new model and the zoomed view.
+    await expect
+      .poll(async () => {
+        const meta = await savedMeta(page);
+        const figure = meta.figure as { massRangeEv?: number[] } | undefined;
+        return JSON.stringify(meta).includes("5/3..44/3") && figure?.massRangeEv?.join(",") === zoomed;
+      })
+      .toBe(true);
     await page.reload({ waitUntil: "networkidle" });
     await page.locator('[data-testid="plot"] svg').waitFor();
     const texts = await legendTexts(page);
@@ -83,7 +111,13 @@ describe("autosave", () => {
       const path = page.locator(`[data-testid="plot"] path[data-curve-id="${curveId}"]`).first();
       const before = await path.getAttribute("d");
       expect((before ?? "").length).toBeGreaterThan(1000);
-      await page.waitForTimeout(2000); // debounce, then one chunk per task
+      // Saved after the debounce, one chunk per task: wait for the head and all three 65,536-point chunks.
+      await expect
+        .poll(async () => (await storedCurveKeys(page)).filter((k) => k.startsWith(curveId!)).length, {
+          timeout: 30_000,
+        })
+        .toBe(4);
+      await expect.poll(async () => JSON.stringify(await savedMeta(page)).includes(curveId!)).toBe(true);
       await page.reload({ waitUntil: "networkidle" });
       await page.locator('[data-testid="legend"] [data-legend-entry="chunked (invented)"]').waitFor();
       expect(
@@ -99,14 +133,20 @@ describe("autosave", () => {
 
   test("full storage: one alert, and the app keeps working", async () => {
     const { context, page, watched } = await open(() => {
+      const w = window as unknown as { __saveTries: number };
+      w.__saveTries = 0;
       Storage.prototype.setItem = function () {
+        w.__saveTries += 1;
         throw new DOMException("The quota has been exceeded.", "QuotaExceededError");
       };
     });
+    const saveTries = () => page.evaluate(() => (window as unknown as { __saveTries: number }).__saveTries);
+    // Two changes, each after the other's save was tried: two failed saves, one alert.
     await addModel(page, "2/3");
-    await page.waitForTimeout(500);
+    await expect.poll(saveTries).toBeGreaterThanOrEqual(1);
+    const tries = await saveTries();
     await addModel(page, "8/3..16/3");
-    await page.waitForTimeout(500);
+    await expect.poll(saveTries).toBeGreaterThan(tries);
     const alerts = page.getByRole("alert");
     await expect.poll(() => alerts.count()).toBe(1);
     expect(await alerts.first().textContent()).toMatch(/storage is full or unavailable/i);

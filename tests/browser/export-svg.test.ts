@@ -79,7 +79,9 @@ test("the SVG download is self-contained, valid XML at a physical size, and labe
   expect(await page.textContent('[data-testid="import-detected"]')).toContain(SCRIPT);
   await page.click('[data-testid="import-confirm"]');
   await page.waitForSelector(`[data-testid="curve-item"] >> nth=-1`);
-  await page.waitForTimeout(300);
+  // Wait for the figure to draw the new curve (the export is made from the same project).
+  const curveId = await page.locator('[data-testid="curve-item"]').last().getAttribute("data-curve-id");
+  await page.waitForSelector(`[data-testid="plot"] path[data-curve-id="${curveId}"]`);
 
   const { name, text } = await exportSvg(page);
   expect(name).toMatch(/\.svg$/);

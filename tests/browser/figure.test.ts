@@ -148,11 +148,16 @@ describe("zoom and pan", () => {
     const f0 = await frameOf(page);
     const svgBox = (await page.locator('[data-testid="plot"] svg').boundingBox())!;
     await page.mouse.move(svgBox.x + svgBox.width * 0.55, svgBox.y + svgBox.height * 0.5);
-    for (let i = 0; i < 6; i++) {
-      await page.mouse.wheel(0, -200);
-      await page.waitForTimeout(30);
-    }
-    await expect.poll(async () => (await frameOf(page)).mass[1]).toBeLessThan(f0.mass[1]);
+    for (let i = 0; i < 6; i++) await page.mouse.wheel(0, -200);
+    // All six steps, however the frames batch them: each narrows the span by exp(−200 px · 0.002 per px)
+    // (the figure's wheel rate), six of them by exp(−2.4).
+    const span0 = Math.log10(f0.mass[1] / f0.mass[0]);
+    await expect
+      .poll(async () => {
+        const f = await frameOf(page);
+        return Math.log10(f.mass[1] / f.mass[0]) / span0;
+      })
+      .toBeCloseTo(Math.exp(-2.4), 6);
     const f1 = await frameOf(page);
     expect(Math.log10(f1.mass[1] / f1.mass[0])).toBeLessThan(Math.log10(f0.mass[1] / f0.mass[0]) * 0.5);
     expect(Math.log10(f1.y[1] / f1.y[0])).toBeLessThan(Math.log10(f0.y[1] / f0.y[0]) * 0.5);

@@ -32,7 +32,7 @@ test("a copied link reopens the same figure in a fresh context; a tampered link 
   await a.page.waitForSelector('[role="status"]:has-text("Link copied")');
   const link = await a.page.inputValue('[data-testid="share-link-field"]');
   expect(link.startsWith(inject("baseUrl"))).toBe(true);
-  expect(link).toMatch(/#v2\.[A-Za-z0-9_-]+$/);
+  expect(link).toMatch(/#v3\.[A-Za-z0-9_-]+\.[A-Za-z0-9_-]{6}$/);
   expect(await a.page.evaluate(() => navigator.clipboard.readText())).toBe(link);
   await a.page.screenshot({ path: "/tmp/axband-ui-b-share-link.png" });
   await a.page.keyboard.press("Escape");

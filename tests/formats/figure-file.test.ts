@@ -86,8 +86,8 @@ describe("exportFigureSvg", () => {
     expect(el).toHaveLength(1);
     expect(el[0].parentNode?.nodeName).toBe("metadata");
     expect(el[0].getAttribute("encoding")).toBe(EMBED_ENCODING);
-    // "v2." and the base64url alphabet only (RFC 4648 §5), so the payload needs no XML escaping.
-    expect(el[0].textContent).toMatch(/^v2\.[A-Za-z0-9_-]+$/);
+    // "v3.", the base64url alphabet only (RFC 4648 §5) and "." before the checksum: no XML escaping needed.
+    expect(el[0].textContent).toMatch(/^v3\.[A-Za-z0-9_-]+\.[A-Za-z0-9_-]{6}$/);
     expect(exportFigureSvg(canonical(), { embedProject: false })).not.toContain(AXBAND_PROJECT_NS);
   });
 
@@ -139,8 +139,8 @@ describe("extractProjectFromSvg", () => {
       ["not svg at all", /not an SVG/],
       [exportFigureSvg(canonical(), { embedProject: false }), /carries no axband project/],
       [
-        svg.replace(/(encoding="deflate-base64url"[^>]*>v2\.)[A-Za-z0-9_-]{20}/, "$1AAAAAAAAAAAAAAAAAAAA"),
-        /cannot be read/,
+        svg.replace(/(encoding="deflate-base64url"[^>]*>v3\.)[A-Za-z0-9_-]{20}/, "$1AAAAAAAAAAAAAAAAAAAA"),
+        /the project embedded in this SVG is damaged \(its checksum does not match/,
       ],
       [svg.replace(`encoding="${EMBED_ENCODING}"`, 'encoding="rot13"'), /unknown encoding/],
     ];

@@ -145,9 +145,10 @@ const curve: fc.Arbitrary<Omit<Curve, "id">> = fc
     gInvGeV: Float64Array.from(points, (p) => p[1]),
   }));
 
+// A range the figure can draw (the schema's rule): ends at least 0.02 decades apart, within 10^±300.
 const range = fc
   .tuple(positive, positive)
-  .filter(([a, b]) => a !== b)
+  .filter(([a, b]) => Math.abs(Math.log10(a) - Math.log10(b)) >= 0.02 && Math.min(a, b) >= 1e-300)
   .map(([a, b]) => (a < b ? [a, b] : [b, a]) as [number, number]);
 
 const figure: fc.Arbitrary<Figure> = fc.record({

@@ -3,6 +3,7 @@
 import { Buffer } from "node:buffer";
 import { deflateSync, inflateSync } from "fflate";
 import { describe, expect, it } from "vitest";
+import { linkPayload } from "./link-parts";
 import {
   LINK_MAX_CHARS,
   LINK_MAX_DECODED_BYTES,
@@ -57,12 +58,12 @@ describe("encodeLink / decodeLink", () => {
   it("the demo state's link without curve data is at most 300 characters", () => {
     const link = encodeLink(defaultProject(), { includeCurves: false });
     expect(link.length).toBeLessThanOrEqual(300);
-    expect(link).toMatch(/^v2\.[A-Za-z0-9_-]+$/);
+    expect(link).toMatch(/^v3\.[A-Za-z0-9_-]+\.[A-Za-z0-9_-]{6}$/);
   });
 
   it("the payload is raw DEFLATE of UTF-8 JSON with short keys (readable by any inflater)", () => {
     const link = encodeLink(defaultProject(), { includeCurves: false });
-    const json = new TextDecoder().decode(inflateSync(Buffer.from(link.slice(3), "base64url")));
+    const json = new TextDecoder().decode(inflateSync(Buffer.from(linkPayload(link), "base64url")));
     const compact = JSON.parse(json) as Record<string, unknown>;
     expect(Object.keys(compact).sort()).toEqual(["f", "m", "n", "o"]);
     // The demo's figure differs from the frozen v1 base only in its legend: "auto" is newer than the base "bottom-right".
@@ -274,7 +275,7 @@ describe("large links", () => {
     const g = Float64Array.from({ length: 20_000 }, () => 1e-14 * (1 + rnd()));
     const p: Project = { ...defaultProject(), curves: [newCurve({ id: "big", massEv: m, gInvGeV: g })] };
     const link = encodeLink(p);
-    const json = inflateSync(Buffer.from(link.slice(3), "base64url"));
+    const json = inflateSync(Buffer.from(linkPayload(link), "base64url"));
     expect(json.length).toBeGreaterThan(256 * 1024);
     const r = decodeLink(link);
     expect(r.ok && projectsEqual(r.project, p)).toBe(true);

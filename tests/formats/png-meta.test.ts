@@ -4,8 +4,8 @@ import { describe, expect, it } from "vitest";
 import { crc32 as zlibCrc32, inflateSync } from "node:zlib";
 import fc from "fast-check";
 import { Resvg } from "@resvg/resvg-js";
+import { crc32 } from "../../src/formats/crc32";
 import {
-  crc32,
   dpiToPixelsPerMetre,
   listPngChunks,
   pixelsPerMetreToDpi,

@@ -79,10 +79,7 @@ function copies(curves: Curve[]): Curve[] {
 /** What the import worker does: prepare its own copy of the arrays and post it, transferring every buffer. */
 function viaWorker(c: Curve, yView: YView) {
   const spec = prepareSpecOf(c, yView);
-  const t = computePrepared(c.massEv.slice(), c.gInvGeV.slice(), spec.sorted, {
-    slopes: spec.slopes,
-    closed: spec.closed,
-  });
+  const t = computePrepared(c.massEv.slice(), c.gInvGeV.slice(), spec.sorted, { slopes: spec.slopes });
   const buffers = preparedTransferables(t);
   // structuredClone with a transfer list follows postMessage's rules: a buffer listed twice would throw.
   const moved = structuredClone(t, { transfer: buffers });
@@ -133,10 +130,7 @@ describe("seeding a curve prepared elsewhere", () => {
       expect(cached).toBeDefined();
       expect(hasPrepared(c.massEv, c.gInvGeV, specN)).toBe(false);
       // The worker's reply for the normalized view is merged into that entry, which stays the one drawn from.
-      const t = computePrepared(c.massEv.slice(), c.gInvGeV.slice(), specN.sorted, {
-        slopes: specN.slopes,
-        closed: specN.closed,
-      });
+      const t = computePrepared(c.massEv.slice(), c.gInvGeV.slice(), specN.sorted, { slopes: specN.slopes });
       expect(seedPreparedCurve(c.massEv, c.gInvGeV, specN.sorted, t)).toBe(true);
       expect(cachedPrepared(c.massEv, c.gInvGeV, spec0.sorted)).toBe(cached);
       expect(hasPrepared(c.massEv, c.gInvGeV, specN)).toBe(true);

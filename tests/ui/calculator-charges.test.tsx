@@ -64,6 +64,28 @@ describe("charges from the Lagrangian", () => {
   });
 });
 
+test("a second heavy quark without a Yukawa: E/N is not determined, and its free charges are offered as a scan", async () => {
+  const user = userEvent.setup();
+  render(<AnomalyCalculator />);
+  for (const n of [1, 2]) {
+    await user.click(screen.getByRole("button", { name: "+ Fermion" }));
+    const name = screen.getByRole("textbox", { name: `Name of fermion ${n + 2}` });
+    await user.type(name, n === 1 ? "Q2_L" : "Q2_R");
+  }
+  await user.selectOptions(screen.getByRole("combobox", { name: "Chirality of Q2_R" }), "R");
+  // (3,1,2/3) beside (3,1,0): with Y = 0 for both, E = 0 for any charges and E/N = 0 would still be fixed.
+  for (const name of ["Hypercharge Y of Q2_L", "Hypercharge Y of Q2_R"]) {
+    await user.clear(screen.getByRole("textbox", { name }));
+    await user.type(screen.getByRole("textbox", { name }), "2/3");
+  }
+  await typeTerms(user, "Qbar_L Phi Q_R");
+  expect(screen.getByTestId("charge-report")).toHaveTextContent("E/N is not determined");
+  expect(screen.getByTestId("charge-report")).toHaveTextContent("Q2_L, Q2_R");
+  await user.click(screen.getByTestId("scan-free"));
+  expect(screen.getByRole("textbox", { name: "PQ charge of Q2_L" })).toHaveValue("{-1, 0, 1}");
+  expect(screen.getByRole("button", { name: "Scan every combination" })).toBeInTheDocument();
+});
+
 describe("calculator comforts", () => {
   test("β is typed as in papers; singlet rows have no β field; the breakdown shows n_w", async () => {
     const user = userEvent.setup();

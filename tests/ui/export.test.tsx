@@ -80,3 +80,24 @@ describe("PNG sizes", () => {
     expect(pngTarget(s, "2x").dpi).toBeCloseTo(650 / (8.6 / 2.54), 9);
   });
 });
+
+describe("file names", () => {
+  test("a project that kept the demo's name but none of its content exports as axband-figure", async () => {
+    const downloads = captureDownloads();
+    useProject({ ...defaultProject(), models: [], curves: [] });
+    render(<ExportMenu />);
+    fireEvent.click(screen.getByTestId("export-svg"));
+    await waitFor(() => expect(downloads).toHaveLength(1));
+    expect(downloads[0].fileName).toBe("axband-figure.svg");
+  });
+
+  test("the name is editable in the export menu and names the next export", async () => {
+    const downloads = captureDownloads();
+    render(<ExportMenu />);
+    fireEvent.click(screen.getByTestId("export-menu"));
+    fireEvent.change(screen.getByRole("textbox", { name: "Project name" }), { target: { value: "Cavity run 3" } });
+    fireEvent.click(screen.getByTestId("export-svg"));
+    await waitFor(() => expect(downloads).toHaveLength(1));
+    expect(downloads[0].fileName).toBe("Cavity run 3.svg");
+  });
+});

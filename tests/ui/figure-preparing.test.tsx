@@ -87,10 +87,7 @@ function savedProject(project: Project) {
 
 /** What the worker sends back: the same preparation, built from copies of the arrays. */
 function workerReply(c: Curve, spec: PrepareSpec): PreparedTransfer {
-  return computePrepared(c.massEv.slice(), c.gInvGeV.slice(), spec.sorted, {
-    slopes: spec.slopes,
-    closed: spec.closed,
-  });
+  return computePrepared(c.massEv.slice(), c.gInvGeV.slice(), spec.sorted, { slopes: spec.slopes });
 }
 
 const curvePaths = (id: string) => screen.getByTestId("plot").querySelectorAll(`path[data-curve-id="${id}"]`);
@@ -117,7 +114,7 @@ describe("a big curve restored from autosave", () => {
     expect(worker.calls).toHaveLength(1);
     expect(worker.calls[0].massEv).toBe(restored.massEv);
     expect(worker.calls[0].gInvGeV).toBe(restored.gInvGeV);
-    expect(worker.calls[0].spec).toEqual({ sorted: true, closed: false, slopes: [0] });
+    expect(worker.calls[0].spec).toEqual({ sorted: true, slopes: [0] });
 
     render(<FigureView />);
     // Not drawn yet, and the figure says why; the store keeps the whole curve for exports and the table.
@@ -173,7 +170,7 @@ describe("a big curve restored from autosave", () => {
     // A region is drawn in file order: another preparation, again built in the worker.
     await act(async () => useAxband.getState().updateCurve("big", { role: "region" }));
     expect(worker.calls).toHaveLength(2);
-    expect(worker.calls[1].spec).toEqual({ sorted: false, closed: true, slopes: [0] });
+    expect(worker.calls[1].spec).toEqual({ sorted: false, slopes: [0] });
     expect(curvePaths("big")).toHaveLength(0);
     expect(screen.getByTestId("figure-preparing")).toBeInTheDocument();
     const reply = workerReply(restored, worker.calls[1].spec);

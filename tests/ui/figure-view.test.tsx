@@ -3,7 +3,7 @@
 // also after updating in place from one scene to the next, keyboard zoom and reset go
 // through the store, and zooming does not re-render the sidebar panels (zustand's documented selector model:
 // a component re-renders only when the slice it selects changes).
-import { beforeEach, describe, expect, test } from "vitest";
+import { beforeEach, describe, expect, onTestFinished, test, vi } from "vitest";
 import { Profiler } from "react";
 import { act, fireEvent, render, screen } from "@testing-library/react";
 import { buildScene } from "../../src/plot/scene";
@@ -142,6 +142,11 @@ describe("FigureView", () => {
     ];
     p.figure = { ...p.figure, massRangeEv: [1e-7, 1e-2], yRange: [1e-17, 1e-9], legend: "auto" };
     resetStore(p);
+    // Only the timeouts are faked: frames stay real (jsdom's requestAnimationFrame).
+    vi.useFakeTimers({ toFake: ["setTimeout", "clearTimeout"] });
+    onTestFinished(() => {
+      vi.useRealTimers();
+    });
     render(<FigureView />);
     const svg = screen.getByTestId("plot").querySelector("svg")!;
     const boxX = () => Number(svg.querySelector('rect[id$="legend-box"]')!.getAttribute("x"));
@@ -156,7 +161,10 @@ describe("FigureView", () => {
     // Moved, but the legend stays where it was...
     expect(boxX()).toBe(start);
     // ...until the view has rested: then it goes where a fresh placement puts it, as the export would.
-    await act(() => new Promise<void>((r) => setTimeout(r, LEGEND_HOLD_MS + 50)));
+    // The rest timer runs on fake time (no race with a real 300 ms timer on a busy machine).
+    await act(() => vi.advanceTimersByTimeAsync(LEGEND_HOLD_MS - 1));
+    expect(boxX()).toBe(start);
+    await act(() => vi.advanceTimersByTimeAsync(1));
     const rested = boxX();
     expect(rested).toBeGreaterThan(px + pw / 2);
     const fresh = buildScene(useAxband.getState().project, { physical: false });

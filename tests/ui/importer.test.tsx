@@ -29,7 +29,8 @@ beforeEach(() => {
 async function paste(text: string) {
   render(<Step />);
   fireEvent.click(screen.getByRole("button", { name: "Paste data" }));
-  fireEvent.change(screen.getByLabelText("Paste data"), { target: { value: text } });
+  // The import step loads on first use: wait for its paste box.
+  fireEvent.change(await screen.findByLabelText("Paste data"), { target: { value: text } });
   fireEvent.click(screen.getByRole("button", { name: "Preview pasted data" }));
   await screen.findByTestId("import-detected");
 }

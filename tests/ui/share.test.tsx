@@ -55,7 +55,7 @@ describe("share link", () => {
     render(<ProjectMenu />);
     fireEvent.click(screen.getByTestId("share-link"));
     await waitFor(() => expect(useAxband.getState().ui.messages.length).toBe(1));
-    expect(linkField().value).toMatch(/#v2\./);
+    expect(linkField().value).toMatch(/#v3\./);
     expect(useAxband.getState().ui.messages[0].text).toMatch(/no clipboard access/);
   });
 

@@ -1,4 +1,6 @@
-// Per-curve preparation for the overlap (usable points, logs, sheared values), cached on the never mutated data arrays.
+// Per-curve arrays of the overlap (natural logs, sheared values) on top of the shared preparation (usable
+// points and their order, analysis/prepared-curve.ts), cached with it on the never mutated data arrays.
+import { prepareCurve, type PreparedCurve } from "../prepared-curve";
 
 /** An exclusion or projection curve sorted by mass: x = ln m ascending, v = ln g − ln m. */
 export interface SortedPrep {
@@ -21,80 +23,60 @@ export interface PolygonPrep {
   skipped: number;
 }
 
-interface CacheEntry {
-  g: Float64Array;
-  sorted?: SortedPrep;
-  polygon?: PolygonPrep;
-}
+// The overlap's own arrays (natural logs, sheared values), derived once per shared preparation.
+const sortedCache = new WeakMap<PreparedCurve, SortedPrep>();
+const polygonCache = new WeakMap<PreparedCurve, PolygonPrep>();
 
-const prepCache = new WeakMap<Float64Array, CacheEntry>();
-
-function usable(m: number, g: number): boolean {
-  return m > 0 && g > 0 && Number.isFinite(m) && Number.isFinite(g);
-}
-
-function cacheEntry(massEv: Float64Array, gInvGeV: Float64Array): CacheEntry {
-  let entry = prepCache.get(massEv);
-  if (!entry || entry.g !== gInvGeV) {
-    entry = { g: gInvGeV };
-    prepCache.set(massEv, entry);
-  }
-  return entry;
-}
-
-export function prepareSorted(massEv: Float64Array, gInvGeV: Float64Array): SortedPrep {
-  const entry = cacheEntry(massEv, gInvGeV);
-  if (entry.sorted) return entry.sorted;
-  const len = Math.min(massEv.length, gInvGeV.length);
-  const idx: number[] = [];
-  let ordered = true;
-  for (let i = 0; i < len; i++) {
-    if (!usable(massEv[i], gInvGeV[i])) continue;
-    if (idx.length > 0 && massEv[i] < massEv[idx[idx.length - 1]]) ordered = false;
-    idx.push(i);
-  }
-  // Array.prototype.sort is stable, so points of equal mass keep their file order (a vertical step).
-  if (!ordered) idx.sort((p, q) => massEv[p] - massEv[q]);
-  const n = idx.length;
+/** x = ln m, v = ln g − ln m and the masses of a prepared curve's points, from the data arrays themselves. */
+function shear(prep: PreparedCurve, massEv: Float64Array, gInvGeV: Float64Array) {
+  const { n, index } = prep;
   const x = new Float64Array(n);
   const v = new Float64Array(n);
   const mass = new Float64Array(n);
   for (let k = 0; k < n; k++) {
-    const m = massEv[idx[k]];
+    const m = massEv[index[k]];
     mass[k] = m;
     x[k] = Math.log(m);
-    v[k] = Math.log(gInvGeV[idx[k]]) - x[k];
+    v[k] = Math.log(gInvGeV[index[k]]) - x[k];
   }
-  entry.sorted = { n, x, v, mass, skipped: len - n + Math.abs(massEv.length - gInvGeV.length) };
-  return entry.sorted;
+  return { x, v, mass };
+}
+
+export function prepareSorted(massEv: Float64Array, gInvGeV: Float64Array): SortedPrep {
+  // Ordered by mass, stable: points of equal mass keep their file order (a vertical step).
+  const prep = prepareCurve(massEv, gInvGeV, true);
+  let out = sortedCache.get(prep);
+  if (!out) {
+    const { x, v, mass } = shear(prep, massEv, gInvGeV);
+    out = { n: prep.n, x, v, mass, skipped: prep.skipped };
+    sortedCache.set(prep, out);
+  }
+  return out;
 }
 
 export function preparePolygon(massEv: Float64Array, gInvGeV: Float64Array): PolygonPrep {
-  const entry = cacheEntry(massEv, gInvGeV);
-  if (entry.polygon) return entry.polygon;
-  const len = Math.min(massEv.length, gInvGeV.length);
-  const xs: number[] = [];
-  const vs: number[] = [];
-  let massMin = Infinity;
-  let massMax = -Infinity;
-  for (let i = 0; i < len; i++) {
-    if (!usable(massEv[i], gInvGeV[i])) continue;
-    const xi = Math.log(massEv[i]);
-    xs.push(xi);
-    vs.push(Math.log(gInvGeV[i]) - xi);
-    massMin = Math.min(massMin, massEv[i]);
-    massMax = Math.max(massMax, massEv[i]);
+  const prep = prepareCurve(massEv, gInvGeV, false);
+  let out = polygonCache.get(prep);
+  if (!out) {
+    const { x, v, mass } = shear(prep, massEv, gInvGeV);
+    let massMin = Infinity;
+    let massMax = -Infinity;
+    for (let k = 0; k < prep.n; k++) {
+      massMin = Math.min(massMin, mass[k]);
+      massMax = Math.max(massMax, mass[k]);
+    }
+    const n = prep.n;
+    out = {
+      n,
+      x,
+      v,
+      xMin: n > 0 ? Math.log(massMin) : NaN,
+      xMax: n > 0 ? Math.log(massMax) : NaN,
+      massMin,
+      massMax,
+      skipped: prep.skipped,
+    };
+    polygonCache.set(prep, out);
   }
-  const n = xs.length;
-  entry.polygon = {
-    n,
-    x: Float64Array.from(xs),
-    v: Float64Array.from(vs),
-    xMin: n > 0 ? Math.log(massMin) : NaN,
-    xMax: n > 0 ? Math.log(massMax) : NaN,
-    massMin,
-    massMax,
-    skipped: len - n + Math.abs(massEv.length - gInvGeV.length),
-  };
-  return entry.polygon;
+  return out;
 }

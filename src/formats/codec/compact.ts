@@ -1,6 +1,7 @@
 // Compact form of link formats: a table of fields per object (long name, short key, base value left out) and
 // the generic encode/decode through such tables; each link version defines its own frozen tables.
 import { isPlainObject, projectsEqual } from "../../project/json";
+import { PROJECT_LIMITS } from "../../project/schema";
 import { goesTo, type Persistence, type PersistTarget } from "../../project/state-table";
 import type { Project } from "../../project/types";
 
@@ -33,6 +34,24 @@ export const always = { link: "always", file: true, storage: "meta" } as const s
 
 /** Thrown inside decoding for a compact object of the wrong shape; turned into a message by decodeLink. */
 export class ShapeError extends Error {}
+
+/** Thrown inside decoding for more models or curves than a project may hold, before they are expanded. */
+export class TooMany extends Error {
+  constructor(
+    readonly count: number,
+    readonly what: "models" | "curves",
+  ) {
+    super(`${count} ${what}`);
+  }
+}
+
+/** The list under `key` of a compact object (absent: empty), refused when it is not a list or is too long. */
+export function listOf(compact: Rec, key: string, what: "models" | "curves"): unknown[] {
+  const v = Object.hasOwn(compact, key) ? compact[key] : [];
+  if (!Array.isArray(v)) throw new ShapeError(`the ${what} are not a list`);
+  if (v.length > PROJECT_LIMITS[what]) throw new TooMany(v.length, what);
+  return v;
+}
 
 export function encodeWith(codec: Codec, item: Rec, index: number, target: PersistTarget): Rec {
   const out: Rec = {};

@@ -11,7 +11,16 @@ import {
 import type { PersistTarget } from "../../project/state-table";
 import { isPlainObject } from "../../project/json";
 import type { Project } from "../../project/types";
-import { ShapeError, always, decodeWith, encodeWith, type Codec, type CompactLayout, type Rec } from "./compact";
+import {
+  ShapeError,
+  always,
+  listOf,
+  decodeWith,
+  encodeWith,
+  type Codec,
+  type CompactLayout,
+  type Rec,
+} from "./compact";
 import { decodeNumbers, encodeNumbers } from "./numbers";
 
 // Link format v1 (frozen):
@@ -161,13 +170,8 @@ function toCompactWith(k: LayoutCodecs, project: Project, includeCurves: boolean
 
 function fromCompactWith(k: LayoutCodecs, version: number, compact: unknown): { project: Rec; omitted: number } {
   if (!isPlainObject(compact)) throw new ShapeError("the content is not an object");
-  const list = (key: string, what: string): unknown[] => {
-    const v = Object.hasOwn(compact, key) ? compact[key] : [];
-    if (!Array.isArray(v)) throw new ShapeError(`the ${what} are not a list`);
-    return v;
-  };
-  const models = list("m", "models");
-  const curves = list("c", "curves");
+  const models = listOf(compact, "m", "models");
+  const curves = listOf(compact, "c", "curves");
   const omitted = Object.hasOwn(compact, "o") ? compact.o : 0;
   return {
     project: {

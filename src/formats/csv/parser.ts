@@ -11,20 +11,20 @@ import {
   type MassUnit,
 } from "../units";
 import { detectLayout, type SniffLine } from "./detect";
-import { closingQuote, countColumns, delimText, isBlank, onlyDelimiters, splitFields, WS } from "./fields";
+import { extraFields, mixedDelimiters, mixedMarks } from "./disagree";
+import { closingQuote, countColumns, isBlank, onlyDelimiters, splitFields, WS } from "./fields";
 import { binaryProblem, looksBinary } from "./file-check";
-import { ERR_NONE, ERR_RANGE, fieldReason, isNumberText, read, readNumber } from "./numbers";
+import { ERR_NONE, ERR_RANGE, fieldReason, read, readNumber } from "./numbers";
 import { parseResult } from "./result";
-import {
-  delimiterName,
-  type CurveParseOptions,
-  type CurveParser,
-  type CurveParseResult,
-  type ImportMessage,
-  type ImportProblem,
-  type PreviewRow,
-  type RejectedRow,
-  type UnitSource,
+import type {
+  CurveParseOptions,
+  CurveParser,
+  CurveParseResult,
+  ImportMessage,
+  ImportProblem,
+  PreviewRow,
+  RejectedRow,
+  UnitSource,
 } from "./types";
 
 const SNIFF_LINES = 64;
@@ -62,9 +62,9 @@ export class Parser implements CurveParser {
   header: string[] | null = null;
   massCol = 0;
   gCol = 1;
-  private need = 2;
+  need = 2;
   /** Fields the header names (0 without a header). */
-  private headerCols = 0;
+  headerCols = 0;
   /** Look for rows split by another delimiter: only when the delimiter was detected, not chosen. */
   private readonly checkMixed: boolean;
   /** Look for fields written with the other decimal mark: only when the mark was detected, not chosen. */
@@ -354,12 +354,12 @@ export class Parser implements CurveParser {
       errCol = col;
       reason = `missing column ${col + 1}`;
     }
-    if (errCol < 0 && p < e && this.headerCols === need && this.extraFields(t, s, e, p, row)) return;
+    if (errCol < 0 && p < e && this.headerCols === need && this.refuse(extraFields(this, t, s, e, p, row))) return;
     if (errCol >= 0) {
       if (onlyDelimiters(t, s, e, delim)) return;
-      if (this.checkMixed && this.mixedDelimiters(t, s, e, row)) return;
+      if (this.checkMixed && this.refuse(mixedDelimiters(this, t.slice(s, e), row))) return;
       // In a comma-separated file a decimal comma needs quotes; the column count check covers bare ones.
-      if (this.checkMark && delim !== 44 && this.mixedMarks(t, s, e, row, errCol)) return;
+      if (this.checkMark && delim !== 44 && this.refuse(mixedMarks(this, t.slice(s, e), row, errCol))) return;
       this.dataRows++;
       this.reject(row, errCol + 1, reason, t, s, e);
       return;
@@ -413,58 +413,10 @@ export class Parser implements CurveParser {
     }
   }
 
-  /** Stops the file when a row holds more fields than the header names (a comma inside a number, most often). */
-  private extraFields(t: string, s: number, e: number, p: number, row: number): boolean {
-    const delim = this.delim;
-    let q = p;
-    while (q < e && isBlank(t.charCodeAt(q))) q++;
-    if (delim !== WS && q < e && t.charCodeAt(q) === delim) q++;
-    while (q < e && isBlank(t.charCodeAt(q))) q++;
-    if (q >= e) return false;
-    const k = countColumns(t, s, e, delim);
-    const name = delimiterName(delimText(delim));
-    const hint =
-      delim === 44 ? "; a decimal comma in a comma-separated file? Quote such numbers, or use a semicolon or tab" : "";
-    this.stop({
-      code: "column-count",
-      row,
-      column: this.headerCols + 1,
-      message: `this row has ${k} fields (${name}-separated) where the header on line ${this.headerRow} names ${this.headerCols}${hint}`,
-    });
-    return true;
-  }
-
-  /** Stops the file when another delimiter splits an unreadable row into the expected numeric columns. */
-  private mixedDelimiters(t: string, s: number, e: number, row: number): boolean {
-    const line = t.slice(s, e);
-    const want = this.headerCols >= 2 ? this.headerCols : this.need;
-    for (const d of [44, 59, 9, WS]) {
-      if (d === this.delim) continue;
-      const f = splitFields(line, d);
-      if (f.length !== want || !f.every((x) => isNumberText(x, d !== 44))) continue;
-      this.stop({
-        code: "mixed-delimiters",
-        row,
-        column: 1,
-        message: `this row is split by ${delimiterName(delimText(d))}, the file was detected as ${delimiterName(delimText(this.delim))}-separated: the file mixes delimiters; use one throughout, or choose the delimiter to read only the rows that fit`,
-      });
-      return true;
-    }
-    return false;
-  }
-
-  /** Stops the file when an unreadable field reads with the other decimal mark (the rows disagree on it). */
-  private mixedMarks(t: string, s: number, e: number, row: number, col: number): boolean {
-    const field = splitFields(t.slice(s, e), this.delim)[col];
-    if (field === undefined || isNumberText(field, this.comma) || !isNumberText(field, !this.comma)) return false;
-    const [here, above] = this.comma ? ["a decimal point", "decimal commas"] : ["a decimal comma", "decimal points"];
-    this.stop({
-      code: "mixed-decimal",
-      row,
-      column: col + 1,
-      message: `"${field}" writes ${here} where the rows above use ${above}: the file mixes decimal marks; choose the decimal mark`,
-    });
-    return true;
+  /** Stops the file with `problem` when there is one. */
+  private refuse(problem: ImportProblem | null): boolean {
+    if (problem) this.stop(problem);
+    return problem !== null;
   }
 
   private reject(row: number, column: number, reason: string, t: string, s: number, e: number): void {

@@ -1,5 +1,6 @@
 // Reading a string, bytes or a Blob/File in slices (in a worker, or on the main thread when no worker is
 // available), with progress, cancellation and the file checks first.
+import { ImportCancelled, isImportCancelled } from "./cancel";
 import { binaryProblem, checkImportFile, type ImportEncoding } from "./file-check";
 import { createCurveParser, parseCurveText } from "./parser";
 import {
@@ -28,18 +29,7 @@ export interface ParseSourceHooks {
   yieldMs?: number;
 }
 
-/** Error thrown (as a rejection) when an import is cancelled through its AbortSignal. */
-export class ImportCancelled extends Error {
-  override name = "AbortError";
-  constructor() {
-    super("import cancelled");
-  }
-}
-
-/** True for the rejection of a cancelled import. */
-export function isImportCancelled(err: unknown): boolean {
-  return err instanceof Error && err.name === "AbortError";
-}
+export { ImportCancelled, isImportCancelled };
 
 function emptyResult(opts: CurveParseOptions, problem: ImportProblem): CurveParseResult {
   const r = parseCurveText("", opts);

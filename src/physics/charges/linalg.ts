@@ -9,7 +9,7 @@ export type AffineSolution =
   { ok: true; particular: Rational[]; basis: Rational[][]; free: number[]; pivots: number[] } | { ok: false };
 
 /** Reduced row echelon form of a copy of `m` (rows of equal length) and its pivot columns. */
-export function rref(m: readonly (readonly Rational[])[], cols: number): { rows: Rational[][]; pivots: number[] } {
+function rref(m: readonly (readonly Rational[])[], cols: number): { rows: Rational[][]; pivots: number[] } {
   const rows = m.map((r) => r.slice());
   const pivots: number[] = [];
   let lead = 0;

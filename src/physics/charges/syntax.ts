@@ -35,7 +35,7 @@ const isNameStart = (c: string) => /[\p{L}]/u.test(c);
 const isNameChar = (c: string) => /[\p{L}\p{N}_'′]/u.test(c) || /\p{M}/u.test(c) || SUBSCRIPT.includes(c);
 
 /** Loose key for matching a typed name to a field: subscripts as digits, no underscores, Greek spelled out. */
-export function nameKey(name: string): string {
+function nameKey(name: string): string {
   return Array.from(name.normalize("NFC"))
     .map((c) => (SUBSCRIPT.includes(c) ? String(SUBSCRIPT.indexOf(c)) : (GREEK[c] ?? c)))
     .join("")

@@ -11,7 +11,7 @@ const DP_CHUNK = 2048;
  * still kept (parent-clamped, so {i : importance[i] > ε} is exactly the DP simplification at ε). Chunk
  * ends and the two ends of the curve are always kept (Infinity).
  */
-export function dpImportance(x: Float64Array, y: Float64Array, _closed: boolean): Float64Array {
+export function dpImportance(x: Float64Array, y: Float64Array): Float64Array {
   const n = x.length;
   const imp = new Float64Array(n);
   if (n === 0) return imp;

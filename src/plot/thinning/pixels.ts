@@ -13,7 +13,8 @@ import {
 } from "./clip";
 import { thinColumnsInto } from "./columns";
 import { dpSelection } from "./douglas-peucker";
-import { viewArrays, type PreparedCurve, type ViewArrays } from "./prepared";
+import type { PreparedCurve } from "../../analysis/prepared-curve";
+import { viewArrays, type ViewArrays } from "./prepared";
 import { gatherRuns, levelOf } from "./runs";
 import { ensureBuffers, scratch } from "./scratch";
 
@@ -71,9 +72,9 @@ function allPixels(prep: PreparedCurve, p: PixelParams): number {
 }
 
 /** A sorted curve's column-thinned pixels in scratch.x/y; returns their count. */
-function sortedPixels(prep: PreparedCurve, closed: boolean, p: PixelParams, res: number): number {
+function sortedPixels(prep: PreparedCurve, p: PixelParams, res: number): number {
   const pl = p.plot;
-  const va = viewArrays(prep, p.slope, closed);
+  const va = viewArrays(prep, p.slope);
   const colL0 = (pl.x - p.ax) / p.bx;
   const colK = p.bx * res;
   return thinColumnsInto(prep.lm, va.v, va.pyramid, { lmLo: colL0, lmHi: (pl.x + pl.w - p.ax) / p.bx, colL0, colK }, p);
@@ -83,9 +84,9 @@ function sortedPixels(prep: PreparedCurve, closed: boolean, p: PixelParams, res:
 const countAbove = bisector<number, number>(descending).left;
 
 /** An unsorted curve's pixels (Douglas–Peucker or run thinning, whichever keeps fewer) in scratch.x/y. */
-function unsortedPixels(prep: PreparedCurve, closed: boolean, p: PixelParams, res: number, cullRect: Rect): number {
+function unsortedPixels(prep: PreparedCurve, p: PixelParams, res: number, cullRect: Rect): number {
   const pl = p.plot;
-  const va: ViewArrays = viewArrays(prep, p.slope, closed);
+  const va: ViewArrays = viewArrays(prep, p.slope);
   const lmLo = (cullRect.x0 - p.ax) / p.bx;
   const lmHi = (cullRect.x1 - p.ax) / p.bx;
   const vLo = (cullRect.y1 - p.ay) / p.by - p.yOffset;
@@ -133,11 +134,7 @@ export function curvePixels(prep: PreparedCurve, closed: boolean, p: PixelParams
   const cullRect = { x0: pl.x - mg, y0: pl.y - mg, x1: pl.x + pl.w + mg, y1: pl.y + pl.h + mg };
   let n: number;
   if (p.thin === false) n = allPixels(prep, p);
-  else
-    n = cullOutside(
-      prep.sorted ? sortedPixels(prep, closed, p, res) : unsortedPixels(prep, closed, p, res, cullRect),
-      cullRect,
-    );
+  else n = cullOutside(prep.sorted ? sortedPixels(prep, p, res) : unsortedPixels(prep, p, res, cullRect), cullRect);
   const bufX = scratch.x;
   const bufY = scratch.y;
   if (!p.reuse) return clipToRect({ xs: bufX.slice(0, n), ys: bufY.slice(0, n), n, closed }, farRect);

@@ -2,7 +2,8 @@
 // are thinned a chunk at a time near the plot and cached per tolerance.
 
 import type { PixelMap } from "./columns";
-import { BOX_CHUNK, type LevelSelection, type PreparedCurve, type ViewArrays } from "./prepared";
+import type { PreparedCurve } from "../../analysis/prepared-curve";
+import { BOX_CHUNK, type LevelSelection, type ViewArrays } from "./prepared";
 import { ensureBuffers, scratch } from "./scratch";
 
 /** Points per chunk of a run-thinning level: a chunk edge ends a run, which costs ≤ 2 extra points per chunk. */

@@ -3,7 +3,7 @@
 import { useState } from "react";
 import type { Curve } from "../../project/types";
 import { useAxband } from "../store";
-import { curveCsvFileName, curveToCsv, rescaleCurve } from "../../data";
+import { rescaleCurve } from "../../data";
 import { downloadText } from "../export/download";
 import { COUPLING_UNIT_OPTIONS, MASS_UNIT_OPTIONS, type CouplingUnit, type MassUnit } from "../importer/unit-options";
 import { ChoiceField } from "../layout/ChoiceField";
@@ -17,8 +17,10 @@ export function CurveCsvExport({ curve }: { curve: Curve }) {
   const [eOverN, setEOverN] = useState("0");
   const [rescaled, setRescaled] = useState(true);
 
-  const download = () => {
+  const download = async () => {
     try {
+      // The CSV writer loads on the first export, apart from the first figure.
+      const { curveCsvFileName, curveToCsv } = await import("../../formats/curve-export");
       const gInvGeV =
         isRescaled(curve.rescale) && rescaled ? rescaleCurve(curve.gInvGeV, curve.rescale) : curve.gInvGeV;
       const text = curveToCsv(
@@ -74,7 +76,7 @@ export function CurveCsvExport({ curve }: { curve: Curve }) {
             with the rescaling
           </label>
         ) : null}
-        <button type="button" onClick={download}>
+        <button type="button" onClick={() => void download()}>
           Download CSV
         </button>
       </div>

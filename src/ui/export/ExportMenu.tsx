@@ -1,14 +1,14 @@
 // Figure export: the size preset (the same Figure.preset the screen uses), the SVG download (self-contained,
-// project embedded so the file reopens in axband), PNG at 1×, 2× or 300 dpi, and the model lines and bands as
-// CSV (export-actions.ts). All files come from the same scene builder as the screen.
+// project embedded so the file reopens in axband), the vector PDF (project attached), PNG at 1×, 2× or
+// 300 dpi, and the model lines and bands as CSV (export-actions.ts). All files come from the same scene builder as the screen.
 import { useState } from "react";
 import type { SizePreset } from "../../project/types";
 import { PRESETS, presetOf, CUSTOM_MM_LIMITS } from "../../plot/layout";
 import { useAxband } from "../store";
 import type { PngScale } from "./png";
-import { saveModelCsv, savePng, saveSvg } from "./export-actions";
 import { NumberField } from "../curves/NumberField";
 import { Popover } from "./Popover";
+import { ProjectNameField } from "../share/ProjectSections";
 import "../curves/curves.css";
 import "./export.css";
 
@@ -24,6 +24,11 @@ const PNG_SCALES: { value: PngScale; label: string }[] = [
   { value: "2x", label: "2× (sharp on high-dpi screens)" },
   { value: "300dpi", label: "300 dpi at the physical size" },
 ];
+
+// The writers (SVG, PNG, CSV) load on the first export, apart from the first figure.
+const actions = () => import("./export-actions");
+const saveSvg = () => void actions().then((a) => a.saveSvg());
+const saveModelCsv = () => void actions().then((a) => a.saveModelCsv());
 
 const mmRule = (n: number) =>
   n >= CUSTOM_MM_LIMITS[0] && n <= CUSTOM_MM_LIMITS[1] ? null : `${CUSTOM_MM_LIMITS[0]}–${CUSTOM_MM_LIMITS[1]} mm`;
@@ -79,7 +84,7 @@ function ImageSection() {
   const onPng = async () => {
     setBusy(true);
     try {
-      await savePng(pngScale);
+      await (await actions()).savePng(pngScale);
     } finally {
       setBusy(false);
     }
@@ -99,6 +104,29 @@ function ImageSection() {
           {busy ? "Drawing…" : "Download PNG"}
         </button>
       </div>
+    </section>
+  );
+}
+
+function PdfSection() {
+  const [busy, setBusy] = useState(false);
+  const onPdf = async () => {
+    setBusy(true);
+    try {
+      await (await actions()).savePdf();
+    } finally {
+      setBusy(false);
+    }
+  };
+  return (
+    <section>
+      <h3>PDF</h3>
+      <div className="ax-export-row">
+        <button type="button" data-testid="export-pdf" disabled={busy} aria-busy={busy} onClick={() => void onPdf()}>
+          {busy ? "Preparing PDF…" : "Download PDF"}
+        </button>
+      </div>
+      <p className="ax-hint">Vector PDF at the figure size, fonts embedded, project attached (for pdfLaTeX).</p>
     </section>
   );
 }
@@ -134,7 +162,12 @@ export function ExportMenu() {
         Export SVG
       </button>
       <Popover label="▾" ariaLabel="More export options" open={open} onOpenChange={setOpen} testId="export-menu">
+        <section>
+          <h3>File name</h3>
+          <ProjectNameField />
+        </section>
         <SizeSection />
+        <PdfSection />
         <ImageSection />
         <DataSection />
       </Popover>

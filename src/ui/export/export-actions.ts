@@ -1,19 +1,31 @@
-// What the export menu's buttons do: write the figure as SVG (project embedded) or PNG (dpi in the file), or
-// the model lines and bands as CSV, download it, and say so. The writers load with this module, on demand.
+// What the export menu's buttons do: write the figure as SVG (project embedded), PDF (project attached) or PNG
+// (dpi in the file), or the model lines and bands as CSV, download it, and say so. The writers load with this
+// module, on demand; the PDF writer, its fonts and pdf-lib only when a PDF is asked for.
 import { embedCapText, exportFigureSvgWithInfo } from "../../formats/figure-file";
 import { modelsToCsv } from "../../formats/model-csv";
 import { setPngDpi } from "../../formats/png-meta";
 import { presetOf } from "../../plot/layout";
+import { defaultProject } from "../../project/demo";
+import type { Project } from "../../project/types";
 import { useAxband } from "../store";
 import { downloadBlob, downloadText, safeFileName } from "./download";
 import { pngFigure, rasteriseSvg, type PngScale } from "./png";
 
-/** Base name of exported figure files: the project name, or "axband-figure". */
-function figureBaseName(projectName: string): string {
-  return safeFileName(
-    projectName.trim() === "" || projectName === "Untitled" ? "axband-figure" : projectName,
-    "axband-figure",
-  );
+/** The demo's name, and the ids of its models and curves (the demo content). */
+function demoOf(): { name: string; ids: Set<string> } {
+  const d = defaultProject();
+  return { name: d.name, ids: new Set([...d.models, ...d.curves].map((x) => x.id)) };
+}
+
+/**
+ * Base name of exported figure files: the project name, or "axband-figure" when there is none, or when the
+ * project still has the demo's name but none of the demo's content (new work is not named after the demo).
+ */
+function figureBaseName(project: Project): string {
+  const name = project.name.trim();
+  const demo = demoOf();
+  const leftDemo = name === demo.name && ![...project.models, ...project.curves].some((x) => demo.ids.has(x.id));
+  return safeFileName(name === "" || name === "Untitled" || leftDemo ? "axband-figure" : name, "axband-figure");
 }
 
 const push = (level: "status" | "alert", text: string): void => {
@@ -28,7 +40,7 @@ export function saveSvg(): void {
       preset: project.figure.preset,
       embedProject: true,
     });
-    const name = `${figureBaseName(project.name)}.svg`;
+    const name = `${figureBaseName(project)}.svg`;
     downloadBlob(name, new Blob([svg], { type: "image/svg+xml" }));
     const cm = `${(size.widthMm / 10).toFixed(1)} × ${(size.heightMm / 10).toFixed(1)} cm`;
     if (embeddedCurves) return push("status", `Saved ${name} (${cm}; drop it on axband to reopen the project).`);
@@ -47,7 +59,7 @@ export async function savePng(pngScale: PngScale): Promise<void> {
     const project = useAxband.getState().project;
     const target = pngFigure(project, pngScale);
     const png = setPngDpi(await rasteriseSvg(target.svg, target.widthPx, target.heightPx), target.dpi);
-    const name = `${figureBaseName(project.name)}${pngScale === "1x" ? "" : `@${pngScale}`}.png`;
+    const name = `${figureBaseName(project)}${pngScale === "1x" ? "" : `@${pngScale}`}.png`;
     downloadBlob(name, new Blob([png as BlobPart], { type: "image/png" }));
     push("status", `Saved ${name} (${target.widthPx} × ${target.heightPx} px, ${Math.round(target.dpi)} dpi).`);
   } catch (e) {
@@ -55,11 +67,32 @@ export async function savePng(pngScale: PngScale): Promise<void> {
   }
 }
 
+/** Writes the figure as a vector PDF with the project attached; pdf-lib, fontkit and the font files load here. */
+export async function savePdf(): Promise<void> {
+  try {
+    const project = useAxband.getState().project;
+    const { projectPdf } = await import("./pdf");
+    const r = await projectPdf(project, "sans");
+    const name = `${figureBaseName(project)}.pdf`;
+    downloadBlob(name, new Blob([r.pdf as BlobPart], { type: "application/pdf" }));
+    const size = presetOf(project.figure);
+    const cm = `${(size.widthMm / 10).toFixed(1)} × ${(size.heightMm / 10).toFixed(1)} cm`;
+    if (r.embeddedCurves) return push("status", `Saved ${name} (${cm}; drop it on axband to reopen the project).`);
+    const n = r.omittedCurves.length;
+    push(
+      "alert",
+      `Saved ${name} (${cm}) without the data of ${n === 1 ? "its curve" : `its ${n} curves`} (too large to embed): dropped on axband it reopens the models and figure only. Save the project file to keep the data.`,
+    );
+  } catch (e) {
+    push("alert", `The PDF could not be made: ${e instanceof Error ? e.message : String(e)}.`);
+  }
+}
+
 export function saveModelCsv(): void {
   const project = useAxband.getState().project;
   if (project.models.length === 0) return push("alert", "There are no models to export.");
   try {
-    const name = `${figureBaseName(project.name)}-models.csv`;
+    const name = `${figureBaseName(project)}-models.csv`;
     downloadText(name, modelsToCsv(project), "text/csv");
     push("status", `Saved ${name}.`);
   } catch (e) {

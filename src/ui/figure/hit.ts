@@ -1,9 +1,9 @@
 // Which curves a point (m_a, g_aγγ) lies in: below an exclusion or projection curve interpolated linearly in
-// log-log space at that mass, or inside a closed region. Uses the plot core's cached log10 arrays (by data
+// log-log space at that mass, or inside a closed region. Uses the shared curve preparation (cached by data
 // array), so the first hover after a big import reuses what the import worker prepared for the figure.
 import { bisectRight } from "d3-array";
 import type { Curve } from "../../project/types";
-import { prepareCurve, type PreparedCurve } from "../../plot/thinning/index";
+import { prepareCurve, type PreparedCurve } from "../../analysis/prepared-curve";
 import { rescaleFactor } from "../../plot/physics-settings";
 
 /** log10 mass and g of the usable points (> 0, finite), sorted by mass (stable) for lines, file order for regions. */

@@ -2,7 +2,7 @@
 // fractions; the anomaly is computed once per edit, and the last valid result stays visible while a field is bad.
 import { useEffect, useId, useMemo, useReducer, useState } from "react";
 import { tryAnomaly, type AnomalyFieldError, type AnomalyResult } from "../../physics/anomaly";
-import { toFractionString } from "../../physics/rational";
+import { toFractionString, type Rational } from "../../physics/rational";
 import { useAxband } from "../store";
 import { minus } from "../format";
 import { useCatalogueRows } from "./Catalogue";
@@ -114,34 +114,16 @@ function useEditRequest(dispatch: (a: CalcAction) => void, dirty: boolean) {
   }, [edit, takeEdit, dispatch, dirty]);
 }
 
-export function AnomalyCalculator() {
-  const [state, dispatch] = useReducer(calcReducer, undefined, loadDraft);
-  useEffect(() => saveDraft(state), [state]);
-  useEditRequest(dispatch, state.dirty);
+/** "Add as model": a new model, or an update of the model being edited; terms go with it when there are any. */
+function useAddAsModel(
+  state: CalcState,
+  eOverN: Rational | null,
+  editing: boolean,
+  dispatch: (a: CalcAction) => void,
+): () => void {
   const addModel = useAxband((s) => s.addModel);
   const updateModel = useAxband((s) => s.updateModel);
-  const models = useAxband((s) => s.project.models);
-  // The one computation per edit, shared by the result, the breakdown and "Add as model".
-  const computed = useMemo(
-    () => tryAnomaly(state.rows.map(fermionFromDraft), { scalarCharge: state.scalarCharge }),
-    [state.rows, state.scalarCharge],
-  );
-  const betaErrors = useMemo(() => withBetaErrors(state, computed.ok ? [] : computed.errors), [state, computed]);
-  const current = betaErrors.length > 0 ? { ok: false as const, errors: betaErrors } : computed;
-  // The last valid result, adjusted during render (React's pattern for state derived from a previous render).
-  const [lastGood, setLastGood] = useState<AnomalyResult | null>(null);
-  if (current.ok && current.result !== lastGood) setLastGood(current.result);
-  const scanning = isScanState(state);
-  // In scan mode the lists are read by the scan, which reports its own errors.
-  const errors = current.ok || scanning ? [] : current.errors;
-  const shown = current.ok ? current.result : lastGood;
-  const stale = !current.ok && shown !== null;
-  const eOverN = current.ok ? current.result.eOverN : null;
-  const scalarId = useId();
-  const nameId = useId();
-  const editing = state.editingId !== null && models.some((m) => m.id === state.editingId);
-
-  const addAsModel = () => {
+  return () => {
     if (!eOverN) return;
     const en = toFractionString(eOverN);
     const terms = termLines(state.terms).map((t) => t.text);
@@ -166,6 +148,33 @@ export function AnomalyCalculator() {
       dispatch({ type: "saved", editingId: addModel({ eOverNMin: en, eOverNMax: en, label, source }) });
     }
   };
+}
+
+export function AnomalyCalculator() {
+  const [state, dispatch] = useReducer(calcReducer, undefined, loadDraft);
+  useEffect(() => saveDraft(state), [state]);
+  useEditRequest(dispatch, state.dirty);
+  // The one computation per edit, shared by the result, the breakdown and "Add as model".
+  const computed = useMemo(
+    () => tryAnomaly(state.rows.map(fermionFromDraft), { scalarCharge: state.scalarCharge }),
+    [state.rows, state.scalarCharge],
+  );
+  const betaErrors = useMemo(() => withBetaErrors(state, computed.ok ? [] : computed.errors), [state, computed]);
+  const current = betaErrors.length > 0 ? { ok: false as const, errors: betaErrors } : computed;
+  // The last valid result, adjusted during render (React's pattern for state derived from a previous render).
+  const [lastGood, setLastGood] = useState<AnomalyResult | null>(null);
+  if (current.ok && current.result !== lastGood) setLastGood(current.result);
+  const scanning = isScanState(state);
+  // In scan mode the lists are read by the scan, which reports its own errors.
+  const errors = current.ok || scanning ? [] : current.errors;
+  const shown = current.ok ? current.result : lastGood;
+  const stale = !current.ok && shown !== null;
+  const eOverN = current.ok ? current.result.eOverN : null;
+  const scalarId = useId();
+  const nameId = useId();
+  const editing = useAxband((s) => s.project.models.some((m) => m.id === state.editingId));
+
+  const addAsModel = useAddAsModel(state, eOverN, editing, dispatch);
 
   return (
     <div className="calculator" data-testid="anomaly-calculator">

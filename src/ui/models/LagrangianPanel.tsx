@@ -57,8 +57,15 @@ function TermList(props: { label: string; value: string; onChange: (v: string) =
   );
 }
 
-function Report({ r, state }: { r: ChargeSolved; state: CalcState }) {
+/** The fermion rows whose charges the terms leave free, set to a small list so the calculator scans them. */
+function scanFree(r: ChargeSolved, state: CalcState, dispatch: (a: CalcAction) => void): void {
+  for (const row of state.rows)
+    if (r.free.includes(row.name.trim())) dispatch({ type: "edit", key: row.key, patch: { pq: "{-1, 0, 1}" } });
+}
+
+function Report({ r, state, dispatch }: { r: ChargeSolved; state: CalcState; dispatch: (a: CalcAction) => void }) {
   const forbidden = termLines(state.forbidden);
+  const scannable = r.free.some((n) => state.rows.some((row) => row.name.trim() === n));
   return (
     <div className="charge-report" data-testid="charge-report">
       <p>
@@ -78,7 +85,12 @@ function Report({ r, state }: { r: ChargeSolved; state: CalcState }) {
       ) : (
         <p className="warning">
           E/N is not determined: it depends on the charges of {r.free.join(", ")}, which the terms leave free. Vary them
-          in the table (a charge scan) or add the terms that fix them.
+          in the table (a charge scan) or add the terms that fix them.{" "}
+          {scannable ? (
+            <button type="button" onClick={() => scanFree(r, state, dispatch)} data-testid="scan-free">
+              Scan them over {"{-1, 0, 1}"}
+            </button>
+          ) : null}
         </p>
       )}
       {r.forbiddenAllowed.map((i) => (
@@ -158,7 +170,7 @@ export function LagrangianPanel({ state, dispatch }: { state: CalcState; dispatc
           ))}
         </ul>
       ) : null}
-      {report?.ok ? <Report r={report.result} state={state} /> : null}
+      {report?.ok ? <Report r={report.result} state={state} dispatch={dispatch} /> : null}
     </details>
   );
 }

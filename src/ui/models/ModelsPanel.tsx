@@ -1,15 +1,21 @@
 // The Models section of the sidebar: typed E/N, the catalogue, the model list, and the anomaly calculator
-// (a wide table, so it opens in a dialog over the page; it stays mounted so its table survives closing).
-import { useEffect, useRef, useState } from "react";
+// (a wide table, so it opens in a dialog over the page; it loads on first opening, apart from the first figure,
+// and then stays mounted so its table survives closing).
+import { lazy, Suspense, useEffect, useRef, useState } from "react";
 import { createPortal } from "react-dom";
 import { AddModel } from "./AddModel";
 import { Catalogue } from "./Catalogue";
 import { ModelList } from "./ModelList";
-import { AnomalyCalculator } from "./AnomalyCalculator";
-import { EnsemblePanel } from "./ensemble/EnsemblePanel";
 import { useCalculatorRequest } from "./calculator-draft";
 
+// Both load on first opening, apart from the first figure.
+const AnomalyCalculator = lazy(() => import("./AnomalyCalculator").then((m) => ({ default: m.AnomalyCalculator })));
+const EnsemblePanel = lazy(() => import("./ensemble/EnsemblePanel").then((m) => ({ default: m.EnsemblePanel })));
+
 function CalculatorDialog({ open, onClose }: { open: boolean; onClose: () => void }) {
+  // Mounted from the first opening on (closing only hides it).
+  const [opened, setOpened] = useState(open);
+  if (open && !opened) setOpened(true);
   const panel = useRef<HTMLDivElement>(null);
   useEffect(() => {
     if (!open) return;
@@ -41,7 +47,11 @@ function CalculatorDialog({ open, onClose }: { open: boolean; onClose: () => voi
           Left-handed Weyl fermions (a right-handed field enters with its PQ charge 𝒳 negated): N = Σ 𝒳·T(R)·n_w, E = Σ
           𝒳·d(R)·Σ Q², N_DW = |2N/𝒳_S|.
         </p>
-        <AnomalyCalculator />
+        {opened ? (
+          <Suspense fallback={<p className="note loading">Loading the anomaly calculator…</p>}>
+            <AnomalyCalculator />
+          </Suspense>
+        ) : null}
       </div>
     </div>,
     document.body,
@@ -67,7 +77,11 @@ export function ModelsPanel() {
       >
         Heavy-quark ensemble…
       </button>
-      {ensembleOpen ? <EnsemblePanel open onClose={() => setEnsembleOpen(false)} /> : null}
+      {ensembleOpen ? (
+        <Suspense fallback={<p className="note loading">Loading the ensemble panel…</p>}>
+          <EnsemblePanel open onClose={() => setEnsembleOpen(false)} />
+        </Suspense>
+      ) : null}
       <button type="button" className="calc-open" onClick={() => setCalcOpen(true)} aria-haspopup="dialog">
         Anomaly calculator…
       </button>

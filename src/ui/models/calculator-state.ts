@@ -130,7 +130,7 @@ export interface CalcState {
 }
 
 /** What a load brings besides the fermions (catalogue entry or a model reopened for editing). */
-export interface CalcLoad {
+interface CalcLoad {
   fermions: FermionInput[];
   scalarCharge: string;
   name?: string;

@@ -2,7 +2,7 @@
 // the link stays short enough, otherwise the user is told which were left out and offered the project
 // file), and the Project menu with the link and the project file (ProjectSections.tsx).
 import { useCallback, useEffect, useRef, useState } from "react";
-import { encodeLinkAuto, type AutoLink } from "../../data";
+import type { AutoLink } from "../../data";
 import { useAxband } from "../store";
 import { Popover } from "../export/Popover";
 import { copyText } from "./clipboard";
@@ -46,6 +46,7 @@ export function ProjectMenu() {
     const p = useAxband.getState().project;
     let auto: AutoLink;
     try {
+      const { encodeLinkAuto } = await import("../../formats/codec");
       auto = encodeLinkAuto(p);
     } catch (e) {
       pushMessage("alert", `The link could not be made: ${e instanceof Error ? e.message : String(e)}.`);

@@ -3,8 +3,7 @@
 import type { RefObject } from "react";
 import type { AutoLink } from "../../data";
 import { useAxband } from "../store";
-import { openProjectFile } from "./open-project";
-import { saveProjectFile } from "./project-actions";
+import { saveProjectFileAndTell } from "./project-actions";
 
 export interface MadeLink {
   url: string;
@@ -12,7 +11,6 @@ export interface MadeLink {
 }
 
 export function ShareSection({ link, field }: { link: MadeLink | null; field: RefObject<HTMLInputElement | null> }) {
-  const pushMessage = useAxband((s) => s.pushMessage);
   const curveCount = useAxband((s) => s.project.curves.length);
   if (!link)
     return (
@@ -43,7 +41,7 @@ export function ShareSection({ link, field }: { link: MadeLink | null; field: Re
             Left out of the link (too much data): <b>{link.auto.omittedCurves.join(", ")}</b>. The link keeps the
             models, the figure and the constants.
           </p>
-          <button type="button" onClick={() => pushMessage("status", `Saved ${saveProjectFile()} with every curve.`)}>
+          <button type="button" onClick={() => saveProjectFileAndTell(" with every curve")}>
             Save the project file instead
           </button>
         </div>
@@ -62,11 +60,7 @@ export function ProjectFileSection({ onOpened }: { onOpened: () => void }) {
       <h3>Project file</h3>
       <ProjectNameField />
       <div className="ax-export-row">
-        <button
-          type="button"
-          data-testid="save-project"
-          onClick={() => pushMessage("status", `Saved ${saveProjectFile()}.`)}
-        >
+        <button type="button" data-testid="save-project" onClick={() => saveProjectFileAndTell()}>
           Save project
         </button>
         <label className="ax-button-like ax-button-plain">
@@ -75,12 +69,13 @@ export function ProjectFileSection({ onOpened }: { onOpened: () => void }) {
             className="visually-hidden"
             type="file"
             data-testid="open-project"
-            accept=".axband.json,.json,.svg,application/json,image/svg+xml"
+            accept=".axband.json,.json,.svg,.pdf,application/json,image/svg+xml,application/pdf"
             onChange={(e) => {
               const file = e.currentTarget.files?.[0];
               e.currentTarget.value = "";
               if (!file) return;
-              void openProjectFile(file).then((r) => {
+              void import("./open-project").then(async ({ openProjectFile }) => {
+                const r = await openProjectFile(file);
                 if (r.ok) {
                   replaceProject(r.project, r.message);
                   onOpened();
@@ -91,7 +86,7 @@ export function ProjectFileSection({ onOpened }: { onOpened: () => void }) {
         </label>
       </div>
       <p className="ax-hint">
-        A project file holds everything, curve data included. An SVG exported by axband opens as well.
+        A project file holds everything, curve data included. An SVG or PDF exported by axband opens as well.
       </p>
     </section>
   );

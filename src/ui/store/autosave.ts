@@ -4,9 +4,8 @@
 import type { StoreApi } from "zustand";
 import type { Project } from "../../project/types";
 import { defaultProject } from "../../project/demo";
-import { decodeLink } from "../../formats/codec";
-import { deserializeFromStorage, serializeForStorage } from "../../formats/project-file";
-import { PROJECT_LIMITS } from "../../project/schema";
+import { UNVERIFIED_LINK_NOTE, repairsNote } from "./open-notes";
+import { PROJECT_LIMITS } from "../../project/limits";
 import type { AxbandState } from "./types";
 
 /** localStorage key of the saved project (without curve data). */
@@ -208,11 +207,19 @@ export function indexedDbCurveStore(dbName = "axband"): CurveDataStore | null {
 
 const NO_DATA = new Float64Array(0);
 
+// The project codec and schema load on demand, apart from the first figure: only a stored project, a link
+// or a save needs them. `fileModule` is the loaded module, so that a save on pagehide stays synchronous.
+type FileModule = typeof import("../../formats/project-file");
+let fileModule: FileModule | null = null;
+function loadFileModule(): Promise<FileModule> {
+  return import("../../formats/project-file").then((m) => (fileModule = m));
+}
+
 /**
  * The localStorage text of a project. The curve arrays are left out before serialising: they are not part of
  * the text anyway, and converting millions of numbers on every save would stall zooming.
  */
-function metaOf(project: Project): string {
+function metaOf({ serializeForStorage }: FileModule, project: Project): string {
   return serializeForStorage({
     ...project,
     curves: project.curves.map((c) => ({ ...c, massEv: NO_DATA, gInvGeV: NO_DATA })),
@@ -246,6 +253,7 @@ export function startAutosave(store: StoreApi<AxbandState>, opts: AutosaveOpts =
 
   const save = async (): Promise<void> => {
     timer = null;
+    const file = fileModule ?? (await loadFileModule());
     const project = store.getState().project;
     if (project === lastSaved) return;
     lastSaved = project;
@@ -276,7 +284,7 @@ export function startAutosave(store: StoreApi<AxbandState>, opts: AutosaveOpts =
     if (!local) problem();
     else {
       try {
-        local.setItem(STORAGE_KEY, metaOf(project));
+        local.setItem(STORAGE_KEY, metaOf(file, project));
       } catch {
         problem();
       }
@@ -285,6 +293,8 @@ export function startAutosave(store: StoreApi<AxbandState>, opts: AutosaveOpts =
   };
 
   const schedule = () => {
+    // Loaded at the first change (not at start-up), so that a save on pagehide finds it.
+    if (!fileModule) void loadFileModule();
     if (timer !== null) clearTimeout(timer);
     timer = setTimeout(() => void save(), debounceMs);
   };
@@ -366,6 +376,7 @@ export async function restoreAutosave(store: StoreApi<AxbandState>, opts: Autosa
   // Validating (and copying) the curve data is O(points): for big curves in a task of its own, not after the
   // last read (a chunk's worth of points takes a few ms, not worth a task).
   if (data.reduce((n, d) => n + d.massEv.length, 0) > CHUNK_POINTS) await nextTask();
+  const { deserializeFromStorage } = fileModule ?? (await loadFileModule());
   const r = deserializeFromStorage(text, data);
   if (!r.ok) {
     store.getState().pushMessage("alert", `${sentence(r.error)} Starting from the demo project.`);
@@ -400,6 +411,7 @@ export async function initProject(store: StoreApi<AxbandState>, opts: StartOpts 
   const loc = (globalThis as { location?: Location }).location;
   const fragment = (opts.fragment ?? loc?.hash ?? "").replace(/^#/, "");
   if (!fragment) return;
+  const { decodeLink } = await import("../../formats/codec");
   const r = decodeLink(fragment);
   if (r.ok) {
     const left = r.omittedCurveCount;
@@ -409,7 +421,10 @@ export async function initProject(store: StoreApi<AxbandState>, opts: StartOpts 
         : "";
     store
       .getState()
-      .replaceProject(r.project, `Opened the project from the link. Undo returns to your previous project.${note}`);
+      .replaceProject(
+        r.project,
+        `Opened the project from the link. Undo returns to your previous project.${note}${repairsNote(r.repairs, "The link")}${r.verified ? "" : UNVERIFIED_LINK_NOTE}`,
+      );
   } else {
     store
       .getState()

@@ -265,7 +265,7 @@ describe("simplification of unsorted curves and closed regions", () => {
       x[i] = i / n + 0.001 * r();
       y[i] = Math.sin(9 * x[i]) + 0.05 * r();
     }
-    const imp = dpImportance(x, y, false);
+    const imp = dpImportance(x, y);
     expect(imp[0]).toBe(Infinity);
     expect(imp[n - 1]).toBe(Infinity);
     let prev = n + 1;
@@ -398,7 +398,7 @@ describe("clipping and caching", () => {
     expect(prepareCurve(m, Float64Array.from(g), true)).not.toBe(a);
     const unsorted = prepareCurve(m, g, false);
     expect(Array.from(unsorted.lm)).toEqual([Math.log10(3e-6), Math.log10(1e-6)]);
-    const va = viewArrays(a, -1, false);
+    const va = viewArrays(a, -1);
     expect(va.v[0]).toBeCloseTo(Math.log10(2e-12) - Math.log10(1e-6), 12);
   });
 });
