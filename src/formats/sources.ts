@@ -339,8 +339,9 @@ export function projectSources(project: Project): SourceEntry[] {
 
 /**
  * The entries as one BibTeX file: built-in and free-text entries written field by field (plain-text values
- * escaped: \ { } & % $ # _ ~ ^), a user's own BibTeX entry verbatim. An entry with fields from memory gets
- * a note saying which, until they are checked. Entries are separated by a blank line; the text ends in "\n".
+ * escaped: \ { } & % $ # _ ~ ^), a user's own BibTeX entry verbatim. Fields from memory are never flagged
+ * here (the panel says so): nothing in a field may print "unchecked". Entries are separated by a blank line;
+ * the text ends in "\n".
  * @param entries as returned by {@link projectSources}.
  */
 export function sourcesToBibtex(entries: SourceEntry[]): string {
@@ -354,11 +355,9 @@ export function sourcesToBibtex(entries: SourceEntry[]): string {
     const fields: [string, string][] = Object.entries(e.fields)
       .filter(([name]) => name !== "note")
       .map(([name, value]) => [name, raw.has(name) ? value : escapeBibtexValue(value)]);
-    const notes: string[] = [];
-    if (e.fields.note) notes.push(raw.has("note") ? e.fields.note : escapeBibtexValue(e.fields.note));
-    if (e.fromMemory.length > 0)
-      notes.push(escapeBibtexValue(`fields ${e.fromMemory.join(", ")} from memory, unchecked`));
-    if (notes.length > 0) fields.push(["note", notes.join("; ")]);
+    // Fields still unchecked are flagged in the sources panel only: a flag in a field would print in the
+    // bibliography of the paper that uses this file.
+    if (e.fields.note) fields.push(["note", raw.has("note") ? e.fields.note : escapeBibtexValue(e.fields.note)]);
     // Titles get one protective brace pair so styles keep their capitals (QCD, NNLO).
     const withTitle = fields.map(([name, value]): [string, string] =>
       name === "title" ? [name, `{${value}}`] : [name, value],
