@@ -96,6 +96,7 @@ async function loadProject(legend: Project["figure"]["legend"] = "outside-right"
       grid: true,
       legend,
       fontPt: 12,
+      font: "sans",
       title: "",
     },
   };

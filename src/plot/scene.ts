@@ -1,7 +1,7 @@
 // The scene builder: a project in, the complete figure out as plain layers of paths, rects and text, drawn
 // the same way on screen (SceneSvg and scene-dom.ts) and in the exported SVG (writeSvg). All defaults of a figure live here.
 import { DEFAULT_MASS_RANGE_EV, defaultYRange } from "../project/defaults";
-import type { Curve, LegendPlace, Model, Project, YView } from "../project/types";
+import type { Curve, FigureFont, LegendPlace, Model, Project, YView } from "../project/types";
 import type { PathNode, Scene, SceneLayer, SceneNode, ScaleConfig } from "./scene-types";
 import { axesNodes, axisTicks, gridNodes, verticalTickOpts, yTitle, type AxesFrame } from "./axes";
 import { curveGeometry, curveShape } from "./curves";
@@ -32,8 +32,15 @@ import { logAffine, sanitizeDomain, viewTransform } from "./scales";
 import { runsWidthPx } from "./text";
 import { logTicks } from "./ticks";
 
-/** Font stack of every figure: Helvetica-metric faces first (the width table assumes them), then fallbacks. */
-export const FONT_FAMILY = "Helvetica, Arial, 'Liberation Sans', 'DejaVu Sans', sans-serif";
+/**
+ * The CSS font-family list of each figure font: the bundled Computer Modern Unicode face first (the app loads
+ * its webfont, PNG and PDF use its files), then close system fonts. The width table (text.ts) is Helvetica's,
+ * a few per cent wider than CMU's, so the layout's estimates err on the roomy side.
+ */
+export const FIGURE_FONT_CSS: Record<FigureFont, string> = {
+  sans: "'CMU Sans Serif', Helvetica, Arial, 'Liberation Sans', 'DejaVu Sans', sans-serif",
+  serif: "'CMU Serif', 'Latin Modern Roman', 'Times New Roman', 'Liberation Serif', 'DejaVu Serif', serif",
+};
 
 export interface BuildSceneOpts {
   /** Scene size in CSS px (96/in). @default the preset's size */
@@ -395,7 +402,14 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
       data: { testid: "legend" },
     },
   ];
-  const scene: Scene = { widthPx: r2(widthPx), heightPx: r2(heightPx), plot, scales, fontFamily: FONT_FAMILY, layers };
+  const scene: Scene = {
+    widthPx: r2(widthPx),
+    heightPx: r2(heightPx),
+    plot,
+    scales,
+    fontFamily: FIGURE_FONT_CSS[fig.font] ?? FIGURE_FONT_CSS.sans,
+    layers,
+  };
   if (autoPlace && entries.length) scene.autoLegendPlace = autoPlace;
   if (opts.physical !== false) {
     const custom = opts.widthPx !== undefined || opts.heightPx !== undefined;

@@ -121,6 +121,7 @@ export function defaultFigure(): Figure {
     grid: true,
     legend: "auto",
     fontPt: 12,
+    font: "sans",
     title: "",
   };
 }

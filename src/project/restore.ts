@@ -31,6 +31,7 @@ import {
   setShare,
   sizePreset,
   topAxis,
+  figureFont,
   yView,
 } from "./schema";
 import { MIN_RANGE_DECADES, saneRange } from "./view-range";
@@ -350,6 +351,7 @@ function restoreFigure(raw: unknown, note: Note): Figure {
     grid: bool(own(f, "grid"), note, "grid") ?? d.grid,
     legend: valid(legendPlace, own(f, "legend"), note, "legend") ?? d.legend,
     fontPt: clamped(own(f, "fontPt"), 4, 72, note, "font size") ?? d.fontPt,
+    font: valid(figureFont, own(f, "font"), note, "figure font") ?? d.font,
     title: text(own(f, "title"), PROJECT_LIMITS.label, note, "title") ?? d.title,
   };
 }

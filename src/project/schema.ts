@@ -32,6 +32,9 @@ export const legendPlace = z.enum([
 ]);
 export const sizePreset = z.enum(["slide", "single-column", "double-column", "custom"]);
 export const topAxis = z.enum(["none", "fa", "frequency"]);
+// Joined in schema version 1 without a bump: the key is optional on reading (missing = "sans", as files were
+// drawn before), and an older build ignores it.
+export const figureFont = z.enum(["sans", "serif"]);
 export const yView = z.enum(["coupling", "normalized", "g-gamma"]);
 export const physicsRef = z.enum(["2016", "2019", "custom"]);
 export const modelKind = z.enum(["line", "interval", "between", "set"]);
@@ -198,6 +201,7 @@ export const ProjectSchema = z.object({
     grid: z.boolean(),
     legend: legendPlace,
     fontPt: z.number().min(4).max(72),
+    font: figureFont,
     title: z.string().max(PROJECT_LIMITS.label),
   }),
 });

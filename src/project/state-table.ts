@@ -85,6 +85,7 @@ export const FIGURE_STATE: { readonly [K in keyof Figure]-?: Persistence } = {
   grid: everywhere,
   legend: everywhere,
   fontPt: everywhere,
+  font: everywhere,
   title: everywhere,
 };
 

@@ -12,6 +12,8 @@ export type LegendPlace =
   "auto" | "top-left" | "top-right" | "bottom-left" | "bottom-right" | "outside-right" | "hidden";
 export type SizePreset = "slide" | "single-column" | "double-column" | "custom";
 export type TopAxis = "none" | "fa" | "frequency";
+/** The figure's font family: Computer Modern Sans or Serif (LaTeX's own look). */
+export type FigureFont = "sans" | "serif";
 /** y axis: g_aγγ itself, |E/N − c_γ|, or |g_γ| = |E/N − c_γ|/2 (model lines horizontal in the last two). */
 export type YView = "coupling" | "normalized" | "g-gamma";
 
@@ -123,6 +125,8 @@ export interface Figure {
   legend: LegendPlace;
   /** Base font size in pt at the physical size. */
   fontPt: number;
+  /** Added in version 1 without a bump: files and links without it read as "sans". */
+  font: FigureFont;
   title: string;
 }
 

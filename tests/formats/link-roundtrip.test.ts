@@ -170,6 +170,7 @@ const figure: fc.Arbitrary<Figure> = fc.record({
     "hidden",
   ) as fc.Arbitrary<Figure["legend"]>,
   fontPt: fc.double({ min: 4, max: 72, noNaN: true }),
+  font: fc.constantFrom("sans", "serif") as fc.Arbitrary<Figure["font"]>,
   title: text(40),
 });
 

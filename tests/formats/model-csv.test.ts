@@ -42,6 +42,7 @@ function project(models: Model[], massRangeEv: [number, number] = [1e-6, 1e-3]):
       grid: false,
       legend: "top-left",
       fontPt: 8,
+      font: "sans",
       title: "",
     },
   };

@@ -139,6 +139,7 @@ export function fixtureProject(): Project {
       grid: true,
       legend: "bottom-right",
       fontPt: 12,
+      font: "sans",
       title: "",
     },
   };

@@ -77,6 +77,8 @@ const FIGURE_V1: Codec = {
     { full: "grid", short: "g", base: () => true },
     { full: "legend", short: "l", base: () => "bottom-right" },
     { full: "fontPt", short: "s", base: () => 12 },
+    // Joined without a bump: links written before it decode to "sans", the look they had.
+    { full: "font", short: "f", base: () => "sans" },
     { full: "title", short: "n", base: () => "" },
   ],
 };
