@@ -5,14 +5,10 @@ import { defaultProject } from "../../project/demo";
 import { UNVERIFIED_LINK_NOTE, repairsNote } from "./open-notes";
 import type { AxbandState } from "./types";
 import { CHUNK_POINTS, type CurveArrays, nextTask } from "./autosave-chunks";
-import { indexedDbCurveStore } from "./curve-store";
-import {
-  type AutosaveOpts,
-  STORAGE_KEY,
-  browserLocalStorage,
-  loadFileModule,
-  loadedFileModule,
-} from "./autosave-storage";
+import type { DeserializeResult } from "../../formats/project-file";
+import { type Revision, type SpareRecord, newer, splitRevision } from "./autosave-revision";
+import { tellLost } from "./autosave-lost";
+import { type AutosaveOpts, STORAGE_KEY, loadFileModule, loadedFileModule, storesOf } from "./autosave-storage";
 
 /** How long start-up waits for one curve's data (a blocked IndexedDB must not keep the app from starting). */
 const CURVE_READ_TIMEOUT_MS = 4000;
@@ -33,20 +29,33 @@ function withTimeout<T>(p: Promise<T>, ms: number): Promise<T | undefined> {
   });
 }
 
-/** The autosaved project, or null when there is none; problems with it become messages. */
-export async function restoreAutosave(store: StoreApi<AxbandState>, opts: AutosaveOpts = {}): Promise<Project | null> {
-  const local = opts.local === undefined ? browserLocalStorage() : opts.local;
-  const curves = opts.curves === undefined ? indexedDbCurveStore() : opts.curves;
+/** The newest saved project text (localStorage or the spare copy) with its revision; null when there is none. */
+async function readNewest(opts: AutosaveOpts): Promise<{ meta: string; rev: Revision } | null> {
+  const { local, spare } = storesOf(opts);
   let text: string | null;
   try {
     text = local ? local.getItem(STORAGE_KEY) : null;
   } catch {
     text = null;
   }
-  if (!text) return null;
+  let kept: SpareRecord | undefined;
+  try {
+    kept = spare ? await withTimeout(spare.get(), CURVE_READ_TIMEOUT_MS) : undefined;
+  } catch {
+    kept = undefined;
+  }
+  const fromLocal = text ? splitRevision(text) : null;
+  if (!kept) return fromLocal;
+  if (!fromLocal) return { meta: kept.text, rev: kept.rev };
+  return newer(fromLocal.rev, kept.rev) === kept.rev ? { meta: kept.text, rev: kept.rev } : fromLocal;
+}
+
+/** The project of saved text with its curve data read back from the curve store. */
+export async function loadSaved(meta: string, opts: AutosaveOpts): Promise<DeserializeResult> {
+  const { curves } = storesOf(opts);
   const ids = new Set<string>();
   try {
-    const raw = JSON.parse(text) as { curves?: { id?: unknown }[] };
+    const raw = JSON.parse(meta) as { curves?: { id?: unknown }[] };
     for (const c of Array.isArray(raw?.curves) ? raw.curves : []) if (typeof c?.id === "string") ids.add(c.id);
   } catch {
     // deserializeFromStorage reports unreadable text below.
@@ -69,7 +78,19 @@ export async function restoreAutosave(store: StoreApi<AxbandState>, opts: Autosa
   // last read (a chunk's worth of points takes a few ms, not worth a task).
   if (data.reduce((n, d) => n + d.massEv.length, 0) > CHUNK_POINTS) await nextTask();
   const { deserializeFromStorage } = loadedFileModule() ?? (await loadFileModule());
-  const r = deserializeFromStorage(text, data);
+  return deserializeFromStorage(meta, data);
+}
+
+/** The revision each store was restored from: its autosave continues from there. */
+export const restoredRevisions = new WeakMap<StoreApi<AxbandState>, Revision>();
+
+/** The autosaved project, or null when there is none; problems with it become messages. */
+export async function restoreAutosave(store: StoreApi<AxbandState>, opts: AutosaveOpts = {}): Promise<Project | null> {
+  const newest = await readNewest(opts);
+  const r = newest ? await loadSaved(newest.meta, opts) : null;
+  tellLost(store, storesOf(opts).session, newest?.rev ?? null, r?.ok ? r.project : null);
+  if (!newest || !r) return null;
+  restoredRevisions.set(store, newest.rev);
   if (!r.ok) {
     store.getState().pushMessage("alert", `${sentence(r.error)} Starting from the demo project.`);
     return null;

@@ -1,7 +1,8 @@
 // Where autosave keeps the project text (localStorage) and the lazily loaded codec both saving and
 // restoring use; shared by autosave.ts and autosave-restore.ts.
 import type { Project } from "../../project/types";
-import type { CurveDataStore } from "./curve-store";
+import { type CurveDataStore, indexedDbCurveStore, indexedDbSpareStore } from "./curve-store";
+import type { SpareStore } from "./autosave-revision";
 
 /** localStorage key of the saved project (without curve data). */
 export const STORAGE_KEY = "axband:project";
@@ -9,11 +10,18 @@ export const STORAGE_KEY = "axband:project";
 /** The part of the Storage interface autosave uses. */
 export type KeyValueStorage = Pick<Storage, "getItem" | "setItem">;
 
+/** The part of sessionStorage autosave uses. */
+export type SessionStorage = Pick<Storage, "getItem" | "setItem" | "removeItem">;
+
 export interface AutosaveOpts {
   /** @default window.localStorage when reachable, else null (storage unavailable) */
   local?: KeyValueStorage | null;
   /** @default an IndexedDB store when indexedDB exists, else null */
   curves?: CurveDataStore | null;
+  /** Where the project text goes when localStorage is full. @default IndexedDB, when `curves` is defaulted too */
+  spare?: SpareStore | null;
+  /** Where a note of unsaved work survives a reload. @default sessionStorage, when `local` is defaulted too */
+  session?: SessionStorage | null;
   /** Quiet time after the last change before saving, in ms. @default 300 */
   debounceMs?: number;
 }
@@ -29,6 +37,23 @@ export function browserLocalStorage(): KeyValueStorage | null {
   } catch {
     return null;
   }
+}
+
+/** The stores of `opts` with their defaults (the browser's own stores only when the test-facing ones are defaulted). */
+export function storesOf(opts: AutosaveOpts) {
+  const session = () => {
+    try {
+      return globalThis.sessionStorage ?? null;
+    } catch {
+      return null;
+    }
+  };
+  return {
+    local: opts.local === undefined ? browserLocalStorage() : opts.local,
+    curves: opts.curves === undefined ? indexedDbCurveStore() : opts.curves,
+    spare: opts.spare === undefined ? (opts.curves === undefined ? indexedDbSpareStore() : null) : opts.spare,
+    session: opts.session === undefined ? (opts.local === undefined ? session() : null) : opts.session,
+  };
 }
 
 const NO_DATA = new Float64Array(0);

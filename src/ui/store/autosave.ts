@@ -5,20 +5,35 @@ import type { StoreApi } from "zustand";
 import type { Project } from "../../project/types";
 import type { AxbandState } from "./types";
 import type { CurveArrays } from "./autosave-chunks";
-import { indexedDbCurveStore } from "./curve-store";
+import type { CurveDataStore } from "./curve-store";
 import {
   type AutosaveOpts,
+  type KeyValueStorage,
   STORAGE_KEY,
   STORAGE_PROBLEM,
-  browserLocalStorage,
   loadFileModule,
   loadedFileModule,
   metaOf,
+  storesOf,
 } from "./autosave-storage";
+import { type Revision, newTabId, newer, splitRevision, withRevision } from "./autosave-revision";
+import { clearLost, noteLost } from "./autosave-lost";
+import { restoredRevisions } from "./autosave-restore";
+
+/** The revision of the text in localStorage (null when there is none or it cannot be read). */
+function storedRevision(local: KeyValueStorage | null): Revision | null {
+  try {
+    const text = local?.getItem(STORAGE_KEY);
+    return text ? splitRevision(text).rev : null;
+  } catch {
+    return null;
+  }
+}
 
 export { CHUNK_POINTS, chunkKey, joinChunks, splitChunks, type CurveArrays } from "./autosave-chunks";
 export { type CurveDataStore } from "./curve-store";
-export { STORAGE_KEY, STORAGE_PROBLEM, type KeyValueStorage } from "./autosave-storage";
+export { STORAGE_KEY, STORAGE_PROBLEM, type KeyValueStorage, type SessionStorage } from "./autosave-storage";
+export type { Revision, SpareRecord, SpareStore } from "./autosave-revision";
 export { initProject, restoreAutosave } from "./autosave-restore";
 
 export interface Autosave {
@@ -27,35 +42,15 @@ export interface Autosave {
   stop(): void;
 }
 
-/**
- * Saves the store's project after every change (debounced) and on pagehide.
- * Curve arrays are written only when their references changed since the last save.
- */
-export function startAutosave(store: StoreApi<AxbandState>, opts: AutosaveOpts = {}): Autosave {
-  const local = opts.local === undefined ? browserLocalStorage() : opts.local;
-  const curves = opts.curves === undefined ? indexedDbCurveStore() : opts.curves;
-  const debounceMs = opts.debounceMs ?? 300;
+/** Writes curve arrays whose references changed since the last save and deletes those of removed curves. */
+function curveWriter(curves: CurveDataStore | null, problem: () => void) {
   const saved = new Map<string, CurveArrays>();
-  let told = false;
-  let timer: ReturnType<typeof setTimeout> | null = null;
-  let lastSaved: Project | null = null;
-
-  const problem = () => {
-    if (told) return;
-    told = true;
-    store.getState().pushMessage("alert", STORAGE_PROBLEM);
-  };
-
-  const save = async (): Promise<void> => {
-    timer = null;
-    const file = loadedFileModule() ?? (await loadFileModule());
-    const project = store.getState().project;
-    if (project === lastSaved) return;
-    lastSaved = project;
-    // Curves first, so a saved project never names curves whose data is not stored yet.
-    const writes: Promise<void>[] = [];
-    if (project.curves.length > 0 && !curves) problem();
-    if (curves) {
+  return {
+    /** Starts the writes for `project`; the promises settle when they are done (failures become `problem`). */
+    write(project: Project): Promise<void>[] {
+      const writes: Promise<void>[] = [];
+      if (project.curves.length > 0 && !curves) problem();
+      if (!curves) return writes;
       const ids = new Set<string>();
       for (const c of project.curves) {
         ids.add(c.id);
@@ -75,18 +70,70 @@ export function startAutosave(store: StoreApi<AxbandState>, opts: AutosaveOpts =
         saved.delete(id);
         writes.push(curves.delete(id).catch(() => undefined));
       }
-    }
+      return writes;
+    },
+    /** Treats the arrays of `project` as stored (restored or loaded ones), or forgets everything (null). */
+    reset(project: Project | null): void {
+      saved.clear();
+      for (const c of project?.curves ?? []) saved.set(c.id, { massEv: c.massEv, gInvGeV: c.gInvGeV });
+    },
+  };
+}
+
+/**
+ * Saves the store's project after every change (debounced) and on pagehide.
+ * Curve arrays are written only when their references changed since the last save. The text goes to
+ * localStorage with a revision; when localStorage is full it goes to the spare store (IndexedDB), and when
+ * that fails too a note of what was not saved goes to sessionStorage for the next start.
+ */
+export function startAutosave(store: StoreApi<AxbandState>, opts: AutosaveOpts = {}): Autosave {
+  const { local, curves, spare, session } = storesOf(opts);
+  const debounceMs = opts.debounceMs ?? 300;
+  const tab = newTabId();
+  let base: Revision | null = restoredRevisions.get(store) ?? storedRevision(local);
+  let told = false;
+  let timer: ReturnType<typeof setTimeout> | null = null;
+  let lastSaved: Project | null = null;
+
+  const problem = () => {
+    if (told) return;
+    told = true;
+    store.getState().pushMessage("alert", STORAGE_PROBLEM);
+  };
+  const curveData = curveWriter(curves, problem);
+  const savedAs = (rev: Revision) => {
+    base = newer(base, rev);
+    clearLost(session);
+  };
+
+  const save = async (): Promise<void> => {
+    timer = null;
+    const file = loadedFileModule() ?? (await loadFileModule());
+    const project = store.getState().project;
+    if (project === lastSaved) return;
+    lastSaved = project;
+    // Curves first, so a saved project never names curves whose data is not stored yet.
+    const writes = curveData.write(project);
+    const rev: Revision = { seq: (newer(base, storedRevision(local))?.seq ?? 0) + 1, tab, at: Date.now() };
+    const text = withRevision(metaOf(file, project), rev);
     if (!local) problem();
     else {
       try {
-        local.setItem(STORAGE_KEY, metaOf(file, project));
+        local.setItem(STORAGE_KEY, text);
+        savedAs(rev);
       } catch {
         problem();
+        const kept = spare
+          ? spare.put({ text, rev }).then(
+              () => true,
+              () => false,
+            )
+          : Promise.resolve(false);
+        writes.push(kept.then((ok) => (ok ? savedAs(rev) : noteLost(session, project, rev))));
       }
     }
     await Promise.all(writes);
   };
-
   const schedule = () => {
     // Loaded at the first change (not at start-up), so that a save on pagehide finds it.
     if (!loadedFileModule()) void loadFileModule();

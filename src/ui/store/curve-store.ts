@@ -10,6 +10,7 @@ import {
   chunkOf,
   nextTask,
 } from "./autosave-chunks";
+import { type SpareRecord, type SpareStore, isRevision } from "./autosave-revision";
 
 /** Where curve arrays go: IndexedDB in the browser, a map in tests. */
 export interface CurveDataStore {
@@ -25,13 +26,10 @@ function request<T>(r: IDBRequest<T>): Promise<T> {
   });
 }
 
-/**
- * Curve arrays in IndexedDB (database "axband", object store "curves"); null when IndexedDB is missing.
- * A curve is written as ~1 MiB chunks, one per task, so a million-point curve never blocks the page for
- * long; its head record is written last, so an interrupted write reads back as missing, never as wrong.
- * @param dbName @default "axband"
- */
-export function indexedDbCurveStore(dbName = "axband"): CurveDataStore | null {
+type Tx = <T>(mode: IDBTransactionMode, run: (s: IDBObjectStore) => IDBRequest<T>) => Promise<T>;
+
+/** One transaction on the "curves" object store of `dbName`, opening the database once; null without IndexedDB. */
+function curvesTx(dbName: string): Tx | null {
   const idb = (globalThis as { indexedDB?: IDBFactory }).indexedDB;
   if (!idb) return null;
   let db: Promise<IDBDatabase> | null = null;
@@ -44,7 +42,7 @@ export function indexedDbCurveStore(dbName = "axband"): CurveDataStore | null {
     }
     return db;
   };
-  const tx = async <T>(mode: IDBTransactionMode, run: (s: IDBObjectStore) => IDBRequest<T>): Promise<T> => {
+  return async (mode, run) => {
     const d = await open();
     const t = d.transaction("curves", mode);
     const result = request(run(t.objectStore("curves")));
@@ -55,6 +53,17 @@ export function indexedDbCurveStore(dbName = "axband"): CurveDataStore | null {
     });
     return result;
   };
+}
+
+/**
+ * Curve arrays in IndexedDB (database "axband", object store "curves"); null when IndexedDB is missing.
+ * A curve is written as ~1 MiB chunks, one per task, so a million-point curve never blocks the page for
+ * long; its head record is written last, so an interrupted write reads back as missing, never as wrong.
+ * @param dbName @default "axband"
+ */
+export function indexedDbCurveStore(dbName = "axband"): CurveDataStore | null {
+  const tx = curvesTx(dbName);
+  if (!tx) return null;
   const chunkRange = (id: string) => IDBKeyRange.bound(`${id}\u0000`, `${id}\u0001`, false, true);
   const remove = async (id: string) => {
     await tx("readwrite", (s) => s.delete(id));
@@ -87,5 +96,24 @@ export function indexedDbCurveStore(dbName = "axband"): CurveDataStore | null {
       return joiner.finish();
     },
     delete: remove,
+  };
+}
+
+/** The spare copy of the project text in IndexedDB, under a key no curve id can take (ids never start with "\u0001"). */
+const SPARE_KEY = "\u0001project";
+
+/**
+ * The spare copy of the project text for when localStorage is full (IndexedDB has far more room); same
+ * database and object store as the curve data. Null when IndexedDB is missing.
+ */
+export function indexedDbSpareStore(dbName = "axband"): SpareStore | null {
+  const tx = curvesTx(dbName);
+  if (!tx) return null;
+  return {
+    put: async (rec) => void (await tx("readwrite", (s) => s.put(rec, SPARE_KEY))),
+    get: async () => {
+      const r = (await tx("readonly", (s) => s.get(SPARE_KEY))) as Partial<SpareRecord> | undefined;
+      return r && typeof r.text === "string" && isRevision(r.rev) ? { text: r.text, rev: r.rev } : undefined;
+    },
   };
 }
