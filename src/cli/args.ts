@@ -79,8 +79,8 @@ output (at least one of -o, --png, --models-csv, --overlap, --overlap-intervals)
   --title TEXT              figure title
 
 CSV input (two columns, mass and coupling; '#' comment lines; optional header with units):
-  --role R                  exclusion | projection | region for the CSV files that follow it; files before
-                            the first --role take the first one given (default exclusion)
+  --role R                  exclusion | projection | region for the CSV files after it (up to the next
+                            --role); files before any --role are exclusions
   --model E/N               a model line (8/3) or band (0..44/3); repeatable
   --mass-unit U             mass unit when the header names none: eV, meV, ueV, neV, peV, keV, GeV, Hz, kHz,
                             MHz, GHz
@@ -255,7 +255,7 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
   o.inputs = pending.map(({ path, roleCount }) => ({
     path,
     kind: kindOf(path),
-    role: roleCount > 0 ? roles[roleCount - 1] : (roles[0] ?? "exclusion"),
+    role: roleCount > 0 ? roles[roleCount - 1] : "exclusion",
   }));
   if (o.help) return { ok: true, options: o };
   if (o.inputs.length === 0)
@@ -266,6 +266,13 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
       error: "nothing to write: give -o FILE.svg, --png FILE.png, --models-csv FILE.csv or --overlap FILE",
     };
   const projects = o.inputs.filter((f) => f.kind !== "csv");
+  // A trailing --role would otherwise be dropped without a word (it never reaches back to earlier files).
+  const lastFileRoleCount = pending.length > 0 ? pending[pending.length - 1].roleCount : 0;
+  if (projects.length === 0 && roles.length > lastFileRoleCount)
+    return {
+      ok: false,
+      error: `--role ${roles[roles.length - 1]} is followed by no CSV file: a --role applies to the files after it`,
+    };
   if (projects.length > 0 && o.inputs.length > 1) {
     return {
       ok: false,

@@ -3,7 +3,8 @@
 import { readFileSync } from "node:fs";
 import { basename } from "node:path";
 import type { Curve, Model, Project } from "../project/types";
-import { defaultFigure, emptyProject, newCurve, newModel } from "../project/defaults";
+import { autoModelLabel, defaultFigure, emptyProject, newCurve, newModel } from "../project/defaults";
+import { minusSigns } from "../plot/format";
 import {
   decodeImportBytes,
   formatProblem,
@@ -138,7 +139,9 @@ function loadCsv(inputs: CliInput[], opts: CliOptions, preParsed: PreParsed): Lo
   for (const spec of opts.models) {
     const e = parseEOverN(spec);
     if (!e.ok) throw new InputError(`--model ${spec}: ${e.error}`);
-    models.push(newModel({ id: `m-${models.length + 1}`, eOverNMin: e.min, eOverNMax: e.max }, { models }));
+    // Labels with U+2212, as the app writes them (legend, notes, model CSV, overlap exports).
+    const label = minusSigns(autoModelLabel(e.min, e.max));
+    models.push(newModel({ id: `m-${models.length + 1}`, label, eOverNMin: e.min, eOverNMax: e.max }, { models }));
   }
   const figure = defaultFigure();
   const fitted = fitRanges(curves);

@@ -1,6 +1,5 @@
 // The scene builder: a project in, the complete figure out as plain layers of paths, rects and text, drawn
 // the same way on screen (SceneSvg and scene-dom.ts) and in the exported SVG (writeSvg). All defaults of a figure live here.
-import { bandCancels } from "../physics/coupling";
 import { DEFAULT_MASS_RANGE_EV, defaultYRange } from "../project/defaults";
 import type { Curve, FigureFont, LegendPlace, Model, Project, YView } from "../project/types";
 import type { PathNode, Scene, SceneLayer, SceneNode, ScaleConfig } from "./scene-types";
@@ -17,7 +16,7 @@ import {
   type Layout,
   type LegendCorner,
 } from "./layout";
-import { legendLabelText, legendNodes, measureLegend, type LegendBox, type LegendEntry } from "./legend";
+import { legendLabelText, legendNodes, measureLegend, modelKindNote, type LegendBox, type LegendEntry } from "./legend";
 import {
   LEGEND_CORNERS,
   OUTSIDE_MIN_PLOT_FRACTION,
@@ -25,9 +24,10 @@ import {
   pickLegendPlace,
   placementCurve,
 } from "./legend-place";
+import { modelShape, shapeCancels, shapeNormalizedRange } from "./model-shape";
 import type { Shape } from "./occupancy";
 import { modelGeometry } from "./models";
-import { constantsOf, eOverNValue, rescaleNote } from "./physics-settings";
+import { constantsOf, rescaleNote } from "./physics-settings";
 import { logAffine, sanitizeDomain, viewTransform } from "./scales";
 import { runsWidthPx } from "./text";
 import { logTicks } from "./ticks";
@@ -75,15 +75,17 @@ export interface BuildSceneOpts {
 
 function modelNotes(m: Model, c: ReturnType<typeof constantsOf>): string[] {
   const notes: string[] = [];
-  const a = eOverNValue(m.eOverNMin);
-  const b = eOverNValue(m.eOverNMax ?? m.eOverNMin);
+  const kindNote = modelKindNote(m);
+  if (kindNote) notes.push(kindNote);
+  const shape = modelShape(m, c);
   const sigmas = Number.isFinite(m.sigmas) && m.sigmas > 0 ? m.sigmas : 0;
   if (sigmas > 0) notes.push(`±${r2(sigmas)}σ spread`);
-  if (a === b) {
-    if (Math.abs(a - c.cGamma) === 0) notes.push("g = 0: not drawn");
-  } else if (bandCancels(Math.min(a, b), Math.max(a, b), { constants: c })) {
-    notes.push("reaches g = 0: cancellation");
-  } else if (sigmas > 0 && bandCancels(Math.min(a, b), Math.max(a, b), { constants: c, sigmas })) {
+  if (!shape) return notes;
+  if (shape.kind === "line" || shape.kind === "lines") {
+    if (shapeCancels(shape, c)) notes.push(shape.kind === "line" ? "g = 0: not drawn" : "a line at g = 0 is not drawn");
+  } else if (shapeCancels(shape, c)) {
+    notes.push(shape.kind === "interval" ? "reaches g = 0: cancellation" : "a line reaches g = 0");
+  } else if (sigmas > 0 && shapeNormalizedRange(shape, c, sigmas)[0] === 0) {
     notes.push("spread reaches g = 0");
   }
   return notes;
@@ -102,10 +104,9 @@ function legendEntries(project: Project, fonts: Fonts, c: ReturnType<typeof cons
   const entries: LegendEntry[] = [];
   for (const m of project.models) {
     if (!m.visible) continue;
-    const a = eOverNValue(m.eOverNMin);
-    const b = eOverNValue(m.eOverNMax ?? m.eOverNMin);
-    if (!Number.isFinite(a) || !Number.isFinite(b)) continue;
-    const isLine = a === b;
+    const shape = modelShape(m, c);
+    if (!shape) continue;
+    const isLine = shape.kind === "line" || shape.kind === "lines";
     const lw = isLine ? fonts.dataLinePx * 1.15 : fonts.dataLinePx;
     entries.push({
       kind: isLine ? "model-line" : "model-band",

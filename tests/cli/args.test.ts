@@ -3,7 +3,7 @@
 import { describe, expect, it } from "vitest";
 import { existsSync, readdirSync, readFileSync } from "node:fs";
 import { join } from "node:path";
-import { parseArgs } from "../../src/cli/args";
+import { parseArgs, USAGE } from "../../src/cli/args";
 import { fitRanges } from "../../src/cli/fit-ranges";
 import { pngPixelSize, renderPng } from "../../src/cli/png";
 import { FIGURE_FONT_CSS } from "../../src/plot/scene";
@@ -35,19 +35,23 @@ describe("parseArgs", () => {
     expect(o.inputs[0].kind).toBe("svg");
   });
 
-  it("gives each CSV file the --role before it; files before the first --role take the first one", () => {
+  it("gives each CSV file the --role before it; files before any --role are exclusions", () => {
     const o = ok(["a.csv", "--role", "projection", "b.csv", "c.txt", "--role", "region", "d.dat", "-o", "x.svg"]);
     expect(o.inputs.map((f) => [f.path, f.kind, f.role])).toEqual([
-      ["a.csv", "csv", "projection"],
+      ["a.csv", "csv", "exclusion"],
       ["b.csv", "csv", "projection"],
       ["c.txt", "csv", "projection"],
       ["d.dat", "csv", "region"],
     ]);
-    expect(ok(["a.csv", "b.csv", "--role", "region", "-o", "x.svg"]).inputs.map((f) => f.role)).toEqual([
-      "region",
-      "region",
-    ]);
+    // A --role after the last file must not reach back to earlier files (issue 16); it is refused, not dropped.
+    expect(err(["a.csv", "b.csv", "--role", "region", "-o", "x.svg"])).toMatch(/--role region .*no CSV file/);
     expect(ok(["a.csv", "-o", "x.svg"]).inputs[0].role).toBe("exclusion");
+  });
+
+  it("says in --help that --role applies to the files after it", () => {
+    expect(USAGE).toMatch(/files after it/);
+    expect(USAGE).toMatch(/before any --role are exclusions/);
+    expect(USAGE).not.toMatch(/take the first one given/);
   });
 
   it("collects repeated --model values and reads ranges", () => {
