@@ -43,8 +43,8 @@ export interface CliOptions {
   massRangeEv?: [number, number];
   gRange?: [number, number];
   title?: string;
-  /** Font family of a PDF figure. @default "sans" */
-  font: FigureFontFamily;
+  /** The figure's font family (SVG, PNG and PDF). @default the project's (a new project's is "sans") */
+  font?: FigureFontFamily;
   help: boolean;
 }
 
@@ -61,7 +61,8 @@ usage:
 output (at least one of -o, --png, --models-csv, --overlap, --overlap-intervals):
   -o, --out FILE.svg|.pdf   write the figure as SVG (the same SVG the app exports) or, for a name ending in
                             .pdf, as a vector PDF of the figure's physical size with the project attached
-  --font sans|serif         the PDF's font: Computer Modern Sans or Serif, LaTeX's own look (default sans)
+  --font sans|serif         the figure's font in SVG, PNG and PDF: Computer Modern Sans or Serif, LaTeX's own
+                            look (default: the project's; sans for CSV input)
   --png FILE.png            write the figure as PNG
   --dpi N                   PNG dots per inch at the figure's physical size (default 300)
   --scale K                 PNG at K times the 96-px-per-inch size instead (1 or 2, as the app's 1x/2x)
@@ -148,7 +149,6 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
     embed: true,
     models: [],
     skipBadRows: false,
-    font: "sans",
     help: false,
   };
   const roles: CurveRole[] = [];
