@@ -7,6 +7,7 @@ import { pathToFileURL } from "node:url";
 import { parseArgs, USAGE, type CliOptions } from "./args";
 import { InputError, type PreParsed } from "./inputs";
 import { loadAnyProject } from "./pdf-input";
+import { fitFigure } from "./fit-figure";
 import { pngPixelSize, renderPng } from "./png";
 import { writeAllOrNothing, type OutputFile } from "./write-atomic";
 import {
@@ -133,8 +134,9 @@ async function run(argv: readonly string[], io: Io, preParsed: PreParsed): Promi
   try {
     for (const p of [opts.out, opts.png, opts.modelsCsv, opts.overlap, opts.overlapIntervals]) if (p) checkOutputDir(p);
     checkDistinctPaths(opts);
-    const { project, notes } = await loadAnyProject(opts, preParsed);
-    for (const n of notes) io.err(`note: ${n}`);
+    const loaded = await loadAnyProject(opts, preParsed);
+    const { project, notes: fitNotes } = fitFigure(loaded.project);
+    for (const n of [...loaded.notes, ...fitNotes]) io.err(`note: ${n}`);
     const files: OutputFile[] = [];
     const report: string[] = [];
     const preset = presetOf(project.figure);
