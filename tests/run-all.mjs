@@ -1,4 +1,4 @@
-// `npm test`: typecheck, lint, format check, then the Vitest projects (unit + ui together, then browser alone); ends with
+// `npm test`: typecheck, lint, format check, knip, then the Vitest projects (unit + ui together, then browser alone); ends with
 // the plain summary line "N passed, N failed" that CI reads. Exit code 0 only when everything passed.
 import { spawnSync } from "node:child_process";
 import { mkdirSync, readFileSync, rmSync, existsSync } from "node:fs";
@@ -28,6 +28,7 @@ for (const [label, cmd, args] of [
     ["-c", "tests/eslint.config.mjs", "--no-error-on-unmatched-pattern", "src", "tests", "bench"],
   ],
   ["format", bin("prettier"), ["--check", "--log-level=warn", ...FORMAT_GLOBS]],
+  ["knip (unused files, exports, dependencies)", bin("knip"), ["--no-progress"]],
 ]) {
   if (step(label, cmd, args)) passed++;
   else failed++;

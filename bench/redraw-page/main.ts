@@ -45,8 +45,12 @@ async function loadProject(legend: Project["figure"]["legend"] = "outside-right"
   const model = (id: string, min: string, max: string, colour: string): Model => ({
     id,
     label: `E/N = ${min === max ? min : `${min}..${max}`}`,
+    kind: min === max ? "line" : "interval",
     eOverNMin: min,
     eOverNMax: max,
+    members: [],
+    setDraw: "extremes",
+    setShare: 0.68,
     source: { kind: "typed" },
     colour,
     lineStyle: "solid",
@@ -69,7 +73,7 @@ async function loadProject(legend: Project["figure"]["legend"] = "outside-right"
     }
   }
   return {
-    version: 1,
+    version: 2,
     name: "redraw benchmark",
     physics: {
       ref: "2019",
@@ -92,6 +96,7 @@ async function loadProject(legend: Project["figure"]["legend"] = "outside-right"
       grid: true,
       legend,
       fontPt: 12,
+      font: "sans",
       title: "",
     },
   };

@@ -43,8 +43,8 @@ export interface CliOptions {
   massRangeEv?: [number, number];
   gRange?: [number, number];
   title?: string;
-  /** Font family of a PDF figure. @default "sans" */
-  font: FigureFontFamily;
+  /** The figure's font family (SVG, PNG and PDF). @default the project's (a new project's is "sans") */
+  font?: FigureFontFamily;
   help: boolean;
 }
 
@@ -61,7 +61,8 @@ usage:
 output (at least one of -o, --png, --models-csv, --overlap, --overlap-intervals):
   -o, --out FILE.svg|.pdf   write the figure as SVG (the same SVG the app exports) or, for a name ending in
                             .pdf, as a vector PDF of the figure's physical size with the project attached
-  --font sans|serif         the PDF's font: Computer Modern Sans or Serif, LaTeX's own look (default sans)
+  --font sans|serif         the figure's font in SVG, PNG and PDF: Computer Modern Sans or Serif, LaTeX's own
+                            look (default: the project's; sans for CSV input)
   --png FILE.png            write the figure as PNG
   --dpi N                   PNG dots per inch at the figure's physical size (default 300)
   --scale K                 PNG at K times the 96-px-per-inch size instead (1 or 2, as the app's 1x/2x)
@@ -78,8 +79,8 @@ output (at least one of -o, --png, --models-csv, --overlap, --overlap-intervals)
   --title TEXT              figure title
 
 CSV input (two columns, mass and coupling; '#' comment lines; optional header with units):
-  --role R                  exclusion | projection | region for the CSV files that follow it; files before
-                            the first --role take the first one given (default exclusion)
+  --role R                  exclusion | projection | region for the CSV files after it (up to the next
+                            --role); files before any --role are exclusions
   --model E/N               a model line (8/3) or band (0..44/3); repeatable
   --mass-unit U             mass unit when the header names none: eV, meV, ueV, neV, peV, keV, GeV, Hz, kHz,
                             MHz, GHz
@@ -148,7 +149,6 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
     embed: true,
     models: [],
     skipBadRows: false,
-    font: "sans",
     help: false,
   };
   const roles: CurveRole[] = [];
@@ -255,7 +255,7 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
   o.inputs = pending.map(({ path, roleCount }) => ({
     path,
     kind: kindOf(path),
-    role: roleCount > 0 ? roles[roleCount - 1] : (roles[0] ?? "exclusion"),
+    role: roleCount > 0 ? roles[roleCount - 1] : "exclusion",
   }));
   if (o.help) return { ok: true, options: o };
   if (o.inputs.length === 0)
@@ -266,6 +266,13 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
       error: "nothing to write: give -o FILE.svg, --png FILE.png, --models-csv FILE.csv or --overlap FILE",
     };
   const projects = o.inputs.filter((f) => f.kind !== "csv");
+  // A trailing --role would otherwise be dropped without a word (it never reaches back to earlier files).
+  const lastFileRoleCount = pending.length > 0 ? pending[pending.length - 1].roleCount : 0;
+  if (projects.length === 0 && roles.length > lastFileRoleCount)
+    return {
+      ok: false,
+      error: `--role ${roles[roles.length - 1]} is followed by no CSV file: a --role applies to the files after it`,
+    };
   if (projects.length > 0 && o.inputs.length > 1) {
     return {
       ok: false,

@@ -3,7 +3,8 @@
 import { readFileSync } from "node:fs";
 import { basename } from "node:path";
 import type { Curve, Model, Project } from "../project/types";
-import { defaultFigure, emptyProject, newCurve, newModel } from "../project/defaults";
+import { autoModelLabel, defaultFigure, emptyProject, newCurve, newModel } from "../project/defaults";
+import { minusSigns } from "../plot/format";
 import {
   decodeImportBytes,
   formatProblem,
@@ -138,7 +139,9 @@ function loadCsv(inputs: CliInput[], opts: CliOptions, preParsed: PreParsed): Lo
   for (const spec of opts.models) {
     const e = parseEOverN(spec);
     if (!e.ok) throw new InputError(`--model ${spec}: ${e.error}`);
-    models.push(newModel({ id: `m-${models.length + 1}`, eOverNMin: e.min, eOverNMax: e.max }, { models }));
+    // Labels with U+2212, as the app writes them (legend, notes, model CSV, overlap exports).
+    const label = minusSigns(autoModelLabel(e.min, e.max));
+    models.push(newModel({ id: `m-${models.length + 1}`, label, eOverNMin: e.min, eOverNMax: e.max }, { models }));
   }
   const figure = defaultFigure();
   const fitted = fitRanges(curves);
@@ -150,7 +153,7 @@ function loadCsv(inputs: CliInput[], opts: CliOptions, preParsed: PreParsed): Lo
   return { project: { ...project, curves, models, figure }, notes };
 }
 
-/** Applies the size, range and title options to a loaded project (a copy; figure fields only). */
+/** Applies the size, range, title and font options to a loaded project (a copy; figure fields only). */
 export function applyFigureOptions(project: Project, opts: CliOptions): Project {
   const f = { ...project.figure };
   if (opts.preset) f.preset = opts.preset;
@@ -159,6 +162,7 @@ export function applyFigureOptions(project: Project, opts: CliOptions): Project 
   if (opts.massRangeEv) f.massRangeEv = opts.massRangeEv;
   if (opts.gRange) f.yRange = opts.gRange;
   if (opts.title !== undefined) f.title = opts.title;
+  if (opts.font) f.font = opts.font;
   return { ...project, figure: f };
 }
 

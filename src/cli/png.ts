@@ -1,49 +1,13 @@
 // PNG output of the renderer: rasterises the exported SVG with resvg (a native binary shipped inside its npm
-// package; no browser, no download) at physical size × dpi, and stamps the dpi into the PNG's pHYs chunk.
-import { existsSync } from "node:fs";
+// package; no browser, no download) at physical size × dpi, in the figure font's own files (the PDF's), and
+// stamps the dpi into the PNG's pHYs chunk.
 import { createRequire } from "node:module";
+import type { FigureFontFamily } from "../formats/pdf/fonts";
 import { setPngDpi } from "../formats/png-meta";
+import { figureFontPaths } from "./pdf-fonts";
 
-/**
- * Sans-serif faces looked for, in order, with the files that show they are installed (Debian, Fedora, Arch,
- * macOS, Windows). Arial-metric faces first: the plot core lays text out with Helvetica/Arial widths, and
- * Liberation Sans shares them; DejaVu Sans is ~8 % wider. resvg uses the default family also for a
- * font-family list whose first entry is missing, so the default must be the face we want, not just any.
- */
-const FONT_CANDIDATES: { family: string; files: string[] }[] = [
-  {
-    family: "Arial",
-    files: [
-      "/Library/Fonts/Arial.ttf",
-      "/System/Library/Fonts/Supplemental/Arial.ttf",
-      "C:\\Windows\\Fonts\\arial.ttf",
-    ],
-  },
-  {
-    family: "Liberation Sans",
-    files: [
-      "/usr/share/fonts/truetype/liberation/LiberationSans-Regular.ttf",
-      "/usr/share/fonts/liberation-sans/LiberationSans-Regular.ttf",
-      "/usr/share/fonts/TTF/LiberationSans-Regular.ttf",
-    ],
-  },
-  {
-    family: "DejaVu Sans",
-    files: [
-      "/usr/share/fonts/truetype/dejavu/DejaVuSans.ttf",
-      "/usr/share/fonts/dejavu/DejaVuSans.ttf",
-      "/usr/share/fonts/TTF/DejaVuSans.ttf",
-    ],
-  },
-];
-
-/** The sans-serif family the PNG's text falls back to, or undefined (with a note) when none of ours is installed. */
-export function pickFallbackFont(exists: (p: string) => boolean = existsSync): { family?: string; note?: string } {
-  for (const c of FONT_CANDIDATES) if (c.files.some(exists)) return { family: c.family };
-  return {
-    note: "no Arial, Liberation Sans or DejaVu Sans found; PNG text uses the first system font resvg finds (install fonts-liberation or fonts-dejavu-core)",
-  };
-}
+/** The family name inside each figure font's files (what the SVG's font-family list names first). */
+const FAMILY_NAME: Record<FigureFontFamily, string> = { sans: "CMU Sans Serif", serif: "CMU Serif" };
 
 /** Pixel size of a PNG of a figure `widthIn` × `heightIn` inches at `dpi` (8.6 cm at 300 dpi → 1016 px). */
 export function pngPixelSize(widthIn: number, heightIn: number, dpi: number): { widthPx: number; heightPx: number } {
@@ -52,17 +16,23 @@ export function pngPixelSize(widthIn: number, heightIn: number, dpi: number): { 
 
 /**
  * PNG bytes of an SVG at exactly `widthPx` wide (the height follows the viewBox's aspect ratio), on white
- * like the app's PNG export, with pHYs set to `dpi`.
+ * like the app's PNG export, with pHYs set to `dpi`. Text uses only the figure font's files (no system
+ * fonts), so the PNG is the same on every machine and matches the PDF.
  */
-export function renderPng(svg: string, widthPx: number, dpi: number, fontFamily?: string): Uint8Array {
+export function renderPng(svg: string, widthPx: number, dpi: number, font: FigureFontFamily = "sans"): Uint8Array {
   // Loaded on first use: SVG-only runs skip the native module's start-up.
   const { Resvg } = createRequire(import.meta.url)("@resvg/resvg-js") as typeof import("@resvg/resvg-js");
+  const family = FAMILY_NAME[font];
   const r = new Resvg(svg, {
     fitTo: { mode: "width", value: widthPx },
     background: "#ffffff",
-    font: fontFamily
-      ? { loadSystemFonts: true, defaultFontFamily: fontFamily, sansSerifFamily: fontFamily }
-      : { loadSystemFonts: true },
+    font: {
+      loadSystemFonts: false,
+      fontFiles: figureFontPaths(font),
+      defaultFontFamily: family,
+      sansSerifFamily: font === "sans" ? family : undefined,
+      serifFamily: font === "serif" ? family : undefined,
+    },
     logLevel: "off",
   });
   return setPngDpi(new Uint8Array(r.render().asPng()), dpi);

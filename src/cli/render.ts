@@ -7,7 +7,7 @@ import { pathToFileURL } from "node:url";
 import { parseArgs, USAGE, type CliOptions } from "./args";
 import { InputError, type PreParsed } from "./inputs";
 import { loadAnyProject } from "./pdf-input";
-import { pickFallbackFont, pngPixelSize, renderPng } from "./png";
+import { pngPixelSize, renderPng } from "./png";
 import { writeAllOrNothing, type OutputFile } from "./write-atomic";
 import {
   embedCapText,
@@ -143,7 +143,7 @@ async function run(argv: readonly string[], io: Io, preParsed: PreParsed): Promi
     const bare = opts.out && !asPdf ? exportFigureSvg(project, { embedProject: false }) : "";
     if (opts.out && asPdf) {
       const r = await exportFigurePdfWithInfo(project, {
-        fonts: nodePdfFonts(opts.font),
+        fonts: nodePdfFonts(project.figure.font),
         creator: `axband ${AXBAND_VERSION}`,
         embedProject: opts.embed,
       });
@@ -179,15 +179,13 @@ async function run(argv: readonly string[], io: Io, preParsed: PreParsed): Promi
       const dpi = opts.scale !== undefined ? 96 * opts.scale : opts.dpi;
       const px = pngPixelSize(inches.widthIn, inches.heightIn, dpi);
       checkPngPixels(px, dpi);
-      const font = pickFallbackFont();
-      if (font.note) io.err(`note: ${font.note}`);
       // Thinned for the PNG's own pixels (≤ 0.5 PNG px), not the 96/in scene px of the SVG.
       const resolution = rasterResolution(dpi);
       const forPng =
         bare && resolution === rasterResolution(96)
           ? bare
           : exportFigureSvg(project, { embedProject: false, resolution });
-      const png = renderPng(forPng, px.widthPx, dpi, font.family);
+      const png = renderPng(forPng, px.widthPx, dpi, project.figure.font);
       files.push({ path: opts.png, data: png });
       report.push(
         `wrote ${opts.png} (${size(png.length)}, ${px.widthPx} × ${px.heightPx} px, ${Math.round(dpi * 100) / 100} dpi)`,

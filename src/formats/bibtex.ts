@@ -57,6 +57,212 @@ class ParseError extends Error {
 
 const NAME_RE = /[^\s"#%'(),={}]/;
 
+/** A cursor over BibTeX text that collects entries, @string macros and problems as it reads. */
+class BibReader {
+  readonly entries: BibEntry[] = [];
+  readonly problems: BibProblem[] = [];
+  readonly strings: Record<string, string> = {};
+  i = 0;
+  private readonly n: number;
+
+  constructor(private readonly text: string) {
+    this.n = text.length;
+  }
+
+  lineAt(offset: number): number {
+    let line = 1;
+    for (let k = 0; k < offset && k < this.text.length; k++) if (this.text.charCodeAt(k) === 10) line++;
+    return line;
+  }
+
+  private skipWs(): void {
+    while (this.i < this.n && /\s/.test(this.text[this.i])) this.i++;
+  }
+
+  private readName(): string {
+    const start = this.i;
+    while (this.i < this.n && NAME_RE.test(this.text[this.i])) this.i++;
+    return this.text.slice(start, this.i);
+  }
+
+  /** Reads a braced group starting at text[i] = "{"; returns its inner text. */
+  private readBraced(): string {
+    const { text, n } = this;
+    const start = this.i;
+    let depth = 0;
+    for (; this.i < n; this.i++) {
+      const ch = text[this.i];
+      if (ch === "{") depth++;
+      else if (ch === "}") {
+        depth--;
+        if (depth === 0) {
+          this.i++;
+          return text.slice(start + 1, this.i - 1);
+        }
+      }
+    }
+    throw new ParseError("unbalanced braces: a '{' is never closed", start);
+  }
+
+  private readQuoted(): string {
+    const { text, n } = this;
+    const start = this.i;
+    this.i++;
+    let depth = 0;
+    for (; this.i < n; this.i++) {
+      const ch = text[this.i];
+      if (ch === "{") depth++;
+      else if (ch === "}") {
+        depth--;
+        if (depth < 0) throw new ParseError("unbalanced braces inside a quoted value", this.i);
+      } else if (ch === '"' && depth === 0) {
+        this.i++;
+        return text.slice(start + 1, this.i - 1);
+      }
+    }
+    throw new ParseError('a quoted value is never closed with "', start);
+  }
+
+  /** One part of a value: braced, quoted, a number or a macro (expanded; unknown ones kept as their name). */
+  private readValuePart(): string {
+    const { text, n } = this;
+    const ch = text[this.i];
+    if (ch === "{") return this.readBraced();
+    if (ch === '"') return this.readQuoted();
+    if (ch !== undefined && /[0-9]/.test(ch)) {
+      const start = this.i;
+      while (this.i < n && /[0-9]/.test(text[this.i])) this.i++;
+      return text.slice(start, this.i);
+    }
+    if (ch !== undefined && NAME_RE.test(ch)) {
+      const name = this.readName().toLowerCase();
+      const value = this.strings[name] ?? MONTHS[name];
+      if (value === undefined)
+        this.problems.push({ line: this.lineAt(this.i), message: `unknown macro "${name}" kept as its name` });
+      return value ?? name;
+    }
+    throw new ParseError("expected a value in braces, in quotes, a number or a macro", this.i);
+  }
+
+  private readValue(): string {
+    const parts: string[] = [];
+    for (;;) {
+      this.skipWs();
+      parts.push(this.readValuePart());
+      this.skipWs();
+      if (this.text[this.i] === "#") {
+        this.i++;
+        continue;
+      }
+      return parts.join("").replace(/\s+/g, " ").trim();
+    }
+  }
+
+  private expectClose(close: string, message: string): void {
+    this.skipWs();
+    if (this.text[this.i] !== close) throw new ParseError(message, this.i);
+    this.i++;
+  }
+
+  private readString(close: string): void {
+    const name = this.readName().toLowerCase();
+    if (!name) throw new ParseError("expected a macro name after @string", this.i);
+    this.skipWs();
+    if (this.text[this.i] !== "=") throw new ParseError(`expected "=" after @string name "${name}"`, this.i);
+    this.i++;
+    this.strings[name] = this.readValue();
+    this.expectClose(close, `expected "${close}" to end @string`);
+  }
+
+  /** The fields after the key, up to (not past) the closing delimiter; text[i] is the "," after the key. */
+  private readFields(type: string, key: string, close: string, at: number): Record<string, string> {
+    const { text, n } = this;
+    const fields: Record<string, string> = {};
+    if (text[this.i] !== ",") throw new ParseError(`expected "," after the key "${key}"`, this.i);
+    for (;;) {
+      while (this.i < n && (/\s/.test(text[this.i]) || text[this.i] === ",")) this.i++;
+      if (this.i >= n) throw new ParseError(`@${type}{${key}, … is never closed`, at);
+      if (text[this.i] === close) return fields;
+      const name = this.readName().toLowerCase();
+      if (!name) throw new ParseError(`unexpected "${text[this.i]}" where a field name should be`, this.i);
+      this.skipWs();
+      if (text[this.i] !== "=") throw new ParseError(`expected "=" after the field name "${name}"`, this.i);
+      this.i++;
+      const value = this.readValue();
+      if (name in fields)
+        this.problems.push({
+          line: this.lineAt(this.i),
+          message: `field "${name}" given twice in "${key}"; the first is kept`,
+        });
+      else fields[name] = value;
+      this.skipWs();
+      if (text[this.i] !== "," && text[this.i] !== close)
+        throw new ParseError(`expected "," or "${close}" after the field "${name}"`, this.i);
+    }
+  }
+
+  private readEntry(type: string, close: string, at: number): void {
+    const { text, n } = this;
+    const keyStart = this.i;
+    while (
+      this.i < n &&
+      !/[\s,]/.test(text[this.i]) &&
+      text[this.i] !== close &&
+      text[this.i] !== "{" &&
+      text[this.i] !== "}"
+    )
+      this.i++;
+    const key = text.slice(keyStart, this.i);
+    if (!key) throw new ParseError(`@${type} has no citation key`, this.i);
+    const keyEnd = this.i;
+    this.skipWs();
+    const fields = text[this.i] !== close ? this.readFields(type, key, close, at) : {};
+    this.i++;
+    this.entries.push({ type, key, fields, raw: text.slice(at, this.i), keyStart: keyStart - at, keyEnd: keyEnd - at });
+  }
+
+  /** Reads what follows "@type" and its opening delimiter (at text[i]); `at` is the "@". */
+  private readItem(type: string, open: string, at: number): void {
+    const close = open === "{" ? "}" : ")";
+    if (type === "comment") {
+      if (open === "{") this.readBraced();
+      else this.i = Math.max(this.i + 1, this.text.indexOf(")", this.i) + 1);
+      return;
+    }
+    this.i++;
+    this.skipWs();
+    if (type === "preamble") {
+      this.readValue();
+      this.expectClose(close, `expected "${close}" after @preamble`);
+    } else if (type === "string") this.readString(close);
+    else this.readEntry(type, close, at);
+  }
+
+  readAll(): void {
+    const { text, n } = this;
+    while (this.i < n) {
+      const at = text.indexOf("@", this.i);
+      if (at < 0) break;
+      this.i = at + 1;
+      this.skipWs();
+      const typeStart = this.i;
+      while (this.i < n && /[A-Za-z]/.test(text[this.i])) this.i++;
+      const type = text.slice(typeStart, this.i).toLowerCase();
+      this.skipWs();
+      const open = text[this.i];
+      if (type === "" || (open !== "{" && open !== "(")) continue; // not an entry: free text around an "@"
+      try {
+        this.readItem(type, open, at);
+      } catch (err) {
+        if (!(err instanceof ParseError)) throw err;
+        this.problems.push({ line: this.lineAt(err.at), message: err.message });
+        // Resume after the failing entry's "@", so one broken entry does not hide the next ones.
+        this.i = at + 1;
+      }
+    }
+  }
+}
+
 /**
  * Parses BibTeX text: every `@type{key, field = value, …}` (or with parentheses), values in braces, in
  * double quotes, numbers or @string macros joined with `#`; month abbreviations expand. Text outside entries
@@ -65,164 +271,9 @@ const NAME_RE = /[^\s"#%'(),={}]/;
  * @param text the input, e.g. what a user pasted as a curve's citation.
  */
 export function parseBibtex(text: string): BibParse {
-  const entries: BibEntry[] = [];
-  const problems: BibProblem[] = [];
-  const strings: Record<string, string> = {};
-  const lineAt = (offset: number): number => {
-    let line = 1;
-    for (let k = 0; k < offset && k < text.length; k++) if (text.charCodeAt(k) === 10) line++;
-    return line;
-  };
-  let i = 0;
-  const n = text.length;
-
-  const skipWs = (): void => {
-    while (i < n && /\s/.test(text[i])) i++;
-  };
-  const readName = (): string => {
-    const start = i;
-    while (i < n && NAME_RE.test(text[i])) i++;
-    return text.slice(start, i);
-  };
-  /** Reads a braced group starting at text[i] = "{"; returns its inner text. */
-  const readBraced = (): string => {
-    const start = i;
-    let depth = 0;
-    for (; i < n; i++) {
-      const ch = text[i];
-      if (ch === "{") depth++;
-      else if (ch === "}") {
-        depth--;
-        if (depth === 0) {
-          i++;
-          return text.slice(start + 1, i - 1);
-        }
-      }
-    }
-    throw new ParseError("unbalanced braces: a '{' is never closed", start);
-  };
-  const readQuoted = (): string => {
-    const start = i;
-    i++;
-    let depth = 0;
-    for (; i < n; i++) {
-      const ch = text[i];
-      if (ch === "{") depth++;
-      else if (ch === "}") {
-        depth--;
-        if (depth < 0) throw new ParseError("unbalanced braces inside a quoted value", i);
-      } else if (ch === '"' && depth === 0) {
-        i++;
-        return text.slice(start + 1, i - 1);
-      }
-    }
-    throw new ParseError('a quoted value is never closed with "', start);
-  };
-  const readValue = (): string => {
-    const parts: string[] = [];
-    for (;;) {
-      skipWs();
-      const ch = text[i];
-      if (ch === "{") parts.push(readBraced());
-      else if (ch === '"') parts.push(readQuoted());
-      else if (ch !== undefined && /[0-9]/.test(ch)) {
-        const start = i;
-        while (i < n && /[0-9]/.test(text[i])) i++;
-        parts.push(text.slice(start, i));
-      } else if (ch !== undefined && NAME_RE.test(ch)) {
-        const name = readName().toLowerCase();
-        const value = strings[name] ?? MONTHS[name];
-        if (value === undefined)
-          problems.push({ line: lineAt(i), message: `unknown macro "${name}" kept as its name` });
-        parts.push(value ?? name);
-      } else {
-        throw new ParseError("expected a value in braces, in quotes, a number or a macro", i);
-      }
-      skipWs();
-      if (text[i] === "#") {
-        i++;
-        continue;
-      }
-      return parts.join("").replace(/\s+/g, " ").trim();
-    }
-  };
-
-  while (i < n) {
-    const at = text.indexOf("@", i);
-    if (at < 0) break;
-    i = at + 1;
-    skipWs();
-    const typeStart = i;
-    while (i < n && /[A-Za-z]/.test(text[i])) i++;
-    const type = text.slice(typeStart, i).toLowerCase();
-    skipWs();
-    const open = text[i];
-    if (type === "" || (open !== "{" && open !== "(")) continue; // not an entry: free text around an "@"
-    const close = open === "{" ? "}" : ")";
-    try {
-      if (type === "comment") {
-        if (open === "{") readBraced();
-        else i = Math.max(i + 1, text.indexOf(")", i) + 1);
-        continue;
-      }
-      i++;
-      skipWs();
-      if (type === "preamble") {
-        readValue();
-        skipWs();
-        if (text[i] !== close) throw new ParseError(`expected "${close}" after @preamble`, i);
-        i++;
-        continue;
-      }
-      if (type === "string") {
-        const name = readName().toLowerCase();
-        if (!name) throw new ParseError("expected a macro name after @string", i);
-        skipWs();
-        if (text[i] !== "=") throw new ParseError(`expected "=" after @string name "${name}"`, i);
-        i++;
-        strings[name] = readValue();
-        skipWs();
-        if (text[i] !== close) throw new ParseError(`expected "${close}" to end @string`, i);
-        i++;
-        continue;
-      }
-      const keyStart = i;
-      while (i < n && !/[\s,]/.test(text[i]) && text[i] !== close && text[i] !== "{" && text[i] !== "}") i++;
-      const key = text.slice(keyStart, i);
-      if (!key) throw new ParseError(`@${type} has no citation key`, i);
-      const keyEnd = i;
-      skipWs();
-      const fields: Record<string, string> = {};
-      if (text[i] !== close) {
-        if (text[i] !== ",") throw new ParseError(`expected "," after the key "${key}"`, i);
-        for (;;) {
-          while (i < n && (/\s/.test(text[i]) || text[i] === ",")) i++;
-          if (i >= n) throw new ParseError(`@${type}{${key}, … is never closed`, at);
-          if (text[i] === close) break;
-          const name = readName().toLowerCase();
-          if (!name) throw new ParseError(`unexpected "${text[i]}" where a field name should be`, i);
-          skipWs();
-          if (text[i] !== "=") throw new ParseError(`expected "=" after the field name "${name}"`, i);
-          i++;
-          const value = readValue();
-          if (name in fields)
-            problems.push({ line: lineAt(i), message: `field "${name}" given twice in "${key}"; the first is kept` });
-          else fields[name] = value;
-          skipWs();
-          if (text[i] !== "," && text[i] !== close)
-            throw new ParseError(`expected "," or "${close}" after the field "${name}"`, i);
-        }
-      }
-      i++;
-      entries.push({ type, key, fields, raw: text.slice(at, i), keyStart: keyStart - at, keyEnd: keyEnd - at });
-    } catch (err) {
-      if (!(err instanceof ParseError)) throw err;
-      problems.push({ line: lineAt(err.at), message: err.message });
-      // Resume after the failing entry's "@", so one broken entry does not hide the next ones.
-      i = at + 1;
-    }
-  }
-  return { entries, problems, strings };
+  const reader = new BibReader(text);
+  reader.readAll();
+  return { entries: reader.entries, problems: reader.problems, strings: reader.strings };
 }
 
 // ---------------------------------------------------------------------------------------------------------

@@ -173,15 +173,6 @@ export function projectMetadata(
   };
 }
 
-/** The <metadata> content that carries the project (see {@link projectMetadata}). @param maxChars @default EMBED_MAX_CHARS @param maxPoints @default EMBED_MAX_POINTS */
-export function projectMetadataXml(
-  project: Project,
-  maxChars: number = EMBED_MAX_CHARS,
-  maxPoints: number = EMBED_MAX_POINTS,
-): string {
-  return projectMetadata(project, maxChars, maxPoints).xml;
-}
-
 /**
  * The exported SVG of a project: the same scene builder and SVG writer as the screen, at the preset's
  * physical size (width/height in cm, viewBox in CSS px at 96/in), thinned so that no drawn point is more

@@ -1,6 +1,8 @@
 // Model lines and bands as CSV (m_a, f_a, g_low, g_high) sampled over the figure's mass range, so users can
 // replot the predictions in their own scripts. Pure: a project in, text out; the UI and the CLI save it.
-import { bandEdges, faFromMass, rationalToNumber, type AxionConstants } from "../physics/index";
+import { bandEdges, faFromMass, linesBandEdges, rationalToNumber, type AxionConstants } from "../physics/index";
+import { modelKindNote } from "../plot/legend";
+import { modelShape } from "../plot/model-shape";
 import type { Model, Project } from "../project/types";
 import { constantsOf } from "../plot/physics-settings";
 
@@ -80,6 +82,10 @@ function block(model: Model, c: AxionConstants, masses: Float64Array, index: num
   const en = isLine
     ? oneLine(model.eOverNMin)
     : `${oneLine(a <= b ? model.eOverNMin : model.eOverNMax)}..${oneLine(a <= b ? model.eOverNMax : model.eOverNMin)}`;
+  // Between lines and model sets: the band between their lines (a set's central share, or all its lines).
+  const shape = model.kind === "between" || model.kind === "set" ? modelShape(model, c) : null;
+  const values = shape && (shape.kind === "lines-band" || shape.kind === "lines") ? shape.values : null;
+  if (values) return linesBlock(model, label, values, c, masses, index);
   const lines = [
     `# model: ${label}`,
     `# E/N = ${en} (${isLine ? "model line" : "model band"})`,
@@ -94,6 +100,35 @@ function block(model: Model, c: AxionConstants, masses: Float64Array, index: num
   const opts = { constants: c, sigmas };
   for (const m of masses) {
     const e = bandEdges(m, lo, hi, opts);
+    lines.push(`${num(m)},${num(faFromMass(m, { constants: c }))},${num(e.lowInvGeV)},${num(e.highInvGeV)}`);
+  }
+  return {
+    modelId: model.id,
+    label,
+    fileName: `model-${String(index + 1).padStart(2, "0")}-${slug(label)}.csv`,
+    text: lines.join("\n") + "\n",
+  };
+}
+
+function linesBlock(
+  model: Model,
+  label: string,
+  values: number[],
+  c: AxionConstants,
+  masses: Float64Array,
+  index: number,
+): ModelCsvBlock {
+  const sigmas = model.sigmas > 0 ? model.sigmas : 0;
+  const what = modelKindNote(model) ?? "between lines";
+  const lines = [
+    `# model: ${label}`,
+    `# E/N lines = ${model.members.map((m) => oneLine(m.eOverN)).join(" | ")} (${what})`,
+    `# c_gamma = ${c.cGamma} +- ${c.cGammaSigma}; m_a*f_a = K * 1e6 eV*GeV with K = ${c.kMuEv} +- ${c.kMuEvSigma} ueV (${oneLine(c.label)})`,
+    `# g_low and g_high: the lines with the smallest and largest |E/N - c_gamma|${model.kind === "set" && model.setDraw === "central" ? " among the central share" : ""}${sigmas > 0 ? `, c_gamma and K varied by +-${sigmas} sigma` : ""}; g_low = 0 only where a line reaches 0`,
+    MODEL_CSV_HEADER,
+  ];
+  for (const m of masses) {
+    const e = linesBandEdges(m, values, { constants: c, sigmas });
     lines.push(`${num(m)},${num(faFromMass(m, { constants: c }))},${num(e.lowInvGeV)},${num(e.highInvGeV)}`);
   }
   return {

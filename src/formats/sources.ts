@@ -222,41 +222,18 @@ function isDfszCatalogue(id: string): boolean {
   return catalogue().some((c) => c.id === id && c.group === "dfsz");
 }
 
-/**
- * The references behind what the project's figure shows (visible models and curves), in panel order:
- * CODATA 2018 (α, h); the g_aγγ formula and c_γ (Grilli di Cortona et al. 2016); K from the selected
- * reference (2016 paper, or Gorghetto & Villadoro 2019) or the user's custom constants with their label;
- * Di Luzio, Mescia, Nardi (PRL 2017, PRD 2017) when heavy-quark catalogue models are shown; the PDG review
- * when DFSZ-type catalogue models are; then each visible curve's citation: a BibTeX entry that parses is
- * kept verbatim (its key renamed only when it clashes with a different entry), free text becomes a @misc
- * entry with note = the text. Identical citations of several curves give one entry.
- * @param project the whole state; nothing in it is changed.
- */
-export function projectSources(project: Project): SourceEntry[] {
-  const out: SourceEntry[] = [];
-  const ref = project.physics.ref;
-  out.push(
+/** CODATA, then the g_aγγ formula, c_γ and K as the selected reference (or the user's constants) gives them. */
+function constantSources(physics: Project["physics"]): SourceEntry[] {
+  const out: SourceEntry[] = [
     fromBuiltIn(CODATA_2018, "constants", [
       "α = 7.2973525693(11)×10⁻³ (fine-structure constant)",
       "h = 4.135667696×10⁻¹⁵ eV·s (m_a ↔ frequency)",
     ]),
-  );
+  ];
+  const ref = physics.ref;
   if (ref === "custom") {
     out.push(fromBuiltIn(GDC_2016, "constants", ["g_aγγ = α/(2π f_a)·(E/N − c_γ)"]));
-    const c = project.physics.custom;
-    const label = c.label.trim() || "user-entered constants";
-    const values = `c_γ = ${c.cGamma} ± ${c.cGammaSigma}, K = ${c.kMuEv} ± ${c.kMuEvSigma} μeV (m_a = K μeV · 10¹² GeV/f_a)`;
-    out.push({
-      key: `customConstants-${fnv1a(`${label}|${values}`)}`,
-      kind: "custom-constants",
-      usedFor: [`c_γ and K: ${values}`],
-      entryType: "misc",
-      fields: { title: label, note: `User-entered constants: ${values}` },
-      rawFields: [],
-      fromMemory: [],
-      text: `${label}: ${values}`,
-      curveIds: [],
-    });
+    out.push(customConstantsSource(physics.custom));
   } else if (ref === "2016") {
     out.push(
       fromBuiltIn(GDC_2016, "constants", ["g_aγγ = α/(2π f_a)·(E/N − c_γ)", "c_γ = 1.92(4)", "K = 5.70(6)(4) μeV"]),
@@ -265,8 +242,29 @@ export function projectSources(project: Project): SourceEntry[] {
     out.push(fromBuiltIn(GDC_2016, "constants", ["g_aγγ = α/(2π f_a)·(E/N − c_γ)", "c_γ = 1.92(4)"]));
     out.push(fromBuiltIn(GV_2019, "constants", ["K = 5.691(51) μeV"]));
   }
+  return out;
+}
 
-  const visibleModels = project.models.filter((m) => m.visible);
+function customConstantsSource(c: Project["physics"]["custom"]): SourceEntry {
+  const label = c.label.trim() || "user-entered constants";
+  const values = `c_γ = ${c.cGamma} ± ${c.cGammaSigma}, K = ${c.kMuEv} ± ${c.kMuEvSigma} μeV (m_a = K μeV · 10¹² GeV/f_a)`;
+  return {
+    key: `customConstants-${fnv1a(`${label}|${values}`)}`,
+    kind: "custom-constants",
+    usedFor: [`c_γ and K: ${values}`],
+    entryType: "misc",
+    fields: { title: label, note: `User-entered constants: ${values}` },
+    rawFields: [],
+    fromMemory: [],
+    text: `${label}: ${values}`,
+    curveIds: [],
+  };
+}
+
+/** The catalogue papers behind the visible catalogue models (heavy-quark and DFSZ-type). */
+function modelSources(models: Project["models"]): SourceEntry[] {
+  const out: SourceEntry[] = [];
+  const visibleModels = models.filter((m) => m.visible);
   const heavyQuark = visibleModels.filter(
     (m) => m.source.kind === "catalogue" && !isDfszCatalogue(m.source.catalogueId),
   );
@@ -279,42 +277,52 @@ export function projectSources(project: Project): SourceEntry[] {
   if (dfsz.length > 0) {
     out.push(fromBuiltIn(PDG_2022, "models", [`DFSZ-type catalogue models: ${dfsz.map((m) => m.label).join(", ")}`]));
   }
+  return out;
+}
 
+type Curve = Project["curves"][number];
+
+/** A curve's citation as entries: each BibTeX entry that parses, else one @misc with the text as its note. */
+function curveCandidates(curve: Curve, citation: string, parsed: ReturnType<typeof parseBibtex>): SourceEntry[] {
+  const use = `curve: ${curve.label}`;
+  if (parsed.entries.length > 0)
+    return parsed.entries.map((e) => ({
+      key: e.key,
+      kind: "curve",
+      usedFor: [use],
+      entryType: e.type,
+      fields: { ...e.fields },
+      rawFields: Object.keys(e.fields),
+      bibtex: e.raw,
+      fromMemory: [],
+      text: textOfEntry(e.fields, e.key),
+      curveIds: [curve.id],
+    }));
+  return [
+    {
+      key: `curve-${fnv1a(citation)}`,
+      kind: "curve",
+      usedFor: [use],
+      entryType: "misc",
+      fields: { note: citation },
+      rawFields: [],
+      fromMemory: [],
+      text: citation,
+      curveIds: [curve.id],
+    },
+  ];
+}
+
+/** Appends the visible curves' citations to `out`, merging identical ones and renaming clashing keys. */
+function addCurveSources(out: SourceEntry[], curves: Project["curves"]): void {
   const byKey = new Map(out.map((e) => [e.key, e]));
-  for (const curve of project.curves) {
+  for (const curve of curves) {
     if (!curve.visible) continue;
     const citation = curve.citation.trim();
     if (!citation) continue;
     const use = `curve: ${curve.label}`;
     const parsed = parseBibtex(citation);
-    const candidates: SourceEntry[] =
-      parsed.entries.length > 0
-        ? parsed.entries.map((e) => ({
-            key: e.key,
-            kind: "curve",
-            usedFor: [use],
-            entryType: e.type,
-            fields: { ...e.fields },
-            rawFields: Object.keys(e.fields),
-            bibtex: e.raw,
-            fromMemory: [],
-            text: textOfEntry(e.fields, e.key),
-            curveIds: [curve.id],
-          }))
-        : [
-            {
-              key: `curve-${fnv1a(citation)}`,
-              kind: "curve",
-              usedFor: [use],
-              entryType: "misc",
-              fields: { note: citation },
-              rawFields: [],
-              fromMemory: [],
-              text: citation,
-              curveIds: [curve.id],
-            },
-          ];
-    for (const cand of candidates) {
+    for (const cand of curveCandidates(curve, citation, parsed)) {
       const same = byKey.get(cand.key);
       if (same && (same.bibtex ?? same.text) === (cand.bibtex ?? cand.text)) {
         same.usedFor.push(use);
@@ -334,13 +342,29 @@ export function projectSources(project: Project): SourceEntry[] {
       out.push(cand);
     }
   }
+}
+
+/**
+ * The references behind what the project's figure shows (visible models and curves), in panel order:
+ * CODATA 2018 (α, h); the g_aγγ formula and c_γ (Grilli di Cortona et al. 2016); K from the selected
+ * reference (2016 paper, or Gorghetto & Villadoro 2019) or the user's custom constants with their label;
+ * Di Luzio, Mescia, Nardi (PRL 2017, PRD 2017) when heavy-quark catalogue models are shown; the PDG review
+ * when DFSZ-type catalogue models are; then each visible curve's citation: a BibTeX entry that parses is
+ * kept verbatim (its key renamed only when it clashes with a different entry), free text becomes a @misc
+ * entry with note = the text. Identical citations of several curves give one entry.
+ * @param project the whole state; nothing in it is changed.
+ */
+export function projectSources(project: Project): SourceEntry[] {
+  const out = [...constantSources(project.physics), ...modelSources(project.models)];
+  addCurveSources(out, project.curves);
   return out;
 }
 
 /**
  * The entries as one BibTeX file: built-in and free-text entries written field by field (plain-text values
- * escaped: \ { } & % $ # _ ~ ^), a user's own BibTeX entry verbatim. An entry with fields from memory gets
- * a note saying which, until they are checked. Entries are separated by a blank line; the text ends in "\n".
+ * escaped: \ { } & % $ # _ ~ ^), a user's own BibTeX entry verbatim. Fields from memory are never flagged
+ * here (the panel says so): nothing in a field may print "unchecked". Entries are separated by a blank line;
+ * the text ends in "\n".
  * @param entries as returned by {@link projectSources}.
  */
 export function sourcesToBibtex(entries: SourceEntry[]): string {
@@ -354,11 +378,9 @@ export function sourcesToBibtex(entries: SourceEntry[]): string {
     const fields: [string, string][] = Object.entries(e.fields)
       .filter(([name]) => name !== "note")
       .map(([name, value]) => [name, raw.has(name) ? value : escapeBibtexValue(value)]);
-    const notes: string[] = [];
-    if (e.fields.note) notes.push(raw.has("note") ? e.fields.note : escapeBibtexValue(e.fields.note));
-    if (e.fromMemory.length > 0)
-      notes.push(escapeBibtexValue(`fields ${e.fromMemory.join(", ")} from memory, unchecked`));
-    if (notes.length > 0) fields.push(["note", notes.join("; ")]);
+    // Fields still unchecked are flagged in the sources panel only: a flag in a field would print in the
+    // bibliography of the paper that uses this file.
+    if (e.fields.note) fields.push(["note", raw.has("note") ? e.fields.note : escapeBibtexValue(e.fields.note)]);
     // Titles get one protective brace pair so styles keep their capitals (QCD, NNLO).
     const withTitle = fields.map(([name, value]): [string, string] =>
       name === "title" ? [name, `{${value}}`] : [name, value],

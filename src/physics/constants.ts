@@ -27,13 +27,13 @@ export interface AxionConstants {
 /**
  * Grilli di Cortona, Hardy, Pardo Vega, Villadoro, "The QCD axion, precisely", JHEP 01 (2016) 034,
  * arXiv:1511.02867: c_γ = 1.92(4), m_a = 5.70(6)(4) μeV·(10¹² GeV/f_a). The two errors of K are added
- * in quadrature: √(0.06² + 0.04²) = 0.072 ≈ 0.07.
+ * in quadrature: √(0.06² + 0.04²) = √0.0052 = 0.0721 → 0.072.
  */
 export const REF_2016: AxionConstants = {
   cGamma: 1.92,
   cGammaSigma: 0.04,
   kMuEv: 5.7,
-  kMuEvSigma: 0.07,
+  kMuEvSigma: 0.072,
   label: "Grilli di Cortona et al., JHEP 01 (2016) 034",
 };
 

@@ -66,6 +66,64 @@ export function absDifferenceRange(a: number, b: number, cLo: number, cHi: numbe
 export interface BandOpts extends PhysicsOpts {
   /** k in "±k σ" for the theory spread. @default 0 */
   sigmas?: number;
+  /**
+   * The band between the lines of the two E/N values (a "between lines" model) instead of every E/N of the
+   * interval: its lower edge is the lower line, so it reaches 0 only where one of the lines does. @default false
+   */
+  between?: boolean;
+}
+
+/**
+ * Range [min, max] of |E/N_i − c| over the lines E/N_i and c ∈ [cLo, cHi]: the band between the lines, each
+ * widened outward by the spread of c. The minimum is 0 only when some E/N_i lies in [cLo, cHi], i.e. when one
+ * line itself reaches g = 0. [0, 0] for no values.
+ */
+export function linesRange(values: readonly number[], cLo: number, cHi: number): [number, number] {
+  if (values.length === 0) return [0, 0];
+  let lo = Infinity;
+  let hi = 0;
+  for (const e of values) {
+    const [a, b] = absDifferenceRange(e, e, cLo, cHi);
+    if (a < lo) lo = a;
+    if (b > hi) hi = b;
+  }
+  return [lo, hi];
+}
+
+/** |E/N − c_γ| range [min, max] of the band between the lines of `values`, with theory spread in c_γ. */
+export function normalizedLinesRange(values: readonly number[], c: AxionConstants, sigmas = 0): [number, number] {
+  const dc = sigmas * c.cGammaSigma;
+  return linesRange(values, c.cGamma - dc, c.cGamma + dc);
+}
+
+/**
+ * Lower and upper g_aγγ (GeV⁻¹) at one mass of the band between the lines of discrete E/N values (a
+ * between-lines band, or a model set drawn between its extreme lines): lower edge the line with the smallest
+ * |E/N − c_γ|, upper edge the one with the largest; the theory spread widens each line outward (c_γ ± kσ,
+ * and K ± kσ as in {@link bandEdges}).
+ */
+export function linesBandEdges(
+  massEv: number,
+  values: readonly number[],
+  opts: Omit<BandOpts, "between"> = {},
+): { lowInvGeV: number; highInvGeV: number } {
+  const c = resolveConstants(opts);
+  const k = opts.sigmas ?? 0;
+  return edgesOf(massEv, normalizedLinesRange(values, c, k), c, k);
+}
+
+function edgesOf(
+  massEv: number,
+  [nMin, nMax]: [number, number],
+  c: AxionConstants,
+  k: number,
+): { lowInvGeV: number; highInvGeV: number } {
+  const kHigh = c.kMuEv + k * c.kMuEvSigma;
+  const kLow = c.kMuEv - k * c.kMuEvSigma;
+  return {
+    lowInvGeV: nMin === 0 ? 0 : gFromNormalized(massEv, nMin, kHigh),
+    highInvGeV: gFromNormalized(massEv, nMax, kLow),
+  };
 }
 
 /** Normalized-coupling range [min, max] of |E/N − c_γ| for an E/N interval with theory spread in c_γ. */
@@ -78,6 +136,8 @@ export function normalizedRange(eOverNMin: number, eOverNMax: number, c: AxionCo
  * Lower and upper g_aγγ (GeV⁻¹) of the band for E/N ∈ [min, max] at one mass. The lower edge is exactly 0
  * when c_γ (or, with a theory spread, any c_γ in c_γ ± kσ) lies in the interval: the coupling cancels.
  * The spread also varies K by ±kσ, which moves f_a at fixed mass: the upper edge takes K − kσ.
+ * With `between: true` it is the band between the E/N = min and E/N = max lines instead
+ * ({@link linesBandEdges}): lower edge min |E/N_i − c_γ|, 0 only where one of the two lines reaches 0.
  */
 export function bandEdges(
   massEv: number,
@@ -87,19 +147,23 @@ export function bandEdges(
 ): { lowInvGeV: number; highInvGeV: number } {
   const c = resolveConstants(opts);
   const k = opts.sigmas ?? 0;
-  const [nMin, nMax] = normalizedRange(eOverNMin, eOverNMax, c, k);
-  const kHigh = c.kMuEv + k * c.kMuEvSigma;
-  const kLow = c.kMuEv - k * c.kMuEvSigma;
-  return {
-    lowInvGeV: nMin === 0 ? 0 : gFromNormalized(massEv, nMin, kHigh),
-    highInvGeV: gFromNormalized(massEv, nMax, kLow),
-  };
+  const range = opts.between
+    ? normalizedLinesRange([eOverNMin, eOverNMax], c, k)
+    : normalizedRange(eOverNMin, eOverNMax, c, k);
+  return edgesOf(massEv, range, c, k);
 }
 
-/** True when the interval (widened by the spread) contains c_γ, so the band reaches g = 0. */
+/**
+ * True when the band reaches g = 0: the interval (widened by the spread) contains c_γ, or with `between: true`
+ * one of the two lines does.
+ */
 export function bandCancels(eOverNMin: number, eOverNMax: number, opts: BandOpts = {}): boolean {
   const c = resolveConstants(opts);
-  return normalizedRange(eOverNMin, eOverNMax, c, opts.sigmas ?? 0)[0] === 0;
+  const k = opts.sigmas ?? 0;
+  const range = opts.between
+    ? normalizedLinesRange([eOverNMin, eOverNMax], c, k)
+    : normalizedRange(eOverNMin, eOverNMax, c, k);
+  return range[0] === 0;
 }
 
 /** The two E/N values (ascending) whose model lines pass through (m_a, g): c_γ ∓ 2π f_a g/α. */

@@ -1,9 +1,13 @@
-// Reading what a user types for E/N in a model row: one value ("8/3", "0.5", "1e-1") or an interval
-// ("5/3..44/3", "0.5 – 14.7", "1 to 2"). Unlike PQ charges, E/N may be a decimal: it only feeds g_aγγ.
+// Reading what a user types for E/N in a model row: one value ("8/3", "0.5", "1e-1"), an interval
+// ("5/3..44/3", "0.5 – 14.7", "1 to 2") or the region between lines ("5/3 | 44/3", "5/3 | 2 | 44/3").
+// Unlike PQ charges, E/N may be a decimal: it only feeds g_aγγ.
 
-/** Parsed E/N text: the two ends as typed (normalised), their values, and whether they differ. */
+/**
+ * Parsed E/N text: the two ends as typed (normalised), their values, and whether they differ; for "a | b"
+ * also `lines`, the distinct values (ascending) whose lines bound the region between them.
+ */
 export type EOverNParse =
-  | { ok: true; min: string; max: string; minValue: number; maxValue: number; isBand: boolean }
+  | { ok: true; min: string; max: string; minValue: number; maxValue: number; isBand: boolean; lines?: string[] }
   | { ok: false; error: string };
 
 const FRACTION_RE = /^([+-]?\d+)\/([+-]?\d+)$/;
@@ -43,7 +47,11 @@ export function parseEOverN(text: string): EOverNParse {
   if (typeof text !== "string") return { ok: false, error: "E/N: expected text" };
   const trimmed = text.trim();
   if (trimmed === "")
-    return { ok: false, error: "E/N: empty; enter a value such as 8/3 or an interval such as 5/3..44/3" };
+    return {
+      ok: false,
+      error: "E/N: empty; enter a value such as 8/3, an interval such as 5/3..44/3 or lines such as 5/3 | 44/3",
+    };
+  if (trimmed.includes("|")) return parseLines(trimmed);
   let parts: string[] = [trimmed];
   for (const sep of SEPARATORS) {
     const split = trimmed.split(sep);
@@ -73,4 +81,34 @@ export function parseEOverN(text: string): EOverNParse {
   const [a, b] =
     ends.length === 2 && ends[1].value < ends[0].value ? [ends[1], ends[0]] : [ends[0], ends[ends.length - 1]];
   return { ok: true, min: a.text, max: b.text, minValue: a.value, maxValue: b.value, isBand: a.value < b.value };
+}
+
+/**
+ * "a | b | …": the band between the lines of two or more E/N values (each a number or fraction, any order;
+ * repeated values count once).
+ */
+function parseLines(trimmed: string): EOverNParse {
+  const what = "E/N lines";
+  const seen = new Map<number, string>();
+  for (const raw of trimmed.split("|")) {
+    const token = normalise(raw);
+    if (token === "") return { ok: false, error: `${what}: "${trimmed}" has an empty value next to a "|"` };
+    const value = rationalToNumber(token);
+    if (!Number.isFinite(value))
+      return { ok: false, error: `${what}: "${token}" is not a number or fraction (between lines: 5/3 | 44/3)` };
+    if (!seen.has(value)) seen.set(value, token.replace(/^\+/, ""));
+  }
+  if (seen.size < 2)
+    return { ok: false, error: `${what}: "${trimmed}" needs two different values, such as 5/3 | 44/3` };
+  const sorted = [...seen.entries()].sort((x, y) => x[0] - y[0]);
+  const [lo, hi] = [sorted[0], sorted[sorted.length - 1]];
+  return {
+    ok: true,
+    min: lo[1],
+    max: hi[1],
+    minValue: lo[0],
+    maxValue: hi[0],
+    isBand: true,
+    lines: sorted.map((x) => x[1]),
+  };
 }

@@ -1,6 +1,7 @@
 // Public face of the physics core: pure functions of plain numbers, loadable in plain Node.
 export * from "./constants";
 export * from "./coupling";
+export * from "./model-set";
 export * from "./rational";
 export * from "./su3";
 export * from "./anomaly";

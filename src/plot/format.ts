@@ -6,6 +6,15 @@ import type { LineStyle } from "../project/types";
 /** Real minus sign (U+2212), never a hyphen, in every label. */
 export const MINUS = "\u2212";
 
+/**
+ * Text with ASCII hyphen-minus signs turned into U+2212 where they start a number: at the start, after a
+ * space, an opening bracket, a comma, "=" or an interval's "..". Hyphens inside words and exponents stay.
+ * The one function for labels and E/N texts in the app and on the command line.
+ */
+export function minusSigns(text: string): string {
+  return text.replace(/(^|[\s(,=[{]|\.\.)-/g, `$1${MINUS}`);
+}
+
 /** A number rounded to 2 decimals (scene coordinates and path data). */
 export function r2(v: number): number {
   return Math.round(v * 100) / 100;

@@ -1,8 +1,35 @@
 // The legend: one entry per visible model and curve with a swatch drawn like the thing it names (line,
 // band, exclusion fill, region), on a white translucent box; notes for cancelling bands and rescaled curves.
+import type { Model } from "../project/types";
 import type { SceneNode, TextRun } from "./scene-types";
 import { r2 } from "./format";
 import { runsText, runsWidthPx, truncateRuns } from "./text";
+
+/**
+ * What a model's kind adds to its legend entry, so a reader knows what the band means: "between lines 5/3 | 44/3",
+ * "model set: 820 models, lines" / "…, between extremes" / "…, central 68 %" (models counted with multiplicities);
+ * null for a line or an interval, which the label already describes.
+ */
+export function modelKindNote(
+  m: Partial<Pick<Model, "kind" | "members" | "setDraw" | "setShare" | "label">>,
+): string | null {
+  const members = m.members ?? [];
+  if (members.length === 0) return null;
+  if (m.kind === "between") {
+    const values = members.map((x) => x.eOverN).join(" | ");
+    // A label typed as "E/N = 5/3 | 44/3" already names the lines.
+    return m.label?.includes(values) ? "between lines" : `between lines ${values}`;
+  }
+  if (m.kind !== "set") return null;
+  const n = members.reduce((s, x) => s + x.count, 0);
+  const draw =
+    m.setDraw === "lines"
+      ? "lines"
+      : m.setDraw === "central"
+        ? `central ${Math.round((m.setShare ?? 0.68) * 1000) / 10} %`
+        : "between extremes";
+  return `model set: ${n} model${n === 1 ? "" : "s"}, ${draw}`;
+}
 
 export type SwatchKind = "model-line" | "model-band" | "exclusion" | "projection" | "region";
 

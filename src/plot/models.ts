@@ -1,14 +1,14 @@
 // Model lines and bands as scene nodes: a line g(m) ∝ m is straight in log-log (two points across the
 // visible range), a band is the polygon between its edges, reaching below the plot when it cancels, with the
-// theory spread as a lighter band around it.
-import { bandCancels, bandEdges, gAgg, type AxionConstants } from "../physics/index";
+// theory spread as a lighter band around it; a model set drawn as lines is one path of many lines.
+import { gAgg, gFromNormalized, type AxionConstants } from "../physics/index";
 import type { Model, YView } from "../project/types";
 import type { PathNode } from "./scene-types";
 import { clipToRect, pathData, type Polyline, type Rect } from "./thinning/index";
 import { atHundredths, pathShape, type Shape } from "./occupancy";
 import { dashFor, safeColour, unitInterval } from "./format";
 import { gToView, type LogAffine } from "./scales";
-import { eOverNValue } from "./physics-settings";
+import { modelShape, shapeCancels, shapeNormalizedRange, type ModelShape } from "./model-shape";
 
 /** What a model needs from the figure to be drawn. */
 export interface ModelFrame {
@@ -54,33 +54,50 @@ function belowPlot(f: ModelFrame): number {
   return f.plot.y + f.plot.h + 4 * f.lineWidthPx + 2;
 }
 
-/** Edges (px) of the band for E/N ∈ [a, b] with k σ spread at both ends of the mass range. */
-function bandPx(f: ModelFrame, a: number, b: number, sigmas: number) {
+/** Normalized |E/N − c_γ| range → band edges (px) at both ends of the mass range, with K ± kσ as in bandEdges. */
+function bandPx(f: ModelFrame, shape: ModelShape, sigmas: number) {
   const [m0, m1] = f.massDomainEv;
-  const opts = { constants: f.constants, sigmas };
-  const e0 = bandEdges(m0, a, b, opts);
-  const e1 = bandEdges(m1, a, b, opts);
-  const cancels = bandCancels(a, b, opts);
+  const [nMin, nMax] = shapeNormalizedRange(shape, f.constants, sigmas);
+  const c = f.constants;
+  const kHigh = c.kMuEv + sigmas * c.kMuEvSigma;
+  const kLow = c.kMuEv - sigmas * c.kMuEvSigma;
+  const cancels = nMin === 0;
   const x0 = f.plot.x;
   const x1 = f.plot.x + f.plot.w;
-  const hi = [pxOf(f, m0, e0.highInvGeV), pxOf(f, m1, e1.highInvGeV)];
-  const lo = cancels ? [belowPlot(f), belowPlot(f)] : [pxOf(f, m0, e0.lowInvGeV), pxOf(f, m1, e1.lowInvGeV)];
+  const hi = [pxOf(f, m0, gFromNormalized(m0, nMax, kLow)), pxOf(f, m1, gFromNormalized(m1, nMax, kLow))];
+  const lo = cancels
+    ? [belowPlot(f), belowPlot(f)]
+    : [pxOf(f, m0, gFromNormalized(m0, nMin, kHigh)), pxOf(f, m1, gFromNormalized(m1, nMin, kHigh))];
   return { x0, x1, hi, lo, cancels };
 }
 
-/** The nodes of one model, fills and lines apart, and their shapes for the legend placement. */
-class ModelNodes {
-  fills: PathNode[] = [];
-  lines: PathNode[] = [];
-  shapes: Shape[] = [];
+function outlineOf(f: ModelFrame, b: ReturnType<typeof bandPx>): Polyline {
+  return poly([b.x0, b.x1, b.x1, b.x0], [b.hi[0], b.hi[1], b.lo[1], b.lo[0]], true, f);
 }
 
-/** A node with the path data of its polylines, and its shape from the same polylines (no path data read back). */
-function addNode(to: PathNode[], shapes: Shape[], node: Omit<PathNode, "d">, polys: Polyline[]): void {
-  const d = polys.map((p) => pathData(p)).join("");
-  const full: PathNode = { ...node, d, writtenD: d };
-  to.push(full);
-  shapes.push(pathShape(full, polys.map(atHundredths)));
+/** The lines of `values` as polylines (lines with g = 0 are skipped: they cannot be drawn on a log axis). */
+function linePolys(f: ModelFrame, values: readonly number[]): Polyline[] {
+  const [m0, m1] = f.massDomainEv;
+  const out: Polyline[] = [];
+  for (const v of values) {
+    const g0 = gAgg(m0, v, { constants: f.constants });
+    const g1 = gAgg(m1, v, { constants: f.constants });
+    if (g0 > 0 && g1 > 0) out.push(poly([f.plot.x, f.plot.x + f.plot.w], [pxOf(f, m0, g0), pxOf(f, m1, g1)], false, f));
+  }
+  return out;
+}
+
+/** Data attributes of a model's band fill: its E/N range, kind and whether it reaches g = 0. */
+function bandData(model: Model, shape: ModelShape, cancels: boolean): Record<string, string> {
+  const data: Record<string, string> = {
+    "model-id": model.id,
+    "eovern-min": model.eOverNMin,
+    "eovern-max": model.eOverNMax,
+    cancels: String(cancels),
+  };
+  if (model.kind && model.kind !== "interval") data["model-kind"] = model.kind;
+  if (shape.kind === "lines-band" && model.kind === "set") data["set-draw"] = model.setDraw;
+  return data;
 }
 
 /**
@@ -88,25 +105,38 @@ function addNode(to: PathNode[], shapes: Shape[], node: Omit<PathNode, "d">, pol
  * when its E/N does not read as a number.
  */
 export function modelGeometry(model: Model, f: ModelFrame, nodeId: string): ModelGeometry | null {
-  const a0 = eOverNValue(model.eOverNMin);
-  const b0 = eOverNValue(model.eOverNMax ?? model.eOverNMin);
-  if (!Number.isFinite(a0) || !Number.isFinite(b0)) return null;
-  const [a, b] = a0 <= b0 ? [a0, b0] : [b0, a0];
+  const shape = modelShape(model, f.constants);
+  if (!shape) return null;
   const colour = safeColour(model.colour, "#117A8B");
   const opacity = unitInterval(model.fillOpacity, 0.25);
   const sigmas = Number.isFinite(model.sigmas) && model.sigmas > 0 ? model.sigmas : 0;
-  const isLine = a === b;
-  const lw = isLine ? f.lineWidthPx * 1.15 : f.lineWidthPx;
+  const isLine = shape.kind === "line";
+  // Many lines of a set would merge into a dark block at full width.
+  const lw = isLine ? f.lineWidthPx * 1.15 : shape.kind === "lines" ? f.lineWidthPx * 0.6 : f.lineWidthPx;
   const dash = dashFor(model.lineStyle, lw);
   const base = { "model-id": model.id };
-  const { fills, lines, shapes } = new ModelNodes();
-  const add = (to: PathNode[], node: Omit<PathNode, "d">, polys: Polyline[]) => addNode(to, shapes, node, polys);
+  const fills: PathNode[] = [];
+  const lines: PathNode[] = [];
+  const shapes: Shape[] = [];
+  // Each node with the polylines its path data is written from.
+  const add = (to: PathNode[], node: Omit<PathNode, "d">, polys: Polyline[]) => {
+    const d = polys.map((p) => pathData(p)).join("");
+    const full: PathNode = { ...node, d, writtenD: d };
+    to.push(full);
+    shapes.push(pathShape(full, polys.map(atHundredths)));
+  };
 
   let spreadCancels = false;
   if (sigmas > 0) {
-    const s = bandPx(f, a, b, sigmas);
-    spreadCancels = s.cancels && !bandCancels(a, b, { constants: f.constants });
-    const outline = poly([s.x0, s.x1, s.x1, s.x0], [s.hi[0], s.hi[1], s.lo[1], s.lo[0]], true, f);
+    // A set drawn as lines gets one spread band per line; every other shape one band around the whole.
+    const parts = shape.kind === "lines" ? shape.values.map((v): ModelShape => ({ kind: "line", value: v })) : [shape];
+    const outlines: Polyline[] = [];
+    for (const part of parts) {
+      const s = bandPx(f, part, sigmas);
+      spreadCancels ||= s.cancels;
+      outlines.push(outlineOf(f, s));
+    }
+    spreadCancels &&= !shapeCancels(shape, f.constants);
     add(
       fills,
       {
@@ -116,45 +146,31 @@ export function modelGeometry(model: Model, f: ModelFrame, nodeId: string): Mode
         fillOpacity: Math.max(0.06, opacity * 0.45),
         data: { ...base, spread: String(sigmas) },
       },
-      [outline],
+      outlines,
     );
   }
 
-  if (isLine) {
-    const [m0, m1] = f.massDomainEv;
-    const g0 = gAgg(m0, a, { constants: f.constants });
-    const g1 = gAgg(m1, a, { constants: f.constants });
-    const vanishes = !(g0 > 0 && g1 > 0);
+  if (isLine || shape.kind === "lines") {
+    const polys = linePolys(f, isLine ? [shape.value] : shape.values);
+    const vanishes = polys.length === 0;
     if (!vanishes) {
-      const pl = poly([f.plot.x, f.plot.x + f.plot.w], [pxOf(f, m0, g0), pxOf(f, m1, g1)], false, f);
+      const data: Record<string, string> = isLine
+        ? { ...base, eovern: model.eOverNMin }
+        : { ...base, "model-kind": "set", "set-draw": "lines", lines: String(polys.length) };
       add(
         lines,
-        {
-          kind: "path",
-          id: `${nodeId}-line`,
-          stroke: colour,
-          strokeWidth: lw,
-          dash,
-          fill: "none",
-          data: { ...base, eovern: model.eOverNMin },
-        },
-        [pl],
+        { kind: "path", id: `${nodeId}-line`, stroke: colour, strokeWidth: lw, dash, fill: "none", data },
+        polys,
       );
     }
     return { kind: "line", cancels: vanishes, vanishes, spread: sigmas > 0, spreadCancels, fills, lines, shapes };
   }
 
-  const c = bandPx(f, a, b, 0);
+  const c = bandPx(f, shape, 0);
   add(
     fills,
-    {
-      kind: "path",
-      id: `${nodeId}-band`,
-      fill: colour,
-      fillOpacity: opacity,
-      data: { ...base, "eovern-min": model.eOverNMin, "eovern-max": model.eOverNMax, cancels: String(c.cancels) },
-    },
-    [poly([c.x0, c.x1, c.x1, c.x0], [c.hi[0], c.hi[1], c.lo[1], c.lo[0]], true, f)],
+    { kind: "path", id: `${nodeId}-band`, fill: colour, fillOpacity: opacity, data: bandData(model, shape, c.cancels) },
+    [outlineOf(f, c)],
   );
   const edges = [poly([c.x0, c.x1], c.hi, false, f)];
   if (!c.cancels) edges.push(poly([c.x0, c.x1], c.lo, false, f));

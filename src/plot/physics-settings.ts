@@ -21,10 +21,10 @@ export function physicsOptsOf(physics?: PhysicsSettings): PhysicsOpts {
 /** Value of an E/N string ("8/3", "-1/3", "0.5", U+2212 minus accepted); NaN when unreadable. */
 export function eOverNValue(text: string | number): number {
   if (typeof text === "number") return text;
-  // Every frame reads the same few model strings (several times each): parse each once (bounded).
+  // Every frame reads the same model strings (a model set may hold thousands): parse each once (bounded).
   let v = eOverNValues.get(text);
   if (v === undefined) {
-    if (eOverNValues.size > 1000) eOverNValues.clear();
+    if (eOverNValues.size > 50_000) eOverNValues.clear();
     v = rationalToNumber(text);
     eOverNValues.set(text, v);
   }

@@ -1,8 +1,7 @@
 // The scene builder: a project in, the complete figure out as plain layers of paths, rects and text, drawn
 // the same way on screen (SceneSvg and scene-dom.ts) and in the exported SVG (writeSvg). All defaults of a figure live here.
-import { bandCancels } from "../physics/coupling";
 import { DEFAULT_MASS_RANGE_EV, defaultYRange } from "../project/defaults";
-import type { Curve, LegendPlace, Model, Project, YView } from "../project/types";
+import type { Curve, FigureFont, LegendPlace, Model, Project, YView } from "../project/types";
 import type { PathNode, Scene, SceneLayer, SceneNode, ScaleConfig } from "./scene-types";
 import { axesNodes, axisTicks, gridNodes, verticalTickOpts, yTitle, type AxesFrame } from "./axes";
 import { curveGeometry, curveShape } from "./curves";
@@ -17,7 +16,7 @@ import {
   type Layout,
   type LegendCorner,
 } from "./layout";
-import { legendLabelText, legendNodes, measureLegend, type LegendBox, type LegendEntry } from "./legend";
+import { legendLabelText, legendNodes, measureLegend, modelKindNote, type LegendBox, type LegendEntry } from "./legend";
 import {
   LEGEND_CORNERS,
   OUTSIDE_MIN_PLOT_FRACTION,
@@ -25,15 +24,23 @@ import {
   pickLegendPlace,
   placementCurve,
 } from "./legend-place";
+import { modelShape, shapeCancels, shapeNormalizedRange } from "./model-shape";
 import type { Shape } from "./occupancy";
 import { modelGeometry } from "./models";
-import { constantsOf, eOverNValue, rescaleNote } from "./physics-settings";
+import { constantsOf, rescaleNote } from "./physics-settings";
 import { logAffine, sanitizeDomain, viewTransform } from "./scales";
 import { runsWidthPx } from "./text";
 import { logTicks } from "./ticks";
 
-/** Font stack of every figure: Helvetica-metric faces first (the width table assumes them), then fallbacks. */
-export const FONT_FAMILY = "Helvetica, Arial, 'Liberation Sans', 'DejaVu Sans', sans-serif";
+/**
+ * The CSS font-family list of each figure font: the bundled Computer Modern Unicode face first (the app loads
+ * its webfont, PNG and PDF use its files), then close system fonts. The width table (text.ts) is Helvetica's,
+ * a few per cent wider than CMU's, so the layout's estimates err on the roomy side.
+ */
+export const FIGURE_FONT_CSS: Record<FigureFont, string> = {
+  sans: "'CMU Sans Serif', Helvetica, Arial, 'Liberation Sans', 'DejaVu Sans', sans-serif",
+  serif: "'CMU Serif', 'Latin Modern Roman', 'Times New Roman', 'Liberation Serif', 'DejaVu Serif', serif",
+};
 
 export interface BuildSceneOpts {
   /** Scene size in CSS px (96/in). @default the preset's size */
@@ -68,15 +75,17 @@ export interface BuildSceneOpts {
 
 function modelNotes(m: Model, c: ReturnType<typeof constantsOf>): string[] {
   const notes: string[] = [];
-  const a = eOverNValue(m.eOverNMin);
-  const b = eOverNValue(m.eOverNMax ?? m.eOverNMin);
+  const kindNote = modelKindNote(m);
+  if (kindNote) notes.push(kindNote);
+  const shape = modelShape(m, c);
   const sigmas = Number.isFinite(m.sigmas) && m.sigmas > 0 ? m.sigmas : 0;
   if (sigmas > 0) notes.push(`±${r2(sigmas)}σ spread`);
-  if (a === b) {
-    if (Math.abs(a - c.cGamma) === 0) notes.push("g = 0: not drawn");
-  } else if (bandCancels(Math.min(a, b), Math.max(a, b), { constants: c })) {
-    notes.push("reaches g = 0: cancellation");
-  } else if (sigmas > 0 && bandCancels(Math.min(a, b), Math.max(a, b), { constants: c, sigmas })) {
+  if (!shape) return notes;
+  if (shape.kind === "line" || shape.kind === "lines") {
+    if (shapeCancels(shape, c)) notes.push(shape.kind === "line" ? "g = 0: not drawn" : "a line at g = 0 is not drawn");
+  } else if (shapeCancels(shape, c)) {
+    notes.push(shape.kind === "interval" ? "reaches g = 0: cancellation" : "a line reaches g = 0");
+  } else if (sigmas > 0 && shapeNormalizedRange(shape, c, sigmas)[0] === 0) {
     notes.push("spread reaches g = 0");
   }
   return notes;
@@ -95,10 +104,9 @@ function legendEntries(project: Project, fonts: Fonts, c: ReturnType<typeof cons
   const entries: LegendEntry[] = [];
   for (const m of project.models) {
     if (!m.visible) continue;
-    const a = eOverNValue(m.eOverNMin);
-    const b = eOverNValue(m.eOverNMax ?? m.eOverNMin);
-    if (!Number.isFinite(a) || !Number.isFinite(b)) continue;
-    const isLine = a === b;
+    const shape = modelShape(m, c);
+    if (!shape) continue;
+    const isLine = shape.kind === "line" || shape.kind === "lines";
     const lw = isLine ? fonts.dataLinePx * 1.15 : fonts.dataLinePx;
     entries.push({
       kind: isLine ? "model-line" : "model-band",
@@ -394,7 +402,14 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
       data: { testid: "legend" },
     },
   ];
-  const scene: Scene = { widthPx: r2(widthPx), heightPx: r2(heightPx), plot, scales, fontFamily: FONT_FAMILY, layers };
+  const scene: Scene = {
+    widthPx: r2(widthPx),
+    heightPx: r2(heightPx),
+    plot,
+    scales,
+    fontFamily: FIGURE_FONT_CSS[fig.font] ?? FIGURE_FONT_CSS.sans,
+    layers,
+  };
   if (autoPlace && entries.length) scene.autoLegendPlace = autoPlace;
   if (opts.physical !== false) {
     const custom = opts.widthPx !== undefined || opts.heightPx !== undefined;

@@ -40,6 +40,114 @@ export function decadeLabelStep(spanDecades: number): number {
   return 1;
 }
 
+/** What the tick helpers share: the range, its logs and the label measures. */
+interface TickAxis {
+  lo: number;
+  hi: number;
+  l0: number;
+  eHi: number;
+  ppd: number;
+  gap: number;
+  format: (value: number) => TextRun[];
+  extent: (runs: TextRun[]) => number;
+  inRange: (v: number) => boolean;
+}
+
+/** A major tick at every decade in range, labelled at multiples of a step chosen so labels do not collide. */
+function decadeTicks(ax: TickAxis, eLo: number): LogTick[] {
+  const { format, ppd } = ax;
+  const decades: number[] = [];
+  for (let e = eLo; e <= ax.eHi; e++) decades.push(e);
+  let maxExtent = 0;
+  for (const e of decades) maxExtent = Math.max(maxExtent, ax.extent(format(decade(e))));
+  const needPx = maxExtent + ax.gap;
+  const minStep = Math.max(decadeLabelStep(Math.log10(ax.hi) - ax.l0), ppd > 0 ? needPx / ppd : 1);
+  const step = STEPS.find((s) => s >= minStep - EPS) ?? Math.ceil(minStep);
+  const labelled = (e: number) => ((e % step) + step) % step === 0;
+  return decades.map((e) => {
+    const v = decade(e);
+    return { value: v, major: true, label: labelled(e) ? format(v) : null };
+  });
+}
+
+/** The first set of multipliers (2 and 5, all of 2…9, …) whose labels in range all fit; empty when none does. */
+function extraLabelSet(ax: TickAxis): Set<number> {
+  const { format, ppd } = ax;
+  for (const set of [[2, 5], [2, 3, 4, 5, 6, 7, 8, 9], [3], [2], [5]]) {
+    const values: number[] = [];
+    for (let e = Math.floor(ax.l0) - 1; e <= ax.eHi; e++) for (const k of [1, ...set]) values.push(k * decade(e));
+    const shown = values.filter(ax.inRange).sort((a, b) => a - b);
+    if (shown.length < 2) continue;
+    let fits = true;
+    for (let i = 1; i < shown.length && fits; i++) {
+      const dist = ppd * Math.log10(shown[i] / shown[i - 1]);
+      const need = (ax.extent(format(shown[i])) + ax.extent(format(shown[i - 1]))) / 2 + ax.gap;
+      if (dist < need) fits = false;
+    }
+    if (fits) return new Set(set);
+  }
+  return new Set<number>();
+}
+
+/** Minor ticks at 2…9 × 10^e (when they fit), labelled at the multipliers in `extra`. */
+function addMinorTicks(ticks: LogTick[], ax: TickAxis, minorsFit: boolean, extra: Set<number>): void {
+  for (let e = Math.floor(ax.l0); e <= ax.eHi; e++) {
+    for (let k = 2; k <= 9; k++) {
+      const v = k * decade(e);
+      if (!ax.inRange(v)) continue;
+      const lab = extra.has(k);
+      if (lab || minorsFit) ticks.push({ value: v, major: false, label: lab ? ax.format(v) : null });
+    }
+  }
+}
+
+/** Labels `values` left to right, each where it does not run into the previous one. */
+function greedyLabels(ax: TickAxis, values: number[]): Map<number, TextRun[]> {
+  const chosen = new Map<number, TextRun[]>();
+  let prevPx = -Infinity;
+  let prevHalf = 0;
+  for (const v of values) {
+    const runs = ax.format(v);
+    const half = ax.extent(runs) / 2;
+    const px = ax.ppd * Math.log10(v / ax.lo);
+    if (px - prevPx >= prevHalf + half + ax.gap) {
+      chosen.set(v, runs);
+      prevPx = px;
+      prevHalf = half;
+    }
+  }
+  return chosen;
+}
+
+/**
+ * Very narrow range: D3's log ticks (linear inside the decade) for a few tick counts, each labelled greedily;
+ * the count that gives the most labels wins and, with at least two, replaces the labels of `ticks`.
+ */
+function relabelNarrowRange(ticks: LogTick[], ax: TickAxis): void {
+  let best = new Map<number, TextRun[]>();
+  let bestValues: number[] = [];
+  for (const n of [2, 3, 4, 6, 8, 12, 16, 24]) {
+    const values = scaleLog().domain([ax.lo, ax.hi]).ticks(n).filter(ax.inRange);
+    const chosen = greedyLabels(ax, values);
+    if (chosen.size > best.size) {
+      best = chosen;
+      bestValues = values;
+    }
+  }
+  if (best.size < 2) return;
+  const taken = new Map(ticks.map((t) => [t.value, t]));
+  for (const t of ticks) t.label = null;
+  for (const v of bestValues) {
+    let tick = taken.get(v);
+    if (!tick) {
+      tick = { value: v, major: false, label: null };
+      ticks.push(tick);
+      taken.set(v, tick);
+    }
+    tick.label = best.get(v) ?? null;
+  }
+}
+
 /**
  * Ticks of a log axis over [lo, hi] (ascending, > 0). Major ticks at every decade; a decade is labelled when
  * its exponent is a multiple of the label step (so labels stay put while panning). With fewer than two
@@ -48,108 +156,26 @@ export function decadeLabelStep(spanDecades: number): number {
  */
 export function logTicks(lo: number, hi: number, opts: LogTickOpts): LogTick[] {
   if (!(lo > 0 && hi > lo && Number.isFinite(hi))) return [];
-  const format = opts.format ?? scientificRuns;
-  const gap = opts.labelGapPx ?? 4;
-  const minorMin = opts.minorMinSpacingPx ?? 2;
-  const ppd = opts.pxPerDecade;
   const l0 = Math.log10(lo);
   const l1 = Math.log10(hi);
-  const span = l1 - l0;
-  const inRange = (v: number) => v >= lo * (1 - EPS) && v <= hi * (1 + EPS);
-
-  const eLo = Math.ceil(l0 - EPS);
-  const eHi = Math.floor(l1 + EPS);
-  const ticks: LogTick[] = [];
-  const decades: number[] = [];
-  for (let e = eLo; e <= eHi; e++) decades.push(e);
-
-  let maxExtent = 0;
-  for (const e of decades) maxExtent = Math.max(maxExtent, opts.labelExtentPx(format(decade(e))));
-  const needPx = maxExtent + gap;
-  const minStep = Math.max(decadeLabelStep(span), ppd > 0 ? needPx / ppd : 1);
-  const step = STEPS.find((s) => s >= minStep - EPS) ?? Math.ceil(minStep);
-  const labelled = (e: number) => ((e % step) + step) % step === 0;
-  for (const e of decades) {
-    const v = decade(e);
-    ticks.push({ value: v, major: true, label: labelled(e) ? format(v) : null });
-  }
+  const ax: TickAxis = {
+    lo,
+    hi,
+    l0,
+    eHi: Math.floor(l1 + EPS),
+    ppd: opts.pxPerDecade,
+    gap: opts.labelGapPx ?? 4,
+    format: opts.format ?? scientificRuns,
+    extent: opts.labelExtentPx,
+    inRange: (v: number) => v >= lo * (1 - EPS) && v <= hi * (1 + EPS),
+  };
+  const ticks = decadeTicks(ax, Math.ceil(l0 - EPS));
   const labelCount = ticks.filter((t) => t.label).length;
-
   // Minor ticks at 2…9 × 10^e, and on narrow ranges labels at some of them.
-  const minorsFit = ppd * Math.log10(10 / 9) >= minorMin;
-  let extra = new Set<number>();
-  if (labelCount < 2) {
-    for (const set of [[2, 5], [2, 3, 4, 5, 6, 7, 8, 9], [3], [2], [5]]) {
-      const values: number[] = [];
-      for (let e = Math.floor(l0) - 1; e <= eHi; e++) for (const k of [1, ...set]) values.push(k * decade(e));
-      const shown = values.filter(inRange).sort((a, b) => a - b);
-      if (shown.length < 2) continue;
-      let fits = true;
-      for (let i = 1; i < shown.length && fits; i++) {
-        const dist = ppd * Math.log10(shown[i] / shown[i - 1]);
-        const need = (opts.labelExtentPx(format(shown[i])) + opts.labelExtentPx(format(shown[i - 1]))) / 2 + gap;
-        if (dist < need) fits = false;
-      }
-      if (fits) {
-        extra = new Set(set);
-        break;
-      }
-    }
-  }
-  if (minorsFit || extra.size) {
-    for (let e = Math.floor(l0); e <= eHi; e++) {
-      for (let k = 2; k <= 9; k++) {
-        const v = k * decade(e);
-        if (!inRange(v)) continue;
-        const lab = extra.has(k);
-        if (lab || minorsFit) ticks.push({ value: v, major: false, label: lab ? format(v) : null });
-      }
-    }
-  }
-  if (ticks.filter((t) => t.label).length < 2) {
-    // Very narrow range: D3's log ticks (linear inside the decade) for a few tick counts, each labelled
-    // greedily left to right where a label does not run into the previous one; the count that gives the
-    // most labels wins.
-    const greedy = (values: number[]) => {
-      const chosen = new Map<number, TextRun[]>();
-      let prevPx = -Infinity;
-      let prevHalf = 0;
-      for (const v of values) {
-        const runs = format(v);
-        const half = opts.labelExtentPx(runs) / 2;
-        const px = ppd * Math.log10(v / lo);
-        if (px - prevPx >= prevHalf + half + gap) {
-          chosen.set(v, runs);
-          prevPx = px;
-          prevHalf = half;
-        }
-      }
-      return chosen;
-    };
-    let best = new Map<number, TextRun[]>();
-    let bestValues: number[] = [];
-    for (const n of [2, 3, 4, 6, 8, 12, 16, 24]) {
-      const values = scaleLog().domain([lo, hi]).ticks(n).filter(inRange);
-      const chosen = greedy(values);
-      if (chosen.size > best.size) {
-        best = chosen;
-        bestValues = values;
-      }
-    }
-    if (best.size >= 2) {
-      const taken = new Map(ticks.map((t) => [t.value, t]));
-      for (const t of ticks) t.label = null;
-      for (const v of bestValues) {
-        let tick = taken.get(v);
-        if (!tick) {
-          tick = { value: v, major: false, label: null };
-          ticks.push(tick);
-          taken.set(v, tick);
-        }
-        tick.label = best.get(v) ?? null;
-      }
-    }
-  }
+  const minorsFit = ax.ppd * Math.log10(10 / 9) >= (opts.minorMinSpacingPx ?? 2);
+  const extra = labelCount < 2 ? extraLabelSet(ax) : new Set<number>();
+  if (minorsFit || extra.size) addMinorTicks(ticks, ax, minorsFit, extra);
+  if (ticks.filter((t) => t.label).length < 2) relabelNarrowRange(ticks, ax);
   return ticks.sort((a, b) => a.value - b.value);
 }
 

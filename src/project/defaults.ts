@@ -1,9 +1,23 @@
 // Defaults in one place: colour palettes, the default figure and constants, and the factories that build a
 // complete Model or Curve from a partial one. The UI, the demo and the restore step all take defaults from here.
 import { REF_2019 } from "../physics/constants";
-import type { Curve, CurveRole, Figure, LineStyle, Model, PhysicsSettings, Project, YView } from "./types";
+import type {
+  Curve,
+  CurveRole,
+  Figure,
+  LineStyle,
+  Model,
+  ModelKind,
+  ModelMember,
+  ModelSource,
+  PhysicsSettings,
+  Project,
+  SetDraw,
+  YView,
+} from "./types";
 import { PROJECT_VERSION } from "./types";
 import { newId } from "./ids";
+import { settleModelKind } from "./model-kind";
 
 /**
  * The Okabe–Ito colour-blind-safe palette by name (Okabe & Ito, "Color Universal Design", 2008).
@@ -39,6 +53,14 @@ export const CURVE_COLOURS: readonly string[] = [
 
 /** Model lines and bands: a teal/blue family (never yellow or orange, which belong to curves). */
 export const MODEL_COLOURS: readonly string[] = ["#117A8B", "#1F4E8C", "#2A9D8F", "#4062BB", "#0B5563", "#5B8DB8"];
+
+/**
+ * Share of a model set's models its central band holds by default: 68 %, the share within ±1σ of a Gaussian
+ * (common practice for "central" bands).
+ */
+export const DEFAULT_SET_SHARE = 0.68;
+/** How a new model set is drawn: the band between its extreme lines. */
+export const DEFAULT_SET_DRAW: SetDraw = "extremes";
 
 /** Band fill opacity of a new model. @default 0.25 */
 export const DEFAULT_MODEL_FILL_OPACITY = 0.25;
@@ -99,6 +121,7 @@ export function defaultFigure(): Figure {
     grid: true,
     legend: "auto",
     fontPt: 12,
+    font: "sans",
     title: "",
   };
 }
@@ -106,6 +129,21 @@ export function defaultFigure(): Figure {
 /** The label a model gets when none is typed: "E/N = 8/3" for a line, "E/N = 5/3..44/3" for a band. */
 export function autoModelLabel(eOverNMin: string, eOverNMax: string = eOverNMin): string {
   return eOverNMin === eOverNMax ? `E/N = ${eOverNMin}` : `E/N = ${eOverNMin}..${eOverNMax}`;
+}
+
+/**
+ * The label of a model of any kind when none is typed: as {@link autoModelLabel} for lines and intervals,
+ * "E/N = 5/3 | 44/3" between lines, "Model set: 820 models" for a set (counted with multiplicities).
+ */
+export function autoLabelOfKind(
+  kind: ModelKind,
+  eOverNMin: string,
+  eOverNMax: string,
+  members: readonly ModelMember[],
+): string {
+  if (kind === "between") return `E/N = ${members.map((m) => m.eOverN).join(" | ")}`;
+  if (kind === "set") return `Model set: ${members.reduce((n, m) => n + m.count, 0)} models`;
+  return autoModelLabel(eOverNMin, eOverNMax);
 }
 
 function firstUnused(palette: readonly string[], used: readonly string[]): string {
@@ -131,7 +169,8 @@ export function nextCurveColour(project: { curves: readonly Pick<Curve, "colour"
 
 /**
  * A complete model from a partial one. Missing E/N gives the KSVZ-type line E/N = 0; missing max = min (a line);
- * missing label is derived from E/N; missing colour is the next free model colour of `context`.
+ * members make a model set unless `kind` says "between"; the E/N range of "between" and "set" follows the
+ * members; missing label is derived from E/N; missing colour is the next free model colour of `context`.
  * @param partial fields to set. @default {}
  * @param context the project (or its models) the model will join, for the colour. @default no models
  */
@@ -139,13 +178,24 @@ export function newModel(
   partial: Partial<Model> = {},
   context: { models: readonly Pick<Model, "colour">[] } = { models: [] },
 ): Model {
-  const eOverNMin = partial.eOverNMin ?? "0";
-  const eOverNMax = partial.eOverNMax ?? eOverNMin;
+  const hasMembers = (partial.members?.length ?? 0) > 0;
+  const settled = settleModelKind({
+    kind: partial.kind,
+    eOverNMin: partial.eOverNMin ?? (hasMembers ? undefined : "0"),
+    eOverNMax: partial.eOverNMax,
+    members: partial.members,
+  });
+  if (!settled.ok) throw new Error(settled.error);
+  const { kind, eOverNMin, eOverNMax, members } = settled;
   return {
     id: partial.id ?? newId("m"),
-    label: partial.label ?? autoModelLabel(eOverNMin, eOverNMax),
+    label: partial.label ?? autoLabelOfKind(kind, eOverNMin, eOverNMax, members),
+    kind,
     eOverNMin,
     eOverNMax,
+    members,
+    setDraw: partial.setDraw ?? DEFAULT_SET_DRAW,
+    setShare: partial.setShare ?? DEFAULT_SET_SHARE,
     source: partial.source ?? { kind: "typed" },
     colour: partial.colour ?? nextModelColour(context),
     lineStyle: partial.lineStyle ?? "solid",
@@ -153,6 +203,24 @@ export function newModel(
     visible: partial.visible ?? true,
     sigmas: partial.sigmas ?? 0,
   };
+}
+
+/**
+ * A model set: discrete E/N values with multiplicities (from the catalogue, an ensemble or a scan), sorted by
+ * value with equal values merged.
+ * @param draw how the set is drawn. @default "extremes"
+ * @param context the project (or its models) the set will join, for the colour. @default no models
+ * @throws Error when `members` is empty
+ */
+export function newModelSet(
+  label: string,
+  members: readonly ModelMember[],
+  source: ModelSource,
+  draw: SetDraw = DEFAULT_SET_DRAW,
+  context: { models: readonly Pick<Model, "colour">[] } = { models: [] },
+): Model {
+  if (members.length === 0) throw new Error("a model set needs at least one member");
+  return newModel({ kind: "set", label, members: [...members], source, setDraw: draw }, context);
 }
 
 /**

@@ -178,16 +178,22 @@ export function demoCurves(): Curve[] {
   );
 }
 
-/** The demo models: a KSVZ-type line, a DFSZ-type line and the preferred window of heavy-quark models. */
+/**
+ * The demo models: a KSVZ-type line, a DFSZ-type line and the preferred window of heavy-quark models, drawn as
+ * the region between the E/N = 5/3 and E/N = 44/3 lines (Di Luzio, Mescia, Nardi, PRL 118 (2017) 031801).
+ */
 export function demoModels(): Model[] {
   return [
     newModel({ id: "ksvz", label: "KSVZ-type, E/N = 0", eOverNMin: "0", colour: MODEL_COLOURS[0] }),
     newModel({ id: "dfsz", label: "DFSZ-type, E/N = 8/3", eOverNMin: "8/3", colour: MODEL_COLOURS[1] }),
     newModel({
       id: "window",
-      label: "Heavy-quark models, E/N = 5/3..44/3",
-      eOverNMin: "5/3",
-      eOverNMax: "44/3",
+      label: "Heavy-quark window",
+      kind: "between",
+      members: [
+        { eOverN: "5/3", count: 1 },
+        { eOverN: "44/3", count: 1 },
+      ],
       colour: MODEL_COLOURS[2],
       fillOpacity: 0.2,
     }),

@@ -1,6 +1,8 @@
 // Schema versions and the migration chain: a registry of steps, each turning a version-n project object
 // into a version-(n+1) one, so every file or link ever written keeps opening after the schema changes.
 import { isPlainObject } from "./json";
+import { kindOfRange } from "./model-kind";
+import { isRationalText } from "./rational-text";
 import { PROJECT_VERSION } from "./types";
 
 /** Version of the project schema this build writes (and the newest it reads). */
@@ -10,11 +12,35 @@ export const CURRENT_VERSION: number = PROJECT_VERSION;
 export type Migration = (old: Record<string, unknown>) => Record<string, unknown>;
 
 /**
- * MIGRATIONS[n] upgrades version n to n + 1. Version 1 is the first released schema, so the registry is empty;
- * when version 2 comes, add `1: (v1) => ({ ...v1, version: 2, … })`, a golden v2 link and file under
- * tests/project/golden/v2, and keep the v1 goldens (they must still decode, now through the new step).
+ * v1 → v2: models gain a kind. A v1 model drew one line when both ends had the same value and the continuous
+ * interval otherwise, so it becomes "line" or "interval" (no members; set fields at their defaults), and
+ * draws exactly what it drew. Models whose E/N is unreadable are left for the restore step to report.
  */
-export const MIGRATIONS: Readonly<Record<number, Migration>> = {};
+function v1ToV2(v1: Record<string, unknown>): Record<string, unknown> {
+  const models = Array.isArray(v1.models) ? v1.models.map(modelV1ToV2) : v1.models;
+  return { ...v1, version: 2, models };
+}
+
+function modelV1ToV2(m: unknown): unknown {
+  if (typeof m !== "object" || m === null || Array.isArray(m)) return m;
+  const r = m as Record<string, unknown>;
+  const min = r.eOverNMin;
+  const max = r.eOverNMax ?? min;
+  const readable = typeof min === "string" && typeof max === "string" && isRationalText(min) && isRationalText(max);
+  return {
+    ...r,
+    ...(readable ? { kind: kindOfRange(min, max) } : {}),
+    members: [],
+    setDraw: "extremes",
+    setShare: 0.68,
+  };
+}
+
+/**
+ * MIGRATIONS[n] upgrades version n to n + 1. Every step keeps its golden links and files under
+ * tests/project/golden/vN, which must still decode through the chain.
+ */
+export const MIGRATIONS: Readonly<Record<number, Migration>> = { 1: v1ToV2 };
 
 export type MigrateResult =
   | { ok: true; value: Record<string, unknown>; fromVersion: number }

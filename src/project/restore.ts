@@ -2,7 +2,6 @@
 // or drops what is broken, and returns what it did beside the project (no state is kept between calls).
 import type { z } from "zod";
 import {
-  autoModelLabel,
   defaultCurveLineStyle,
   defaultFigure,
   defaultPhysics,
@@ -15,6 +14,7 @@ import {
 import { uniqueId } from "./ids";
 import { isPlainObject } from "./json";
 import { migrate } from "./migrate";
+import { settleModelKind } from "./model-kind";
 import {
   CONTROL_RE,
   PROJECT_LIMITS,
@@ -24,15 +24,26 @@ import {
   isRationalText,
   legendPlace,
   lineStyle,
+  modelKind,
   modelSource,
   physicsRef,
-  rationalValue,
+  setDraw,
+  setShare,
   sizePreset,
   topAxis,
+  figureFont,
   yView,
 } from "./schema";
 import { MIN_RANGE_DECADES, saneRange } from "./view-range";
-import { PROJECT_VERSION, type Curve, type Figure, type Model, type PhysicsSettings, type Project } from "./types";
+import {
+  PROJECT_VERSION,
+  type Curve,
+  type Figure,
+  type Model,
+  type ModelMember,
+  type PhysicsSettings,
+  type Project,
+} from "./types";
 
 /** Result of {@link restoreProject}: the repaired project and a note per repair, or why it was refused. */
 export type RestoreResult =
@@ -147,34 +158,71 @@ function labelOf(x: unknown): string {
   return isPlainObject(x) && typeof x.label === "string" ? ` "${x.label.slice(0, 40)}"` : "";
 }
 
+/** Members of a between-lines band or model set; unreadable members are left out (noted). */
+function members(v: unknown, note: Note): ModelMember[] | undefined {
+  if (v === undefined) return undefined;
+  if (!Array.isArray(v) || v.length > PROJECT_LIMITS.members) return invalid(note, "members", v);
+  const out: ModelMember[] = [];
+  v.forEach((item: unknown, i) => {
+    const e = isPlainObject(item) ? eOverN(own(item, "eOverN")) : null;
+    const count = isPlainObject(item) ? (own(item, "count") ?? 1) : null;
+    const nDW = isPlainObject(item) ? own(item, "nDW") : undefined;
+    if (!e?.ok || !Number.isSafeInteger(count) || (count as number) < 1) {
+      note("members", `member ${i + 1} (${show(item)}) was left out: ${e && !e.ok ? e.error : "expected a count ≥ 1"}`);
+      return;
+    }
+    const m: ModelMember = { eOverN: e.value, count: count as number };
+    if (typeof nDW === "string" && nDW.length <= PROJECT_LIMITS.rational) m.nDW = nDW;
+    out.push(m);
+  });
+  return out;
+}
+
 /** A model, or why it was left out (no E/N that can be read). */
 function restoreModel(raw: Rec, index: number, taken: Set<string>, note: Note): Model | string {
-  const lo = eOverN(own(raw, "eOverNMin"));
-  if (!lo.ok) return `eOverNMin: ${lo.error}`;
-  const hi = own(raw, "eOverNMax") === undefined ? lo : eOverN(own(raw, "eOverNMax"));
-  if (!hi.ok) return `eOverNMax: ${hi.error}`;
+  const lo = own(raw, "eOverNMin") === undefined ? undefined : eOverN(own(raw, "eOverNMin"));
+  if (lo && !lo.ok) return `eOverNMin: ${lo.error}`;
+  const hi = own(raw, "eOverNMax") === undefined ? undefined : eOverN(own(raw, "eOverNMax"));
+  if (hi && !hi.ok) return `eOverNMax: ${hi.error}`;
+  const settled = settleModelKind({
+    kind: valid(modelKind, own(raw, "kind"), note, "kind"),
+    eOverNMin: lo?.value,
+    eOverNMax: hi?.value,
+    members: members(own(raw, "members"), note),
+  });
+  if (!settled.ok) return `eOverNMin: ${settled.error}`;
+  for (const msg of settled.notes) note("E/N", msg);
+  const { kind, eOverNMin: min, eOverNMax: max } = settled;
   const rawId = idText(own(raw, "id"), note);
   const label = text(own(raw, "label"), PROJECT_LIMITS.label, note, "label");
-  let [min, max] = [lo.value, hi.value];
-  if (rationalValue(max) < rationalValue(min)) {
-    note("E/N", "the ends were swapped");
-    [min, max] = [max, min];
-  }
-  const d = newModel({ id: "", eOverNMin: min, eOverNMax: max, colour: MODEL_COLOURS[index % MODEL_COLOURS.length] });
+  const d = newModel({
+    id: "",
+    kind,
+    eOverNMin: min,
+    eOverNMax: max,
+    members: settled.members,
+    colour: MODEL_COLOURS[index % MODEL_COLOURS.length],
+  });
   const source = valid(modelSource, own(raw, "source"), note, "source");
   const colour = valid(hexColour, own(raw, "colour"), note, "colour");
   const style = valid(lineStyle, own(raw, "lineStyle"), note, "line style");
   const fillOpacity = clamped(own(raw, "fillOpacity"), 0, 1, note, "fill opacity");
   const visible = bool(own(raw, "visible"), note, "visible");
   const sigmas = clamped(own(raw, "sigmas"), 0, 10, note, "theory spread");
+  const draw = valid(setDraw, own(raw, "setDraw"), note, "set drawing");
+  const share = valid(setShare, own(raw, "setShare"), note, "set share");
   const id = uniqueId(rawId ?? `m-${index + 1}`, taken);
   if (rawId !== undefined && id !== rawId) note("id", `${show(rawId)} was used twice; renamed to ${show(id)}`);
   taken.add(id);
   return {
     id,
-    label: label ?? autoModelLabel(min, max),
+    label: label ?? d.label,
+    kind,
     eOverNMin: min,
     eOverNMax: max,
+    members: settled.members,
+    setDraw: draw ?? d.setDraw,
+    setShare: share ?? d.setShare,
     source: source ?? d.source,
     colour: colour ?? d.colour,
     lineStyle: style ?? d.lineStyle,
@@ -303,6 +351,7 @@ function restoreFigure(raw: unknown, note: Note): Figure {
     grid: bool(own(f, "grid"), note, "grid") ?? d.grid,
     legend: valid(legendPlace, own(f, "legend"), note, "legend") ?? d.legend,
     fontPt: clamped(own(f, "fontPt"), 4, 72, note, "font size") ?? d.fontPt,
+    font: valid(figureFont, own(f, "font"), note, "figure font") ?? d.font,
     title: text(own(f, "title"), PROJECT_LIMITS.label, note, "title") ?? d.title,
   };
 }

@@ -2,46 +2,17 @@
 // (./restore.ts) reads untrusted input with.
 import { z } from "zod";
 import { PROJECT_LIMITS } from "./limits";
+import { isRationalText, rationalValue } from "./rational-text";
 import { PROJECT_VERSION } from "./types";
 import { MIN_RANGE_DECADES, saneRange } from "./view-range";
 
-export { PROJECT_LIMITS };
+export { PROJECT_LIMITS, isRationalText, rationalValue };
 
 // ---------------------------------------------------------------------------------------------- building blocks
 
 // C0 controls other than tab, LF and CR (and DEL) are invalid in the XML of an exported SVG.
 // eslint-disable-next-line no-control-regex
 export const CONTROL_RE = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/g;
-
-// One pass: optional sign, then "p/q" (integers, spaces around "/" allowed) or a decimal with exponent.
-const RATIONAL_RE =
-  /^\s*([+\-\u2212]?)(?:(\d+)\s*\/\s*([+\-\u2212]?)(\d+)|((?:\d+\.?\d*|\.\d+)(?:[eE][+\-\u2212]?\d+)?))\s*$/;
-
-/**
- * Numeric value of E/N text as the E/N field stores it ("8/3", "-1/3", "0.5", "1e-1"; spaces around "/" and a
- * Unicode minus are tolerated); NaN when it is neither a number nor a fraction, the denominator is 0, or the
- * value is not finite.
- */
-export function rationalValue(s: string): number {
-  if (typeof s !== "string" || s.length > PROJECT_LIMITS.rational) return Number.NaN;
-  const m = RATIONAL_RE.exec(s);
-  if (!m) return Number.NaN;
-  const sign = m[1] === "" || m[1] === "+" ? 1 : -1;
-  let v: number;
-  if (m[2] !== undefined) {
-    const den = Number(m[4]) * (m[3] === "" || m[3] === "+" ? 1 : -1);
-    if (den === 0) return Number.NaN;
-    v = (sign * Number(m[2])) / den;
-  } else {
-    v = sign * Number(m[5].replace("\u2212", "-"));
-  }
-  return Number.isFinite(v) ? v : Number.NaN;
-}
-
-/** Whether a string is E/N text accepted by {@link rationalValue}. */
-export function isRationalText(s: string): boolean {
-  return !Number.isNaN(rationalValue(s));
-}
 
 export const hexColour = z
   .string()
@@ -61,8 +32,14 @@ export const legendPlace = z.enum([
 ]);
 export const sizePreset = z.enum(["slide", "single-column", "double-column", "custom"]);
 export const topAxis = z.enum(["none", "fa", "frequency"]);
+// Joined in schema version 1 without a bump: the key is optional on reading (missing = "sans", as files were
+// drawn before), and an older build ignores it.
+export const figureFont = z.enum(["sans", "serif"]);
 export const yView = z.enum(["coupling", "normalized", "g-gamma"]);
 export const physicsRef = z.enum(["2016", "2019", "custom"]);
+export const modelKind = z.enum(["line", "interval", "between", "set"]);
+export const setDraw = z.enum(["lines", "extremes", "central"]);
+export const setShare = z.number().gt(0).max(1);
 
 const eOverNText = z
   .string()
@@ -103,6 +80,8 @@ export const modelSource = z.discriminatedUnion("kind", [
     forbidden: z.array(termText).max(PROJECT_LIMITS.fermions).optional(),
     normalize: z.string().max(PROJECT_LIMITS.label).optional(),
   }),
+  z.object({ kind: z.literal("ensemble"), settings: z.record(z.string().max(PROJECT_LIMITS.id), z.unknown()) }),
+  z.object({ kind: z.literal("scan") }),
 ]);
 
 function isFiniteNumberArray(v: unknown, max: number): v is ArrayLike<number> {
@@ -163,8 +142,20 @@ export const ProjectSchema = z.object({
       z.object({
         id: z.string().min(1).max(PROJECT_LIMITS.id),
         label: z.string().max(PROJECT_LIMITS.label),
+        kind: modelKind,
         eOverNMin: eOverNText,
         eOverNMax: eOverNText,
+        members: z
+          .array(
+            z.object({
+              eOverN: eOverNText,
+              count: z.int().min(1),
+              nDW: z.string().max(PROJECT_LIMITS.rational).optional(),
+            }),
+          )
+          .max(PROJECT_LIMITS.members),
+        setDraw,
+        setShare,
         source: modelSource,
         colour: hexColour,
         lineStyle,
@@ -210,6 +201,7 @@ export const ProjectSchema = z.object({
     grid: z.boolean(),
     legend: legendPlace,
     fontPt: z.number().min(4).max(72),
+    font: figureFont,
     title: z.string().max(PROJECT_LIMITS.label),
   }),
 });

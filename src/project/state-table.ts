@@ -38,8 +38,12 @@ export const PHYSICS_STATE: { readonly [K in keyof PhysicsSettings]-?: Persisten
 export const MODEL_STATE: { readonly [K in keyof Model]-?: Persistence } = {
   id: everywhere,
   label: everywhere,
+  kind: everywhere,
   eOverNMin: everywhere,
   eOverNMax: everywhere,
+  members: everywhere,
+  setDraw: everywhere,
+  setShare: everywhere,
   // The calculator's field content lets a receiver re-open and edit the model, not only see its line.
   source: everywhere,
   colour: everywhere,
@@ -81,6 +85,7 @@ export const FIGURE_STATE: { readonly [K in keyof Figure]-?: Persistence } = {
   grid: everywhere,
   legend: everywhere,
   fontPt: everywhere,
+  font: everywhere,
   title: everywhere,
 };
 

@@ -3,7 +3,7 @@
 import type { FermionInput } from "../physics/anomaly-types";
 import type { ScalarInput } from "../physics/charges/types";
 
-export const PROJECT_VERSION = 1 as const;
+export const PROJECT_VERSION = 2 as const;
 
 export type LineStyle = "solid" | "dashed" | "dotted" | "dashdot";
 export type CurveRole = "exclusion" | "projection" | "region";
@@ -12,6 +12,8 @@ export type LegendPlace =
   "auto" | "top-left" | "top-right" | "bottom-left" | "bottom-right" | "outside-right" | "hidden";
 export type SizePreset = "slide" | "single-column" | "double-column" | "custom";
 export type TopAxis = "none" | "fa" | "frequency";
+/** The figure's font family: Computer Modern Sans or Serif (LaTeX's own look). */
+export type FigureFont = "sans" | "serif";
 /** y axis: g_aγγ itself, |E/N − c_γ|, or |g_γ| = |E/N − c_γ|/2 (model lines horizontal in the last two). */
 export type YView = "coupling" | "normalized" | "g-gamma";
 
@@ -36,14 +38,41 @@ export type ModelSource =
       forbidden?: string[];
       /** The scalar whose PQ charge the solver set to 1. */
       normalize?: string;
-    };
+    }
+  | { kind: "ensemble"; settings: Record<string, unknown> }
+  | { kind: "scan" };
+
+/**
+ * What a model draws: one E/N ("line"), every E/N in [min, max] ("interval"), the region between the lines of
+ * discrete E/N values ("between"), or a set of discrete E/N values with multiplicities ("set").
+ */
+export type ModelKind = "line" | "interval" | "between" | "set";
+/** One discrete member of a model set or a between-lines band: an exact E/N ("-64/3") and how many models share it. */
+export interface ModelMember {
+  eOverN: string;
+  count: number;
+  /** Domain-wall number of these models, when known ("6"). */
+  nDW?: string;
+}
+/** How a model set is drawn: its lines, the band between its extreme lines, or the central band holding `setShare`. */
+export type SetDraw = "lines" | "extremes" | "central";
 
 export interface Model {
   id: string;
   label: string;
-  /** E/N interval as exact rational or decimal strings ("8/3", "0.5"); min = max for a model line. */
+  kind: ModelKind;
+  /**
+   * Smallest and largest E/N of the model as exact rational or decimal strings ("8/3", "0.5"): min = max for a
+   * line, the ends for an interval, the extreme members for "between" and "set".
+   */
   eOverNMin: string;
   eOverNMax: string;
+  /** "between" and "set": the discrete E/N values, sorted by value (count 1 each for "between"); [] otherwise. */
+  members: ModelMember[];
+  /** "set" only: drawn as its lines, as the band between its extreme lines, or as the central band. */
+  setDraw: SetDraw;
+  /** "set" with setDraw "central": share of the models the band holds, 0 < share ≤ 1. */
+  setShare: number;
   source: ModelSource;
   colour: string;
   lineStyle: LineStyle;
@@ -96,6 +125,8 @@ export interface Figure {
   legend: LegendPlace;
   /** Base font size in pt at the physical size. */
   fontPt: number;
+  /** Added in version 1 without a bump: files and links without it read as "sans". */
+  font: FigureFont;
   title: string;
 }
 

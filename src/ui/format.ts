@@ -1,11 +1,10 @@
 // Display helpers shared by the panels: typographic minus, SU(3) names with overbars, fermion summaries,
 // numbers with SI prefixes and in scientific notation.
 import type { FermionInput, RationalInput } from "../physics/anomaly-types";
+import { minusSigns as minus } from "../plot/format";
 
-/** Text with ASCII hyphen-minus signs turned into U+2212. */
-export function minus(text: string): string {
-  return text.replace(/(^|[\s(,=[{])-/g, "$1\u2212");
-}
+/** Text with ASCII hyphen-minus signs turned into U+2212 (the plot core's function, shared with the CLI). */
+export { minus };
 
 /** "3bar" → "3̄", "15'bar" → "15̄′" for display (the parser accepts both spellings). */
 export function colourDisplay(name: string): string {

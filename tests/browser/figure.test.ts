@@ -70,7 +70,9 @@ describe("the demo figure", () => {
     const texts = await entries.evaluateAll((els) => els.map((e) => e.getAttribute("data-legend-entry") ?? ""));
     expect(texts.some((t) => t.includes("E/N = 8/3"))).toBe(true);
     expect(texts.filter((t) => t.includes("(invented)"))).toHaveLength(4);
-    expect(texts.some((t) => t.includes("cancellation"))).toBe(true);
+    // The heavy-quark window is the region between the 5/3 and 44/3 lines: it says so and does not cancel.
+    expect(texts.some((t) => t.includes("between lines 5/3 | 44/3"))).toBe(true);
+    expect(texts.some((t) => t.includes("cancellation"))).toBe(false);
     expect(await page.locator('[data-testid="plot"] path[data-model-id]').count()).toBeGreaterThanOrEqual(3);
     expect(await page.locator('[data-testid="plot"] path[data-curve-id]').count()).toBeGreaterThanOrEqual(4);
     // Decade labels with real superscripts: "10" then a raised "−7" in a tspan.
@@ -111,6 +113,29 @@ describe("the demo figure", () => {
     }
     expect(checked).toBe(pts.length);
     await page.screenshot({ path: "/tmp/axband-added-8-3.png" });
+    expect(watched.consoleErrors).toEqual([]);
+    await context.close();
+  });
+});
+
+describe("the heavy-quark window (Di Luzio, Mescia, Nardi, PRL 118 (2017) 031801)", () => {
+  test("has a lower edge above the plot bottom, on the E/N = 5/3 line (within 0.5 px)", async () => {
+    const { context, page, watched } = await open();
+    const band = page.locator('[data-testid="plot"] path[data-model-kind="between"]');
+    expect(await band.count()).toBe(1);
+    expect(await band.getAttribute("data-cancels")).toBe("false");
+    const pts = pathPoints((await band.getAttribute("d")) ?? "");
+    const f = await frameOf(page);
+    const bottom = f.box.y + f.box.h;
+    // The polygon runs upper-left, upper-right, lower-right, lower-left; its lower-right corner is inside the plot.
+    const right = pts.filter(([x]) => Math.abs(x - (f.box.x + f.box.w)) < 0.01);
+    expect(right.length).toBeGreaterThanOrEqual(2);
+    const yLow = Math.max(...right.map(([, y]) => y));
+    expect(yLow).toBeLessThan(bottom - 20);
+    const [ly0, ly1] = f.y.map(Math.log10);
+    const g = gAgg(f.mass[1], rationalToNumber("5/3"), { ref: "2019" });
+    const yLine = bottom - ((Math.log10(g) - ly0) / (ly1 - ly0)) * f.box.h;
+    expect(Math.abs(yLow - yLine)).toBeLessThan(0.5);
     expect(watched.consoleErrors).toEqual([]);
     await context.close();
   });

@@ -3,9 +3,10 @@
 import { describe, expect, it } from "vitest";
 import { existsSync, readdirSync, readFileSync } from "node:fs";
 import { join } from "node:path";
-import { parseArgs } from "../../src/cli/args";
+import { parseArgs, USAGE } from "../../src/cli/args";
 import { fitRanges } from "../../src/cli/fit-ranges";
-import { pickFallbackFont, pngPixelSize } from "../../src/cli/png";
+import { pngPixelSize, renderPng } from "../../src/cli/png";
+import { FIGURE_FONT_CSS } from "../../src/plot/scene";
 import { writeAllOrNothing } from "../../src/cli/write-atomic";
 import { undrawablePointNotes } from "../../src/cli/inputs";
 import { smallProject, tempDir } from "./fixtures";
@@ -34,19 +35,23 @@ describe("parseArgs", () => {
     expect(o.inputs[0].kind).toBe("svg");
   });
 
-  it("gives each CSV file the --role before it; files before the first --role take the first one", () => {
+  it("gives each CSV file the --role before it; files before any --role are exclusions", () => {
     const o = ok(["a.csv", "--role", "projection", "b.csv", "c.txt", "--role", "region", "d.dat", "-o", "x.svg"]);
     expect(o.inputs.map((f) => [f.path, f.kind, f.role])).toEqual([
-      ["a.csv", "csv", "projection"],
+      ["a.csv", "csv", "exclusion"],
       ["b.csv", "csv", "projection"],
       ["c.txt", "csv", "projection"],
       ["d.dat", "csv", "region"],
     ]);
-    expect(ok(["a.csv", "b.csv", "--role", "region", "-o", "x.svg"]).inputs.map((f) => f.role)).toEqual([
-      "region",
-      "region",
-    ]);
+    // A --role after the last file must not reach back to earlier files (issue 16); it is refused, not dropped.
+    expect(err(["a.csv", "b.csv", "--role", "region", "-o", "x.svg"])).toMatch(/--role region .*no CSV file/);
     expect(ok(["a.csv", "-o", "x.svg"]).inputs[0].role).toBe("exclusion");
+  });
+
+  it("says in --help that --role applies to the files after it", () => {
+    expect(USAGE).toMatch(/files after it/);
+    expect(USAGE).toMatch(/before any --role are exclusions/);
+    expect(USAGE).not.toMatch(/take the first one given/);
   });
 
   it("collects repeated --model values and reads ranges", () => {
@@ -130,14 +135,14 @@ describe("PNG sizing and fonts", () => {
     expect(pngPixelSize(17.8 / 2.54, 10.68 / 2.54, 300).widthPx).toBe(2102);
   });
 
-  it("prefers an Arial-metric face, then DejaVu Sans, then says none was found", () => {
-    expect(pickFallbackFont((p) => p.includes("DejaVuSans.ttf")).family).toBe("DejaVu Sans");
-    expect(pickFallbackFont((p) => p.includes("LiberationSans-Regular") || p.includes("DejaVuSans.ttf")).family).toBe(
-      "Liberation Sans",
-    );
-    const none = pickFallbackFont(() => false);
-    expect(none.family).toBeUndefined();
-    expect(none.note).toMatch(/fonts-liberation/);
+  it("draws text with the figure font's own files (no system font needed): serif and sans differ", () => {
+    const svg = (family: string) =>
+      `<svg xmlns="http://www.w3.org/2000/svg" width="200" height="40" viewBox="0 0 200 40"><text x="4" y="30" font-size="24" font-family="${family}">Rag 10 μeV</text></svg>`;
+    const sans = renderPng(svg(FIGURE_FONT_CSS.sans), 200, 96, "sans");
+    const serif = renderPng(svg(FIGURE_FONT_CSS.serif), 200, 96, "serif");
+    const blank = renderPng(svg(FIGURE_FONT_CSS.sans).replace(/>Rag 10 μeV</, "><"), 200, 96, "sans");
+    expect(Buffer.from(sans).equals(Buffer.from(blank))).toBe(false);
+    expect(Buffer.from(sans).equals(Buffer.from(serif))).toBe(false);
   });
 });
 

@@ -97,6 +97,40 @@ describe("main", () => {
     expect((await run([csv, "--overlap", join(dir, "o.txt")])).status).toBe(2);
   });
 
+  it("writes negative E/N with the minus sign U+2212 in legend, model CSV and overlap text, as the app does", async () => {
+    // U+2212 MINUS SIGN, the Unicode Standard's Mathematical Operators block; U+002D is the hyphen-minus.
+    const dir = tempDir();
+    const csv = join(dir, "a.csv");
+    writeFileSync(csv, "1e-6,1e-15\n1e-5,1e-15\n");
+    const svg = join(dir, "f.svg");
+    const models = join(dir, "models.csv");
+    const md = join(dir, "overlap.md");
+    const r = await run([
+      csv,
+      "--model",
+      "-10/3",
+      "--model=-1..-1/3",
+      "-o",
+      svg,
+      "--models-csv",
+      models,
+      "--overlap",
+      md,
+    ]);
+    expect(r.err).toBe("");
+    expect(r.status).toBe(0);
+    const shown = texts(parseXml(readFileSync(svg, "utf8"))).join("\n");
+    expect(shown).toContain("E/N = \u221210/3");
+    expect(shown).toContain("E/N = \u22121..\u22121/3");
+    expect(shown).not.toMatch(/E\/N = -|\.\.-/);
+    const modelCsv = readFileSync(models, "utf8");
+    expect(modelCsv).toContain("# model: E/N = \u221210/3");
+    expect(modelCsv).toContain("# model: E/N = \u22121..\u22121/3");
+    const overlap = readFileSync(md, "utf8");
+    expect(overlap).toContain("E/N = \u221210/3");
+    expect(overlap).not.toMatch(/E\/N = -/);
+  });
+
   it("exits 2 without writing when an output directory does not exist", async () => {
     const dir = tempDir();
     const p = projectIn(dir);

@@ -71,11 +71,23 @@ const source: fc.Arbitrary<Model["source"]> = fc.oneof(
   }),
 );
 
+/** Members of a between-lines band or model set: distinct values, sorted, as a valid project holds them. */
+const members = fc
+  .uniqueArray(fc.tuple(rational, fc.integer({ min: 1, max: 5000 })), {
+    minLength: 1,
+    maxLength: 6,
+    selector: (t) => t[0].v,
+  })
+  .map((list) => list.sort((x, y) => x[0].v - y[0].v));
+
 const model: fc.Arbitrary<Omit<Model, "id">> = fc
   .record({
     a: rational,
     b: rational,
-    line: fc.boolean(),
+    kind: fc.constantFrom("line", "interval", "between", "set") as fc.Arbitrary<Model["kind"]>,
+    members,
+    setDraw: fc.constantFrom("lines", "extremes", "central") as fc.Arbitrary<Model["setDraw"]>,
+    setShare: fc.double({ min: 0.01, max: 1, noNaN: true }),
     label: text(30),
     source,
     colour,
@@ -84,9 +96,13 @@ const model: fc.Arbitrary<Omit<Model, "id">> = fc
     visible: fc.boolean(),
     sigmas: fc.double({ min: 0, max: 10, noNaN: true }),
   })
-  .map(({ a, b, line, ...rest }) => {
-    const [lo, hi] = line ? [a, a] : a.v <= b.v ? [a, b] : [b, a];
-    return { ...rest, eOverNMin: lo.s, eOverNMax: hi.s };
+  .map(({ a, b, kind, members: list, ...rest }) => {
+    if (kind === "between" || kind === "set") {
+      const ms = list.map(([r, n]) => ({ eOverN: r.s, count: kind === "between" ? 1 : n }));
+      return { ...rest, kind, members: ms, eOverNMin: ms[0].eOverN, eOverNMax: ms[ms.length - 1].eOverN };
+    }
+    const [lo, hi] = kind === "line" ? [a, a] : a.v <= b.v ? [a, b] : [b, a];
+    return { ...rest, kind, members: [], eOverNMin: lo.s, eOverNMax: hi.s };
   });
 
 /** Curve data: full-precision doubles, or values with few digits (the link's decimal delta form). */
@@ -154,6 +170,7 @@ const figure: fc.Arbitrary<Figure> = fc.record({
     "hidden",
   ) as fc.Arbitrary<Figure["legend"]>,
   fontPt: fc.double({ min: 4, max: 72, noNaN: true }),
+  font: fc.constantFrom("sans", "serif") as fc.Arbitrary<Figure["font"]>,
   title: text(40),
 });
 
@@ -177,7 +194,7 @@ const project: fc.Arbitrary<Project> = fc
     figure,
   })
   .map(({ models, curves, ...rest }) => ({
-    version: 1 as const,
+    version: 2 as const,
     ...rest,
     models: models.map(([i, m]) => ({ id: i, ...m })),
     curves: curves.map(([i, c]) => ({ id: i, ...c })),

@@ -8,8 +8,12 @@ function model(id: string, label: string, min: string, max = min, extra: Partial
   return {
     id,
     label,
+    kind: min === max ? "line" : "interval",
     eOverNMin: min,
     eOverNMax: max,
+    members: [],
+    setDraw: "extremes",
+    setShare: 0.68,
     source: { kind: "typed" },
     colour: "#1f6f8b",
     lineStyle: "solid",
@@ -22,7 +26,7 @@ function model(id: string, label: string, min: string, max = min, extra: Partial
 
 function project(models: Model[], massRangeEv: [number, number] = [1e-6, 1e-3]): Project {
   return {
-    version: 1,
+    version: 2,
     name: "test",
     physics: { ref: "2019", custom: { cGamma: 1.92, cGammaSigma: 0.04, kMuEv: 5.691, kMuEvSigma: 0.051, label: "x" } },
     models,
@@ -38,6 +42,7 @@ function project(models: Model[], massRangeEv: [number, number] = [1e-6, 1e-3]):
       grid: false,
       legend: "top-left",
       fontPt: 8,
+      font: "sans",
       title: "",
     },
   };
@@ -107,6 +112,23 @@ describe("modelCsvBlocks", () => {
     for (const [m, , lo, hi] of rows(blocks[3].text)) {
       expect(Math.abs(lo / pdgG(m, 1) - 1)).toBeLessThan(0.03);
       expect(Math.abs(hi / pdgG(m, 0) - 1)).toBeLessThan(0.03);
+    }
+  });
+
+  it("between lines 5/3 | 44/3 (PRL 118 (2017) 031801) has the 5/3 line as g_low, never 0", () => {
+    const between = model("w", "window", "5/3", "44/3", {
+      kind: "between",
+      members: [
+        { eOverN: "5/3", count: 1 },
+        { eOverN: "44/3", count: 1 },
+      ],
+    });
+    const text = modelCsvBlocks(project([between])).blocks[0].text;
+    expect(text).toContain("# E/N lines = 5/3 | 44/3 (between lines 5/3 | 44/3)");
+    for (const [m, , lo, hi] of rows(text)) {
+      expect(lo).toBeGreaterThan(0);
+      expect(Math.abs(lo / pdgG(m, 5 / 3) - 1)).toBeLessThan(0.03);
+      expect(Math.abs(hi / pdgG(m, 44 / 3) - 1)).toBeLessThan(0.03);
     }
   });
 

@@ -25,10 +25,10 @@ describe("projectToFile", () => {
     const obj = JSON.parse(text) as Record<string, unknown> & { curves: { massEv: number[] }[] };
     expect(Object.keys(obj).slice(0, 2)).toEqual(["format", "version"]);
     expect(obj.format).toBe(PROJECT_FILE_FORMAT);
-    expect(obj.version).toBe(1);
+    expect(obj.version).toBe(2);
     expect(obj.curves[0].massEv).toEqual(Array.from(p.curves[0].massEv));
     // Indented, and long number arrays wrapped at 10 numbers per line.
-    expect(text).toMatch(/^\{\n {2}"format": "axband-project",\n {2}"version": 1,\n/);
+    expect(text).toMatch(/^\{\n {2}"format": "axband-project",\n {2}"version": 2,\n/);
     const numberLines = text.split("\n").filter((l) => /^\s+[-0-9.e]+(, [-0-9.e+]+)*,?$/.test(l));
     expect(numberLines.length).toBeGreaterThan(100);
     for (const l of numberLines) expect(l.split(",").filter((x) => x.trim() !== "").length).toBeLessThanOrEqual(10);
@@ -55,7 +55,7 @@ describe("projectFromFile", () => {
     ['{"format": "axband-project"}', /no valid version number/],
     [
       '{"format": "axband-project", "version": 9, "models": "whatever"}',
-      /newer version of axband \(format v9\); this version reads files up to format v1/,
+      /newer version of axband \(format v9\); this version reads files up to format v2/,
     ],
     ['{"format": "axband-project", "version": 1, "models": 3}', /could not be opened: "models" must be a list/],
   ])("refuses %j with a message", (text, message) => {

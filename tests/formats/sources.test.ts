@@ -206,10 +206,11 @@ describe("sourcesToBibtex", () => {
     expect(bibtexFieldText(free.fields.note)).toBe("Our own reanalysis, 100% invented; see {notes} & tables_#2");
   });
 
-  test("fields from memory are flagged in a note until checked", () => {
+  test("no field of the exported BibTeX says 'from memory' or 'unchecked' (it would print in a bibliography)", () => {
     const bib = sourcesToBibtex(projectSources(project()));
+    expect(bib).not.toMatch(/from memory|unchecked/i);
     const gv = parseBibtex(bib).entries.find((e) => e.key === "Gorghetto2019")!;
-    expect(gv.fields.note).toBe("fields journal, volume, pages, year from memory, unchecked");
+    expect(gv.fields.note).toBeUndefined();
     const codata = parseBibtex(bib).entries.find((e) => e.key === "CODATA2018")!;
     expect(codata.fields.note).toBeUndefined();
   });

@@ -13,6 +13,7 @@ import {
   gGamma,
   massFromFa,
   massFromFrequency,
+  REF_2016,
 } from "../../src/physics";
 
 // Numbers typed in from the sources, independent of src/physics/constants.ts.
@@ -35,6 +36,14 @@ function gReference(massEv: number, eOverN: number, k: number, cGamma: number): 
 function relClose(a: number, b: number, rel = 1e-12): void {
   expect(Math.abs(a - b)).toBeLessThanOrEqual(rel * Math.max(Math.abs(a), Math.abs(b)));
 }
+
+describe("2016 reference: σ_K from the two errors of K", () => {
+  test("σ_K = √(0.06² + 0.04²) = 0.072 (Grilli di Cortona et al., JHEP 01 (2016) 034: K = 5.70(6)(4))", () => {
+    // By hand: 0.0036 + 0.0016 = 0.0052, √0.0052 = 0.07211 → 0.072 at the errors' precision.
+    expect(REF_2016.kMuEvSigma).toBeCloseTo(0.072, 6);
+    expect(Math.abs(REF_2016.kMuEvSigma - Math.hypot(0.06, 0.04))).toBeLessThan(5e-4);
+  });
+});
 
 describe("constants", () => {
   test("α against CODATA 2018 (α = 7.2973525693(11)×10⁻³, α⁻¹ = 137.035999084(21))", () => {

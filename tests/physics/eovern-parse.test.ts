@@ -94,3 +94,28 @@ describe("rationalToNumber", () => {
     for (const bad of ["abc", "1/0", "", "1/2/3", "0x10"]) expect(rationalToNumber(bad)).toBeNaN();
   });
 });
+
+describe("between lines (a | b)", () => {
+  // The window of Di Luzio, Mescia, Nardi, PRL 118 (2017) 031801: the region between the 5/3 and 44/3 lines.
+  test('"44/3 | 5/3" gives the sorted lines 5/3, 44/3 with their values', () => {
+    const r = parseEOverN("44/3 | 5/3");
+    expect(r).toEqual({
+      ok: true,
+      min: "5/3",
+      max: "44/3",
+      minValue: 5 / 3,
+      maxValue: 44 / 3,
+      isBand: true,
+      lines: ["5/3", "44/3"],
+    });
+  });
+  test("three values, a Unicode minus and a repeated value (counted once)", () => {
+    const r = parseEOverN("\u22121/3 | 2 | 44/3 | 2");
+    expect(r.ok && r.lines).toEqual(["-1/3", "2", "44/3"]);
+  });
+  test.each(["5/3 |", "| 2", "2 | 2", "5/3 | x", "1 | 1/0"])("%j is refused with a message", (bad) => {
+    const r = parseEOverN(bad);
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.error).toMatch(/^E\/N lines: /);
+  });
+});

@@ -11,7 +11,11 @@ export const rng = mulberry32;
 export function model(partial: Partial<Model> & Pick<Model, "id" | "eOverNMin">): Model {
   return {
     label: `E/N = ${partial.eOverNMin}`,
+    kind: partial.eOverNMax === undefined || partial.eOverNMax === partial.eOverNMin ? "line" : "interval",
     eOverNMax: partial.eOverNMin,
+    members: [],
+    setDraw: "extremes",
+    setShare: 0.68,
     source: { kind: "typed" },
     colour: "#117A8B",
     lineStyle: "solid",
@@ -88,7 +92,7 @@ export function fixtureCurves(): Curve[] {
 
 export function fixtureProject(): Project {
   return {
-    version: 1,
+    version: 2,
     name: "plot fixture",
     physics: {
       ref: "2019",
@@ -97,14 +101,30 @@ export function fixtureProject(): Project {
     models: [
       model({ id: "ksvz", label: "KSVZ-type, E/N = 0", eOverNMin: "0", colour: "#117A8B" }),
       model({ id: "dfsz", label: "DFSZ-type, E/N = 8/3", eOverNMin: "8/3", colour: "#1F4E8C", lineStyle: "dashed" }),
+      // The window of Di Luzio, Mescia, Nardi, PRL 118 (2017) 031801: the region between two lines.
       model({
         id: "window",
-        label: "Window, E/N = 5/3..44/3",
+        label: "Window",
+        kind: "between",
         eOverNMin: "5/3",
         eOverNMax: "44/3",
+        members: [
+          { eOverN: "5/3", count: 1 },
+          { eOverN: "44/3", count: 1 },
+        ],
         colour: "#2A9D8F",
         fillOpacity: 0.2,
         sigmas: 1,
+      }),
+      // An interval holding c_γ = 1.92: it reaches g = 0 (cancellation).
+      model({
+        id: "interval",
+        label: "Interval, E/N = 1..3",
+        kind: "interval",
+        eOverNMin: "1",
+        eOverNMax: "3",
+        colour: "#4062BB",
+        fillOpacity: 0.15,
       }),
     ],
     curves: fixtureCurves(),
@@ -119,6 +139,7 @@ export function fixtureProject(): Project {
       grid: true,
       legend: "bottom-right",
       fontPt: 12,
+      font: "sans",
       title: "",
     },
   };

@@ -107,21 +107,20 @@ describe("factories", () => {
 describe("defaultProject (the demo)", () => {
   const p = defaultProject();
 
-  it("has a KSVZ-type line E/N = 0, a DFSZ-type line E/N = 8/3 and the window 5/3..44/3", () => {
+  it("has a KSVZ-type line E/N = 0, a DFSZ-type line E/N = 8/3 and the window between 5/3 and 44/3", () => {
     // KSVZ with a heavy quark (3,1,0): E/N = 0; DFSZ-I: E/N = 8/3; preferred window of single heavy-quark models
-    // 5/3 ≤ E/N ≤ 44/3: Di Luzio, Mescia, Nardi, PRL 118 (2017) 031801; Di Luzio, Giannotti, Nardi, Visinelli,
-    // Phys. Rept. 870 (2020) 1.
+    // between the E/N = 5/3 and E/N = 44/3 lines: Di Luzio, Mescia, Nardi, PRL 118 (2017) 031801; Di Luzio,
+    // Giannotti, Nardi, Visinelli, Phys. Rept. 870 (2020) 1.
     const values = p.models.map((m) => [rationalValue(m.eOverNMin), rationalValue(m.eOverNMax)]);
     expect(values).toEqual([
       [0, 0],
       [8 / 3, 8 / 3],
       [5 / 3, 44 / 3],
     ]);
-    expect(p.models.map((m) => m.label)).toEqual([
-      "KSVZ-type, E/N = 0",
-      "DFSZ-type, E/N = 8/3",
-      "Heavy-quark models, E/N = 5/3..44/3",
-    ]);
+    expect(p.models.map((m) => m.label)).toEqual(["KSVZ-type, E/N = 0", "DFSZ-type, E/N = 8/3", "Heavy-quark window"]);
+    expect(p.models.map((m) => m.kind)).toEqual(["line", "line", "between"]);
+    expect(p.models[2].members.map((m) => m.eOverN)).toEqual(["5/3", "44/3"]);
+    expect(p.models.some((m) => /cancel/i.test(m.label))).toBe(false);
     for (const m of p.models) expect(MODEL_COLOURS).toContain(m.colour);
   });
 

@@ -25,7 +25,7 @@ import type { LegendPlace, Project } from "../../src/project/types";
 
 const GOLDEN = join(import.meta.dirname, "golden", "v1");
 
-/** The compact JSON object inside a link (format v3 keeps the v1 compact object). */
+/** The compact JSON object inside a link (formats v2 and v3 keep the v1 figure keys). */
 function compactOf(link: string): { f?: Record<string, unknown> } {
   const bytes = base64UrlDecode(linkPayload(link));
   if (!bytes) throw new Error("not base64url");

@@ -125,7 +125,7 @@ describe("calculator comforts", () => {
     render(<ModelsPanel />);
     await user.click(screen.getByRole("button", { name: "Anomaly calculator…" }));
     const dialog = screen.getByRole("dialog");
-    await user.click(within(dialog).getByTestId("calc-add-model"));
+    await user.click(await within(dialog).findByTestId("calc-add-model"));
     const [m] = useAxband.getState().project.models;
     await user.selectOptions(within(dialog).getByRole("combobox", { name: "Catalogue entry to load" }), "ksvz-r1");
     await user.click(within(dialog).getByRole("button", { name: "Load" }));

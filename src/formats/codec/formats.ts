@@ -4,6 +4,7 @@ import { crc32 } from "../crc32";
 import { base64UrlEncode } from "./base64url";
 import type { CompactLayout } from "./compact";
 import { COMPACT_V1 } from "./v1";
+import { COMPACT_V2 } from "./v2";
 
 /**
  * One link format: fragment = "v<version>." + base64url without padding (RFC 4648 §5) of raw DEFLATE
@@ -19,11 +20,14 @@ interface LinkFormat {
  * Every link format ever written, by version. A format is frozen once written: a change gets a new version
  * here, and old links keep decoding with their own entry. To add one: write its compact layout (a copy of the
  * newest with the new fields and their base values, as ./v1.ts), add `N: { layout, checked: true }`, and set
- * LINK_FORMAT_VERSION to N. (Version 2, unchecked, is the layout with model kinds of project schema version 2.)
+ * LINK_FORMAT_VERSION to N. Version 2 (unchecked) is the layout with the model kinds of project schema
+ * version 2; version 3 is that layout checked. Links of version 3 written before the model kinds (v1's
+ * object) read the same through it: every key v2 adds has a base value equal to what v1 drew.
  */
 export const LINK_FORMATS: Readonly<Record<number, LinkFormat>> = {
   1: { layout: COMPACT_V1, checked: false },
-  3: { layout: COMPACT_V1, checked: true },
+  2: { layout: COMPACT_V2, checked: false },
+  3: { layout: COMPACT_V2, checked: true },
 };
 
 /** Link format this build writes ("v3." prefix). */

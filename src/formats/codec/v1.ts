@@ -77,6 +77,8 @@ const FIGURE_V1: Codec = {
     { full: "grid", short: "g", base: () => true },
     { full: "legend", short: "l", base: () => "bottom-right" },
     { full: "fontPt", short: "s", base: () => 12 },
+    // Joined without a bump: links written before it decode to "sans", the look they had.
+    { full: "font", short: "f", base: () => "sans" },
     { full: "title", short: "n", base: () => "" },
   ],
 };
@@ -134,47 +136,65 @@ const CURVE_V1: Codec = {
   ],
 };
 
-function toCompactV1(project: Project, includeCurves: boolean): Rec {
+/** The codecs of one link format's objects. */
+export interface LayoutCodecs {
+  physics: Codec;
+  figure: Codec;
+  model: Codec;
+  curve: Codec;
+}
+
+export const CODECS_V1: LayoutCodecs = { physics: PHYSICS_V1, figure: FIGURE_V1, model: MODEL_V1, curve: CURVE_V1 };
+
+function toCompactWith(k: LayoutCodecs, project: Project, includeCurves: boolean): Rec {
   const target: PersistTarget = { kind: "link", includeCurves };
   const out: Rec = {};
   if (goesTo(PROJECT_STATE.name, target) && project.name !== "Untitled") out.n = project.name;
   if (goesTo(PROJECT_STATE.physics, target)) {
-    const p = encodeWith(PHYSICS_V1, project.physics as unknown as Rec, 0, target);
+    const p = encodeWith(k.physics, project.physics as unknown as Rec, 0, target);
     if (Object.keys(p).length > 0) out.p = p;
   }
   if (goesTo(PROJECT_STATE.figure, target)) {
-    const f = encodeWith(FIGURE_V1, project.figure as unknown as Rec, 0, target);
+    const f = encodeWith(k.figure, project.figure as unknown as Rec, 0, target);
     if (Object.keys(f).length > 0) out.f = f;
   }
   if (goesTo(PROJECT_STATE.models, target) && project.models.length > 0) {
-    out.m = project.models.map((m, i) => encodeWith(MODEL_V1, m as unknown as Rec, i, target));
+    out.m = project.models.map((m, i) => encodeWith(k.model, m as unknown as Rec, i, target));
   }
   if (goesTo(PROJECT_STATE.curves, target)) {
     if (project.curves.length > 0)
-      out.c = project.curves.map((c, i) => encodeWith(CURVE_V1, c as unknown as Rec, i, target));
+      out.c = project.curves.map((c, i) => encodeWith(k.curve, c as unknown as Rec, i, target));
   } else if (project.curves.length > 0) {
     out.o = project.curves.length;
   }
   return out;
 }
 
-function fromCompactV1(compact: unknown): { project: Rec; omitted: number } {
+function fromCompactWith(k: LayoutCodecs, version: number, compact: unknown): { project: Rec; omitted: number } {
   if (!isPlainObject(compact)) throw new ShapeError("the content is not an object");
   const models = listOf(compact, "m", "models");
   const curves = listOf(compact, "c", "curves");
   const omitted = Object.hasOwn(compact, "o") ? compact.o : 0;
   return {
     project: {
-      version: 1,
+      version,
       name: Object.hasOwn(compact, "n") ? compact.n : "Untitled",
-      physics: decodeWith(PHYSICS_V1, compact.p, 0, "the constants"),
-      figure: decodeWith(FIGURE_V1, compact.f, 0, "the figure"),
-      models: models.map((m, i) => decodeWith(MODEL_V1, m, i, `model ${i + 1}`)),
-      curves: curves.map((c, i) => decodeWith(CURVE_V1, c, i, `curve ${i + 1}`)),
+      physics: decodeWith(k.physics, compact.p, 0, "the constants"),
+      figure: decodeWith(k.figure, compact.f, 0, "the figure"),
+      models: models.map((m, i) => decodeWith(k.model, m, i, `model ${i + 1}`)),
+      curves: curves.map((c, i) => decodeWith(k.curve, c, i, `curve ${i + 1}`)),
     },
     omitted: typeof omitted === "number" && Number.isInteger(omitted) && omitted >= 0 ? omitted : 0,
   };
 }
 
+/** The compact layout of a format built from v1's object shape with its own codecs; reads to schema `version`. */
+export function layoutWith(codecs: LayoutCodecs, version: number): CompactLayout {
+  return {
+    toCompact: (project, includeCurves) => toCompactWith(codecs, project, includeCurves),
+    fromCompact: (compact) => fromCompactWith(codecs, version, compact),
+  };
+}
+
 /** The v1 compact layout: written by format v1 (and by every later format that keeps the same object). */
-export const COMPACT_V1: CompactLayout = { toCompact: toCompactV1, fromCompact: fromCompactV1 };
+export const COMPACT_V1: CompactLayout = layoutWith(CODECS_V1, 1);

@@ -15,6 +15,7 @@ export const read = { err: ERR_NONE, end: 0 };
  * + or − (also U+2212); the decimal point is `,` when `comma`, else `.` (never both: a file has one mark). The shift is applied to the decimal
  * exponent, so `1.5` μeV becomes exactly the double nearest 1.5e-6. Callers check what follows read.end.
  */
+// Hot loop: long on purpose (one pass per character, called for every cell of every file).
 export function readNumber(t: string, s: number, e: number, shift: number, comma: boolean): number {
   read.err = ERR_NONE;
   read.end = s;

@@ -256,6 +256,7 @@ export class Parser implements CurveParser {
     }
   }
 
+  // Hot loop: long on purpose (one pass over each data line, cells split and read without substrings).
   private dataLine(t: string, s: number, e: number, row: number): void {
     if (e > s && t.charCodeAt(e - 1) === 13) e--;
     const delim = this.delim;

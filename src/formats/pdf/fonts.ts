@@ -1,7 +1,9 @@
 // The figure's font families and the open-licence font files behind them (npm packages `computer-modern`,
 // SIL OFL 1.1, and `dejavu-fonts-ttf`, Bitstream Vera licence): LaTeX's own look for papers.
 
-export type FigureFontFamily = "sans" | "serif";
+import type { FigureFont } from "../../project/types";
+
+export type FigureFontFamily = FigureFont;
 
 /** Package paths of each family's faces; the fallback covers glyphs CMU lacks (≤, ≥, ≈, ∞, superscript signs). */
 export const FIGURE_FONT_FILES: Record<
@@ -20,10 +22,4 @@ export const FIGURE_FONT_FILES: Record<
     bold: "computer-modern/fonts/cmu-serif-700-roman.ttf",
     fallback: "dejavu-fonts-ttf/ttf/DejaVuSerif.ttf",
   },
-};
-
-/** The CSS font-family list of each family in SVG and on screen (the named font first, then close system fonts). */
-export const FIGURE_FONT_CSS: Record<FigureFontFamily, string> = {
-  sans: "'CMU Sans Serif', Helvetica, Arial, 'Liberation Sans', 'DejaVu Sans', sans-serif",
-  serif: "'CMU Serif', 'Latin Modern Roman', 'Times New Roman', 'Liberation Serif', 'DejaVu Serif', serif",
 };

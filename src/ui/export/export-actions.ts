@@ -58,10 +58,15 @@ export async function savePng(pngScale: PngScale): Promise<void> {
   try {
     const project = useAxband.getState().project;
     const target = pngFigure(project, pngScale);
-    const png = setPngDpi(await rasteriseSvg(target.svg, target.widthPx, target.heightPx), target.dpi);
+    const { fontFaceCss, withFontFaces } = await import("./png-fonts");
+    // Without the font files (offline, blocked) the PNG is still drawn, in the closest system font, and says so.
+    const css = await fontFaceCss(target.svg, project.figure.font).catch(() => null);
+    const svg = css ? withFontFaces(target.svg, css) : target.svg;
+    const png = setPngDpi(await rasteriseSvg(svg, target.widthPx, target.heightPx), target.dpi);
     const name = `${figureBaseName(project)}${pngScale === "1x" ? "" : `@${pngScale}`}.png`;
     downloadBlob(name, new Blob([png as BlobPart], { type: "image/png" }));
-    push("status", `Saved ${name} (${target.widthPx} × ${target.heightPx} px, ${Math.round(target.dpi)} dpi).`);
+    const note = css ? "" : " The figure font could not be loaded, so the text uses a system font.";
+    push("status", `Saved ${name} (${target.widthPx} × ${target.heightPx} px, ${Math.round(target.dpi)} dpi).${note}`);
   } catch (e) {
     push("alert", `The PNG could not be made: ${e instanceof Error ? e.message : String(e)}`);
   }
@@ -72,7 +77,7 @@ export async function savePdf(): Promise<void> {
   try {
     const project = useAxband.getState().project;
     const { projectPdf } = await import("./pdf");
-    const r = await projectPdf(project, "sans");
+    const r = await projectPdf(project, project.figure.font);
     const name = `${figureBaseName(project)}.pdf`;
     downloadBlob(name, new Blob([r.pdf as BlobPart], { type: "application/pdf" }));
     const size = presetOf(project.figure);

@@ -5,6 +5,9 @@ import { useCallback, useLayoutEffect, useRef, type ReactNode, type Ref, type SV
 import type { Scene } from "../../plot/scene-types";
 import { fmt } from "../../plot/svg";
 import { createSceneDom, type SceneDom } from "./scene-dom";
+// The figure fonts' webfonts (OFL), so the screen shows the face the SVG names and the PNG and PDF embed.
+import "computer-modern/cmu-sans-serif.css";
+import "computer-modern/cmu-serif.css";
 
 export interface SceneSvgProps extends Omit<SVGProps<SVGSVGElement>, "viewBox" | "ref"> {
   /** Screen-only overlays drawn above the scene (never part of the export), inside <g data-overlay>. */

@@ -4,7 +4,7 @@
 // Why not React elements per node: rendering and reconciling ~150 scene nodes each frame took about as long
 // again as building the scene (bench/redraw.mjs, measured before this renderer replaced them); here an
 // unchanged node costs a few string comparisons.
-import type { Scene, SceneNode } from "../../plot/scene-types";
+import type { Scene, SceneLayer, SceneNode } from "../../plot/scene-types";
 import { fmt, layerAttributes, nodeAttributes, sceneIds, textPlacement, textSpans } from "../../plot/svg";
 
 const SVG_NS = "http://www.w3.org/2000/svg";
@@ -87,6 +87,91 @@ function tagOf(node: SceneNode): string {
   return node.kind === "path" ? "path" : node.kind === "rect" ? "rect" : "text";
 }
 
+/** The slot for `key`, new when there is none or its element has another tag than `node` needs. */
+function slotFor(ls: LayerSlot, key: string, node: SceneNode): Slot {
+  let slot = ls.slots.get(key);
+  const tag = tagOf(node);
+  if (slot && slot.tag !== tag) {
+    (slot.wrap ?? slot.el).remove();
+    slot = undefined;
+  }
+  if (!slot) {
+    const el = document.createElementNS(SVG_NS, tag);
+    const wrap = node.kind === "text" ? document.createElementNS(SVG_NS, "g") : null;
+    wrap?.appendChild(el);
+    slot = { el, attrs: new Map(), text: "", wrap, placement: "", tag, node: null, id: undefined };
+    ls.slots.set(key, slot);
+  }
+  return slot;
+}
+
+/** Writes what changed between the node last drawn in `slot` and `node`. */
+function drawNode(slot: Slot, node: SceneNode, id: string | undefined): void {
+  // Legend entries, unchanged labels and models: most of a frame's nodes equal the last ones, and an
+  // equal node needs nothing written (only its place among the layer's children is checked by the caller).
+  const same = slot.id === id && slot.node !== null && sameValue(slot.node, node);
+  slot.node = node;
+  slot.id = id;
+  if (same) return;
+  const attrs = nodeAttributes(node);
+  syncAttributes(slot.el, slot.attrs, id ? [["id", id], ...attrs] : attrs);
+  if (node.kind !== "text" || !slot.wrap) return;
+  const placement = textPlacement(node);
+  if (placement !== slot.placement) {
+    slot.wrap.setAttribute("transform", placement);
+    slot.placement = placement;
+  }
+  const spans = textSpans(node);
+  const text = JSON.stringify(spans);
+  if (text !== slot.text) {
+    fillText(slot.el, spans);
+    slot.text = text;
+  }
+}
+
+/** Brings a layer's children in line with its nodes, in order. */
+function drawLayerNodes(ls: LayerSlot, layer: SceneLayer, nodeIds: (string | undefined)[]): void {
+  // Keyed by the written id (unique in a scene, and the same string object from frame to frame); a node
+  // whose kind changed under the same id gets a new element.
+  const keys = layer.nodes.map((_, i) => nodeIds[i] ?? `#${i}`);
+  // Elements of nodes that are gone go first, so the ones that stay keep their place (a moved element is
+  // laid out again, which for text is the dear part of a frame).
+  const keep = new Set(keys);
+  for (const [key, slot] of ls.slots) {
+    if (keep.has(key)) continue;
+    (slot.wrap ?? slot.el).remove();
+    ls.slots.delete(key);
+  }
+  let prev: Element | null = null;
+  layer.nodes.forEach((node, i) => {
+    const slot = slotFor(ls, keys[i], node);
+    drawNode(slot, node, nodeIds[i]);
+    const outer = slot.wrap ?? slot.el;
+    const want: ChildNode | null = prev ? prev.nextSibling : ls.g.firstChild;
+    if (want !== outer) ls.g.insertBefore(outer, want);
+    prev = outer;
+  });
+}
+
+/** Removes the layers no longer in `scene`. */
+function dropGoneLayers(layers: Map<string, LayerSlot>, scene: Scene): void {
+  const layerKeys = new Set<string>(scene.layers.map((l) => l.id));
+  for (const [key, ls] of layers) {
+    if (layerKeys.has(key)) continue;
+    ls.g.remove();
+    layers.delete(key);
+  }
+}
+
+function layerSlotFor(layers: Map<string, LayerSlot>, id: string): LayerSlot {
+  let ls = layers.get(id);
+  if (!ls) {
+    ls = { g: document.createElementNS(SVG_NS, "g"), attrs: new Map(), slots: new Map() };
+    layers.set(id, ls);
+  }
+  return ls;
+}
+
 export interface SceneDom {
   /** Brings the elements in line with `scene` (the same markup writeSvg would write for it). */
   update(scene: Scene): void;
@@ -122,78 +207,14 @@ export function createSceneDom(svg: SVGSVGElement, before: Node | null, idPrefix
       ["width", fmt(plot.w)],
       ["height", fmt(plot.h)],
     ]);
-    const layerKeys = new Set<string>(scene.layers.map((l) => l.id));
-    for (const [key, ls] of layers) {
-      if (layerKeys.has(key)) continue;
-      ls.g.remove();
-      layers.delete(key);
-    }
+    dropGoneLayers(layers, scene);
     let prevLayer: Element = defs;
     scene.layers.forEach((layer, li) => {
-      let ls = layers.get(layer.id);
-      if (!ls) {
-        ls = { g: document.createElementNS(SVG_NS, "g"), attrs: new Map(), slots: new Map() };
-        layers.set(layer.id, ls);
-      }
+      const ls = layerSlotFor(layers, layer.id);
       syncAttributes(ls.g, ls.attrs, layerAttributes(layer, ids.layers[li], ids.clip));
       if (prevLayer.nextSibling !== ls.g) svg.insertBefore(ls.g, prevLayer.nextSibling);
       prevLayer = ls.g;
-      const nodeIds = ids.nodes[li];
-      // Keyed by the written id (unique in a scene, and the same string object from frame to frame); a node
-      // whose kind changed under the same id gets a new element below.
-      const keys = layer.nodes.map((_, i) => nodeIds[i] ?? `#${i}`);
-      // Elements of nodes that are gone go first, so the ones that stay keep their place (a moved element is
-      // laid out again, which for text is the dear part of a frame).
-      const keep = new Set(keys);
-      for (const [key, slot] of ls.slots) {
-        if (keep.has(key)) continue;
-        (slot.wrap ?? slot.el).remove();
-        ls.slots.delete(key);
-      }
-      let prev: Element | null = null;
-      layer.nodes.forEach((node, i) => {
-        const key = keys[i];
-        let slot = ls.slots.get(key);
-        const tag = tagOf(node);
-        if (slot && slot.tag !== tag) {
-          (slot.wrap ?? slot.el).remove();
-          slot = undefined;
-        }
-        if (!slot) {
-          const el = document.createElementNS(SVG_NS, tag);
-          const wrap = node.kind === "text" ? document.createElementNS(SVG_NS, "g") : null;
-          wrap?.appendChild(el);
-          slot = { el, attrs: new Map(), text: "", wrap, placement: "", tag, node: null, id: undefined };
-          ls.slots.set(key, slot);
-        }
-        const id = nodeIds[i];
-        // Legend entries, unchanged labels and models: most of a frame's nodes equal the last ones, and an
-        // equal node needs nothing written (only its place among the layer's children is checked below).
-        const same = slot.id === id && slot.node !== null && sameValue(slot.node, node);
-        slot.node = node;
-        slot.id = id;
-        if (!same) {
-          const attrs = nodeAttributes(node);
-          syncAttributes(slot.el, slot.attrs, id ? [["id", id], ...attrs] : attrs);
-        }
-        if (!same && node.kind === "text" && slot.wrap) {
-          const placement = textPlacement(node);
-          if (placement !== slot.placement) {
-            slot.wrap.setAttribute("transform", placement);
-            slot.placement = placement;
-          }
-          const spans = textSpans(node);
-          const text = JSON.stringify(spans);
-          if (text !== slot.text) {
-            fillText(slot.el, spans);
-            slot.text = text;
-          }
-        }
-        const outer = slot.wrap ?? slot.el;
-        const want: ChildNode | null = prev ? prev.nextSibling : ls.g.firstChild;
-        if (want !== outer) ls.g.insertBefore(outer, want);
-        prev = outer;
-      });
+      drawLayerNodes(ls, layer, ids.nodes[li]);
     });
   };
 

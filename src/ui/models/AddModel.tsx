@@ -1,8 +1,10 @@
-// The typed-E/N field: one value adds a model line, an interval ("5/3..44/3") a model band; the label
-// keeps the text as typed. Bad input gets a message next to the field and adds nothing.
+// The typed-E/N field: one value adds a model line, an interval ("5/3..44/3") a band of every E/N in it, lines
+// ("5/3 | 44/3") the band between them; the label keeps the text as typed. Bad input gets a message next to
+// the field and adds nothing.
 import { useId, useState, type FormEvent } from "react";
 import { parseEOverN } from "../../physics/eovern-parse";
 import { useAxband } from "../store";
+import { EOVERN_HINT, kindFieldsOf } from "./model-kind-text";
 
 export function AddModel() {
   const addModel = useAxband((s) => s.addModel);
@@ -10,6 +12,7 @@ export function AddModel() {
   const [error, setError] = useState<string | null>(null);
   const inputId = useId();
   const errorId = useId();
+  const hintId = useId();
 
   const submit = (e: FormEvent) => {
     e.preventDefault();
@@ -19,9 +22,8 @@ export function AddModel() {
       return;
     }
     addModel({
-      eOverNMin: r.min,
-      eOverNMax: r.max,
-      label: `E/N = ${text.trim().replace(/\s+/g, " ")}`,
+      ...kindFieldsOf(r),
+      label: `E/N = ${r.lines ? r.lines.join(" | ") : text.trim().replace(/\s+/g, " ")}`,
       source: { kind: "typed" },
     });
     setText("");
@@ -31,7 +33,7 @@ export function AddModel() {
   return (
     <form className="add-model" onSubmit={submit} noValidate>
       <label htmlFor={inputId} className="field-label">
-        E/N value or interval
+        E/N value, interval or lines
       </label>
       <div className="inline-row">
         <input
@@ -41,10 +43,10 @@ export function AddModel() {
           inputMode="text"
           autoComplete="off"
           spellCheck={false}
-          placeholder="8/3  or  5/3..44/3"
+          placeholder="8/3   5/3..44/3   5/3 | 44/3"
           value={text}
           aria-invalid={error ? true : undefined}
-          aria-describedby={error ? errorId : undefined}
+          aria-describedby={error ? `${errorId} ${hintId}` : hintId}
           onChange={(e) => {
             setText(e.target.value);
             if (error) setError(null);
@@ -54,6 +56,9 @@ export function AddModel() {
           Add model
         </button>
       </div>
+      <p id={hintId} className="field-hint" data-testid="model-eovern-hint">
+        {EOVERN_HINT}
+      </p>
       {error ? (
         <p id={errorId} className="field-error" data-testid="model-eovern-error">
           {error}

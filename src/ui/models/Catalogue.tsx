@@ -1,6 +1,8 @@
 // The catalogue picker: ready-made KSVZ-type and DFSZ-type models with their E/N and N_DW (computed by the
-// anomaly calculator from the field content, which each row shows when opened); "Add" makes a model.
-import { useMemo } from "react";
+// anomaly calculator from the field content, which each row shows when opened); "Add" makes a model, and the
+// ticked entries together make one model set ("Add as model set").
+import { useMemo, useState } from "react";
+import { newModelSet } from "../../project/defaults";
 import { catalogue, type CatalogueEntry } from "../../physics/catalogue";
 import { tryAnomaly } from "../../physics/anomaly";
 import { toFractionString } from "../../physics/rational";
@@ -41,6 +43,36 @@ const GROUPS: { id: CatalogueEntry["group"]; title: string }[] = [
 export function Catalogue() {
   const rows = useCatalogueRows();
   const addModel = useAxband((s) => s.addModel);
+  const [picked, setPicked] = useState<ReadonlySet<string>>(new Set());
+  const toggle = (id: string, on: boolean) =>
+    setPicked((old) => {
+      const next = new Set(old);
+      if (on) next.add(id);
+      else next.delete(id);
+      return next;
+    });
+  const chosen = rows.filter((r) => picked.has(r.entry.id) && r.eOverN);
+  const addSet = () => {
+    if (chosen.length === 0) return;
+    const members = chosen.map((r) => ({
+      eOverN: r.eOverN as string,
+      count: 1,
+      ...(r.domainWall ? { nDW: r.domainWall } : {}),
+    }));
+    // The source names the entries while they fit the id limit of a project (100 characters).
+    let ids = "";
+    for (const r of chosen) if (ids.length + r.entry.id.length + 1 <= 100) ids += (ids ? "," : "") + r.entry.id;
+    const {
+      id: _id,
+      colour: _colour,
+      ...set
+    } = newModelSet(`Catalogue set (${chosen.length} models)`, members, {
+      kind: "catalogue",
+      catalogueId: ids,
+    });
+    addModel(set);
+    setPicked(new Set());
+  };
   const add = (row: CatalogueRow) => {
     if (!row.eOverN) return;
     addModel({
@@ -97,6 +129,14 @@ export function Catalogue() {
                       {r.entry.note ? <p className="note">{r.entry.note}</p> : null}
                     </div>
                   </details>
+                  <input
+                    type="checkbox"
+                    data-testid="catalogue-pick"
+                    aria-label={`Pick ${r.entry.label} for a model set`}
+                    checked={picked.has(r.entry.id)}
+                    disabled={!r.eOverN}
+                    onChange={(e) => toggle(r.entry.id, e.target.checked)}
+                  />
                   <button type="button" onClick={() => add(r)} disabled={!r.eOverN} aria-label={`Add ${r.entry.label}`}>
                     Add
                   </button>
@@ -105,6 +145,11 @@ export function Catalogue() {
           </ul>
         </div>
       ))}
+      <p className="catalogue-set">
+        <button type="button" data-testid="catalogue-add-set" onClick={addSet} disabled={chosen.length === 0}>
+          Add {chosen.length > 0 ? `${chosen.length} picked` : "picked"} as model set
+        </button>
+      </p>
     </details>
   );
 }

@@ -1,14 +1,16 @@
-// The list of models: per row label, E/N, colour, line style, visibility, theory spread (k σ), order and
-// removal; a band whose interval reaches c_γ says that its coupling cancels (g = 0).
+// The list of models: per row label, E/N (with its kind), colour, line style, visibility, theory spread (k σ),
+// order and removal; a model set's drawing (lines, between extremes, central share); a band whose interval
+// reaches c_γ says that its coupling cancels (g = 0).
 import { useCallback, useId, useState } from "react";
 import { useShallow } from "zustand/react/shallow";
-import { bandCancels } from "../../physics/coupling";
 import { parseEOverN } from "../../physics/eovern-parse";
-import { eOverNValue, physicsOptsOf } from "../../plot/physics-settings";
-import type { LineStyle, Model } from "../../project/types";
+import { modelShape, shapeCancels, shapeNormalizedRange } from "../../plot/model-shape";
+import { constantsOf } from "../../plot/physics-settings";
+import type { LineStyle, Model, SetDraw } from "../../project/types";
 import { selectModelIds, selectPhysics, useAxband, type AxbandState } from "../store";
 import { useCalculatorRequest } from "./calculator-draft";
 import { minus } from "../format";
+import { EOVERN_HINT, eOverNText, kindFieldsOf } from "./model-kind-text";
 
 const LINE_STYLES: { value: LineStyle; label: string }[] = [
   { value: "solid", label: "solid" },
@@ -17,14 +19,24 @@ const LINE_STYLES: { value: LineStyle; label: string }[] = [
   { value: "dashdot", label: "dash-dot" },
 ];
 
-/** E/N of a model as text: "8/3" for a line, "5/3..44/3" for a band. */
-export function eOverNText(m: Pick<Model, "eOverNMin" | "eOverNMax">): string {
-  return m.eOverNMin === m.eOverNMax ? m.eOverNMin : `${m.eOverNMin}..${m.eOverNMax}`;
-}
+const KIND_TEXT: Record<Model["kind"], string> = {
+  line: "value (model line)",
+  interval: "interval (every E/N in it)",
+  between: "lines (the region between them)",
+  set: "model set",
+};
+
+const SET_DRAWS: { value: SetDraw; label: string }[] = [
+  { value: "lines", label: "lines" },
+  { value: "extremes", label: "between extremes" },
+  { value: "central", label: "central share" },
+];
 
 function sourceText(m: Model): string {
   if (m.source.kind === "catalogue") return `from the catalogue (${m.source.catalogueId})`;
   if (m.source.kind === "calculator") return "from the anomaly calculator";
+  if (m.source.kind === "ensemble") return "from a heavy-quark ensemble";
+  if (m.source.kind === "scan") return "from a charge scan";
   return "typed";
 }
 
@@ -42,15 +54,15 @@ function EOverNField({ model }: { model: Model }) {
     }
     setError(null);
     setDraft(null);
-    if (r.min !== model.eOverNMin || r.max !== model.eOverNMax)
-      updateModel(model.id, { eOverNMin: r.min, eOverNMax: r.max });
+    const fields = kindFieldsOf(r);
+    if (eOverNText(fields) !== eOverNText(model) || fields.kind !== model.kind) updateModel(model.id, fields);
   };
   return (
     <span className="model-eovern-edit">
       <input
         type="text"
         aria-label={`E/N of ${model.label}`}
-        title={`E/N ${model.eOverNMin === model.eOverNMax ? "value (model line)" : "interval (model band)"}, ${sourceText(model)}`}
+        title={`E/N ${KIND_TEXT[model.kind]}, ${sourceText(model)}. ${EOVERN_HINT}`}
         value={draft ?? eOverNText(model)}
         spellCheck={false}
         aria-invalid={error ? true : undefined}
@@ -69,6 +81,50 @@ function EOverNField({ model }: { model: Model }) {
         <span id={errorId} className="field-error">
           {error} (kept {minus(eOverNText(model))})
         </span>
+      ) : null}
+    </span>
+  );
+}
+
+/** A model set: how many models, and how it is drawn (its lines, between its extremes, or a central share). */
+function SetField({ model }: { model: Model }) {
+  const updateModel = useAxband((s) => s.updateModel);
+  const total = model.members.reduce((n, m) => n + m.count, 0);
+  const [shareDraft, setShareDraft] = useState<string | null>(null);
+  return (
+    <span className="set-draw" data-testid="set-draw">
+      <span className="set-size" title={`E/N from ${model.eOverNMin} to ${model.eOverNMax}, ${sourceText(model)}`}>
+        {total} models, {model.members.length} E/N values
+      </span>
+      <select
+        aria-label={`Drawing of ${model.label}`}
+        value={model.setDraw}
+        onChange={(e) => updateModel(model.id, { setDraw: e.target.value as SetDraw })}
+      >
+        {SET_DRAWS.map((d) => (
+          <option key={d.value} value={d.value}>
+            {d.label}
+          </option>
+        ))}
+      </select>
+      {model.setDraw === "central" ? (
+        <input
+          type="number"
+          min={1}
+          max={100}
+          step={1}
+          className="narrow"
+          aria-label={`Share of the models in the central band of ${model.label}, in per cent`}
+          value={shareDraft ?? String(Math.round(model.setShare * 1000) / 10)}
+          onChange={(e) => {
+            // The text stays as typed while it is half-entered; a valid share goes to the model at once.
+            setShareDraft(e.target.value);
+            const pc = Number(e.target.value);
+            if (e.target.value.trim() !== "" && Number.isFinite(pc) && pc > 0 && pc <= 100)
+              updateModel(model.id, { setShare: pc / 100 }, { coalesceKey: `model:${model.id}:share` });
+          }}
+          onBlur={() => setShareDraft(null)}
+        />
       ) : null}
     </span>
   );
@@ -129,14 +185,19 @@ function ModelRow({ id, index, count }: { id: string; index: number; count: numb
     })),
   );
   if (!model) return null;
-  const lo = eOverNValue(model.eOverNMin);
-  const hi = eOverNValue(model.eOverNMax);
+  const constants = constantsOf(physics);
+  const shape = modelShape(model, constants);
+  // An interval holding c_γ cancels; lines (between, set) reach g = 0 only where one of them does.
   const cancels =
-    Number.isFinite(lo) &&
-    Number.isFinite(hi) &&
-    bandCancels(lo, hi, { ...physicsOptsOf(physics), sigmas: model.sigmas });
+    shape !== null &&
+    shape.kind === "interval" &&
+    (shapeCancels(shape, constants) || shapeNormalizedRange(shape, constants, model.sigmas)[0] === 0);
   return (
-    <li className={`model-row${model.visible ? "" : " hidden-model"}`} data-model-id={model.id}>
+    <li
+      className={`model-row${model.visible ? "" : " hidden-model"}`}
+      data-model-id={model.id}
+      data-model-kind={model.kind}
+    >
       <div className="model-row-main">
         <input
           type="color"
@@ -204,7 +265,7 @@ function ModelRow({ id, index, count }: { id: string; index: number; count: numb
         </span>
       </div>
       <div className="model-row-detail">
-        <EOverNField model={model} />
+        {model.kind === "set" ? <SetField model={model} /> : <EOverNField model={model} />}
         <select
           aria-label={`Line style of ${model.label}`}
           value={model.lineStyle}

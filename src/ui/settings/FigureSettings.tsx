@@ -1,7 +1,7 @@
 // The Figure settings section: size preset, typed axis ranges (validated; the previous range is kept on a
-// bad entry), y view, top axis, grid, legend place, font size and title.
+// bad entry), y view, top axis, grid, legend place, font family and size, and title.
 import { useId, useState } from "react";
-import type { Figure, LegendPlace, SizePreset, TopAxis, YView } from "../../project/types";
+import type { Figure, FigureFont, LegendPlace, SizePreset, TopAxis, YView } from "../../project/types";
 import { useShallow } from "zustand/react/shallow";
 import { useAxband, type AxbandState } from "../store";
 
@@ -15,6 +15,11 @@ const Y_VIEWS: { value: YView; label: string }[] = [
   { value: "coupling", label: "g_aγγ [GeV⁻¹]" },
   { value: "normalized", label: "|E/N − c_γ| (normalized)" },
   { value: "g-gamma", label: "|g_γ| = |E/N − c_γ|/2" },
+];
+// Computer Modern Unicode, LaTeX's default look, so a figure's text matches the paper's.
+const FONTS: { value: FigureFont; label: string }[] = [
+  { value: "sans", label: "Computer Modern Sans" },
+  { value: "serif", label: "Computer Modern Serif" },
 ];
 const TOP_AXES: { value: TopAxis; label: string }[] = [
   { value: "none", label: "none" },
@@ -136,16 +141,18 @@ function Select<T extends string>({
   value,
   options,
   onChange,
+  testId,
 }: {
   label: string;
   value: T;
   options: { value: T; label: string }[];
   onChange: (v: T) => void;
+  testId?: string;
 }) {
   return (
     <label className="setting">
       <span className="field-label">{label}</span>
-      <select value={value} onChange={(e) => onChange(e.target.value as T)}>
+      <select value={value} data-testid={testId} onChange={(e) => onChange(e.target.value as T)}>
         {options.map((o) => (
           <option key={o.value} value={o.value}>
             {o.label}
@@ -267,6 +274,13 @@ export function FigureSettings() {
       <Select label="y axis" value={figure.yView} options={Y_VIEWS} onChange={(v) => set({ yView: v })} />
       <Select label="Top axis" value={figure.topAxis} options={TOP_AXES} onChange={(v) => set({ topAxis: v })} />
       <Select label="Legend" value={figure.legend} options={LEGEND} onChange={(v) => set({ legend: v })} />
+      <Select
+        label="Font"
+        value={figure.font}
+        options={FONTS}
+        testId="figure-font"
+        onChange={(v) => set({ font: v })}
+      />
       <div className="inline-row">
         <NumberSetting
           label="Font (pt)"

@@ -18,7 +18,7 @@
 //   replaceProject(project, message?) (undoable; link/file open) · resetProject(project) (clears history)
 //   undo() · redo() · canUndo() · canRedo()
 //   pushMessage(kind: "alert" | "status", text) → id · dismissMessage(id) · setHighlight(h | null) · setHover(p | null)
-// Use: `const models = useAxband(selectModels)`; outside React: `useAxband.getState().addModel({ eOverNMin: "8/3" })`.
+// Use: `const curves = useAxband(selectCurves)`; outside React: `useAxband.getState().addModel({ eOverNMin: "8/3" })`.
 // For derived arrays select with useShallow (zustand/react/shallow). Fresh stores for tests: createAxbandStore().
 import { create } from "zustand";
 import { createStore } from "zustand/vanilla";
@@ -35,7 +35,6 @@ import { createPreparationSlice, watchCurvePreparation } from "./preparation";
 import type { AxbandMiddleware, AxbandState } from "./types";
 
 export * from "./types";
-export { defaultView } from "./view";
 
 function combined(initial: Project): StateCreator<AxbandState, [], AxbandMiddleware> {
   return subscribeWithSelector((...a) => ({
@@ -65,9 +64,7 @@ watchCurvePreparation(useAxband);
 
 // Selectors: return store references only (no new objects), so they are safe without useShallow.
 export const selectProject = (s: AxbandState) => s.project;
-export const selectModels = (s: AxbandState) => s.project.models;
 export const selectCurves = (s: AxbandState) => s.project.curves;
-export const selectFigure = (s: AxbandState) => s.project.figure;
 export const selectPhysics = (s: AxbandState) => s.project.physics;
 export const selectYView = (s: AxbandState) => s.project.figure.yView;
 export const selectMessages = (s: AxbandState) => s.ui.messages;
@@ -76,7 +73,6 @@ export const selectHover = (s: AxbandState) => s.ui.hover;
 export const selectPreparing = (s: AxbandState) => s.preparing;
 export const selectCanUndo = (s: AxbandState) => s.history.past.length > 0;
 export const selectCanRedo = (s: AxbandState) => s.history.future.length > 0;
-export const selectModel = (id: string) => (s: AxbandState) => s.project.models.find((m) => m.id === id);
 export const selectCurve = (id: string) => (s: AxbandState) => s.project.curves.find((c) => c.id === id);
 /** Ids in order (select with useShallow): a list re-renders on add/remove/reorder, not on each edit. */
 export const selectModelIds = (s: AxbandState) => s.project.models.map((m) => m.id);
