@@ -44,5 +44,5 @@ function readText(blob: Blob): Promise<string> {
 /** Puts a project into the app store with an empty history and no messages. */
 export function useProject(project: Project): void {
   useAxband.getState().resetProject(project);
-  useAxband.setState({ ui: { messages: [], highlight: null, hover: null } });
+  useAxband.setState({ ui: { messages: [], tabConflict: null, highlight: null, hover: null } });
 }

@@ -22,5 +22,5 @@ export function blankProject(): Project {
 export function resetStore(project: Project = blankProject()): void {
   const s = useAxband.getState();
   s.resetProject(project);
-  useAxband.setState({ ui: { messages: [], highlight: null, hover: null } });
+  useAxband.setState({ ui: { messages: [], tabConflict: null, highlight: null, hover: null } });
 }

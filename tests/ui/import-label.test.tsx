@@ -27,7 +27,7 @@ function Step() {
 beforeEach(() => {
   useImport.getState().cancelAll();
   useAxband.getState().resetProject(emptyProject());
-  useAxband.setState({ ui: { messages: [], highlight: null, hover: null } });
+  useAxband.setState({ ui: { messages: [], tabConflict: null, highlight: null, hover: null } });
 });
 
 async function upload() {

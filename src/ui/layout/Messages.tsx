@@ -28,10 +28,32 @@ function MessageItem({ message }: { message: Message }) {
   );
 }
 
+/** Another tab saved newer work: autosave is paused until the user picks one of the two. */
+function TabConflictItem() {
+  const conflict = useAxband((s) => s.ui.tabConflict);
+  const choose = useAxband((s) => s.chooseTabConflict);
+  if (!conflict) return null;
+  return (
+    <div role="alert" className="message message-alert" data-testid="tab-conflict">
+      <span className="message-text">
+        Another tab saved newer work at {new Date(conflict.savedAt).toLocaleTimeString()}. Changes in this tab are not
+        saved until you choose.
+      </span>
+      <button type="button" disabled={conflict.choice !== null} onClick={() => choose("load")}>
+        Load it
+      </button>
+      <button type="button" disabled={conflict.choice !== null} onClick={() => choose("keep")}>
+        Keep mine and save
+      </button>
+    </div>
+  );
+}
+
 export function Messages() {
   const messages = useAxband(selectMessages);
   return (
     <section className="messages" aria-label="Messages">
+      <TabConflictItem />
       {messages.map((m) => (
         <MessageItem key={m.id} message={m} />
       ))}

@@ -30,7 +30,7 @@ function withTimeout<T>(p: Promise<T>, ms: number): Promise<T | undefined> {
 }
 
 /** The newest saved project text (localStorage or the spare copy) with its revision; null when there is none. */
-async function readNewest(opts: AutosaveOpts): Promise<{ meta: string; rev: Revision } | null> {
+export async function readNewest(opts: AutosaveOpts): Promise<{ meta: string; rev: Revision } | null> {
   const { local, spare } = storesOf(opts);
   let text: string | null;
   try {

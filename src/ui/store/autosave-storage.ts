@@ -3,6 +3,7 @@
 import type { Project } from "../../project/types";
 import { type CurveDataStore, indexedDbCurveStore, indexedDbSpareStore } from "./curve-store";
 import type { SpareStore } from "./autosave-revision";
+import { type TabChannel, browserTabChannel } from "./autosave-tabs";
 
 /** localStorage key of the saved project (without curve data). */
 export const STORAGE_KEY = "axband:project";
@@ -22,6 +23,8 @@ export interface AutosaveOpts {
   spare?: SpareStore | null;
   /** Where a note of unsaved work survives a reload. @default sessionStorage, when `local` is defaulted too */
   session?: SessionStorage | null;
+  /** How tabs hear of each other's saves. @default BroadcastChannel (or storage events), when `local` is defaulted too */
+  channel?: TabChannel | null;
   /** Quiet time after the last change before saving, in ms. @default 300 */
   debounceMs?: number;
 }
@@ -53,6 +56,8 @@ export function storesOf(opts: AutosaveOpts) {
     curves: opts.curves === undefined ? indexedDbCurveStore() : opts.curves,
     spare: opts.spare === undefined ? (opts.curves === undefined ? indexedDbSpareStore() : null) : opts.spare,
     session: opts.session === undefined ? (opts.local === undefined ? session() : null) : opts.session,
+    channel:
+      opts.channel === undefined ? (opts.local === undefined ? browserTabChannel(STORAGE_KEY) : null) : opts.channel,
   };
 }
 

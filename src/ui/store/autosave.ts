@@ -18,7 +18,33 @@ import {
 } from "./autosave-storage";
 import { type Revision, newTabId, newer, splitRevision, withRevision } from "./autosave-revision";
 import { clearLost, noteLost } from "./autosave-lost";
-import { restoredRevisions } from "./autosave-restore";
+import { loadSaved, readNewest, restoredRevisions } from "./autosave-restore";
+
+/**
+ * Replaces the project of `store` with the newest saved one (another tab's; undoable), naming the curves
+ * and models of this tab that it does not have, so that nothing disappears without a word.
+ */
+async function loadNewest(store: StoreApi<AxbandState>, opts: AutosaveOpts) {
+  const newest = await readNewest(opts);
+  const r = newest ? await loadSaved(newest.meta, opts) : null;
+  if (!newest || !r || !r.ok) {
+    store.getState().pushMessage("alert", "The other tab's work could not be read; this tab's project is unchanged.");
+    return null;
+  }
+  const mine = store.getState().project;
+  const curveIds = new Set(r.project.curves.map((c) => c.id));
+  const modelIds = new Set(r.project.models.map((m) => m.id));
+  const gone = [
+    ...mine.curves.filter((c) => !curveIds.has(c.id)).map((c) => `curve "${c.label}"`),
+    ...mine.models.filter((m) => !modelIds.has(m.id)).map((m) => `model "${m.label || `E/N = ${m.eOverNMin}`}"`),
+  ];
+  const note = gone.length > 0 ? ` It does not have ${gone.join(", ")} from this tab.` : "";
+  const repairs = r.repairs.length > 0 ? ` Changes on loading: ${r.repairs.join("; ")}.` : "";
+  store
+    .getState()
+    .replaceProject(r.project, `Loaded the newer work of another tab. Undo returns to this tab's.${note}${repairs}`);
+  return { project: store.getState().project, rev: newest.rev };
+}
 
 /** The revision of the text in localStorage (null when there is none or it cannot be read). */
 function storedRevision(local: KeyValueStorage | null): Revision | null {
@@ -87,10 +113,11 @@ function curveWriter(curves: CurveDataStore | null, problem: () => void) {
  * that fails too a note of what was not saved goes to sessionStorage for the next start.
  */
 export function startAutosave(store: StoreApi<AxbandState>, opts: AutosaveOpts = {}): Autosave {
-  const { local, curves, spare, session } = storesOf(opts);
+  const { local, curves, spare, session, channel } = storesOf(opts);
   const debounceMs = opts.debounceMs ?? 300;
   const tab = newTabId();
   let base: Revision | null = restoredRevisions.get(store) ?? storedRevision(local);
+  let heard: Revision | null = null;
   let told = false;
   let timer: ReturnType<typeof setTimeout> | null = null;
   let lastSaved: Project | null = null;
@@ -104,13 +131,26 @@ export function startAutosave(store: StoreApi<AxbandState>, opts: AutosaveOpts =
   const savedAs = (rev: Revision) => {
     base = newer(base, rev);
     clearLost(session);
+    channel?.post(rev);
+  };
+  /** The newest revision another tab saved that this tab's work does not build on, if any. */
+  const otherNewer = (): Revision | null => {
+    const latest = newer(storedRevision(local), heard);
+    return latest && latest.tab !== tab && latest.seq > (base?.seq ?? 0) ? latest : null;
+  };
+  const conflict = (rev: Revision) => {
+    if (timer !== null) clearTimeout(timer);
+    timer = null;
+    if (!store.getState().ui.tabConflict) store.getState().setTabConflict({ savedAt: rev.at, choice: null });
   };
 
   const save = async (): Promise<void> => {
     timer = null;
     const file = loadedFileModule() ?? (await loadFileModule());
     const project = store.getState().project;
-    if (project === lastSaved) return;
+    if (project === lastSaved || store.getState().ui.tabConflict) return;
+    const other = otherNewer();
+    if (other) return conflict(other);
     lastSaved = project;
     // Curves first, so a saved project never names curves whose data is not stored yet.
     const writes = curveData.write(project);
@@ -140,8 +180,31 @@ export function startAutosave(store: StoreApi<AxbandState>, opts: AutosaveOpts =
     if (timer !== null) clearTimeout(timer);
     timer = setTimeout(() => void save(), debounceMs);
   };
+  const resolve = async (choice: "load" | "keep") => {
+    if (choice === "keep") {
+      // The other tab may have deleted curve data this tab still shows: write every curve again.
+      base = newer(storedRevision(local), heard);
+      curveData.reset(null);
+      lastSaved = null;
+      store.getState().setTabConflict(null);
+      return save();
+    }
+    const loaded = await loadNewest(store, opts);
+    store.getState().setTabConflict(null);
+    if (!loaded) return;
+    base = newer(base, loaded.rev);
+    curveData.reset(loaded.project);
+    lastSaved = loaded.project;
+  };
   const unsubscribe = store.subscribe((s, prev) => {
     if (s.project !== prev.project) schedule();
+    const choice = s.ui.tabConflict?.choice;
+    if (choice && choice !== prev.ui.tabConflict?.choice) void resolve(choice);
+  });
+  const unlisten = channel?.listen((rev) => {
+    heard = newer(heard, rev);
+    const other = otherNewer();
+    if (other) conflict(other);
   });
   const onPageHide = () => void save();
   const target = globalThis as {
@@ -159,6 +222,7 @@ export function startAutosave(store: StoreApi<AxbandState>, opts: AutosaveOpts =
       if (timer !== null) clearTimeout(timer);
       timer = null;
       unsubscribe();
+      unlisten?.();
       target.removeEventListener?.("pagehide", onPageHide);
     },
   };

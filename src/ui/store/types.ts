@@ -40,8 +40,16 @@ export interface HoverPoint {
   y: number;
 }
 
+/** Another tab saved newer work: autosave waits for the user's choice (`choice` is set by the buttons). */
+export interface TabConflict {
+  /** When the other tab saved, ms since 1970. */
+  savedAt: number;
+  choice: "load" | "keep" | null;
+}
+
 export interface UiState {
   messages: Message[];
+  tabConflict: TabConflict | null;
   highlight: Highlight | null;
   hover: HoverPoint | null;
 }
@@ -97,6 +105,10 @@ export interface UiSlice {
   /** Shows a message; returns its id. */
   pushMessage: (kind: Message["kind"], text: string) => string;
   dismissMessage: (id: string) => void;
+  /** Set by autosave when another tab saved newer work; cleared when the choice has been carried out. */
+  setTabConflict: (c: TabConflict | null) => void;
+  /** The user's answer to a tab conflict: load the other tab's work, or keep this tab's and save it. */
+  chooseTabConflict: (choice: "load" | "keep") => void;
   setHighlight: (h: Highlight | null) => void;
   setHover: (h: HoverPoint | null) => void;
 }

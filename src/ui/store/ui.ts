@@ -4,7 +4,7 @@ import type { SliceCreator, UiSlice } from "./types";
 let messageCounter = 0;
 
 export const createUiSlice: SliceCreator<UiSlice> = (set, get) => ({
-  ui: { messages: [], highlight: null, hover: null },
+  ui: { messages: [], tabConflict: null, highlight: null, hover: null },
   pushMessage(kind, text) {
     messageCounter += 1;
     const id = `msg-${messageCounter}`;
@@ -15,6 +15,13 @@ export const createUiSlice: SliceCreator<UiSlice> = (set, get) => ({
     const { ui } = get();
     if (!ui.messages.some((m) => m.id === id)) return;
     set({ ui: { ...ui, messages: ui.messages.filter((m) => m.id !== id) } });
+  },
+  setTabConflict(tabConflict) {
+    set({ ui: { ...get().ui, tabConflict } });
+  },
+  chooseTabConflict(choice) {
+    const { ui } = get();
+    if (ui.tabConflict && !ui.tabConflict.choice) set({ ui: { ...ui, tabConflict: { ...ui.tabConflict, choice } } });
   },
   setHighlight(highlight) {
     set({ ui: { ...get().ui, highlight } });
