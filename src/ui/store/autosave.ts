@@ -58,7 +58,7 @@ function storedRevision(local: KeyValueStorage | null): Revision | null {
 
 export { CHUNK_POINTS, chunkKey, joinChunks, splitChunks, type CurveArrays } from "./autosave-chunks";
 export { type CurveDataStore } from "./curve-store";
-export { STORAGE_KEY, STORAGE_PROBLEM, type KeyValueStorage, type SessionStorage } from "./autosave-storage";
+export { STORAGE_KEY, STORAGE_PROBLEM, type KeyValueStorage } from "./autosave-storage";
 export type { Revision, SpareRecord, SpareStore } from "./autosave-revision";
 export { initProject, restoreAutosave } from "./autosave-restore";
 
