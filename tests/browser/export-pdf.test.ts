@@ -9,7 +9,7 @@ import { join } from "node:path";
 import { PDFDocument } from "pdf-lib";
 import type { Browser } from "playwright-core";
 import { launchChromium, watchPage } from "./chromium";
-import { download, exportSvg } from "./export-helpers";
+import { download, exportSvg, openFreshPage } from "./export-helpers";
 
 let browser: Browser;
 let dir: string;
@@ -22,12 +22,7 @@ afterAll(async () => {
   rmSync(dir, { recursive: true, force: true });
 });
 
-async function freshPage() {
-  const context = await browser.newContext({ acceptDownloads: true, viewport: { width: 1400, height: 950 } });
-  const page = await context.newPage();
-  await page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
-  return { page, context };
-}
+const freshPage = () => openFreshPage(browser, inject("baseUrl"));
 
 test("the PDF download is one page and reopens the project", async () => {
   const a = await freshPage();

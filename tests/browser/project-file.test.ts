@@ -7,7 +7,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import type { Browser } from "playwright-core";
 import { launchChromium, watchPage } from "./chromium";
-import { download, exportSvg } from "./export-helpers";
+import { download, exportSvg, openFreshPage } from "./export-helpers";
 
 let browser: Browser;
 let dir: string;
@@ -20,12 +20,7 @@ afterAll(async () => {
   rmSync(dir, { recursive: true, force: true });
 });
 
-async function freshPage() {
-  const context = await browser.newContext({ acceptDownloads: true, viewport: { width: 1400, height: 950 } });
-  const page = await context.newPage();
-  await page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
-  return { page, context };
-}
+const freshPage = () => openFreshPage(browser, inject("baseUrl"));
 
 test("a saved project file and a dropped SVG both reopen the same figure", async () => {
   const a = await freshPage();

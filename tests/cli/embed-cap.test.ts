@@ -3,19 +3,11 @@
 import { describe, expect, it } from "vitest";
 import { readFileSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
-import { main } from "../../src/cli/render";
 import { parseArgs } from "../../src/cli/args";
 import { loadProject } from "../../src/cli/inputs";
 import { AXBAND_PROJECT_NS, exportFigureSvg, extractProjectFromSvg } from "../../src/formats/figure-file";
 import { parseXml } from "./svg-checks";
-import { tempDir } from "./fixtures";
-
-async function run(argv: string[]) {
-  const out: string[] = [];
-  const err: string[] = [];
-  const status = await main(argv, { out: (s) => out.push(s), err: (s) => err.push(s) });
-  return { status, out: out.join("\n"), err: err.join("\n") };
-}
+import { tempDir, runRender as run } from "./fixtures";
 
 describe("render with curve data over the embedding cap", () => {
   it("embeds models and figure only, says so, and matches the in-process export byte for byte", async () => {

@@ -7,6 +7,7 @@ import { join, resolve } from "node:path";
 import { emptyProject, newCurve, newModel } from "../../src/project/defaults";
 import { projectToFile } from "../../src/formats/project-file";
 import type { Project } from "../../src/project/types";
+import { main } from "../../src/cli/render";
 
 export const REPO = resolve(__dirname, "../..");
 
@@ -78,4 +79,12 @@ export function runCli(args: string[]): CliRun {
     timeout: 60_000,
   });
   return { status: r.status, stdout: r.stdout, stderr: r.stderr };
+}
+
+/** Runs the renderer's main() in-process and collects its exit code and messages. */
+export async function runRender(argv: string[]): Promise<{ status: number; out: string; err: string }> {
+  const out: string[] = [];
+  const err: string[] = [];
+  const status = await main(argv, { out: (s) => out.push(s), err: (s) => err.push(s) });
+  return { status, out: out.join("\n"), err: err.join("\n") };
 }

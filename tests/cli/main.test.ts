@@ -3,18 +3,10 @@
 import { describe, expect, it } from "vitest";
 import { existsSync, readFileSync, readdirSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
-import { main } from "../../src/cli/render";
 import { readPngDpi, readPngSize } from "../../src/formats/png-meta";
 import { MODEL_CSV_HEADER } from "../../src/formats/model-csv";
 import { parseXml, texts } from "./svg-checks";
-import { projectFileText, smallProject, tempDir } from "./fixtures";
-
-async function run(argv: string[]) {
-  const out: string[] = [];
-  const err: string[] = [];
-  const status = await main(argv, { out: (s) => out.push(s), err: (s) => err.push(s) });
-  return { status, out: out.join("\n"), err: err.join("\n") };
-}
+import { projectFileText, smallProject, tempDir, runRender as run } from "./fixtures";
 
 function projectIn(dir: string): string {
   const path = join(dir, "p.axband.json");

@@ -4,15 +4,7 @@
 import { chmodSync, mkdirSync, readFileSync, symlinkSync, writeFileSync } from "node:fs";
 import { join, relative } from "node:path";
 import { describe, expect, it } from "vitest";
-import { main } from "../../src/cli/render";
-import { projectFileText, smallProject, tempDir } from "./fixtures";
-
-async function run(argv: string[]) {
-  const out: string[] = [];
-  const err: string[] = [];
-  const status = await main(argv, { out: (s) => out.push(s), err: (s) => err.push(s) });
-  return { status, out: out.join("\n"), err: err.join("\n") };
-}
+import { projectFileText, smallProject, tempDir, runRender as run } from "./fixtures";
 
 function projectIn(dir: string): string {
   const path = join(dir, "p.json");

@@ -3,16 +3,8 @@
 import { readFileSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
-import { main } from "../../src/cli/render";
 import { parseArgs } from "../../src/cli/args";
-import { tempDir } from "./fixtures";
-
-async function run(argv: string[]) {
-  const out: string[] = [];
-  const err: string[] = [];
-  const status = await main(argv, { out: (s) => out.push(s), err: (s) => err.push(s) });
-  return { status, out: out.join("\n"), err: err.join("\n") };
-}
+import { tempDir, runRender as run } from "./fixtures";
 
 describe("render -o FILE.pdf", () => {
   it("writes a PDF that reopens as the same project: its SVG equals the one rendered from the project file", async () => {
