@@ -66,7 +66,8 @@ const SUBSET_TAGS: Record<Face, string> = { regular: "RGL", italic: "ITL", bold:
 /** Lazily embedded faces of one document: a face goes into the PDF only when a text uses it. */
 class FaceSet {
   private embedded = new Map<Face, PDFFont>();
-  private coverage = new Map<Face, { hasGlyphForCodePoint(cp: number): boolean } | null>();
+  // Each face's file is read by fontkit once, for its glyph coverage and its PostScript name alike.
+  private parsed = new Map<Face, ReturnType<typeof fontkit.create> | null>();
   private keys = new Map<PDFFont, PDFName>();
   constructor(
     private doc: PDFDocument,
@@ -86,19 +87,21 @@ class FaceSet {
       // A fixed six-letter subset tag (PDF 32000-1:2008 §9.6.4) instead of pdf-lib's numbered name: readers list
       // the font as a subset, and the same figure gives the same bytes.
       const bytes = this.bytes(f) as Uint8Array;
-      const customName = `AXB${SUBSET_TAGS[f]}+${fontkit.create(bytes).postscriptName ?? "Font"}`;
+      const customName = `AXB${SUBSET_TAGS[f]}+${this.parsedFace(f)?.postscriptName ?? "Font"}`;
       font = await this.doc.embedFont(bytes, { subset: true, customName });
       this.embedded.set(f, font);
     }
     return font;
   }
-  has(face: Face, codePoint: number): boolean {
-    const f = face === "fallback" ? face : this.resolve(face);
-    if (!this.coverage.has(f)) {
+  private parsedFace(f: Face) {
+    if (!this.parsed.has(f)) {
       const bytes = this.bytes(f);
-      this.coverage.set(f, bytes ? fontkit.create(bytes) : null);
+      this.parsed.set(f, bytes ? fontkit.create(bytes) : null);
     }
-    return this.coverage.get(f)?.hasGlyphForCodePoint(codePoint) ?? false;
+    return this.parsed.get(f);
+  }
+  has(face: Face, codePoint: number): boolean {
+    return this.parsedFace(face === "fallback" ? face : this.resolve(face))?.hasGlyphForCodePoint(codePoint) ?? false;
   }
   key(page: PDFPage, font: PDFFont): PDFName {
     let k = this.keys.get(font);
