@@ -77,6 +77,7 @@ const members = fc
     minLength: 1,
     maxLength: 6,
     selector: (t) => t[0].v,
+    comparator: "SameValueZero", // "0" and a rational reading −0 are the same E/N
   })
   .map((list) => list.sort((x, y) => x[0].v - y[0].v));
 
