@@ -77,11 +77,16 @@ describe("autosave", () => {
         return JSON.stringify(meta).includes("5/3..44/3") && figure?.massRangeEv?.join(",") === zoomed;
       })
       .toBe(true);
+    // Curve data goes to IndexedDB after the text, one task per curve: wait for all four demo curves.
+    await expect.poll(async () => (await storedCurveKeys(page)).length, { timeout: 30_000 }).toBeGreaterThanOrEqual(4);
     await page.reload({ waitUntil: "networkidle" });
     await page.locator('[data-testid="plot"] svg').waitFor();
+    // Restored curves join the legend once read back and prepared off the main thread (slow on a busy machine).
+    await expect
+      .poll(async () => (await legendTexts(page)).filter((t) => t.includes("(invented)")).length, { timeout: 30_000 })
+      .toBe(4);
     const texts = await legendTexts(page);
     expect(texts).toContain("E/N = 5/3..44/3 (reaches g = 0: cancellation)");
-    expect(texts.filter((t) => t.includes("(invented)"))).toHaveLength(4);
     expect(await massDomain(page)).toBe(zoomed);
     expect(await page.locator('[data-testid="plot"] path[data-curve-id]').count()).toBeGreaterThanOrEqual(4);
     // A fresh start has no history to undo.
