@@ -101,6 +101,63 @@ describe("bands: area share and E/N at the best point", () => {
   });
 });
 
+describe("band area share over a sloped curve", () => {
+  test("a straight curve rising through the band: share (1 + ln 2)/(4 + 2 ln 2)", () => {
+    // Band E/N ∈ [2.88, 5.76]: in v = ln g − ln m its edges lie ln 2 below and above the E/N = 0 line (|E/N − c_γ|
+    // from 0.96 to 3.84 around 1.92). The curve runs straight from 1 below the lower edge at m = 10⁻⁶ eV to 3 above
+    // the upper edge at 10⁻⁴ eV, so in the parameter t ∈ [0, 1] it leaves the lower edge at t₁ = 1/(ln 4 + 4) and
+    // the upper at t₂ = (1 + ln 4)/(ln 4 + 4); the covered fraction is 1 before t₁ and falls linearly to 0 at t₂:
+    // share = t₁ + (t₂ − t₁)/2 = (1 + ln 2)/(4 + 2 ln 2) (derived by hand from this geometry).
+    const k = gAgg(1, 0, { ref: "2019" });
+    const rel = [-Math.LN2 - 1, Math.LN2 + 3];
+    const massEv = Float64Array.from([Math.exp(X0), Math.exp(X1)]);
+    const gInvGeV = Float64Array.from([0, 1].map((i) => k * massEv[i] * Math.exp(rel[i])));
+    const curve = newCurve({ id: "slope", label: "slope", massEv, gInvGeV });
+    const band = newModel({ id: "b", eOverNMin: "2.88", eOverNMax: "5.76" });
+    const row = only(overlapSummary(project([band], curve)));
+    expect(row.areaShare).toBeCloseTo((1 + Math.LN2) / (4 + 2 * Math.LN2), 12);
+    // Wholly excluded up to t₁, partly up to t₂ (the band's top reaches the curve there).
+    expect(row.shareWhole).toBeCloseTo(1 / (2 * Math.LN2 + 4), 12);
+    expect(row.shareAny).toBeCloseTo((1 + 2 * Math.LN2) / (2 * Math.LN2 + 4), 12);
+  });
+});
+
+describe("band area share inside a region", () => {
+  // Regions drawn in the sheared plane (x = ln m, v measured from the E/N = 0 line), over x ∈ [ln 10⁻⁶, ln 10⁻⁴];
+  // the band E/N ∈ [2.88, 5.76] is the strip |v| ≤ ln 2 there (see above). Shares are area ratios worked by hand.
+  function region(vertices: [number, number][]) {
+    const k = gAgg(1, 0, { ref: "2019" });
+    const xs = vertices.map(([t]) => X0 + t * (X1 - X0));
+    const massEv = Float64Array.from(xs, (x) => Math.exp(x));
+    const gInvGeV = Float64Array.from(vertices, ([, rel], i) => k * massEv[i] * Math.exp(rel));
+    return newCurve({ id: "r", label: "r", role: "region", massEv, gInvGeV });
+  }
+  const band = () => newModel({ id: "b", eOverNMin: "2.88", eOverNMax: "5.76" });
+
+  test("a parallelogram v ∈ [−1, 0.5] over the whole range: share (0.5 + ln 2)/(2 ln 2)", () => {
+    const curve = region([
+      [0, -1],
+      [1, -1],
+      [1, 0.5],
+      [0, 0.5],
+    ]);
+    const row = only(overlapSummary(project([band()], curve)));
+    expect(row.areaShare).toBeCloseTo((0.5 + Math.LN2) / (2 * Math.LN2), 12);
+  });
+
+  test("a triangle from v = −2 along the bottom to v = 3 at the left end: share 3/5", () => {
+    // Its top edge v = 3 − 5t leaves the strip's top at t = (3 − ln 2)/5 and its bottom at (3 + ln 2)/5: covered
+    // area 2 ln 2 · (3 − ln 2)/5 + (2 ln 2)²/10 = 6 ln 2/5 (in units of the range), strip 2 ln 2.
+    const curve = region([
+      [0, -2],
+      [1, -2],
+      [0, 3],
+    ]);
+    const row = only(overlapSummary(project([band()], curve)));
+    expect(row.areaShare).toBeCloseTo(3 / 5, 12);
+  });
+});
+
 describe("model sets (wholly where all members are, partly where some are)", () => {
   function set(members: { eOverN: string; count: number }[]): Model {
     const values = members.map((m) => m.eOverN);

@@ -3,24 +3,30 @@
 import type { Levels } from "./levels";
 import type { PolygonPrep, SortedPrep } from "./prepare";
 
-/** ∫ clamp((hi − v)/(hi − lo), 0, 1) dx over one segment where v runs linearly from a to b. */
+/** The covered fraction clamp((hi − v)/(hi − lo), 0, 1) of the strip at sheared value v. */
+function fraction(v: number, lo: number, hi: number): number {
+  return Math.min(1, Math.max(0, (hi - v) / (hi - lo)));
+}
+
+/**
+ * ∫ clamp((hi − v)/(hi − lo), 0, 1) dx over one segment where v runs linearly from a to b. Runs once per segment
+ * of every curve against every band, so it allocates nothing and settles the common all-or-nothing cases first.
+ */
 function segmentCovered(x0: number, x1: number, a: number, b: number, lo: number, hi: number): number {
-  const f = (v: number): number => Math.min(1, Math.max(0, (hi - v) / (hi - lo)));
-  const ts = [0, 1];
-  if (b !== a) {
-    for (const level of [lo, hi]) {
-      const t = (level - a) / (b - a);
-      if (t > 0 && t < 1) ts.push(t);
-    }
-  }
-  ts.sort((p, q) => p - q);
-  let sum = 0;
-  // Between the breakpoints the clamped fraction is linear, so the trapezoid rule is exact.
-  for (let i = 0; i + 1 < ts.length; i++) {
-    const va = a + ts[i] * (b - a);
-    const vb = a + ts[i + 1] * (b - a);
-    sum += ((f(va) + f(vb)) / 2) * (ts[i + 1] - ts[i]);
-  }
+  if (a <= lo && b <= lo) return x1 - x0;
+  if (a >= hi && b >= hi) return 0;
+  if (a === b) return fraction(a, lo, hi) * (x1 - x0);
+  // The clamped fraction is linear between the parameters where v crosses lo and hi, so the trapezoid rule on
+  // the three pieces [0, t1], [t1, t2], [t2, 1] is exact.
+  const tLo = Math.min(1, Math.max(0, (lo - a) / (b - a)));
+  const tHi = Math.min(1, Math.max(0, (hi - a) / (b - a)));
+  const t1 = Math.min(tLo, tHi);
+  const t2 = Math.max(tLo, tHi);
+  const f0 = fraction(a, lo, hi);
+  const f1 = fraction(a + t1 * (b - a), lo, hi);
+  const f2 = fraction(a + t2 * (b - a), lo, hi);
+  const f3 = fraction(b, lo, hi);
+  const sum = ((f0 + f1) / 2) * t1 + ((f1 + f2) / 2) * (t2 - t1) + ((f2 + f3) / 2) * (1 - t2);
   return sum * (x1 - x0);
 }
 
@@ -36,26 +42,38 @@ export function sortedAreaShare(p: SortedPrep, L: Levels): number | null {
   return covered / width;
 }
 
-/** Keeps the part of a closed polygon with sign·(v − level) ≥ 0 (one Sutherland–Hodgman pass). */
-function clip(xs: number[], vs: number[], level: number, sign: 1 | -1): [number[], number[]] {
-  const ox: number[] = [];
-  const ov: number[] = [];
-  const n = xs.length;
+/** Scratch for the clipped polygons: each clip at most doubles the vertex count; grown, never shrunk. */
+let scratch = new Float64Array(0);
+
+/**
+ * Keeps the part of the closed polygon (x, v)[0..n) with sign·(v − level) ≥ 0 (one Sutherland–Hodgman pass),
+ * written to ox/ov; returns its vertex count.
+ */
+function clip(
+  x: Float64Array,
+  v: Float64Array,
+  n: number,
+  level: number,
+  sign: 1 | -1,
+  ox: Float64Array,
+  ov: Float64Array,
+): number {
+  let m = 0;
   for (let i = 0; i < n; i++) {
-    const j = (i + 1) % n;
-    const inI = sign * (vs[i] - level) >= 0;
-    const inJ = sign * (vs[j] - level) >= 0;
+    const j = i + 1 === n ? 0 : i + 1;
+    const inI = sign * (v[i] - level) >= 0;
+    const inJ = sign * (v[j] - level) >= 0;
     if (inI) {
-      ox.push(xs[i]);
-      ov.push(vs[i]);
+      ox[m] = x[i];
+      ov[m++] = v[i];
     }
     if (inI !== inJ) {
-      const t = (level - vs[i]) / (vs[j] - vs[i]);
-      ox.push(xs[i] + t * (xs[j] - xs[i]));
-      ov.push(level);
+      const t = (level - v[i]) / (v[j] - v[i]);
+      ox[m] = x[i] + t * (x[j] - x[i]);
+      ov[m++] = level;
     }
   }
-  return [ox, ov];
+  return m;
 }
 
 /**
@@ -65,12 +83,19 @@ function clip(xs: number[], vs: number[], level: number, sign: 1 | -1): [number[
  */
 export function polygonAreaShare(p: PolygonPrep, L: Levels): number | null {
   if (!(L.hi > L.lo) || !Number.isFinite(L.lo) || !Number.isFinite(L.hi) || !(p.xMax > p.xMin)) return null;
-  let [xs, vs] = clip(Array.from(p.x), Array.from(p.v), L.lo, 1);
-  [xs, vs] = clip(xs, vs, L.hi, -1);
+  // Two clips: the first at most 2n vertices, the second at most 4n; four arrays side by side in one buffer.
+  const n = p.n;
+  if (scratch.length < 12 * n) scratch = new Float64Array(12 * n);
+  const x1 = scratch.subarray(0, 2 * n);
+  const v1 = scratch.subarray(2 * n, 4 * n);
+  const x2 = scratch.subarray(4 * n, 8 * n);
+  const v2 = scratch.subarray(8 * n, 12 * n);
+  const m1 = clip(p.x, p.v, n, L.lo, 1, x1, v1);
+  const m2 = clip(x1, v1, m1, L.hi, -1, x2, v2);
   let twice = 0;
-  for (let i = 0; i < xs.length; i++) {
-    const j = (i + 1) % xs.length;
-    twice += xs[i] * vs[j] - xs[j] * vs[i];
+  for (let i = 0; i < m2; i++) {
+    const j = i + 1 === m2 ? 0 : i + 1;
+    twice += x2[i] * v2[j] - x2[j] * v2[i];
   }
   return Math.min(1, Math.abs(twice) / 2 / ((L.hi - L.lo) * (p.xMax - p.xMin)));
 }

@@ -6,6 +6,14 @@ import type { Levels } from "./levels";
 import type { PolygonPrep } from "./prepare";
 import { INSET } from "./sorted";
 
+/**
+ * Where the edge (xa, va)–(xb, vb) meets the level c, interpolated from the lower end in v so that the polygon
+ * traced either way round gives the very same number.
+ */
+function crossingX(xa: number, va: number, xb: number, vb: number, c: number): number {
+  return va < vb ? xa + ((c - va) / (vb - va)) * (xb - xa) : xb + ((c - vb) / (va - vb)) * (xa - xb);
+}
+
 /** Masses (ln) where the horizontal line v = c lies inside the polygon (even-odd rule). */
 function insideAlongLevel(p: PolygonPrep, c: number): Flat {
   if (!Number.isFinite(c)) return [];
@@ -15,7 +23,7 @@ function insideAlongLevel(p: PolygonPrep, c: number): Flat {
     const vi = p.v[i];
     const vj = p.v[j];
     // Half-open rule: a vertex exactly on the level counts once, so the crossings always pair up.
-    if (vi > c !== vj > c) xs.push(p.x[i] + ((c - vi) / (vj - vi)) * (p.x[j] - p.x[i]));
+    if (vi > c !== vj > c) xs.push(crossingX(p.x[i], vi, p.x[j], vj, c));
   }
   xs.sort((a, b) => a - b);
   const out: Flat = [];
@@ -30,24 +38,26 @@ function boundaryInBand(p: PolygonPrep, lo: number, hi: number): Flat {
   let curHi = NaN;
   for (let i = 0; i < p.n; i++) {
     const j = i + 1 === p.n ? 0 : i + 1;
-    const vi = p.v[i];
-    const dv = p.v[j] - vi;
+    // Each edge is read from its lower end in v, so the outline traced either way round gives the same pieces.
+    const up = p.v[i] <= p.v[j];
+    const va = up ? p.v[i] : p.v[j];
+    const vb = up ? p.v[j] : p.v[i];
+    const x0 = up ? p.x[i] : p.x[j];
+    const dx = (up ? p.x[j] : p.x[i]) - x0;
+    const dv = vb - va;
     let t0: number;
     let t1: number;
     if (dv === 0) {
-      if (vi < lo || vi > hi) continue;
+      if (va < lo || va > hi) continue;
       t0 = 0;
       t1 = 1;
     } else {
-      const ta = (lo - vi) / dv;
-      const tb = (hi - vi) / dv;
-      t0 = Math.max(0, Math.min(ta, tb));
-      t1 = Math.min(1, Math.max(ta, tb));
+      t0 = Math.max(0, (lo - va) / dv);
+      t1 = Math.min(1, (hi - va) / dv);
       if (!(t0 <= t1)) continue;
     }
-    const dx = p.x[j] - p.x[i];
-    const xa = p.x[i] + t0 * dx;
-    const xb = p.x[i] + t1 * dx;
+    const xa = x0 + t0 * dx;
+    const xb = x0 + t1 * dx;
     const a = Math.min(xa, xb);
     const b = Math.max(xa, xb);
     // Consecutive pieces of one chain touch: grow the running piece instead of storing every edge.

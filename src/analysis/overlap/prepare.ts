@@ -27,17 +27,19 @@ export interface PolygonPrep {
 const sortedCache = new WeakMap<PreparedCurve, SortedPrep>();
 const polygonCache = new WeakMap<PreparedCurve, PolygonPrep>();
 
-/** x = ln m, v = ln g − ln m and the masses of a prepared curve's points, from the data arrays themselves. */
-function shear(prep: PreparedCurve, massEv: Float64Array, gInvGeV: Float64Array) {
-  const { n, index } = prep;
+/**
+ * x = ln m, v = ln g − ln m and the masses of a prepared curve's points, from its log10 arrays (no second
+ * logarithm per point: ×ln 10 is monotonic, so equal and ordered masses stay equal and ordered in x).
+ */
+function shear(prep: PreparedCurve, massEv: Float64Array) {
+  const { n, index, lm, lg } = prep;
   const x = new Float64Array(n);
   const v = new Float64Array(n);
   const mass = new Float64Array(n);
   for (let k = 0; k < n; k++) {
-    const m = massEv[index[k]];
-    mass[k] = m;
-    x[k] = Math.log(m);
-    v[k] = Math.log(gInvGeV[index[k]]) - x[k];
+    mass[k] = massEv[index[k]];
+    x[k] = lm[k] * Math.LN10;
+    v[k] = (lg[k] - lm[k]) * Math.LN10;
   }
   return { x, v, mass };
 }
@@ -47,7 +49,7 @@ export function prepareSorted(massEv: Float64Array, gInvGeV: Float64Array): Sort
   const prep = prepareCurve(massEv, gInvGeV, true);
   let out = sortedCache.get(prep);
   if (!out) {
-    const { x, v, mass } = shear(prep, massEv, gInvGeV);
+    const { x, v, mass } = shear(prep, massEv);
     out = { n: prep.n, x, v, mass, skipped: prep.skipped };
     sortedCache.set(prep, out);
   }
@@ -58,7 +60,7 @@ export function preparePolygon(massEv: Float64Array, gInvGeV: Float64Array): Pol
   const prep = prepareCurve(massEv, gInvGeV, false);
   let out = polygonCache.get(prep);
   if (!out) {
-    const { x, v, mass } = shear(prep, massEv, gInvGeV);
+    const { x, v, mass } = shear(prep, massEv);
     let massMin = Infinity;
     let massMax = -Infinity;
     for (let k = 0; k < prep.n; k++) {
