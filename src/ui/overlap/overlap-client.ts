@@ -3,6 +3,7 @@
 // not exist (jsdom) or the worker fails. `useOverlapSummary` gives the rows for the current models, curves, constants.
 import { useEffect, useMemo, useRef, useState } from "react";
 import { overlapSummary, type OverlapSummaryRow } from "../../analysis/overlap-summary";
+import { cachedPrepared, type PreparedCurve } from "../../analysis/prepared-curve";
 import type { Curve, Model, PhysicsSettings, Project } from "../../project/types";
 import { useAxband } from "../store";
 
@@ -13,6 +14,11 @@ export interface OverlapRequest {
   project: Omit<Project, "curves"> & { curves: { meta: CurveMeta; massRef: number; gRef: number }[] };
   /** Arrays the worker has not seen yet, by id. */
   arrays: [number, Float64Array][];
+  /**
+   * The curve preparations this thread already holds for arrays sent now (from the import worker), in the order
+   * the overlap reads them, so the overlap worker does not sort and take logarithms again.
+   */
+  prepared: { massRef: number; gRef: number; prep: PreparedCurve }[];
   /** Every array id still in use (the worker forgets the others). */
   keep: number[];
   mergeGaps: boolean;
@@ -78,10 +84,12 @@ function computeSummary(project: Project, mergeGaps: boolean): Promise<OverlapSu
   const w = getWorker();
   if (!w) return local();
   const fresh: [number, Float64Array][] = [];
+  const prepared: OverlapRequest["prepared"] = [];
   const keep: number[] = [];
   const curves = project.curves.map(({ massEv, gInvGeV, ...meta }) => {
     const massRef = arrayId(massEv);
     const gRef = arrayId(gInvGeV);
+    const isNew = !workerHas.has(massRef) || !workerHas.has(gRef);
     for (const [id, a] of [
       [massRef, massEv],
       [gRef, gInvGeV],
@@ -89,13 +97,17 @@ function computeSummary(project: Project, mergeGaps: boolean): Promise<OverlapSu
       keep.push(id);
       if (!workerHas.has(id)) fresh.push([id, a]);
     }
+    // The overlap reads exclusions and projections in mass order, regions in file order (as they are drawn).
+    const prep = isNew ? cachedPrepared(massEv, gInvGeV, meta.role !== "region") : undefined;
+    if (prep) prepared.push({ massRef, gRef, prep });
     return { meta, massRef, gRef };
   });
   const id = nextJob++;
   return new Promise<OverlapSummaryRow[]>((resolve) => {
     waiting.set(id, { resolve, fallback: () => resolve(overlapSummary(project, { mergeGaps })) });
     try {
-      w.postMessage({ id, project: { ...project, curves }, arrays: fresh, keep, mergeGaps } satisfies OverlapRequest);
+      const msg: OverlapRequest = { id, project: { ...project, curves }, arrays: fresh, prepared, keep, mergeGaps };
+      w.postMessage(msg);
       for (const [aid] of fresh) workerHas.add(aid);
       workerHas = new Set(keep.filter((k) => workerHas.has(k)));
     } catch {
