@@ -40,7 +40,7 @@ export interface OverlapRow {
 }
 
 /** The constants a project uses: a published set or the user's own values. */
-export function projectConstants(project: Project): AxionConstants {
+export function projectConstants(project: Pick<Project, "physics">): AxionConstants {
   return constantsOf(project.physics);
 }
 

@@ -32,8 +32,20 @@ export interface RowView {
   verdict: string;
 }
 
-/** The row's display values (mass unit chosen for its range, digits that keep its intervals apart). */
+// Rows are never mutated once built, and finding the digits formats every interval end: once per row.
+const views = new WeakMap<OverlapSummaryRow, RowView>();
+
+/** The row's display values (mass unit chosen for its range, digits that keep its intervals apart); cached per row. */
 export function rowView(row: OverlapSummaryRow): RowView {
+  let view = views.get(row);
+  if (!view) {
+    view = buildRowView(row);
+    views.set(row, view);
+  }
+  return view;
+}
+
+function buildRowView(row: OverlapSummaryRow): RowView {
   const [lo, hi] = row.massRangeEv;
   const unit = massUnitFor(lo, hi);
   const digits = Math.max(3, listDigits(row.intervals, unit.ev));

@@ -1,6 +1,6 @@
 // Exports of the overlap summary as shown: CSV (summary and intervals), Markdown, LaTeX (siunitx or plain math),
 // and the caption paragraph with a copy button; every control is a labelled button or field.
-import { useState } from "react";
+import { useMemo, useState } from "react";
 import type { OverlapSummaryRow } from "../../analysis/overlap-summary";
 import { projectConstants } from "../../analysis/overlap-table";
 import { intervalsToCsv, summaryCaption, summaryToCsv, summaryToMarkdown } from "../../formats/overlap/exports";
@@ -14,7 +14,9 @@ export function OverlapExports({ rows }: { rows: OverlapSummaryRow[] }) {
   const pushMessage = useAxband((s) => s.pushMessage);
   const [plain, setPlain] = useState(false);
   const base = safeFileName(project.name === "Untitled" ? "axband" : project.name, "axband");
-  const caption = summaryCaption(rows, projectConstants(project));
+  const physics = project.physics;
+  // The caption reads every row: build it when the rows or the constants change, not on every edit elsewhere.
+  const caption = useMemo(() => summaryCaption(rows, projectConstants({ physics })), [rows, physics]);
   const copy = (text: string, what: string) =>
     void copyText(text).then((ok) =>
       pushMessage(
