@@ -5,31 +5,7 @@ import { afterAll, beforeAll, expect, inject, test } from "vitest";
 import type { Browser } from "playwright-core";
 import { launchChromium, watchPage } from "./chromium";
 import { download } from "./export-helpers";
-import { createRequire } from "node:module";
-import { readFileSync } from "node:fs";
-
-const AXE_SOURCE = readFileSync(createRequire(import.meta.url).resolve("axe-core/axe.min.js"), "utf8");
-
-/** axe-core's violations of serious or critical impact on the page as it is. */
-async function seriousViolations(page: import("playwright-core").Page): Promise<string[]> {
-  await page.addScriptTag({ content: AXE_SOURCE });
-  return page.evaluate(async () => {
-    const axe = (
-      window as unknown as {
-        axe: {
-          run: (
-            ctx: Document,
-          ) => Promise<{ violations: { id: string; impact: string; nodes: { target: string[] }[] }[] }>;
-        };
-      }
-    ).axe;
-    const r = await axe.run(document);
-    return r.violations
-      .filter((v) => v.impact === "serious" || v.impact === "critical")
-      .map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`);
-  });
-}
-
+import { seriousViolations } from "./axe";
 let browser: Browser;
 beforeAll(async () => {
   browser = await launchChromium();

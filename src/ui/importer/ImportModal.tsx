@@ -56,7 +56,7 @@ function ImportFooter() {
   const rejectedTotal = items.filter(importable).reduce((n, it) => n + (it.result?.rejectedCount ?? 0), 0);
   const curvesWord = readyCount + parsing.length > 1 ? `${readyCount + parsing.length} curves` : "curve";
   return (
-    <footer className="ax-modal-foot">
+    <div className="ax-modal-foot">
       {parsing.length > 0 ? (
         <div className="ax-progress-row">
           <div
@@ -97,7 +97,7 @@ function ImportFooter() {
           </button>
         ) : null}
       </div>
-    </footer>
+    </div>
   );
 }
 
@@ -122,10 +122,11 @@ export function ImportModal() {
   return (
     <div className="ax-modal-backdrop">
       <div className="ax-modal ax-panel" role="dialog" aria-modal="true" aria-labelledby={titleId}>
-        <header className="ax-modal-head">
+        {/* Not <header>: outside a section it would be a second banner landmark beside the page's own. */}
+        <div className="ax-modal-head">
           <h2 id={titleId}>Import curves</h2>
           <span className="ax-hint">up to {formatBytes(MAX_IMPORT_BYTES)} per file</span>
-        </header>
+        </div>
         <div className="ax-modal-body">
           {pasteOpen ? <PasteBox /> : null}
           {items.map((it) => (
