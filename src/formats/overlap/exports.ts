@@ -56,7 +56,7 @@ export function intervalsToCsv(rows: readonly OverlapSummaryRow[]): string {
     const l = r.intervals;
     for (let i = 0; i < l.count; i++) {
       const kind = l.bridged[i] ? "bridged" : l.whole[i] > 0 ? "whole" : "part";
-      const e = l.bridged[i] ? "" : r.modelKind === "line" ? "all" : eOverNText(intervalEOverN(l, i));
+      const e = l.bridged[i] ? "" : eOverNText(intervalEOverN(l, i));
       const models = r.modelKind === "set" && !l.bridged[i] ? String(l.members[i]) : "";
       lines.push(
         [cell(r.modelId), cell(r.modelLabel), cell(r.curveId), cell(r.curveLabel), kind]

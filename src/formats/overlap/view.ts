@@ -58,12 +58,9 @@ function buildRowView(row: OverlapSummaryRow): RowView {
     share: percent(row.shareAny),
     shareWhole: row.shareWhole > 0 && row.shareWhole !== row.shareAny ? percent(row.shareWhole) : null,
     areaShare: row.areaShare === null ? "—" : percent(row.areaShare),
-    eOverN:
-      row.verdict === "none"
-        ? "none"
-        : row.modelKind === "interval" || row.modelKind === "between" || row.modelKind === "set"
-          ? eOverNText(row.eOverNBest)
-          : "all",
+    // Every kind the same way: "all" where the whole band (a line with its spread) is covered, else the E/N
+    // covered (for a line partly covered within its spread, its own value).
+    eOverN: row.verdict === "none" ? "none" : eOverNText(row.eOverNBest),
     verdict: verdictWords(row),
   };
 }
@@ -77,7 +74,7 @@ export function intervalView(row: OverlapSummaryRow, view: RowView, i: number) {
     lo: fmt(l.lo[i]),
     hi: fmt(l.hi[i]),
     kind,
-    eOverN: l.bridged[i] ? "—" : row.modelKind === "line" ? "all" : eOverNText(intervalEOverN(l, i)),
+    eOverN: l.bridged[i] ? "—" : eOverNText(intervalEOverN(l, i)),
     members: row.modelKind === "set" && !l.bridged[i] ? `${l.members[i]} of ${row.membersTotal}` : "",
   };
 }
