@@ -7,7 +7,7 @@
 import { describe, expect, test } from "vitest";
 import { gAgg } from "../../src/physics";
 import { emptyProject, newCurve, newModel } from "../../src/project/defaults";
-import { overlapSummary, type OverlapSummaryRow } from "../../src/analysis/overlap-summary";
+import { overlapSummary } from "../../src/analysis/overlap-summary";
 import { intervalView, rowView } from "../../src/formats/overlap/view";
 import { intervalsToCsv, summaryToCsv } from "../../src/formats/overlap/exports";
 
