@@ -26,7 +26,6 @@ function makeCurvesScript(): string {
   const candidates = [
     process.env.AXBAND_SHARED && join(process.env.AXBAND_SHARED, "bench", "make-curves.mjs"),
     resolve(__dirname, "..", "..", "..", "shared", "bench", "make-curves.mjs"),
-    "/work/shared/bench/make-curves.mjs",
   ].filter((p): p is string => !!p);
   const found = candidates.find((p) => existsSync(p));
   if (!found) throw new Error(`make-curves.mjs not found (looked in ${candidates.join(", ")}); set AXBAND_SHARED`);
