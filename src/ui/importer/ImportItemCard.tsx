@@ -148,16 +148,13 @@ function CurveSettings({ s, onChange }: { s: ImportSettings; onChange: Change })
           <span>Label</span>
           <input type="text" aria-label="Label" value={s.label} onChange={(e) => onChange({ label: e.target.value })} />
         </label>
-        <label className="ax-field">
-          <span>Role</span>
-          <select aria-label="Role" value={s.role} onChange={(e) => onChange({ role: e.target.value as CurveRole })}>
-            {ROLES.map((ro) => (
-              <option key={ro.value} value={ro.value}>
-                {ro.label}
-              </option>
-            ))}
-          </select>
-        </label>
+        <ChoiceField
+          label="Role"
+          ariaLabel="Role"
+          value={s.role}
+          choices={ROLES}
+          onChange={(v) => onChange({ role: v as CurveRole })}
+        />
         <label className="ax-check" title="Regions always keep the file order (the contour is closed in that order).">
           <input
             type="checkbox"
