@@ -7,6 +7,7 @@ import { NumberField } from "./NumberField";
 import { isRescaled } from "../../plot/physics-settings";
 import { CurveCsvExport } from "./CurveCsvExport";
 import { ChoiceField } from "../layout/ChoiceField";
+import { OrderButtons } from "../layout/OrderButtons";
 
 const positive = (n: number) => (n > 0 ? null : "Must be above 0.");
 const fractionRule = (n: number) => (n > 0 && n <= 1 ? null : "Between 0 (excluded) and 1.");
@@ -41,32 +42,13 @@ function CurveHead({ curve, update, index, count }: { curve: Curve; update: Upda
         onChange={(e) => update({ visible: e.target.checked })}
       />
       <span className="ax-curve-order">
-        <button
-          type="button"
-          className="icon"
-          aria-label={`Move ${curve.label} up`}
-          disabled={index === 0}
-          onClick={() => moveCurve(id, -1)}
-        >
-          ↑
-        </button>
-        <button
-          type="button"
-          className="icon"
-          aria-label={`Move ${curve.label} down`}
-          disabled={index === count - 1}
-          onClick={() => moveCurve(id, 1)}
-        >
-          ↓
-        </button>
-        <button
-          type="button"
-          className="icon danger"
-          aria-label={`Remove ${curve.label}`}
-          onClick={() => removeCurve(id)}
-        >
-          ×
-        </button>
+        <OrderButtons
+          label={curve.label}
+          index={index}
+          count={count}
+          move={(d) => moveCurve(id, d)}
+          remove={() => removeCurve(id)}
+        />
       </span>
     </div>
   );

@@ -10,6 +10,7 @@ import type { LineStyle, Model, SetDraw } from "../../project/types";
 import { selectModelIds, selectPhysics, useAxband, type AxbandState } from "../store";
 import { useCalculatorRequest } from "./calculator-draft";
 import { minus } from "../format";
+import { OrderButtons } from "../layout/OrderButtons";
 import { EOVERN_HINT, eOverNText, kindFieldsOf } from "./model-kind-text";
 
 const LINE_STYLES: { value: LineStyle; label: string }[] = [
@@ -206,32 +207,13 @@ function RowButtons({ model, index, count }: { model: Model; index: number; coun
           ✎
         </button>
       ) : null}
-      <button
-        type="button"
-        className="icon"
-        aria-label={`Move ${model.label} up`}
-        disabled={index === 0}
-        onClick={() => moveModel(model.id, -1)}
-      >
-        ↑
-      </button>
-      <button
-        type="button"
-        className="icon"
-        aria-label={`Move ${model.label} down`}
-        disabled={index === count - 1}
-        onClick={() => moveModel(model.id, 1)}
-      >
-        ↓
-      </button>
-      <button
-        type="button"
-        className="icon danger"
-        aria-label={`Remove ${model.label}`}
-        onClick={() => removeModel(model.id)}
-      >
-        ✕
-      </button>
+      <OrderButtons
+        label={model.label}
+        index={index}
+        count={count}
+        move={(d) => moveModel(model.id, d)}
+        remove={() => removeModel(model.id)}
+      />
     </span>
   );
 }
