@@ -2,7 +2,8 @@
 // limits and text too large for the plot to fit are named in a note (or refused), never passed on silently.
 import type { Project } from "../project/types";
 import { buildScene } from "../plot/scene";
-import { CUSTOM_MM_LIMITS, presetOf } from "../plot/layout";
+import { presetOf } from "../plot/layout";
+import { CUSTOM_MM_LIMITS } from "../project/limits";
 import { InputError } from "./inputs";
 
 /** Font sizes the figure accepts, pt (as the project schema). */

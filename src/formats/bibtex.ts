@@ -104,6 +104,10 @@ class BibReader {
     throw new ParseError("unbalanced braces: a '{' is never closed", start);
   }
 
+  /**
+   * Reads a quoted value starting at text[i] = '"'. Not {@link readBraced}: a quoted value ends at a quote
+   * outside braces, and a stray "}" inside it is an error instead of its end.
+   */
   private readQuoted(): string {
     const { text, n } = this;
     const start = this.i;

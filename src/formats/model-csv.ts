@@ -86,20 +86,37 @@ function block(model: Model, c: AxionConstants, masses: Float64Array, index: num
   const shape = model.kind === "between" || model.kind === "set" ? modelShape(model, c) : null;
   const values = shape && (shape.kind === "lines-band" || shape.kind === "lines") ? shape.values : null;
   if (values) return linesBlock(model, label, values, c, masses, index);
-  const lines = [
-    `# model: ${label}`,
+  const notes: [string, string] = [
     `# E/N = ${en} (${isLine ? "model line" : "model band"})`,
-    `# c_gamma = ${c.cGamma} +- ${c.cGammaSigma}; m_a*f_a = K * 1e6 eV*GeV with K = ${c.kMuEv} +- ${c.kMuEvSigma} ueV (${oneLine(c.label)})`,
     sigmas > 0
       ? `# theory spread: c_gamma and K varied by +-${sigmas} sigma (g_low and g_high include it); f_a uses the central K`
       : isLine
         ? "# model line: g_low = g_high = alpha/(2 pi f_a) |E/N - c_gamma|"
         : "# model band: g_low and g_high are the band edges (g_low = 0 where the coupling can cancel)",
-    MODEL_CSV_HEADER,
   ];
   const opts = { constants: c, sigmas };
+  return csvBlock({ model, label, index, c, masses }, notes, (m) => bandEdges(m, lo, hi, opts));
+}
+
+/**
+ * One model's file: its label, the E/N note, the constants, the band note, the column names, and one row per mass.
+ * @param notes the E/N line and the line that says what g_low and g_high are
+ */
+function csvBlock(
+  of: { model: Model; label: string; index: number; c: AxionConstants; masses: Float64Array },
+  notes: [string, string],
+  edges: (massEv: number) => { lowInvGeV: number; highInvGeV: number },
+): ModelCsvBlock {
+  const { model, label, index, c, masses } = of;
+  const lines = [
+    `# model: ${label}`,
+    notes[0],
+    `# c_gamma = ${c.cGamma} +- ${c.cGammaSigma}; m_a*f_a = K * 1e6 eV*GeV with K = ${c.kMuEv} +- ${c.kMuEvSigma} ueV (${oneLine(c.label)})`,
+    notes[1],
+    MODEL_CSV_HEADER,
+  ];
   for (const m of masses) {
-    const e = bandEdges(m, lo, hi, opts);
+    const e = edges(m);
     lines.push(`${num(m)},${num(faFromMass(m, { constants: c }))},${num(e.lowInvGeV)},${num(e.highInvGeV)}`);
   }
   return {
@@ -120,23 +137,13 @@ function linesBlock(
 ): ModelCsvBlock {
   const sigmas = model.sigmas > 0 ? model.sigmas : 0;
   const what = modelKindNote(model) ?? "between lines";
-  const lines = [
-    `# model: ${label}`,
+  const notes: [string, string] = [
     `# E/N lines = ${model.members.map((m) => oneLine(m.eOverN)).join(" | ")} (${what})`,
-    `# c_gamma = ${c.cGamma} +- ${c.cGammaSigma}; m_a*f_a = K * 1e6 eV*GeV with K = ${c.kMuEv} +- ${c.kMuEvSigma} ueV (${oneLine(c.label)})`,
     `# g_low and g_high: the lines with the smallest and largest |E/N - c_gamma|${model.kind === "set" && model.setDraw === "central" ? " among the central share" : ""}${sigmas > 0 ? `, c_gamma and K varied by +-${sigmas} sigma` : ""}; g_low = 0 only where a line reaches 0`,
-    MODEL_CSV_HEADER,
   ];
-  for (const m of masses) {
-    const e = linesBandEdges(m, values, { constants: c, sigmas });
-    lines.push(`${num(m)},${num(faFromMass(m, { constants: c }))},${num(e.lowInvGeV)},${num(e.highInvGeV)}`);
-  }
-  return {
-    modelId: model.id,
-    label,
-    fileName: `model-${String(index + 1).padStart(2, "0")}-${slug(label)}.csv`,
-    text: lines.join("\n") + "\n",
-  };
+  return csvBlock({ model, label, index, c, masses }, notes, (m) =>
+    linesBandEdges(m, values, { constants: c, sigmas }),
+  );
 }
 
 /**

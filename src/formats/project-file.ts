@@ -6,6 +6,7 @@ import { restoreProject } from "../project/restore";
 import { CURVE_STATE, PROJECT_STATE, keysFor, type PersistTarget } from "../project/state-table";
 import type { Curve, Project } from "../project/types";
 import { PROJECT_VERSION } from "../project/types";
+import { safeFileName } from "./file-name";
 
 /** Value of the "format" field that marks a project file. */
 export const PROJECT_FILE_FORMAT = "axband-project";
@@ -74,17 +75,9 @@ export function projectToFile(project: Project): string {
   return `${pretty({ format: PROJECT_FILE_FORMAT, ...selectFor(project, { kind: "file" }), version: project.version }, "")}\n`;
 }
 
-/**
- * A file name for the project: its name with characters that file systems refuse replaced, + ".axband.json".
- * @param project the project (its `name` is used; "project" when empty)
- */
+/** A file name for the project: its name made safe ("project" when nothing is left) + ".axband.json". */
 export function projectFileName(project: Pick<Project, "name">): string {
-  const base = project.name
-    // eslint-disable-next-line no-control-regex
-    .replace(/[\u0000-\u001F\u007F/\\:*?"<>|]+/g, "-")
-    .replace(/^[\s.-]+|[\s.-]+$/g, "")
-    .slice(0, 100);
-  return `${base || "project"}${PROJECT_FILE_SUFFIX}`;
+  return `${safeFileName(project.name, "project")}${PROJECT_FILE_SUFFIX}`;
 }
 
 export type ProjectFromFileResult = { ok: true; project: Project; repairs: string[] } | { ok: false; error: string };

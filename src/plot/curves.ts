@@ -71,52 +71,26 @@ export function curveGeometry(curve: Curve, f: CurveFrame, nodeId: string): Curv
   const lines: PathNode[] = [];
   const out: CurveGeometry = { role: curve.role, skipped: prep.skipped, drawn: pl.n, fills, lines };
   if (pl.n === 0) return out;
+  /** A path of the curve in its colour, line width and dash; fills are stroked too (their edge is the curve). */
+  const path = (suffix: string, d: string, fill: Pick<PathNode, "fill" | "fillOpacity">): PathNode => ({
+    kind: "path",
+    id: `${nodeId}-${suffix}`,
+    d,
+    writtenD: d,
+    ...fill,
+    stroke: colour,
+    strokeWidth: lw,
+    dash,
+    data: { ...data },
+  });
   if (curve.role === "exclusion") {
     // One path, filled and stroked: the curve, then up past the plot top (outside the clip) and back. Its
     // stroke also marks the vertical ends of the excluded region where they lie inside the plot.
     const topY = r2(f.plot.y - 4 * lw - 2);
     const closeUp = `L${r2(pl.xs[pl.n - 1])} ${topY}L${r2(pl.xs[0])} ${topY}Z`;
-    const exclusionD = pathDataCompact(pl, closeUp);
-    fills.push({
-      kind: "path",
-      id: `${nodeId}-exclusion`,
-      d: exclusionD,
-      writtenD: exclusionD,
-      fill: colour,
-      fillOpacity: opacity,
-      stroke: colour,
-      strokeWidth: lw,
-      dash,
-      data: { ...data },
-    });
-  } else if (curve.role === "projection") {
-    const d = pathDataCompact(pl);
-    lines.push({
-      kind: "path",
-      id: `${nodeId}-line`,
-      d,
-      writtenD: d,
-      stroke: colour,
-      strokeWidth: lw,
-      dash,
-      fill: "none",
-      data: { ...data },
-    });
-  } else {
-    const d = pathDataCompact(pl);
-    fills.push({
-      kind: "path",
-      id: `${nodeId}-region`,
-      d,
-      writtenD: d,
-      fill: colour,
-      fillOpacity: opacity,
-      stroke: colour,
-      strokeWidth: lw,
-      dash,
-      data: { ...data },
-    });
-  }
+    fills.push(path("exclusion", pathDataCompact(pl, closeUp), { fill: colour, fillOpacity: opacity }));
+  } else if (curve.role === "projection") lines.push(path("line", pathDataCompact(pl), { fill: "none" }));
+  else fills.push(path("region", pathDataCompact(pl), { fill: colour, fillOpacity: opacity }));
   return out;
 }
 

@@ -2,6 +2,7 @@
 // margins around the plot area computed from font sizes and estimated label widths (no DOM needed).
 import type { Figure, LegendPlace, SizePreset } from "../project/types";
 import { CAP_HEIGHT, SUP_RAISE, SHIFT_SCALE } from "./text";
+import { CUSTOM_MM_LIMITS } from "../project/limits";
 
 /** CSS pixels per inch: scene coordinates are CSS px at 96 per inch. */
 export const PX_PER_IN = 96;
@@ -54,9 +55,6 @@ export const PRESETS: Readonly<Record<Exclude<SizePreset, "custom">, Preset>> = 
   "single-column": preset("single-column", "Single column (8.6 cm)", 86, 64.5, 2 / 3),
   "double-column": preset("double-column", "Double column (17.8 cm)", 178, 106.8, 0.75),
 };
-
-/** Smallest and largest custom size accepted, mm (keeps a typo from making a 0 px or 10 m figure). */
-export const CUSTOM_MM_LIMITS: readonly [number, number] = [20, 1000];
 
 /**
  * The preset a figure stands for; "custom" is built from Figure.customWidthMm × customHeightMm (clamped to

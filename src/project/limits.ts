@@ -17,3 +17,9 @@ export const PROJECT_LIMITS = {
   /** Members of a model set or between-lines band (distinct E/N values). */
   members: 20_000,
 } as const;
+
+/**
+ * Smallest and largest custom figure size, mm: what the schema accepts, restore clamps to and the plot draws
+ * (keeps a typo from making a 0 px or 10 m figure; 1000 mm at 300 dpi is 11,811 px, within what browsers draw).
+ */
+export const CUSTOM_MM_LIMITS: readonly [number, number] = [20, 1000];

@@ -12,6 +12,7 @@ import {
   newModel,
 } from "./defaults";
 import { uniqueId } from "./ids";
+import { CUSTOM_MM_LIMITS } from "./limits";
 import { isPlainObject } from "./json";
 import { migrate } from "./migrate";
 import { settleModelKind } from "./model-kind";
@@ -335,8 +336,9 @@ function restoreFigure(raw: unknown, note: Note): Figure {
   const d = defaultFigure();
   const f = record(raw, note, "figure") ?? {};
   const preset = valid(sizePreset, own(f, "preset"), note, "size preset");
-  const customWidthMm = clamped(own(f, "customWidthMm"), 20, 2000, note, "custom width");
-  const customHeightMm = clamped(own(f, "customHeightMm"), 20, 2000, note, "custom height");
+  const [minMm, maxMm] = CUSTOM_MM_LIMITS;
+  const customWidthMm = clamped(own(f, "customWidthMm"), minMm, maxMm, note, "custom width");
+  const customHeightMm = clamped(own(f, "customHeightMm"), minMm, maxMm, note, "custom height");
   const massRangeEv = range(own(f, "massRangeEv"), note, "mass range");
   const yRange = range(own(f, "yRange"), note, "y range");
   const view = valid(yView, own(f, "yView"), note, "y view") ?? d.yView;

@@ -1,7 +1,7 @@
 // The project schema (zod): the strict form of the current version, and the field rules the restore step
 // (./restore.ts) reads untrusted input with.
 import { z } from "zod";
-import { PROJECT_LIMITS } from "./limits";
+import { CUSTOM_MM_LIMITS, PROJECT_LIMITS } from "./limits";
 import { isRationalText, rationalValue } from "./rational-text";
 import { PROJECT_VERSION } from "./types";
 import { MIN_RANGE_DECADES, saneRange } from "./view-range";
@@ -192,8 +192,8 @@ export const ProjectSchema = z.object({
     .max(PROJECT_LIMITS.curves),
   figure: z.object({
     preset: sizePreset,
-    customWidthMm: z.number().min(20).max(2000),
-    customHeightMm: z.number().min(20).max(2000),
+    customWidthMm: z.number().min(CUSTOM_MM_LIMITS[0]).max(CUSTOM_MM_LIMITS[1]),
+    customHeightMm: z.number().min(CUSTOM_MM_LIMITS[0]).max(CUSTOM_MM_LIMITS[1]),
     massRangeEv: positiveRange,
     yRange: positiveRange,
     yView,

@@ -14,6 +14,7 @@ import {
   serializeForStorage,
 } from "../../src/data/index";
 import type { Curve, Figure, Model, PhysicsSettings, Project } from "../../src/project/types";
+import { CUSTOM_MM_LIMITS } from "../../src/project/limits";
 
 // eslint-disable-next-line no-control-regex
 const CONTROL = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/;
@@ -154,8 +155,8 @@ const range = fc
 
 const figure: fc.Arbitrary<Figure> = fc.record({
   preset: fc.constantFrom("slide", "single-column", "double-column", "custom") as fc.Arbitrary<Figure["preset"]>,
-  customWidthMm: fc.double({ min: 20, max: 2000, noNaN: true }),
-  customHeightMm: fc.double({ min: 20, max: 2000, noNaN: true }),
+  customWidthMm: fc.double({ min: CUSTOM_MM_LIMITS[0], max: CUSTOM_MM_LIMITS[1], noNaN: true }),
+  customHeightMm: fc.double({ min: CUSTOM_MM_LIMITS[0], max: CUSTOM_MM_LIMITS[1], noNaN: true }),
   massRangeEv: range,
   yRange: range,
   yView: fc.constantFrom("coupling", "normalized", "g-gamma") as fc.Arbitrary<Figure["yView"]>,

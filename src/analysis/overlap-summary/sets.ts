@@ -1,38 +1,11 @@
 // A model set against one curve: each member line is compared on its own; the set is wholly covered where all
 // its members are, partly where some are, and each stretch says how many (with multiplicity) and which E/N.
 import { overlapDetail, type Interval, type OverlapCurve, type OverlapModel, type OverlapOptions } from "../overlap";
+import { intersectFlat, unionUnsorted, type Flat } from "../overlap/intervals";
 import type { Group } from "./intervals";
-
-type Flat = number[];
 
 function flat(list: Interval[]): Flat {
   return list.flatMap(([a, b]) => [a, b]);
-}
-
-function intersect(a: Flat, b: Flat): Flat {
-  const out: Flat = [];
-  let i = 0;
-  let j = 0;
-  while (i < a.length && j < b.length) {
-    const lo = Math.max(a[i], b[j]);
-    const hi = Math.min(a[i + 1], b[j + 1]);
-    if (hi > lo) out.push(lo, hi);
-    if (a[i + 1] < b[j + 1]) i += 2;
-    else j += 2;
-  }
-  return out;
-}
-
-function union(pairs: Flat): Flat {
-  const idx = Array.from({ length: pairs.length / 2 }, (_, k) => k).sort((p, q) => pairs[2 * p] - pairs[2 * q]);
-  const out: Flat = [];
-  for (const k of idx) {
-    const lo = pairs[2 * k];
-    const hi = pairs[2 * k + 1];
-    if (out.length > 0 && lo <= out[out.length - 1]) out[out.length - 1] = Math.max(out[out.length - 1], hi);
-    else out.push(lo, hi);
-  }
-  return out;
 }
 
 export interface SetResult {
@@ -59,10 +32,10 @@ export function setGroups(
     const d = overlapDetail({ ...base, eOverNMin: m.value, eOverNMax: m.value }, curve, opts);
     massRangeEv = d.massRangeEv;
     skippedPoints = d.skippedPoints;
-    whole = whole === null ? flat(d.whole) : intersect(whole, flat(d.whole));
-    anyPerMember.push({ value: m.value, count: m.count, any: union([...flat(d.whole), ...flat(d.part)]) });
+    whole = whole === null ? flat(d.whole) : intersectFlat(whole, flat(d.whole));
+    anyPerMember.push({ value: m.value, count: m.count, any: unionUnsorted([...flat(d.whole), ...flat(d.part)]) });
   }
-  const all = union(anyPerMember.flatMap((m) => m.any));
+  const all = unionUnsorted(anyPerMember.flatMap((m) => m.any));
   const groups: Group[] = [];
   for (let i = 0; i < all.length; i += 2) {
     groups.push({ lo: all[i], hi: all[i + 1], wholeLn: 0, eOverN: [], members: 0, bridged: false });

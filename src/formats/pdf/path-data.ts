@@ -8,6 +8,9 @@ export type PathCommand =
 
 const TOKEN = /([MmLlHhVvCcSsQqTtAaZz])|([+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?)/g;
 
+/** Numbers before the end point of the commands drawn as a straight segment to it (control points, arc radii). */
+const SKIPPED_NUMBERS: Record<string, number> = { L: 0, T: 0, Q: 2, S: 2, A: 5 };
+
 /** Tokens of path data: command letters and numbers (".5.5" is two numbers, as the SVG grammar says). */
 function tokens(d: string): (string | number)[] {
   const out: (string | number)[] = [];
@@ -38,7 +41,8 @@ export function parsePathData(d: string): PathCommand[] {
     const rel = cmd === cmd.toLowerCase();
     const ox = rel ? x : 0;
     const oy = rel ? y : 0;
-    switch (cmd.toUpperCase()) {
+    const upper = cmd.toUpperCase();
+    switch (upper) {
       case "M": {
         x = ox + num();
         y = oy + num();
@@ -47,11 +51,6 @@ export function parsePathData(d: string): PathCommand[] {
         cmd = rel ? "l" : "L"; // later pairs are line-tos
         break;
       }
-      case "L":
-        x = ox + num();
-        y = oy + num();
-        out.push({ op: "L", x, y });
-        break;
       case "H":
         x = ox + num();
         out.push({ op: "L", x, y });
@@ -70,20 +69,12 @@ export function parsePathData(d: string): PathCommand[] {
         out.push({ op: "C", x1, y1, x2, y2, x, y });
         break;
       }
+      case "L":
+      case "T":
       case "Q":
       case "S":
-        i += 2;
-        x = ox + num();
-        y = oy + num();
-        out.push({ op: "L", x, y });
-        break;
-      case "T":
-        x = ox + num();
-        y = oy + num();
-        out.push({ op: "L", x, y });
-        break;
       case "A":
-        i += 5;
+        i += SKIPPED_NUMBERS[upper];
         x = ox + num();
         y = oy + num();
         out.push({ op: "L", x, y });

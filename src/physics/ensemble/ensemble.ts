@@ -93,6 +93,54 @@ class Splits {
   }
 }
 
+/** The kept multisets: raw (e, n) sums with their counts, and how many multisets of which kind were met. */
+class Collector {
+  readonly raw = new Map<number, { e: number; n: number; c: number }>();
+  multisets = 0;
+  evenMultisets = 0;
+  largestNQ = 0;
+  stopped = false;
+  constructor(
+    private readonly keys: Keys,
+    private readonly signed: boolean,
+    /** The count of each representation in the multiset being recorded. */
+    private readonly counts: Int32Array,
+    /** The split tables by prefix; the last one is the whole multiset's (signed charges). */
+    private readonly splits: Splits[],
+    private readonly onProgress: EnsembleOpts["onProgress"],
+  ) {}
+  record(used: number, e: number, n: number): void {
+    this.multisets++;
+    if (used > this.largestNQ) this.largestNQ = used;
+    if (!this.signed) this.add(e, n, 1);
+    else {
+      const s = this.splits[this.counts.length];
+      for (let j = 0; j < s.e.length; j++) this.add(s.e[j], s.n[j], s.c[j]);
+      let even = true;
+      for (let i = 0; i < this.counts.length; i++) if (this.counts[i] % 2) even = false;
+      if (even) this.evenMultisets++;
+    }
+    if (this.onProgress && this.multisets % 20000 === 0 && this.onProgress(this.multisets)) this.stopped = true;
+  }
+  private add(e: number, n: number, c: number): void {
+    const kk = this.keys.key(e, n);
+    const v = this.raw.get(kk);
+    if (v) v.c += c;
+    else this.raw.set(kk, { e, n, c });
+  }
+}
+
+/** @throws when the ensemble without a Landau-pole criterion has more than {@link MAX_MULTISETS} multisets. */
+function refuseTooMany(reps: number, maxQuarks: number): void {
+  let total = 0;
+  for (let k = 1; k <= maxQuarks; k++) total += multisetCount(reps, k);
+  if (total > MAX_MULTISETS)
+    throw new Error(
+      `heavy-quark ensemble: ${total.toExponential(2)} multisets without the Landau-pole criterion is more than ` +
+        `${MAX_MULTISETS.toExponential(0)}; lower the number of heavy quarks or turn the criterion on`,
+    );
+}
+
 function validate(opts: EnsembleOpts): void {
   const k = opts.maxQuarks;
   if (!Number.isSafeInteger(k) || k < 1 || k > 200)
@@ -116,15 +164,7 @@ export function heavyQuarkEnsemble(opts: EnsembleOpts): EnsembleResult {
   const check = lp === false ? null : landauCheck(lp === true ? {} : lp);
   const K = reps.length;
   const maxQ = opts.maxQuarks;
-  if (!check) {
-    let total = 0;
-    for (let k = 1; k <= maxQ; k++) total += multisetCount(K, k);
-    if (total > MAX_MULTISETS)
-      throw new Error(
-        `heavy-quark ensemble: ${total.toExponential(2)} multisets without the Landau-pole criterion is more than ` +
-          `${MAX_MULTISETS.toExponential(0)}; lower the number of heavy quarks or turn the criterion on`,
-      );
-  }
+  if (!check) refuseTooMany(K, maxQ);
   const aAcc = Array.from({ length: K + 1 }, () => new Float64Array(3));
   const bAcc = Array.from({ length: K + 1 }, () => new Float64Array(9));
   const keys = new Keys(
@@ -135,39 +175,15 @@ export function heavyQuarkEnsemble(opts: EnsembleOpts): EnsembleResult {
   // splits[i] is the prefix's split table: its own table, or the parent's when this rep's count is 0.
   const splits = own.slice();
   const counts = new Int32Array(K);
-  const raw = new Map<number, { e: number; n: number; c: number }>();
-  let multisets = 0;
-  let evenMultisets = 0;
-  let largestNQ = 0;
-  let stopped = false;
-
-  const record = (used: number, e: number, n: number) => {
-    multisets++;
-    if (used > largestNQ) largestNQ = used;
-    if (!signed) add(e, n, 1);
-    else {
-      const s = splits[K];
-      for (let j = 0; j < s.e.length; j++) add(s.e[j], s.n[j], s.c[j]);
-      let even = true;
-      for (let i = 0; i < K; i++) if (counts[i] % 2) even = false;
-      if (even) evenMultisets++;
-    }
-    if (opts.onProgress && multisets % 20000 === 0 && opts.onProgress(multisets)) stopped = true;
-  };
-  const add = (e: number, n: number, c: number) => {
-    const kk = keys.key(e, n);
-    const v = raw.get(kk);
-    if (v) v.c += c;
-    else raw.set(kk, { e, n, c });
-  };
+  const tally = new Collector(keys, signed, counts, splits, opts.onProgress);
 
   // Depth i chooses the count of reps[i]; the accumulators at i + 1 hold the prefix's shares. `mask` marks reps
   // whose one more copy already failed the criterion on a subset of this prefix (monotone: they fail here too);
   // the returned mask holds for the prefix visit was called with.
   const visit = (i: number, used: number, e: number, n: number, maskIn: number): number => {
-    if (stopped) return maskIn;
+    if (tally.stopped) return maskIn;
     if (i === K) {
-      if (used > 0) record(used, e, n);
+      if (used > 0) tally.record(used, e, n);
       return maskIn;
     }
     const r = reps[i];
@@ -194,13 +210,14 @@ export function heavyQuarkEnsemble(opts: EnsembleOpts): EnsembleResult {
       }
       mask = visit(i + 1, used + c, e + c * r.e, n + c * r.n, mask);
       if (c === 0) ret = mask;
-      if (stopped) break;
+      if (tally.stopped) break;
     }
     counts[i] = 0;
     return ret;
   };
   visit(0, 0, 0, 0, 0);
-  return summarise(raw, { eScale, nScale, signed, multisets, evenMultisets, largestNQ, stopped });
+  const { multisets, evenMultisets, largestNQ, stopped } = tally;
+  return summarise(tally.raw, { eScale, nScale, signed, multisets, evenMultisets, largestNQ, stopped });
 }
 
 interface Tally {

@@ -6,6 +6,8 @@ import { selectCurve, useAxband } from "../store";
 import { NumberField } from "./NumberField";
 import { isRescaled } from "../../plot/physics-settings";
 import { CurveCsvExport } from "./CurveCsvExport";
+import { ChoiceField } from "../layout/ChoiceField";
+import { OrderButtons } from "../layout/OrderButtons";
 
 const positive = (n: number) => (n > 0 ? null : "Must be above 0.");
 const fractionRule = (n: number) => (n > 0 && n <= 1 ? null : "Between 0 (excluded) and 1.");
@@ -40,32 +42,13 @@ function CurveHead({ curve, update, index, count }: { curve: Curve; update: Upda
         onChange={(e) => update({ visible: e.target.checked })}
       />
       <span className="ax-curve-order">
-        <button
-          type="button"
-          className="icon"
-          aria-label={`Move ${curve.label} up`}
-          disabled={index === 0}
-          onClick={() => moveCurve(id, -1)}
-        >
-          ↑
-        </button>
-        <button
-          type="button"
-          className="icon"
-          aria-label={`Move ${curve.label} down`}
-          disabled={index === count - 1}
-          onClick={() => moveCurve(id, 1)}
-        >
-          ↓
-        </button>
-        <button
-          type="button"
-          className="icon danger"
-          aria-label={`Remove ${curve.label}`}
-          onClick={() => removeCurve(id)}
-        >
-          ×
-        </button>
+        <OrderButtons
+          label={curve.label}
+          index={index}
+          count={count}
+          move={(d) => moveCurve(id, d)}
+          remove={() => removeCurve(id)}
+        />
       </span>
     </div>
   );
@@ -74,34 +57,20 @@ function CurveHead({ curve, update, index, count }: { curve: Curve; update: Upda
 function CurveStyle({ curve, update }: { curve: Curve; update: Update }) {
   return (
     <div className="ax-curve-row">
-      <label className="ax-field">
-        <span>Role</span>
-        <select
-          aria-label="Curve role"
-          value={curve.role}
-          onChange={(e) => update({ role: e.target.value as CurveRole })}
-        >
-          {ROLES.map((r) => (
-            <option key={r.value} value={r.value}>
-              {r.label}
-            </option>
-          ))}
-        </select>
-      </label>
-      <label className="ax-field">
-        <span>Line</span>
-        <select
-          aria-label="Line style"
-          value={curve.lineStyle}
-          onChange={(e) => update({ lineStyle: e.target.value as LineStyle })}
-        >
-          {LINE_STYLES.map((s) => (
-            <option key={s} value={s}>
-              {s}
-            </option>
-          ))}
-        </select>
-      </label>
+      <ChoiceField
+        label="Role"
+        ariaLabel="Curve role"
+        value={curve.role}
+        choices={ROLES}
+        onChange={(v) => update({ role: v as CurveRole })}
+      />
+      <ChoiceField
+        label="Line"
+        ariaLabel="Line style"
+        value={curve.lineStyle}
+        choices={LINE_STYLES}
+        onChange={(v) => update({ lineStyle: v as LineStyle })}
+      />
       <label className="ax-field">
         <span>Fill</span>
         <input

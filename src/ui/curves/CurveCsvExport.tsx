@@ -5,8 +5,8 @@ import type { Curve } from "../../project/types";
 import { useAxband } from "../store";
 import { rescaleCurve } from "../../data";
 import { downloadText } from "../export/download";
-import { COUPLING_UNIT_OPTIONS, MASS_UNIT_OPTIONS, type CouplingUnit, type MassUnit } from "../importer/unit-options";
-import { ChoiceField } from "../layout/ChoiceField";
+import type { CouplingUnit, MassUnit } from "../importer/unit-options";
+import { UnitFields } from "../importer/UnitFields";
 import { isRescaled, physicsOptsOf } from "../../plot/physics-settings";
 
 export function CurveCsvExport({ curve }: { curve: Curve }) {
@@ -44,32 +44,15 @@ export function CurveCsvExport({ curve }: { curve: Curve }) {
     <details className="ax-curve-more">
       <summary>Export as CSV</summary>
       <div className="ax-curve-row">
-        <ChoiceField
-          label="Mass unit"
-          ariaLabel="CSV mass unit"
-          value={massUnit}
-          choices={MASS_UNIT_OPTIONS}
-          onChange={(v) => setMassUnit(v as MassUnit)}
+        <UnitFields
+          units={{ massUnit, couplingUnit, eOverN }}
+          onChange={(p) => {
+            if (p.massUnit) setMassUnit(p.massUnit);
+            if (p.couplingUnit) setCouplingUnit(p.couplingUnit);
+            if (p.eOverN !== undefined) setEOverN(p.eOverN);
+          }}
+          ariaLabels={{ massUnit: "CSV mass unit", couplingUnit: "CSV coupling unit", eOverN: "CSV model line E/N" }}
         />
-        <ChoiceField
-          label="Coupling"
-          ariaLabel="CSV coupling unit"
-          value={couplingUnit}
-          choices={COUPLING_UNIT_OPTIONS}
-          onChange={(v) => setCouplingUnit(v as CouplingUnit)}
-        />
-        {couplingUnit === "model-line" ? (
-          <label className="ax-field">
-            <span>of the line E/N =</span>
-            <input
-              type="text"
-              size={6}
-              aria-label="CSV model line E/N"
-              value={eOverN}
-              onChange={(e) => setEOverN(e.target.value)}
-            />
-          </label>
-        ) : null}
         {isRescaled(curve.rescale) ? (
           <label className="ax-check">
             <input type="checkbox" checked={rescaled} onChange={(e) => setRescaled(e.target.checked)} />

@@ -7,4 +7,6 @@ export const ROLES: { value: CurveRole; label: string }[] = [
   { value: "region", label: "region (closed contour)" },
 ];
 
-export const LINE_STYLES: LineStyle[] = ["solid", "dashed", "dotted", "dashdot"];
+export const LINE_STYLES: { value: LineStyle; label: string }[] = (
+  ["solid", "dashed", "dotted", "dashdot"] as const
+).map((s) => ({ value: s, label: s }));

@@ -3,7 +3,8 @@
 // 300 dpi, and the model lines and bands as CSV (export-actions.ts). All files come from the same scene builder as the screen.
 import { useState } from "react";
 import type { SizePreset } from "../../project/types";
-import { PRESETS, presetOf, CUSTOM_MM_LIMITS } from "../../plot/layout";
+import { PRESETS, presetOf } from "../../plot/layout";
+import { CUSTOM_MM_LIMITS } from "../../project/limits";
 import { useAxband } from "../store";
 import type { PngScale } from "./png";
 import { NumberField } from "../curves/NumberField";

@@ -7,15 +7,8 @@ export interface DownloadResult {
   bytes: number;
 }
 
-/** Keeps a file name safe on every file system: no path separators, no control characters, not empty. */
-export function safeFileName(name: string, fallback = "axband"): string {
-  const cleaned = name
-    // eslint-disable-next-line no-control-regex
-    .replace(/[\u0000-\u001f\u007f/\\:*?"<>|]+/g, "-")
-    .replace(/^[.\s-]+|[.\s]+$/g, "")
-    .trim();
-  return (cleaned || fallback).slice(0, 120);
-}
+// The one file-name rule lives with the file formats; re-exported here for the download buttons.
+export { safeFileName } from "../../formats/file-name";
 
 /**
  * Downloads a blob under a file name.

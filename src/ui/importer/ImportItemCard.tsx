@@ -5,6 +5,7 @@ import { delimiterName } from "../../data";
 import { DELIMITERS, formatBytes, rejectionLines, type ImportItem, type ImportSettings } from "./import-items";
 import { COUPLING_UNIT_OPTIONS, MASS_UNIT_OPTIONS } from "./unit-options";
 import { ChoiceField } from "../layout/ChoiceField";
+import { UnitFields } from "./UnitFields";
 import { ROLES } from "../curves/roles";
 
 type Result = NonNullable<ImportItem["result"]>;
@@ -74,30 +75,15 @@ function ReadingSettings({ r, s, onChange }: { r: Result; s: ImportSettings; onC
         choices={DELIMITERS}
         onChange={(v) => onChange({ delimiter: v })}
       />
-      <ChoiceField
-        label="Mass unit"
-        value={s.massUnit ?? r.massUnit}
-        choices={MASS_UNIT_OPTIONS}
-        onChange={(v) => onChange({ massUnit: v as ImportSettings["massUnit"] })}
+      <UnitFields
+        units={{
+          massUnit: s.massUnit ?? r.massUnit,
+          couplingUnit: s.couplingUnit ?? r.couplingUnit,
+          eOverN: s.modelEOverN,
+        }}
+        onChange={({ eOverN, ...units }) => onChange(eOverN === undefined ? units : { ...units, modelEOverN: eOverN })}
+        ariaLabels={{ eOverN: "E/N of the model line" }}
       />
-      <ChoiceField
-        label="Coupling"
-        value={s.couplingUnit ?? r.couplingUnit}
-        choices={COUPLING_UNIT_OPTIONS}
-        onChange={(v) => onChange({ couplingUnit: v as ImportSettings["couplingUnit"] })}
-      />
-      {(s.couplingUnit ?? r.couplingUnit) === "model-line" ? (
-        <label className="ax-field">
-          <span>of the line E/N =</span>
-          <input
-            type="text"
-            size={6}
-            aria-label="E/N of the model line"
-            value={s.modelEOverN}
-            onChange={(e) => onChange({ modelEOverN: e.target.value })}
-          />
-        </label>
-      ) : null}
       <label className="ax-check">
         <input type="checkbox" checked={s.log10Mass} onChange={(e) => onChange({ log10Mass: e.target.checked })} />
         mass as log10
@@ -148,16 +134,13 @@ function CurveSettings({ s, onChange }: { s: ImportSettings; onChange: Change })
           <span>Label</span>
           <input type="text" aria-label="Label" value={s.label} onChange={(e) => onChange({ label: e.target.value })} />
         </label>
-        <label className="ax-field">
-          <span>Role</span>
-          <select aria-label="Role" value={s.role} onChange={(e) => onChange({ role: e.target.value as CurveRole })}>
-            {ROLES.map((ro) => (
-              <option key={ro.value} value={ro.value}>
-                {ro.label}
-              </option>
-            ))}
-          </select>
-        </label>
+        <ChoiceField
+          label="Role"
+          ariaLabel="Role"
+          value={s.role}
+          choices={ROLES}
+          onChange={(v) => onChange({ role: v as CurveRole })}
+        />
         <label className="ax-check" title="Regions always keep the file order (the contour is closed in that order).">
           <input
             type="checkbox"

@@ -150,11 +150,11 @@ function useAddAsModel(
   };
 }
 
-export function AnomalyCalculator() {
-  const [state, dispatch] = useReducer(calcReducer, undefined, loadDraft);
-  useEffect(() => saveDraft(state), [state]);
-  useEditRequest(dispatch, state.dirty);
-  // The one computation per edit, shared by the result, the breakdown and "Add as model".
+/**
+ * The anomaly of the calculator's rows, computed once per edit and shared by the result, the breakdown and
+ * "Add as model"; the last valid result stays shown (marked stale) while a field is bad.
+ */
+function useAnomaly(state: CalcState) {
   const computed = useMemo(
     () => tryAnomaly(state.rows.map(fermionFromDraft), { scalarCharge: state.scalarCharge }),
     [state.rows, state.scalarCharge],
@@ -165,49 +165,79 @@ export function AnomalyCalculator() {
   const [lastGood, setLastGood] = useState<AnomalyResult | null>(null);
   if (current.ok && current.result !== lastGood) setLastGood(current.result);
   const scanning = isScanState(state);
-  // In scan mode the lists are read by the scan, which reports its own errors.
-  const errors = current.ok || scanning ? [] : current.errors;
   const shown = current.ok ? current.result : lastGood;
-  const stale = !current.ok && shown !== null;
-  const eOverN = current.ok ? current.result.eOverN : null;
-  const scalarId = useId();
-  const nameId = useId();
-  const editing = useAxband((s) => s.project.models.some((m) => m.id === state.editingId));
+  return {
+    scanning,
+    // In scan mode the lists are read by the scan, which reports its own errors.
+    errors: current.ok || scanning ? [] : current.errors,
+    shown,
+    stale: !current.ok && shown !== null,
+    eOverN: current.ok ? current.result.eOverN : null,
+  };
+}
 
+function FermionTable({
+  state,
+  errors,
+  dispatch,
+}: {
+  state: CalcState;
+  errors: AnomalyFieldError[];
+  dispatch: (a: CalcAction) => void;
+}) {
+  return (
+    <div className="table-scroll">
+      <table className="fermion-table">
+        <TableHead />
+        <tbody>
+          {state.rows.map((row, i) => (
+            <FermionRow
+              key={row.key}
+              row={row}
+              index={i}
+              errors={errors}
+              edit={(patch) => dispatch({ type: "edit", key: row.key, patch })}
+              remove={() => dispatch({ type: "remove", key: row.key })}
+            />
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}
+
+function NameField({ name, dispatch }: { name: string; dispatch: (a: CalcAction) => void }) {
+  const nameId = useId();
+  return (
+    <div className="inline-row">
+      <label className="inline-label" htmlFor={nameId}>
+        Model name
+      </label>
+      <input
+        id={nameId}
+        type="text"
+        value={name}
+        placeholder="Calculator model"
+        onChange={(e) => dispatch({ type: "text", field: "name", value: e.target.value })}
+      />
+    </div>
+  );
+}
+
+export function AnomalyCalculator() {
+  const [state, dispatch] = useReducer(calcReducer, undefined, loadDraft);
+  useEffect(() => saveDraft(state), [state]);
+  useEditRequest(dispatch, state.dirty);
+  const { scanning, errors, shown, stale, eOverN } = useAnomaly(state);
+  const scalarId = useId();
+  const editing = useAxband((s) => s.project.models.some((m) => m.id === state.editingId));
   const addAsModel = useAddAsModel(state, eOverN, editing, dispatch);
 
   return (
     <div className="calculator" data-testid="anomaly-calculator">
       <CatalogueLoad dispatch={dispatch} dirty={state.dirty} />
-      <div className="inline-row">
-        <label className="inline-label" htmlFor={nameId}>
-          Model name
-        </label>
-        <input
-          id={nameId}
-          type="text"
-          value={state.name}
-          placeholder="Calculator model"
-          onChange={(e) => dispatch({ type: "text", field: "name", value: e.target.value })}
-        />
-      </div>
-      <div className="table-scroll">
-        <table className="fermion-table">
-          <TableHead />
-          <tbody>
-            {state.rows.map((row, i) => (
-              <FermionRow
-                key={row.key}
-                row={row}
-                index={i}
-                errors={errors}
-                edit={(patch) => dispatch({ type: "edit", key: row.key, patch })}
-                remove={() => dispatch({ type: "remove", key: row.key })}
-              />
-            ))}
-          </tbody>
-        </table>
-      </div>
+      <NameField name={state.name} dispatch={dispatch} />
+      <FermionTable state={state} errors={errors} dispatch={dispatch} />
       <div className="inline-row">
         <button type="button" onClick={() => dispatch({ type: "add" })}>
           + Fermion

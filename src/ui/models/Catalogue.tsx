@@ -40,9 +40,69 @@ const GROUPS: { id: CatalogueEntry["group"]; title: string }[] = [
   { id: "dfsz", title: "DFSZ-type (two Higgs doublets)" },
 ];
 
-export function Catalogue() {
-  const rows = useCatalogueRows();
-  const addModel = useAxband((s) => s.addModel);
+/** Terms of a Lagrangian as code, separated by commas. */
+function TermList({ terms }: { terms: readonly string[] }) {
+  return terms.map((t, k) => (
+    <span key={k}>
+      {k > 0 ? ", " : null}
+      <code>{t}</code>
+    </span>
+  ));
+}
+
+/** One entry, opened: its fermions, the Lagrangian its charges follow from, X_S and N_DW. */
+function EntryDetails({ row, group }: { row: CatalogueRow; group: CatalogueEntry["group"] }) {
+  const { entry } = row;
+  return (
+    <details>
+      <summary title={entry.note}>
+        <span className="catalogue-label">
+          {group === "ksvz" ? entry.label.replace(/^KSVZ-type /, "") : entry.label}
+        </span>
+        <span className="catalogue-eovern">E/N = {row.eOverN ? minus(row.eOverN) : "undefined"}</span>
+      </summary>
+      <div className="catalogue-fields">
+        <ul>
+          {entry.fermions.map((f, i) => (
+            <li key={i}>{fermionSummary(f)}</li>
+          ))}
+        </ul>
+        <p className="catalogue-terms">
+          Charges follow from <TermList terms={entry.lagrangian.terms} /> with {entry.lagrangian.normalize} normalised
+          to 1; forbidden: <TermList terms={entry.lagrangian.forbidden} />.
+        </p>
+        <p>
+          X_S = {minus(String(entry.scalarCharge))}, N_DW = {row.domainWall ? minus(row.domainWall) : "—"}
+        </p>
+        {entry.note ? <p className="note">{entry.note}</p> : null}
+      </div>
+    </details>
+  );
+}
+
+/** The model set made of the chosen rows (all with an E/N), without id and colour (the store gives them). */
+function catalogueSet(chosen: CatalogueRow[]) {
+  const members = chosen.map((r) => ({
+    eOverN: r.eOverN as string,
+    count: 1,
+    ...(r.domainWall ? { nDW: r.domainWall } : {}),
+  }));
+  // The source names the entries while they fit the id limit of a project (100 characters).
+  let ids = "";
+  for (const r of chosen) if (ids.length + r.entry.id.length + 1 <= 100) ids += (ids ? "," : "") + r.entry.id;
+  const {
+    id: _id,
+    colour: _colour,
+    ...set
+  } = newModelSet(`Catalogue set (${chosen.length} models)`, members, {
+    kind: "catalogue",
+    catalogueId: ids,
+  });
+  return set;
+}
+
+/** The ids ticked for a model set, and a function that ticks or unticks one. */
+function usePicked() {
   const [picked, setPicked] = useState<ReadonlySet<string>>(new Set());
   const toggle = (id: string, on: boolean) =>
     setPicked((old) => {
@@ -51,27 +111,18 @@ export function Catalogue() {
       else next.delete(id);
       return next;
     });
+  return { picked, toggle, clear: () => setPicked(new Set()) };
+}
+
+export function Catalogue() {
+  const rows = useCatalogueRows();
+  const addModel = useAxband((s) => s.addModel);
+  const { picked, toggle, clear } = usePicked();
   const chosen = rows.filter((r) => picked.has(r.entry.id) && r.eOverN);
   const addSet = () => {
     if (chosen.length === 0) return;
-    const members = chosen.map((r) => ({
-      eOverN: r.eOverN as string,
-      count: 1,
-      ...(r.domainWall ? { nDW: r.domainWall } : {}),
-    }));
-    // The source names the entries while they fit the id limit of a project (100 characters).
-    let ids = "";
-    for (const r of chosen) if (ids.length + r.entry.id.length + 1 <= 100) ids += (ids ? "," : "") + r.entry.id;
-    const {
-      id: _id,
-      colour: _colour,
-      ...set
-    } = newModelSet(`Catalogue set (${chosen.length} models)`, members, {
-      kind: "catalogue",
-      catalogueId: ids,
-    });
-    addModel(set);
-    setPicked(new Set());
+    addModel(catalogueSet(chosen));
+    clear();
   };
   const add = (row: CatalogueRow) => {
     if (!row.eOverN) return;
@@ -93,42 +144,7 @@ export function Catalogue() {
               .filter((r) => r.entry.group === g.id)
               .map((r) => (
                 <li key={r.entry.id} className="catalogue-entry" data-catalogue-id={r.entry.id}>
-                  <details>
-                    <summary title={r.entry.note}>
-                      <span className="catalogue-label">
-                        {g.id === "ksvz" ? r.entry.label.replace(/^KSVZ-type /, "") : r.entry.label}
-                      </span>
-                      <span className="catalogue-eovern">E/N = {r.eOverN ? minus(r.eOverN) : "undefined"}</span>
-                    </summary>
-                    <div className="catalogue-fields">
-                      <ul>
-                        {r.entry.fermions.map((f, i) => (
-                          <li key={i}>{fermionSummary(f)}</li>
-                        ))}
-                      </ul>
-                      <p className="catalogue-terms">
-                        Charges follow from{" "}
-                        {r.entry.lagrangian.terms.map((t, k) => (
-                          <span key={k}>
-                            {k > 0 ? ", " : null}
-                            <code>{t}</code>
-                          </span>
-                        ))}{" "}
-                        with {r.entry.lagrangian.normalize} normalised to 1; forbidden:{" "}
-                        {r.entry.lagrangian.forbidden.map((t, k) => (
-                          <span key={k}>
-                            {k > 0 ? ", " : null}
-                            <code>{t}</code>
-                          </span>
-                        ))}
-                        .
-                      </p>
-                      <p>
-                        X_S = {minus(String(r.entry.scalarCharge))}, N_DW = {r.domainWall ? minus(r.domainWall) : "—"}
-                      </p>
-                      {r.entry.note ? <p className="note">{r.entry.note}</p> : null}
-                    </div>
-                  </details>
+                  <EntryDetails row={r} group={g.id} />
                   <input
                     type="checkbox"
                     data-testid="catalogue-pick"

@@ -99,15 +99,80 @@ export function ColourCell({
   );
 }
 
-/** The electroweak cell: its kind, then the fields that kind needs. */
-export function ElectroweakCell(props: {
+interface EwFieldsProps {
   row: FermionDraft;
   label: string;
   edit: Edit;
   bad: (field: string) => boolean;
-}) {
-  const { row, label, edit, bad } = props;
+}
+
+/** SU(2)×U(1): the SU(2) dimension and the hypercharge. */
+function SmFields({ row, label, edit, bad }: EwFieldsProps) {
   const field = { row, edit };
+  return (
+    <>
+      <DraftInput
+        {...field}
+        field="dim"
+        className="tiny"
+        label={`SU(2) dimension of ${label}`}
+        title="SU(2)_L dimension"
+        placeholder="dim"
+        invalid={bad("ew.dim")}
+      />
+      <DraftInput
+        {...field}
+        field="y"
+        className="narrow"
+        label={`Hypercharge Y of ${label}`}
+        title="Hypercharge Y (Q = T₃ + Y)"
+        placeholder="Y"
+        invalid={bad("ew.y")}
+      />
+    </>
+  );
+}
+
+/** SU(3)_L × U(1)_X: the representation, X, and β where the representation is not a singlet. */
+function Su3lFields({ row, label, edit, bad }: EwFieldsProps) {
+  const field = { row, edit };
+  return (
+    <>
+      <select
+        aria-label={`SU(3)_L representation of ${label}`}
+        value={row.rep}
+        onChange={(e) => edit({ rep: e.target.value as FermionDraft["rep"] })}
+      >
+        <option value="1">1</option>
+        <option value="3">3</option>
+        <option value="3bar">3̅</option>
+      </select>
+      <DraftInput
+        {...field}
+        field="x"
+        className="narrow"
+        label={`U(1)_X charge of ${label}`}
+        title="U(1)_X charge X (Q = T₃ + βT₈ + X)"
+        invalid={bad("ew.x")}
+      />
+      {row.rep === "1" ? null : (
+        <DraftInput
+          {...field}
+          field="beta"
+          className="narrow"
+          label={`β of ${label}`}
+          title={`β as in Q = T₃ + βT₈ + X, e.g. -1/√3, −√3, 1/sqrt(3)${derivedB(row.beta)}`}
+          placeholder="β"
+          invalid={bad("ew.b")}
+        />
+      )}
+    </>
+  );
+}
+
+/** The electroweak cell: its kind, then the fields that kind needs. */
+export function ElectroweakCell(props: EwFieldsProps) {
+  const { row, label, edit, bad } = props;
   return (
     <td className="ew-cell">
       <select
@@ -120,60 +185,13 @@ export function ElectroweakCell(props: {
         <option value="explicit">charges</option>
       </select>
       {row.ewKind === "sm" ? (
-        <>
-          <DraftInput
-            {...field}
-            field="dim"
-            className="tiny"
-            label={`SU(2) dimension of ${label}`}
-            title="SU(2)_L dimension"
-            placeholder="dim"
-            invalid={bad("ew.dim")}
-          />
-          <DraftInput
-            {...field}
-            field="y"
-            className="narrow"
-            label={`Hypercharge Y of ${label}`}
-            title="Hypercharge Y (Q = T₃ + Y)"
-            placeholder="Y"
-            invalid={bad("ew.y")}
-          />
-        </>
+        <SmFields {...props} />
       ) : row.ewKind === "su3l" ? (
-        <>
-          <select
-            aria-label={`SU(3)_L representation of ${label}`}
-            value={row.rep}
-            onChange={(e) => edit({ rep: e.target.value as FermionDraft["rep"] })}
-          >
-            <option value="1">1</option>
-            <option value="3">3</option>
-            <option value="3bar">3̅</option>
-          </select>
-          <DraftInput
-            {...field}
-            field="x"
-            className="narrow"
-            label={`U(1)_X charge of ${label}`}
-            title="U(1)_X charge X (Q = T₃ + βT₈ + X)"
-            invalid={bad("ew.x")}
-          />
-          {row.rep === "1" ? null : (
-            <DraftInput
-              {...field}
-              field="beta"
-              className="narrow"
-              label={`β of ${label}`}
-              title={`β as in Q = T₃ + βT₈ + X, e.g. -1/√3, −√3, 1/sqrt(3)${derivedB(row.beta)}`}
-              placeholder="β"
-              invalid={bad("ew.b")}
-            />
-          )}
-        </>
+        <Su3lFields {...props} />
       ) : (
         <DraftInput
-          {...field}
+          row={row}
+          edit={edit}
           field="charges"
           label={`Electric charges of ${label}`}
           title="Component charges, e.g. 2/3, -1/3"

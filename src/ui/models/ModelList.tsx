@@ -10,6 +10,7 @@ import type { LineStyle, Model, SetDraw } from "../../project/types";
 import { selectModelIds, selectPhysics, useAxband, type AxbandState } from "../store";
 import { useCalculatorRequest } from "./calculator-draft";
 import { minus } from "../format";
+import { OrderButtons } from "../layout/OrderButtons";
 import { EOVERN_HINT, eOverNText, kindFieldsOf } from "./model-kind-text";
 
 const LINE_STYLES: { value: LineStyle; label: string }[] = [
@@ -173,25 +174,72 @@ function SpreadField({ model }: { model: Model }) {
   );
 }
 
-function ModelRow({ id, index, count }: { id: string; index: number; count: number }) {
-  const model = useAxband(useCallback((s: AxbandState) => s.project.models.find((m) => m.id === id), [id]));
+/** Whether the drawn band of a model reaches g = 0. */
+function useCancels(model: Model | undefined): boolean {
   const physics = useAxband(selectPhysics);
-  const requestEdit = useCalculatorRequest((s) => s.requestEdit);
-  const { updateModel, removeModel, moveModel } = useAxband(
-    useShallow((s: AxbandState) => ({
-      updateModel: s.updateModel,
-      removeModel: s.removeModel,
-      moveModel: s.moveModel,
-    })),
-  );
-  if (!model) return null;
+  if (!model) return false;
   const constants = constantsOf(physics);
   const shape = modelShape(model, constants);
   // An interval holding c_γ cancels; lines (between, set) reach g = 0 only where one of them does.
-  const cancels =
+  return (
     shape !== null &&
     shape.kind === "interval" &&
-    (shapeCancels(shape, constants) || shapeNormalizedRange(shape, constants, model.sigmas)[0] === 0);
+    (shapeCancels(shape, constants) || shapeNormalizedRange(shape, constants, model.sigmas)[0] === 0)
+  );
+}
+
+/** Reopen in the calculator (its own models only), move up and down, remove. */
+function RowButtons({ model, index, count }: { model: Model; index: number; count: number }) {
+  const requestEdit = useCalculatorRequest((s) => s.requestEdit);
+  const { removeModel, moveModel } = useAxband(
+    useShallow((s: AxbandState) => ({ removeModel: s.removeModel, moveModel: s.moveModel })),
+  );
+  return (
+    <span className="row-buttons">
+      {model.source.kind === "calculator" ? (
+        <button
+          type="button"
+          className="icon"
+          aria-label={`Edit ${model.label} in the anomaly calculator`}
+          title="Reopen in the anomaly calculator"
+          onClick={() => requestEdit(model)}
+        >
+          ✎
+        </button>
+      ) : null}
+      <OrderButtons
+        label={model.label}
+        index={index}
+        count={count}
+        move={(d) => moveModel(model.id, d)}
+        remove={() => removeModel(model.id)}
+      />
+    </span>
+  );
+}
+
+function LineStyleField({ model }: { model: Model }) {
+  const updateModel = useAxband((s) => s.updateModel);
+  return (
+    <select
+      aria-label={`Line style of ${model.label}`}
+      value={model.lineStyle}
+      onChange={(e) => updateModel(model.id, { lineStyle: e.target.value as LineStyle })}
+    >
+      {LINE_STYLES.map((s) => (
+        <option key={s.value} value={s.value}>
+          {s.label}
+        </option>
+      ))}
+    </select>
+  );
+}
+
+function ModelRow({ id, index, count }: { id: string; index: number; count: number }) {
+  const model = useAxband(useCallback((s: AxbandState) => s.project.models.find((m) => m.id === id), [id]));
+  const updateModel = useAxband((s) => s.updateModel);
+  const cancels = useCancels(model);
+  if (!model) return null;
   return (
     <li
       className={`model-row${model.visible ? "" : " hidden-model"}`}
@@ -224,59 +272,11 @@ function ModelRow({ id, index, count }: { id: string; index: number; count: numb
           />
           <span className="visually-hidden">Show {model.label}</span>
         </label>
-        <span className="row-buttons">
-          {model.source.kind === "calculator" ? (
-            <button
-              type="button"
-              className="icon"
-              aria-label={`Edit ${model.label} in the anomaly calculator`}
-              title="Reopen in the anomaly calculator"
-              onClick={() => requestEdit(model)}
-            >
-              ✎
-            </button>
-          ) : null}
-          <button
-            type="button"
-            className="icon"
-            aria-label={`Move ${model.label} up`}
-            disabled={index === 0}
-            onClick={() => moveModel(model.id, -1)}
-          >
-            ↑
-          </button>
-          <button
-            type="button"
-            className="icon"
-            aria-label={`Move ${model.label} down`}
-            disabled={index === count - 1}
-            onClick={() => moveModel(model.id, 1)}
-          >
-            ↓
-          </button>
-          <button
-            type="button"
-            className="icon danger"
-            aria-label={`Remove ${model.label}`}
-            onClick={() => removeModel(model.id)}
-          >
-            ✕
-          </button>
-        </span>
+        <RowButtons model={model} index={index} count={count} />
       </div>
       <div className="model-row-detail">
         {model.kind === "set" ? <SetField model={model} /> : <EOverNField model={model} />}
-        <select
-          aria-label={`Line style of ${model.label}`}
-          value={model.lineStyle}
-          onChange={(e) => updateModel(model.id, { lineStyle: e.target.value as LineStyle })}
-        >
-          {LINE_STYLES.map((s) => (
-            <option key={s.value} value={s.value}>
-              {s.label}
-            </option>
-          ))}
-        </select>
+        <LineStyleField model={model} />
         <SpreadField model={model} />
       </div>
       {cancels ? (

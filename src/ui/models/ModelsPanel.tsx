@@ -1,8 +1,8 @@
 // The Models section of the sidebar: typed E/N, the catalogue, the model list, and the anomaly calculator
 // (a wide table, so it opens in a dialog over the page; it loads on first opening, apart from the first figure,
 // and then stays mounted so its table survives closing).
-import { lazy, Suspense, useEffect, useRef, useState } from "react";
-import { createPortal } from "react-dom";
+import { lazy, Suspense, useState } from "react";
+import { Dialog } from "./Dialog";
 import { AddModel } from "./AddModel";
 import { Catalogue } from "./Catalogue";
 import { ModelList } from "./ModelList";
@@ -16,45 +16,24 @@ function CalculatorDialog({ open, onClose }: { open: boolean; onClose: () => voi
   // Mounted from the first opening on (closing only hides it).
   const [opened, setOpened] = useState(open);
   if (open && !opened) setOpened(true);
-  const panel = useRef<HTMLDivElement>(null);
-  useEffect(() => {
-    if (!open) return;
-    panel.current?.focus();
-    const onKey = (e: KeyboardEvent) => {
-      if (e.key === "Escape") onClose();
-    };
-    window.addEventListener("keydown", onKey);
-    return () => window.removeEventListener("keydown", onKey);
-  }, [open, onClose]);
-  // A portal: the sidebar is a sticky stacking context, and the dialog must cover the whole page.
-  return createPortal(
-    <div className="dialog-backdrop" hidden={!open} onMouseDown={(e) => e.target === e.currentTarget && onClose()}>
-      <div
-        className="dialog"
-        role="dialog"
-        aria-modal="true"
-        aria-labelledby="calculator-title"
-        ref={panel}
-        tabIndex={-1}
-      >
-        <div className="dialog-head">
-          <h2 id="calculator-title">Anomaly calculator</h2>
-          <button type="button" className="icon" aria-label="Close the anomaly calculator" onClick={onClose}>
-            ✕
-          </button>
-        </div>
-        <p className="note">
-          Left-handed Weyl fermions (a right-handed field enters with its PQ charge 𝒳 negated): N = Σ 𝒳·T(R)·n_w, E = Σ
-          𝒳·d(R)·Σ Q², N_DW = |2N/𝒳_S|.
-        </p>
-        {opened ? (
-          <Suspense fallback={<p className="note loading">Loading the anomaly calculator…</p>}>
-            <AnomalyCalculator />
-          </Suspense>
-        ) : null}
-      </div>
-    </div>,
-    document.body,
+  return (
+    <Dialog
+      open={open}
+      onClose={onClose}
+      titleId="calculator-title"
+      title="Anomaly calculator"
+      closeLabel="Close the anomaly calculator"
+    >
+      <p className="note">
+        Left-handed Weyl fermions (a right-handed field enters with its PQ charge 𝒳 negated): N = Σ 𝒳·T(R)·n_w, E = Σ
+        𝒳·d(R)·Σ Q², N_DW = |2N/𝒳_S|.
+      </p>
+      {opened ? (
+        <Suspense fallback={<p className="note loading">Loading the anomaly calculator…</p>}>
+          <AnomalyCalculator />
+        </Suspense>
+      ) : null}
+    </Dialog>
   );
 }
 

@@ -2,6 +2,7 @@
 // bad entry), y view, top axis, grid, legend place, font family and size, and title.
 import { useId, useState } from "react";
 import type { Figure, FigureFont, LegendPlace, SizePreset, TopAxis, YView } from "../../project/types";
+import { CUSTOM_MM_LIMITS } from "../../project/limits";
 import { useShallow } from "zustand/react/shallow";
 import { useAxband, type AxbandState } from "../store";
 
@@ -255,16 +256,16 @@ export function FigureSettings() {
           <NumberSetting
             label="Width (mm)"
             value={figure.customWidthMm}
-            min={20}
-            max={1000}
+            min={CUSTOM_MM_LIMITS[0]}
+            max={CUSTOM_MM_LIMITS[1]}
             step={1}
             onChange={(v) => set({ customWidthMm: v }, "figure:width")}
           />
           <NumberSetting
             label="Height (mm)"
             value={figure.customHeightMm}
-            min={20}
-            max={1000}
+            min={CUSTOM_MM_LIMITS[0]}
+            max={CUSTOM_MM_LIMITS[1]}
             step={1}
             onChange={(v) => set({ customHeightMm: v }, "figure:height")}
           />

@@ -106,6 +106,107 @@ function curveWriter(curves: CurveDataStore | null, problem: () => void) {
   };
 }
 
+type Stores = ReturnType<typeof storesOf>;
+
+/** Pushes `text` as an alert the first time the returned function is called, and never again. */
+function alertOnce(store: StoreApi<AxbandState>, text: string): () => void {
+  let told = false;
+  return () => {
+    if (told) return;
+    told = true;
+    store.getState().pushMessage("alert", text);
+  };
+}
+
+/** This tab's view of the saved revisions: the one its work builds on, and the newest heard from other tabs. */
+function revisionTracker(local: KeyValueStorage | null, start: Revision | null) {
+  const tab = newTabId();
+  let base = start;
+  let heard: Revision | null = null;
+  return {
+    /** The newest revision another tab saved that this tab's work does not build on, if any. */
+    otherNewer(): Revision | null {
+      const latest = newer(storedRevision(local), heard);
+      return latest && latest.tab !== tab && latest.seq > (base?.seq ?? 0) ? latest : null;
+    },
+    /** The revision for the next save. */
+    next(): Revision {
+      return { seq: (newer(base, storedRevision(local))?.seq ?? 0) + 1, tab, at: Date.now() };
+    },
+    builtOn(rev: Revision): void {
+      base = newer(base, rev);
+    },
+    hear(rev: Revision): void {
+      heard = newer(heard, rev);
+    },
+    /** This tab keeps its work over the other tab's: it now builds on everything saved so far. */
+    takeOver(): void {
+      base = newer(storedRevision(local), heard);
+    },
+  };
+}
+
+/**
+ * Puts the project text into localStorage, or into the spare store when localStorage is full; returns the
+ * spare store's pending write (null when there is none), which ends in `savedAs` or a note of what was lost.
+ */
+function storeText(
+  { local, spare, session }: Stores,
+  { text, rev, project }: { text: string; rev: Revision; project: Project },
+  savedAs: (rev: Revision) => void,
+  problem: () => void,
+): Promise<void> | null {
+  if (!local) {
+    problem();
+    return null;
+  }
+  try {
+    local.setItem(STORAGE_KEY, text);
+    savedAs(rev);
+    return null;
+  } catch {
+    problem();
+    const kept = spare
+      ? spare.put({ text, rev }).then(
+          () => true,
+          () => false,
+        )
+      : Promise.resolve(false);
+    return kept.then((ok) => (ok ? savedAs(rev) : noteLost(session, project, rev)));
+  }
+}
+
+interface AutosaveEvents {
+  /** The project changed. */
+  change(): void;
+  /** The user chose how to settle a conflict with another tab. */
+  choice(choice: "load" | "keep"): void;
+  /** Another tab saved `rev`. */
+  heard(rev: Revision): void;
+  pageHide(): void;
+}
+
+/** Connects the events to the store, the other tabs and pagehide; returns the function that disconnects them. */
+function wire(store: StoreApi<AxbandState>, channel: Stores["channel"], on: AutosaveEvents): () => void {
+  const unsubscribe = store.subscribe((s, prev) => {
+    if (s.project !== prev.project) on.change();
+    const choice = s.ui.tabConflict?.choice;
+    if (choice && choice !== prev.ui.tabConflict?.choice) on.choice(choice);
+  });
+  const unlisten = channel?.listen(on.heard);
+  const onPageHide = () => on.pageHide();
+  const target = globalThis as {
+    addEventListener?: typeof addEventListener;
+    removeEventListener?: typeof removeEventListener;
+  };
+  target.addEventListener?.("pagehide", onPageHide);
+  return () => {
+    unsubscribe();
+    unlisten?.();
+    target.removeEventListener?.("pagehide", onPageHide);
+  };
+}
+
 /**
  * Saves the store's project after every change (debounced) and on pagehide.
  * Curve arrays are written only when their references changed since the last save. The text goes to
@@ -113,30 +214,16 @@ function curveWriter(curves: CurveDataStore | null, problem: () => void) {
  * that fails too a note of what was not saved goes to sessionStorage for the next start.
  */
 export function startAutosave(store: StoreApi<AxbandState>, opts: AutosaveOpts = {}): Autosave {
-  const { local, curves, spare, session, channel } = storesOf(opts);
-  const debounceMs = opts.debounceMs ?? 300;
-  const tab = newTabId();
-  let base: Revision | null = restoredRevisions.get(store) ?? storedRevision(local);
-  let heard: Revision | null = null;
-  let told = false;
+  const stores = storesOf(opts);
+  const revs = revisionTracker(stores.local, restoredRevisions.get(store) ?? storedRevision(stores.local));
   let timer: ReturnType<typeof setTimeout> | null = null;
   let lastSaved: Project | null = null;
-
-  const problem = () => {
-    if (told) return;
-    told = true;
-    store.getState().pushMessage("alert", STORAGE_PROBLEM);
-  };
-  const curveData = curveWriter(curves, problem);
+  const problem = alertOnce(store, STORAGE_PROBLEM);
+  const curveData = curveWriter(stores.curves, problem);
   const savedAs = (rev: Revision) => {
-    base = newer(base, rev);
-    clearLost(session);
-    channel?.post(rev);
-  };
-  /** The newest revision another tab saved that this tab's work does not build on, if any. */
-  const otherNewer = (): Revision | null => {
-    const latest = newer(storedRevision(local), heard);
-    return latest && latest.tab !== tab && latest.seq > (base?.seq ?? 0) ? latest : null;
+    revs.builtOn(rev);
+    clearLost(stores.session);
+    stores.channel?.post(rev);
   };
   const conflict = (rev: Revision) => {
     if (timer !== null) clearTimeout(timer);
@@ -149,41 +236,27 @@ export function startAutosave(store: StoreApi<AxbandState>, opts: AutosaveOpts =
     const file = loadedFileModule() ?? (await loadFileModule());
     const project = store.getState().project;
     if (project === lastSaved || store.getState().ui.tabConflict) return;
-    const other = otherNewer();
+    const other = revs.otherNewer();
     if (other) return conflict(other);
     lastSaved = project;
     // Curves first, so a saved project never names curves whose data is not stored yet.
     const writes = curveData.write(project);
-    const rev: Revision = { seq: (newer(base, storedRevision(local))?.seq ?? 0) + 1, tab, at: Date.now() };
+    const rev = revs.next();
     const text = withRevision(metaOf(file, project), rev);
-    if (!local) problem();
-    else {
-      try {
-        local.setItem(STORAGE_KEY, text);
-        savedAs(rev);
-      } catch {
-        problem();
-        const kept = spare
-          ? spare.put({ text, rev }).then(
-              () => true,
-              () => false,
-            )
-          : Promise.resolve(false);
-        writes.push(kept.then((ok) => (ok ? savedAs(rev) : noteLost(session, project, rev))));
-      }
-    }
+    const kept = storeText(stores, { text, rev, project }, savedAs, problem);
+    if (kept) writes.push(kept);
     await Promise.all(writes);
   };
   const schedule = () => {
     // Loaded at the first change (not at start-up), so that a save on pagehide finds it.
     if (!loadedFileModule()) void loadFileModule();
     if (timer !== null) clearTimeout(timer);
-    timer = setTimeout(() => void save(), debounceMs);
+    timer = setTimeout(() => void save(), opts.debounceMs ?? 300);
   };
   const resolve = async (choice: "load" | "keep") => {
     if (choice === "keep") {
       // The other tab may have deleted curve data this tab still shows: write every curve again.
-      base = newer(storedRevision(local), heard);
+      revs.takeOver();
       curveData.reset(null);
       lastSaved = null;
       store.getState().setTabConflict(null);
@@ -192,26 +265,20 @@ export function startAutosave(store: StoreApi<AxbandState>, opts: AutosaveOpts =
     const loaded = await loadNewest(store, opts);
     store.getState().setTabConflict(null);
     if (!loaded) return;
-    base = newer(base, loaded.rev);
+    revs.builtOn(loaded.rev);
     curveData.reset(loaded.project);
     lastSaved = loaded.project;
   };
-  const unsubscribe = store.subscribe((s, prev) => {
-    if (s.project !== prev.project) schedule();
-    const choice = s.ui.tabConflict?.choice;
-    if (choice && choice !== prev.ui.tabConflict?.choice) void resolve(choice);
+  const unwire = wire(store, stores.channel, {
+    change: schedule,
+    choice: (choice) => void resolve(choice),
+    heard(rev) {
+      revs.hear(rev);
+      const other = revs.otherNewer();
+      if (other) conflict(other);
+    },
+    pageHide: () => void save(),
   });
-  const unlisten = channel?.listen((rev) => {
-    heard = newer(heard, rev);
-    const other = otherNewer();
-    if (other) conflict(other);
-  });
-  const onPageHide = () => void save();
-  const target = globalThis as {
-    addEventListener?: typeof addEventListener;
-    removeEventListener?: typeof removeEventListener;
-  };
-  target.addEventListener?.("pagehide", onPageHide);
 
   return {
     flush() {
@@ -221,9 +288,7 @@ export function startAutosave(store: StoreApi<AxbandState>, opts: AutosaveOpts =
     stop() {
       if (timer !== null) clearTimeout(timer);
       timer = null;
-      unsubscribe();
-      unlisten?.();
-      target.removeEventListener?.("pagehide", onPageHide);
+      unwire();
     },
   };
 }

@@ -1,7 +1,7 @@
 // The heavy-quark ensemble panel: choose representations, N_Q, charges and the Landau-pole criterion, enumerate in a
 // Web Worker (progress, cancel), show the spectrum as histograms, export it as CSV, add it to the figure as a set.
 import { useEffect, useRef, useState } from "react";
-import { createPortal } from "react-dom";
+import { Dialog } from "../Dialog";
 import { HEAVY_QUARK_TAGS, LANDAU_DEFAULTS, type EnsembleResult } from "../../../physics/ensemble";
 import { DLMN_REPS } from "../../../physics/catalogue";
 import { constantsOf } from "../../../project/physics-constants";
@@ -162,18 +162,10 @@ function EnsembleResultView({ result, req }: { result: EnsembleResult; req: Ense
 }
 
 export function EnsemblePanel({ open, onClose }: { open: boolean; onClose: () => void }) {
-  const panel = useRef<HTMLDivElement>(null);
   const run = useRef<EnsembleRun | null>(null);
   const [progress, setProgress] = useState<number | null>(null);
   const [error, setError] = useState<string | null>(null);
   const [done, setDone] = useState<{ result: EnsembleResult; req: EnsembleRequest } | null>(null);
-  useEffect(() => {
-    if (!open) return;
-    panel.current?.focus();
-    const onKey = (e: KeyboardEvent) => e.key === "Escape" && onClose();
-    window.addEventListener("keydown", onKey);
-    return () => window.removeEventListener("keydown", onKey);
-  }, [open, onClose]);
   useEffect(() => () => run.current?.cancel(), []);
   const start = (req: EnsembleRequest) => {
     run.current?.cancel();
@@ -188,35 +180,25 @@ export function EnsemblePanel({ open, onClose }: { open: boolean; onClose: () =>
         run.current === r && (setError(e.message === "cancelled" ? "Cancelled." : e.message), setProgress(null)),
     );
   };
-  return createPortal(
-    <div className="dialog-backdrop" hidden={!open} onMouseDown={(e) => e.target === e.currentTarget && onClose()}>
-      <div
-        className="dialog"
-        role="dialog"
-        aria-modal="true"
-        aria-labelledby="ensemble-title"
-        ref={panel}
-        tabIndex={-1}
-      >
-        <div className="dialog-head">
-          <h2 id="ensemble-title">Heavy-quark ensemble</h2>
-          <button type="button" className="icon" aria-label="Close the heavy-quark ensemble" onClick={onClose}>
-            ✕
+  return (
+    <Dialog
+      open={open}
+      onClose={onClose}
+      titleId="ensemble-title"
+      title="Heavy-quark ensemble"
+      closeLabel="Close the heavy-quark ensemble"
+    >
+      <EnsembleForm onRun={start} busy={progress !== null} />
+      {progress !== null ? (
+        <p role="status">
+          Enumerating… {progress.toLocaleString("en")} multisets so far{" "}
+          <button type="button" onClick={() => run.current?.cancel()}>
+            Cancel
           </button>
-        </div>
-        <EnsembleForm onRun={start} busy={progress !== null} />
-        {progress !== null ? (
-          <p role="status">
-            Enumerating… {progress.toLocaleString("en")} multisets so far{" "}
-            <button type="button" onClick={() => run.current?.cancel()}>
-              Cancel
-            </button>
-          </p>
-        ) : null}
-        {error ? <p role="alert">{error}</p> : null}
-        {done ? <EnsembleResultView result={done.result} req={done.req} /> : null}
-      </div>
-    </div>,
-    document.body,
+        </p>
+      ) : null}
+      {error ? <p role="alert">{error}</p> : null}
+      {done ? <EnsembleResultView result={done.result} req={done.req} /> : null}
+    </Dialog>
   );
 }
