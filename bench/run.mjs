@@ -8,6 +8,7 @@ const scripts = [
   ["CSV import (parser alone vs a general CSV library)", "bench/import.mjs"],
   ["CSV import end to end (worker + transfer, Chromium)", "bench/import-browser.mjs"],
   ["Figure redraw during a zoom step (Chromium)", "bench/redraw.mjs"],
+  ["Command line as users run it (bin, npx) vs node -e 0 and gnuplot", "bench/cli.mjs"],
   ["Command-line renderer vs reference plotting script", "bench/render.mjs"],
   ["Overlap summary, benchmark set × demo models", "bench/overlap.mjs"],
   ["Heavy-quark ensembles, N_Q ≤ 28 with the Landau-pole criterion", "bench/ensemble.mjs"],
