@@ -35,6 +35,7 @@ const buf = {
   right: new Float64Array(1024),
   top: new Float64Array(1024),
   bot: new Float64Array(1024),
+  deque: new Int32Array(1024),
 };
 
 function grow(a: Float64Array<ArrayBuffer>, n: number, keep: number): Float64Array<ArrayBuffer> {
@@ -175,8 +176,7 @@ function closeRun(m: number, at: number, run: number): number {
 /**
  * The upper (lowest y) or lower (highest y) edge of the union of the run's boxes, left to right, as a
  * staircase. Left and right edges both increase along the run, so the boxes over any x are a contiguous
- * range [a, b) that a sweep moves forward; the range is a few columns long (the stroke width over the
- * column width), so it is scanned for its extreme.
+ * range [a, b) that a sweep moves forward, and a monotone deque holds its extreme.
  */
 // A hot loop, long on purpose: the sweep over the rectangle edges with its output inlined.
 function chain(m: number, at: number, lower: boolean): number {
@@ -184,27 +184,33 @@ function chain(m: number, at: number, lower: boolean): number {
   const val = lower ? buf.bot : buf.top;
   const ox = buf.bandX;
   const oy = buf.bandY;
+  if (buf.deque.length < m) buf.deque = new Int32Array(2 * m);
+  // The boxes over x whose extreme can still matter, extremes first (a monotone deque: O(1) per box).
+  const dq = buf.deque;
+  let head = 0;
+  let tail = 0;
   let w = at;
   let a = 0;
-  let b = 1;
+  let b = 0;
   let cur = val[0];
   ox[w] = left[0];
   oy[w++] = cur;
   while (a < m) {
     // The next edge: a box starting (ties: starts first, so the range never empties in between) or ending.
     const x = b < m && left[b] <= right[a] ? left[b] : right[a];
-    while (b < m && left[b] <= x) b++;
+    for (; b < m && left[b] <= x; b++) {
+      const y = val[b];
+      while (tail > head && (lower ? val[dq[tail - 1]] <= y : val[dq[tail - 1]] >= y)) tail--;
+      dq[tail++] = b;
+    }
     while (a < b && right[a] <= x) a++;
+    while (tail > head && dq[head] < a) head++;
     if (a >= b) {
       ox[w] = x;
       oy[w++] = cur;
       break;
     }
-    let v = val[a];
-    for (let k = a + 1; k < b; k++) {
-      const y = val[k];
-      if (lower ? y > v : y < v) v = y;
-    }
+    const v = val[dq[head]];
     if (v !== cur) {
       ox[w] = x;
       oy[w++] = cur;
