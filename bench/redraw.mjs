@@ -4,7 +4,9 @@
 // plain full-resolution draw of the same data in the same run. Prints medians and ratios; never pass/fail.
 // Options (environment): AXBAND_BENCH_STEPS (zoom steps, default 40), AXBAND_BENCH_PLAIN_STEPS (full draws,
 // default 6), AXBAND_BENCH_DETAIL=1 (every step), AXBAND_BENCH_DOM_ONLY=1 (DOM cost of prebuilt scenes only),
-// AXBAND_BENCH_MINIFY=0 (readable bundle for profiling), AXBAND_BENCH_NO_TRACE=1 (skip the painting trace),
+// AXBAND_BENCH_FPS_ONLY=1 (only the frames per second of a continuous zoom), AXBAND_BENCH_NO_FPS=1 (skip it),
+// AXBAND_BENCH_FPS_STEPS (default 80), AXBAND_BENCH_FPS_ROUNDS (default 3),
+// AXBAND_BENCH_FPS_KINDS=scan,region (diagnostics: only these kinds of the benchmark curves), AXBAND_BENCH_MINIFY=0 (readable bundle for profiling), AXBAND_BENCH_NO_TRACE=1 (skip the painting trace),
 // AXBAND_BENCH_LEGEND=auto (the legend place; default outside-right: the automatic place costs more, see DEVELOPERS.md),
 // CHROMIUM_PATH (default /usr/bin/chromium).
 import { spawnSync } from "node:child_process";
@@ -22,6 +24,8 @@ const POINTS = 100000;
 const STEPS = Number(process.env.AXBAND_BENCH_STEPS ?? 40);
 const PLAIN_STEPS = Number(process.env.AXBAND_BENCH_PLAIN_STEPS ?? 6);
 const LEGEND = process.env.AXBAND_BENCH_LEGEND ?? "outside-right";
+const FPS_STEPS = Number(process.env.AXBAND_BENCH_FPS_STEPS ?? 80);
+const FPS_ROUNDS = Number(process.env.AXBAND_BENCH_FPS_ROUNDS ?? 3);
 
 function log(...a) {
   console.log(...a);
@@ -119,6 +123,63 @@ function serve(files) {
   return new Promise((ok) => server.listen(0, "127.0.0.1", () => ok(server)));
 }
 
+/**
+ * Frames per second of a continuous zoom (one step per animation frame, as a trackpad gives), with the dense
+ * columns drawn as a min–max envelope (what the figure does) and as the plain zig-zag, each in a fresh tab,
+ * traced for the painting (raster) time per frame. The page steps once per animation frame and the browser
+ * holds the next frame back until the last one is painted, so steps per second are frames per second.
+ */
+async function continuousZoom(browser, port) {
+  const runs = { zigzag: [], envelope: [] };
+  // Alternated rounds, so that a busy spell of the shared machine does not fall on one variant only.
+  for (let round = 0; round < FPS_ROUNDS; round++)
+    for (const envelope of [false, true]) {
+      const tab = await browser.newPage({ viewport: { width: 1280, height: 800 } });
+      await tab.goto(`http://127.0.0.1:${port}/`);
+      await tab.waitForSelector("body[data-ready='1']", { timeout: 60000 });
+      await browser.startTracing(tab, {
+        categories: ["devtools.timeline", "disabled-by-default-devtools.timeline", "blink.user_timing", "benchmark"],
+      });
+      const r = await tab.evaluate((o) => window.continuous(o), {
+        steps: FPS_STEPS,
+        legend: LEGEND,
+        envelope,
+        kinds: process.env.AXBAND_BENCH_FPS_KINDS?.split(","),
+      });
+      const events = JSON.parse((await browser.stopTracing()).toString()).traceEvents;
+      await tab.close();
+      const mark = (name) => events.find((e) => e.name === name)?.ts;
+      const from = mark("axband-continuous-start") ?? 0;
+      const to = mark("axband-continuous-end") ?? Infinity;
+      const within = (e) => e.ts >= from && e.ts <= to;
+      const raster = events.filter((e) => e.ph === "X" && e.name === "RasterTask" && within(e));
+      const rasterMs = raster.reduce((sum, e) => sum + (e.dur ?? 0), 0) / 1000;
+      // The raster threads' own CPU time (tdur): what painting costs, whoever else shares the cores.
+      const rasterCpuMs = raster.reduce((sum, e) => sum + (e.tdur ?? e.dur ?? 0), 0) / 1000;
+      runs[envelope ? "envelope" : "zigzag"].push({ ...r, rasterMs, rasterCpuMs });
+    }
+  const med = (xs) => [...xs].sort((a, b) => a - b)[(xs.length - 1) >> 1];
+  const out = {};
+  for (const [name, rs] of Object.entries(runs))
+    out[name] = {
+      fps: med(rs.map((r) => r.fps)),
+      all: rs.map((r) => r.fps.toFixed(1)).join(", "),
+      buildMs: med(rs.map((r) => r.buildMs)),
+      renderMs: med(rs.map((r) => r.renderMs)),
+      paintMs: med(rs.map((r) => r.rasterMs / r.steps)),
+      paintCpuMs: med(rs.map((r) => r.rasterCpuMs / r.steps)),
+    };
+  log(
+    `continuous zoom, ${FPS_STEPS} steps, one per animation frame; median of ${FPS_ROUNDS} alternated round(s) (median build / React+DOM ms per step):`,
+  );
+  for (const [name, r] of Object.entries(out)) {
+    log(
+      `  ${name.padEnd(9)} ${r.fps.toFixed(1).padStart(5)} frames/s (${r.all}); build ${r.buildMs.toFixed(1)} ms, DOM ${r.renderMs.toFixed(1)} ms; painting ${r.paintMs.toFixed(1)} ms per step (${r.paintCpuMs.toFixed(1)} ms CPU)`,
+    );
+  }
+  log(`  target ≥ 45 frames per second; envelope/zig-zag: ${(out.envelope.fps / out.zigzag.fps).toFixed(2)}×`);
+}
+
 async function main() {
   mkdirSync(outDir, { recursive: true });
   const manifest = ensureCurves();
@@ -157,6 +218,8 @@ async function main() {
       }
       return;
     }
+    if (!process.env.AXBAND_BENCH_NO_FPS) await continuousZoom(browser, port);
+    if (process.env.AXBAND_BENCH_FPS_ONLY) return;
     const r = await page.evaluate((o) => window.runBench(o), { steps: STEPS, plainSteps: PLAIN_STEPS, legend: LEGEND });
     if (errors.length) log("page errors:", errors.join("\n"));
     if (process.env.AXBAND_BENCH_DETAIL) {

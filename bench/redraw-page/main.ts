@@ -211,7 +211,8 @@ async function run(opts: {
     s.layers.reduce((n, l) => n + l.nodes.reduce((k, nd) => k + (nd.kind === "path" ? nd.d.length : 0), 0), 0);
 
   let t = performance.now();
-  const resting = buildScene(at(ranges[0]), { resolution });
+  // As the figure draws: dense columns as envelopes.
+  const resting = buildScene(at(ranges[0]), { resolution, envelope: true });
   render(resting);
   // The zoom steps are one gesture: an automatic legend keeps this first frame's place meanwhile, as the app's
   // figure holds it (useFigureGestures, LEGEND_HOLD_MS); a fixed place is unaffected.
@@ -222,7 +223,7 @@ async function run(opts: {
   // code as a figure in use does (and the unsorted curves' thinning levels of this sequence exist; they
   // are built on the first visit of a zoom level and reused).
   for (const r of ranges.slice(0, opts.warmSteps ?? ranges.length)) {
-    render(buildScene(at(r), { resolution, holdLegend }));
+    render(buildScene(at(r), { resolution, holdLegend, envelope: true }));
     sync();
     await new Promise((res) => requestAnimationFrame(() => res(null)));
   }
@@ -238,7 +239,7 @@ async function run(opts: {
   if (opts.profile) console.profile("axband-zoom");
   for (const r of ranges) {
     const t0 = performance.now();
-    const scene = buildScene(at(r), { resolution, holdLegend });
+    const scene = buildScene(at(r), { resolution, holdLegend, envelope: true });
     // Diagnostics: leave out all text or all curves before drawing (the build time above stays whole).
     if (opts.strip)
       for (const l of scene.layers)
@@ -332,6 +333,68 @@ async function run(opts: {
 }
 
 (window as unknown as { runBench: typeof run }).runBench = run;
+
+/**
+ * Continuous zoom as a trackpad gives it: one zoom step per animation frame, built and handed to the app's
+ * figure component inside the frame callback (as the figure's gesture handler batches wheel events per frame),
+ * with no forced layout, so the browser paces the steps by the frames it manages to paint. Frames per second =
+ * steps / elapsed time; bench/redraw.mjs also counts the frames the compositor drew in a trace.
+ */
+async function continuous(opts: {
+  steps: number;
+  legend?: Project["figure"]["legend"];
+  envelope?: boolean;
+  /** Diagnostics: draw only the curves of these kinds (scan, plateau, projection, region). */
+  kinds?: string[];
+}): Promise<{ steps: number; elapsedMs: number; fps: number; buildMs: number; renderMs: number }> {
+  const project = await loadProject(opts.legend);
+  const kinds = opts.kinds;
+  if (kinds) project.curves = project.curves.filter((c) => kinds.some((k) => c.fileName.includes(k)));
+  const host = document.getElementById("plot")!;
+  host.textContent = "";
+  const render = createAppRenderer(host);
+  const ranges = zoomSequence(project.figure.massRangeEv, opts.steps);
+  const resolution = window.devicePixelRatio || 1;
+  const at = (r: [number, number]): Project => ({ ...project, figure: { ...project.figure, massRangeEv: r } });
+  const frame = () => new Promise<number>((res) => requestAnimationFrame(res));
+  const resting = buildScene(at(ranges[0]), { resolution, envelope: opts.envelope });
+  render(resting);
+  const holdLegend = resting.autoLegendPlace;
+  const step = (r: [number, number], times?: { b: number[]; d: number[] }) => {
+    const t0 = performance.now();
+    const scene = buildScene(at(r), { resolution, holdLegend, envelope: opts.envelope });
+    const t1 = performance.now();
+    render(scene);
+    times?.b.push(t1 - t0);
+    times?.d.push(performance.now() - t1);
+  };
+  // Warm-up: the sequence once (optimised code, thinning levels built), then a rest for the last paints.
+  for (const r of ranges) {
+    await frame();
+    step(r);
+  }
+  await new Promise((res) => setTimeout(res, 500));
+  const times = { b: [] as number[], d: [] as number[] };
+  await frame();
+  performance.mark("axband-continuous-start");
+  const t0 = performance.now();
+  for (const r of ranges) {
+    await frame();
+    step(r, times);
+  }
+  // The last step's frame: wait for the next frame callback, which follows its paint.
+  await frame();
+  const elapsedMs = performance.now() - t0;
+  performance.mark("axband-continuous-end");
+  return {
+    steps: ranges.length,
+    elapsedMs,
+    fps: (ranges.length * 1000) / elapsedMs,
+    buildMs: median(times.b),
+    renderMs: median(times.d),
+  };
+}
+(window as unknown as { continuous: typeof continuous }).continuous = continuous;
 
 /** Diagnostics: the fastest of `reps` builds of the scene at each depth of the zoom sequence (no drawing). */
 async function buildOnly(opts: { reps: number; depths: number[] }): Promise<{ depth: number; ms: number }[]> {

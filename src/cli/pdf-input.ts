@@ -1,7 +1,6 @@
 // A PDF figure exported by axband as the renderer's input: its attached project file is read back (PDF
 // parsing is asynchronous, so this sits beside the synchronous loaders of inputs.ts).
 import { readFileSync } from "node:fs";
-import { extractProjectFromPdf } from "../formats/figure-pdf";
 import type { CliOptions } from "./args";
 import { InputError, applyFigureOptions, loadProject, undrawablePointNotes, type PreParsed } from "./inputs";
 
@@ -18,6 +17,8 @@ export async function loadAnyProject(
   } catch {
     throw new InputError(`${first.path}: cannot be read`);
   }
+  // The PDF reader loads only for a PDF input: it costs the other runs a good part of their start-up.
+  const { extractProjectFromPdf } = await import("../formats/figure-pdf");
   const r = await extractProjectFromPdf(bytes);
   if (!r.ok) throw new InputError(`${first.path}: ${r.error}`);
   const notes = [

@@ -19,9 +19,8 @@ import {
 } from "../formats/figure-file";
 import { presetOf } from "../plot/layout";
 import { modelsToCsv } from "../formats/model-csv";
-import { exportFigurePdfWithInfo } from "../formats/figure-pdf";
-import { nodePdfFonts } from "./pdf-fonts";
 import { AXBAND_VERSION } from "./version";
+import type { Project } from "../project/types";
 
 /** Where the renderer writes its messages (tests pass their own). */
 export interface Io {
@@ -119,6 +118,104 @@ export function mainWithPreParsed(argv: readonly string[], io: Io, preParsed: Pr
   return run(argv, io, preParsed);
 }
 
+/** One output: the file to write and the line that reports it once everything is written. */
+interface Output {
+  file: OutputFile;
+  report: string;
+}
+
+/** The figure's size and contents, as the report lines give them. */
+function figureSummary(project: Project): string {
+  const preset = presetOf(project.figure);
+  return `${preset.widthPhysical} × ${preset.heightPhysical}, ${project.curves.length} curve(s), ${project.models.length} model(s)`;
+}
+
+/** The PDF; its writer, fonts and font parser load only here (about a third of a second of start-up otherwise). */
+async function pdfOutput(project: Project, opts: CliOptions, path: string, io: Io): Promise<Output> {
+  const [{ exportFigurePdfWithInfo }, { nodePdfFonts }] = await Promise.all([
+    import("../formats/figure-pdf"),
+    import("./pdf-fonts"),
+  ]);
+  const r = await exportFigurePdfWithInfo(project, {
+    fonts: nodePdfFonts(project.figure.font),
+    creator: `axband ${AXBAND_VERSION}`,
+    embedProject: opts.embed,
+  });
+  if (r.embedded && !r.embeddedCurves)
+    io.err(
+      `note: project attached without curve data (${r.omittedCurves.length} curve(s) too large to embed); the PDF reopens with models, figure and constants only: keep the project file or the CSV files for the data`,
+    );
+  const attached = r.embedded ? ", project attached" : "";
+  return {
+    file: { path, data: r.pdf },
+    report: `wrote ${path} (${size(r.pdf.length)}, ${figureSummary(project)}${attached})`,
+  };
+}
+
+/** The SVG, with the project embedded unless --no-embed. */
+function svgOutput(project: Project, opts: CliOptions, path: string, bare: string, io: Io): Output {
+  const embedded = opts.embed ? embedProjectInSvgWithInfo(bare, project) : undefined;
+  const svg = embedded ? embedded.svg : bare;
+  if (embedded && !embedded.embeddedCurves) {
+    io.err(
+      `note: project embedded without curve data (${embedded.omittedPoints} points exceed ${embedCapText(embedded.omittedBecause ?? "size")}); the SVG reopens with models, figure and constants only: keep the project file or the CSV files for the data`,
+    );
+  }
+  const embedNote = embedded
+    ? embedded.embeddedCurves
+      ? ", project embedded"
+      : ", project embedded without curve data"
+    : "";
+  return {
+    file: { path, data: svg },
+    report: `wrote ${path} (${size(Buffer.byteLength(svg))}, ${figureSummary(project)}${embedNote})`,
+  };
+}
+
+/** The PNG, thinned for its own pixels (≤ 0.5 PNG px), not the 96/in scene px of the SVG. */
+function pngOutput(project: Project, opts: CliOptions, path: string, bare: string): Output {
+  const inches = exportSizeInches(project);
+  const dpi = opts.scale !== undefined ? 96 * opts.scale : opts.dpi;
+  const px = pngPixelSize(inches.widthIn, inches.heightIn, dpi);
+  checkPngPixels(px, dpi);
+  const resolution = rasterResolution(dpi);
+  const forPng =
+    bare && resolution === rasterResolution(96) ? bare : exportFigureSvg(project, { embedProject: false, resolution });
+  const png = renderPng(forPng, px.widthPx, dpi, project.figure.font);
+  const report = `wrote ${path} (${size(png.length)}, ${px.widthPx} × ${px.heightPx} px, ${Math.round(dpi * 100) / 100} dpi)`;
+  return { file: { path, data: png }, report };
+}
+
+/** Every output the options ask for, in the order they are reported. */
+async function outputs(project: Project, opts: CliOptions, io: Io): Promise<Output[]> {
+  const list: Output[] = [];
+  const asPdf = opts.out !== undefined && /\.pdf$/i.test(opts.out);
+  // The project is embedded into the written SVG only; rasters are drawn from the lighter bare SVG.
+  const bare = opts.out && !asPdf ? exportFigureSvg(project, { embedProject: false }) : "";
+  if (opts.out)
+    list.push(asPdf ? await pdfOutput(project, opts, opts.out, io) : svgOutput(project, opts, opts.out, bare, io));
+  if (opts.png) list.push(pngOutput(project, opts, opts.png, bare));
+  if (opts.modelsCsv) {
+    const csv = modelsToCsv(project);
+    const shown = project.models.filter((m) => m.visible).length;
+    list.push({
+      file: { path: opts.modelsCsv, data: csv },
+      report: `wrote ${opts.modelsCsv} (${size(Buffer.byteLength(csv))}, ${shown} model(s))`,
+    });
+  }
+  for (const o of overlapOutputs(project, opts.overlap, opts.overlapIntervals))
+    list.push({ file: { path: o.path, data: o.data }, report: o.report });
+  return list;
+}
+
+/** The lines and exit code of a failure: 2 for bad input or options, 1 for anything unexpected. */
+function failure(e: unknown, io: Io): number {
+  if (e instanceof InputError) io.err(`axband render: ${e.message}`);
+  else io.err(`axband render: unexpected failure: ${e instanceof Error ? (e.stack ?? e.message) : String(e)}`);
+  io.err("nothing was written");
+  return e instanceof InputError ? 2 : 1;
+}
+
 async function run(argv: readonly string[], io: Io, preParsed: PreParsed): Promise<number> {
   const args = parseArgs(argv);
   if (!args.ok) {
@@ -137,89 +234,17 @@ async function run(argv: readonly string[], io: Io, preParsed: PreParsed): Promi
     const loaded = await loadAnyProject(opts, preParsed);
     const { project, notes: fitNotes } = fitFigure(loaded.project);
     for (const n of [...loaded.notes, ...fitNotes]) io.err(`note: ${n}`);
-    const files: OutputFile[] = [];
-    const report: string[] = [];
-    const preset = presetOf(project.figure);
-    const asPdf = opts.out !== undefined && /\.pdf$/i.test(opts.out);
-    // The project is embedded into the written SVG only; rasters are drawn from the lighter bare SVG.
-    const bare = opts.out && !asPdf ? exportFigureSvg(project, { embedProject: false }) : "";
-    if (opts.out && asPdf) {
-      const r = await exportFigurePdfWithInfo(project, {
-        fonts: nodePdfFonts(project.figure.font),
-        creator: `axband ${AXBAND_VERSION}`,
-        embedProject: opts.embed,
-      });
-      if (r.embedded && !r.embeddedCurves)
-        io.err(
-          `note: project attached without curve data (${r.omittedCurves.length} curve(s) too large to embed); the PDF reopens with models, figure and constants only: keep the project file or the CSV files for the data`,
-        );
-      files.push({ path: opts.out, data: r.pdf });
-      report.push(
-        `wrote ${opts.out} (${size(r.pdf.length)}, ${preset.widthPhysical} × ${preset.heightPhysical}, ${project.curves.length} curve(s), ${project.models.length} model(s)${r.embedded ? ", project attached" : ""})`,
-      );
-    }
-    if (opts.out && !asPdf) {
-      const embedded = opts.embed ? embedProjectInSvgWithInfo(bare, project) : undefined;
-      const svg = embedded ? embedded.svg : bare;
-      if (embedded && !embedded.embeddedCurves) {
-        io.err(
-          `note: project embedded without curve data (${embedded.omittedPoints} points exceed ${embedCapText(embedded.omittedBecause ?? "size")}); the SVG reopens with models, figure and constants only: keep the project file or the CSV files for the data`,
-        );
-      }
-      const embedNote = embedded
-        ? embedded.embeddedCurves
-          ? ", project embedded"
-          : ", project embedded without curve data"
-        : "";
-      files.push({ path: opts.out, data: svg });
-      report.push(
-        `wrote ${opts.out} (${size(Buffer.byteLength(svg))}, ${preset.widthPhysical} × ${preset.heightPhysical}, ${project.curves.length} curve(s), ${project.models.length} model(s)${embedNote})`,
-      );
-    }
-    if (opts.png) {
-      const inches = exportSizeInches(project);
-      const dpi = opts.scale !== undefined ? 96 * opts.scale : opts.dpi;
-      const px = pngPixelSize(inches.widthIn, inches.heightIn, dpi);
-      checkPngPixels(px, dpi);
-      // Thinned for the PNG's own pixels (≤ 0.5 PNG px), not the 96/in scene px of the SVG.
-      const resolution = rasterResolution(dpi);
-      const forPng =
-        bare && resolution === rasterResolution(96)
-          ? bare
-          : exportFigureSvg(project, { embedProject: false, resolution });
-      const png = renderPng(forPng, px.widthPx, dpi, project.figure.font);
-      files.push({ path: opts.png, data: png });
-      report.push(
-        `wrote ${opts.png} (${size(png.length)}, ${px.widthPx} × ${px.heightPx} px, ${Math.round(dpi * 100) / 100} dpi)`,
-      );
-    }
-    if (opts.modelsCsv) {
-      const csv = modelsToCsv(project);
-      files.push({ path: opts.modelsCsv, data: csv });
-      report.push(
-        `wrote ${opts.modelsCsv} (${size(Buffer.byteLength(csv))}, ${project.models.filter((m) => m.visible).length} model(s))`,
-      );
-    }
-    for (const o of overlapOutputs(project, opts.overlap, opts.overlapIntervals)) {
-      files.push({ path: o.path, data: o.data });
-      report.push(o.report);
-    }
+    const list = await outputs(project, opts, io);
+    const files = list.map((o) => o.file);
     try {
       writeAllOrNothing(files);
     } catch (e) {
       throw writeError(e, files);
     }
-    for (const line of report) io.out(line);
+    for (const o of list) io.out(o.report);
     return 0;
   } catch (e) {
-    if (e instanceof InputError) {
-      io.err(`axband render: ${e.message}`);
-      io.err("nothing was written");
-      return 2;
-    }
-    io.err(`axband render: unexpected failure: ${e instanceof Error ? (e.stack ?? e.message) : String(e)}`);
-    io.err("nothing was written");
-    return 1;
+    return failure(e, io);
   }
 }
 

@@ -1,8 +1,10 @@
-// Launcher of the command-line renderer (`npm run render`): bundles src/cli/start.ts (which loads render.ts) and
-// the CSV parse worker with esbuild into node_modules/.cache/axband/ when any source file is newer than a bundle,
-// then runs it in this process.
-// Why: starting through a TypeScript loader costs ~1–3 s per run on a small machine, more than rendering.
-import { build } from "esbuild";
+#!/usr/bin/env node
+// Launcher of the command-line renderer (`npx axband render …`, the package's bin; `npm run render -- …`): bundles
+// src/cli/start.ts (which loads render.ts) and the CSV parse worker with esbuild into node_modules/.cache/axband/
+// when any source file is newer than a bundle, then runs it in this process. A leading "render" is the command's
+// name and is dropped.
+// Why: starting through a TypeScript loader costs ~1–3 s per run on a small machine, more than rendering; esbuild
+// itself is loaded only to rebuild.
 import { existsSync, readdirSync, statSync, mkdirSync, rmSync } from "node:fs";
 import { dirname, join, resolve } from "node:path";
 import { fileURLToPath, pathToFileURL } from "node:url";
@@ -33,6 +35,7 @@ const stale =
         .map((f) => statSync(join(repo, f)).mtimeMs),
     );
 if (stale) {
+  const { build } = await import("esbuild");
   mkdirSync(cache, { recursive: true });
   // Chunk names carry content hashes: drop the previous build's so they do not pile up.
   for (const f of readdirSync(cache)) if (f.endsWith(".mjs")) rmSync(join(cache, f), { force: true });
@@ -56,4 +59,6 @@ if (stale) {
   });
 }
 const { mainAsync } = await import(pathToFileURL(out).href);
-process.exitCode = await mainAsync(process.argv.slice(2), undefined, { parseWorker: pathToFileURL(worker) });
+const argv = process.argv.slice(2);
+if (argv[0] === "render") argv.shift();
+process.exitCode = await mainAsync(argv, undefined, { parseWorker: pathToFileURL(worker) });

@@ -106,6 +106,14 @@ function pointCount(project: Project): number {
 }
 
 /** "2 MB" for 2,000,000 characters. */
+/**
+ * A whole number with commas between groups of three digits (500000 → "500,000"), as toLocaleString("en")
+ * writes it without loading the locale data (about 80 ms of the command line's start-up).
+ */
+function groupDigits(n: number): string {
+  return String(n).replace(/\B(?=(\d{3})+(?!\d))/g, ",");
+}
+
 function capText(chars: number): string {
   return chars >= 1e6 ? `${Math.round(chars / 1e5) / 10} MB` : `${Math.round(chars / 100) / 10} kB`;
 }
@@ -119,7 +127,7 @@ export function embedCapText(
   maxChars: number = EMBED_MAX_CHARS,
   maxPoints: number = EMBED_MAX_POINTS,
 ): string {
-  return because === "points" ? `the cap of ${maxPoints.toLocaleString("en")} points` : `the ${capText(maxChars)} cap`;
+  return because === "points" ? `the cap of ${groupDigits(maxPoints)} points` : `the ${capText(maxChars)} cap`;
 }
 
 /**

@@ -5,6 +5,9 @@ import type { AxionConstants } from "../physics/constants";
 import type { PathNode } from "./scene-types";
 import type { Shape } from "./occupancy";
 import { curvePixels, pathDataCompact, prepareCurve, type PreparedCurve } from "./thinning/index";
+import { envelopeSplit } from "./thinning/envelope";
+import type { Polyline } from "./thinning/clip";
+import { compactPolygons } from "./path-writer";
 import { dashFor, r2, safeColour, unitInterval } from "./format";
 import { viewTransform, type LogAffine } from "./scales";
 import { rescaleFactor } from "./physics-settings";
@@ -19,6 +22,8 @@ export interface CurveFrame {
   resolution: number;
   /** Draw every point (no thinning), for comparisons. @default true */
   thin?: boolean;
+  /** Dense columns of solid sorted curves as a filled min–max envelope (see BuildSceneOpts). @default false */
+  envelope?: boolean;
 }
 
 export interface CurveGeometry {
@@ -58,10 +63,38 @@ function framePixels(curve: Curve, prep: PreparedCurve, f: CurveFrame) {
   });
 }
 
+/**
+ * With `f.envelope`, a solid curve drawn in mass order keeps a thin line and, for its densely zig-zagging
+ * columns, a filled envelope node of the line's colour (see thinning/envelope.ts); dashes would not survive
+ * the change, so dashed curves keep their zig-zag.
+ */
+function withEnvelope(
+  pl: Polyline,
+  curve: Curve,
+  f: CurveFrame,
+  dash: string | undefined,
+  node: Omit<PathNode, "d" | "kind">,
+): { line: Polyline; band: PathNode | null } {
+  if (!f.envelope || dash || !drawsSorted(curve) || f.lineWidthPx <= 0) return { line: pl, band: null };
+  const split = envelopeSplit(pl, {
+    originX: f.plot.x,
+    resolution: f.resolution,
+    halfWidthPx: f.lineWidthPx / 2,
+    minSpanPx: f.lineWidthPx * ENVELOPE_MIN_SPAN,
+  });
+  const b = split.band;
+  if (b.count === 0) return { line: pl, band: null };
+  const d = compactPolygons(b.xs, b.ys, b.ends, b.count);
+  return { line: split.line, band: { ...node, kind: "path", d, writtenD: d } };
+}
+
+/** A column is dense (envelope) when its points span more than this many line widths vertically. */
+const ENVELOPE_MIN_SPAN = 1;
+
 /** Scene nodes of one curve (fills and lines apart, so that every line can go over every fill). */
 export function curveGeometry(curve: Curve, f: CurveFrame, nodeId: string): CurveGeometry {
   const prep = preparedOf(curve);
-  const pl = framePixels(curve, prep, f);
+  const raw = framePixels(curve, prep, f);
   const colour = safeColour(curve.colour, "#D55E00");
   const opacity = unitInterval(curve.fillOpacity, 0.3);
   const lw = f.lineWidthPx;
@@ -69,8 +102,13 @@ export function curveGeometry(curve: Curve, f: CurveFrame, nodeId: string): Curv
   const data = { "curve-id": curve.id, "curve-role": curve.role };
   const fills: PathNode[] = [];
   const lines: PathNode[] = [];
-  const out: CurveGeometry = { role: curve.role, skipped: prep.skipped, drawn: pl.n, fills, lines };
-  if (pl.n === 0) return out;
+  const out: CurveGeometry = { role: curve.role, skipped: prep.skipped, drawn: raw.n, fills, lines };
+  if (raw.n === 0) return out;
+  const { line: pl, band } = withEnvelope(raw, curve, f, dash, {
+    id: `${nodeId}-envelope`,
+    fill: colour,
+    data: { ...data },
+  });
   /** A path of the curve in its colour, line width and dash; fills are stroked too (their edge is the curve). */
   const path = (suffix: string, d: string, fill: Pick<PathNode, "fill" | "fillOpacity">): PathNode => ({
     kind: "path",
@@ -89,8 +127,11 @@ export function curveGeometry(curve: Curve, f: CurveFrame, nodeId: string): Curv
     const topY = r2(f.plot.y - 4 * lw - 2);
     const closeUp = `L${r2(pl.xs[pl.n - 1])} ${topY}L${r2(pl.xs[0])} ${topY}Z`;
     fills.push(path("exclusion", pathDataCompact(pl, closeUp), { fill: colour, fillOpacity: opacity }));
-  } else if (curve.role === "projection") lines.push(path("line", pathDataCompact(pl), { fill: "none" }));
-  else fills.push(path("region", pathDataCompact(pl), { fill: colour, fillOpacity: opacity }));
+    if (band) fills.push(band);
+  } else if (curve.role === "projection") {
+    lines.push(path("line", pathDataCompact(pl), { fill: "none" }));
+    if (band) lines.push(band);
+  } else fills.push(path("region", pathDataCompact(pl), { fill: colour, fillOpacity: opacity }));
   return out;
 }
 

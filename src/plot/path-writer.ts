@@ -110,15 +110,43 @@ function appendAscii(b: Uint8Array, p: number, s: string): number {
 export function compactPath(xs: Float64Array, ys: Float64Array, n: number, closed: boolean, extra = ""): string {
   pos = 0;
   ensure(n * VERTEX_BYTES + extra.length + 2);
-  const b = buf;
+  let p = putCompact(buf, 0, xs, ys, 0, n);
+  if (extra) p = appendAscii(buf, p, extra);
+  if (closed) buf[p++] = 90; /* Z */
+  pos = p;
+  return finishPath();
+}
+
+/**
+ * Several closed polygons in one path data, each written as {@link compactPath} writes one: polygon k holds
+ * the vertices [ends[k − 1], ends[k]) (from 0 for the first).
+ */
+export function compactPolygons(xs: Float64Array, ys: Float64Array, ends: Int32Array, count: number): string {
+  pos = 0;
+  ensure((count ? ends[count - 1] : 0) * VERTEX_BYTES + count);
   let p = 0;
-  let px = Math.round(xs[0] * 100);
-  let py = Math.round(ys[0] * 100);
+  let from = 0;
+  for (let k = 0; k < count; k++) {
+    if (ends[k] > from) {
+      p = putCompact(buf, p, xs, ys, from, ends[k]);
+      buf[p++] = 90; /* Z */
+    }
+    from = ends[k];
+  }
+  pos = p;
+  return finishPath();
+}
+
+/** Writes vertices [from, to) (to > from) at b[p…] as "M x y" and relative moves; returns the new position. */
+// A hot loop, long on purpose: the number writer is inlined by V8 and the moves are chosen per vertex.
+function putCompact(b: Uint8Array, p: number, xs: Float64Array, ys: Float64Array, from: number, to: number): number {
+  let px = Math.round(xs[from] * 100);
+  let py = Math.round(ys[from] * 100);
   b[p++] = 77; /* M */
   p = putHundredths(b, p, px);
   b[p++] = 32; /* space */
   p = putHundredths(b, p, py);
-  for (let k = 1; k < n; k++) {
+  for (let k = from + 1; k < to; k++) {
     const qx = Math.round(xs[k] * 100);
     const qy = Math.round(ys[k] * 100);
     const dx = qx - px;
@@ -141,10 +169,7 @@ export function compactPath(xs: Float64Array, ys: Float64Array, n: number, close
     px = qx;
     py = qy;
   }
-  if (extra) p = appendAscii(b, p, extra);
-  if (closed) b[p++] = 90; /* Z */
-  pos = p;
-  return finishPath();
+  return p;
 }
 
 /** Path data "M x y L x y …" with absolute coordinates rounded to 0.01 px, closed with Z when asked. */

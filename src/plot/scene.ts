@@ -66,6 +66,12 @@ export interface BuildSceneOpts {
   /** Thin curves to pixel resolution; false draws every point (only for comparisons). @default true */
   thin?: boolean;
   /**
+   * Draw the pixel columns where a solid curve zig-zags densely as a filled min–max envelope instead of the
+   * zig-zag (the same pixels within antialiasing, far cheaper for the browser to paint; see
+   * thinning/envelope.ts). The figure on screen sets it; exports keep the plain thinned line. @default false
+   */
+  envelope?: boolean;
+  /**
    * For an "auto" legend: keep it at this place (a scene's `autoLegendPlace`) instead of choosing again. The
    * figure holds the legend still while the user zooms or pans, and places it afresh once the view rests;
    * exports never pass it. Ignored for a fixed place.
@@ -292,6 +298,7 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
         lineWidthPx: fonts.dataLinePx,
         resolution: opts.resolution ?? 1,
         thin: opts.thin,
+        envelope: opts.envelope,
       },
       `curve-${i + 1}`,
     );

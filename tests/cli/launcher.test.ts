@@ -3,7 +3,7 @@
 // CLI tests run (sorted curves and a closed region, whose preparations differ).
 import { describe, expect, it } from "vitest";
 import { spawnSync } from "node:child_process";
-import { readFileSync, writeFileSync } from "node:fs";
+import { accessSync, constants, readFileSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { REPO, runCli, tempDir } from "./fixtures";
 import { mulberry32 } from "../../src/project/demo";
@@ -16,8 +16,12 @@ function invented(file: string, seed: number, rows: number): void {
   writeFileSync(file, lines.join("\n") + "\n");
 }
 
-function launch(args: string[], threads: string): { status: number | null; stderr: string } {
-  const r = spawnSync(process.execPath, ["src/cli/run.mjs", ...args], {
+function launch(
+  args: string[],
+  threads: string,
+  script = "src/cli/run.mjs",
+): { status: number | null; stderr: string } {
+  const r = spawnSync(process.execPath, [script, ...args], {
     cwd: REPO,
     encoding: "utf8",
     timeout: 120_000,
@@ -54,5 +58,24 @@ describe("npm run render launcher", () => {
     expect(bytes).toMatch(/id="curve-3-region"/);
     expect(readFileSync(join(dir, "one.svg"), "utf8")).toBe(bytes);
     expect(readFileSync(join(dir, "ts.svg"), "utf8")).toBe(bytes);
+  });
+
+  it("is the package's bin `axband`: an executable node script, `render` taken as the command's name", () => {
+    const pkg = JSON.parse(readFileSync(join(REPO, "package.json"), "utf8")) as { bin?: Record<string, string> };
+    const bin = pkg.bin?.axband;
+    expect(bin).toBe("src/cli/run.mjs");
+    const path = join(REPO, bin!);
+    // A shebang naming node through env, and the executable bit (npm links bins to the file as it is).
+    expect(readFileSync(path, "utf8").split("\n")[0]).toBe("#!/usr/bin/env node");
+    expect(() => accessSync(path, constants.X_OK)).not.toThrow();
+    const dir = tempDir("axband-bin-");
+    const csv = join(dir, "curve.csv");
+    invented(csv, 3, 500);
+    const named = launch(["render", csv, "--no-embed", "-o", join(dir, "named.svg")], "1", bin);
+    expect(named.status, named.stderr).toBe(0);
+    const bare = launch([csv, "--no-embed", "-o", join(dir, "bare.svg")], "1", bin);
+    expect(bare.status, bare.stderr).toBe(0);
+    expect(readFileSync(join(dir, "named.svg"), "utf8")).toContain("<svg");
+    expect(readFileSync(join(dir, "named.svg"), "utf8")).toBe(readFileSync(join(dir, "bare.svg"), "utf8"));
   });
 });

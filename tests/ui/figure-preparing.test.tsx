@@ -141,7 +141,13 @@ describe("a big curve restored from autosave", () => {
     };
     const svg = screen.getByTestId("plot").querySelector("svg")!;
     const size = svg.getAttribute("data-scene-size")!.split(",").map(Number);
-    const expected = buildScene(fresh, { widthPx: size[0], heightPx: size[1], resolution: 1, physical: false });
+    const expected = buildScene(fresh, {
+      widthPx: size[0],
+      heightPx: size[1],
+      resolution: 1,
+      physical: false,
+      envelope: true,
+    });
     const d = JSON.stringify(
       expected.layers
         .flatMap((l) => l.nodes)
