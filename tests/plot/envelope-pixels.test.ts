@@ -12,7 +12,7 @@ import { describe, expect, test } from "vitest";
 import { buildScene, writeSvg, type Scene } from "../../src/plot/index";
 import type { Curve, Project } from "../../src/project/types";
 import { rasterise } from "../../src/cli/png";
-import { curve, fixtureProject, rng } from "./fixture";
+import { curve, fixtureProject, goldenVariants, rng } from "./fixture";
 
 const MEAN_MAX = 1;
 const SHARE_MAX = 0.002;
@@ -35,23 +35,6 @@ function compare(a: ReturnType<typeof grey>, b: ReturnType<typeof grey>): { mean
     if (d > 64) big++;
   }
   return { mean: sum / a.px.length, share: big / a.px.length };
-}
-
-function goldenSet(): [string, Project][] {
-  const out: [string, Project][] = [];
-  for (const preset of ["slide", "single-column", "double-column", "custom"] as const) {
-    const p = fixtureProject();
-    p.figure.preset = preset;
-    out.push([preset, p]);
-  }
-  const n = fixtureProject();
-  n.figure.preset = "double-column";
-  n.figure.yView = "normalized";
-  n.figure.yRange = [1e-2, 1e3];
-  n.figure.topAxis = "frequency";
-  n.figure.legend = "outside-right";
-  out.push(["normalized-frequency", n]);
-  return out;
 }
 
 /** Invented noisy scans (±0.2 decades of noise, 1 % spikes of 1.5 decades): exclusions and a solid projection. */
@@ -84,7 +67,7 @@ function pair(p: Project, resolution: number) {
 }
 
 describe("min–max envelope: no visible change against the zig-zag (resvg, greyscale)", () => {
-  for (const [name, p] of goldenSet())
+  for (const [name, p] of goldenVariants())
     test(`golden figure ${name}: mean ≤ 1/255, ≤ 0.2 % of pixels off by > 64/255`, () => {
       const { plain, enveloped } = pair(p, 1);
       const d = compare(grey(plain, 1), grey(enveloped, 1));

@@ -217,3 +217,22 @@ export function shapesOf(list: readonly SceneNode[]): Shape[] {
       ),
     );
 }
+
+/** The projects behind the figure goldens: the fixture at every size preset, and a normalized view with a frequency axis. */
+export function goldenVariants(): [string, Project][] {
+  const out: [string, Project][] = [];
+  for (const preset of ["slide", "single-column", "double-column", "custom"] as const) {
+    const p = fixtureProject();
+    p.figure.preset = preset;
+    out.push([preset, p]);
+  }
+  const n = fixtureProject();
+  n.figure.preset = "double-column";
+  n.figure.yView = "normalized";
+  n.figure.yRange = [1e-2, 1e3];
+  n.figure.topAxis = "frequency";
+  n.figure.legend = "outside-right";
+  n.figure.title = "Normalized view";
+  out.push(["normalized-frequency", n]);
+  return out;
+}

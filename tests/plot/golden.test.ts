@@ -6,10 +6,9 @@ import { existsSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { describe, expect, test } from "vitest";
-import type { Project } from "../../src/project/types";
 import { buildScene, writeSvg } from "../../src/plot/index";
 import { parseXml, unsafeParts } from "../cli/svg-checks";
-import { fixtureProject } from "./fixture";
+import { goldenVariants as variants } from "./fixture";
 
 const GOLDEN_DIR = join(dirname(fileURLToPath(import.meta.url)), "golden");
 const UPDATE = process.env.AXBAND_UPDATE_GOLDEN === "1";
@@ -24,24 +23,6 @@ export function normaliseSvg(svg: string): string {
     const r = Math.round(Number(n) * 1000) / 1000;
     return Object.is(r, -0) ? "0" : String(r);
   });
-  return out;
-}
-
-function variants(): [string, Project][] {
-  const out: [string, Project][] = [];
-  for (const preset of ["slide", "single-column", "double-column", "custom"] as const) {
-    const p = fixtureProject();
-    p.figure.preset = preset;
-    out.push([preset, p]);
-  }
-  const n = fixtureProject();
-  n.figure.preset = "double-column";
-  n.figure.yView = "normalized";
-  n.figure.yRange = [1e-2, 1e3];
-  n.figure.topAxis = "frequency";
-  n.figure.legend = "outside-right";
-  n.figure.title = "Normalized view";
-  out.push(["normalized-frequency", n]);
   return out;
 }
 
