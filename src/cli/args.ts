@@ -88,7 +88,7 @@ CSV input (two columns, mass and coupling; '#' comment lines; optional header wi
                             --role); files before any --role are exclusions
   --model E/N               a model line (8/3) or band (0..44/3); repeatable
   --mass-unit U             mass unit when the header names none: eV, meV, ueV, neV, peV, keV, GeV, Hz, kHz,
-                            MHz, GHz
+                            MHz, GHz, THz
   --coupling-unit U         coupling unit when the header names none: GeV^-1 (or 1/GeV)
   --skip-bad-rows           skip unreadable rows (each reported as file:row:column: reason) instead of stopping
 
