@@ -115,8 +115,8 @@ function multiplesInRange(ax: TickAxis, set: readonly number[]): number[] {
 
 /**
  * Label values for a narrow range: the sparsest of 1-2-5, 1-2-3-5 and 1…9 that gives {@link WANT_LABELS}
- * labels which all fit (else the one giving most); under three, linear nice steps (d3-array's ticks) with
- * at most 7 labels, all fitting.
+ * labels which all fit (else the one giving most); under three on a range of at most a decade, linear nice
+ * steps (d3-array's ticks) with at most 7 labels, all fitting.
  */
 function denseLabelValues(ax: TickAxis): number[] {
   let best: number[] = [];
@@ -125,7 +125,8 @@ function denseLabelValues(ax: TickAxis): number[] {
     if (values.length > best.length && allFit(ax, values)) best = values;
     if (best.length >= WANT_LABELS) return best;
   }
-  if (best.length >= 3) return best;
+  // Linear steps only inside about a decade, where they read as even steps; never on a wide, short axis.
+  if (best.length >= 3 || Math.log10(ax.hi / ax.lo) > 1) return best;
   for (const n of [2, 3, 4, 5, 6, 8, 10]) {
     const values = d3ticks(ax.lo, ax.hi, n).filter(ax.inRange);
     if (values.length > best.length && values.length <= 7 && allFit(ax, values)) best = values;
