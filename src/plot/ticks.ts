@@ -116,7 +116,8 @@ function multiplesInRange(ax: TickAxis, set: readonly number[]): number[] {
 /**
  * Label values for a narrow range: the sparsest of 1-2-5, 1-2-3-5 and 1…9 that gives {@link WANT_LABELS}
  * labels which all fit (else the one giving most); under three on a range of at most a decade, linear nice
- * steps (d3-array's ticks) with at most 7 labels, all fitting.
+ * steps (d3-array's ticks) with at most 7 labels, all fitting; still under three, those candidates together
+ * labelled left to right where each fits.
  */
 function denseLabelValues(ax: TickAxis): number[] {
   let best: number[] = [];
@@ -131,7 +132,16 @@ function denseLabelValues(ax: TickAxis): number[] {
     const values = d3ticks(ax.lo, ax.hi, n).filter(ax.inRange);
     if (values.length > best.length && values.length <= 7 && allFit(ax, values)) best = values;
   }
-  return best;
+  if (best.length >= 3) return best;
+  // Still under three: the 1…9 and linear candidates together, taken left to right where each fits.
+  const pool = [...multiplesInRange(ax, LABEL_SETS[2]), ...d3ticks(ax.lo, ax.hi, 10).filter(ax.inRange)];
+  const greedy = [
+    ...greedyLabels(
+      ax,
+      pool.sort((a, b) => a - b),
+    ).keys(),
+  ];
+  return greedy.length > best.length ? greedy : best;
 }
 
 /** Puts labels on `values` only (adding unlabelled-before minor ticks where none is), clearing the others. */

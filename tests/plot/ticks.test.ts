@@ -127,20 +127,20 @@ describe("labels never collide (common practice: no overlapping tick labels)", (
 });
 
 describe("zoomed axes have at least three labels (common practice: a reader needs three to see the scale)", () => {
-  test("random spans of 0.02 to 2 decades on 400–1000 px axes, scientific and plain labels at 12 px: ≥ 3 labels, none overlapping", () => {
+  test("random spans of 0.02 to 2 decades on 300–1000 px axes, scientific and plain labels at 16 px with the slide's 12.8 px gap: ≥ 3 labels, none overlapping", () => {
     const r = rng(7);
-    const width = (runs: readonly { text: string; shift?: string }[]) => runsWidthPx(runs as never, 12);
+    const width = (runs: readonly { text: string; shift?: string }[]) => runsWidthPx(runs as never, 16);
     for (let i = 0; i < 400; i++) {
       const lo = 10 ** (-12 + 14 * r());
       const span = 10 ** (-1.7 + 2 * r()); // 0.02 to 2 decades
       const hi = lo * 10 ** span;
-      const ppd = (400 + 600 * r()) / span;
+      const ppd = (300 + 700 * r()) / span;
       const format = i % 2 ? undefined : (v: number) => [{ text: String(Number(v.toPrecision(6))) }];
-      const lab = labelled(logTicks(lo, hi, { pxPerDecade: ppd, labelExtentPx: width, labelGapPx: 5, format }));
+      const lab = labelled(logTicks(lo, hi, { pxPerDecade: ppd, labelExtentPx: width, labelGapPx: 12.8, format }));
       expect(lab.length, `range ${lo}..${hi}`).toBeGreaterThanOrEqual(3);
       for (let k = 1; k < lab.length; k++) {
         const dist = ppd * Math.log10(lab[k].value / lab[k - 1].value);
-        expect(dist).toBeGreaterThanOrEqual((width(lab[k].label!) + width(lab[k - 1].label!)) / 2 + 5 - 1e-6);
+        expect(dist).toBeGreaterThanOrEqual((width(lab[k].label!) + width(lab[k - 1].label!)) / 2 + 12.8 - 1e-6);
       }
     }
   });
