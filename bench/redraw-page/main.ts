@@ -98,6 +98,9 @@ async function loadProject(legend: Project["figure"]["legend"] = "outside-right"
       fontPt: 12,
       font: "sans",
       title: "",
+      massUnit: "eV",
+      frequencyUnit: "auto",
+      ticks: "out",
     },
   };
 }

@@ -3,6 +3,8 @@
 import type { CurveRole, SizePreset } from "../project/types";
 import type { FigureFontFamily } from "../formats/pdf/fonts";
 import { overlapFormat } from "./overlap-out";
+import { parseMassText, type ParsedValue } from "../formats/axis-range";
+import { AXES_OPTIONS, AXES_USAGE, readAxesOption, type AxesCliOptions } from "./args-axes";
 
 export const ROLES: readonly CurveRole[] = ["exclusion", "projection", "region"];
 export const PRESET_NAMES: readonly SizePreset[] = ["slide", "single-column", "double-column", "custom"];
@@ -14,7 +16,7 @@ export interface CliInput {
   role: CurveRole;
 }
 
-export interface CliOptions {
+export interface CliOptions extends AxesCliOptions {
   inputs: CliInput[];
   /** SVG output path. */
   out?: string;
@@ -74,16 +76,19 @@ output (at least one of -o, --png, --models-csv, --overlap, --overlap-intervals)
   --overlap FILE            also write the overlap summary, one row per model × curve that overlap:
                             FILE.csv, FILE.md (with a caption paragraph) or FILE.tex (booktabs + siunitx)
   --overlap-intervals FILE  also write every overlap interval: FILE.csv or FILE.md
-  --mass-range LO:HI        mass axis in eV, e.g. 1e-7:1e-2 (CSV input: default fitted to the data)
+  --mass-range LO:HI        mass axis in eV, e.g. 1e-7:1e-2, or with units, 5ueV:1.2GHz (CSV input: default
+                            fitted to the data)
   --g-range LO:HI           y axis in GeV^-1 (CSV input: default fitted to the data)
   --title TEXT              figure title
+
+${AXES_USAGE}
 
 CSV input (two columns, mass and coupling; '#' comment lines; optional header with units):
   --role R                  exclusion | projection | region for the CSV files after it (up to the next
                             --role); files before any --role are exclusions
   --model E/N               a model line (8/3) or band (0..44/3); repeatable
   --mass-unit U             mass unit when the header names none: eV, meV, ueV, neV, peV, keV, GeV, Hz, kHz,
-                            MHz, GHz
+                            MHz, GHz, THz
   --coupling-unit U         coupling unit when the header names none: GeV^-1 (or 1/GeV)
   --skip-bad-rows           skip unreadable rows (each reported as file:row:column: reason) instead of stopping
 
@@ -100,10 +105,12 @@ function kindOf(path: string): CliInput["kind"] {
   return "csv";
 }
 
-function parseRange(flag: string, text: string): [number, number] | string {
+function parseRange(flag: string, text: string, parse?: (t: string) => ParsedValue): [number, number] | string {
   const parts = text.split(/[:,]/).map((s) => s.trim());
   if (parts.length !== 2) return `${flag}: expected LO:HI, e.g. 1e-7:1e-2, got "${text}"`;
-  const [lo, hi] = parts.map(Number);
+  const read = parts.map((p) => (parse ? parse(p) : { ok: true as const, value: Number(p) }));
+  for (const r of read) if (!r.ok) return `${flag}: ${r.reason}`;
+  const [lo, hi] = read.map((r) => (r.ok ? r.value : NaN));
   if (!(Number.isFinite(lo) && Number.isFinite(hi) && lo > 0 && hi > 0))
     return `${flag}: both ends must be positive numbers (log axis), got "${text}"`;
   if (lo >= hi) return `${flag}: LO must be below HI, got "${text}"`;
@@ -135,6 +142,7 @@ const WITH_VALUE = new Set([
   "--g-range",
   "--title",
   "--font",
+  ...AXES_OPTIONS,
 ]);
 const FLAGS = new Set(["-h", "--help", "--no-embed", "--skip-bad-rows"]);
 
@@ -240,7 +248,8 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
         o.couplingUnit = value;
         break;
       case "--mass-range":
-        if (typeof (r = parseRange(name, value)) === "string") return { ok: false, error: r };
+        if (typeof (r = parseRange(name, value, (t) => parseMassText(t, "eV"))) === "string")
+          return { ok: false, error: r };
         o.massRangeEv = r;
         break;
       case "--g-range":
@@ -250,6 +259,10 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
       case "--title":
         o.title = value;
         break;
+      default: {
+        const e = readAxesOption(name, value, o);
+        if (e) return { ok: false, error: e };
+      }
     }
   }
   o.inputs = pending.map(({ path, roleCount }) => ({

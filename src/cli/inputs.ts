@@ -1,5 +1,6 @@
 // Turns the renderer's input files into one project: a project file or an exported SVG through the same
 // validation as the app, or CSV files through the app's importer and factories with ranges fitted to the data.
+import { applyAxesOptions } from "./args-axes";
 import { readFileSync } from "node:fs";
 import { basename } from "node:path";
 import type { Curve, Model, Project } from "../project/types";
@@ -163,7 +164,7 @@ export function applyFigureOptions(project: Project, opts: CliOptions): Project 
   if (opts.gRange) f.yRange = opts.gRange;
   if (opts.title !== undefined) f.title = opts.title;
   if (opts.font) f.font = opts.font;
-  return { ...project, figure: f };
+  return { ...project, figure: applyAxesOptions(f, opts) };
 }
 
 /** Notes for curves of a loaded project with points a log axis cannot show (they stay in the project). */

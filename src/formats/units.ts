@@ -1,26 +1,16 @@
 // Units of imported and exported curve columns: names and spellings, recognition in CSV headers, and the
 // conversions to the internal units (eV for masses, GeV⁻¹ for couplings) through the physics core.
-import { PLANCK_EV_S, resolveConstants, type AxionConstants, type PhysicsOpts } from "../physics/constants";
+import { resolveConstants, type AxionConstants, type PhysicsOpts } from "../physics/constants";
 import { gFromNormalized } from "../physics/coupling";
-import { POW10 } from "./pow10";
+import { MASS_UNITS, type MassUnit } from "../physics/units";
 
-/** Mass column units: energies, or photon frequencies converted with ν = m_a / h. */
-export type MassUnit = "eV" | "meV" | "ueV" | "neV" | "peV" | "keV" | "MeV" | "GeV" | "Hz" | "kHz" | "MHz" | "GHz";
+export { MASS_UNITS, massFromEv, massToEv, massUnitInfo, type MassUnit, type MassUnitInfo } from "../physics/units";
 
 /**
  * Coupling column units: g_aγγ in GeV⁻¹; the normalized coupling |E/N − c_γ|; the haloscope |g_γ| =
  * |E/N − c_γ|/2; or a multiple of the model line of a chosen E/N (g = value × g_aγγ(m, E/N)).
  */
 export type CouplingUnit = "GeV^-1" | "normalized" | "g-gamma" | "model-line";
-
-export interface MassUnitInfo {
-  id: MassUnit;
-  /** Label for menus and axis titles (with the Greek μ). */
-  label: string;
-  kind: "energy" | "frequency";
-  /** The unit is 10^pow10 eV (energy) or 10^pow10 Hz (frequency). */
-  pow10: number;
-}
 
 export interface CouplingUnitInfo {
   id: CouplingUnit;
@@ -29,22 +19,6 @@ export interface CouplingUnitInfo {
   ascii: string;
 }
 
-/** Every mass unit, in the order menus show them. */
-export const MASS_UNITS: readonly MassUnitInfo[] = [
-  { id: "eV", label: "eV", kind: "energy", pow10: 0 },
-  { id: "meV", label: "meV", kind: "energy", pow10: -3 },
-  { id: "ueV", label: "μeV", kind: "energy", pow10: -6 },
-  { id: "neV", label: "neV", kind: "energy", pow10: -9 },
-  { id: "peV", label: "peV", kind: "energy", pow10: -12 },
-  { id: "keV", label: "keV", kind: "energy", pow10: 3 },
-  { id: "MeV", label: "MeV", kind: "energy", pow10: 6 },
-  { id: "GeV", label: "GeV", kind: "energy", pow10: 9 },
-  { id: "Hz", label: "Hz", kind: "frequency", pow10: 0 },
-  { id: "kHz", label: "kHz", kind: "frequency", pow10: 3 },
-  { id: "MHz", label: "MHz", kind: "frequency", pow10: 6 },
-  { id: "GHz", label: "GHz", kind: "frequency", pow10: 9 },
-];
-
 /** Every coupling unit, in the order menus show them. */
 export const COUPLING_UNITS: readonly CouplingUnitInfo[] = [
   { id: "GeV^-1", label: "g_aγγ in GeV⁻¹", ascii: "GeV^-1" },
@@ -52,13 +26,6 @@ export const COUPLING_UNITS: readonly CouplingUnitInfo[] = [
   { id: "g-gamma", label: "|g_γ| = |E/N − c_γ|/2", ascii: "g-gamma" },
   { id: "model-line", label: "multiple of a model line", ascii: "model-line" },
 ];
-
-const MASS_BY_ID = new Map(MASS_UNITS.map((u) => [u.id, u]));
-
-/** Facts about a mass unit. */
-export function massUnitInfo(unit: MassUnit): MassUnitInfo {
-  return MASS_BY_ID.get(unit) as MassUnitInfo;
-}
 
 // Spellings of micro: u, Greek small mu (U+03BC) and the micro sign (U+00B5); also the TeX-ish "mu".
 const MICRO = /^(?:u|\u03bc|\u00b5|mu|micro-?)eV$/;
@@ -70,7 +37,7 @@ const MICRO = /^(?:u|\u03bc|\u00b5|mu|micro-?)eV$/;
 export function parseMassUnit(text: string): MassUnit | null {
   const s = text.trim();
   if (MICRO.test(s)) return "ueV";
-  if (MASS_BY_ID.has(s as MassUnit)) return s as MassUnit;
+  if (MASS_UNITS.some((u) => u.id === s)) return s as MassUnit;
   const lower = s.toLowerCase();
   // "mev" could be meV or MeV and "mhz" could be MHz or mHz: a wrong guess would be off by 10⁹.
   if (lower === "mev" || lower === "mhz") return null;
@@ -176,27 +143,6 @@ export function couplingContext(
     constants: resolveConstants(physics),
     modelEOverN: modelEOverN === null ? null : parseRational(modelEOverN),
   };
-}
-
-/** Mass in eV of a value in a mass unit (frequencies via m = h·ν, CODATA 2018 h). */
-export function massToEv(value: number, unit: MassUnit): number {
-  const u = massUnitInfo(unit);
-  const scaled = scalePow10(value, u.pow10);
-  return u.kind === "frequency" ? scaled * PLANCK_EV_S : scaled;
-}
-
-/** A mass in eV expressed in a mass unit (inverse of {@link massToEv}). */
-export function massFromEv(massEv: number, unit: MassUnit): number {
-  const u = massUnitInfo(unit);
-  const base = u.kind === "frequency" ? massEv / PLANCK_EV_S : massEv;
-  return scalePow10(base, -u.pow10);
-}
-
-// Multiplying by 10^-k with k > 0 would round 10^-k first; dividing by the exact 10^k rounds once. (Unit
-// powers stay within the table: ±12 at most.)
-function scalePow10(value: number, pow10: number): number {
-  if (pow10 === 0) return value;
-  return pow10 > 0 ? value * POW10[pow10] : value / POW10[-pow10];
 }
 
 /**

@@ -1,16 +1,28 @@
-// Axes of the figure: frame, inward ticks on all four sides, tick labels, axis titles with real
-// sub/superscripts, the optional top axis (f_a or frequency, in step with the mass axis) and the decade grid.
-import { PLANCK_EV_S, type AxionConstants } from "../physics/constants";
-import type { TopAxis, YView } from "../project/types";
+// Axes of the figure: frame, outward ticks (left and bottom, or all four sides), tick labels, axis titles with
+// real sub/superscripts, the mass axis in eV…neV, the optional top axis (f_a or frequency, in step with the mass
+// axis) and the decade grid.
+import type { AxionConstants } from "../physics/constants";
+import { AXIS_MASS_UNITS, FREQUENCY_AXIS_UNITS, massToEv, massUnitInfo, type AxisMassUnit } from "../physics/units";
+import type { Figure, FrequencyUnitSetting, TickSides, TopAxis, YView } from "../project/types";
 import type { PathNode, SceneNode, TextNode, TextRun } from "./scene-types";
 import { plainOrScientificRuns, r2 } from "./format";
 import type { Fonts, Layout } from "./layout";
 import type { LogAffine } from "./scales";
 import { runsWidthPx } from "./text";
-import { faTicks, frequencyTicks, logTicks, type FrequencyUnit, type LogTick, type LogTickOpts } from "./ticks";
+import {
+  faTicks,
+  frequencyTicks,
+  logTicks,
+  massTicks,
+  type FrequencyUnit,
+  type LogTick,
+  type LogTickOpts,
+} from "./ticks";
 
-/** Title of the mass axis: m_a [eV]. */
-export const MASS_TITLE: TextRun[] = [{ text: "m", italic: true }, { text: "a", shift: "sub" }, { text: " [eV]" }];
+/** Title of the mass axis in its unit: m_a [μeV]. */
+export function massTitle(unit: AxisMassUnit = "eV"): TextRun[] {
+  return [{ text: "m", italic: true }, { text: "a", shift: "sub" }, { text: ` [${massUnitInfo(unit).label}]` }];
+}
 /** Title of the f_a top axis: f_a [GeV]. */
 export const FA_TITLE: TextRun[] = [{ text: "f", italic: true }, { text: "a", shift: "sub" }, { text: " [GeV]" }];
 
@@ -47,9 +59,17 @@ export interface AxisTicks {
   top: (LogTick & { px: number })[] | null;
   topTitle: TextRun[] | null;
   frequencyUnit: FrequencyUnit | null;
+  xTitle: TextRun[];
 }
 
-export interface AxesFrame {
+/** How the axes are labelled and ticked (figure settings). */
+export interface AxisStyle {
+  massUnit: AxisMassUnit;
+  frequencyUnit: FrequencyUnitSetting;
+  ticks: TickSides;
+}
+
+export interface AxesFrame extends Partial<AxisStyle> {
   map: LogAffine;
   plot: { x: number; y: number; w: number; h: number };
   massDomainEv: [number, number];
@@ -61,38 +81,46 @@ export interface AxesFrame {
   yView?: YView;
 }
 
-/** Positioned ticks of all axes (values in eV, y-view units, GeV or Hz). */
+/** The figure's axis settings as the frame takes them, unknown values (a hand-made project) read as defaults. */
+export function axisStyle(fig: Partial<Pick<Figure, "massUnit" | "frequencyUnit" | "ticks">>): AxisStyle {
+  const freq = fig.frequencyUnit;
+  return {
+    massUnit: AXIS_MASS_UNITS.find((u) => u === fig.massUnit) ?? "eV",
+    frequencyUnit: freq === "auto" || FREQUENCY_AXIS_UNITS.some((u) => u === freq) ? (freq ?? "auto") : "auto",
+    ticks: fig.ticks === "all" ? "all" : "out",
+  };
+}
+
+/** Positioned ticks of all axes (values in the mass unit, y-view units, GeV or Hz). */
 export function axisTicks(f: AxesFrame): AxisTicks {
   const { map, massDomainEv, yDomain, fonts } = f;
   const ppdX = map.bx;
-  const ppdY = -map.by;
   const xPx = (m: number) => map.ax + map.bx * Math.log10(m);
-  const x = logTicks(massDomainEv[0], massDomainEv[1], horizontalTickOpts(ppdX, fonts)).map((t) => ({
+  const unit = f.massUnit ?? "eV";
+  const x = massTicks(massDomainEv, unit, horizontalTickOpts(ppdX, fonts)).map((t) => ({
     ...t,
-    px: xPx(t.value),
+    px: xPx(massToEv(t.value, unit)),
   }));
   const yFormat = f.yView && f.yView !== "coupling" ? plainOrScientificRuns : undefined;
-  const y = logTicks(yDomain[0], yDomain[1], { ...verticalTickOpts(ppdY, fonts), format: yFormat }).map((t) => ({
+  const y = logTicks(yDomain[0], yDomain[1], { ...verticalTickOpts(-map.by, fonts), format: yFormat }).map((t) => ({
     ...t,
     px: map.ay + map.by * Math.log10(t.value),
   }));
-  let top: AxisTicks["top"] = null;
-  let topTitle: TextRun[] | null = null;
-  let frequencyUnit: FrequencyUnit | null = null;
+  const out: AxisTicks = { x, y, top: null, topTitle: null, frequencyUnit: null, xTitle: massTitle(unit) };
   if (f.topAxis === "fa") {
     const k = f.constants.kMuEv * 1e6;
-    top = faTicks(massDomainEv, f.constants, horizontalTickOpts(ppdX, fonts)).map((t) => ({
+    out.top = faTicks(massDomainEv, f.constants, horizontalTickOpts(ppdX, fonts)).map((t) => ({
       ...t,
       px: xPx(k / t.value),
     }));
-    topTitle = FA_TITLE;
+    out.topTitle = FA_TITLE;
   } else if (f.topAxis === "frequency") {
-    const ft = frequencyTicks(massDomainEv, horizontalTickOpts(ppdX, fonts));
-    top = ft.ticks.map((t) => ({ ...t, px: xPx(t.value * PLANCK_EV_S) }));
-    topTitle = frequencyTitle(ft.unit);
-    frequencyUnit = ft.unit;
+    const ft = frequencyTicks(massDomainEv, horizontalTickOpts(ppdX, fonts), f.frequencyUnit);
+    out.top = ft.ticks.map((t) => ({ ...t, px: xPx(massToEv(t.value, "Hz")) }));
+    out.topTitle = frequencyTitle(ft.unit);
+    out.frequencyUnit = ft.unit;
   }
-  return { x, y, top, topTitle, frequencyUnit };
+  return out;
 }
 
 /** A tick value as an id part: "1e-6", "2_5e-7" (only [A-Za-z0-9_-]). */
@@ -126,94 +154,101 @@ function text(
   };
 }
 
+type Positioned = LogTick & { px: number };
+const seg = (ax: number, ay: number, bx: number, by: number) => `M${r2(ax)} ${r2(ay)}L${r2(bx)} ${r2(by)}`;
+
+/** Whether a tick lies on the frame (with a hair of slack for rounding). */
+function onFrame(plot: AxesFrame["plot"]) {
+  return {
+    inX: (px: number) => px >= plot.x - 0.01 && px <= plot.x + plot.w + 0.01,
+    inY: (py: number) => py >= plot.y - 0.01 && py <= plot.y + plot.h + 0.01,
+  };
+}
+
+/**
+ * Tick marks pointing out of the frame: bottom, left and a top axis always; with "all" also the right side
+ * (mirroring the left) and the top (mirroring the bottom unless a top axis has its own).
+ */
+function tickNodes(f: AxesFrame, t: AxisTicks, layout: Layout): PathNode[] {
+  const { plot } = f;
+  const { inX, inY } = onFrame(plot);
+  const all = f.ticks === "all";
+  const [x0, x1, y0, y1] = [plot.x, plot.x + plot.w, plot.y, plot.y + plot.h];
+  const d = { major: "", minor: "" };
+  const len = (tk: Positioned) => (tk.major ? layout.tickMajorPx : layout.tickMinorPx);
+  const add = (tk: Positioned, s: string) => (d[tk.major ? "major" : "minor"] += s);
+  for (const tk of t.x) {
+    if (!inX(tk.px)) continue;
+    add(tk, seg(tk.px, y1, tk.px, y1 + len(tk)));
+    if (all && !t.top) add(tk, seg(tk.px, y0, tk.px, y0 - len(tk)));
+  }
+  for (const tk of t.top ?? []) if (inX(tk.px)) add(tk, seg(tk.px, y0, tk.px, y0 - len(tk)));
+  for (const tk of t.y) {
+    if (!inY(tk.px)) continue;
+    add(tk, seg(x0, tk.px, x0 - len(tk), tk.px));
+    if (all) add(tk, seg(x1, tk.px, x1 + len(tk), tk.px));
+  }
+  const lw = r2(f.fonts.axisLinePx);
+  const path = (id: string, path: string, w: number): PathNode => ({
+    kind: "path",
+    id,
+    d: path,
+    stroke: "#1a1a1a",
+    strokeWidth: w,
+    fill: "none",
+  });
+  return [
+    ...(d.minor ? [path("ticks-minor", d.minor, r2(lw * 0.8))] : []),
+    ...(d.major ? [path("ticks-major", d.major, lw)] : []),
+  ];
+}
+
+/** Tick labels; ids follow the tick value, so a label keeps its id (and its element on screen) while zooming. */
+function labelNodes(f: AxesFrame, t: AxisTicks, layout: Layout): TextNode[] {
+  const { fonts } = f;
+  const { inX, inY } = onFrame(f.plot);
+  // Labels of the horizontal axes that would cross the figure edge are left out.
+  const fitsX = (tk: Positioned) => {
+    const half = runsWidthPx(tk.label ?? [], fonts.tickPx) / 2;
+    return tk.px - half >= 0 && tk.px + half <= layout.figureWidthPx;
+  };
+  const nodes: TextNode[] = [];
+  const horizontal = (ticks: Positioned[], prefix: string, baseline: number) => {
+    for (const tk of ticks)
+      if (tk.label && inX(tk.px) && fitsX(tk))
+        nodes.push(text(`${prefix}-${valueKey(tk.value)}`, tk.px, baseline, tk.label, fonts.tickPx, "middle"));
+  };
+  horizontal(t.x, "xlabel", layout.xLabelBaseline);
+  for (const tk of t.y)
+    if (tk.label && inY(tk.px)) {
+      const y = tk.px + 0.36 * fonts.tickPx;
+      nodes.push(text(`ylabel-${valueKey(tk.value)}`, layout.yLabelRight, y, tk.label, fonts.tickPx, "end"));
+    }
+  horizontal(t.top ?? [], "toplabel", layout.topLabelBaseline);
+  return nodes;
+}
+
 /** Frame, ticks, tick labels and titles. */
 export function axesNodes(f: AxesFrame, t: AxisTicks, layout: Layout, yTitleRuns: TextRun[]): SceneNode[] {
   const { plot, fonts } = f;
-  const x0 = plot.x;
-  const x1 = plot.x + plot.w;
-  const y0 = plot.y;
-  const y1 = plot.y + plot.h;
-  const inX = (px: number) => px >= x0 - 0.01 && px <= x1 + 0.01;
-  const inY = (py: number) => py >= y0 - 0.01 && py <= y1 + 0.01;
-  let major = "";
-  let minor = "";
-  const seg = (ax: number, ay: number, bx: number, by: number) => `M${r2(ax)} ${r2(ay)}L${r2(bx)} ${r2(by)}`;
-  for (const tk of t.x) {
-    if (!inX(tk.px)) continue;
-    const len = tk.major ? layout.tickMajorPx : layout.tickMinorPx;
-    const s = seg(tk.px, y1, tk.px, y1 - len) + (t.top ? "" : seg(tk.px, y0, tk.px, y0 + len));
-    if (tk.major) major += s;
-    else minor += s;
-  }
-  for (const tk of t.top ?? []) {
-    if (!inX(tk.px)) continue;
-    const s = seg(tk.px, y0, tk.px, y0 + (tk.major ? layout.tickMajorPx : layout.tickMinorPx));
-    if (tk.major) major += s;
-    else minor += s;
-  }
-  for (const tk of t.y) {
-    if (!inY(tk.px)) continue;
-    const len = tk.major ? layout.tickMajorPx : layout.tickMinorPx;
-    const s = seg(x0, tk.px, x0 + len, tk.px) + seg(x1, tk.px, x1 - len, tk.px);
-    if (tk.major) major += s;
-    else minor += s;
-  }
-  const lw = r2(fonts.axisLinePx);
-  const nodes: SceneNode[] = [];
-  if (minor)
-    nodes.push({
-      kind: "path",
-      id: "ticks-minor",
-      d: minor,
-      stroke: "#1a1a1a",
-      strokeWidth: r2(lw * 0.8),
-      fill: "none",
-    });
-  if (major)
-    nodes.push({ kind: "path", id: "ticks-major", d: major, stroke: "#1a1a1a", strokeWidth: lw, fill: "none" });
+  const nodes: SceneNode[] = tickNodes(f, t, layout);
   nodes.push({
     kind: "rect",
     id: "frame",
-    x: r2(x0),
-    y: r2(y0),
+    x: r2(plot.x),
+    y: r2(plot.y),
     w: r2(plot.w),
     h: r2(plot.h),
     fill: "none",
     stroke: "#1a1a1a",
-    strokeWidth: lw,
+    strokeWidth: r2(fonts.axisLinePx),
   });
-
-  // Label ids follow the tick value, so a label keeps its id (and its element on screen) while zooming.
-  // Labels of the horizontal axes that would cross the figure edge are left out.
-  const fitsX = (tk: { px: number; label: TextRun[] | null }) => {
-    const half = runsWidthPx(tk.label ?? [], fonts.tickPx) / 2;
-    return tk.px - half >= 0 && tk.px + half <= layout.figureWidthPx;
-  };
-  for (const tk of t.x)
-    if (tk.label && inX(tk.px) && fitsX(tk))
-      nodes.push(text(`xlabel-${valueKey(tk.value)}`, tk.px, layout.xLabelBaseline, tk.label, fonts.tickPx, "middle"));
-  for (const tk of t.y)
-    if (tk.label && inY(tk.px))
-      nodes.push(
-        text(
-          `ylabel-${valueKey(tk.value)}`,
-          layout.yLabelRight,
-          tk.px + 0.36 * fonts.tickPx,
-          tk.label,
-          fonts.tickPx,
-          "end",
-        ),
-      );
-  for (const tk of t.top ?? [])
-    if (tk.label && inX(tk.px) && fitsX(tk))
-      nodes.push(
-        text(`toplabel-${valueKey(tk.value)}`, tk.px, layout.topLabelBaseline, tk.label, fonts.tickPx, "middle"),
-      );
-
-  nodes.push(text("xtitle", x0 + plot.w / 2, layout.xTitleBaseline, MASS_TITLE, fonts.titlePx, "middle"));
-  nodes.push(text("ytitle", layout.yTitleX, y0 + plot.h / 2, yTitleRuns, fonts.titlePx, "middle", { rotate: -90 }));
+  nodes.push(...labelNodes(f, t, layout));
+  const midX = plot.x + plot.w / 2;
+  nodes.push(text("xtitle", midX, layout.xTitleBaseline, t.xTitle, fonts.titlePx, "middle"));
+  nodes.push(text("ytitle", layout.yTitleX, plot.y + plot.h / 2, yTitleRuns, fonts.titlePx, "middle", { rotate: -90 }));
   if (t.top && t.topTitle)
-    nodes.push(text("toptitle", x0 + plot.w / 2, layout.topTitleBaseline, t.topTitle, fonts.titlePx, "middle"));
+    nodes.push(text("toptitle", midX, layout.topTitleBaseline, t.topTitle, fonts.titlePx, "middle"));
   return nodes;
 }
 

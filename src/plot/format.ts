@@ -31,9 +31,9 @@ export function powerOfTenRuns(exponent: number): TextRun[] {
   return [{ text: "10" }, { text: signed(exponent), shift: "sup" }];
 }
 
-/** Mantissa text with at most 3 significant digits and no trailing zeros ("2", "2.5"). */
+/** Mantissa text with at most 6 significant digits (zoomed axes need 3.105) and no trailing zeros ("2", "2.5"). */
 export function mantissaText(m: number): string {
-  return signed(String(Number(m.toPrecision(3))));
+  return signed(String(Number(m.toPrecision(6))));
 }
 
 /**

@@ -1,6 +1,6 @@
 // Figure sizes and layout: the size presets with their physical sizes, font sizes per preset, and the
 // margins around the plot area computed from font sizes and estimated label widths (no DOM needed).
-import type { Figure, LegendPlace, SizePreset } from "../project/types";
+import type { Figure, LegendPlace, SizePreset, TickSides } from "../project/types";
 import { CAP_HEIGHT, SUP_RAISE, SHIFT_SCALE } from "./text";
 import { CUSTOM_MM_LIMITS } from "../project/limits";
 
@@ -114,6 +114,8 @@ export interface LayoutInput {
   fonts: Fonts;
   hasTopAxis: boolean;
   hasTitle: boolean;
+  /** Outward ticks on the left and bottom (and a top axis), or on all four sides. @default "out" */
+  ticks?: TickSides;
   /** Widest y tick label (px) for a given plot height (labels thin out on short axes). */
   yLabelWidthPx: (plotHeightPx: number) => number;
   /** Half the width of the widest x tick label (it may stick out right of the plot area). */
@@ -126,7 +128,7 @@ export interface Layout {
   plot: PlotRect;
   /** Width of the whole figure (labels must stay inside it). */
   figureWidthPx: number;
-  /** Inward tick lengths, major and minor. */
+  /** Outward tick lengths, major and minor. */
   tickMajorPx: number;
   tickMinorPx: number;
   /** Gap between the frame and tick labels. */
@@ -186,6 +188,10 @@ export function computeLayout(input: LayoutInput): Layout {
   const gap = f.tickPx * 0.4;
   const tickMajorPx = f.tickPx * 0.45;
   const tickMinorPx = f.tickPx * 0.25;
+  // Outward ticks take room between the frame and the labels: bottom, left and any top axis always, the
+  // mirrored top and right ticks with "all".
+  const all = input.ticks === "all";
+  const tickOut = tickMajorPx;
 
   let top = pad;
   let headingBaseline = 0;
@@ -198,20 +204,20 @@ export function computeLayout(input: LayoutInput): Layout {
   if (input.hasTopAxis) {
     topTitleBaseline = top + f.titlePx * SUP_TOP;
     topLabelBaseline = topTitleBaseline + f.titlePx * DESCENT + gap + f.tickPx * SUP_TOP;
-    top = topLabelBaseline + gap;
+    top = topLabelBaseline + gap + tickOut;
   } else {
     // Room for the top of the highest y label, which is centred on the frame's top edge.
-    top = Math.max(top, pad + f.tickPx * 0.6);
+    top = Math.max(top + (all ? tickOut : 0), pad + f.tickPx * 0.6);
   }
-  const xLabelOffset = gap + f.tickPx * SUP_TOP;
+  const xLabelOffset = gap + tickOut + f.tickPx * SUP_TOP;
   const xTitleOffset = xLabelOffset + f.tickPx * 0.25 + gap + f.titlePx * CAP_HEIGHT;
   const bottom = xTitleOffset + f.titlePx * DESCENT + pad;
   const plotH = Math.max(20, H - top - bottom);
 
   const yLabelW = input.yLabelWidthPx(plotH);
   const yTitleDepth = f.titlePx * DESCENT;
-  const left = pad + f.titlePx * SUP_TOP + yTitleDepth + gap * 1.6 + yLabelW + gap;
-  let right = Math.max(pad, input.xLabelHalfWidthPx + 2);
+  const left = pad + f.titlePx * SUP_TOP + yTitleDepth + gap * 1.6 + yLabelW + gap + tickOut;
+  let right = Math.max(pad + (all ? tickOut : 0), input.xLabelHalfWidthPx + 2);
   const lg = input.legend;
   const outside = lg.place === "outside-right" && lg.widthPx > 0;
   if (outside) right = Math.max(right, lg.widthPx + pad * 2 + gap);
@@ -245,8 +251,8 @@ export function computeLayout(input: LayoutInput): Layout {
     xTitleBaseline: plot.y + plot.h + xTitleOffset,
     topLabelBaseline,
     topTitleBaseline,
-    yLabelRight: plot.x - gap,
-    yTitleX: plot.x - gap - yLabelW - gap * 1.6 - yTitleDepth,
+    yLabelRight: plot.x - gap - tickOut,
+    yTitleX: plot.x - gap - tickOut - yLabelW - gap * 1.6 - yTitleDepth,
     headingBaseline,
     legendX,
     legendY,

@@ -112,7 +112,8 @@ export function pickLegendPlace(input: LegendPlaceInput): LegendChoice {
   let best: LegendCorner = LEGEND_CORNERS[0];
   for (const corner of LEGEND_CORNERS) {
     coverage[corner] = coveredFraction(grid, input.boxes[corner]);
-    if (coverage[corner] < coverage[best]) best = corner;
+    // Fractions of equal areas may differ in the last bit (1 vs 0.9999999999999998): a tie keeps the earlier corner.
+    if (coverage[corner] < coverage[best] - 1e-9) best = corner;
   }
   const crowded = coverage[best] > (input.crowdedCoverage ?? CROWDED_COVERAGE);
   return { place: crowded && input.outsideFits() ? "outside-right" : best, coverage, crowded };

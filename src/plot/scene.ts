@@ -3,7 +3,7 @@
 import { DEFAULT_MASS_RANGE_EV, defaultYRange } from "../project/defaults";
 import type { Curve, FigureFont, LegendPlace, Model, Project, YView } from "../project/types";
 import type { PathNode, Scene, SceneLayer, SceneNode, ScaleConfig } from "./scene-types";
-import { axesNodes, axisTicks, gridNodes, verticalTickOpts, yTitle, type AxesFrame } from "./axes";
+import { axesNodes, axisStyle, axisTicks, gridNodes, verticalTickOpts, yTitle, type AxesFrame } from "./axes";
 import { curveGeometry, curveShape } from "./curves";
 import { dashFor, plainOrScientificRuns, powerOfTenRuns, r2, safeColour, unitInterval } from "./format";
 import {
@@ -242,6 +242,7 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
       fonts,
       hasTopAxis: topAxis !== "none",
       hasTitle: !!fig.title?.trim(),
+      ticks: fig.ticks,
       yLabelWidthPx: (plotH) =>
         logTicks(yDomain[0], yDomain[1], {
           ...verticalTickOpts(plotH / ySpan, fonts),
@@ -279,7 +280,17 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   layout ??= layoutFor(legendPlace, legendBox);
   const plot = { x: r2(layout.plot.x), y: r2(layout.plot.y), w: r2(layout.plot.w), h: r2(layout.plot.h) };
   const map = logAffine(scales, plot);
-  const frame: AxesFrame = { map, plot, massDomainEv, yDomain, topAxis, constants: c, fonts, yView: view };
+  const frame: AxesFrame = {
+    map,
+    plot,
+    massDomainEv,
+    yDomain,
+    topAxis,
+    constants: c,
+    fonts,
+    yView: view,
+    ...axisStyle(fig),
+  };
   const ticks = axisTicks(frame);
 
   // Curves: fills first, then lines, each in project order.

@@ -123,6 +123,9 @@ export function defaultFigure(): Figure {
     fontPt: 12,
     font: "sans",
     title: "",
+    massUnit: "eV",
+    frequencyUnit: "auto",
+    ticks: "out",
   };
 }
 

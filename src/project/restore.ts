@@ -34,6 +34,9 @@ import {
   topAxis,
   figureFont,
   yView,
+  axisMassUnit,
+  frequencyUnitSetting,
+  tickSides,
 } from "./schema";
 import { MIN_RANGE_DECADES, saneRange } from "./view-range";
 import {
@@ -355,6 +358,9 @@ function restoreFigure(raw: unknown, note: Note): Figure {
     fontPt: clamped(own(f, "fontPt"), 4, 72, note, "font size") ?? d.fontPt,
     font: valid(figureFont, own(f, "font"), note, "figure font") ?? d.font,
     title: text(own(f, "title"), PROJECT_LIMITS.label, note, "title") ?? d.title,
+    massUnit: valid(axisMassUnit, own(f, "massUnit"), note, "mass axis unit") ?? d.massUnit,
+    frequencyUnit: valid(frequencyUnitSetting, own(f, "frequencyUnit"), note, "frequency unit") ?? d.frequencyUnit,
+    ticks: valid(tickSides, own(f, "ticks"), note, "tick sides") ?? d.ticks,
   };
 }
 

@@ -36,6 +36,10 @@ export const topAxis = z.enum(["none", "fa", "frequency"]);
 // drawn before), and an older build ignores it.
 export const figureFont = z.enum(["sans", "serif"]);
 export const yView = z.enum(["coupling", "normalized", "g-gamma"]);
+// Axis units and tick sides joined in schema version 1 without a bump, as the font did (missing = default).
+export const axisMassUnit = z.enum(["eV", "meV", "ueV", "neV"]);
+export const frequencyUnitSetting = z.enum(["auto", "Hz", "kHz", "MHz", "GHz", "THz"]);
+export const tickSides = z.enum(["out", "all"]);
 export const physicsRef = z.enum(["2016", "2019", "custom"]);
 export const modelKind = z.enum(["line", "interval", "between", "set"]);
 export const setDraw = z.enum(["lines", "extremes", "central"]);
@@ -203,5 +207,8 @@ export const ProjectSchema = z.object({
     fontPt: z.number().min(4).max(72),
     font: figureFont,
     title: z.string().max(PROJECT_LIMITS.label),
+    massUnit: axisMassUnit,
+    frequencyUnit: frequencyUnitSetting,
+    ticks: tickSides,
   }),
 });

@@ -87,6 +87,9 @@ export const FIGURE_STATE: { readonly [K in keyof Figure]-?: Persistence } = {
   fontPt: everywhere,
   font: everywhere,
   title: everywhere,
+  massUnit: everywhere,
+  frequencyUnit: everywhere,
+  ticks: everywhere,
 };
 
 /** Where a writer puts state. */

@@ -2,6 +2,7 @@
 // Everything else (lines, bands, scenes, overlap tables) is derived from it and never stored.
 import type { FermionInput } from "../physics/anomaly-types";
 import type { ScalarInput } from "../physics/charges/types";
+import type { AxisMassUnit, FrequencyAxisUnit } from "../physics/units";
 
 export const PROJECT_VERSION = 2 as const;
 
@@ -12,6 +13,11 @@ export type LegendPlace =
   "auto" | "top-left" | "top-right" | "bottom-left" | "bottom-right" | "outside-right" | "hidden";
 export type SizePreset = "slide" | "single-column" | "double-column" | "custom";
 export type TopAxis = "none" | "fa" | "frequency";
+export type { AxisMassUnit };
+/** Unit of the frequency top axis: chosen to suit the visible range ("auto"), or fixed. */
+export type FrequencyUnitSetting = "auto" | FrequencyAxisUnit;
+/** Ticks outward on the left and bottom axes (and a top axis), or on all four sides. */
+export type TickSides = "out" | "all";
 /** The figure's font family: Computer Modern Sans or Serif (LaTeX's own look). */
 export type FigureFont = "sans" | "serif";
 /** y axis: g_aγγ itself, |E/N − c_γ|, or |g_γ| = |E/N − c_γ|/2 (model lines horizontal in the last two). */
@@ -128,6 +134,12 @@ export interface Figure {
   /** Added in version 1 without a bump: files and links without it read as "sans". */
   font: FigureFont;
   title: string;
+  /** Added without a bump: the unit the mass axis is labelled in (values stay in eV); missing reads as "eV". */
+  massUnit: AxisMassUnit;
+  /** Added without a bump: missing reads as "auto". */
+  frequencyUnit: FrequencyUnitSetting;
+  /** Added without a bump: missing reads as "out" (the house style). */
+  ticks: TickSides;
 }
 
 export interface Project {

@@ -174,6 +174,9 @@ const figure: fc.Arbitrary<Figure> = fc.record({
   fontPt: fc.double({ min: 4, max: 72, noNaN: true }),
   font: fc.constantFrom("sans", "serif") as fc.Arbitrary<Figure["font"]>,
   title: text(40),
+  massUnit: fc.constantFrom("eV", "meV", "ueV", "neV") as fc.Arbitrary<Figure["massUnit"]>,
+  frequencyUnit: fc.constantFrom("auto", "Hz", "kHz", "MHz", "GHz", "THz") as fc.Arbitrary<Figure["frequencyUnit"]>,
+  ticks: fc.constantFrom("out", "all") as fc.Arbitrary<Figure["ticks"]>,
 });
 
 const physics: fc.Arbitrary<PhysicsSettings> = fc.record({

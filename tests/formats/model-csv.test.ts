@@ -44,6 +44,9 @@ function project(models: Model[], massRangeEv: [number, number] = [1e-6, 1e-3]):
       fontPt: 8,
       font: "sans",
       title: "",
+      massUnit: "eV",
+      frequencyUnit: "auto",
+      ticks: "out",
     },
   };
 }

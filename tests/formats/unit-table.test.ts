@@ -20,6 +20,7 @@ const H_EV_S = 4.135667696e-15;
 const KILO = 1e3;
 const MEGA = 1e6;
 const GIGA = 1e9;
+const TERA = 1e12;
 const MILLI = 1e-3;
 const MICRO = 1e-6;
 const NANO = 1e-9;
@@ -40,6 +41,7 @@ const EV_PER_UNIT: Record<string, number> = {
   kHz: KILO * H_EV_S,
   MHz: MEGA * H_EV_S,
   GHz: GIGA * H_EV_S,
+  THz: TERA * H_EV_S,
 };
 
 // CODATA 2018 α (same reference); K = 5.691 μeV (Gorghetto & Villadoro, JHEP 03 (2019) 033, m_a = K·10¹² GeV/f_a

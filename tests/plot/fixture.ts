@@ -141,6 +141,9 @@ export function fixtureProject(): Project {
       fontPt: 12,
       font: "sans",
       title: "",
+      massUnit: "eV",
+      frequencyUnit: "auto",
+      ticks: "out",
     },
   };
 }

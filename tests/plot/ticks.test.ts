@@ -70,13 +70,31 @@ describe("decade ticks", () => {
     expect(exps).toEqual([-9, -6, -3]);
   });
 
-  test("a range under one decade gets labels at 2× and 5×, written 2×10⁻⁶ (ISO 80000-1 multiplication sign)", () => {
+  test("a range under one decade gets labels at 1…9 × 10⁻⁶ when they fit, written 2×10⁻⁶ (ISO 80000-1 multiplication sign; 1…9 between decades: common practice)", () => {
     const ticks = logTicks(1.5e-6, 8e-6, opts(600));
     const texts = labelled(ticks).map((t) =>
       (t.label ?? []).map((r) => (r.shift === "sup" ? `^${r.text}` : r.text)).join(""),
     );
-    expect(texts).toEqual(["2×10^\u22126", "5×10^\u22126"]);
+    expect(texts).toEqual([2, 3, 4, 5, 6, 7, 8].map((k) => `${k}×10^\u22126`));
     expect(labelled(ticks).every((t) => t.value >= 1.5e-6 && t.value <= 8e-6)).toBe(true);
+    // Narrower label room: 1-2-3-5 or 1-2-5 instead (35 px labels need 39 px; 7→8 is 600·log10(8/7) = 34.8 px).
+    const sparse = labelled(logTicks(1.5e-6, 8e-6, { pxPerDecade: 600, labelExtentPx: () => 35 }));
+    expect(sparse.map((t) => Math.round(t.value * 1e7) / 10)).toEqual([2, 3, 5]);
+  });
+
+  test("a range of one to two decades is labelled at 1, 2 and 5 × 10^k (common practice)", () => {
+    const lab = labelled(logTicks(2e-6, 6e-5, opts(300)));
+    expect(lab.map((t) => Number(t.value.toPrecision(6)))).toEqual([2e-6, 5e-6, 1e-5, 2e-5, 5e-5]);
+    expect(lab.filter((t) => t.major).map((t) => t.value)).toEqual([1e-5]);
+  });
+
+  test("a very narrow range gets linear nice steps 3.1, 3.15, 3.2 … ×10⁻⁶ (1-2-5 steps of the decimal grid, common practice)", () => {
+    const lab = labelled(logTicks(3.1e-6, 3.4e-6, { pxPerDecade: 20000, labelExtentPx: () => 60 }));
+    expect(lab.length).toBeGreaterThanOrEqual(3);
+    const steps = lab.slice(1).map((t, i) => t.value - lab[i].value);
+    for (const d of steps) expect(d / steps[0]).toBeCloseTo(1, 9);
+    expect([0.05e-6, 0.1e-6]).toContainEqual(Number(steps[0].toPrecision(6)));
+    expect(lab.map((t) => (t.label ?? []).map((r) => r.text).join(""))).toContain("3.2×10\u22126");
   });
 
   test("a very narrow range still gets at least two labels (D3 linear ticks inside the decade)", () => {
@@ -103,6 +121,26 @@ describe("labels never collide (common practice: no overlapping tick labels)", (
       for (let k = 1; k < lab.length; k++) {
         const dist = ppd * Math.log10(lab[k].value / lab[k - 1].value);
         expect(dist).toBeGreaterThanOrEqual((width(lab[k].label!) + width(lab[k - 1].label!)) / 2 + 8 - 1e-6);
+      }
+    }
+  });
+});
+
+describe("zoomed axes have at least three labels (common practice: a reader needs three to see the scale)", () => {
+  test("random spans of 0.02 to 2 decades on 300–1000 px axes, scientific and plain labels at 16 px with the slide's 12.8 px gap: ≥ 3 labels, none overlapping", () => {
+    const r = rng(7);
+    const width = (runs: readonly { text: string; shift?: string }[]) => runsWidthPx(runs as never, 16);
+    for (let i = 0; i < 400; i++) {
+      const lo = 10 ** (-12 + 14 * r());
+      const span = 10 ** (-1.7 + 2 * r()); // 0.02 to 2 decades
+      const hi = lo * 10 ** span;
+      const ppd = (300 + 700 * r()) / span;
+      const format = i % 2 ? undefined : (v: number) => [{ text: String(Number(v.toPrecision(6))) }];
+      const lab = labelled(logTicks(lo, hi, { pxPerDecade: ppd, labelExtentPx: width, labelGapPx: 12.8, format }));
+      expect(lab.length, `range ${lo}..${hi}`).toBeGreaterThanOrEqual(3);
+      for (let k = 1; k < lab.length; k++) {
+        const dist = ppd * Math.log10(lab[k].value / lab[k - 1].value);
+        expect(dist).toBeGreaterThanOrEqual((width(lab[k].label!) + width(lab[k - 1].label!)) / 2 + 12.8 - 1e-6);
       }
     }
   });

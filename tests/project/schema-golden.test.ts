@@ -34,8 +34,15 @@ function expectedProject(path: string): Project {
   return {
     ...raw,
     // Keys that joined a version without a bump are absent from goldens written before them and read as their
-    // default (DEVELOPERS.md "Schema changes"): the figure font (sans, the look those figures had).
-    figure: { ...raw.figure, font: (raw.figure as Partial<Project["figure"]>).font ?? "sans" },
+    // default (DEVELOPERS.md "Schema changes"): the figure font (sans, the look those figures had); the mass axis
+    // in eV and the automatic frequency unit (as those figures were labelled); ticks outward (the house style).
+    figure: {
+      ...raw.figure,
+      font: (raw.figure as Partial<Project["figure"]>).font ?? "sans",
+      massUnit: (raw.figure as Partial<Project["figure"]>).massUnit ?? "eV",
+      frequencyUnit: (raw.figure as Partial<Project["figure"]>).frequencyUnit ?? "auto",
+      ticks: (raw.figure as Partial<Project["figure"]>).ticks ?? "out",
+    },
     curves: raw.curves.map((c) => ({
       ...c,
       massEv: Float64Array.from(c.massEv),

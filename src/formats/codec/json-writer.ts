@@ -2,7 +2,7 @@
 // written as digits straight into the buffer (no string or array per value), handed on in chunks.
 import { isPlainObject } from "../../project/json";
 import { NumberColumn, deltaForm } from "./numbers";
-import { POW10 } from "../pow10";
+import { POW10 } from "../../physics/pow10";
 
 // The compact JSON goes out in chunks of about this size (the deflater takes them as they come).
 export const CHUNK_BYTES = 1 << 20;

@@ -1,7 +1,7 @@
 // The number codec of curve data in links: exact decimal "delta" form (digit steps and exponent steps) or plain lists.
 import { isPlainObject } from "../../project/json";
 import { ShapeError } from "./compact";
-import { MAX_EXACT_POW10, POW10 } from "../pow10";
+import { MAX_EXACT_POW10, POW10 } from "../../physics/pow10";
 
 // Curve data (massEv, gInvGeV): either a JSON number array, or, when every value has at most 15 significant
 // digits (data typed or digitised with few digits), the "decimal delta" form { e: [...], d: [...] } where

@@ -80,6 +80,11 @@ const FIGURE_V1: Codec = {
     // Joined without a bump: links written before it decode to "sans", the look they had.
     { full: "font", short: "f", base: () => "sans" },
     { full: "title", short: "n", base: () => "" },
+    // Joined without a bump: links written before them decode to the eV axis, the automatic frequency unit and
+    // outward ticks (the house style since then).
+    { full: "massUnit", short: "mu", base: () => "eV" },
+    { full: "frequencyUnit", short: "fu", base: () => "auto" },
+    { full: "ticks", short: "tk", base: () => "out" },
   ],
 };
 

@@ -1,6 +1,6 @@
 // Reading numbers in place from the text, correctly rounded, with the unit's power of ten folded into the
 // exponent, so the import allocates nothing per row (Clinger's fast path, then the engine's Number()).
-import { MAX_EXACT_POW10, POW10 } from "../pow10";
+import { MAX_EXACT_POW10, POW10 } from "../../physics/pow10";
 
 export const ERR_NONE = 0;
 const ERR_EMPTY = 1;

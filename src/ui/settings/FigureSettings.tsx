@@ -1,7 +1,19 @@
-// The Figure settings section: size preset, typed axis ranges (validated; the previous range is kept on a
-// bad entry), y view, top axis, grid, legend place, font family and size, and title.
+// The Figure settings section: size preset, typed axis ranges (validated, with units; the previous range is kept
+// on a bad entry), y view, axis units, top axis, ticks, grid, legend place, font family and size, and title.
 import { useId, useState } from "react";
-import type { Figure, FigureFont, LegendPlace, SizePreset, TopAxis, YView } from "../../project/types";
+import type {
+  AxisMassUnit,
+  Figure,
+  FigureFont,
+  FrequencyUnitSetting,
+  LegendPlace,
+  SizePreset,
+  TickSides,
+  TopAxis,
+  YView,
+} from "../../project/types";
+import { checkRange, massRangeText, parseMassText, rangeText, type ParsedValue } from "../../formats/axis-range";
+import { massUnitInfo } from "../../physics/units";
 import { CUSTOM_MM_LIMITS } from "../../project/limits";
 import { useShallow } from "zustand/react/shallow";
 import { useAxband, type AxbandState } from "../store";
@@ -25,7 +37,19 @@ const FONTS: { value: FigureFont; label: string }[] = [
 const TOP_AXES: { value: TopAxis; label: string }[] = [
   { value: "none", label: "none" },
   { value: "fa", label: "f_a [GeV]" },
-  { value: "frequency", label: "frequency [Hz]" },
+  { value: "frequency", label: "frequency ν [Hz…THz]" },
+];
+const MASS_UNITS: { value: AxisMassUnit; label: string }[] = (["eV", "meV", "ueV", "neV"] as const).map((u) => ({
+  value: u,
+  label: massUnitInfo(u).label,
+}));
+const FREQUENCY_UNITS: { value: FrequencyUnitSetting; label: string }[] = [
+  { value: "auto", label: "automatic (suits the range)" },
+  ...(["Hz", "kHz", "MHz", "GHz", "THz"] as const).map((u) => ({ value: u, label: u })),
+];
+const TICKS: { value: TickSides; label: string }[] = [
+  { value: "out", label: "outside, left and bottom" },
+  { value: "all", label: "outside, all four sides" },
 ];
 const LEGEND: { value: LegendPlace; label: string }[] = [
   // The inner corner covering the least of the curves and models (src/plot/legend-place.ts).
@@ -38,52 +62,32 @@ const LEGEND: { value: LegendPlace; label: string }[] = [
   { value: "hidden", label: "hidden" },
 ];
 
-/** Short text for a range end: 1e-7 → "1e-7", 2.5e-13 → "2.5e-13", 0.5 → "0.5". */
-export function rangeText(v: number): string {
-  if (v === 0) return "0";
-  const e = Math.floor(Math.log10(Math.abs(v)));
-  if (e >= -3 && e <= 4) return String(Number(v.toPrecision(4)));
-  return Number(v.toPrecision(4)).toExponential().replace("e+", "e");
-}
-
-/** Validates a typed axis range; returns the range or a message naming what is wrong. */
-export function checkRange(
-  minText: string,
-  maxText: string,
-  what: string,
-): { ok: true; range: [number, number] } | { ok: false; error: string } {
-  const lo = Number(minText.trim().replace(/\u2212/g, "-"));
-  const hi = Number(maxText.trim().replace(/\u2212/g, "-"));
-  if (minText.trim() === "" || !Number.isFinite(lo))
-    return { ok: false, error: `${what} min: “${minText}” is not a number` };
-  if (maxText.trim() === "" || !Number.isFinite(hi))
-    return { ok: false, error: `${what} max: “${maxText}” is not a number` };
-  if (lo <= 0 || hi <= 0) return { ok: false, error: `${what}: both ends must be positive (log axis)` };
-  if (lo >= hi) return { ok: false, error: `${what}: min must be less than max` };
-  if (hi / lo > 1e40) return { ok: false, error: `${what}: at most 40 decades` };
-  return { ok: true, range: [lo, hi] };
-}
-
 function RangeFields({
   label,
   unit,
   range,
   onApply,
   testid,
+  parse,
+  show = rangeText,
 }: {
   label: string;
   unit: string;
   range: [number, number];
   onApply: (r: [number, number]) => void;
   testid: string;
+  /** Reads a typed end (a bare number, or one with a unit). @default a plain number */
+  parse?: (text: string) => ParsedValue;
+  /** Writes a range end in the field's unit. */
+  show?: (v: number) => string;
 }) {
   const [draft, setDraft] = useState<[string, string] | null>(null);
   const [error, setError] = useState<string | null>(null);
   const errId = useId();
-  const shown: [string, string] = draft ?? [rangeText(range[0]), rangeText(range[1])];
+  const shown: [string, string] = draft ?? [show(range[0]), show(range[1])];
   const apply = (d: [string, string] | null) => {
     if (!d) return;
-    const r = checkRange(d[0], d[1], label);
+    const r = checkRange(d[0], d[1], label, parse);
     if (!r.ok) {
       setError(r.error);
       return;
@@ -130,7 +134,7 @@ function RangeFields({
       </div>
       {error ? (
         <p id={errId} className="field-error">
-          {error}; kept {rangeText(range[0])} to {rangeText(range[1])}.
+          {error}; kept {show(range[0])} to {show(range[1])}.
         </p>
       ) : null}
     </div>
@@ -203,11 +207,12 @@ function NumberSetting({
 
 /** The typed axis ranges: the only part of the settings that follows zoom and pan. */
 function ViewRanges() {
-  const { massRangeEv, yRange, yView } = useAxband(
+  const { massRangeEv, yRange, yView, massUnit } = useAxband(
     useShallow((s: AxbandState) => ({
       massRangeEv: s.project.figure.massRangeEv,
       yRange: s.project.figure.yRange,
       yView: s.project.figure.yView,
+      massUnit: s.project.figure.massUnit,
     })),
   );
   const setView = useAxband((s) => s.setView);
@@ -217,9 +222,11 @@ function ViewRanges() {
     <>
       <RangeFields
         label="m_a"
-        unit="eV"
+        unit={massUnitInfo(massUnit).label}
         testid="range-mass"
         range={massRangeEv}
+        parse={(t) => parseMassText(t, massUnit)}
+        show={(v) => massRangeText(v, massUnit)}
         onApply={(r) => setView(r, useAxband.getState().project.figure.yRange)}
       />
       <RangeFields
@@ -273,7 +280,30 @@ export function FigureSettings() {
       ) : null}
       <ViewRanges />
       <Select label="y axis" value={figure.yView} options={Y_VIEWS} onChange={(v) => set({ yView: v })} />
+      <Select
+        label="Mass unit"
+        value={figure.massUnit}
+        options={MASS_UNITS}
+        testId="figure-mass-unit"
+        onChange={(v) => set({ massUnit: v })}
+      />
       <Select label="Top axis" value={figure.topAxis} options={TOP_AXES} onChange={(v) => set({ topAxis: v })} />
+      {figure.topAxis === "frequency" ? (
+        <Select
+          label="Frequency unit"
+          value={figure.frequencyUnit}
+          options={FREQUENCY_UNITS}
+          testId="figure-frequency-unit"
+          onChange={(v) => set({ frequencyUnit: v })}
+        />
+      ) : null}
+      <Select
+        label="Ticks"
+        value={figure.ticks}
+        options={TICKS}
+        testId="figure-ticks"
+        onChange={(v) => set({ ticks: v })}
+      />
       <Select label="Legend" value={figure.legend} options={LEGEND} onChange={(v) => set({ legend: v })} />
       <Select
         label="Font"
