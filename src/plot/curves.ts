@@ -1,5 +1,5 @@
-// Curves as scene nodes by role: exclusion (filled from the curve up past the plot top, plus the line),
-// projection (a line), region (a closed, filled and outlined polygon), at pixel resolution via thinning/.
+// Curves as scene nodes by role: exclusion (its edge, hatched on the excluded side and/or filled from the curve up
+// past the plot top), projection (a line), region (a closed, filled and outlined polygon), at pixel resolution via thinning/.
 import type { Curve, YView } from "../project/types";
 import type { AxionConstants } from "../physics/constants";
 import type { PathNode } from "./scene-types";
@@ -8,6 +8,7 @@ import { curvePixels, pathDataCompact, prepareCurve, type PreparedCurve } from "
 import { dashFor, r2, safeColour, unitInterval } from "./format";
 import { viewTransform, type LogAffine } from "./scales";
 import { rescaleFactor } from "./physics-settings";
+import { hatchEdge, hatchStyleFor, insideSide } from "./hatch";
 
 export interface CurveFrame {
   constants: AxionConstants;
@@ -28,7 +29,15 @@ export interface CurveGeometry {
   /** Points drawn after thinning and clipping. */
   drawn: number;
   fills: PathNode[];
+  /** Hatches on the excluded side (drawn over all fills, under all lines). */
+  hatches: PathNode[];
   lines: PathNode[];
+}
+
+/** How an exclusion marks its excluded side (an unknown value reads as the house style's hatches). */
+export function exclusionMarkOf(curve: Pick<Curve, "exclusionMark">): Curve["exclusionMark"] {
+  const m = curve.exclusionMark;
+  return m === "fill" || m === "hatch-fill" ? m : "hatch";
 }
 
 /** Whether a curve is drawn in mass order: exclusions and projections unless keepOrder; regions never. */
@@ -69,26 +78,51 @@ export function curveGeometry(curve: Curve, f: CurveFrame, nodeId: string): Curv
   const data = { "curve-id": curve.id, "curve-role": curve.role };
   const fills: PathNode[] = [];
   const lines: PathNode[] = [];
-  const out: CurveGeometry = { role: curve.role, skipped: prep.skipped, drawn: pl.n, fills, lines };
+  const hatches: PathNode[] = [];
+  const out: CurveGeometry = { role: curve.role, skipped: prep.skipped, drawn: pl.n, fills, hatches, lines };
   if (pl.n === 0) return out;
   if (curve.role === "exclusion") {
-    // One path, filled and stroked: the curve, then up past the plot top (outside the clip) and back. Its
-    // stroke also marks the vertical ends of the excluded region where they lie inside the plot.
+    // One path, stroked and (with a fill mark) filled: the curve, then up past the plot top (outside the clip)
+    // and back. Its stroke also marks the vertical ends of the excluded region where they lie inside the plot.
     const topY = r2(f.plot.y - 4 * lw - 2);
     const closeUp = `L${r2(pl.xs[pl.n - 1])} ${topY}L${r2(pl.xs[0])} ${topY}Z`;
     const exclusionD = pathDataCompact(pl, closeUp);
+    const mark = exclusionMarkOf(curve);
     fills.push({
       kind: "path",
       id: `${nodeId}-exclusion`,
       d: exclusionD,
       writtenD: exclusionD,
-      fill: colour,
-      fillOpacity: opacity,
+      fill: mark === "hatch" ? "none" : colour,
+      fillOpacity: mark === "hatch" ? undefined : opacity,
       stroke: colour,
       strokeWidth: lw,
       dash,
       data: { ...data },
     });
+    if (mark !== "fill") {
+      // The hatches run along the same edge: the vertical ends, then the curve (the top is outside the clip).
+      const edge = {
+        xs: pl.xs,
+        ys: pl.ys,
+        n: pl.n,
+        from: [r2(pl.xs[0]), topY],
+        to: [r2(pl.xs[pl.n - 1]), topY],
+      } as const;
+      const style = hatchStyleFor(lw);
+      const h = hatchEdge({ ...edge, side: insideSide(edge) }, f.plot, style, lw);
+      if (h.count > 0)
+        hatches.push({
+          kind: "path",
+          id: `${nodeId}-hatch`,
+          d: h.d,
+          writtenD: h.d,
+          stroke: colour,
+          strokeWidth: r2(style.widthPx),
+          fill: "none",
+          data: { ...data, "curve-part": "hatch" },
+        });
+    }
   } else if (curve.role === "projection") {
     const d = pathDataCompact(pl);
     lines.push({
@@ -145,6 +179,7 @@ export function curveShape(curve: Curve, f: CurveFrame): Shape | null {
     xs[m - 1] = r2(pl.xs[0]);
     ys[m - 1] = topY;
   }
-  const filled = curve.role !== "projection" && unitInterval(curve.fillOpacity, 0.3) > 0;
+  // A hatched exclusion's region counts as covered too: it is excluded even where only its edge is marked.
+  const filled = curve.role !== "projection" && (unitInterval(curve.fillOpacity, 0.3) > 0 || exclusion);
   return { subpaths: [{ xs, ys, closed: closed || exclusion }], fill: filled, stroke: f.lineWidthPx > 0 };
 }

@@ -4,7 +4,7 @@ import { DEFAULT_MASS_RANGE_EV, defaultYRange } from "../project/defaults";
 import type { Curve, FigureFont, LegendPlace, Model, Project, YView } from "../project/types";
 import type { PathNode, Scene, SceneLayer, SceneNode, ScaleConfig } from "./scene-types";
 import { axesNodes, axisTicks, gridNodes, verticalTickOpts, yTitle, type AxesFrame } from "./axes";
-import { curveGeometry, curveShape } from "./curves";
+import { curveGeometry, curveShape, exclusionMarkOf } from "./curves";
 import { dashFor, plainOrScientificRuns, powerOfTenRuns, r2, safeColour, unitInterval } from "./format";
 import {
   computeLayout,
@@ -121,13 +121,15 @@ function legendEntries(project: Project, fonts: Fonts, c: ReturnType<typeof cons
   }
   for (const cv of project.curves) {
     if (!cv.visible) continue;
+    const mark = cv.role === "exclusion" ? exclusionMarkOf(cv) : "fill";
     entries.push({
       kind: cv.role === "exclusion" ? "exclusion" : cv.role === "projection" ? "projection" : "region",
       text: withNotes(cv.label?.trim() || "(unnamed curve)", curveNotes(cv)),
       colour: safeColour(cv.colour, "#D55E00"),
       dash: dashFor(cv.lineStyle, fonts.dataLinePx),
-      fillOpacity: unitInterval(cv.fillOpacity, 0.3),
+      fillOpacity: mark === "hatch" ? 0 : unitInterval(cv.fillOpacity, 0.3),
       lineWidthPx: fonts.dataLinePx,
+      hatched: mark !== "fill",
       data: { "curve-id": cv.id },
     });
   }
@@ -278,6 +280,7 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
 
   // Curves: fills first, then lines, each in project order.
   const curveFills: SceneNode[] = [];
+  const curveHatches: SceneNode[] = [];
   const curveLines: SceneNode[] = [];
   const curveLineById = new Map<string, PathNode[]>();
   project.curves.forEach((cv, i) => {
@@ -296,6 +299,7 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
       `curve-${i + 1}`,
     );
     curveFills.push(...g.fills);
+    curveHatches.push(...g.hatches);
     curveLines.push(...g.lines);
     curveLineById.set(cv.id, g.lines.length ? g.lines : g.fills);
   });
@@ -391,7 +395,7 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
       nodes: [{ kind: "rect", id: "background-fill", x: 0, y: 0, w: r2(widthPx), h: r2(heightPx), fill: "#ffffff" }],
     },
     { id: "grid", clip: true, nodes: fig.grid ? gridNodes(frame, ticks) : [] },
-    { id: "curves", clip: true, nodes: [...curveFills, ...curveLines] },
+    { id: "curves", clip: true, nodes: [...curveFills, ...curveHatches, ...curveLines] },
     { id: "models", clip: true, nodes: [...modelFills, ...modelLines] },
     { id: "highlight", clip: true, nodes: highlight },
     { id: "axes", clip: false, nodes: axes },

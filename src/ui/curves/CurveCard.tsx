@@ -1,7 +1,7 @@
 // One curve in the curves list: label, colour, visibility, order, role, line style, fill, the rescaling of
 // haloscope-type limits and the CSV export. Every edit goes through the store (undoable, autosaved).
-import type { Curve, CurveRole, LineStyle } from "../../project/types";
-import { LINE_STYLES, ROLES } from "./roles";
+import type { Curve, CurveRole, ExclusionMark, LineStyle } from "../../project/types";
+import { EXCLUSION_MARKS, LINE_STYLES, ROLES } from "./roles";
 import { selectCurve, useAxband } from "../store";
 import { NumberField } from "./NumberField";
 import { isRescaled } from "../../plot/physics-settings";
@@ -102,6 +102,23 @@ function CurveStyle({ curve, update }: { curve: Curve; update: Update }) {
           ))}
         </select>
       </label>
+      {curve.role === "exclusion" && (
+        <label className="ax-field">
+          <span>Excluded side</span>
+          <select
+            aria-label="Excluded side"
+            data-testid="curve-exclusion-mark"
+            value={curve.exclusionMark}
+            onChange={(e) => update({ exclusionMark: e.target.value as ExclusionMark })}
+          >
+            {EXCLUSION_MARKS.map((m) => (
+              <option key={m.value} value={m.value}>
+                {m.label}
+              </option>
+            ))}
+          </select>
+        </label>
+      )}
       <label className="ax-field">
         <span>Fill</span>
         <input
@@ -111,7 +128,7 @@ function CurveStyle({ curve, update }: { curve: Curve; update: Update }) {
           step={0.05}
           aria-label="Fill opacity"
           value={curve.fillOpacity}
-          disabled={curve.role === "projection"}
+          disabled={curve.role === "projection" || (curve.role === "exclusion" && curve.exclusionMark === "hatch")}
           onChange={(e) => update({ fillOpacity: Number(e.target.value) }, "fill")}
         />
       </label>
