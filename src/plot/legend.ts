@@ -4,6 +4,7 @@ import type { Model } from "../project/types";
 import type { SceneNode, TextRun } from "./scene-types";
 import { r2 } from "./format";
 import { hatchStyleFor } from "./hatch";
+import { markupRuns } from "./markup";
 import { runsText, runsWidthPx, truncateRuns } from "./text";
 
 /**
@@ -60,14 +61,14 @@ export interface LegendBox {
 }
 
 /**
- * Size of the legend box. Labels longer than `maxLabelPx` are cut with "…" (the full text stays in the
- * entry's data-legend-entry attribute).
+ * Size of the legend box. Labels are read as math markup (markup.ts); longer than `maxLabelPx` they are cut
+ * with "…" (the full text stays in the entry's data-legend-entry attribute).
  */
 export function measureLegend(entries: LegendEntry[], sizePx: number, maxLabelPx: number): LegendBox {
   const padPx = sizePx * 0.55;
   const rowPx = sizePx * 1.38;
   const swatchPx = sizePx * 2.1;
-  const labels = entries.map((e) => truncateRuns([{ text: e.text }], sizePx, Math.max(sizePx * 4, maxLabelPx)));
+  const labels = entries.map((e) => truncateRuns(markupRuns(e.text), sizePx, Math.max(sizePx * 4, maxLabelPx)));
   const textW = labels.reduce((w, l) => Math.max(w, runsWidthPx(l, sizePx)), 0);
   if (entries.length === 0) return { widthPx: 0, heightPx: 0, rowPx, swatchPx, padPx, labels };
   return {

@@ -9,6 +9,7 @@ import { dashFor, plainOrScientificRuns, powerOfTenRuns, r2, safeColour, unitInt
 import {
   computeLayout,
   cornerLegendOrigin,
+  edgePadPx,
   fontsFor,
   presetOf,
   PX_PER_IN,
@@ -26,10 +27,12 @@ import {
 } from "./legend-place";
 import { modelShape, shapeCancels, shapeNormalizedRange } from "./model-shape";
 import type { Shape } from "./occupancy";
+import { markupRuns } from "./markup";
 import { modelGeometry } from "./models";
 import { constantsOf, rescaleNote } from "./physics-settings";
 import { logAffine, sanitizeDomain, viewTransform } from "./scales";
 import { runsWidthPx } from "./text";
+import { fitTitle, TITLE_LINE_SPACING, type TitleFit } from "./title";
 import { logTicks } from "./ticks";
 
 /**
@@ -231,13 +234,17 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   // Right margin: half of a wide decade label ("10⁻¹⁰"), fixed for the font size so the plot area does not
   // jump while zooming; a label that would still cross the figure edge is left out (axesNodes).
   const xHalf = runsWidthPx(powerOfTenRuns(-10), fonts.tickPx) / 2;
+  const titleText = fig.title?.trim() ?? "";
+  let title: TitleFit | null = titleText ? { lines: [markupRuns(titleText)], sizePx: fonts.headingPx } : null;
   const layoutFor = (place: LegendPlace, box: LegendBox) =>
     computeLayout({
       widthPx,
       heightPx,
       fonts,
       hasTopAxis: topAxis !== "none",
-      hasTitle: !!fig.title?.trim(),
+      hasTitle: !!title,
+      titleLines: title?.lines.length,
+      titleSizePx: title?.sizePx,
       yLabelWidthPx: (plotH) =>
         logTicks(yDomain[0], yDomain[1], {
           ...verticalTickOpts(plotH / ySpan, fonts),
@@ -249,13 +256,20 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   const scales: ScaleConfig = { massDomainEv, yDomain, yView: view };
   let legendPlace: LegendPlace = legendSetting;
   const legendBox = measureFor(legendPlace);
+  const pad = edgePadPx(fonts);
+  if (title) {
+    // The title is centred over the plot: it must fit both ways from the plot's centre (a first layout says where).
+    const p0 = layoutFor(legendPlace, legendBox).plot;
+    const cx = p0.x + p0.w / 2;
+    title = fitTitle(title.lines[0], fonts.headingPx, 2 * Math.min(cx - pad, widthPx - pad - cx));
+  }
   let layout: Layout | null = null;
   let autoPlace: LegendCorner | "outside-right" | undefined;
   if (legendPlace === "auto") {
     // Outside right only when no label is cut there and the plot keeps most of the width.
     const outsideFits = () => {
       const ob = measureFor("outside-right");
-      if (ob.labels.some((l, i) => legendLabelText(l) !== entries[i].text)) return false;
+      if (ob.labels.some((l, i) => legendLabelText(l) !== legendLabelText(markupRuns(entries[i].text)))) return false;
       const lo = layoutFor("outside-right", ob);
       return lo.plot.w >= OUTSIDE_MIN_PLOT_FRACTION * widthPx && ob.heightPx <= lo.plot.h;
     };
@@ -373,19 +387,25 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   }
 
   const axes = axesNodes(frame, ticks, layout, yTitle(view));
-  if (fig.title?.trim()) {
-    axes.push({
-      kind: "text",
-      id: "figure-title",
-      x: r2(plot.x + plot.w / 2),
-      y: r2(layout.headingBaseline),
-      runs: [{ text: fig.title.trim() }],
-      sizePx: r2(fonts.headingPx),
-      anchor: "middle",
-      baseline: "alphabetic",
-      fill: "#1a1a1a",
-      weight: "bold",
-    });
+  if (title) {
+    const t = title;
+    // Over the plot's centre, moved in only where the final plot (another legend place) would push it off the figure.
+    const half = Math.max(...t.lines.map((l) => runsWidthPx(l, t.sizePx))) / 2;
+    const x = Math.min(Math.max(plot.x + plot.w / 2, pad + half), widthPx - pad - half);
+    t.lines.forEach((runs, k) =>
+      axes.push({
+        kind: "text",
+        id: k === 0 ? "figure-title" : `figure-title-${k + 1}`,
+        x: r2(x),
+        y: r2(layout.headingBaseline + k * t.sizePx * TITLE_LINE_SPACING),
+        runs,
+        sizePx: r2(t.sizePx),
+        anchor: "middle",
+        baseline: "alphabetic",
+        fill: "#1a1a1a",
+        weight: "bold",
+      }),
+    );
   }
 
   const layers: SceneLayer[] = [
@@ -415,6 +435,7 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
     layers,
   };
   if (autoPlace && entries.length) scene.autoLegendPlace = autoPlace;
+  if (title?.note) scene.notes = [title.note];
   if (opts.physical !== false) {
     const custom = opts.widthPx !== undefined || opts.heightPx !== undefined;
     scene.widthPhysical = custom ? physicalOf(widthPx) : preset.widthPhysical;
