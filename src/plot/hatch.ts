@@ -81,7 +81,7 @@ function gather(e: HatchEdge): number {
   const put = (x: number, y: number) => {
     edgeX[k] = x;
     edgeY[k] = y;
-    edgeLen[k] = k === 0 ? 0 : edgeLen[k - 1] + Math.hypot(x - edgeX[k - 1], y - edgeY[k - 1]);
+    edgeLen[k] = k === 0 ? 0 : edgeLen[k - 1] + hypot(x - edgeX[k - 1], y - edgeY[k - 1]);
     k++;
   };
   if (e.from) put(e.from[0], e.from[1]);
@@ -109,6 +109,11 @@ function decimate(m: number, step: number): number {
   return k;
 }
 
+// Math.hypot guards against overflow we cannot have in scene px, and is several times slower in V8.
+function hypot(x: number, y: number): number {
+  return Math.sqrt(x * x + y * y);
+}
+
 type Box = { x0: number; y0: number; x1: number; y1: number };
 
 /** Whether points a and b lie in one box grown by `pad` on every side (a cheap "may come near" test). */
@@ -119,17 +124,6 @@ function nearBox(ax: number, ay: number, bx: number, by: number, r: Box, pad: nu
     Math.max(ay, by) >= r.y0 - pad &&
     Math.min(ay, by) <= r.y1 + pad
   );
-}
-
-/** Unit vector of the coarse chord k (from kept[k] to kept[k + 1]), into out; false for a chord of length 0. */
-function chordDir(k: number, out: number[]): boolean {
-  const dx = edgeX[kept[k + 1]] - edgeX[kept[k]];
-  const dy = edgeY[kept[k + 1]] - edgeY[kept[k]];
-  const len = Math.hypot(dx, dy);
-  if (len === 0) return false;
-  out[0] = dx / len;
-  out[1] = dy / len;
-  return true;
 }
 
 /**
@@ -153,10 +147,13 @@ export function hatchEdge(
   const K = decimate(m, step);
   const reach = style.lengthPx + lineWidthPx;
   const r = { x0: plot.x - reach, y0: plot.y - reach, x1: plot.x + plot.w + reach, y1: plot.y + plot.h + reach };
-  const near = (k: number) => nearBox(edgeX[kept[k]], edgeY[kept[k]], edgeX[kept[k + 1]], edgeY[kept[k + 1]], r, step);
   let visibleLen = 0;
-  for (let k = 0; k + 1 < K; k++)
-    if (near(k)) visibleLen += Math.hypot(edgeX[kept[k + 1]] - edgeX[kept[k]], edgeY[kept[k + 1]] - edgeY[kept[k]]);
+  for (let k = 0; k + 1 < K; k++) {
+    const a0 = kept[k];
+    const a1 = kept[k + 1];
+    if (nearBox(edgeX[a0], edgeY[a0], edgeX[a1], edgeY[a1], r, step))
+      visibleLen += hypot(edgeX[a1] - edgeX[a0], edgeY[a1] - edgeY[a0]);
+  }
   const cap = (4 * (plot.w + plot.h)) / style.spacingPx;
   const spacing = visibleLen / style.spacingPx > cap ? visibleLen / cap : style.spacingPx;
   const len = style.lengthPx + lineWidthPx / 2;
@@ -165,26 +162,43 @@ export function hatchEdge(
   const cosA = Math.cos(a);
   const sinA = Math.sin(a);
   const parts: string[] = [];
-  const u = [0, 0]; // this chord's direction
-  const v = [0, 0]; // the next chord's direction
-  const t0 = [0, 0]; // tangent at the chord's start: bisector of the previous chord and this one
+  // Directions as plain numbers (no arrays in the loop): the tangent at the chord's start (t0x, t0y).
+  let t0x = 0;
+  let t0y = 0;
   let hasPrev = false;
   // Path length (along the coarse path) to the next hatch: half a spacing in, so a short edge still gets one.
   let next = spacing / 2;
   for (let k = 0; k + 1 < K; k++) {
     const i0 = kept[k];
     const i1 = kept[k + 1];
-    const chordLen = Math.hypot(edgeX[i1] - edgeX[i0], edgeY[i1] - edgeY[i0]);
-    if (!chordDir(k, u)) continue;
-    if (!hasPrev) [t0[0], t0[1]] = u;
-    const hasNext = k + 2 < K && chordDir(k + 1, v);
+    const dx = edgeX[i1] - edgeX[i0];
+    const dy = edgeY[i1] - edgeY[i0];
+    const chordLen = hypot(dx, dy);
+    if (chordLen === 0) continue;
+    const ux = dx / chordLen;
+    const uy = dy / chordLen;
+    if (!hasPrev) {
+      t0x = ux;
+      t0y = uy;
+    }
     // Tangent at the chord's end: bisector of this chord and the next (this chord's own where they oppose).
-    let t1x = hasNext ? u[0] + v[0] : u[0];
-    let t1y = hasNext ? u[1] + v[1] : u[1];
-    const t1n = Math.hypot(t1x, t1y);
-    if (t1n < 1e-6) [t1x, t1y] = u;
-    else [t1x, t1y] = [t1x / t1n, t1y / t1n];
-    if (near(k)) {
+    let t1x = ux;
+    let t1y = uy;
+    if (k + 2 < K) {
+      const vx = edgeX[kept[k + 2]] - edgeX[i1];
+      const vy = edgeY[kept[k + 2]] - edgeY[i1];
+      const vl = hypot(vx, vy);
+      if (vl > 0) {
+        const bx = ux + vx / vl;
+        const by = uy + vy / vl;
+        const bl = hypot(bx, by);
+        if (bl > 1e-6) {
+          t1x = bx / bl;
+          t1y = by / bl;
+        }
+      }
+    }
+    if (nearBox(edgeX[i0], edgeY[i0], edgeX[i1], edgeY[i1], r, step)) {
       const fine0 = edgeLen[i0];
       const fineLen = edgeLen[i1] - fine0;
       let j = i0;
@@ -202,24 +216,28 @@ export function hatchEdge(
         // end's bisector over the last: a long straight chord keeps its hatches square to it.
         const ws = Math.max(0, 1 - next / blend);
         const we = Math.max(0, 1 - (chordLen - next) / blend);
-        let tx = ws * t0[0] + we * t1x + Math.max(0, 1 - ws - we) * u[0];
-        let ty = ws * t0[1] + we * t1y + Math.max(0, 1 - ws - we) * u[1];
-        const tn = Math.hypot(tx, ty);
-        [tx, ty] = tn < 1e-6 ? [u[0], u[1]] : [tx / tn, ty / tn];
+        const wu = Math.max(0, 1 - ws - we);
+        let tx = ws * t0x + we * t1x + wu * ux;
+        let ty = ws * t0y + we * t1y + wu * uy;
+        const tn = hypot(tx, ty);
+        if (tn < 1e-6) {
+          tx = ux;
+          ty = uy;
+        } else {
+          tx /= tn;
+          ty /= tn;
+        }
         // Unit normal into the excluded side, turned by the style's angle towards the direction of travel.
         const nx = e.side * ty;
         const ny = -e.side * tx;
-        const hx = len * (cosA * nx + sinA * tx);
-        const hy = len * (cosA * ny + sinA * ty);
-        parts.push(`M${r2(px)} ${r2(py)}l${r2(hx)} ${r2(hy)}`);
+        parts.push(`M${r2(px)} ${r2(py)}l${r2(len * (cosA * nx + sinA * tx))} ${r2(len * (cosA * ny + sinA * ty))}`);
       }
     } else if (next <= chordLen) {
       next += Math.ceil((chordLen - next) / spacing + 1e-9) * spacing;
-      if (next <= chordLen) next += spacing;
     }
     next -= chordLen;
-    t0[0] = t1x;
-    t0[1] = t1y;
+    t0x = t1x;
+    t0y = t1y;
     hasPrev = true;
   }
   return { d: parts.join(""), count: parts.length };
