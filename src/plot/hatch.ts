@@ -134,6 +134,7 @@ function nearBox(ax: number, ay: number, bx: number, by: number, r: Box, pad: nu
  * the plot are written, at most `4 · (plot.w + plot.h) / spacingPx` of them (a wild edge gets wider spacing):
  * the work is O(n), the output bounded by the plot size.
  */
+// Hot loop: long on purpose (one pass per chord with the tangents in locals, no allocation per hatch).
 export function hatchEdge(
   e: HatchEdge,
   plot: { x: number; y: number; w: number; h: number },
