@@ -36,6 +36,7 @@ async function loadProject(legend: Project["figure"]["legend"] = "outside-right"
       colour: COLOURS[i % COLOURS.length],
       lineStyle: role === "projection" ? "dashed" : "solid",
       fillOpacity: 0.25,
+      exclusionMark: "hatch",
       visible: true,
       rescale: { rhoAssumed: 0.45, rhoShown: 0.45, fraction: 1 },
       citation: "invented benchmark curve",

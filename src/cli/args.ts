@@ -1,6 +1,6 @@
 // Command-line arguments of the renderer (`npm run render -- …`): a pure parser from argv to options, and
 // the usage text. Kept apart from render.ts so the rules (roles per file, ranges, presets) are unit-testable.
-import type { CurveRole, SizePreset } from "../project/types";
+import type { CurveRole, ExclusionMark, SizePreset } from "../project/types";
 import type { FigureFontFamily } from "../formats/pdf/fonts";
 import { overlapFormat } from "./overlap-out";
 import { parseMassText, type ParsedValue } from "../formats/axis-range";
@@ -44,6 +44,8 @@ export interface CliOptions extends AxesCliOptions {
   skipBadRows: boolean;
   massRangeEv?: [number, number];
   gRange?: [number, number];
+  /** How every exclusion curve marks its excluded side. @default each curve's own (hatches for CSV input) */
+  exclusions?: ExclusionMark;
   title?: string;
   /** The figure's font family (SVG, PNG and PDF). @default the project's (a new project's is "sans") */
   font?: FigureFontFamily;
@@ -65,6 +67,8 @@ output (at least one of -o, --png, --models-csv, --overlap, --overlap-intervals)
                             .pdf, as a vector PDF of the figure's physical size with the project attached
   --font sans|serif         the figure's font in SVG, PNG and PDF: Computer Modern Sans or Serif, LaTeX's own
                             look (default: the project's; sans for CSV input)
+  --exclusions hatch|fill|hatch-fill  mark every exclusion's excluded side with short hatches (the house
+                            style), the translucent fill, or both (default: each curve's own)
   --png FILE.png            write the figure as PNG
   --dpi N                   PNG dots per inch at the figure's physical size (default 300)
   --scale K                 PNG at K times the 96-px-per-inch size instead (1 or 2, as the app's 1x/2x)
@@ -135,6 +139,7 @@ const WITH_VALUE = new Set([
   "--overlap",
   "--overlap-intervals",
   "--role",
+  "--exclusions",
   "--model",
   "--mass-unit",
   "--coupling-unit",
@@ -232,6 +237,11 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
         if (!ROLES.includes(value as CurveRole))
           return { ok: false, error: `--role: expected one of ${ROLES.join(", ")}, got "${value}"` };
         roles.push(value as CurveRole);
+        break;
+      case "--exclusions":
+        if (value !== "hatch" && value !== "fill" && value !== "hatch-fill")
+          return { ok: false, error: `--exclusions: expected hatch, fill or hatch-fill, got "${value}"` };
+        o.exclusions = value;
         break;
       case "--model":
         o.models.push(value);

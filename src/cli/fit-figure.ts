@@ -16,10 +16,16 @@ function plotFits(project: Project): boolean {
   return x >= 0 && y >= 0 && w > 0 && h > 0 && x + w <= s.widthPx && y + h <= s.heightPx;
 }
 
+/** What the figure itself changed to fit (a long title wrapped or shrunk), as notes. */
+function sceneNotes(project: Project): string[] {
+  return (buildScene(project).notes ?? []).map((n) => `figure: ${n}`);
+}
+
 /**
  * The project to draw and notes on what was changed for it: a custom size outside the drawn limits is noted
  * (the plot core clamps it), and a text size that pushes the plot off the figure is lowered to the largest
- * whole pt that fits. Throws InputError when no text size fits.
+ * whole pt that fits; what the figure changes itself (a long title) is noted too. Throws InputError when no text
+ * size fits.
  */
 export function fitFigure(project: Project): { project: Project; notes: string[] } {
   const f = project.figure;
@@ -38,7 +44,7 @@ export function fitFigure(project: Project): { project: Project; notes: string[]
     curves: project.curves.map((c) => ({ ...c, massEv: new Float64Array(0), gInvGeV: new Float64Array(0) })),
   };
   const withFont = (pt: number): Project => ({ ...light, figure: { ...light.figure, fontPt: pt } });
-  if (plotFits(light)) return { project, notes };
+  if (plotFits(light)) return { project, notes: [...notes, ...sceneNotes(light)] };
   const drawn = presetOf(f);
   const size = `${drawn.widthMm} × ${drawn.heightMm} mm`;
   for (let pt = Math.min(FONT_PT_LIMITS[1], Math.floor(f.fontPt)); pt >= FONT_PT_LIMITS[0]; pt--) {
@@ -46,7 +52,7 @@ export function fitFigure(project: Project): { project: Project; notes: string[]
     notes.push(
       `figure: ${f.fontPt} pt text leaves no room for the plot in ${size}; drawn with ${pt} pt text (set the text size or the figure size in the app to choose)`,
     );
-    return { project: { ...project, figure: { ...f, fontPt: pt } }, notes };
+    return { project: { ...project, figure: { ...f, fontPt: pt } }, notes: [...notes, ...sceneNotes(withFont(pt))] };
   }
   throw new InputError(
     `figure: ${size} leaves no room for the plot even with ${FONT_PT_LIMITS[0]} pt text; choose a larger size (--preset custom --width-mm W --height-mm H)`,

@@ -154,7 +154,7 @@ function loadCsv(inputs: CliInput[], opts: CliOptions, preParsed: PreParsed): Lo
   return { project: { ...project, curves, models, figure }, notes };
 }
 
-/** Applies the size, range, title and font options to a loaded project (a copy; figure fields only). */
+/** Applies the size, range, title, font and exclusion options to a loaded project (a copy). */
 export function applyFigureOptions(project: Project, opts: CliOptions): Project {
   const f = { ...project.figure };
   if (opts.preset) f.preset = opts.preset;
@@ -164,7 +164,11 @@ export function applyFigureOptions(project: Project, opts: CliOptions): Project 
   if (opts.gRange) f.yRange = opts.gRange;
   if (opts.title !== undefined) f.title = opts.title;
   if (opts.font) f.font = opts.font;
-  return { ...project, figure: applyAxesOptions(f, opts) };
+  const mark = opts.exclusions;
+  const curves = mark
+    ? project.curves.map((c) => (c.role === "exclusion" ? { ...c, exclusionMark: mark } : c))
+    : project.curves;
+  return { ...project, curves, figure: applyAxesOptions(f, opts) };
 }
 
 /** Notes for curves of a loaded project with points a log axis cannot show (they stay in the project). */

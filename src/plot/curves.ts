@@ -1,5 +1,5 @@
-// Curves as scene nodes by role: exclusion (filled from the curve up past the plot top, plus the line),
-// projection (a line), region (a closed, filled and outlined polygon), at pixel resolution via thinning/.
+// Curves as scene nodes by role: exclusion (its edge, hatched on the excluded side and/or filled from the curve up
+// past the plot top), projection (a line), region (a closed, filled and outlined polygon), at pixel resolution via thinning/.
 import type { Curve, YView } from "../project/types";
 import type { AxionConstants } from "../physics/constants";
 import type { PathNode } from "./scene-types";
@@ -11,6 +11,7 @@ import { compactPolygons } from "./path-writer";
 import { dashFor, r2, safeColour, unitInterval } from "./format";
 import { viewTransform, type LogAffine } from "./scales";
 import { rescaleFactor } from "./physics-settings";
+import { hatchEdge, hatchStyleFor, insideSide } from "./hatch";
 
 export interface CurveFrame {
   constants: AxionConstants;
@@ -33,7 +34,15 @@ export interface CurveGeometry {
   /** Points drawn after thinning and clipping. */
   drawn: number;
   fills: PathNode[];
+  /** Hatches on the excluded side (drawn over all fills, under all lines). */
+  hatches: PathNode[];
   lines: PathNode[];
+}
+
+/** How an exclusion marks its excluded side (an unknown value reads as the house style's hatches). */
+export function exclusionMarkOf(curve: Pick<Curve, "exclusionMark">): Curve["exclusionMark"] {
+  const m = curve.exclusionMark;
+  return m === "fill" || m === "hatch-fill" ? m : "hatch";
 }
 
 /** Whether a curve is drawn in mass order: exclusions and projections unless keepOrder; regions never. */
@@ -102,7 +111,8 @@ export function curveGeometry(curve: Curve, f: CurveFrame, nodeId: string): Curv
   const data = { "curve-id": curve.id, "curve-role": curve.role };
   const fills: PathNode[] = [];
   const lines: PathNode[] = [];
-  const out: CurveGeometry = { role: curve.role, skipped: prep.skipped, drawn: raw.n, fills, lines };
+  const hatches: PathNode[] = [];
+  const out: CurveGeometry = { role: curve.role, skipped: prep.skipped, drawn: raw.n, fills, hatches, lines };
   if (raw.n === 0) return out;
   const { line: pl, band } = withEnvelope(raw, curve, f, dash, {
     id: `${nodeId}-envelope`,
@@ -122,12 +132,19 @@ export function curveGeometry(curve: Curve, f: CurveFrame, nodeId: string): Curv
     data: { ...data },
   });
   if (curve.role === "exclusion") {
-    // One path, filled and stroked: the curve, then up past the plot top (outside the clip) and back. Its
-    // stroke also marks the vertical ends of the excluded region where they lie inside the plot.
+    // One path, stroked and (with a fill mark) filled: the curve, then up past the plot top (outside the clip)
+    // and back. Its stroke also marks the vertical ends of the excluded region where they lie inside the plot.
     const topY = r2(f.plot.y - 4 * lw - 2);
     const closeUp = `L${r2(pl.xs[pl.n - 1])} ${topY}L${r2(pl.xs[0])} ${topY}Z`;
-    fills.push(path("exclusion", pathDataCompact(pl, closeUp), { fill: colour, fillOpacity: opacity }));
+    const mark = exclusionMarkOf(curve);
+    fills.push(
+      path("exclusion", pathDataCompact(pl, closeUp), {
+        fill: mark === "hatch" ? "none" : colour,
+        fillOpacity: mark === "hatch" ? undefined : opacity,
+      }),
+    );
     if (band) fills.push(band);
+    if (mark !== "fill") hatches.push(...hatchNodes(raw, topY, f, lw, colour, `${nodeId}-hatch`, data));
   } else if (curve.role === "projection") {
     lines.push(path("line", pathDataCompact(pl), { fill: "none" }));
     if (band) lines.push(band);
@@ -160,6 +177,43 @@ export function curveShape(curve: Curve, f: CurveFrame): Shape | null {
     xs[m - 1] = r2(pl.xs[0]);
     ys[m - 1] = topY;
   }
-  const filled = curve.role !== "projection" && unitInterval(curve.fillOpacity, 0.3) > 0;
+  // A hatched exclusion's region counts as covered too: it is excluded even where only its edge is marked.
+  const filled = curve.role !== "projection" && (unitInterval(curve.fillOpacity, 0.3) > 0 || exclusion);
   return { subpaths: [{ xs, ys, closed: closed || exclusion }], fill: filled, stroke: f.lineWidthPx > 0 };
+}
+
+/**
+ * The hatches along an exclusion's edge (the full thinned edge, not the envelope's line): the vertical ends,
+ * then the curve; the top is outside the clip.
+ */
+function hatchNodes(
+  pl: Polyline,
+  topY: number,
+  f: CurveFrame,
+  lw: number,
+  colour: string,
+  id: string,
+  data: Record<string, string>,
+): PathNode[] {
+  const edge = {
+    xs: pl.xs,
+    ys: pl.ys,
+    n: pl.n,
+    from: [r2(pl.xs[0]), topY],
+    to: [r2(pl.xs[pl.n - 1]), topY],
+  } as const;
+  const style = hatchStyleFor(lw);
+  const h = hatchEdge({ ...edge, side: insideSide(edge) }, f.plot, style, lw);
+  if (h.count === 0) return [];
+  const node: PathNode = {
+    kind: "path",
+    id,
+    d: h.d,
+    writtenD: h.d,
+    stroke: colour,
+    strokeWidth: r2(style.widthPx),
+    fill: "none",
+    data: { ...data, "curve-part": "hatch" },
+  };
+  return [node];
 }

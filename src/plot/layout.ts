@@ -3,6 +3,7 @@
 import type { Figure, LegendPlace, SizePreset, TickSides } from "../project/types";
 import { CAP_HEIGHT, SUP_RAISE, SHIFT_SCALE } from "./text";
 import { CUSTOM_MM_LIMITS } from "../project/limits";
+import { TITLE_LINE_SPACING } from "./title";
 
 /** CSS pixels per inch: scene coordinates are CSS px at 96 per inch. */
 export const PX_PER_IN = 96;
@@ -116,6 +117,9 @@ export interface LayoutInput {
   hasTitle: boolean;
   /** Outward ticks on the left and bottom (and a top axis), or on all four sides. @default "out" */
   ticks?: TickSides;
+  /** A title fitted by title.ts: its lines (default 1) and size (default the heading size). */
+  titleLines?: number;
+  titleSizePx?: number;
   /** Widest y tick label (px) for a given plot height (labels thin out on short axes). */
   yLabelWidthPx: (plotHeightPx: number) => number;
   /** Half the width of the widest x tick label (it may stick out right of the plot area). */
@@ -141,7 +145,7 @@ export interface Layout {
   /** x of the right edge of the y tick labels and of the (rotated) y title baseline. */
   yLabelRight: number;
   yTitleX: number;
-  /** Baseline of the figure title. */
+  /** Baseline of the figure title's first line. */
   headingBaseline: number;
   /** Top-left corner of the legend box. */
   legendX: number;
@@ -171,6 +175,11 @@ export function cornerLegendOrigin(
   };
 }
 
+/** Free space kept between the figure's edges and anything drawn. */
+export function edgePadPx(fonts: Pick<Fonts, "tickPx">): number {
+  return Math.max(2, fonts.tickPx * 0.5);
+}
+
 /** Height above the baseline of a label with a superscript ("10⁻⁶"), as a fraction of its size. */
 const SUP_TOP = SUP_RAISE + SHIFT_SCALE * CAP_HEIGHT + 0.04;
 /** Depth below the baseline of brackets and subscripts. */
@@ -184,7 +193,7 @@ const DESCENT = 0.24;
  */
 export function computeLayout(input: LayoutInput): Layout {
   const { widthPx: W, heightPx: H, fonts: f } = input;
-  const pad = Math.max(2, f.tickPx * 0.5);
+  const pad = edgePadPx(f);
   const gap = f.tickPx * 0.4;
   const tickMajorPx = f.tickPx * 0.45;
   const tickMinorPx = f.tickPx * 0.25;
@@ -196,8 +205,10 @@ export function computeLayout(input: LayoutInput): Layout {
   let top = pad;
   let headingBaseline = 0;
   if (input.hasTitle) {
-    headingBaseline = top + f.headingPx * CAP_HEIGHT;
-    top = headingBaseline + f.headingPx * DESCENT + f.tickPx * 0.4;
+    const hs = input.titleSizePx ?? f.headingPx;
+    headingBaseline = top + hs * CAP_HEIGHT;
+    const below = ((input.titleLines ?? 1) - 1) * hs * TITLE_LINE_SPACING;
+    top = headingBaseline + below + hs * DESCENT + f.tickPx * 0.4;
   }
   let topTitleBaseline = 0;
   let topLabelBaseline = 0;

@@ -3,6 +3,8 @@
 import type { Model } from "../project/types";
 import type { SceneNode, TextRun } from "./scene-types";
 import { r2 } from "./format";
+import { hatchStyleFor } from "./hatch";
+import { markupRuns } from "./markup";
 import { runsText, runsWidthPx, truncateRuns } from "./text";
 
 /**
@@ -43,6 +45,8 @@ export interface LegendEntry {
   lineWidthPx: number;
   /** Draw a lighter band around the swatch (theory spread). */
   spread?: boolean;
+  /** Exclusions: hatches above the swatch's edge, as on the plot. */
+  hatched?: boolean;
   /** Extra data-* attributes of the entry's text (model-id / curve-id). */
   data: Record<string, string>;
 }
@@ -57,14 +61,14 @@ export interface LegendBox {
 }
 
 /**
- * Size of the legend box. Labels longer than `maxLabelPx` are cut with "…" (the full text stays in the
- * entry's data-legend-entry attribute).
+ * Size of the legend box. Labels are read as math markup (markup.ts); longer than `maxLabelPx` they are cut
+ * with "…" (the full text stays in the entry's data-legend-entry attribute).
  */
 export function measureLegend(entries: LegendEntry[], sizePx: number, maxLabelPx: number): LegendBox {
   const padPx = sizePx * 0.55;
   const rowPx = sizePx * 1.38;
   const swatchPx = sizePx * 2.1;
-  const labels = entries.map((e) => truncateRuns([{ text: e.text }], sizePx, Math.max(sizePx * 4, maxLabelPx)));
+  const labels = entries.map((e) => truncateRuns(markupRuns(e.text), sizePx, Math.max(sizePx * 4, maxLabelPx)));
   const textW = labels.reduce((w, l) => Math.max(w, runsWidthPx(l, sizePx)), 0);
   if (entries.length === 0) return { widthPx: 0, heightPx: 0, rowPx, swatchPx, padPx, labels };
   return {
@@ -75,6 +79,17 @@ export function measureLegend(entries: LegendEntry[], sizePx: number, maxLabelPx
     padPx,
     labels,
   };
+}
+
+/** The hatches of an exclusion's swatch: up from its edge at (x, y), as the plot's hatches sit on the excluded side. */
+function swatchHatches(id: string, e: LegendEntry, x: number, y: number, w: number, h: number): SceneNode {
+  const style = hatchStyleFor(e.lineWidthPx);
+  const len = Math.min(style.lengthPx + e.lineWidthPx / 2, h);
+  const count = Math.max(2, Math.floor(w / style.spacingPx));
+  const step = w / count;
+  let d = "";
+  for (let k = 0; k < count; k++) d += `M${r2(x + step * (k + 0.5))} ${r2(y)}l0 ${r2(-len)}`;
+  return { kind: "path", id, d, stroke: e.colour, strokeWidth: r2(style.widthPx), fill: "none" };
 }
 
 /** Scene nodes of the legend box at (x, y). */
@@ -154,16 +169,18 @@ export function legendNodes(entries: LegendEntry[], box: LegendBox, x: number, y
         fill: "none",
       });
     } else if (e.kind === "exclusion") {
-      nodes.push({
-        kind: "rect",
-        id: `${id}-swatch`,
-        x: r2(sx),
-        y: r2(cy - sh / 2),
-        w: r2(sw),
-        h: r2(sh),
-        fill: e.colour,
-        fillOpacity: e.fillOpacity,
-      });
+      if (e.fillOpacity > 0)
+        nodes.push({
+          kind: "rect",
+          id: `${id}-swatch`,
+          x: r2(sx),
+          y: r2(cy - sh / 2),
+          w: r2(sw),
+          h: r2(sh),
+          fill: e.colour,
+          fillOpacity: e.fillOpacity,
+        });
+      if (e.hatched) nodes.push(swatchHatches(`${id}-hatch`, e, sx, cy + sh / 2, sw, sh));
       nodes.push({
         kind: "path",
         id: `${id}-edge`,

@@ -103,4 +103,6 @@ export interface Scene {
   layers: SceneLayer[];
   /** Where an "auto" legend was put (a corner or outside right); absent for a fixed place or no legend. */
   autoLegendPlace?: "top-left" | "top-right" | "bottom-left" | "bottom-right" | "outside-right";
+  /** What the figure changed to fit (a long title wrapped or shrunk): the app shows them, the CLI prints them. */
+  notes?: string[];
 }

@@ -4,11 +4,12 @@ import { DEFAULT_MASS_RANGE_EV, defaultYRange } from "../project/defaults";
 import type { Curve, FigureFont, LegendPlace, Model, Project, YView } from "../project/types";
 import type { PathNode, Scene, SceneLayer, SceneNode, ScaleConfig } from "./scene-types";
 import { axesNodes, axisStyle, axisTicks, gridNodes, verticalTickOpts, yTitle, type AxesFrame } from "./axes";
-import { curveGeometry, curveShape } from "./curves";
+import { curveGeometry, curveShape, exclusionMarkOf } from "./curves";
 import { dashFor, plainOrScientificRuns, powerOfTenRuns, r2, safeColour, unitInterval } from "./format";
 import {
   computeLayout,
   cornerLegendOrigin,
+  edgePadPx,
   fontsFor,
   presetOf,
   PX_PER_IN,
@@ -26,10 +27,12 @@ import {
 } from "./legend-place";
 import { modelShape, shapeCancels, shapeNormalizedRange } from "./model-shape";
 import type { Shape } from "./occupancy";
+import { markupRuns } from "./markup";
 import { modelGeometry } from "./models";
 import { constantsOf, rescaleNote } from "./physics-settings";
 import { logAffine, sanitizeDomain, viewTransform } from "./scales";
 import { runsWidthPx } from "./text";
+import { fitTitle, TITLE_LINE_SPACING, type TitleFit } from "./title";
 import { logTicks } from "./ticks";
 
 /**
@@ -127,13 +130,15 @@ function legendEntries(project: Project, fonts: Fonts, c: ReturnType<typeof cons
   }
   for (const cv of project.curves) {
     if (!cv.visible) continue;
+    const mark = cv.role === "exclusion" ? exclusionMarkOf(cv) : "fill";
     entries.push({
       kind: cv.role === "exclusion" ? "exclusion" : cv.role === "projection" ? "projection" : "region",
       text: withNotes(cv.label?.trim() || "(unnamed curve)", curveNotes(cv)),
       colour: safeColour(cv.colour, "#D55E00"),
       dash: dashFor(cv.lineStyle, fonts.dataLinePx),
-      fillOpacity: unitInterval(cv.fillOpacity, 0.3),
+      fillOpacity: mark === "hatch" ? 0 : unitInterval(cv.fillOpacity, 0.3),
       lineWidthPx: fonts.dataLinePx,
+      hatched: mark !== "fill",
       data: { "curve-id": cv.id },
     });
   }
@@ -235,14 +240,18 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   // Right margin: half of a wide decade label ("10⁻¹⁰"), fixed for the font size so the plot area does not
   // jump while zooming; a label that would still cross the figure edge is left out (axesNodes).
   const xHalf = runsWidthPx(powerOfTenRuns(-10), fonts.tickPx) / 2;
+  const titleText = fig.title?.trim() ?? "";
+  let title: TitleFit | null = titleText ? { lines: [markupRuns(titleText)], sizePx: fonts.headingPx } : null;
   const layoutFor = (place: LegendPlace, box: LegendBox) =>
     computeLayout({
       widthPx,
       heightPx,
       fonts,
       hasTopAxis: topAxis !== "none",
-      hasTitle: !!fig.title?.trim(),
+      hasTitle: !!title,
       ticks: fig.ticks,
+      titleLines: title?.lines.length,
+      titleSizePx: title?.sizePx,
       yLabelWidthPx: (plotH) =>
         logTicks(yDomain[0], yDomain[1], {
           ...verticalTickOpts(plotH / ySpan, fonts),
@@ -254,13 +263,20 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   const scales: ScaleConfig = { massDomainEv, yDomain, yView: view };
   let legendPlace: LegendPlace = legendSetting;
   const legendBox = measureFor(legendPlace);
+  const pad = edgePadPx(fonts);
+  if (title) {
+    // The title is centred over the plot: it must fit both ways from the plot's centre (a first layout says where).
+    const p0 = layoutFor(legendPlace, legendBox).plot;
+    const cx = p0.x + p0.w / 2;
+    title = fitTitle(title.lines[0], fonts.headingPx, 2 * Math.min(cx - pad, widthPx - pad - cx));
+  }
   let layout: Layout | null = null;
   let autoPlace: LegendCorner | "outside-right" | undefined;
   if (legendPlace === "auto") {
     // Outside right only when no label is cut there and the plot keeps most of the width.
     const outsideFits = () => {
       const ob = measureFor("outside-right");
-      if (ob.labels.some((l, i) => legendLabelText(l) !== entries[i].text)) return false;
+      if (ob.labels.some((l, i) => legendLabelText(l) !== legendLabelText(markupRuns(entries[i].text)))) return false;
       const lo = layoutFor("outside-right", ob);
       return lo.plot.w >= OUTSIDE_MIN_PLOT_FRACTION * widthPx && ob.heightPx <= lo.plot.h;
     };
@@ -295,6 +311,7 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
 
   // Curves: fills first, then lines, each in project order.
   const curveFills: SceneNode[] = [];
+  const curveHatches: SceneNode[] = [];
   const curveLines: SceneNode[] = [];
   const curveLineById = new Map<string, PathNode[]>();
   project.curves.forEach((cv, i) => {
@@ -314,6 +331,7 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
       `curve-${i + 1}`,
     );
     curveFills.push(...g.fills);
+    curveHatches.push(...g.hatches);
     curveLines.push(...g.lines);
     curveLineById.set(cv.id, g.lines.length ? g.lines : g.fills);
   });
@@ -387,19 +405,25 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   }
 
   const axes = axesNodes(frame, ticks, layout, yTitle(view));
-  if (fig.title?.trim()) {
-    axes.push({
-      kind: "text",
-      id: "figure-title",
-      x: r2(plot.x + plot.w / 2),
-      y: r2(layout.headingBaseline),
-      runs: [{ text: fig.title.trim() }],
-      sizePx: r2(fonts.headingPx),
-      anchor: "middle",
-      baseline: "alphabetic",
-      fill: "#1a1a1a",
-      weight: "bold",
-    });
+  if (title) {
+    const t = title;
+    // Over the plot's centre, moved in only where the final plot (another legend place) would push it off the figure.
+    const half = Math.max(...t.lines.map((l) => runsWidthPx(l, t.sizePx))) / 2;
+    const x = Math.min(Math.max(plot.x + plot.w / 2, pad + half), widthPx - pad - half);
+    t.lines.forEach((runs, k) =>
+      axes.push({
+        kind: "text",
+        id: k === 0 ? "figure-title" : `figure-title-${k + 1}`,
+        x: r2(x),
+        y: r2(layout.headingBaseline + k * t.sizePx * TITLE_LINE_SPACING),
+        runs,
+        sizePx: r2(t.sizePx),
+        anchor: "middle",
+        baseline: "alphabetic",
+        fill: "#1a1a1a",
+        weight: "bold",
+      }),
+    );
   }
 
   const layers: SceneLayer[] = [
@@ -409,7 +433,7 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
       nodes: [{ kind: "rect", id: "background-fill", x: 0, y: 0, w: r2(widthPx), h: r2(heightPx), fill: "#ffffff" }],
     },
     { id: "grid", clip: true, nodes: fig.grid ? gridNodes(frame, ticks) : [] },
-    { id: "curves", clip: true, nodes: [...curveFills, ...curveLines] },
+    { id: "curves", clip: true, nodes: [...curveFills, ...curveHatches, ...curveLines] },
     { id: "models", clip: true, nodes: [...modelFills, ...modelLines] },
     { id: "highlight", clip: true, nodes: highlight },
     { id: "axes", clip: false, nodes: axes },
@@ -429,6 +453,7 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
     layers,
   };
   if (autoPlace && entries.length) scene.autoLegendPlace = autoPlace;
+  if (title?.note) scene.notes = [title.note];
   if (opts.physical !== false) {
     const custom = opts.widthPx !== undefined || opts.heightPx !== undefined;
     scene.widthPhysical = custom ? physicalOf(widthPx) : preset.widthPhysical;

@@ -4,6 +4,7 @@ import { REF_2019 } from "../physics/constants";
 import type {
   Curve,
   CurveRole,
+  ExclusionMark,
   Figure,
   LineStyle,
   Model,
@@ -66,6 +67,16 @@ export const DEFAULT_SET_DRAW: SetDraw = "extremes";
 export const DEFAULT_MODEL_FILL_OPACITY = 0.25;
 /** Fill opacity of a new exclusion or region curve. @default 0.3 */
 export const DEFAULT_CURVE_FILL_OPACITY = 0.3;
+/** Exclusions are hatched on their excluded side by default (the house style, DEVELOPERS.md). */
+export const DEFAULT_EXCLUSION_MARK: ExclusionMark = "hatch";
+
+/**
+ * The mark of a stored curve written before `exclusionMark` existed: the new default, hatches, unless the file
+ * set a fill opacity of its own (neither the old default 0.3 nor 0), which keeps the fill it was drawn with.
+ */
+export function legacyExclusionMark(fillOpacity: unknown): ExclusionMark {
+  return typeof fillOpacity === "number" && fillOpacity > 0 && Math.abs(fillOpacity - 0.3) > 1e-9 ? "fill" : "hatch";
+}
 /**
  * Local dark-matter density in GeV/cm³ that a new curve assumes and shows (equal, so no rescaling):
  * 0.45 GeV/cm³ is the value most haloscope publications assume (common practice).
@@ -247,6 +258,7 @@ export function newCurve(
     colour: partial.colour ?? nextCurveColour(context),
     lineStyle: partial.lineStyle ?? defaultCurveLineStyle(role),
     fillOpacity: partial.fillOpacity ?? DEFAULT_CURVE_FILL_OPACITY,
+    exclusionMark: partial.exclusionMark ?? DEFAULT_EXCLUSION_MARK,
     visible: partial.visible ?? true,
     rescale: {
       rhoAssumed: partial.rescale?.rhoAssumed ?? DEFAULT_RHO_GEV_CM3,

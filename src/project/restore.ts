@@ -6,6 +6,7 @@ import {
   defaultFigure,
   defaultPhysics,
   defaultYRange,
+  legacyExclusionMark,
   CURVE_COLOURS,
   MODEL_COLOURS,
   newCurve,
@@ -21,6 +22,7 @@ import {
   PROJECT_LIMITS,
   curveData,
   curveRole,
+  exclusionMark,
   hexColour,
   isRationalText,
   legendPlace,
@@ -271,6 +273,7 @@ function restoreCurve(raw: Rec, index: number, taken: Set<string>, note: Note): 
   const colour = valid(hexColour, own(raw, "colour"), note, "colour");
   const style = valid(lineStyle, own(raw, "lineStyle"), note, "line style");
   const fillOpacity = clamped(own(raw, "fillOpacity"), 0, 1, note, "fill opacity");
+  const mark = valid(exclusionMark, own(raw, "exclusionMark"), note, "exclusion mark");
   const visible = bool(own(raw, "visible"), note, "visible");
   const rescale = restoreRescale(own(raw, "rescale"), d.rescale, note);
   const citation = text(own(raw, "citation"), PROJECT_LIMITS.citation, note, "citation");
@@ -288,6 +291,7 @@ function restoreCurve(raw: Rec, index: number, taken: Set<string>, note: Note): 
     colour: colour ?? d.colour,
     lineStyle: style ?? defaultCurveLineStyle(role),
     fillOpacity: fillOpacity ?? d.fillOpacity,
+    exclusionMark: mark ?? legacyExclusionMark(fillOpacity),
     visible: visible ?? d.visible,
     rescale,
     citation: citation ?? d.citation,

@@ -19,6 +19,7 @@ export const hexColour = z
   .regex(/^#(?:[0-9a-fA-F]{3,4}|[0-9a-fA-F]{6}|[0-9a-fA-F]{8})$/, "expected a colour such as #117A8B");
 export const lineStyle = z.enum(["solid", "dashed", "dotted", "dashdot"]);
 export const curveRole = z.enum(["exclusion", "projection", "region"]);
+export const exclusionMark = z.enum(["hatch", "fill", "hatch-fill"]);
 // "auto" joined in schema version 1 without a bump: every older file still validates, and an older build
 // reading "auto" repairs it to its default legend place (a noted repair), so no migration is needed.
 export const legendPlace = z.enum([
@@ -182,6 +183,7 @@ export const ProjectSchema = z.object({
           colour: hexColour,
           lineStyle,
           fillOpacity: z.number().min(0).max(1),
+          exclusionMark,
           visible: z.boolean(),
           rescale: z.object({
             rhoAssumed: z.number().positive(),

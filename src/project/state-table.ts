@@ -67,6 +67,7 @@ export const CURVE_STATE: { readonly [K in keyof Curve]-?: Persistence } = {
   colour: curveMeta,
   lineStyle: curveMeta,
   fillOpacity: curveMeta,
+  exclusionMark: curveMeta,
   visible: curveMeta,
   rescale: curveMeta,
   citation: curveMeta,

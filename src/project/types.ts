@@ -8,6 +8,8 @@ export const PROJECT_VERSION = 2 as const;
 
 export type LineStyle = "solid" | "dashed" | "dotted" | "dashdot";
 export type CurveRole = "exclusion" | "projection" | "region";
+/** How an exclusion curve marks its excluded side: short hatches along the edge, the translucent fill, or both. */
+export type ExclusionMark = "hatch" | "fill" | "hatch-fill";
 /** Where the legend goes; "auto" is the inner corner where it covers the least drawn content (src/plot/legend-place.ts). */
 export type LegendPlace =
   "auto" | "top-left" | "top-right" | "bottom-left" | "bottom-right" | "outside-right" | "hidden";
@@ -110,6 +112,11 @@ export interface Curve {
   colour: string;
   lineStyle: LineStyle;
   fillOpacity: number;
+  /**
+   * Exclusions only: hatches on the excluded side (the house style), the fill, or both. Added without a bump:
+   * files and links without it read as "hatch", or "fill" when they set a fill opacity of their own.
+   */
+  exclusionMark: ExclusionMark;
   visible: boolean;
   rescale: CurveRescale;
   /** Publication the data came from (free text or a BibTeX entry), shown in the sources list. */

@@ -8,7 +8,7 @@ import { fitRanges } from "../../src/cli/fit-ranges";
 import { pngPixelSize, renderPng } from "../../src/cli/png";
 import { FIGURE_FONT_CSS } from "../../src/plot/scene";
 import { writeAllOrNothing } from "../../src/cli/write-atomic";
-import { undrawablePointNotes } from "../../src/cli/inputs";
+import { applyFigureOptions, undrawablePointNotes } from "../../src/cli/inputs";
 import { smallProject, tempDir } from "./fixtures";
 
 function ok(argv: string[]) {
@@ -23,6 +23,18 @@ function err(argv: string[]): string {
 }
 
 describe("parseArgs", () => {
+  it("--exclusions takes hatch, fill or hatch-fill and sets every exclusion curve, nothing else", () => {
+    expect(ok(["p.axband.json", "-o", "f.svg", "--exclusions", "fill"]).exclusions).toBe("fill");
+    expect(ok(["p.axband.json", "-o", "f.svg"]).exclusions).toBeUndefined();
+    expect(err(["p.axband.json", "-o", "f.svg", "--exclusions", "stripes"])).toMatch(/--exclusions: expected hatch/);
+    const p = smallProject();
+    const opts = ok(["p.axband.json", "-o", "f.svg", "--exclusions", "hatch-fill"]);
+    const q = applyFigureOptions(p, opts);
+    for (const [i, c] of q.curves.entries())
+      expect(c.exclusionMark).toBe(c.role === "exclusion" ? "hatch-fill" : p.curves[i].exclusionMark);
+    expect(q.curves.some((c) => c.role === "exclusion")).toBe(true);
+  });
+
   it("reads a project file with SVG and PNG outputs, dpi and preset", () => {
     const o = ok(["p.axband.json", "-o", "f.svg", "--png=f.png", "--dpi", "600", "--preset", "single-column"]);
     expect(o.inputs).toEqual([{ path: "p.axband.json", kind: "project", role: "exclusion" }]);

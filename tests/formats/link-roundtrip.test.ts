@@ -132,6 +132,7 @@ const curve: fc.Arbitrary<Omit<Curve, "id">> = fc
     colour,
     lineStyle,
     fillOpacity: unit,
+    exclusionMark: fc.constantFrom("hatch", "fill", "hatch-fill") as fc.Arbitrary<Curve["exclusionMark"]>,
     visible: fc.boolean(),
     rescale: fc.record({
       rhoAssumed: positive,

@@ -106,6 +106,8 @@ describe("min–max envelope: no visible change against the zig-zag (resvg, grey
       "curve-1-envelope",
       "curve-2-exclusion",
       "curve-2-envelope",
+      "curve-1-hatch",
+      "curve-2-hatch",
       "curve-3-line",
     ]);
   });

@@ -34,6 +34,7 @@ export function curve(partial: Partial<Curve> & Pick<Curve, "id" | "massEv" | "g
     colour: "#D55E00",
     lineStyle: "solid",
     fillOpacity: 0.3,
+    exclusionMark: "hatch",
     visible: true,
     rescale: { rhoAssumed: 0.45, rhoShown: 0.45, fraction: 1 },
     citation: "invented for the tests",

@@ -102,15 +102,16 @@ describe("automatic legend placement in the scene", () => {
     // An exclusion limit at 10⁻¹³ GeV⁻¹ above 10⁻⁴ eV: everything above it, up to the plot top, is filled.
     const m = Float64Array.from({ length: 50 }, (_, i) => 10 ** (-4 + (3 * i) / 49));
     const g = Float64Array.from(m, () => 1e-13);
-    const scene = buildScene(
-      project([curve({ id: "x", label: "Limit (invented)", role: "exclusion", massEv: m, gInvGeV: g })]),
-    );
+    const limit = curve({ id: "x", label: "Limit (invented)", role: "exclusion", massEv: m, gInvGeV: g });
+    const scene = buildScene(project([{ ...limit, exclusionMark: "fill" }]));
     const cov = coverageOf(scene);
     expect(cov["top-right"]).toBeGreaterThan(0.95);
     expect(cov["top-left"]).toBe(0);
     expect(placeOf(scene)).not.toBe("top-right");
     // Top-left, bottom-right and bottom-left are all empty: the tie goes to top-left (LEGEND_CORNERS order).
     expect(placeOf(scene)).toBe("top-left");
+    // Only hatched at its edge, the excluded region still counts as covered: the legend goes to the same place.
+    expect(placeOf(buildScene(project([{ ...limit, exclusionMark: "hatch" }])))).toBe("top-left");
   });
 
   test("data in every corner but the bottom left puts the legend bottom left", () => {

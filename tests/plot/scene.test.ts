@@ -151,8 +151,10 @@ describe("model bands", () => {
 });
 
 describe("curves", () => {
-  test("an exclusion is one path filled from the curve up past the plot top and stroked; a region is closed", () => {
-    const scene = buildScene(fixtureProject());
+  test("an exclusion (fill mark) is one path filled from the curve up past the plot top and stroked; a region is closed", () => {
+    const p = fixtureProject();
+    p.curves[0].exclusionMark = "fill";
+    const scene = buildScene(p);
     const excl = paths(scene, "curves").find((n) => n.id?.endsWith("-exclusion"))!;
     expect(excl.data?.["curve-id"]).toBe("dip");
     expect(excl.data?.["curve-role"]).toBe("exclusion");

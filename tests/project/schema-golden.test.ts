@@ -35,7 +35,8 @@ function expectedProject(path: string): Project {
     ...raw,
     // Keys that joined a version without a bump are absent from goldens written before them and read as their
     // default (DEVELOPERS.md "Schema changes"): the figure font (sans, the look those figures had); the mass axis
-    // in eV and the automatic frequency unit (as those figures were labelled); ticks outward (the house style).
+    // in eV and the automatic frequency unit (as those figures were labelled); ticks outward (the house style); a curve's
+    // exclusion mark (hatches, the house style, unless the curve set a fill opacity other than 0.3 or 0: its fill).
     figure: {
       ...raw.figure,
       font: (raw.figure as Partial<Project["figure"]>).font ?? "sans",
@@ -45,6 +46,7 @@ function expectedProject(path: string): Project {
     },
     curves: raw.curves.map((c) => ({
       ...c,
+      exclusionMark: c.exclusionMark ?? (c.fillOpacity !== 0.3 && c.fillOpacity !== 0 ? "fill" : "hatch"),
       massEv: Float64Array.from(c.massEv),
       gInvGeV: Float64Array.from(c.gInvGeV),
     })),

@@ -102,3 +102,23 @@ describe("CSV export", () => {
     expect(useAxband.getState().ui.messages.at(-1)?.text).toMatch(/Saved Demo A/);
   });
 });
+
+describe("excluded side", () => {
+  test("exclusions offer hatches (the default), fill, or both; the fill slider is off while only hatches are drawn", () => {
+    render(<CurvesPanel />);
+    const selects = screen.getAllByTestId("curve-exclusion-mark") as HTMLSelectElement[];
+    expect(selects).toHaveLength(2);
+    expect(selects[0].value).toBe("hatch");
+    expect((screen.getAllByLabelText("Fill opacity")[0] as HTMLInputElement).disabled).toBe(true);
+    fireEvent.change(selects[0], { target: { value: "hatch-fill" } });
+    expect(curve("c-a").exclusionMark).toBe("hatch-fill");
+    expect(curve("c-b").exclusionMark).toBe("hatch");
+    expect((screen.getAllByLabelText("Fill opacity")[0] as HTMLInputElement).disabled).toBe(false);
+  });
+
+  test("projections and regions have no excluded side to choose", () => {
+    render(<CurvesPanel />);
+    fireEvent.change(screen.getAllByLabelText("Curve role")[0], { target: { value: "projection" } });
+    expect(screen.getAllByTestId("curve-exclusion-mark")).toHaveLength(1);
+  });
+});

@@ -27,6 +27,7 @@ function curve(id: string): Curve {
     colour: "#0072B2",
     lineStyle: "solid",
     fillOpacity: 0.3,
+    exclusionMark: "hatch",
     visible: true,
     rescale: { rhoAssumed: 0.45, rhoShown: 0.45, fraction: 1 },
     citation: "",

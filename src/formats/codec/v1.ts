@@ -123,6 +123,13 @@ const CURVE_V1: Codec = {
     { full: "colour", short: "c", base: (_c, i) => V1_CURVE_COLOURS[i % V1_CURVE_COLOURS.length] },
     { full: "lineStyle", short: "y", base: (c) => (c.role === "projection" ? "dashed" : "solid") },
     { full: "fillOpacity", short: "o", base: () => 0.3 },
+    // Joined without a bump (after fillOpacity, which its base reads): links written before it decode to the
+    // hatches of the house style, or to the fill when they set a fill opacity of their own. Frozen rule.
+    {
+      full: "exclusionMark",
+      short: "e",
+      base: (c) => (c.fillOpacity !== 0.3 && c.fillOpacity !== 0 ? "fill" : "hatch"),
+    },
     { full: "visible", short: "v", base: () => true },
     {
       full: "rescale",

@@ -1,7 +1,7 @@
 // One curve in the curves list: label, colour, visibility, order, role, line style, fill, the rescaling of
 // haloscope-type limits and the CSV export. Every edit goes through the store (undoable, autosaved).
-import type { Curve, CurveRole, LineStyle } from "../../project/types";
-import { LINE_STYLES, ROLES } from "./roles";
+import type { Curve, CurveRole, ExclusionMark, LineStyle } from "../../project/types";
+import { EXCLUSION_MARKS, LINE_STYLES, ROLES } from "./roles";
 import { selectCurve, useAxband } from "../store";
 import { NumberField } from "./NumberField";
 import { isRescaled } from "../../plot/physics-settings";
@@ -71,6 +71,16 @@ function CurveStyle({ curve, update }: { curve: Curve; update: Update }) {
         choices={LINE_STYLES}
         onChange={(v) => update({ lineStyle: v as LineStyle })}
       />
+      {curve.role === "exclusion" && (
+        <ChoiceField
+          label="Excluded side"
+          ariaLabel="Excluded side"
+          testId="curve-exclusion-mark"
+          value={curve.exclusionMark}
+          choices={EXCLUSION_MARKS}
+          onChange={(v) => update({ exclusionMark: v as ExclusionMark })}
+        />
+      )}
       <label className="ax-field">
         <span>Fill</span>
         <input
@@ -80,7 +90,7 @@ function CurveStyle({ curve, update }: { curve: Curve; update: Update }) {
           step={0.05}
           aria-label="Fill opacity"
           value={curve.fillOpacity}
-          disabled={curve.role === "projection"}
+          disabled={curve.role === "projection" || (curve.role === "exclusion" && curve.exclusionMark === "hatch")}
           onChange={(e) => update({ fillOpacity: Number(e.target.value) }, "fill")}
         />
       </label>

@@ -111,6 +111,11 @@ export function FigureView() {
         </SceneSvg>
         <PreparingNote scene={scene} waiting={waiting} />
       </div>
+      {scene.notes?.length ? (
+        <p className="figure-note" data-testid="figure-notes" role="status">
+          {scene.notes.join("; ")}
+        </p>
+      ) : null}
       <p className="figure-hint" id={hintId}>
         Scroll to zoom (Shift: mass axis only, Alt: y axis only), drag to pan, double-click to reset. With the figure
         focused: + and − zoom, arrow keys pan, 0 resets.

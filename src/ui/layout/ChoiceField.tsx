@@ -10,6 +10,7 @@ export function ChoiceField(props: {
   label: string;
   /** Accessible name when it should differ from the visible label. */
   ariaLabel?: string;
+  testId?: string;
   value: string | number;
   choices: readonly Choice[];
   onChange: (value: string) => void;
@@ -17,7 +18,12 @@ export function ChoiceField(props: {
   return (
     <label className="ax-field">
       <span>{props.label}</span>
-      <select aria-label={props.ariaLabel} value={props.value} onChange={(e) => props.onChange(e.target.value)}>
+      <select
+        aria-label={props.ariaLabel}
+        data-testid={props.testId}
+        value={props.value}
+        onChange={(e) => props.onChange(e.target.value)}
+      >
         {props.choices.map((c) => (
           <option key={`${c.value}|${c.label}`} value={c.value}>
             {c.label}
