@@ -153,7 +153,7 @@ function loadCsv(inputs: CliInput[], opts: CliOptions, preParsed: PreParsed): Lo
   return { project: { ...project, curves, models, figure }, notes };
 }
 
-/** Applies the size, range, title and font options to a loaded project (a copy; figure fields only). */
+/** Applies the size, range, title, font and legend options to a loaded project (a copy; figure fields only). */
 export function applyFigureOptions(project: Project, opts: CliOptions): Project {
   const f = { ...project.figure };
   if (opts.preset) f.preset = opts.preset;
@@ -163,6 +163,8 @@ export function applyFigureOptions(project: Project, opts: CliOptions): Project 
   if (opts.gRange) f.yRange = opts.gRange;
   if (opts.title !== undefined) f.title = opts.title;
   if (opts.font) f.font = opts.font;
+  if (opts.legend) f.legend = opts.legend;
+  if (opts.legendScale !== undefined) f.legendScale = opts.legendScale;
   return { ...project, figure: f };
 }
 

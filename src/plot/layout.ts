@@ -1,7 +1,7 @@
 // Figure sizes and layout: the size presets with their physical sizes, font sizes per preset, and the
 // margins around the plot area computed from font sizes and estimated label widths (no DOM needed).
 import type { Figure, LegendPlace, SizePreset } from "../project/types";
-import { CAP_HEIGHT, SUP_RAISE, SHIFT_SCALE } from "./text";
+import { CAP_HEIGHT, MIN_TEXT_PX, SUP_RAISE, SHIFT_SCALE } from "./text";
 
 /** CSS pixels per inch: scene coordinates are CSS px at 96 per inch. */
 export const PX_PER_IN = 96;
@@ -86,16 +86,21 @@ export interface Fonts {
 }
 
 /**
- * Font sizes from the base size in pt (pt → px × 96/72) and the preset's font scale.
+ * Font sizes from the base size in pt (pt → px × 96/72) and the preset's font scale. The legend text is 0.88
+ * of the tick labels times `legendScale` (0.7–1.5), never scaled below 6 pt (MIN_TEXT_PX) unless its
+ * default size already is.
  * @param fontPt Figure.fontPt. @default 12
+ * @param legendScale Figure.legendScale. @default 1
  */
-export function fontsFor(fontPt: number, fontScale: number): Fonts {
+export function fontsFor(fontPt: number, fontScale: number, legendScale = 1): Fonts {
   const pt = Number.isFinite(fontPt) && fontPt > 0 ? Math.min(72, Math.max(4, fontPt)) : 12;
   const base = (pt * fontScale * PX_PER_IN) / 72;
+  const scale = Number.isFinite(legendScale) ? Math.min(1.5, Math.max(0.7, legendScale)) : 1;
+  const legendDefault = base * 0.88;
   return {
     tickPx: base,
     titlePx: base * 1.08,
-    legendPx: base * 0.88,
+    legendPx: Math.max(legendDefault * scale, Math.min(legendDefault, MIN_TEXT_PX)),
     headingPx: base * 1.2,
     axisLinePx: Math.max(0.6, base / 16),
     dataLinePx: Math.max(0.9, base / 9),
@@ -171,23 +176,40 @@ export function cornerLegendOrigin(
   };
 }
 
+/** Space between the figure's edge and anything drawn, px. */
+export function figurePadPx(fonts: Pick<Fonts, "tickPx">): number {
+  return Math.max(2, fonts.tickPx * 0.5);
+}
+
+/** Gap between the plot's labels and a legend beside, below or above it, px. */
+export function legendGapPx(fonts: Pick<Fonts, "tickPx">): number {
+  return fonts.tickPx * 0.6;
+}
+
+/** Horizontal room a legend outside right needs besides its own width, px (gap to the plot, pad to the edge). */
+export function outsideLegendExtraPx(fonts: Pick<Fonts, "tickPx">): number {
+  return figurePadPx(fonts) * 2 + fonts.tickPx * 0.4;
+}
+
 /** Height above the baseline of a label with a superscript ("10⁻⁶"), as a fraction of its size. */
 const SUP_TOP = SUP_RAISE + SHIFT_SCALE * CAP_HEIGHT + 0.04;
 /** Depth below the baseline of brackets and subscripts. */
 const DESCENT = 0.24;
 
 /**
- * Margins and positions for a figure. Vertical margins first (they need no label widths), then the y label
- * width for that plot height, then the horizontal margins (legend outside right shrinks the plot area).
- * An "auto" legend is laid out like an inner corner (no margin) and left at (0, 0): the scene builder picks
- * its place.
+ * Margins and positions for a figure. Vertical margins first (they need no label widths; a legend below or
+ * above takes its height from the plot), then the y label width for that plot height, then the horizontal
+ * margins (legend outside right shrinks the plot area). An "auto" legend is laid out like an inner corner (no
+ * margin) and left at (0, 0): the scene builder picks its place.
  */
 export function computeLayout(input: LayoutInput): Layout {
   const { widthPx: W, heightPx: H, fonts: f } = input;
-  const pad = Math.max(2, f.tickPx * 0.5);
+  const pad = figurePadPx(f);
   const gap = f.tickPx * 0.4;
   const tickMajorPx = f.tickPx * 0.45;
   const tickMinorPx = f.tickPx * 0.25;
+  const lg = input.legend;
+  const band = lg.widthPx > 0 && (lg.place === "below" || lg.place === "above");
 
   let top = pad;
   let headingBaseline = 0;
@@ -195,6 +217,10 @@ export function computeLayout(input: LayoutInput): Layout {
     headingBaseline = top + f.headingPx * CAP_HEIGHT;
     top = headingBaseline + f.headingPx * DESCENT + f.tickPx * 0.4;
   }
+  // A legend above sits between the title and the plot (its top axis included).
+  const aboveY = top;
+  if (band && lg.place === "above") top += lg.heightPx + legendGapPx(f);
+  const minTop = band && lg.place === "above" ? top : pad;
   let topTitleBaseline = 0;
   let topLabelBaseline = 0;
   if (input.hasTopAxis) {
@@ -203,20 +229,21 @@ export function computeLayout(input: LayoutInput): Layout {
     top = topLabelBaseline + gap;
   } else {
     // Room for the top of the highest y label, which is centred on the frame's top edge.
-    top = Math.max(top, pad + f.tickPx * 0.6);
+    top = Math.max(top, minTop + f.tickPx * 0.6);
   }
   const xLabelOffset = gap + f.tickPx * SUP_TOP;
   const xTitleOffset = xLabelOffset + f.tickPx * 0.25 + gap + f.titlePx * CAP_HEIGHT;
-  const bottom = xTitleOffset + f.titlePx * DESCENT + pad;
+  const belowOffset = xTitleOffset + f.titlePx * DESCENT + legendGapPx(f);
+  const bottom =
+    band && lg.place === "below" ? belowOffset + lg.heightPx + pad : xTitleOffset + f.titlePx * DESCENT + pad;
   const plotH = Math.max(20, H - top - bottom);
 
   const yLabelW = input.yLabelWidthPx(plotH);
   const yTitleDepth = f.titlePx * DESCENT;
   const left = pad + f.titlePx * SUP_TOP + yTitleDepth + gap * 1.6 + yLabelW + gap;
   let right = Math.max(pad, input.xLabelHalfWidthPx + 2);
-  const lg = input.legend;
   const outside = lg.place === "outside-right" && lg.widthPx > 0;
-  if (outside) right = Math.max(right, lg.widthPx + pad * 2 + gap);
+  if (outside) right = Math.max(right, lg.widthPx + outsideLegendExtraPx(f));
   const plotW = Math.max(20, W - left - right);
   const plot: PlotRect = { x: left, y: top, w: plotW, h: plotH };
 
@@ -233,8 +260,14 @@ export function computeLayout(input: LayoutInput): Layout {
       legendX = plot.x + plot.w + pad + gap;
       legendY = plot.y;
       break;
+    case "below":
+    case "above":
+      // Centred under (over) the plot area, moved in where it would cross the figure's edge.
+      legendX = Math.max(pad, Math.min(W - pad - lg.widthPx, plot.x + (plot.w - lg.widthPx) / 2));
+      legendY = lg.place === "below" ? plot.y + plot.h + belowOffset : aboveY;
+      break;
     default:
-      // "auto" is resolved to a corner (or outside right) by the scene builder before the final layout.
+      // "auto" is resolved to a place by the scene builder before the final layout.
       break;
   }
   return {

@@ -16,13 +16,14 @@ import {
   type Layout,
   type LegendCorner,
 } from "./layout";
-import { legendLabelText, legendNodes, measureLegend, modelKindNote, type LegendBox, type LegendEntry } from "./legend";
+import { legendNodes, modelKindNote, type LegendBox, type LegendEntry } from "./legend";
+import { fitLegend, outsideSuitsAuto } from "./legend-fit";
 import {
   LEGEND_CORNERS,
-  OUTSIDE_MIN_PLOT_FRACTION,
   PLACEMENT_RESOLUTION,
   pickLegendPlace,
   placementCurve,
+  type AutoLegendPlace,
 } from "./legend-place";
 import { modelShape, shapeCancels, shapeNormalizedRange } from "./model-shape";
 import type { Shape } from "./occupancy";
@@ -70,7 +71,7 @@ export interface BuildSceneOpts {
    * figure holds the legend still while the user zooms or pans, and places it afresh once the view rests;
    * exports never pass it. Ignored for a fixed place.
    */
-  holdLegend?: LegendCorner | "outside-right";
+  holdLegend?: AutoLegendPlace;
 }
 
 function modelNotes(m: Model, c: ReturnType<typeof constantsOf>): string[] {
@@ -143,7 +144,6 @@ interface AutoLegendFrame {
   box: LegendBox;
   /** The layout with the legend inside (every inner corner gives the same plot area). */
   layout: Layout;
-  outsideFits: () => boolean;
 }
 
 /**
@@ -152,7 +152,7 @@ interface AutoLegendFrame {
  * corner the export picks); models come as vertices and do not depend on resolution. The highlight is left out (the
  * legend must not move when a table row is hovered).
  */
-function autoLegendPlace(project: Project, f: AutoLegendFrame): LegendCorner | "outside-right" {
+function autoLegendPlace(project: Project, f: AutoLegendFrame, outsideFits: () => boolean): AutoLegendPlace {
   const plot = { x: r2(f.layout.plot.x), y: r2(f.layout.plot.y), w: r2(f.layout.plot.w), h: r2(f.layout.plot.h) };
   const map = logAffine(f.scales, plot);
   const slope = viewTransform(f.view, f.constants).slope;
@@ -190,7 +190,7 @@ function autoLegendPlace(project: Project, f: AutoLegendFrame): LegendCorner | "
     const o = cornerLegendOrigin(f.layout.plot, corner, f.box.widthPx, f.box.heightPx, f.fonts);
     boxes[corner] = { x: o.x, y: o.y, w: f.box.widthPx, h: f.box.heightPx };
   }
-  return pickLegendPlace({ shapes, plot, boxes, outsideFits: f.outsideFits }).place;
+  return pickLegendPlace({ shapes, plot, boxes, outsideFits }).place;
 }
 
 function physicalOf(px: number): string {
@@ -214,7 +214,7 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   const preset = presetOf(fig);
   const widthPx = opts.widthPx && opts.widthPx > 0 ? opts.widthPx : preset.widthPx;
   const heightPx = opts.heightPx && opts.heightPx > 0 ? opts.heightPx : preset.heightPx;
-  const fonts = fontsFor(fig.fontPt, preset.fontScale);
+  const fonts = fontsFor(fig.fontPt, preset.fontScale, fig.legendScale);
   // An unusable range falls back to the default figure's.
   const massDomainEv = sanitizeDomain(fig.massRangeEv, DEFAULT_MASS_RANGE_EV);
   const yDomain = sanitizeDomain(fig.yRange, defaultYRange(view));
@@ -222,14 +222,12 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   const legendSetting = fig.legend ?? "top-right";
 
   const entries = legendSetting === "hidden" ? [] : legendEntries(project, fonts, c);
-  const measureFor = (place: LegendPlace) =>
-    measureLegend(entries, fonts.legendPx, place === "outside-right" ? widthPx * 0.3 : widthPx * 0.5);
 
   const ySpan = Math.log10(yDomain[1] / yDomain[0]);
   // Right margin: half of a wide decade label ("10⁻¹⁰"), fixed for the font size so the plot area does not
   // jump while zooming; a label that would still cross the figure edge is left out (axesNodes).
   const xHalf = runsWidthPx(powerOfTenRuns(-10), fonts.tickPx) / 2;
-  const layoutFor = (place: LegendPlace, box: LegendBox) =>
+  const layoutFor = (place: LegendPlace, box: { widthPx: number; heightPx: number }) =>
     computeLayout({
       widthPx,
       heightPx,
@@ -245,32 +243,12 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
       legend: { place, widthPx: box.widthPx, heightPx: box.heightPx },
     });
   const scales: ScaleConfig = { massDomainEv, yDomain, yView: view };
-  let legendPlace: LegendPlace = legendSetting;
-  const legendBox = measureFor(legendPlace);
-  let layout: Layout | null = null;
-  let autoPlace: LegendCorner | "outside-right" | undefined;
-  if (legendPlace === "auto") {
-    // Outside right only when no label is cut there and the plot keeps most of the width.
-    const outsideFits = () => {
-      const ob = measureFor("outside-right");
-      if (ob.labels.some((l, i) => legendLabelText(l) !== entries[i].text)) return false;
-      const lo = layoutFor("outside-right", ob);
-      return lo.plot.w >= OUTSIDE_MIN_PLOT_FRACTION * widthPx && ob.heightPx <= lo.plot.h;
-    };
-    const inside = layoutFor("auto", legendBox);
-    legendPlace = !entries.length
-      ? LEGEND_CORNERS[0]
-      : (opts.holdLegend ??
-        autoLegendPlace(project, { constants: c, view, scales, fonts, box: legendBox, layout: inside, outsideFits }));
-    autoPlace = legendPlace;
-    // Outside right keeps the box: outsideFits found no label cut at the narrower limit, so none is cut at
-    // either. An inner corner leaves the margins as they are: only the legend's origin changes.
-    if (legendPlace !== "outside-right") {
-      const at = cornerLegendOrigin(inside.plot, legendPlace, legendBox.widthPx, legendBox.heightPx, fonts);
-      layout = { ...inside, legendX: at.x, legendY: at.y };
-    }
-  }
-  layout ??= layoutFor(legendPlace, legendBox);
+  const fitInput = { entries, widthPx, heightPx, fonts, layoutFor };
+  const fitted = fitLegend(legendSetting, fitInput, (inside, box) => {
+    const frame = { constants: c, view, scales, fonts, box, layout: inside };
+    return opts.holdLegend ?? autoLegendPlace(project, frame, () => outsideSuitsAuto(fitInput));
+  });
+  const { layout, box: legendBox, autoPlace } = fitted;
   const plot = { x: r2(layout.plot.x), y: r2(layout.plot.y), w: r2(layout.plot.w), h: r2(layout.plot.h) };
   const map = logAffine(scales, plot);
   const frame: AxesFrame = { map, plot, massDomainEv, yDomain, topAxis, constants: c, fonts, yView: view };
@@ -410,7 +388,8 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
     fontFamily: FIGURE_FONT_CSS[fig.font] ?? FIGURE_FONT_CSS.sans,
     layers,
   };
-  if (autoPlace && entries.length) scene.autoLegendPlace = autoPlace;
+  if (autoPlace) scene.autoLegendPlace = autoPlace;
+  if (legendBox.shortened.length) scene.shortenedLegendEntries = legendBox.shortened.map((i) => entries[i].text);
   if (opts.physical !== false) {
     const custom = opts.widthPx !== undefined || opts.heightPx !== undefined;
     scene.widthPhysical = custom ? physicalOf(widthPx) : preset.widthPhysical;

@@ -120,6 +120,7 @@ export function defaultFigure(): Figure {
     topAxis: "fa",
     grid: true,
     legend: "auto",
+    legendScale: 1,
     fontPt: 12,
     font: "sans",
     title: "",

@@ -28,8 +28,13 @@ export const legendPlace = z.enum([
   "bottom-left",
   "bottom-right",
   "outside-right",
+  // "below" and "above" joined without a bump in the same way as "auto".
+  "below",
+  "above",
   "hidden",
 ]);
+/** Legend text size factor (Figure.legendScale). */
+export const LEGEND_SCALE_LIMITS: readonly [number, number] = [0.7, 1.5];
 export const sizePreset = z.enum(["slide", "single-column", "double-column", "custom"]);
 export const topAxis = z.enum(["none", "fa", "frequency"]);
 // Joined in schema version 1 without a bump: the key is optional on reading (missing = "sans", as files were
@@ -200,6 +205,7 @@ export const ProjectSchema = z.object({
     topAxis,
     grid: z.boolean(),
     legend: legendPlace,
+    legendScale: z.number().min(LEGEND_SCALE_LIMITS[0]).max(LEGEND_SCALE_LIMITS[1]),
     fontPt: z.number().min(4).max(72),
     font: figureFont,
     title: z.string().max(PROJECT_LIMITS.label),
