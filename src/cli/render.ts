@@ -138,7 +138,7 @@ async function run(argv: readonly string[], io: Io, preParsed: PreParsed): Promi
     checkDistinctPaths(opts);
     const loaded = await loadAnyProject(opts, preParsed);
     const { project, notes: fitNotes } = fitFigure(loaded.project);
-    const legendNote = shortenedLegendNote(buildScene(project).shortenedLegendEntries);
+    const legendNote = shortenedLegendNote(buildScene(project));
     for (const n of [...loaded.notes, ...fitNotes, ...(legendNote ? [legendNote] : [])]) io.err(`note: ${n}`);
     const files: OutputFile[] = [];
     const report: string[] = [];

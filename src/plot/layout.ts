@@ -186,9 +186,14 @@ export function legendGapPx(fonts: Pick<Fonts, "tickPx">): number {
   return fonts.tickPx * 0.6;
 }
 
+/** Gap between the plot's frame and a legend outside right: clear of the x label sticking out right of the frame. */
+function outsideLegendGapPx(fonts: Pick<Fonts, "tickPx">, xLabelHalfWidthPx: number): number {
+  return Math.max(figurePadPx(fonts), xLabelHalfWidthPx) + fonts.tickPx * 0.4;
+}
+
 /** Horizontal room a legend outside right needs besides its own width, px (gap to the plot, pad to the edge). */
-export function outsideLegendExtraPx(fonts: Pick<Fonts, "tickPx">): number {
-  return figurePadPx(fonts) * 2 + fonts.tickPx * 0.4;
+export function outsideLegendExtraPx(fonts: Pick<Fonts, "tickPx">, xLabelHalfWidthPx: number): number {
+  return outsideLegendGapPx(fonts, xLabelHalfWidthPx) + figurePadPx(fonts);
 }
 
 /** Height above the baseline of a label with a superscript ("10⁻⁶"), as a fraction of its size. */
@@ -243,7 +248,7 @@ export function computeLayout(input: LayoutInput): Layout {
   const left = pad + f.titlePx * SUP_TOP + yTitleDepth + gap * 1.6 + yLabelW + gap;
   let right = Math.max(pad, input.xLabelHalfWidthPx + 2);
   const outside = lg.place === "outside-right" && lg.widthPx > 0;
-  if (outside) right = Math.max(right, lg.widthPx + outsideLegendExtraPx(f));
+  if (outside) right = Math.max(right, lg.widthPx + outsideLegendExtraPx(f, input.xLabelHalfWidthPx));
   const plotW = Math.max(20, W - left - right);
   const plot: PlotRect = { x: left, y: top, w: plotW, h: plotH };
 
@@ -257,7 +262,7 @@ export function computeLayout(input: LayoutInput): Layout {
       ({ x: legendX, y: legendY } = cornerLegendOrigin(plot, lg.place, lg.widthPx, lg.heightPx, f));
       break;
     case "outside-right":
-      legendX = plot.x + plot.w + pad + gap;
+      legendX = plot.x + plot.w + outsideLegendGapPx(f, input.xLabelHalfWidthPx);
       legendY = plot.y;
       break;
     case "below":

@@ -12,6 +12,7 @@ import {
 } from "./layout";
 import { measureLegend, type LegendBox, type LegendEntry, type LegendLimits } from "./legend";
 import { OUTSIDE_MIN_PLOT_FRACTION, type AutoLegendPlace } from "./legend-place";
+import { MIN_TEXT_PX } from "./text";
 
 /**
  * A legend outside right never squeezes the plot area under this fraction of the figure width: its entries
@@ -34,6 +35,8 @@ export interface LegendFitInput {
   widthPx: number;
   heightPx: number;
   fonts: Fonts;
+  /** Half the width of the widest x tick label (as the layout has it). */
+  xLabelHalfWidthPx: number;
   /** The figure's layout with a legend box of this size at this place. */
   layoutFor: (place: LegendPlace, size: { widthPx: number; heightPx: number }) => Layout;
 }
@@ -46,8 +49,8 @@ export interface LegendFit {
 
 const NONE = { widthPx: 0, heightPx: 0 };
 
-function measure(input: LegendFitInput, limits: LegendLimits): LegendBox {
-  return measureLegend(input.entries, input.fonts.legendPx, limits);
+function measure(input: LegendFitInput, limits: LegendLimits, sizePx = input.fonts.legendPx): LegendBox {
+  return measureLegend(input.entries, sizePx, limits);
 }
 
 /** The layout with the legend inside the plot area (no margin for it); every inner corner gives the same. */
@@ -69,16 +72,36 @@ function cornerFit(input: LegendFitInput, corner: LegendCorner): LegendFit {
   return { box, layout: { ...inside, legendX: at.x, legendY: at.y } };
 }
 
-/** Outside right: the entries wrap into the width that leaves the plot {@link OUTSIDE_PLOT_SHARE} of the figure. */
+/**
+ * Outside right: the entries wrap into the width that leaves the plot {@link OUTSIDE_PLOT_SHARE} of the figure
+ * (more where the plot is short), set smaller (to 6 pt at least) when they do not fit the height in full.
+ */
 function outsideFit(input: LegendFitInput): LegendFit {
   const { widthPx: W, heightPx: H, fonts } = input;
   const inside = insideLayout(input);
-  const box = measure(input, {
-    widthPx: W - inside.plot.x - OUTSIDE_PLOT_SHARE * W - outsideLegendExtraPx(fonts),
+  // Half the width, or more where the plot is short (a title, a top axis) so its area stays a third and more.
+  const plotW = Math.max(OUTSIDE_PLOT_SHARE * W, (BAND_MIN_PLOT_AREA * W * H) / inside.plot.h);
+  const box = measureToFit(input, {
+    widthPx: W - inside.plot.x - plotW - outsideLegendExtraPx(fonts, input.xLabelHalfWidthPx),
     heightPx: H - inside.plot.y - figurePadPx(fonts),
     columns: false,
   });
   return { box, layout: input.layoutFor("outside-right", box) };
+}
+
+/**
+ * The box for `limits`; when the entries do not fit in full, the text is set smaller, in half-pt steps down to
+ * 6 pt (MIN_TEXT_PX), before any entry is shortened: the first size that shows them in full is kept.
+ */
+function measureToFit(input: LegendFitInput, limits: LegendLimits): LegendBox {
+  const fits = (b: LegendBox) => b.heightPx <= limits.heightPx && b.shortened.length === 0;
+  let box = measure(input, limits);
+  const halfPt = 96 / 72 / 2;
+  for (let size = input.fonts.legendPx - halfPt; !fits(box) && size >= MIN_TEXT_PX - 1e-9; size -= halfPt) {
+    const smaller = measure(input, limits, size);
+    if (fits(smaller) || size - halfPt < MIN_TEXT_PX - 1e-9) box = smaller;
+  }
+  return box;
 }
 
 /** Below or above: as many columns as the figure's width allows, no taller than {@link BAND_MIN_PLOT_AREA} leaves. */
@@ -86,7 +109,7 @@ function bandFit(input: LegendFitInput, place: "below" | "above"): LegendFit {
   const { widthPx: W, heightPx: H, fonts } = input;
   const bare = input.layoutFor(place, NONE);
   const minPlotH = (BAND_MIN_PLOT_AREA * W * H) / bare.plot.w;
-  const box = measure(input, {
+  const box = measureToFit(input, {
     widthPx: W - 2 * figurePadPx(fonts),
     heightPx: bare.plot.h - minPlotH - legendGapPx(fonts),
     columns: true,
@@ -97,7 +120,10 @@ function bandFit(input: LegendFitInput, place: "below" | "above"): LegendFit {
 /** The legend at a fixed place (or none: hidden, or no entries). */
 export function fitLegendAt(place: Exclude<LegendPlace, "auto">, input: LegendFitInput): LegendFit {
   if (place === "hidden" || input.entries.length === 0)
-    return { box: measureLegend([], 1, { ...NONE, columns: false }), layout: input.layoutFor("hidden", NONE) };
+    return {
+      box: measure({ ...input, entries: [] }, { ...NONE, columns: false }),
+      layout: input.layoutFor("hidden", NONE),
+    };
   switch (place) {
     case "outside-right":
       return outsideFit(input);
@@ -118,6 +144,7 @@ export function outsideSuitsAuto(input: LegendFitInput): boolean {
   return (
     layout.plot.w >= OUTSIDE_MIN_PLOT_FRACTION * input.widthPx &&
     box.items.every((it) => it.lines.length === 1) &&
+    box.sizePx === input.fonts.legendPx &&
     box.shortened.length === 0 &&
     box.heightPx <= layout.plot.h
   );

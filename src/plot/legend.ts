@@ -1,7 +1,7 @@
 // The legend: one entry per visible model and curve with a swatch drawn like the thing it names (line,
 // band, exclusion fill, region), on a white translucent box; entries wrap, and below the plot go in columns.
 import type { Model } from "../project/types";
-import type { SceneNode } from "./scene-types";
+import type { Scene, SceneNode } from "./scene-types";
 import { r2 } from "./format";
 import { stringWidthPx, wrapText } from "./text";
 
@@ -61,6 +61,8 @@ export interface LegendItem {
 export interface LegendBox {
   widthPx: number;
   heightPx: number;
+  /** Size of the entries' text, px. */
+  sizePx: number;
   swatchPx: number;
   items: LegendItem[];
   /** Indices of entries whose text had to be cut with "…" to fit (see {@link LegendLimits}). */
@@ -118,6 +120,7 @@ function grid(wrapped: Wrapped, cols: number, sizePx: number): Omit<LegendBox, "
   return {
     widthPx: x - m.columnGapPx + m.padPx,
     heightPx: m.padPx * 2 + rowH.reduce((a, b) => a + b, 0) - (m.rowPx - sizePx * 1.05),
+    sizePx,
     swatchPx: m.swatchPx,
     items,
   };
@@ -132,9 +135,9 @@ function inColumns(entries: LegendEntry[], sizePx: number, widthPx: number, cols
   return { box: { ...grid(wrapped, cols, sizePx), shortened }, textPx };
 }
 
-/** Characters of the entries' text the box shows. */
+/** Characters of the entries' text the box shows (spaces left out: a line break takes one). */
 function shownChars(box: LegendBox): number {
-  return box.items.reduce((n, it) => n + it.lines.reduce((k, l) => k + l.replace(/…$/, "").length, 0), 0);
+  return box.items.reduce((n, it) => n + it.lines.reduce((k, l) => k + l.replace(/…$|\s/g, "").length, 0), 0);
 }
 
 /** Whether box `a` is a better choice than `b`: it fits the height and `b` does not, shows more text, is lower. */
@@ -143,6 +146,8 @@ function better(a: LegendBox, b: LegendBox | null, heightPx: number): boolean {
   const fitsA = a.heightPx <= heightPx;
   const fitsB = b.heightPx <= heightPx;
   if (fitsA !== fitsB) return fitsA;
+  // Neither fits: the lowest box oversteps its room least.
+  if (!fitsA) return a.heightPx < b.heightPx - 1e-9;
   const shown = shownChars(a) - shownChars(b);
   if (shown !== 0) return shown > 0;
   return a.heightPx < b.heightPx - 1e-9;
@@ -156,7 +161,7 @@ function better(a: LegendBox, b: LegendBox | null, heightPx: number): boolean {
  * with one line per entry is the lowest one found.
  */
 export function measureLegend(entries: LegendEntry[], sizePx: number, limits: LegendLimits): LegendBox {
-  if (entries.length === 0) return { widthPx: 0, heightPx: 0, swatchPx: 0, items: [], shortened: [] };
+  if (entries.length === 0) return { widthPx: 0, heightPx: 0, sizePx, swatchPx: 0, items: [], shortened: [] };
   const colsToTry = limits.columns ? Math.min(entries.length, MAX_COLUMNS) : 1;
   let best: LegendBox | null = null;
   for (let cols = 1; cols <= colsToTry; cols++) {
@@ -289,8 +294,9 @@ function entryTextNodes(e: LegendEntry, item: LegendItem, id: string, x: number,
 }
 
 /** Scene nodes of the legend box at (x, y): the translucent white box, then per entry its swatch and lines. */
-export function legendNodes(entries: LegendEntry[], box: LegendBox, x: number, y: number, sizePx: number): SceneNode[] {
+export function legendNodes(entries: LegendEntry[], box: LegendBox, x: number, y: number): SceneNode[] {
   if (entries.length === 0) return [];
+  const sizePx = box.sizePx;
   const nodes: SceneNode[] = [
     {
       kind: "rect",
@@ -314,9 +320,18 @@ export function legendNodes(entries: LegendEntry[], box: LegendBox, x: number, y
   return nodes;
 }
 
-/** What the user is told when legend entries had to be shortened, or null when none was. */
-export function shortenedLegendNote(shortened: readonly string[] | undefined): string | null {
-  if (!shortened?.length) return null;
+/**
+ * What the user is told when the legend had to be made to fit: its text set smaller than chosen (pt), entries
+ * shortened; null when neither.
+ */
+export function shortenedLegendNote(scene: Pick<Scene, "shortenedLegendEntries" | "legendReducedToPt">): string | null {
+  const reduced = scene.legendReducedToPt
+    ? `Legend: text set at ${scene.legendReducedToPt} pt (smaller than chosen) to fit beside the plot.`
+    : "";
+  const shortened = scene.shortenedLegendEntries;
+  if (!shortened?.length) return reduced || null;
   const names = shortened.map((t) => `“${t}”`).join(", ");
-  return `Legend: ${shortened.length === 1 ? "an entry was" : `${shortened.length} entries were`} shortened to fit (${names}); a larger figure, a smaller legend text or another legend place shows ${shortened.length === 1 ? "it" : "them"} in full.`;
+  const n = shortened.length;
+  const what = `${n === 1 ? "an entry was" : `${n} entries were`} shortened to fit (${names}); a larger figure, a smaller legend text or another legend place shows ${n === 1 ? "it" : "them"} in full.`;
+  return reduced ? `${reduced} ${what[0].toUpperCase()}${what.slice(1)}` : `Legend: ${what}`;
 }

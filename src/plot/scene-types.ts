@@ -108,4 +108,6 @@ export interface Scene {
    * or more lines than the figure has height for); absent when every entry is shown in full.
    */
   shortenedLegendEntries?: string[];
+  /** The legend's text size in pt when it had to be set smaller than chosen to fit (below or above the plot). */
+  legendReducedToPt?: number;
 }

@@ -243,7 +243,7 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
       legend: { place, widthPx: box.widthPx, heightPx: box.heightPx },
     });
   const scales: ScaleConfig = { massDomainEv, yDomain, yView: view };
-  const fitInput = { entries, widthPx, heightPx, fonts, layoutFor };
+  const fitInput = { entries, widthPx, heightPx, fonts, xLabelHalfWidthPx: xHalf, layoutFor };
   const fitted = fitLegend(legendSetting, fitInput, (inside, box) => {
     const frame = { constants: c, view, scales, fonts, box, layout: inside };
     return opts.holdLegend ?? autoLegendPlace(project, frame, () => outsideSuitsAuto(fitInput));
@@ -376,7 +376,7 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
     {
       id: "legend",
       clip: false,
-      nodes: legendNodes(entries, legendBox, layout.legendX, layout.legendY, fonts.legendPx),
+      nodes: legendNodes(entries, legendBox, layout.legendX, layout.legendY),
       data: { testid: "legend" },
     },
   ];
@@ -390,6 +390,8 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   };
   if (autoPlace) scene.autoLegendPlace = autoPlace;
   if (legendBox.shortened.length) scene.shortenedLegendEntries = legendBox.shortened.map((i) => entries[i].text);
+  if (entries.length && legendBox.sizePx < fonts.legendPx - 1e-9)
+    scene.legendReducedToPt = Math.round(((legendBox.sizePx * 72) / PX_PER_IN) * 10) / 10;
   if (opts.physical !== false) {
     const custom = opts.widthPx !== undefined || opts.heightPx !== undefined;
     scene.widthPhysical = custom ? physicalOf(widthPx) : preset.widthPhysical;

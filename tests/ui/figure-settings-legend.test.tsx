@@ -13,7 +13,7 @@ beforeEach(() => resetStore());
 const legend = () => useAxband.getState().project.figure.legend;
 
 describe("Legend setting", () => {
-  test('offers "best corner (automatic)" (auto) first, then the fixed corners, outside right and hidden', () => {
+  test('offers "best corner (automatic)" (auto) first, then the fixed corners, outside right, below, above and hidden', () => {
     render(<FigureSettings />);
     const select = screen.getByLabelText("Legend");
     const options = within(select).getAllByRole("option") as HTMLOptionElement[];
@@ -24,9 +24,12 @@ describe("Legend setting", () => {
       "bottom-left",
       "bottom-right",
       "outside-right",
+      "below",
+      "above",
       "hidden",
     ]);
     expect(options[0]).toHaveTextContent("best corner (automatic)");
+    expect(screen.getByTestId("legend-place")).toBe(select);
   });
 
   test('a new project shows "best corner (automatic)"', () => {
@@ -48,5 +51,20 @@ describe("Legend setting", () => {
     expect(select).toHaveValue("auto");
     useAxband.getState().undo();
     expect(legend()).toBe("bottom-left");
+  });
+
+  test("the legend text size goes through the store with undo; a new project has the default size", async () => {
+    const user = userEvent.setup();
+    resetStore(defaultProject());
+    render(<FigureSettings />);
+    const field = screen.getByTestId("legend-scale");
+    expect(field).toHaveValue(1);
+    await user.clear(field);
+    await user.type(field, "0.85");
+    expect(useAxband.getState().project.figure.legendScale).toBe(0.85);
+    // Out of range (0.7–1.5): not applied.
+    await user.clear(field);
+    await user.type(field, "3");
+    expect(useAxband.getState().project.figure.legendScale).toBe(0.85);
   });
 });

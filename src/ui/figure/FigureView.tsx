@@ -4,6 +4,7 @@
 import { useDeferredValue, useEffect, useId, useMemo, useRef, useState, type RefObject } from "react";
 import { buildScene } from "../../plot/scene";
 import { presetOf } from "../../plot/layout";
+import { shortenedLegendNote } from "../../plot/legend";
 import type { Scene } from "../../plot/scene-types";
 import type { Project } from "../../project/types";
 import { selectHighlight, selectPreparing, selectProject, useAxband } from "../store";
@@ -109,6 +110,11 @@ export function FigureView() {
         </SceneSvg>
         <PreparingNote scene={scene} waiting={waiting} />
       </div>
+      {shortenedLegendNote(scene) ? (
+        <p className="figure-note" data-testid="legend-note" role="status">
+          {shortenedLegendNote(scene)}
+        </p>
+      ) : null}
       <p className="figure-hint" id={hintId}>
         Scroll to zoom (Shift: mass axis only, Alt: y axis only), drag to pan, double-click to reset. With the figure
         focused: + and − zoom, arrow keys pan, 0 resets.

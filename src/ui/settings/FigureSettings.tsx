@@ -1,9 +1,10 @@
 // The Figure settings section: size preset, typed axis ranges (validated; the previous range is kept on a
-// bad entry), y view, top axis, grid, legend place, font family and size, and title.
+// bad entry), y view, top axis, grid, legend place and text size, font family and size, and title.
 import { useId, useState } from "react";
 import type { Figure, FigureFont, LegendPlace, SizePreset, TopAxis, YView } from "../../project/types";
 import { useShallow } from "zustand/react/shallow";
 import { useAxband, type AxbandState } from "../store";
+import { LEGEND_SCALE_LIMITS } from "../../project/schema";
 
 const PRESETS: { value: SizePreset; label: string }[] = [
   { value: "slide", label: "Slide 16:9" },
@@ -27,13 +28,15 @@ const TOP_AXES: { value: TopAxis; label: string }[] = [
   { value: "frequency", label: "frequency [Hz]" },
 ];
 const LEGEND: { value: LegendPlace; label: string }[] = [
-  // The inner corner covering the least of the curves and models (src/plot/legend-place.ts).
+  // A free inner corner, else outside right or below (src/plot/legend-place.ts).
   { value: "auto", label: "best corner (automatic)" },
   { value: "top-left", label: "top left" },
   { value: "top-right", label: "top right" },
   { value: "bottom-left", label: "bottom left" },
   { value: "bottom-right", label: "bottom right" },
   { value: "outside-right", label: "outside right" },
+  { value: "below", label: "below the plot" },
+  { value: "above", label: "above the plot" },
   { value: "hidden", label: "hidden" },
 ];
 
@@ -170,6 +173,7 @@ function NumberSetting({
   max,
   step,
   onChange,
+  testId,
 }: {
   label: string;
   value: number;
@@ -177,6 +181,7 @@ function NumberSetting({
   max: number;
   step: number;
   onChange: (v: number) => void;
+  testId?: string;
 }) {
   const [draft, setDraft] = useState<string | null>(null);
   return (
@@ -188,6 +193,7 @@ function NumberSetting({
         max={max}
         step={step}
         className="narrow"
+        data-testid={testId}
         value={draft ?? String(value)}
         onChange={(e) => {
           setDraft(e.target.value);
@@ -273,7 +279,22 @@ export function FigureSettings() {
       <ViewRanges />
       <Select label="y axis" value={figure.yView} options={Y_VIEWS} onChange={(v) => set({ yView: v })} />
       <Select label="Top axis" value={figure.topAxis} options={TOP_AXES} onChange={(v) => set({ topAxis: v })} />
-      <Select label="Legend" value={figure.legend} options={LEGEND} onChange={(v) => set({ legend: v })} />
+      <Select
+        label="Legend"
+        value={figure.legend}
+        options={LEGEND}
+        testId="legend-place"
+        onChange={(v) => set({ legend: v })}
+      />
+      <NumberSetting
+        label="Legend text (× default)"
+        value={figure.legendScale}
+        min={LEGEND_SCALE_LIMITS[0]}
+        max={LEGEND_SCALE_LIMITS[1]}
+        step={0.05}
+        testId="legend-scale"
+        onChange={(v) => set({ legendScale: v }, "figure:legend-scale")}
+      />
       <Select
         label="Font"
         value={figure.font}
