@@ -15,6 +15,7 @@ import {
   type Fonts,
   type Layout,
   type LegendCorner,
+  type PlotRect,
 } from "./layout";
 import { legendNodes, modelKindNote, type LegendBox, type LegendEntry } from "./legend";
 import { fitLegend, outsideSuitsAuto } from "./legend-fit";
@@ -193,36 +194,27 @@ function autoLegendPlace(project: Project, f: AutoLegendFrame, outsideFits: () =
   return pickLegendPlace({ shapes, plot, boxes, outsideFits }).place;
 }
 
-function physicalOf(px: number): string {
-  return `${Math.round((px / PX_PER_IN) * 254) / 100}cm`;
+/** What laying out the figure around its legend needs. */
+interface LayoutFrame {
+  widthPx: number;
+  heightPx: number;
+  fonts: Fonts;
+  constants: ReturnType<typeof constantsOf>;
+  scales: ScaleConfig;
+  topAxis: "none" | "fa" | "frequency";
+  entries: LegendEntry[];
+  holdLegend: AutoLegendPlace | undefined;
 }
 
 /**
- * The scene of a project's figure. Layers, bottom to top: background, grid, curves (all curve fills in
- * project order, then all curve lines in project order, so no fill hides a line), models (fills, then
- * lines), highlight, axes, legend. Curves, models, highlight and grid are clipped to the plot area.
- * An "auto" legend goes to the inner corner where it covers the least of the curves and models, or outside
- * right when every corner is crowded and the figure has room (legend-place.ts); the choice depends on the
- * project and the scene size only, never on `resolution` or `highlight`, so screen and export agree.
- * @param project the whole project (figure settings, models, curves, physics constants).
- * @param opts size, resolution, highlight; see {@link BuildSceneOpts}.
+ * The figure's layout with its legend fitted in (legend-fit.ts): margins from the tick labels and the legend's
+ * place; an "auto" legend is placed where it covers no data (legend-place.ts) unless a place is held.
  */
-export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
+function layoutWithLegend(project: Project, f: LayoutFrame) {
+  const { widthPx, heightPx, fonts, entries, scales, topAxis, constants: c } = f;
+  const [yDomain, view] = [scales.yDomain, scales.yView ?? "coupling"];
   const fig = project.figure;
-  const c = constantsOf(project.physics);
-  const view: YView = fig.yView === "normalized" || fig.yView === "g-gamma" ? fig.yView : "coupling";
-  const preset = presetOf(fig);
-  const widthPx = opts.widthPx && opts.widthPx > 0 ? opts.widthPx : preset.widthPx;
-  const heightPx = opts.heightPx && opts.heightPx > 0 ? opts.heightPx : preset.heightPx;
-  const fonts = fontsFor(fig.fontPt, preset.fontScale, fig.legendScale);
-  // An unusable range falls back to the default figure's.
-  const massDomainEv = sanitizeDomain(fig.massRangeEv, DEFAULT_MASS_RANGE_EV);
-  const yDomain = sanitizeDomain(fig.yRange, defaultYRange(view));
-  const topAxis = fig.topAxis === "fa" || fig.topAxis === "frequency" ? fig.topAxis : "none";
   const legendSetting = fig.legend ?? "top-right";
-
-  const entries = legendSetting === "hidden" ? [] : legendEntries(project, fonts, c);
-
   const ySpan = Math.log10(yDomain[1] / yDomain[0]);
   // Right margin: half of a wide decade label ("10⁻¹⁰"), fixed for the font size so the plot area does not
   // jump while zooming; a label that would still cross the figure edge is left out (axesNodes).
@@ -242,18 +234,27 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
       xLabelHalfWidthPx: xHalf,
       legend: { place, widthPx: box.widthPx, heightPx: box.heightPx },
     });
-  const scales: ScaleConfig = { massDomainEv, yDomain, yView: view };
   const fitInput = { entries, widthPx, heightPx, fonts, xLabelHalfWidthPx: xHalf, layoutFor };
-  const fitted = fitLegend(legendSetting, fitInput, (inside, box) => {
+  return fitLegend(legendSetting, fitInput, (inside, box) => {
     const frame = { constants: c, view, scales, fonts, box, layout: inside };
-    return opts.holdLegend ?? autoLegendPlace(project, frame, () => outsideSuitsAuto(fitInput));
+    return f.holdLegend ?? autoLegendPlace(project, frame, () => outsideSuitsAuto(fitInput));
   });
-  const { layout, box: legendBox, autoPlace } = fitted;
-  const plot = { x: r2(layout.plot.x), y: r2(layout.plot.y), w: r2(layout.plot.w), h: r2(layout.plot.h) };
-  const map = logAffine(scales, plot);
-  const frame: AxesFrame = { map, plot, massDomainEv, yDomain, topAxis, constants: c, fonts, yView: view };
-  const ticks = axisTicks(frame);
+}
 
+/** What drawing the curves and models needs. */
+interface DataFrame {
+  constants: ReturnType<typeof constantsOf>;
+  view: YView;
+  map: ReturnType<typeof logAffine>;
+  massDomainEv: [number, number];
+  plot: PlotRect;
+  fonts: Fonts;
+  resolution: number;
+  thin: boolean | undefined;
+}
+
+/** The curves' and models' fills and lines (each in project order), and each one's lines by id for halos. */
+function dataNodes(project: Project, d: DataFrame) {
   // Curves: fills first, then lines, each in project order.
   const curveFills: SceneNode[] = [];
   const curveLines: SceneNode[] = [];
@@ -263,13 +264,13 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
     const g = curveGeometry(
       cv,
       {
-        constants: c,
-        view,
-        map,
-        plot,
-        lineWidthPx: fonts.dataLinePx,
-        resolution: opts.resolution ?? 1,
-        thin: opts.thin,
+        constants: d.constants,
+        view: d.view,
+        map: d.map,
+        plot: d.plot,
+        lineWidthPx: d.fonts.dataLinePx,
+        resolution: d.resolution,
+        thin: d.thin,
       },
       `curve-${i + 1}`,
     );
@@ -282,19 +283,23 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   const modelLineById = new Map<string, PathNode[]>();
   project.models.forEach((m, i) => {
     if (!m.visible) return;
-    const g = modelGeometry(
-      m,
-      { constants: c, view, map, massDomainEv, plot, lineWidthPx: fonts.dataLinePx },
-      `model-${i + 1}`,
-    );
+    const g = modelGeometry(m, { ...d, lineWidthPx: d.fonts.dataLinePx }, `model-${i + 1}`);
     if (!g) return;
     modelFills.push(...g.fills);
     modelLines.push(...g.lines);
     modelLineById.set(m.id, g.lines);
   });
+  return { curveFills, curveLines, modelFills, modelLines, curveLineById, modelLineById };
+}
 
+/** Marks of a highlighted mass interval (a row of the overlap table) and halos on its model's or curve's lines. */
+function highlightNodes(
+  hl: BuildSceneOpts["highlight"],
+  { map, plot, fonts }: { map: ReturnType<typeof logAffine>; plot: PlotRect; fonts: Fonts },
+  modelLineById: Map<string, PathNode[]>,
+  curveLineById: Map<string, PathNode[]>,
+): SceneNode[] {
   const highlight: SceneNode[] = [];
-  const hl = opts.highlight;
   if (hl && hl.massMinEv > 0 && hl.massMaxEv > 0) {
     const xa = map.ax + map.bx * Math.log10(Math.min(hl.massMinEv, hl.massMaxEv));
     const xb = map.ax + map.bx * Math.log10(Math.max(hl.massMinEv, hl.massMaxEv));
@@ -345,22 +350,96 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
       }),
     );
   }
+  return highlight;
+}
+
+/** The figure title, centred over the plot area. */
+function titleNode(title: string, plot: PlotRect, layout: Layout, fonts: Fonts): SceneNode {
+  return {
+    kind: "text",
+    id: "figure-title",
+    x: r2(plot.x + plot.w / 2),
+    y: r2(layout.headingBaseline),
+    runs: [{ text: title }],
+    sizePx: r2(fonts.headingPx),
+    anchor: "middle",
+    baseline: "alphabetic",
+    fill: "#1a1a1a",
+    weight: "bold",
+  };
+}
+
+/** What the scene says about its legend: where "auto" put it, entries shortened, text set smaller. */
+function legendReport(entries: LegendEntry[], box: LegendBox, fonts: Fonts, autoPlace: AutoLegendPlace | undefined) {
+  const report: Pick<Scene, "autoLegendPlace" | "shortenedLegendEntries" | "legendReducedToPt"> = {};
+  if (autoPlace) report.autoLegendPlace = autoPlace;
+  if (box.shortened.length) report.shortenedLegendEntries = box.shortened.map((i) => entries[i].text);
+  if (entries.length && box.sizePx < fonts.legendPx - 1e-9)
+    report.legendReducedToPt = Math.round(((box.sizePx * 72) / PX_PER_IN) * 10) / 10;
+  return report;
+}
+
+function physicalOf(px: number): string {
+  return `${Math.round((px / PX_PER_IN) * 254) / 100}cm`;
+}
+
+/**
+ * The scene of a project's figure. Layers, bottom to top: background, grid, curves (all curve fills in
+ * project order, then all curve lines in project order, so no fill hides a line), models (fills, then
+ * lines), highlight, axes, legend. Curves, models, highlight and grid are clipped to the plot area.
+ * An "auto" legend goes to the inner corner where it covers the least of the curves and models, or outside
+ * right when every corner is crowded and the figure has room (legend-place.ts); the choice depends on the
+ * project and the scene size only, never on `resolution` or `highlight`, so screen and export agree.
+ * @param project the whole project (figure settings, models, curves, physics constants).
+ * @param opts size, resolution, highlight; see {@link BuildSceneOpts}.
+ */
+export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
+  const fig = project.figure;
+  const c = constantsOf(project.physics);
+  const view: YView = fig.yView === "normalized" || fig.yView === "g-gamma" ? fig.yView : "coupling";
+  const preset = presetOf(fig);
+  const widthPx = opts.widthPx && opts.widthPx > 0 ? opts.widthPx : preset.widthPx;
+  const heightPx = opts.heightPx && opts.heightPx > 0 ? opts.heightPx : preset.heightPx;
+  const fonts = fontsFor(fig.fontPt, preset.fontScale, fig.legendScale);
+  // An unusable range falls back to the default figure's.
+  const massDomainEv = sanitizeDomain(fig.massRangeEv, DEFAULT_MASS_RANGE_EV);
+  const yDomain = sanitizeDomain(fig.yRange, defaultYRange(view));
+  const topAxis = fig.topAxis === "fa" || fig.topAxis === "frequency" ? fig.topAxis : "none";
+  const legendSetting = fig.legend ?? "top-right";
+
+  const entries = legendSetting === "hidden" ? [] : legendEntries(project, fonts, c);
+
+  const scales: ScaleConfig = { massDomainEv, yDomain, yView: view };
+  const fitted = layoutWithLegend(project, {
+    widthPx,
+    heightPx,
+    fonts,
+    constants: c,
+    scales,
+    topAxis,
+    entries,
+    holdLegend: opts.holdLegend,
+  });
+  const { layout, box: legendBox, autoPlace } = fitted;
+  const plot = { x: r2(layout.plot.x), y: r2(layout.plot.y), w: r2(layout.plot.w), h: r2(layout.plot.h) };
+  const map = logAffine(scales, plot);
+  const frame: AxesFrame = { map, plot, massDomainEv, yDomain, topAxis, constants: c, fonts, yView: view };
+  const ticks = axisTicks(frame);
+
+  const { curveFills, curveLines, modelFills, modelLines, curveLineById, modelLineById } = dataNodes(project, {
+    constants: c,
+    view,
+    map,
+    massDomainEv,
+    plot,
+    fonts,
+    resolution: opts.resolution ?? 1,
+    thin: opts.thin,
+  });
+  const highlight = highlightNodes(opts.highlight, { map, plot, fonts }, modelLineById, curveLineById);
 
   const axes = axesNodes(frame, ticks, layout, yTitle(view));
-  if (fig.title?.trim()) {
-    axes.push({
-      kind: "text",
-      id: "figure-title",
-      x: r2(plot.x + plot.w / 2),
-      y: r2(layout.headingBaseline),
-      runs: [{ text: fig.title.trim() }],
-      sizePx: r2(fonts.headingPx),
-      anchor: "middle",
-      baseline: "alphabetic",
-      fill: "#1a1a1a",
-      weight: "bold",
-    });
-  }
+  if (fig.title?.trim()) axes.push(titleNode(fig.title.trim(), plot, layout, fonts));
 
   const layers: SceneLayer[] = [
     {
@@ -388,10 +467,7 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
     fontFamily: FIGURE_FONT_CSS[fig.font] ?? FIGURE_FONT_CSS.sans,
     layers,
   };
-  if (autoPlace) scene.autoLegendPlace = autoPlace;
-  if (legendBox.shortened.length) scene.shortenedLegendEntries = legendBox.shortened.map((i) => entries[i].text);
-  if (entries.length && legendBox.sizePx < fonts.legendPx - 1e-9)
-    scene.legendReducedToPt = Math.round(((legendBox.sizePx * 72) / PX_PER_IN) * 10) / 10;
+  Object.assign(scene, legendReport(entries, legendBox, fonts, autoPlace));
   if (opts.physical !== false) {
     const custom = opts.widthPx !== undefined || opts.heightPx !== undefined;
     scene.widthPhysical = custom ? physicalOf(widthPx) : preset.widthPhysical;

@@ -94,11 +94,6 @@ export function runsWidthPx(runs: readonly TextRun[], sizePx: number): number {
   return w;
 }
 
-/** Plain text of runs (for data attributes, titles and tests). */
-export function runsText(runs: readonly TextRun[]): string {
-  return runs.map((r) => r.text).join("");
-}
-
 /** "…" added to `text`, cut so both fit in `maxWidthPx` (at least one character is kept). */
 function shortened(text: string, sizePx: number, maxWidthPx: number): string {
   const room = maxWidthPx - stringWidthPx("…", sizePx);

@@ -34,8 +34,13 @@ function expectedProject(path: string): Project {
   return {
     ...raw,
     // Keys that joined a version without a bump are absent from goldens written before them and read as their
-    // default (DEVELOPERS.md "Schema changes"): the figure font (sans, the look those figures had).
-    figure: { ...raw.figure, font: (raw.figure as Partial<Project["figure"]>).font ?? "sans" },
+    // default (DEVELOPERS.md "Schema changes"): the figure font (sans, the look those figures had) and the
+    // legend text size (1, the size they were drawn with).
+    figure: {
+      ...raw.figure,
+      font: (raw.figure as Partial<Project["figure"]>).font ?? "sans",
+      legendScale: (raw.figure as Partial<Project["figure"]>).legendScale ?? 1,
+    },
     curves: raw.curves.map((c) => ({
       ...c,
       massEv: Float64Array.from(c.massEv),
