@@ -201,6 +201,30 @@ const SUP_TOP = SUP_RAISE + SHIFT_SCALE * CAP_HEIGHT + 0.04;
 /** Depth below the baseline of brackets and subscripts. */
 const DESCENT = 0.24;
 
+/** Top-left corner of the legend box for a fixed place; (0, 0) for "auto", which the scene builder resolves. */
+function legendOrigin(input: LayoutInput, plot: PlotRect, belowY: number, aboveY: number): { x: number; y: number } {
+  const { legend: lg, fonts: f, widthPx: W } = input;
+  const pad = figurePadPx(f);
+  switch (lg.place) {
+    case "top-left":
+    case "top-right":
+    case "bottom-left":
+    case "bottom-right":
+      return cornerLegendOrigin(plot, lg.place, lg.widthPx, lg.heightPx, f);
+    case "outside-right":
+      return { x: plot.x + plot.w + outsideLegendGapPx(f, input.xLabelHalfWidthPx), y: plot.y };
+    case "below":
+    case "above":
+      // Centred under (over) the plot area, moved in where it would cross the figure's edge.
+      return {
+        x: Math.max(pad, Math.min(W - pad - lg.widthPx, plot.x + (plot.w - lg.widthPx) / 2)),
+        y: lg.place === "below" ? belowY : aboveY,
+      };
+    default:
+      return { x: 0, y: 0 };
+  }
+}
+
 /**
  * Margins and positions for a figure. Vertical margins first (they need no label widths; a legend below or
  * above takes its height from the plot), then the y label width for that plot height, then the horizontal
@@ -252,29 +276,7 @@ export function computeLayout(input: LayoutInput): Layout {
   const plotW = Math.max(20, W - left - right);
   const plot: PlotRect = { x: left, y: top, w: plotW, h: plotH };
 
-  let legendX = 0;
-  let legendY = 0;
-  switch (lg.place) {
-    case "top-left":
-    case "top-right":
-    case "bottom-left":
-    case "bottom-right":
-      ({ x: legendX, y: legendY } = cornerLegendOrigin(plot, lg.place, lg.widthPx, lg.heightPx, f));
-      break;
-    case "outside-right":
-      legendX = plot.x + plot.w + outsideLegendGapPx(f, input.xLabelHalfWidthPx);
-      legendY = plot.y;
-      break;
-    case "below":
-    case "above":
-      // Centred under (over) the plot area, moved in where it would cross the figure's edge.
-      legendX = Math.max(pad, Math.min(W - pad - lg.widthPx, plot.x + (plot.w - lg.widthPx) / 2));
-      legendY = lg.place === "below" ? plot.y + plot.h + belowOffset : aboveY;
-      break;
-    default:
-      // "auto" is resolved to a place by the scene builder before the final layout.
-      break;
-  }
+  const { x: legendX, y: legendY } = legendOrigin(input, plot, plot.y + plot.h + belowOffset, aboveY);
   return {
     plot,
     figureWidthPx: W,

@@ -1,7 +1,7 @@
 // The legend: one entry per visible model and curve with a swatch drawn like the thing it names (line,
 // band, exclusion fill, region), on a white translucent box; entries wrap, and below the plot go in columns.
 import type { Model } from "../project/types";
-import type { Scene, SceneNode } from "./scene-types";
+import type { RectNode, Scene, SceneNode } from "./scene-types";
 import { r2 } from "./format";
 import { stringWidthPx, wrapText } from "./text";
 
@@ -179,98 +179,37 @@ export function measureLegend(entries: LegendEntry[], sizePx: number, limits: Le
   return best as LegendBox;
 }
 
+/** A swatch rectangle (the keys in the order every swatch has them, so the written SVG stays the same). */
+function swatchRect(id: string, x: number, y: number, w: number, h: number, fill: string, opacity: number): RectNode {
+  return { kind: "rect", id, x: r2(x), y: r2(y), w: r2(w), h: r2(h), fill, fillOpacity: opacity };
+}
+
+/** A swatch stroke along path data `d`, in the entry's colour, width and dash. */
+function swatchPath(e: LegendEntry, id: string, d: string): SceneNode {
+  return { kind: "path", id, d, stroke: e.colour, strokeWidth: r2(e.lineWidthPx), dash: e.dash, fill: "none" };
+}
+
 /** Scene nodes of one entry's swatch, centred on the line at `cy`, starting at `sx`. */
 function swatchNodes(e: LegendEntry, id: string, sx: number, cy: number, sw: number, sizePx: number): SceneNode[] {
-  const nodes: SceneNode[] = [];
   const sh = sizePx * 0.72;
-  const lw = r2(e.lineWidthPx);
+  const [x0, x1, top, bottom] = [r2(sx), r2(sx + sw), r2(cy - sh / 2), r2(cy + sh / 2)];
+  const body = () => swatchRect(`${id}-swatch`, sx, cy - sh / 2, sw, sh, e.colour, e.fillOpacity);
   if (e.kind === "model-line" || e.kind === "projection") {
-    if (e.spread)
-      nodes.push({
-        kind: "rect",
-        id: `${id}-spread`,
-        x: r2(sx),
-        y: r2(cy - sh / 2),
-        w: r2(sw),
-        h: r2(sh),
-        fill: e.colour,
-        fillOpacity: 0.12,
-      });
-    nodes.push({
-      kind: "path",
-      id: `${id}-swatch`,
-      d: `M${r2(sx)} ${r2(cy)}L${r2(sx + sw)} ${r2(cy)}`,
-      stroke: e.colour,
-      strokeWidth: lw,
-      dash: e.dash,
-      fill: "none",
-    });
-  } else if (e.kind === "model-band") {
-    if (e.spread)
-      nodes.push({
-        kind: "rect",
-        id: `${id}-spread`,
-        x: r2(sx),
-        y: r2(cy - sh / 2 - sh * 0.2),
-        w: r2(sw),
-        h: r2(sh * 1.4),
-        fill: e.colour,
-        fillOpacity: 0.12,
-      });
-    nodes.push({
-      kind: "rect",
-      id: `${id}-swatch`,
-      x: r2(sx),
-      y: r2(cy - sh / 2),
-      w: r2(sw),
-      h: r2(sh),
-      fill: e.colour,
-      fillOpacity: e.fillOpacity,
-    });
-    nodes.push({
-      kind: "path",
-      id: `${id}-edges`,
-      d: `M${r2(sx)} ${r2(cy - sh / 2)}L${r2(sx + sw)} ${r2(cy - sh / 2)}M${r2(sx)} ${r2(cy + sh / 2)}L${r2(sx + sw)} ${r2(cy + sh / 2)}`,
-      stroke: e.colour,
-      strokeWidth: lw,
-      dash: e.dash,
-      fill: "none",
-    });
-  } else if (e.kind === "exclusion") {
-    nodes.push({
-      kind: "rect",
-      id: `${id}-swatch`,
-      x: r2(sx),
-      y: r2(cy - sh / 2),
-      w: r2(sw),
-      h: r2(sh),
-      fill: e.colour,
-      fillOpacity: e.fillOpacity,
-    });
-    nodes.push({
-      kind: "path",
-      id: `${id}-edge`,
-      d: `M${r2(sx)} ${r2(cy + sh / 2)}L${r2(sx + sw)} ${r2(cy + sh / 2)}`,
-      stroke: e.colour,
-      strokeWidth: lw,
-      dash: e.dash,
-      fill: "none",
-    });
-  } else {
-    nodes.push({
-      kind: "rect",
-      id: `${id}-swatch`,
-      x: r2(sx),
-      y: r2(cy - sh / 2),
-      w: r2(sw),
-      h: r2(sh),
-      fill: e.colour,
-      fillOpacity: e.fillOpacity,
-      stroke: e.colour,
-      strokeWidth: lw,
-    });
+    const spread = e.spread ? [swatchRect(`${id}-spread`, sx, cy - sh / 2, sw, sh, e.colour, 0.12)] : [];
+    return [...spread, swatchPath(e, `${id}-swatch`, `M${x0} ${r2(cy)}L${x1} ${r2(cy)}`)];
   }
-  return nodes;
+  if (e.kind === "model-band") {
+    const spread = e.spread
+      ? [swatchRect(`${id}-spread`, sx, cy - sh / 2 - sh * 0.2, sw, sh * 1.4, e.colour, 0.12)]
+      : [];
+    return [
+      ...spread,
+      body(),
+      swatchPath(e, `${id}-edges`, `M${x0} ${top}L${x1} ${top}M${x0} ${bottom}L${x1} ${bottom}`),
+    ];
+  }
+  if (e.kind === "exclusion") return [body(), swatchPath(e, `${id}-edge`, `M${x0} ${bottom}L${x1} ${bottom}`)];
+  return [{ ...body(), stroke: e.colour, strokeWidth: r2(e.lineWidthPx) }];
 }
 
 /**

@@ -5,6 +5,7 @@ import { render, screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { defaultProject } from "../../src/project/demo";
 import { FigureSettings } from "../../src/ui/settings/FigureSettings";
+import { FigureView } from "../../src/ui/figure/FigureView";
 import { useAxband } from "../../src/ui/store";
 import { blankProject, resetStore } from "./helpers";
 
@@ -66,5 +67,28 @@ describe("Legend setting", () => {
     await user.clear(field);
     await user.type(field, "3");
     expect(useAxband.getState().project.figure.legendScale).toBe(0.85);
+    // The typed steps count as one change.
+    useAxband.getState().undo();
+    expect(useAxband.getState().project.figure.legendScale).toBe(1);
+  });
+
+  test("a legend entry that must be shortened is named in a note under the figure; a place with room clears it", async () => {
+    const user = userEvent.setup();
+    const p = defaultProject();
+    // One word wider than any legend room on a single column cannot wrap: it is cut, and the note says which.
+    const word = "Averyveryverylongsinglewordlabelthatcannotwrapanywhereatall";
+    p.models[0] = { ...p.models[0], label: word };
+    resetStore({ ...p, figure: { ...p.figure, preset: "single-column", legend: "outside-right" } });
+    render(
+      <>
+        <FigureView />
+        <FigureSettings />
+      </>,
+    );
+    expect(await screen.findByTestId("legend-note")).toHaveTextContent(word);
+    // On a slide the box below the plot is wide enough for the word: no note.
+    await user.selectOptions(screen.getByLabelText("Size"), "slide");
+    await user.selectOptions(screen.getByTestId("legend-place"), "below");
+    await expect.poll(() => screen.queryByTestId("legend-note")).toBeNull();
   });
 });
