@@ -174,7 +174,8 @@ function rangeInto(key: "massRangeEv" | "gRange"): OptionSpec["apply"] {
 /** A handler accepting one of `allowed` into `set`. */
 function oneOf<T extends string>(allowed: readonly T[], set: (o: CliOptions, v: T) => void): OptionSpec["apply"] {
   return (s, value, name) => {
-    if (!allowed.includes(value as T)) return `${name}: expected one of ${allowed.join(", ")}, got "${value}"`;
+    const list = allowed.length === 2 ? allowed.join(" or ") : `one of ${allowed.join(", ")}`;
+    if (!allowed.includes(value as T)) return `${name}: expected ${list}, got "${value}"`;
     set(s.o, value as T);
   };
 }
