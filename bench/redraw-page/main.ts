@@ -96,6 +96,7 @@ async function loadProject(legend: Project["figure"]["legend"] = "outside-right"
       topAxis: "fa",
       grid: true,
       legend,
+      legendScale: 1,
       fontPt: 12,
       font: "sans",
       title: "",

@@ -1,6 +1,7 @@
 // Command-line arguments of the renderer (`npm run render -- …`): a pure parser from argv to options, and
 // the usage text. Kept apart from render.ts so the rules (roles per file, ranges, presets) are unit-testable.
-import type { CurveRole, ExclusionMark, SizePreset } from "../project/types";
+import type { CurveRole, ExclusionMark, LegendPlace, SizePreset } from "../project/types";
+import { LEGEND_SCALE_LIMITS } from "../project/limits";
 import type { FigureFontFamily } from "../formats/pdf/fonts";
 import { overlapFormat } from "./overlap-out";
 import { parseMassText, type ParsedValue } from "../formats/axis-range";
@@ -8,6 +9,17 @@ import { AXES_OPTIONS, AXES_USAGE, readAxesOption, type AxesCliOptions } from ".
 
 export const ROLES: readonly CurveRole[] = ["exclusion", "projection", "region"];
 export const PRESET_NAMES: readonly SizePreset[] = ["slide", "single-column", "double-column", "custom"];
+export const LEGEND_PLACES: readonly LegendPlace[] = [
+  "auto",
+  "top-left",
+  "top-right",
+  "bottom-left",
+  "bottom-right",
+  "outside-right",
+  "below",
+  "above",
+  "hidden",
+];
 
 /** One input file; `role` is set for CSV files (from the --role in effect for it). */
 export interface CliInput {
@@ -49,6 +61,10 @@ export interface CliOptions extends AxesCliOptions {
   title?: string;
   /** The figure's font family (SVG, PNG and PDF). @default the project's (a new project's is "sans") */
   font?: FigureFontFamily;
+  /** Where the legend goes. @default the project's (a new project's is "auto") */
+  legend?: LegendPlace;
+  /** Legend text size as a factor of its default (Figure.legendScale). @default the project's */
+  legendScale?: number;
   help: boolean;
 }
 
@@ -69,6 +85,11 @@ output (at least one of -o, --png, --models-csv, --overlap, --overlap-intervals)
                             look (default: the project's; sans for CSV input)
   --exclusions hatch|fill|hatch-fill  mark every exclusion's excluded side with short hatches (the house
                             style), the translucent fill, or both (default: each curve's own)
+  --legend PLACE            where the legend goes: auto (a free inner corner, else outside right or below),
+                            top-left, top-right, bottom-left, bottom-right, outside-right, below (under the
+                            plot, in columns), above (between title and plot), hidden (default: the project's)
+  --legend-scale K          legend text size as a factor of the default, 0.7 to 1.5 (1: 7 pt at single-column);
+                            entries wrap, and any that must still be shortened are named on stderr
   --png FILE.png            write the figure as PNG
   --dpi N                   PNG dots per inch at the figure's physical size (default 300)
   --scale K                 PNG at K times the 96-px-per-inch size instead (1 or 2, as the app's 1x/2x)
@@ -126,51 +147,146 @@ function positive(flag: string, text: string): number | string {
   return Number.isFinite(v) && v > 0 && text.trim() !== "" ? v : `${flag}: expected a positive number, got "${text}"`;
 }
 
-const WITH_VALUE = new Set([
-  "-o",
-  "--out",
-  "--png",
-  "--dpi",
-  "--scale",
-  "--preset",
-  "--width-mm",
-  "--height-mm",
-  "--models-csv",
-  "--overlap",
-  "--overlap-intervals",
-  "--role",
-  "--exclusions",
-  "--model",
-  "--mass-unit",
-  "--coupling-unit",
-  "--mass-range",
-  "--g-range",
-  "--title",
-  "--font",
-  ...AXES_OPTIONS,
-]);
-const FLAGS = new Set(["-h", "--help", "--no-embed", "--skip-bad-rows"]);
+/** What an option's handler may change besides the options: the roles given so far. */
+interface ParseState {
+  o: CliOptions;
+  roles: CurveRole[];
+}
+
+/**
+ * One command-line option: its spellings, whether it takes a value, and what it does; an error text is
+ * returned for a bad value. One entry per option, so adding an option is adding one line here.
+ */
+interface OptionSpec {
+  names: readonly string[];
+  /** A flag takes no value (`--no-embed`); every other option takes exactly one. */
+  flag?: true;
+  apply: (s: ParseState, value: string, name: string) => string | void;
+}
+
+/** A handler storing a positive number into `key`. */
+function positiveInto(key: "dpi" | "scale" | "widthMm" | "heightMm"): OptionSpec["apply"] {
+  return (s, value, name) => {
+    const r = positive(name, value);
+    if (typeof r === "string") return r;
+    s.o[key] = r;
+  };
+}
+
+/** A handler storing a LO:HI range into `key`. */
+function rangeInto(key: "massRangeEv" | "gRange", parse?: (t: string) => ParsedValue): OptionSpec["apply"] {
+  return (s, value, name) => {
+    const r = parseRange(name, value, parse);
+    if (typeof r === "string") return r;
+    s.o[key] = r;
+  };
+}
+
+/** A handler accepting one of `allowed` into `set`. */
+function oneOf<T extends string>(allowed: readonly T[], set: (o: CliOptions, v: T) => void): OptionSpec["apply"] {
+  return (s, value, name) => {
+    const list = allowed.length === 2 ? allowed.join(" or ") : `one of ${allowed.join(", ")}`;
+    if (!allowed.includes(value as T)) return `${name}: expected ${list}, got "${value}"`;
+    set(s.o, value as T);
+  };
+}
+
+const OPTIONS: readonly OptionSpec[] = [
+  { names: ["-h", "--help"], flag: true, apply: (s) => void (s.o.help = true) },
+  { names: ["--no-embed"], flag: true, apply: (s) => void (s.o.embed = false) },
+  { names: ["--skip-bad-rows"], flag: true, apply: (s) => void (s.o.skipBadRows = true) },
+  { names: ["-o", "--out"], apply: (s, v) => void (s.o.out = v) },
+  { names: ["--png"], apply: (s, v) => void (s.o.png = v) },
+  { names: ["--models-csv"], apply: (s, v) => void (s.o.modelsCsv = v) },
+  {
+    names: ["--overlap", "--overlap-intervals"],
+    apply: (s, v, name) => {
+      const r = overlapFormat(name, v, name === "--overlap");
+      if (r !== "csv" && r !== "md" && r !== "tex") return r;
+      if (name === "--overlap") s.o.overlap = v;
+      else s.o.overlapIntervals = v;
+    },
+  },
+  { names: ["--dpi"], apply: positiveInto("dpi") },
+  { names: ["--scale"], apply: positiveInto("scale") },
+  { names: ["--width-mm"], apply: positiveInto("widthMm") },
+  { names: ["--height-mm"], apply: positiveInto("heightMm") },
+  { names: ["--preset"], apply: oneOf(PRESET_NAMES, (o, v) => (o.preset = v)) },
+  {
+    names: ["--role"],
+    apply: (s, v, name) =>
+      ROLES.includes(v as CurveRole)
+        ? void s.roles.push(v as CurveRole)
+        : `${name}: expected one of ${ROLES.join(", ")}, got "${v}"`,
+  },
+  { names: ["--model"], apply: (s, v) => void s.o.models.push(v) },
+  { names: ["--font"], apply: oneOf(["sans", "serif"] as const, (o, v) => (o.font = v)) },
+  { names: ["--legend"], apply: oneOf(LEGEND_PLACES, (o, v) => (o.legend = v)) },
+  { names: ["--legend-scale"], apply: legendScale },
+  { names: ["--mass-unit"], apply: (s, v) => void (s.o.massUnit = v) },
+  { names: ["--coupling-unit"], apply: (s, v) => void (s.o.couplingUnit = v) },
+  { names: ["--mass-range"], apply: rangeInto("massRangeEv", (t) => parseMassText(t, "eV")) },
+  { names: ["--g-range"], apply: rangeInto("gRange") },
+  { names: ["--title"], apply: (s, v) => void (s.o.title = v) },
+  { names: ["--exclusions"], apply: exclusions },
+  ...AXES_OPTIONS.map((n): OptionSpec => ({
+    names: [n],
+    apply: (s, v, name) => readAxesOption(name, v, s.o) ?? undefined,
+  })),
+];
+
+function exclusions(s: ParseState, value: string, name: string): string | void {
+  const marks: readonly ExclusionMark[] = ["hatch", "fill", "hatch-fill"];
+  if (!marks.includes(value as ExclusionMark)) return `${name}: expected hatch, fill or hatch-fill, got "${value}"`;
+  s.o.exclusions = value as ExclusionMark;
+}
+
+function legendScale(s: ParseState, value: string, name: string): string | void {
+  const [lo, hi] = LEGEND_SCALE_LIMITS;
+  const v = Number(value);
+  if (!(value.trim() !== "" && Number.isFinite(v) && v >= lo && v <= hi))
+    return `${name}: expected a factor from ${lo} to ${hi} (1 = the default size), got "${value}"`;
+  s.o.legendScale = v;
+}
+
+const BY_NAME = new Map(OPTIONS.flatMap((spec) => spec.names.map((n) => [n, spec] as const)));
+
+/** The first contradiction between the options and inputs read, or null. */
+function conflicts(o: CliOptions, argv: readonly string[], roles: CurveRole[], lastFileRoleCount: number) {
+  if (o.inputs.length === 0) return "no input file (a .axband.json project, an exported .svg, or CSV files)";
+  if (!o.out && !o.png && !o.modelsCsv && !o.overlap && !o.overlapIntervals)
+    return "nothing to write: give -o FILE.svg, --png FILE.png, --models-csv FILE.csv or --overlap FILE";
+  const projects = o.inputs.filter((f) => f.kind !== "csv");
+  // A trailing --role would otherwise be dropped without a word (it never reaches back to earlier files).
+  if (projects.length === 0 && roles.length > lastFileRoleCount)
+    return `--role ${roles[roles.length - 1]} is followed by no CSV file: a --role applies to the files after it`;
+  if (projects.length > 0 && o.inputs.length > 1)
+    return "give either one project (.json or exported .svg) or CSV files, not both or several projects";
+  if (projects.length > 0 && (o.models.length > 0 || roles.length > 0))
+    return "--model and --role apply to CSV input only; edit the project in the app to change its models";
+  if (o.scale !== undefined && argv.some((a) => a === "--dpi" || a.startsWith("--dpi=")))
+    return "give --dpi or --scale, not both";
+  if ((o.widthMm !== undefined || o.heightMm !== undefined) && o.preset !== "custom")
+    return "--width-mm/--height-mm need --preset custom";
+  const outs = [o.out, o.png, o.modelsCsv, o.overlap, o.overlapIntervals].filter((p): p is string => !!p);
+  if (new Set(outs).size !== outs.length) return "two outputs have the same path";
+  if (outs.some((p) => o.inputs.some((f) => f.path === p))) return "an output path is also an input file";
+  return null;
+}
 
 /**
  * Reads the renderer's argv (without `node` and the script). `--name=value` and `--name value` both work;
  * `--` ends the options. Input kind goes by extension: `.json` project, `.svg` exported figure, else CSV.
  */
 export function parseArgs(argv: readonly string[]): ArgsResult {
-  const o: CliOptions = {
-    inputs: [],
-    dpi: 300,
-    embed: true,
-    models: [],
-    skipBadRows: false,
-    help: false,
-  };
-  const roles: CurveRole[] = [];
+  const o: CliOptions = { inputs: [], dpi: 300, embed: true, models: [], skipBadRows: false, help: false };
+  const state: ParseState = { o, roles: [] };
   const pending: { path: string; roleCount: number }[] = [];
   let onlyFiles = false;
   for (let i = 0; i < argv.length; i++) {
     const arg = argv[i];
     if (onlyFiles || !arg.startsWith("-") || arg === "-") {
-      pending.push({ path: arg, roleCount: roles.length });
+      pending.push({ path: arg, roleCount: state.roles.length });
       continue;
     }
     if (arg === "--") {
@@ -179,143 +295,25 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
     }
     const eq = arg.startsWith("--") ? arg.indexOf("=") : -1;
     const name = eq > 0 ? arg.slice(0, eq) : arg;
-    if (FLAGS.has(name)) {
-      if (eq > 0) return { ok: false, error: `${name} takes no value` };
-      if (name === "-h" || name === "--help") o.help = true;
-      else if (name === "--no-embed") o.embed = false;
-      else o.skipBadRows = true;
-      continue;
-    }
-    if (!WITH_VALUE.has(name)) return { ok: false, error: `unknown option ${name}` };
-    let value: string;
-    if (eq > 0) value = arg.slice(eq + 1);
-    else {
+    const spec = BY_NAME.get(name);
+    if (!spec) return { ok: false, error: `unknown option ${name}` };
+    if (spec.flag && eq > 0) return { ok: false, error: `${name} takes no value` };
+    let value = "";
+    if (!spec.flag && eq > 0) value = arg.slice(eq + 1);
+    else if (!spec.flag) {
       if (i + 1 >= argv.length) return { ok: false, error: `${name} needs a value` };
       value = argv[++i];
     }
-    let r: number | string | [number, number];
-    switch (name) {
-      case "-o":
-      case "--out":
-        o.out = value;
-        break;
-      case "--png":
-        o.png = value;
-        break;
-      case "--models-csv":
-        o.modelsCsv = value;
-        break;
-      case "--overlap":
-      case "--overlap-intervals":
-        r = overlapFormat(name, value, name === "--overlap");
-        if (r !== "csv" && r !== "md" && r !== "tex") return { ok: false, error: r };
-        if (name === "--overlap") o.overlap = value;
-        else o.overlapIntervals = value;
-        break;
-      case "--dpi":
-        if (typeof (r = positive(name, value)) === "string") return { ok: false, error: r };
-        o.dpi = r;
-        break;
-      case "--scale":
-        if (typeof (r = positive(name, value)) === "string") return { ok: false, error: r };
-        o.scale = r;
-        break;
-      case "--width-mm":
-        if (typeof (r = positive(name, value)) === "string") return { ok: false, error: r };
-        o.widthMm = r;
-        break;
-      case "--height-mm":
-        if (typeof (r = positive(name, value)) === "string") return { ok: false, error: r };
-        o.heightMm = r;
-        break;
-      case "--preset":
-        if (!PRESET_NAMES.includes(value as SizePreset))
-          return { ok: false, error: `--preset: expected one of ${PRESET_NAMES.join(", ")}, got "${value}"` };
-        o.preset = value as SizePreset;
-        break;
-      case "--role":
-        if (!ROLES.includes(value as CurveRole))
-          return { ok: false, error: `--role: expected one of ${ROLES.join(", ")}, got "${value}"` };
-        roles.push(value as CurveRole);
-        break;
-      case "--exclusions":
-        if (value !== "hatch" && value !== "fill" && value !== "hatch-fill")
-          return { ok: false, error: `--exclusions: expected hatch, fill or hatch-fill, got "${value}"` };
-        o.exclusions = value;
-        break;
-      case "--model":
-        o.models.push(value);
-        break;
-      case "--font":
-        if (value !== "sans" && value !== "serif")
-          return { ok: false, error: `--font: expected sans or serif, got "${value}"` };
-        o.font = value;
-        break;
-      case "--mass-unit":
-        o.massUnit = value;
-        break;
-      case "--coupling-unit":
-        o.couplingUnit = value;
-        break;
-      case "--mass-range":
-        if (typeof (r = parseRange(name, value, (t) => parseMassText(t, "eV"))) === "string")
-          return { ok: false, error: r };
-        o.massRangeEv = r;
-        break;
-      case "--g-range":
-        if (typeof (r = parseRange(name, value)) === "string") return { ok: false, error: r };
-        o.gRange = r;
-        break;
-      case "--title":
-        o.title = value;
-        break;
-      default: {
-        const e = readAxesOption(name, value, o);
-        if (e) return { ok: false, error: e };
-      }
-    }
+    const error = spec.apply(state, value, name);
+    if (typeof error === "string") return { ok: false, error };
   }
   o.inputs = pending.map(({ path, roleCount }) => ({
     path,
     kind: kindOf(path),
-    role: roleCount > 0 ? roles[roleCount - 1] : "exclusion",
+    role: roleCount > 0 ? state.roles[roleCount - 1] : "exclusion",
   }));
   if (o.help) return { ok: true, options: o };
-  if (o.inputs.length === 0)
-    return { ok: false, error: "no input file (a .axband.json project, an exported .svg, or CSV files)" };
-  if (!o.out && !o.png && !o.modelsCsv && !o.overlap && !o.overlapIntervals)
-    return {
-      ok: false,
-      error: "nothing to write: give -o FILE.svg, --png FILE.png, --models-csv FILE.csv or --overlap FILE",
-    };
-  const projects = o.inputs.filter((f) => f.kind !== "csv");
-  // A trailing --role would otherwise be dropped without a word (it never reaches back to earlier files).
   const lastFileRoleCount = pending.length > 0 ? pending[pending.length - 1].roleCount : 0;
-  if (projects.length === 0 && roles.length > lastFileRoleCount)
-    return {
-      ok: false,
-      error: `--role ${roles[roles.length - 1]} is followed by no CSV file: a --role applies to the files after it`,
-    };
-  if (projects.length > 0 && o.inputs.length > 1) {
-    return {
-      ok: false,
-      error: "give either one project (.json or exported .svg) or CSV files, not both or several projects",
-    };
-  }
-  if (projects.length > 0 && (o.models.length > 0 || roles.length > 0)) {
-    return {
-      ok: false,
-      error: "--model and --role apply to CSV input only; edit the project in the app to change its models",
-    };
-  }
-  if (o.scale !== undefined && argv.some((a) => a === "--dpi" || a.startsWith("--dpi=")))
-    return { ok: false, error: "give --dpi or --scale, not both" };
-  if ((o.widthMm !== undefined || o.heightMm !== undefined) && o.preset !== "custom") {
-    return { ok: false, error: "--width-mm/--height-mm need --preset custom" };
-  }
-  const outs = [o.out, o.png, o.modelsCsv, o.overlap, o.overlapIntervals].filter((p): p is string => !!p);
-  if (new Set(outs).size !== outs.length) return { ok: false, error: "two outputs have the same path" };
-  if (outs.some((p) => o.inputs.some((f) => f.path === p)))
-    return { ok: false, error: "an output path is also an input file" };
-  return { ok: true, options: o };
+  const error = conflicts(o, argv, state.roles, lastFileRoleCount);
+  return error ? { ok: false, error } : { ok: true, options: o };
 }

@@ -154,7 +154,7 @@ function loadCsv(inputs: CliInput[], opts: CliOptions, preParsed: PreParsed): Lo
   return { project: { ...project, curves, models, figure }, notes };
 }
 
-/** Applies the size, range, title, font and exclusion options to a loaded project (a copy). */
+/** Applies the size, range, title, font, legend, axis and exclusion options to a loaded project (a copy). */
 export function applyFigureOptions(project: Project, opts: CliOptions): Project {
   const f = { ...project.figure };
   if (opts.preset) f.preset = opts.preset;
@@ -164,6 +164,8 @@ export function applyFigureOptions(project: Project, opts: CliOptions): Project 
   if (opts.gRange) f.yRange = opts.gRange;
   if (opts.title !== undefined) f.title = opts.title;
   if (opts.font) f.font = opts.font;
+  if (opts.legend) f.legend = opts.legend;
+  if (opts.legendScale !== undefined) f.legendScale = opts.legendScale;
   const mark = opts.exclusions;
   const curves = mark
     ? project.curves.map((c) => (c.role === "exclusion" ? { ...c, exclusionMark: mark } : c))

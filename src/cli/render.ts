@@ -18,6 +18,8 @@ import {
   rasterResolution,
 } from "../formats/figure-file";
 import { presetOf } from "../plot/layout";
+import { shortenedLegendNote } from "../plot/legend";
+import { buildScene } from "../plot/scene";
 import { modelsToCsv } from "../formats/model-csv";
 import { AXBAND_VERSION } from "./version";
 import type { Project } from "../project/types";
@@ -233,7 +235,8 @@ async function run(argv: readonly string[], io: Io, preParsed: PreParsed): Promi
     checkDistinctPaths(opts);
     const loaded = await loadAnyProject(opts, preParsed);
     const { project, notes: fitNotes } = fitFigure(loaded.project);
-    for (const n of [...loaded.notes, ...fitNotes]) io.err(`note: ${n}`);
+    const legendNote = shortenedLegendNote(buildScene(project));
+    for (const n of [...loaded.notes, ...fitNotes, ...(legendNote ? [legendNote] : [])]) io.err(`note: ${n}`);
     const list = await outputs(project, opts, io);
     const files = list.map((o) => o.file);
     try {

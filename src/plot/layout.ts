@@ -1,7 +1,7 @@
 // Figure sizes and layout: the size presets with their physical sizes, font sizes per preset, and the
 // margins around the plot area computed from font sizes and estimated label widths (no DOM needed).
 import type { Figure, LegendPlace, SizePreset, TickSides } from "../project/types";
-import { CAP_HEIGHT, SUP_RAISE, SHIFT_SCALE } from "./text";
+import { CAP_HEIGHT, MIN_TEXT_PX, SUP_RAISE, SHIFT_SCALE } from "./text";
 import { CUSTOM_MM_LIMITS } from "../project/limits";
 import { TITLE_LINE_SPACING } from "./title";
 
@@ -85,16 +85,21 @@ export interface Fonts {
 }
 
 /**
- * Font sizes from the base size in pt (pt → px × 96/72) and the preset's font scale.
+ * Font sizes from the base size in pt (pt → px × 96/72) and the preset's font scale. The legend text is 0.88
+ * of the tick labels times `legendScale` (0.7–1.5), never scaled below 6 pt (MIN_TEXT_PX) unless its
+ * default size already is.
  * @param fontPt Figure.fontPt. @default 12
+ * @param legendScale Figure.legendScale. @default 1
  */
-export function fontsFor(fontPt: number, fontScale: number): Fonts {
+export function fontsFor(fontPt: number, fontScale: number, legendScale = 1): Fonts {
   const pt = Number.isFinite(fontPt) && fontPt > 0 ? Math.min(72, Math.max(4, fontPt)) : 12;
   const base = (pt * fontScale * PX_PER_IN) / 72;
+  const scale = Number.isFinite(legendScale) ? Math.min(1.5, Math.max(0.7, legendScale)) : 1;
+  const legendDefault = base * 0.88;
   return {
     tickPx: base,
     titlePx: base * 1.08,
-    legendPx: base * 0.88,
+    legendPx: Math.max(legendDefault * scale, Math.min(legendDefault, MIN_TEXT_PX)),
     headingPx: base * 1.2,
     axisLinePx: Math.max(0.6, base / 16),
     dataLinePx: Math.max(0.9, base / 9),
@@ -175,9 +180,24 @@ export function cornerLegendOrigin(
   };
 }
 
-/** Free space kept between the figure's edges and anything drawn. */
-export function edgePadPx(fonts: Pick<Fonts, "tickPx">): number {
+/** Space between the figure's edge and anything drawn, px. */
+export function figurePadPx(fonts: Pick<Fonts, "tickPx">): number {
   return Math.max(2, fonts.tickPx * 0.5);
+}
+
+/** Gap between the plot's labels and a legend beside, below or above it, px. */
+export function legendGapPx(fonts: Pick<Fonts, "tickPx">): number {
+  return fonts.tickPx * 0.6;
+}
+
+/** Gap between the plot's frame and a legend outside right: clear of the x label sticking out right of the frame. */
+function outsideLegendGapPx(fonts: Pick<Fonts, "tickPx">, xLabelHalfWidthPx: number): number {
+  return Math.max(figurePadPx(fonts), xLabelHalfWidthPx) + fonts.tickPx * 0.4;
+}
+
+/** Horizontal room a legend outside right needs besides its own width, px (gap to the plot, pad to the edge). */
+export function outsideLegendExtraPx(fonts: Pick<Fonts, "tickPx">, xLabelHalfWidthPx: number): number {
+  return outsideLegendGapPx(fonts, xLabelHalfWidthPx) + figurePadPx(fonts);
 }
 
 /** Height above the baseline of a label with a superscript ("10⁻⁶"), as a fraction of its size. */
@@ -185,15 +205,39 @@ const SUP_TOP = SUP_RAISE + SHIFT_SCALE * CAP_HEIGHT + 0.04;
 /** Depth below the baseline of brackets and subscripts. */
 const DESCENT = 0.24;
 
+/** Top-left corner of the legend box for a fixed place; (0, 0) for "auto", which the scene builder resolves. */
+function legendOrigin(input: LayoutInput, plot: PlotRect, belowY: number, aboveY: number): { x: number; y: number } {
+  const { legend: lg, fonts: f, widthPx: W } = input;
+  const pad = figurePadPx(f);
+  switch (lg.place) {
+    case "top-left":
+    case "top-right":
+    case "bottom-left":
+    case "bottom-right":
+      return cornerLegendOrigin(plot, lg.place, lg.widthPx, lg.heightPx, f);
+    case "outside-right":
+      return { x: plot.x + plot.w + outsideLegendGapPx(f, input.xLabelHalfWidthPx), y: plot.y };
+    case "below":
+    case "above":
+      // Centred under (over) the plot area, moved in where it would cross the figure's edge.
+      return {
+        x: Math.max(pad, Math.min(W - pad - lg.widthPx, plot.x + (plot.w - lg.widthPx) / 2)),
+        y: lg.place === "below" ? belowY : aboveY,
+      };
+    default:
+      return { x: 0, y: 0 };
+  }
+}
+
 /**
- * Margins and positions for a figure. Vertical margins first (they need no label widths), then the y label
- * width for that plot height, then the horizontal margins (legend outside right shrinks the plot area).
- * An "auto" legend is laid out like an inner corner (no margin) and left at (0, 0): the scene builder picks
- * its place.
+ * Margins and positions for a figure. Vertical margins first (they need no label widths; a legend below or
+ * above takes its height from the plot), then the y label width for that plot height, then the horizontal
+ * margins (legend outside right shrinks the plot area). An "auto" legend is laid out like an inner corner (no
+ * margin) and left at (0, 0): the scene builder picks its place.
  */
 export function computeLayout(input: LayoutInput): Layout {
   const { widthPx: W, heightPx: H, fonts: f } = input;
-  const pad = edgePadPx(f);
+  const pad = figurePadPx(f);
   const gap = f.tickPx * 0.4;
   const tickMajorPx = f.tickPx * 0.45;
   const tickMinorPx = f.tickPx * 0.25;
@@ -201,6 +245,8 @@ export function computeLayout(input: LayoutInput): Layout {
   // mirrored top and right ticks with "all".
   const all = input.ticks === "all";
   const tickOut = tickMajorPx;
+  const lg = input.legend;
+  const band = lg.widthPx > 0 && (lg.place === "below" || lg.place === "above");
 
   let top = pad;
   let headingBaseline = 0;
@@ -210,6 +256,10 @@ export function computeLayout(input: LayoutInput): Layout {
     const below = ((input.titleLines ?? 1) - 1) * hs * TITLE_LINE_SPACING;
     top = headingBaseline + below + hs * DESCENT + f.tickPx * 0.4;
   }
+  // A legend above sits between the title and the plot (its top axis included).
+  const aboveY = top;
+  if (band && lg.place === "above") top += lg.heightPx + legendGapPx(f);
+  const minTop = band && lg.place === "above" ? top : pad;
   let topTitleBaseline = 0;
   let topLabelBaseline = 0;
   if (input.hasTopAxis) {
@@ -218,40 +268,25 @@ export function computeLayout(input: LayoutInput): Layout {
     top = topLabelBaseline + gap + tickOut;
   } else {
     // Room for the top of the highest y label, which is centred on the frame's top edge.
-    top = Math.max(top + (all ? tickOut : 0), pad + f.tickPx * 0.6);
+    top = Math.max(top + (all ? tickOut : 0), minTop + f.tickPx * 0.6);
   }
   const xLabelOffset = gap + tickOut + f.tickPx * SUP_TOP;
   const xTitleOffset = xLabelOffset + f.tickPx * 0.25 + gap + f.titlePx * CAP_HEIGHT;
-  const bottom = xTitleOffset + f.titlePx * DESCENT + pad;
+  const belowOffset = xTitleOffset + f.titlePx * DESCENT + legendGapPx(f);
+  const bottom =
+    band && lg.place === "below" ? belowOffset + lg.heightPx + pad : xTitleOffset + f.titlePx * DESCENT + pad;
   const plotH = Math.max(20, H - top - bottom);
 
   const yLabelW = input.yLabelWidthPx(plotH);
   const yTitleDepth = f.titlePx * DESCENT;
   const left = pad + f.titlePx * SUP_TOP + yTitleDepth + gap * 1.6 + yLabelW + gap + tickOut;
   let right = Math.max(pad + (all ? tickOut : 0), input.xLabelHalfWidthPx + 2);
-  const lg = input.legend;
   const outside = lg.place === "outside-right" && lg.widthPx > 0;
-  if (outside) right = Math.max(right, lg.widthPx + pad * 2 + gap);
+  if (outside) right = Math.max(right, lg.widthPx + outsideLegendExtraPx(f, input.xLabelHalfWidthPx));
   const plotW = Math.max(20, W - left - right);
   const plot: PlotRect = { x: left, y: top, w: plotW, h: plotH };
 
-  let legendX = 0;
-  let legendY = 0;
-  switch (lg.place) {
-    case "top-left":
-    case "top-right":
-    case "bottom-left":
-    case "bottom-right":
-      ({ x: legendX, y: legendY } = cornerLegendOrigin(plot, lg.place, lg.widthPx, lg.heightPx, f));
-      break;
-    case "outside-right":
-      legendX = plot.x + plot.w + pad + gap;
-      legendY = plot.y;
-      break;
-    default:
-      // "auto" is resolved to a corner (or outside right) by the scene builder before the final layout.
-      break;
-  }
+  const { x: legendX, y: legendY } = legendOrigin(input, plot, plot.y + plot.h + belowOffset, aboveY);
   return {
     plot,
     figureWidthPx: W,

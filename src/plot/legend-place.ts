@@ -1,5 +1,5 @@
-// Automatic legend placement: the inner corner where the legend box covers the least drawn content, read
-// from the scene's curves and models, given as vertices, on a coarse occupancy grid over the plot area (our own rule).
+// Automatic legend placement: a free inner corner (the legend box over no drawn content), read from the scene's
+// curves and models, given as vertices, on a coarse occupancy grid over the plot area; else outside right or below (our own rule).
 import type { Curve } from "../project/types";
 import type { LegendCorner, PlotRect } from "./layout";
 import { drawsSorted, preparedOf } from "./curves";
@@ -10,18 +10,20 @@ import { coveredFraction, occupancyGrid, OCCUPANCY_CELL_PX, type Shape } from ".
 export const LEGEND_CORNERS: readonly LegendCorner[] = ["top-right", "top-left", "bottom-right", "bottom-left"];
 
 /**
- * Above this fraction of the legend box covered in every corner, the corners count as crowded and the
- * legend goes outside right when the figure leaves room for it (our own threshold; keeping a legend off the
- * data is common practice).
+ * Largest fraction of the legend box that may lie over drawn content for an inner corner to count as free: a
+ * line grazing the box's edge cells (one 4 px cell row of a 30-row box is 3 %), never a curve through it
+ * (our own tolerance; keeping the legend off the data is common practice). Above it in every corner, the
+ * legend goes outside right or below the plot.
  */
-export const CROWDED_COVERAGE = 0.35;
+export const LEGEND_MAX_COVERAGE = 0.02;
 
 /**
- * Outside right is room enough when the plot area keeps at least this fraction of the figure width with the
- * legend beside it (and no legend label is cut): a slide usually has it, a single column only for a narrow
- * legend.
+ * An automatic legend goes outside right only when the plot area keeps at least this fraction of the figure
+ * width beside it and no entry had to be cut there: a slide usually has it, a single column only for a
+ * narrow legend; otherwise it goes below the plot. (0.58 rather than 0.6 since outward ticks widened the left
+ * margin by a tick length: a slide with a short legend still takes it.)
  */
-export const OUTSIDE_MIN_PLOT_FRACTION = 0.6;
+export const OUTSIDE_MIN_PLOT_FRACTION = 0.58;
 
 /**
  * Thinning resolution (columns per scene px) of the curve paths the placement reads. Fixed, so the screen
@@ -77,12 +79,15 @@ export function placementCurve<C extends Pick<Curve, "role" | "keepOrder" | "mas
   return { ...curve, massEv: arrays.massEv, gInvGeV: arrays.gInvGeV };
 }
 
+/** Where an automatic legend can end up. */
+export type AutoLegendPlace = LegendCorner | "outside-right" | "below";
+
 /** The outcome of automatic placement, with each corner's coverage for tests and tooltips. */
 export interface LegendChoice {
-  place: LegendCorner | "outside-right";
+  place: AutoLegendPlace;
   /** Fraction of the legend box over drawn content in each corner. */
   coverage: Record<LegendCorner, number>;
-  /** Every corner covers more than {@link CROWDED_COVERAGE}. */
+  /** Every corner covers more than {@link LEGEND_MAX_COVERAGE}. */
   crowded: boolean;
 }
 
@@ -97,14 +102,14 @@ export interface LegendPlaceInput {
   outsideFits: () => boolean;
   /** @default OCCUPANCY_CELL_PX */
   cellPx?: number;
-  /** @default CROWDED_COVERAGE */
-  crowdedCoverage?: number;
+  /** @default LEGEND_MAX_COVERAGE */
+  maxCoverage?: number;
 }
 
 /**
  * Where an "auto" legend goes: the inner corner whose box covers the least drawn content (ties in the order
- * of {@link LEGEND_CORNERS}); when every corner covers more than `crowdedCoverage` of the box, outside right
- * if the figure leaves room, else still the least covered corner. A pure function of its input.
+ * of {@link LEGEND_CORNERS}) when that is at most `maxCoverage` of the box; otherwise outside right if the
+ * figure leaves room, else below the plot, so the legend never hides data. A pure function of its input.
  */
 export function pickLegendPlace(input: LegendPlaceInput): LegendChoice {
   const grid = occupancyGrid(input.shapes, input.plot, input.cellPx ?? OCCUPANCY_CELL_PX);
@@ -115,6 +120,6 @@ export function pickLegendPlace(input: LegendPlaceInput): LegendChoice {
     // Fractions of equal areas may differ in the last bit (1 vs 0.9999999999999998): a tie keeps the earlier corner.
     if (coverage[corner] < coverage[best] - 1e-9) best = corner;
   }
-  const crowded = coverage[best] > (input.crowdedCoverage ?? CROWDED_COVERAGE);
-  return { place: crowded && input.outsideFits() ? "outside-right" : best, coverage, crowded };
+  const crowded = coverage[best] > (input.maxCoverage ?? LEGEND_MAX_COVERAGE);
+  return { place: !crowded ? best : input.outsideFits() ? "outside-right" : "below", coverage, crowded };
 }

@@ -101,8 +101,15 @@ export interface Scene {
   scales: ScaleConfig;
   fontFamily: string;
   layers: SceneLayer[];
-  /** Where an "auto" legend was put (a corner or outside right); absent for a fixed place or no legend. */
-  autoLegendPlace?: "top-left" | "top-right" | "bottom-left" | "bottom-right" | "outside-right";
+  /** Where an "auto" legend was put (a corner, outside right or below); absent for a fixed place or no legend. */
+  autoLegendPlace?: "top-left" | "top-right" | "bottom-left" | "bottom-right" | "outside-right" | "below";
+  /**
+   * Full texts of the legend entries that had to be cut with "…" to fit (a word wider than the legend's room,
+   * or more lines than the figure has height for); absent when every entry is shown in full.
+   */
+  shortenedLegendEntries?: string[];
+  /** The legend's text size in pt when it had to be set smaller than chosen to fit (below or above the plot). */
+  legendReducedToPt?: number;
   /** What the figure changed to fit (a long title wrapped or shrunk): the app shows them, the CLI prints them. */
   notes?: string[];
 }

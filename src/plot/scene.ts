@@ -9,21 +9,23 @@ import { dashFor, plainOrScientificRuns, powerOfTenRuns, r2, safeColour, unitInt
 import {
   computeLayout,
   cornerLegendOrigin,
-  edgePadPx,
+  figurePadPx,
   fontsFor,
   presetOf,
   PX_PER_IN,
   type Fonts,
   type Layout,
   type LegendCorner,
+  type PlotRect,
 } from "./layout";
-import { legendLabelText, legendNodes, measureLegend, modelKindNote, type LegendBox, type LegendEntry } from "./legend";
+import { legendNodes, modelKindNote, type LegendBox, type LegendEntry } from "./legend";
+import { fitLegend, outsideSuitsAuto } from "./legend-fit";
 import {
   LEGEND_CORNERS,
-  OUTSIDE_MIN_PLOT_FRACTION,
   PLACEMENT_RESOLUTION,
   pickLegendPlace,
   placementCurve,
+  type AutoLegendPlace,
 } from "./legend-place";
 import { modelShape, shapeCancels, shapeNormalizedRange } from "./model-shape";
 import type { Shape } from "./occupancy";
@@ -79,7 +81,7 @@ export interface BuildSceneOpts {
    * figure holds the legend still while the user zooms or pans, and places it afresh once the view rests;
    * exports never pass it. Ignored for a fixed place.
    */
-  holdLegend?: LegendCorner | "outside-right";
+  holdLegend?: AutoLegendPlace;
 }
 
 function modelNotes(m: Model, c: ReturnType<typeof constantsOf>): string[] {
@@ -154,7 +156,6 @@ interface AutoLegendFrame {
   box: LegendBox;
   /** The layout with the legend inside (every inner corner gives the same plot area). */
   layout: Layout;
-  outsideFits: () => boolean;
 }
 
 /**
@@ -163,7 +164,7 @@ interface AutoLegendFrame {
  * corner the export picks); models come as vertices and do not depend on resolution. The highlight is left out (the
  * legend must not move when a table row is hovered).
  */
-function autoLegendPlace(project: Project, f: AutoLegendFrame): LegendCorner | "outside-right" {
+function autoLegendPlace(project: Project, f: AutoLegendFrame, outsideFits: () => boolean): AutoLegendPlace {
   const plot = { x: r2(f.layout.plot.x), y: r2(f.layout.plot.y), w: r2(f.layout.plot.w), h: r2(f.layout.plot.h) };
   const map = logAffine(f.scales, plot);
   const slope = viewTransform(f.view, f.constants).slope;
@@ -201,48 +202,37 @@ function autoLegendPlace(project: Project, f: AutoLegendFrame): LegendCorner | "
     const o = cornerLegendOrigin(f.layout.plot, corner, f.box.widthPx, f.box.heightPx, f.fonts);
     boxes[corner] = { x: o.x, y: o.y, w: f.box.widthPx, h: f.box.heightPx };
   }
-  return pickLegendPlace({ shapes, plot, boxes, outsideFits: f.outsideFits }).place;
+  return pickLegendPlace({ shapes, plot, boxes, outsideFits }).place;
 }
 
-function physicalOf(px: number): string {
-  return `${Math.round((px / PX_PER_IN) * 254) / 100}cm`;
+/** What laying out the figure around its legend needs. */
+interface LayoutFrame {
+  widthPx: number;
+  heightPx: number;
+  fonts: Fonts;
+  constants: ReturnType<typeof constantsOf>;
+  scales: ScaleConfig;
+  topAxis: "none" | "fa" | "frequency";
+  entries: LegendEntry[];
+  holdLegend: AutoLegendPlace | undefined;
 }
 
 /**
- * The scene of a project's figure. Layers, bottom to top: background, grid, curves (all curve fills in
- * project order, then all curve lines in project order, so no fill hides a line), models (fills, then
- * lines), highlight, axes, legend. Curves, models, highlight and grid are clipped to the plot area.
- * An "auto" legend goes to the inner corner where it covers the least of the curves and models, or outside
- * right when every corner is crowded and the figure has room (legend-place.ts); the choice depends on the
- * project and the scene size only, never on `resolution` or `highlight`, so screen and export agree.
- * @param project the whole project (figure settings, models, curves, physics constants).
- * @param opts size, resolution, highlight; see {@link BuildSceneOpts}.
+ * The figure's layout with its legend fitted in (legend-fit.ts): margins from the tick labels and the legend's
+ * place; an "auto" legend is placed where it covers no data (legend-place.ts) unless a place is held.
  */
-export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
+function layoutWithLegend(project: Project, f: LayoutFrame) {
+  const { widthPx, heightPx, fonts, entries, scales, topAxis, constants: c } = f;
+  const [yDomain, view] = [scales.yDomain, scales.yView ?? "coupling"];
   const fig = project.figure;
-  const c = constantsOf(project.physics);
-  const view: YView = fig.yView === "normalized" || fig.yView === "g-gamma" ? fig.yView : "coupling";
-  const preset = presetOf(fig);
-  const widthPx = opts.widthPx && opts.widthPx > 0 ? opts.widthPx : preset.widthPx;
-  const heightPx = opts.heightPx && opts.heightPx > 0 ? opts.heightPx : preset.heightPx;
-  const fonts = fontsFor(fig.fontPt, preset.fontScale);
-  // An unusable range falls back to the default figure's.
-  const massDomainEv = sanitizeDomain(fig.massRangeEv, DEFAULT_MASS_RANGE_EV);
-  const yDomain = sanitizeDomain(fig.yRange, defaultYRange(view));
-  const topAxis = fig.topAxis === "fa" || fig.topAxis === "frequency" ? fig.topAxis : "none";
   const legendSetting = fig.legend ?? "top-right";
-
-  const entries = legendSetting === "hidden" ? [] : legendEntries(project, fonts, c);
-  const measureFor = (place: LegendPlace) =>
-    measureLegend(entries, fonts.legendPx, place === "outside-right" ? widthPx * 0.3 : widthPx * 0.5);
-
   const ySpan = Math.log10(yDomain[1] / yDomain[0]);
   // Right margin: half of a wide decade label ("10⁻¹⁰"), fixed for the font size so the plot area does not
   // jump while zooming; a label that would still cross the figure edge is left out (axesNodes).
   const xHalf = runsWidthPx(powerOfTenRuns(-10), fonts.tickPx) / 2;
   const titleText = fig.title?.trim() ?? "";
   let title: TitleFit | null = titleText ? { lines: [markupRuns(titleText)], sizePx: fonts.headingPx } : null;
-  const layoutFor = (place: LegendPlace, box: LegendBox) =>
+  const layoutFor = (place: LegendPlace, box: { widthPx: number; heightPx: number }) =>
     computeLayout({
       widthPx,
       heightPx,
@@ -260,55 +250,32 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
       xLabelHalfWidthPx: xHalf,
       legend: { place, widthPx: box.widthPx, heightPx: box.heightPx },
     });
-  const scales: ScaleConfig = { massDomainEv, yDomain, yView: view };
-  let legendPlace: LegendPlace = legendSetting;
-  const legendBox = measureFor(legendPlace);
-  const pad = edgePadPx(fonts);
-  if (title) {
-    // The title is centred over the plot: it must fit both ways from the plot's centre (a first layout says where).
-    const p0 = layoutFor(legendPlace, legendBox).plot;
-    const cx = p0.x + p0.w / 2;
-    title = fitTitle(title.lines[0], fonts.headingPx, 2 * Math.min(cx - pad, widthPx - pad - cx));
-  }
-  let layout: Layout | null = null;
-  let autoPlace: LegendCorner | "outside-right" | undefined;
-  if (legendPlace === "auto") {
-    // Outside right only when no label is cut there and the plot keeps most of the width.
-    const outsideFits = () => {
-      const ob = measureFor("outside-right");
-      if (ob.labels.some((l, i) => legendLabelText(l) !== legendLabelText(markupRuns(entries[i].text)))) return false;
-      const lo = layoutFor("outside-right", ob);
-      return lo.plot.w >= OUTSIDE_MIN_PLOT_FRACTION * widthPx && ob.heightPx <= lo.plot.h;
-    };
-    const inside = layoutFor("auto", legendBox);
-    legendPlace = !entries.length
-      ? LEGEND_CORNERS[0]
-      : (opts.holdLegend ??
-        autoLegendPlace(project, { constants: c, view, scales, fonts, box: legendBox, layout: inside, outsideFits }));
-    autoPlace = legendPlace;
-    // Outside right keeps the box: outsideFits found no label cut at the narrower limit, so none is cut at
-    // either. An inner corner leaves the margins as they are: only the legend's origin changes.
-    if (legendPlace !== "outside-right") {
-      const at = cornerLegendOrigin(inside.plot, legendPlace, legendBox.widthPx, legendBox.heightPx, fonts);
-      layout = { ...inside, legendX: at.x, legendY: at.y };
-    }
-  }
-  layout ??= layoutFor(legendPlace, legendBox);
-  const plot = { x: r2(layout.plot.x), y: r2(layout.plot.y), w: r2(layout.plot.w), h: r2(layout.plot.h) };
-  const map = logAffine(scales, plot);
-  const frame: AxesFrame = {
-    map,
-    plot,
-    massDomainEv,
-    yDomain,
-    topAxis,
-    constants: c,
-    fonts,
-    yView: view,
-    ...axisStyle(fig),
-  };
-  const ticks = axisTicks(frame);
+  // The title is centred over the plot and moved in where that would put it off the figure (titleNodes), so it
+  // has the figure's width less the pads.
+  if (title) title = fitTitle(title.lines[0], fonts.headingPx, widthPx - 2 * figurePadPx(fonts));
+  const fitInput = { entries, widthPx, heightPx, fonts, xLabelHalfWidthPx: xHalf, layoutFor };
+  const fitted = fitLegend(legendSetting, fitInput, (inside, box) => {
+    const frame = { constants: c, view, scales, fonts, box, layout: inside };
+    return f.holdLegend ?? autoLegendPlace(project, frame, () => outsideSuitsAuto(fitInput));
+  });
+  return { ...fitted, title };
+}
 
+/** What drawing the curves and models needs. */
+interface DataFrame {
+  constants: ReturnType<typeof constantsOf>;
+  view: YView;
+  map: ReturnType<typeof logAffine>;
+  massDomainEv: [number, number];
+  plot: PlotRect;
+  fonts: Fonts;
+  resolution: number;
+  thin: boolean | undefined;
+  envelope: boolean | undefined;
+}
+
+/** The curves' and models' fills and lines (each in project order), and each one's lines by id for halos. */
+function dataNodes(project: Project, d: DataFrame) {
   // Curves: fills first, then lines, each in project order.
   const curveFills: SceneNode[] = [];
   const curveHatches: SceneNode[] = [];
@@ -319,14 +286,14 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
     const g = curveGeometry(
       cv,
       {
-        constants: c,
-        view,
-        map,
-        plot,
-        lineWidthPx: fonts.dataLinePx,
-        resolution: opts.resolution ?? 1,
-        thin: opts.thin,
-        envelope: opts.envelope,
+        constants: d.constants,
+        view: d.view,
+        map: d.map,
+        plot: d.plot,
+        lineWidthPx: d.fonts.dataLinePx,
+        resolution: d.resolution,
+        thin: d.thin,
+        envelope: d.envelope,
       },
       `curve-${i + 1}`,
     );
@@ -340,19 +307,23 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   const modelLineById = new Map<string, PathNode[]>();
   project.models.forEach((m, i) => {
     if (!m.visible) return;
-    const g = modelGeometry(
-      m,
-      { constants: c, view, map, massDomainEv, plot, lineWidthPx: fonts.dataLinePx },
-      `model-${i + 1}`,
-    );
+    const g = modelGeometry(m, { ...d, lineWidthPx: d.fonts.dataLinePx }, `model-${i + 1}`);
     if (!g) return;
     modelFills.push(...g.fills);
     modelLines.push(...g.lines);
     modelLineById.set(m.id, g.lines);
   });
+  return { curveFills, curveHatches, curveLines, modelFills, modelLines, curveLineById, modelLineById };
+}
 
+/** Marks of a highlighted mass interval (a row of the overlap table) and halos on its model's or curve's lines. */
+function highlightNodes(
+  hl: BuildSceneOpts["highlight"],
+  { map, plot, fonts }: { map: ReturnType<typeof logAffine>; plot: PlotRect; fonts: Fonts },
+  modelLineById: Map<string, PathNode[]>,
+  curveLineById: Map<string, PathNode[]>,
+): SceneNode[] {
   const highlight: SceneNode[] = [];
-  const hl = opts.highlight;
   if (hl && hl.massMinEv > 0 && hl.massMaxEv > 0) {
     const xa = map.ax + map.bx * Math.log10(Math.min(hl.massMinEv, hl.massMaxEv));
     const xb = map.ax + map.bx * Math.log10(Math.max(hl.massMinEv, hl.massMaxEv));
@@ -403,28 +374,117 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
       }),
     );
   }
+  return highlight;
+}
+
+/**
+ * The figure title's lines (fitted by title.ts), centred over the plot area; moved in only where the plot's
+ * centre would put them off the figure.
+ */
+function titleNodes(title: TitleFit | null, plot: PlotRect, layout: Layout, widthPx: number, fonts: Fonts) {
+  if (!title) return [];
+  const pad = figurePadPx(fonts);
+  const half = Math.max(...title.lines.map((l) => runsWidthPx(l, title.sizePx))) / 2;
+  const x = Math.min(Math.max(plot.x + plot.w / 2, pad + half), widthPx - pad - half);
+  return title.lines.map((runs, k): SceneNode => ({
+    kind: "text",
+    id: k === 0 ? "figure-title" : `figure-title-${k + 1}`,
+    x: r2(x),
+    y: r2(layout.headingBaseline + k * title.sizePx * TITLE_LINE_SPACING),
+    runs,
+    sizePx: r2(title.sizePx),
+    anchor: "middle",
+    baseline: "alphabetic",
+    fill: "#1a1a1a",
+    weight: "bold",
+  }));
+}
+
+/** What the scene says about its legend: where "auto" put it, entries shortened, text set smaller. */
+function legendReport(entries: LegendEntry[], box: LegendBox, fonts: Fonts, autoPlace: AutoLegendPlace | undefined) {
+  const report: Pick<Scene, "autoLegendPlace" | "shortenedLegendEntries" | "legendReducedToPt"> = {};
+  if (autoPlace) report.autoLegendPlace = autoPlace;
+  if (box.shortened.length) report.shortenedLegendEntries = box.shortened.map((i) => entries[i].text);
+  if (entries.length && box.sizePx < fonts.legendPx - 1e-9)
+    report.legendReducedToPt = Math.round(((box.sizePx * 72) / PX_PER_IN) * 10) / 10;
+  return report;
+}
+
+function physicalOf(px: number): string {
+  return `${Math.round((px / PX_PER_IN) * 254) / 100}cm`;
+}
+
+/**
+ * The scene of a project's figure. Layers, bottom to top: background, grid, curves (all curve fills in
+ * project order, then all curve lines in project order, so no fill hides a line), models (fills, then
+ * lines), highlight, axes, legend. Curves, models, highlight and grid are clipped to the plot area.
+ * An "auto" legend goes to the inner corner where it covers the least of the curves and models, or outside
+ * right when every corner is crowded and the figure has room (legend-place.ts); the choice depends on the
+ * project and the scene size only, never on `resolution` or `highlight`, so screen and export agree.
+ * @param project the whole project (figure settings, models, curves, physics constants).
+ * @param opts size, resolution, highlight; see {@link BuildSceneOpts}.
+ */
+export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
+  const fig = project.figure;
+  const c = constantsOf(project.physics);
+  const view: YView = fig.yView === "normalized" || fig.yView === "g-gamma" ? fig.yView : "coupling";
+  const preset = presetOf(fig);
+  const widthPx = opts.widthPx && opts.widthPx > 0 ? opts.widthPx : preset.widthPx;
+  const heightPx = opts.heightPx && opts.heightPx > 0 ? opts.heightPx : preset.heightPx;
+  const fonts = fontsFor(fig.fontPt, preset.fontScale, fig.legendScale);
+  // An unusable range falls back to the default figure's.
+  const massDomainEv = sanitizeDomain(fig.massRangeEv, DEFAULT_MASS_RANGE_EV);
+  const yDomain = sanitizeDomain(fig.yRange, defaultYRange(view));
+  const topAxis = fig.topAxis === "fa" || fig.topAxis === "frequency" ? fig.topAxis : "none";
+  const legendSetting = fig.legend ?? "top-right";
+
+  const entries = legendSetting === "hidden" ? [] : legendEntries(project, fonts, c);
+
+  const scales: ScaleConfig = { massDomainEv, yDomain, yView: view };
+  const fitted = layoutWithLegend(project, {
+    widthPx,
+    heightPx,
+    fonts,
+    constants: c,
+    scales,
+    topAxis,
+    entries,
+    holdLegend: opts.holdLegend,
+  });
+  const { layout, box: legendBox, autoPlace, title } = fitted;
+  const plot = { x: r2(layout.plot.x), y: r2(layout.plot.y), w: r2(layout.plot.w), h: r2(layout.plot.h) };
+  const map = logAffine(scales, plot);
+  const frame: AxesFrame = {
+    map,
+    plot,
+    massDomainEv,
+    yDomain,
+    topAxis,
+    constants: c,
+    fonts,
+    yView: view,
+    ...axisStyle(fig),
+  };
+  const ticks = axisTicks(frame);
+
+  const { curveFills, curveHatches, curveLines, modelFills, modelLines, curveLineById, modelLineById } = dataNodes(
+    project,
+    {
+      constants: c,
+      view,
+      map,
+      massDomainEv,
+      plot,
+      fonts,
+      resolution: opts.resolution ?? 1,
+      thin: opts.thin,
+      envelope: opts.envelope,
+    },
+  );
+  const highlight = highlightNodes(opts.highlight, { map, plot, fonts }, modelLineById, curveLineById);
 
   const axes = axesNodes(frame, ticks, layout, yTitle(view));
-  if (title) {
-    const t = title;
-    // Over the plot's centre, moved in only where the final plot (another legend place) would push it off the figure.
-    const half = Math.max(...t.lines.map((l) => runsWidthPx(l, t.sizePx))) / 2;
-    const x = Math.min(Math.max(plot.x + plot.w / 2, pad + half), widthPx - pad - half);
-    t.lines.forEach((runs, k) =>
-      axes.push({
-        kind: "text",
-        id: k === 0 ? "figure-title" : `figure-title-${k + 1}`,
-        x: r2(x),
-        y: r2(layout.headingBaseline + k * t.sizePx * TITLE_LINE_SPACING),
-        runs,
-        sizePx: r2(t.sizePx),
-        anchor: "middle",
-        baseline: "alphabetic",
-        fill: "#1a1a1a",
-        weight: "bold",
-      }),
-    );
-  }
+  axes.push(...titleNodes(title, plot, layout, widthPx, fonts));
 
   const layers: SceneLayer[] = [
     {
@@ -440,7 +500,7 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
     {
       id: "legend",
       clip: false,
-      nodes: legendNodes(entries, legendBox, layout.legendX, layout.legendY, fonts.legendPx),
+      nodes: legendNodes(entries, legendBox, layout.legendX, layout.legendY),
       data: { testid: "legend" },
     },
   ];
@@ -452,7 +512,7 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
     fontFamily: FIGURE_FONT_CSS[fig.font] ?? FIGURE_FONT_CSS.sans,
     layers,
   };
-  if (autoPlace && entries.length) scene.autoLegendPlace = autoPlace;
+  Object.assign(scene, legendReport(entries, legendBox, fonts, autoPlace));
   if (title?.note) scene.notes = [title.note];
   if (opts.physical !== false) {
     const custom = opts.widthPx !== undefined || opts.heightPx !== undefined;

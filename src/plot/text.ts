@@ -58,6 +58,18 @@ export const SHIFT_SCALE = 0.7;
 export const SUP_RAISE = 0.42;
 /** Subscript baseline lowered by this fraction of the base size. */
 export const SUB_DROP = 0.2;
+/**
+ * Smallest size (px) a sub/superscript is set at: 6 pt at 96 px/in, the smallest lettering journals accept in
+ * printed artwork (common practice, e.g. the APS and Elsevier artwork guidelines, from memory). A base size
+ * below it is kept as it is.
+ */
+export const MIN_TEXT_PX = 8;
+
+/** Font size (px) of a sub/superscript on a base size: {@link SHIFT_SCALE} of it, but not under 6 pt. */
+export function shiftedSizePx(sizePx: number): number {
+  return Math.max(sizePx * SHIFT_SCALE, Math.min(sizePx, MIN_TEXT_PX));
+}
+
 /** Cap height of the sans-serif as a fraction of the font size (for "hanging" and "middle" placement). */
 export const CAP_HEIGHT = 0.72;
 
@@ -75,40 +87,73 @@ export function stringWidthPx(text: string, sizePx: number): number {
   return em * sizePx;
 }
 
-/** Estimated width in px of text runs (sub/superscripts at {@link SHIFT_SCALE}) at a base size in px. */
+/** Estimated width in px of text runs (sub/superscripts at {@link shiftedSizePx}) at a base size in px. */
 export function runsWidthPx(runs: readonly TextRun[], sizePx: number): number {
   let w = 0;
-  for (const r of runs) w += stringWidthPx(r.text, r.shift ? sizePx * SHIFT_SCALE : sizePx);
+  for (const r of runs) w += stringWidthPx(r.text, r.shift ? shiftedSizePx(sizePx) : sizePx);
   return w;
 }
 
-/** Plain text of runs (for data attributes, titles and tests). */
-export function runsText(runs: readonly TextRun[]): string {
-  return runs.map((r) => r.text).join("");
+/** "…" added to `text`, cut so both fit in `maxWidthPx` (at least one character is kept). */
+function shortened(text: string, sizePx: number, maxWidthPx: number): string {
+  const room = maxWidthPx - stringWidthPx("…", sizePx);
+  let kept = "";
+  let used = 0;
+  for (const ch of text) {
+    const w = stringWidthPx(ch, sizePx);
+    if (kept && used + w > room) break;
+    used += w;
+    kept += ch;
+  }
+  return kept.trimEnd() + "…";
 }
 
-/** Runs cut to fit a width in px, ending in "…" when cut. */
-export function truncateRuns(runs: readonly TextRun[], sizePx: number, maxWidthPx: number): TextRun[] {
-  if (runsWidthPx(runs, sizePx) <= maxWidthPx) return runs.slice();
-  const ellipsis = stringWidthPx("…", sizePx);
-  const out: TextRun[] = [];
-  let used = 0;
-  for (const r of runs) {
-    const size = r.shift ? sizePx * SHIFT_SCALE : sizePx;
-    let kept = "";
-    for (const ch of r.text) {
-      const w = stringWidthPx(ch, size);
-      if (used + w + ellipsis > maxWidthPx) {
-        if (kept) out.push({ ...r, text: kept });
-        out.push({ text: "…" });
-        return out;
-      }
-      used += w;
-      kept += ch;
+/** A text broken into lines, and whether something had to be cut to fit. */
+export interface WrappedText {
+  lines: string[];
+  /** A word wider than a line, or more lines than allowed: the text was cut with "…". */
+  shortened: boolean;
+}
+
+/**
+ * Plain text broken at spaces into lines of at most `maxWidthPx` (greedy, as a typesetter's first fit). An
+ * equals sign keeps its neighbours ("E/N = 8/3" never ends a line with "="). Only a single word wider than
+ * the line, or lines beyond `maxLines`, are cut with "…".
+ * @param maxLines @default Infinity
+ */
+export function wrapText(text: string, sizePx: number, maxWidthPx: number, maxLines = Infinity): WrappedText {
+  const words = text
+    .replace(/ = /g, "\u00a0=\u00a0")
+    .split(/ +/)
+    .filter((w) => w !== "");
+  const fits = (t: string) => stringWidthPx(t, sizePx) <= maxWidthPx;
+  const lines: string[] = [];
+  let cut = false;
+  let line = "";
+  for (const word of words) {
+    const joined = line ? `${line} ${word}` : word;
+    if (fits(joined)) {
+      line = joined;
+      continue;
     }
-    out.push({ ...r, text: kept });
+    if (line) lines.push(line);
+    line = word;
+    if (!fits(word)) {
+      line = shortened(word, sizePx, maxWidthPx);
+      cut = true;
+    }
   }
-  return out;
+  if (line || lines.length === 0) lines.push(line);
+  if (lines.length > maxLines) {
+    const kept = lines.slice(0, Math.max(1, maxLines));
+    kept[kept.length - 1] = shortened(kept[kept.length - 1] + " ", sizePx, maxWidthPx);
+    return { lines: kept.map(unbind), shortened: true };
+  }
+  return { lines: lines.map(unbind), shortened: cut };
+}
+
+function unbind(line: string): string {
+  return line.replace(/\u00a0/g, " ");
 }
 
 /** One run as drawn: a tspan with a baseline offset relative to the previous run and its own size. */
@@ -147,9 +192,38 @@ export function placeRuns(node: Pick<TextNode, "y" | "runs" | "sizePx" | "baseli
     runs.push({
       text: r.text,
       dyPx: dy,
-      sizePx: r.shift ? Math.round(s * SHIFT_SCALE * 100) / 100 : undefined,
+      sizePx: r.shift ? Math.round(shiftedSizePx(s) * 100) / 100 : undefined,
       italic: !!r.italic,
     });
   }
   return { baselineY: Math.round(baselineY * 100) / 100, runs };
+}
+
+/** Plain text of runs (for data attributes, titles and tests). */
+export function runsText(runs: readonly TextRun[]): string {
+  return runs.map((r) => r.text).join("");
+}
+
+/** Runs cut to fit a width in px, ending in "…" when cut. */
+export function truncateRuns(runs: readonly TextRun[], sizePx: number, maxWidthPx: number): TextRun[] {
+  if (runsWidthPx(runs, sizePx) <= maxWidthPx) return runs.slice();
+  const ellipsis = stringWidthPx("…", sizePx);
+  const out: TextRun[] = [];
+  let used = 0;
+  for (const r of runs) {
+    const size = r.shift ? shiftedSizePx(sizePx) : sizePx;
+    let kept = "";
+    for (const ch of r.text) {
+      const w = stringWidthPx(ch, size);
+      if (used + w + ellipsis > maxWidthPx) {
+        if (kept) out.push({ ...r, text: kept });
+        out.push({ text: "…" });
+        return out;
+      }
+      used += w;
+      kept += ch;
+    }
+    if (kept) out.push({ ...r, text: kept });
+  }
+  return out;
 }

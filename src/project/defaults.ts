@@ -131,6 +131,7 @@ export function defaultFigure(): Figure {
     topAxis: "fa",
     grid: true,
     legend: "auto",
+    legendScale: 1,
     fontPt: 12,
     font: "sans",
     title: "",

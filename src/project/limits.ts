@@ -23,3 +23,6 @@ export const PROJECT_LIMITS = {
  * (keeps a typo from making a 0 px or 10 m figure; 1000 mm at 300 dpi is 11,811 px, within what browsers draw).
  */
 export const CUSTOM_MM_LIMITS: readonly [number, number] = [20, 1000];
+
+/** Legend text size factor (Figure.legendScale). */
+export const LEGEND_SCALE_LIMITS: readonly [number, number] = [0.7, 1.5];

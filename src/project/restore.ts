@@ -13,7 +13,7 @@ import {
   newModel,
 } from "./defaults";
 import { uniqueId } from "./ids";
-import { CUSTOM_MM_LIMITS } from "./limits";
+import { CUSTOM_MM_LIMITS, LEGEND_SCALE_LIMITS } from "./limits";
 import { isPlainObject } from "./json";
 import { migrate } from "./migrate";
 import { settleModelKind } from "./model-kind";
@@ -359,6 +359,7 @@ function restoreFigure(raw: unknown, note: Note): Figure {
     topAxis: valid(topAxis, own(f, "topAxis"), note, "top axis") ?? d.topAxis,
     grid: bool(own(f, "grid"), note, "grid") ?? d.grid,
     legend: valid(legendPlace, own(f, "legend"), note, "legend") ?? d.legend,
+    legendScale: clamped(own(f, "legendScale"), ...LEGEND_SCALE_LIMITS, note, "legend text size") ?? d.legendScale,
     fontPt: clamped(own(f, "fontPt"), 4, 72, note, "font size") ?? d.fontPt,
     font: valid(figureFont, own(f, "font"), note, "figure font") ?? d.font,
     title: text(own(f, "title"), PROJECT_LIMITS.label, note, "title") ?? d.title,

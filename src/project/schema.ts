@@ -1,7 +1,7 @@
 // The project schema (zod): the strict form of the current version, and the field rules the restore step
 // (./restore.ts) reads untrusted input with.
 import { z } from "zod";
-import { CUSTOM_MM_LIMITS, PROJECT_LIMITS } from "./limits";
+import { CUSTOM_MM_LIMITS, LEGEND_SCALE_LIMITS, PROJECT_LIMITS } from "./limits";
 import { isRationalText, rationalValue } from "./rational-text";
 import { PROJECT_VERSION } from "./types";
 import { MIN_RANGE_DECADES, saneRange } from "./view-range";
@@ -29,6 +29,9 @@ export const legendPlace = z.enum([
   "bottom-left",
   "bottom-right",
   "outside-right",
+  // "below" and "above" joined without a bump in the same way as "auto".
+  "below",
+  "above",
   "hidden",
 ]);
 export const sizePreset = z.enum(["slide", "single-column", "double-column", "custom"]);
@@ -206,6 +209,7 @@ export const ProjectSchema = z.object({
     topAxis,
     grid: z.boolean(),
     legend: legendPlace,
+    legendScale: z.number().min(LEGEND_SCALE_LIMITS[0]).max(LEGEND_SCALE_LIMITS[1]),
     fontPt: z.number().min(4).max(72),
     font: figureFont,
     title: z.string().max(PROJECT_LIMITS.label),

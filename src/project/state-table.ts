@@ -85,6 +85,7 @@ export const FIGURE_STATE: { readonly [K in keyof Figure]-?: Persistence } = {
   topAxis: everywhere,
   grid: everywhere,
   legend: everywhere,
+  legendScale: everywhere,
   fontPt: everywhere,
   font: everywhere,
   title: everywhere,

@@ -10,9 +10,12 @@ export type LineStyle = "solid" | "dashed" | "dotted" | "dashdot";
 export type CurveRole = "exclusion" | "projection" | "region";
 /** How an exclusion curve marks its excluded side: short hatches along the edge, the translucent fill, or both. */
 export type ExclusionMark = "hatch" | "fill" | "hatch-fill";
-/** Where the legend goes; "auto" is the inner corner where it covers the least drawn content (src/plot/legend-place.ts). */
+/**
+ * Where the legend goes; "auto" is a free inner corner, else below or outside right (src/plot/legend-place.ts);
+ * "below" sits under the x-axis title, "above" between the figure title and the plot, both in columns.
+ */
 export type LegendPlace =
-  "auto" | "top-left" | "top-right" | "bottom-left" | "bottom-right" | "outside-right" | "hidden";
+  "auto" | "top-left" | "top-right" | "bottom-left" | "bottom-right" | "outside-right" | "below" | "above" | "hidden";
 export type SizePreset = "slide" | "single-column" | "double-column" | "custom";
 export type TopAxis = "none" | "fa" | "frequency";
 export type { AxisMassUnit };
@@ -136,6 +139,11 @@ export interface Figure {
   topAxis: TopAxis;
   grid: boolean;
   legend: LegendPlace;
+  /**
+   * Legend text size as a factor of its default (0.88 of the tick labels), 0.7–1.5; added without a bump:
+   * files and links without it read as 1, the size they were drawn with.
+   */
+  legendScale: number;
   /** Base font size in pt at the physical size. */
   fontPt: number;
   /** Added in version 1 without a bump: files and links without it read as "sans". */

@@ -107,6 +107,17 @@ describe("parseArgs", () => {
     expect(err(["a.csv", "-o", "x.svg", "--no-embed=1"])).toMatch(/no value/);
   });
 
+  it("reads --legend PLACE and --legend-scale K, refusing unknown places and sizes out of 0.7–1.5", () => {
+    const o = ok(["p.axband.json", "-o", "f.svg", "--legend", "below", "--legend-scale=0.85"]);
+    expect([o.legend, o.legendScale]).toEqual(["below", 0.85]);
+    for (const place of ["auto", "top-left", "outside-right", "above", "hidden"])
+      expect(ok(["p.axband.json", "-o", "f.svg", `--legend=${place}`]).legend).toBe(place);
+    expect(err(["p.axband.json", "-o", "f.svg", "--legend", "middle"])).toMatch(/--legend: expected one of .*below/);
+    expect(err(["p.axband.json", "-o", "f.svg", "--legend-scale", "2"])).toMatch(/--legend-scale: .*0\.7 to 1\.5/);
+    expect(USAGE).toMatch(/--legend PLACE/);
+    expect(USAGE).toMatch(/--legend-scale K/);
+  });
+
   it("accepts --help without inputs", () => {
     expect(ok(["--help"]).help).toBe(true);
   });

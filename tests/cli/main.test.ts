@@ -123,6 +123,28 @@ describe("main", () => {
     expect(overlap).not.toMatch(/E\/N = -/);
   });
 
+  it("--legend below puts the legend under the plot; an entry that must be shortened is named on stderr", async () => {
+    const dir = tempDir();
+    const p = projectIn(dir);
+    const out = join(dir, "f.svg");
+    const r = await run([p, "-o", out, "--preset", "single-column", "--legend", "below", "--legend-scale", "1.2"]);
+    expect(r.status).toBe(0);
+    const doc = parseXml(readFileSync(out, "utf8"));
+    const box = Array.from(doc.getElementsByTagName("rect")).find((e) => e.getAttribute("id")?.endsWith("legend-box"))!;
+    const clip = Array.from(doc.getElementsByTagName("rect")).find((e) => e.parentNode?.nodeName === "clipPath")!;
+    // Below: the box starts under the plot area's bottom edge.
+    expect(Number(box.getAttribute("y"))).toBeGreaterThan(
+      Number(clip.getAttribute("y")) + Number(clip.getAttribute("height")),
+    );
+    expect(r.err).not.toMatch(/shortened/);
+    // A label of one word wider than the legend's room cannot wrap: cut, and the user is told which one.
+    const long = smallProject({ model: "Supercalifragilisticexpialidocious-model-with-a-very-long-unbroken-name" });
+    writeFileSync(p, projectFileText(long));
+    const r2 = await run([p, "-o", out, "--preset", "single-column", "--legend", "outside-right"]);
+    expect(r2.status).toBe(0);
+    expect(r2.err).toMatch(/note: Legend: .*shortened to fit \(“Supercalifragilistic/);
+  });
+
   it("exits 2 without writing when an output directory does not exist", async () => {
     const dir = tempDir();
     const p = projectIn(dir);

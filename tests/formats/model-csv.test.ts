@@ -41,6 +41,7 @@ function project(models: Model[], massRangeEv: [number, number] = [1e-6, 1e-3]):
       topAxis: "none",
       grid: false,
       legend: "top-left",
+      legendScale: 1,
       fontPt: 8,
       font: "sans",
       title: "",

@@ -139,6 +139,7 @@ export function fixtureProject(): Project {
       topAxis: "fa",
       grid: true,
       legend: "bottom-right",
+      legendScale: 1,
       fontPt: 12,
       font: "sans",
       title: "",

@@ -7,7 +7,7 @@ import type { Curve, LegendPlace, Project, SizePreset } from "../../src/project/
 import { exportFigureSvg, exportScene, rasterResolution } from "../../src/formats/figure-file";
 import type { LegendCorner } from "../../src/plot/layout";
 import {
-  CROWDED_COVERAGE,
+  LEGEND_MAX_COVERAGE,
   LEGEND_CORNERS,
   OUTSIDE_MIN_PLOT_FRACTION,
   pickLegendPlace,
@@ -127,7 +127,7 @@ describe("automatic legend placement in the scene", () => {
     expect(placeOf(scene)).toBe("bottom-left");
   });
 
-  test("a model band counts as drawn content: a cancelling band fills the bottom right more than the bottom left", () => {
+  test("a model band counts as drawn content: a cancelling band covering both bottom corners sends the legend out of the plot", () => {
     const curves = [block("tr", [1e-4, M_HI], [1e-13, G_HI]), block("tl", [M_LO, 1e-5], [1e-13, G_HI])];
     // Without models both bottom corners are empty and the tie goes to bottom right.
     expect(placeOf(buildScene(project(curves)))).toBe("bottom-right");
@@ -136,14 +136,18 @@ describe("automatic legend placement in the scene", () => {
     const band = buildScene(
       project(curves, "slide", [model({ id: "b", label: "Band", eOverNMin: "1.8", eOverNMax: "2.1" })]),
     );
-    const cov = coverageOf(band);
+    const inside = buildScene({
+      ...project(curves, "slide", [model({ id: "b", label: "Band", eOverNMin: "1.8", eOverNMax: "2.1" })]),
+      figure: { ...project(curves).figure, legend: "bottom-left" },
+    });
+    const cov = coverageOf(inside);
     expect(cov["bottom-right"]).toBe(1);
-    expect(cov["bottom-left"]).toBeGreaterThan(0);
-    expect(cov["bottom-left"]).toBeLessThan(CROWDED_COVERAGE);
-    expect(placeOf(band)).toBe("bottom-left");
+    expect(cov["bottom-left"]).toBeGreaterThan(LEGEND_MAX_COVERAGE);
+    // No corner is free: the legend goes beside the plot (a slide has room), never over the band.
+    expect(placeOf(band)).toBe("outside-right");
   });
 
-  test("the least covered corner wins among partly covered ones", () => {
+  test("partly covered corners are not free: the legend leaves the plot rather than cover any of them", () => {
     // Blocks of different depth into each corner: the bottom right one is the shallowest.
     const curves = [
       block("tr", [3e-4, M_HI], [1e-11, G_HI]),
@@ -151,15 +155,15 @@ describe("automatic legend placement in the scene", () => {
       block("bl", [M_LO, 1e-6], [G_LO, 1e-15]),
       block("br", [3e-3, M_HI], [G_LO, 1e-16]),
     ];
-    const scene = buildScene(project(curves));
-    const cov = coverageOf(scene);
+    const inside = buildScene({ ...project(curves), figure: { ...project(curves).figure, legend: "bottom-right" } });
+    const cov = coverageOf(inside);
     const least = LEGEND_CORNERS.reduce((a, b) => (cov[b] < cov[a] ? b : a));
     expect(least).toBe("bottom-right");
-    expect(cov["bottom-right"]).toBeGreaterThan(0);
-    expect(placeOf(scene)).toBe("bottom-right");
+    expect(cov["bottom-right"]).toBeGreaterThan(LEGEND_MAX_COVERAGE);
+    expect(placeOf(buildScene(project(curves)))).toBe("outside-right");
   });
 
-  test("every corner crowded: outside right on a slide with short labels, the least covered corner on a single column", () => {
+  test("every corner crowded: outside right on a slide with short labels, below the plot on a single column", () => {
     const curves = [block("all", [M_LO, M_HI], [G_LO, G_HI], "A"), block("b", [1e-4, M_HI], [G_LO, G_HI], "B")];
     const slide = buildScene(project(curves));
     expect(placeOf(slide)).toBe("outside-right");
@@ -172,7 +176,8 @@ describe("automatic legend placement in the scene", () => {
     expect(slideRest).toEqual(
       buildScene({ ...project(curves), figure: { ...project(curves).figure, legend: "outside-right" } }),
     );
-    // The same content with the demo's seven long labels on the single-column preset (8.6 cm): no room outside.
+    // The same content with the demo's seven long labels on the single-column preset (8.6 cm): outside right
+    // would squeeze the plot or wrap every entry, so the legend goes below the plot.
     const demo = defaultProject();
     const crowded = {
       ...demo,
@@ -180,11 +185,11 @@ describe("automatic legend placement in the scene", () => {
       figure: { ...demo.figure, preset: "single-column" as const, legend: "auto" as const },
     };
     const column = buildScene(crowded);
-    const cov = coverageOf(column);
-    expect(Math.min(...Object.values(cov))).toBeGreaterThan(CROWDED_COVERAGE);
-    expect(placeOf(column)).not.toBe("outside-right");
-    // All four are fully covered here: the tie goes to the first corner.
-    expect(placeOf(column)).toBe(LEGEND_CORNERS[0]);
+    expect(column.autoLegendPlace).toBe("below");
+    const box = legendBox(column);
+    expect(box.y).toBeGreaterThan(column.plot.y + column.plot.h);
+    const { autoLegendPlace: _p, ...columnRest } = column;
+    expect(columnRest).toEqual(buildScene({ ...crowded, figure: { ...crowded.figure, legend: "below" } }));
   });
 
   test("an auto legend lands exactly where the chosen fixed corner would put it, and the rest of the figure is unchanged", () => {
@@ -306,7 +311,12 @@ describe("automatic legend placement in the scene", () => {
       for (const resolution of [0.25, 0.75, 1, 1.25, 2, 3, 6.25]) {
         const scene = buildScene(p, { resolution, physical: false });
         boxes.add(JSON.stringify(legendBox(scene)));
-        const cov = coverageOf(scene);
+        // The corners' coverage read from the scene's own paths, with the plot area of an inside legend.
+        const inCorner = buildScene(
+          { ...p, figure: { ...p.figure, legend: "top-right" } },
+          { resolution, physical: false },
+        );
+        const cov = coverageOf(inCorner);
         own.add(LEGEND_CORNERS.reduce((a, b) => (cov[b] < cov[a] ? b : a)));
       }
       expect(boxes.size, `seed ${seed}`).toBe(1);
@@ -424,7 +434,7 @@ describe("pickLegendPlace", () => {
     ).toBe("bottom-left");
   });
 
-  test("crowded above the threshold: outside right when it fits, else the least covered corner; room is asked only then", () => {
+  test("crowded above the tolerance: outside right when it fits, else below; room is asked only then", () => {
     const fits = vi.fn(() => true);
     // Everything filled except a 20 × 100 strip on the left: top-left and bottom-left are 16/60 uncovered.
     const most = [rect(20, 0, 180, 100)];
@@ -432,12 +442,15 @@ describe("pickLegendPlace", () => {
     expect(a.coverage["top-left"]).toBeCloseTo(44 / 60, 12);
     expect(a).toMatchObject({ place: "outside-right", crowded: true });
     const b = pickLegendPlace({ shapes: shapesOf(most), plot, boxes, outsideFits: () => false });
-    expect(b.place).toBe("top-left");
+    expect(b.place).toBe("below");
     fits.mockClear();
-    // 20 of the box's 60 px width covered = 1/3 < 35 %: not crowded, no question about room.
-    const c = pickLegendPlace({ shapes: shapesOf([rect(44, 0, 156, 100)]), plot, boxes, outsideFits: fits });
-    expect(c.coverage["top-left"]).toBeCloseTo(1 / 3, 12);
-    expect(c).toMatchObject({ place: "top-left", crowded: false });
+    // A 4 px wide strip (one cell column) in the top-left box is 1/15 of it: above the 2 % tolerance.
+    const c = pickLegendPlace({ shapes: shapesOf([rect(60, 0, 140, 100)]), plot, boxes, outsideFits: () => false });
+    expect(c.coverage["top-left"]).toBeCloseTo(4 / 60, 12);
+    expect(c.place).toBe("below");
+    // Nothing in the top-left box: a free corner, no question about room.
+    const d = pickLegendPlace({ shapes: shapesOf([rect(64, 0, 136, 100)]), plot, boxes, outsideFits: fits });
+    expect(d).toMatchObject({ place: "top-left", crowded: false });
     expect(fits).not.toHaveBeenCalled();
   });
 

@@ -47,7 +47,12 @@ describe("the scene's font", () => {
 
   it("single column: tick labels at 8 pt (footnote size of a 10 pt paper), legend at 7 pt, axis titles ≤ 9 pt", () => {
     const p = defaultProject();
-    const scene = buildScene({ ...p, figure: { ...p.figure, preset: "single-column", fontPt: 12 } });
+    // A legend in a corner keeps its chosen size (the automatic one of the demo goes below the plot, where it
+    // may be set smaller, down to 6 pt, to leave the plot its room: tests/plot/preset-checks.test.ts).
+    const scene = buildScene({
+      ...p,
+      figure: { ...p.figure, preset: "single-column", fontPt: 12, legend: "top-right" },
+    });
     const texts = (id: string): TextNode[] =>
       scene.layers
         .filter((l) => l.id === id)

@@ -121,4 +121,28 @@ describe('legend "auto"', () => {
     expect(r.project.figure.legend).toBe(defaultFigure().legend);
     expect(r.repairs.some((m) => /legend/.test(m))).toBe(true);
   });
+
+  it('"below" and "above" and the legend text size are kept by links and files; older files open unchanged (size 1)', () => {
+    for (const legend of ["below", "above"] as const) {
+      const p = { ...withLegend(legend), figure: { ...withLegend(legend).figure, legendScale: 0.85 } };
+      const file = projectFromFile(projectToFile(p), "x.axband.json");
+      if (!file.ok) throw new Error(file.error);
+      expect([file.project.figure.legend, file.project.figure.legendScale]).toEqual([legend, 0.85]);
+    }
+    // The golden v1 files were written before legendScale existed: no repair, the default size, their place.
+    for (const name of ["demo.axband.json", "kitchen.axband.json"]) {
+      const text = readFileSync(join(GOLDEN, name), "utf8");
+      expect(text).not.toMatch(/legendScale/);
+      const r = projectFromFile(text, name);
+      if (!r.ok) throw new Error(r.error);
+      expect(r.repairs).toEqual([]);
+      expect(r.project.figure.legendScale).toBe(1);
+    }
+    // Out of range: clamped to 0.7–1.5 with a note.
+    const raw = { ...projectToJsonValue(defaultProject()), figure: { ...defaultFigure(), legendScale: 9 } };
+    const r = restoreProject(raw);
+    if (!r.ok) throw new Error(r.error);
+    expect(r.project.figure.legendScale).toBe(1.5);
+    expect(r.repairs.some((m) => /legend text size/.test(m))).toBe(true);
+  });
 });

@@ -36,13 +36,15 @@ function expectedProject(path: string): Project {
     // Keys that joined a version without a bump are absent from goldens written before them and read as their
     // default (DEVELOPERS.md "Schema changes"): the figure font (sans, the look those figures had); the mass axis
     // in eV and the automatic frequency unit (as those figures were labelled); ticks outward (the house style); a curve's
-    // exclusion mark (hatches, the house style, unless the curve set a fill opacity other than 0.3 or 0: its fill).
+    // exclusion mark (hatches, the house style, unless the curve set a fill opacity other than 0.3 or 0: its fill); the legend
+    // text size (1, the size they were drawn with).
     figure: {
       ...raw.figure,
       font: (raw.figure as Partial<Project["figure"]>).font ?? "sans",
       massUnit: (raw.figure as Partial<Project["figure"]>).massUnit ?? "eV",
       frequencyUnit: (raw.figure as Partial<Project["figure"]>).frequencyUnit ?? "auto",
       ticks: (raw.figure as Partial<Project["figure"]>).ticks ?? "out",
+      legendScale: (raw.figure as Partial<Project["figure"]>).legendScale ?? 1,
     },
     curves: raw.curves.map((c) => ({
       ...c,

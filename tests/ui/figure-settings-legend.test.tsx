@@ -5,6 +5,7 @@ import { render, screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { defaultProject } from "../../src/project/demo";
 import { FigureSettings } from "../../src/ui/settings/FigureSettings";
+import { FigureView } from "../../src/ui/figure/FigureView";
 import { useAxband } from "../../src/ui/store";
 import { blankProject, resetStore } from "./helpers";
 
@@ -13,7 +14,7 @@ beforeEach(() => resetStore());
 const legend = () => useAxband.getState().project.figure.legend;
 
 describe("Legend setting", () => {
-  test('offers "best corner (automatic)" (auto) first, then the fixed corners, outside right and hidden', () => {
+  test('offers "best corner (automatic)" (auto) first, then the fixed corners, outside right, below, above and hidden', () => {
     render(<FigureSettings />);
     const select = screen.getByLabelText("Legend");
     const options = within(select).getAllByRole("option") as HTMLOptionElement[];
@@ -24,9 +25,12 @@ describe("Legend setting", () => {
       "bottom-left",
       "bottom-right",
       "outside-right",
+      "below",
+      "above",
       "hidden",
     ]);
     expect(options[0]).toHaveTextContent("best corner (automatic)");
+    expect(screen.getByTestId("legend-place")).toBe(select);
   });
 
   test('a new project shows "best corner (automatic)"', () => {
@@ -48,5 +52,43 @@ describe("Legend setting", () => {
     expect(select).toHaveValue("auto");
     useAxband.getState().undo();
     expect(legend()).toBe("bottom-left");
+  });
+
+  test("the legend text size goes through the store with undo; a new project has the default size", async () => {
+    const user = userEvent.setup();
+    resetStore(defaultProject());
+    render(<FigureSettings />);
+    const field = screen.getByTestId("legend-scale");
+    expect(field).toHaveValue(1);
+    await user.clear(field);
+    await user.type(field, "0.85");
+    expect(useAxband.getState().project.figure.legendScale).toBe(0.85);
+    // Out of range (0.7–1.5): not applied.
+    await user.clear(field);
+    await user.type(field, "3");
+    expect(useAxband.getState().project.figure.legendScale).toBe(0.85);
+    // The typed steps count as one change.
+    useAxband.getState().undo();
+    expect(useAxband.getState().project.figure.legendScale).toBe(1);
+  });
+
+  test("a legend entry that must be shortened is named in a note under the figure; a place with room clears it", async () => {
+    const user = userEvent.setup();
+    const p = defaultProject();
+    // One word wider than any legend room on a single column cannot wrap: it is cut, and the note says which.
+    const word = "Averyveryverylongsinglewordlabelthatcannotwrapanywhereatall";
+    p.models[0] = { ...p.models[0], label: word };
+    resetStore({ ...p, figure: { ...p.figure, preset: "single-column", legend: "outside-right" } });
+    render(
+      <>
+        <FigureView />
+        <FigureSettings />
+      </>,
+    );
+    expect(await screen.findByTestId("legend-note")).toHaveTextContent(word);
+    // On a slide the box below the plot is wide enough for the word: no note.
+    await user.selectOptions(screen.getByLabelText("Size"), "slide");
+    await user.selectOptions(screen.getByTestId("legend-place"), "below");
+    await expect.poll(() => screen.queryByTestId("legend-note")).toBeNull();
   });
 });

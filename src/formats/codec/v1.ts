@@ -76,6 +76,8 @@ const FIGURE_V1: Codec = {
     { full: "topAxis", short: "t", base: () => "fa" },
     { full: "grid", short: "g", base: () => true },
     { full: "legend", short: "l", base: () => "bottom-right" },
+    // Joined without a bump: links written before it decode to 1, the size they were drawn with.
+    { full: "legendScale", short: "ls", base: () => 1 },
     { full: "fontPt", short: "s", base: () => 12 },
     // Joined without a bump: links written before it decode to "sans", the look they had.
     { full: "font", short: "f", base: () => "sans" },

@@ -4,6 +4,7 @@
 import { useDeferredValue, useEffect, useId, useMemo, useRef, useState, type RefObject } from "react";
 import { buildScene } from "../../plot/scene";
 import { presetOf } from "../../plot/layout";
+import { shortenedLegendNote } from "../../plot/legend";
 import type { Scene } from "../../plot/scene-types";
 import type { Project } from "../../project/types";
 import { selectHighlight, selectPreparing, selectProject, useAxband } from "../store";
@@ -114,6 +115,11 @@ export function FigureView() {
       {scene.notes?.length ? (
         <p className="figure-note" data-testid="figure-notes" role="status">
           {scene.notes.join("; ")}
+        </p>
+      ) : null}
+      {shortenedLegendNote(scene) ? (
+        <p className="figure-note" data-testid="legend-note" role="status">
+          {shortenedLegendNote(scene)}
         </p>
       ) : null}
       <p className="figure-hint" id={hintId}>

@@ -1,5 +1,6 @@
 // The Figure settings section: size preset, typed axis ranges (validated, with units; the previous range is kept
-// on a bad entry), y view, axis units, top axis, ticks, grid, legend place, font family and size, and title.
+// on a bad entry), y view, axis units, top axis, ticks, grid, legend place and text size, font family and size,
+// and title.
 import { useId, useState } from "react";
 import type {
   AxisMassUnit,
@@ -17,6 +18,7 @@ import { massUnitInfo } from "../../physics/units";
 import { CUSTOM_MM_LIMITS } from "../../project/limits";
 import { useShallow } from "zustand/react/shallow";
 import { useAxband, type AxbandState } from "../store";
+import { LEGEND_SCALE_LIMITS } from "../../project/limits";
 
 const PRESETS: { value: SizePreset; label: string }[] = [
   { value: "slide", label: "Slide 16:9" },
@@ -52,13 +54,15 @@ const TICKS: { value: TickSides; label: string }[] = [
   { value: "all", label: "outside, all four sides" },
 ];
 const LEGEND: { value: LegendPlace; label: string }[] = [
-  // The inner corner covering the least of the curves and models (src/plot/legend-place.ts).
+  // A free inner corner, else outside right or below (src/plot/legend-place.ts).
   { value: "auto", label: "best corner (automatic)" },
   { value: "top-left", label: "top left" },
   { value: "top-right", label: "top right" },
   { value: "bottom-left", label: "bottom left" },
   { value: "bottom-right", label: "bottom right" },
   { value: "outside-right", label: "outside right" },
+  { value: "below", label: "below the plot" },
+  { value: "above", label: "above the plot" },
   { value: "hidden", label: "hidden" },
 ];
 
@@ -175,6 +179,7 @@ function NumberSetting({
   max,
   step,
   onChange,
+  testId,
 }: {
   label: string;
   value: number;
@@ -182,6 +187,7 @@ function NumberSetting({
   max: number;
   step: number;
   onChange: (v: number) => void;
+  testId?: string;
 }) {
   const [draft, setDraft] = useState<string | null>(null);
   return (
@@ -193,6 +199,7 @@ function NumberSetting({
         max={max}
         step={step}
         className="narrow"
+        data-testid={testId}
         value={draft ?? String(value)}
         onChange={(e) => {
           setDraft(e.target.value);
@@ -304,7 +311,22 @@ export function FigureSettings() {
         testId="figure-ticks"
         onChange={(v) => set({ ticks: v })}
       />
-      <Select label="Legend" value={figure.legend} options={LEGEND} onChange={(v) => set({ legend: v })} />
+      <Select
+        label="Legend"
+        value={figure.legend}
+        options={LEGEND}
+        testId="legend-place"
+        onChange={(v) => set({ legend: v })}
+      />
+      <NumberSetting
+        label="Legend text (× default)"
+        value={figure.legendScale}
+        min={LEGEND_SCALE_LIMITS[0]}
+        max={LEGEND_SCALE_LIMITS[1]}
+        step={0.05}
+        testId="legend-scale"
+        onChange={(v) => set({ legendScale: v }, "figure:legend-scale")}
+      />
       <Select
         label="Font"
         value={figure.font}
