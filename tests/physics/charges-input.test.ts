@@ -108,6 +108,22 @@ describe("gauge check of every term before solving", () => {
     );
     expect(errorsOf(s, [], ["F^† H1 T"])).toEqual([]); // 3/2 ⊗ ½ ∋ 1
   });
+  test("SU(3)_L × U(1)_X terms: X adds up to 0, SU(3)_L allows a singlet; a singlet Φ entered as SU(2) × U(1) fits (3-3-1 scalar triplets η, ρ, χ with β = −1/√3: Foot, Long, Tran, PRD 50 (1994) R34; from memory)", () => {
+    const t = (name: string, x: string): ScalarInput => ({ name, ew: { kind: "su3l", rep: "3", x, b: "-1/3" } });
+    const s = [phi, t("eta", "-1/3"), t("rho", "2/3"), t("chi", "-1/3")];
+    // ε_ijk η^i ρ^j χ^k: three triplets contain a singlet and X = −1/3 + 2/3 − 1/3 = 0.
+    expect(errorsOf(s, [], ["eta rho chi Phi^† Phi"])).toEqual([]);
+    expect(errorsOf(s, [], ["eta^† chi Phi"])).toEqual([]);
+    expect(errorsOf(s, [], ["rho^† eta Phi"])).toEqual(["term 1 (rho† eta Phi): U(1)_X charge adds up to -1, not 0"]);
+    expect(errorsOf(s, [], ["eta chi Phi"]).join(" ")).toMatch(/SU\(3\)_L: triality 2 ≠ 0/);
+    // An SU(3)_L singlet with X = 0 is the same field as an SU(2) × U(1) singlet with Y = 0.
+    const su3lPhi: ScalarInput = { name: "Phi", ew: { kind: "su3l", rep: "1", x: "0", b: "0" } };
+    expect(errorsOf([su3lPhi, t("eta", "-1/3"), t("chi", "-1/3")], [], ["eta^† chi Phi"])).toEqual([]);
+    // A doublet and a triplet of different weak groups cannot share a term.
+    expect(errorsOf([phi, doublet("H"), t("eta", "1/2")], [], ["H^† eta"])[0]).toBe(
+      "term 1 (H† eta): mixes SU(2)_L × U(1)_Y multiplets with SU(3)_L × U(1)_X multiplets",
+    );
+  });
   test("unknown fields, unnamed fermions, a repeated name and a normalised field that is no scalar are named", () => {
     const r = solvePqCharges({
       fermions: [quark("Q_L", "3", "0"), { ...quark("", "3", "0"), name: undefined }, quark("Phi", "1", "0")],

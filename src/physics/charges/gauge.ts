@@ -82,14 +82,22 @@ function su2Singlet(dims: number[]): string | null {
   return null;
 }
 
+/** An SU(2)_L singlet (sm) or SU(3)_L singlet (su3l): its U(1) charge is its electric charge in both groups. */
+const weakSinglet = (g: FieldGauge): boolean =>
+  (g.kind === "sm" && g.su2Dim === 1) || (g.kind === "su3l" && g.su3l.p + g.su3l.q === 0);
+
 /** Reasons the term is not gauge invariant (empty when it passes). */
 export function gaugeProblems(factors: GaugeFactor[]): string[] {
   const out: string[] = [];
   const expand = <T>(f: (g: GaugeFactor) => T): T[] => factors.flatMap((g) => Array<T>(g.power).fill(f(g)));
   const u1 = factors.reduce((a, g) => a.add(g.gauge.u1.mul(g.conj ? -g.power : g.power)), new Fraction(0));
-  const kinds = new Set(factors.map((g) => g.gauge.kind).filter((k) => k !== "explicit"));
-  if (kinds.size > 1) out.push("mixes SU(2)_L × U(1)_Y fields with SU(3)_L × U(1)_X fields");
-  const name = kinds.has("su3l") ? "U(1)_X charge" : kinds.has("sm") ? "hypercharge" : "electric charge";
+  // Weak singlets (an SU(2)_L or SU(3)_L singlet has U(1) charge = electric charge) fit either group, so a
+  // singlet Φ entered as SU(2) × U(1) may sit in an SU(3)_L × U(1)_X model's terms; only multiplets decide.
+  const kindsOf = (gs: GaugeFactor[]) => new Set(gs.map((g) => g.gauge.kind).filter((k) => k !== "explicit"));
+  const kinds = kindsOf(factors.filter((g) => !weakSinglet(g.gauge)));
+  if (kinds.size > 1) out.push("mixes SU(2)_L × U(1)_Y multiplets with SU(3)_L × U(1)_X multiplets");
+  const named = kinds.size > 0 ? kinds : kindsOf(factors);
+  const name = named.size !== 1 ? "electric charge" : named.has("su3l") ? "U(1)_X charge" : "hypercharge";
   if (!u1.equals(0)) out.push(`${name} adds up to ${toFractionString(u1)}, not 0`);
   const colour = su3Singlet(expand((g) => conjIrrep(g.gauge.colour, g.conj)));
   if (colour) out.push(`colour: ${colour}`);
