@@ -230,14 +230,14 @@ export function tryAnomaly(
       errors.push({
         index: -1,
         field: "scalarCharge",
-        message: `scalar PQ charge X_S ${show(opts.scalarCharge)} ${r.reason}`,
+        message: `scalar PQ charge 𝒳_S ${show(opts.scalarCharge)} ${r.reason}`,
       });
     else if (r.value.equals(0)) {
       xs = null;
       errors.push({
         index: -1,
         field: "scalarCharge",
-        message: "scalar PQ charge X_S must not be 0 (N_DW = |2N/X_S|)",
+        message: "scalar PQ charge 𝒳_S must not be 0 (N_DW = |2N/𝒳_S|)",
       });
     }
   }
@@ -257,7 +257,7 @@ export function tryAnomaly(
     domainWallExact = N.mul(2).div(xs).abs();
     if (!domainWallExact.equals(domainWallExact.floor())) {
       notes.push(
-        `N_DW = |2N/X_S| = ${domainWallExact.toFraction()} is not an integer: check the PQ charges against X_S`,
+        `N_DW = |2N/𝒳_S| = ${domainWallExact.toFraction()} is not an integer: check the PQ charges against 𝒳_S`,
       );
     }
   }

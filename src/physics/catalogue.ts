@@ -67,7 +67,7 @@ function heavyQuark(r: HeavyQuarkRep, id: string, label: string): CatalogueEntry
       { name: "Q_L", colour: r.colour, ew, chirality: "L", pq: 1 },
       { name: "Q_R", colour: r.colour, ew, chirality: "R", pq: 0 },
     ],
-    note: `Heavy quark ${repLabel(r)}: Q_L with X = 1, Q_R with X = 0, scalar Φ with X_S = 1 (Yukawa Φ Q̄_L Q_R).`,
+    note: `Heavy quark ${repLabel(r)}: Q_L with 𝒳 = 1, Q_R with 𝒳 = 0, scalar Φ with 𝒳_S = 1 (Yukawa Φ Q̄_L Q_R).`,
     // The Yukawa fixes X_L − X_R = X_Φ; the bare mass Q̄_L Q_R is what the PQ symmetry must forbid.
     lagrangian: { scalars: [PHI], terms: ["Qbar_L Phi Q_R"], forbidden: ["Qbar_L Q_R"], normalize: "Phi" },
   };
@@ -94,8 +94,8 @@ function dfsz(id: string, label: string, leptonsLike: "down" | "up"): CatalogueE
   ];
   const lepton =
     leptonsLike === "down"
-      ? "leptons couple to H_1 like down quarks (l̄ H_1 e_R), X(e_R) = −1"
-      : "leptons couple to H_2, the doublet of the up quarks (l̄ H_2 e_R), X(e_R) = +1";
+      ? "leptons couple to H_1 like down quarks (l̄ H_1 e_R), 𝒳(e_R) = −1"
+      : "leptons couple to H_2, the doublet of the up quarks (l̄ H_2 e_R), 𝒳(e_R) = +1";
   return {
     id,
     label,
@@ -103,8 +103,8 @@ function dfsz(id: string, label: string, leptonsLike: "down" | "up"): CatalogueE
     scalarCharge: 1,
     fermions,
     note:
-      "Three SM generations, two Higgs doublets and a singlet Φ (X_S = 1) coupled as H_2† H_1 Φ†²; " +
-      `X(q_L) = X(l_L) = 0, X(u_R) = X(d_R) = −1; ${lepton}.`,
+      "Three SM generations, two Higgs doublets and a singlet Φ (𝒳_S = 1) coupled as H_2† H_1 Φ†²; " +
+      `𝒳(q_L) = 𝒳(l_L) = 0, 𝒳(u_R) = 𝒳(d_R) = −1; ${lepton}.`,
     lagrangian: {
       scalars: [
         { name: "H1", ew: { kind: "sm", dim: 2, y: "1/2" } },

@@ -2,6 +2,8 @@
 // numbers with SI prefixes and in scientific notation.
 import type { FermionInput, RationalInput } from "../physics/anomaly-types";
 import { minusSigns as minus } from "../plot/format";
+import { formatBeta } from "../physics/beta";
+import { parseRational } from "../physics/rational";
 
 /** Text with ASCII hyphen-minus signs turned into U+2212 (the plot core's function, shared with the CLI). */
 export { minus };
@@ -15,15 +17,21 @@ function rat(v: RationalInput): string {
   return minus(String(v).trim());
 }
 
-/** One line describing a fermion: "Q_L (3, 1, −1/3) L, X = 1". */
+/** β = b·√3 as in papers ("−1/√3"); b as typed when it is not a rational. */
+function betaText(b: RationalInput): string {
+  const r = parseRational(b);
+  return r.ok ? minus(formatBeta(r.value)) : rat(b);
+}
+
+/** One line describing a fermion: "Q_L (3, 1, −1/3) L, 𝒳 = 1" (𝒳 the PQ charge, X the U(1)_X charge). */
 export function fermionSummary(f: FermionInput): string {
   const colour = typeof f.colour === "string" ? colourDisplay(f.colour) : `(${f.colour.p},${f.colour.q})`;
   let ew: string;
   if (f.ew.kind === "sm") ew = `${f.ew.dim}, ${rat(f.ew.y)}`;
-  else if (f.ew.kind === "su3l") ew = `SU(3)_L ${colourDisplay(f.ew.rep)}, X = ${rat(f.ew.x)}, b = ${rat(f.ew.b)}`;
+  else if (f.ew.kind === "su3l") ew = `SU(3)_L ${colourDisplay(f.ew.rep)}, X = ${rat(f.ew.x)}, β = ${betaText(f.ew.b)}`;
   else ew = `Q = {${f.ew.charges.map(rat).join(", ")}}`;
   const copies = f.copies !== undefined && f.copies !== 1 ? ` ×${f.copies}` : "";
-  return `${f.name ? `${f.name} ` : ""}(${colour}, ${ew}) ${f.chirality}, X_PQ = ${rat(f.pq)}${copies}`;
+  return `${f.name ? `${f.name} ` : ""}(${colour}, ${ew}) ${f.chirality}, 𝒳 = ${rat(f.pq)}${copies}`;
 }
 
 const SI = [

@@ -333,6 +333,6 @@ describe("bad input gives errors that name the fermion and the field", () => {
       expect(r.ok).toBe(false);
       if (!r.ok) expect(r.errors[0]).toMatchObject({ index: -1, field: "scalarCharge" });
     }
-    expect(() => anomaly([good], { scalarCharge: 0 })).toThrow(/X_S/);
+    expect(() => anomaly([good], { scalarCharge: 0 })).toThrow(/𝒳_S/);
   });
 });

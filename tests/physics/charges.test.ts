@@ -94,7 +94,26 @@ describe("heavy-quark models from their Yukawa Φ Q̄_L Q_R (Di Luzio, Mescia, N
     expect(r.eOverN).toBeNull();
     expect(r.nDW).toBeNull();
     expect(r.free).toEqual(["Q2_L", "Q2_R"]);
+    expect(r.scanExact).toBe(true);
     expect(r.undetermined).toEqual(expect.arrayContaining(["Q2_L", "Q2_R"]));
+  });
+
+  test("free charges that another fermion's charge follows from are not offered as a table scan (linear algebra: the solution direction also moves Q1_L)", () => {
+    // ε Q1_L Q2_L Q3_L (three colour triplets, Y = −1/3 + 2/3 − 1/3 = 0) ties 𝒳(Q1_L) to 𝒳(Q2_L) + 𝒳(Q3_L).
+    const fermions = [
+      ...vectorLike("Q1", "3", 1, "-1/3"),
+      ...vectorLike("Q2", "3", 1, "2/3"),
+      ...vectorLike("Q3", "3", 1, "-1/3"),
+    ];
+    const r = solved({
+      fermions,
+      scalars: [singlet],
+      terms: terms(["Q1_L Q2_L Q3_L", "Q3bar_L Phi Q3_R"], fermions, [singlet]),
+      normalize: "Phi",
+    });
+    expect(r.determined).toBe(false);
+    expect(r.free).toContain("Q2_L");
+    expect(r.scanExact).toBe(false);
   });
 
   test("two heavy quarks coupling to Φ and to Φ* give N = 0 for every solution: no QCD axion (Plakkot, Hoof, PRD 104 (2021) 075017, arXiv:2107.12378, Sec. II: signed representations can cancel N)", () => {

@@ -84,6 +84,25 @@ function anomalyOf(fermions: readonly FermionInput[], fields: Field[], x: Ration
 }
 
 /**
+ * Whether varying field j's charge alone changes E and N as its solution direction does: then a charge scan of
+ * the table over the free fields (other charges as solved) spans the solutions' E/N; otherwise charges of other
+ * fermions follow from it and such a scan would break kept terms.
+ */
+function aloneMatches(
+  fermions: readonly FermionInput[],
+  fields: Field[],
+  j: number,
+  dir: { E: Rational; N: Rational },
+) {
+  const alone = anomalyOf(
+    fermions,
+    fields,
+    fields.map((_, k) => new Fraction(k === j ? 1 : 0)),
+  );
+  return alone.E.equals(dir.E) && alone.N.equals(dir.N);
+}
+
+/**
  * Solve the PQ charges that leave every kept term invariant, with the `normalize` scalar's charge 1. Terms are
  * gauge-checked first (a failing one is named and nothing is solved). E/N is "determined" when E and N are
  * proportional as affine forms on the solution space; symmetries without anomaly (Y, B, L) never change it.
@@ -127,6 +146,7 @@ export function solvePqCharges(p: ChargeProblem): ChargeSolution {
   const rep = anomalyOf(p.fermions, fields, x);
   const nFixed = axion && dirs.every((d) => d.N.equals(0));
 
+  const freeDirs = dirs.flatMap((d, i) => (d.E.equals(0) && d.N.equals(0) ? [] : [i]));
   const charges: Record<string, string> = {};
   fields.forEach((f, j) => (charges[f.name] = toFractionString(x[j])));
   const forbiddenAllowed: number[] = [];
@@ -147,7 +167,8 @@ export function solvePqCharges(p: ChargeProblem): ChargeSolution {
     forbiddenAllowed,
     E: toFractionString(rep.E),
     N: toFractionString(rep.N),
-    free: sol.free.filter((_, i) => !dirs[i].E.equals(0) || !dirs[i].N.equals(0)).map((j) => fields[j].name),
+    free: freeDirs.map((i) => fields[sol.free[i]].name),
+    scanExact: freeDirs.every((i) => aloneMatches(p.fermions, fields, sol.free[i], dirs[i])),
     undetermined: fields.filter((_, j) => sol.basis.some((v) => !v[j].equals(0))).map((f) => f.name),
     forbiddenByGauge,
   };

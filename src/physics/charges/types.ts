@@ -51,6 +51,11 @@ export interface ChargeSolved {
   N: string;
   /** Fields whose charges the terms leave open, chosen as independent parameters (a charge scan). */
   free: string[];
+  /**
+   * True when the free fields' charges may be scanned alone (every other charge as solved) and give exactly the
+   * E/N of the solutions; false when charges of other fermions follow from them (a table scan would break terms).
+   */
+  scanExact: boolean;
   /** Every field whose charge differs between solutions (the free ones and those that follow them). */
   undetermined: string[];
   /** Forbidden terms that are not gauge invariant (already forbidden by the gauge symmetry), by index. */

@@ -255,7 +255,7 @@ export function AnomalyCalculator() {
         />
       </div>
       <p className="note">
-        A PQ charge, copies or X_S may be a list or range ({"{-1, 0, 1}"}, {"1..3"}): the calculator then scans every
+        A PQ charge, copies or 𝒳_S may be a list or range ({"{-1, 0, 1}"}, {"1..3"}): the calculator then scans every
         combination.
       </p>
       {scanning ? <CalculatorScan state={state} /> : null}

@@ -72,7 +72,7 @@ function EntryDetails({ row, group }: { row: CatalogueRow; group: CatalogueEntry
           to 1; forbidden: <TermList terms={entry.lagrangian.forbidden} />.
         </p>
         <p>
-          X_S = {minus(String(entry.scalarCharge))}, N_DW = {row.domainWall ? minus(row.domainWall) : "—"}
+          𝒳_S = {minus(String(entry.scalarCharge))}, N_DW = {row.domainWall ? minus(row.domainWall) : "—"}
         </p>
         {entry.note ? <p className="note">{entry.note}</p> : null}
       </div>

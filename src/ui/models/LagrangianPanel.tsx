@@ -65,11 +65,12 @@ function scanFree(r: ChargeSolved, state: CalcState, dispatch: (a: CalcAction) =
 
 function Report({ r, state, dispatch }: { r: ChargeSolved; state: CalcState; dispatch: (a: CalcAction) => void }) {
   const forbidden = termLines(state.forbidden);
-  const scannable = r.free.some((n) => state.rows.some((row) => row.name.trim() === n));
+  // A table scan varies each free charge alone: offered only when that spans exactly the solutions' E/N.
+  const scannable = r.scanExact && r.free.some((n) => state.rows.some((row) => row.name.trim() === n));
   return (
     <div className="charge-report" data-testid="charge-report">
       <p>
-        Charges solved ({state.normalize} = 1), filled into the table:{" "}
+        PQ charges 𝒳 solved with 𝒳 = 1 for {state.normalize}, filled into the table:{" "}
         {Object.entries(r.charges)
           .map(([n, x]) => `${n} = ${minus(x)}`)
           .join(", ")}
@@ -84,8 +85,11 @@ function Report({ r, state, dispatch }: { r: ChargeSolved; state: CalcState; dis
         </p>
       ) : (
         <p className="warning">
-          E/N is not determined: it depends on the charges of {r.free.join(", ")}, which the terms leave free. Vary them
-          in the table (a charge scan) or add the terms that fix them.{" "}
+          E/N is not determined: it depends on the charges of {r.free.join(", ")}, which the terms leave free.{" "}
+          {r.scanExact
+            ? "Vary them in the table (a charge scan) or add the terms that fix them. "
+            : "Charges of other fields follow from them, so a scan of the table alone would break kept terms: " +
+              "add the terms that fix them, or vary the charges together by hand. "}
           {scannable ? (
             <button type="button" onClick={() => scanFree(r, state, dispatch)} data-testid="scan-free">
               Scan them over {"{-1, 0, 1}"}

@@ -28,7 +28,7 @@ export function scanFromState(s: CalcState): ScanOutcome {
     return { ...fermionFromDraft(row), pq: pq.ok ? pq.values : "1", copies: copyNumbers };
   });
   const xs = parseScanField(s.scalarCharge);
-  if (!xs.ok) messages.push(`scalar PQ charge X_S ${xs.reason}`);
+  if (!xs.ok) messages.push(`scalar PQ charge 𝒳_S ${xs.reason}`);
   if (messages.length > 0 || !xs.ok) return { ok: false, messages };
   try {
     return { ok: true, result: scanAnomaly(fermions, xs.values) };
