@@ -52,6 +52,18 @@ test("the anomaly calculator with a model built in it has no axe violations", as
   await dialog.getByRole("button", { name: "Solve charges" }).click();
   await expect.poll(() => dialog.getByTestId("calc-eovern").textContent()).toBe("0");
   expect(await axeViolations(page)).toEqual([]);
+  // The breakdown open, a forbidden term the symmetry allows (a warning), then an SU(3)_L row whose β field shows
+  // and the Yukawa no longer an SU(3)_L singlet (the error list).
+  await dialog.getByText("Per-field breakdown").click();
+  await dialog.getByRole("textbox", { name: "Forbidden terms" }).fill("Qbar_L Q_R Phi");
+  await dialog.getByRole("button", { name: "Solve charges" }).click();
+  await expect.poll(() => dialog.getByTestId("charge-report").textContent()).toContain("Not forbidden");
+  expect(await axeViolations(page)).toEqual([]);
+  await dialog.getByRole("combobox", { name: "Electroweak kind of Q_L" }).selectOption("su3l");
+  await dialog.getByRole("textbox", { name: "β of Q_L" }).fill("-1/√3");
+  await dialog.getByRole("button", { name: "Solve charges" }).click();
+  await expect.poll(() => dialog.getByTestId("solve-errors").textContent()).toContain("SU(3)_L: triality");
+  expect(await axeViolations(page)).toEqual([]);
   expect(watched.consoleErrors).toEqual([]);
   await context.close();
 });

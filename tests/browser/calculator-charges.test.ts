@@ -1,6 +1,6 @@
 // In real Chromium: the heavy quark (3,1,0) built in the anomaly calculator from its Yukawa Φ Q̄_L Q_R gives
 // E/N = 0 and N_DW = 1 (Di Luzio, Mescia, Nardi, PRL 118 (2017) 031801, Table I; from memory) and goes into the
-// figure as a model line.
+// figure as a model line; the calculator's draft survives a reload.
 import { afterAll, beforeAll, expect, inject, test } from "vitest";
 import type { Browser } from "playwright-core";
 import { launchChromium, watchPage } from "./chromium";
@@ -37,6 +37,13 @@ test("build the (3,1,0) heavy-quark model from its Yukawa term, see E/N = 0 and 
   await expect.poll(() => entry.count()).toBe(1);
   const id = await entry.getAttribute("data-model-id");
   expect(await page.locator(`[data-testid="plot"] path[data-model-id="${id}"]`).count()).toBeGreaterThan(0);
+  // The draft (name, terms) is kept across a reload.
+  await page.reload({ waitUntil: "networkidle" });
+  await page.getByRole("button", { name: "Anomaly calculator…" }).click();
+  const again = page.getByRole("dialog");
+  await expect.poll(() => again.getByRole("textbox", { name: "Model name" }).inputValue()).toBe("KSVZ from its Yukawa");
+  expect(await again.getByRole("textbox", { name: "Kept terms" }).inputValue()).toBe("Q̄_L Φ Q_R");
+  expect(await again.getByTestId("calc-eovern").textContent()).toBe("0");
   expect(watched.consoleErrors).toEqual([]);
   await context.close();
 });

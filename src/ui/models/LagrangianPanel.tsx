@@ -168,11 +168,14 @@ export function LagrangianPanel({ state, dispatch }: { state: CalcState; dispatc
         Solve charges
       </button>
       {report && !report.ok ? (
-        <ul className="field-errors" role="alert" data-testid="solve-errors">
-          {report.errors.map((e, k) => (
-            <li key={k}>{e}</li>
-          ))}
-        </ul>
+        // The alert role on a wrapper: a list given role="alert" stops being a list for assistive technology.
+        <div role="alert" data-testid="solve-errors">
+          <ul className="field-errors">
+            {report.errors.map((e, k) => (
+              <li key={k}>{e}</li>
+            ))}
+          </ul>
+        </div>
       ) : null}
       {report?.ok ? <Report r={report.result} state={state} dispatch={dispatch} /> : null}
     </details>
