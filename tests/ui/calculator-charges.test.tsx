@@ -56,6 +56,19 @@ describe("charges from the Lagrangian", () => {
     expect(screen.getByTestId("solve-errors")).toHaveTextContent("colour");
   });
 
+  test("renaming the normalised scalar keeps it normalised; the Yukawa through the renamed field still solves", async () => {
+    const user = userEvent.setup();
+    render(<AnomalyCalculator />);
+    await user.click(screen.getByText("Charges from the Lagrangian"));
+    const name = screen.getByRole("textbox", { name: "Name of scalar 1" });
+    await user.clear(name);
+    await user.type(name, "S");
+    expect(screen.getByRole("combobox", { name: "PQ charge 𝒳 = 1 for" })).toHaveValue("S");
+    await typeTerms(user, "Qbar_L S Q_R");
+    expect(screen.getByTestId("charge-report")).toHaveTextContent("𝒳 = 1 for S");
+    expect(eOverN()).toBe("0");
+  });
+
   test("a bare mass left in the forbidden list but allowed by the symmetry is reported", async () => {
     const user = userEvent.setup();
     render(<AnomalyCalculator />);

@@ -168,6 +168,18 @@ function loaded(a: CalcLoad): CalcState {
   };
 }
 
+/**
+ * The normalised scalar follows its row: renamed, it keeps being the one set to 1; removed (or none chosen yet),
+ * the first scalar takes its place, so the choice always names a scalar of the table.
+ */
+function withNormalize(before: CalcState, after: CalcState): CalcState {
+  const names = after.scalars.map((r) => r.name.trim());
+  if (names.includes(after.normalize)) return after;
+  const row = before.scalars.find((r) => r.name.trim() === before.normalize);
+  const same = row ? after.scalars.find((r) => r.key === row.key) : undefined;
+  return { ...after, normalize: same ? same.name.trim() : (names[0] ?? "") };
+}
+
 function edited(s: CalcState, a: Exclude<CalcAction, { type: "load" | "saved" }>): CalcState {
   switch (a.type) {
     case "edit":
@@ -181,11 +193,14 @@ function edited(s: CalcState, a: Exclude<CalcAction, { type: "load" | "saved" }>
     case "text":
       return { ...s, [a.field]: a.value };
     case "scalar-edit":
-      return { ...s, scalars: s.scalars.map((r) => (r.key === a.key ? { ...r, ...a.patch } : r)) };
+      return withNormalize(s, { ...s, scalars: s.scalars.map((r) => (r.key === a.key ? { ...r, ...a.patch } : r)) });
     case "scalar-add":
-      return { ...s, scalars: [...s.scalars, blankRow({ colour: "1", name: s.scalars.length === 0 ? "Phi" : "" })] };
+      return withNormalize(s, {
+        ...s,
+        scalars: [...s.scalars, blankRow({ colour: "1", name: s.scalars.length === 0 ? "Phi" : "" })],
+      });
     case "scalar-remove":
-      return { ...s, scalars: s.scalars.filter((r) => r.key !== a.key) };
+      return withNormalize(s, { ...s, scalars: s.scalars.filter((r) => r.key !== a.key) });
     case "solved":
       // The solved charges fill the table; the normalised scalar has charge 1, so X_S = 1.
       return {
