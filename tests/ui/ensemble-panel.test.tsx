@@ -1,6 +1,6 @@
 // The heavy-quark ensemble panel driven like a user (jsdom has no Worker: the client runs the core a tick later on
 // the page's thread): the chosen Landau-pole scale and heavy-quark mass reach the enumeration, the result shows its
-// counts and both histograms, the CSV carries every distinct E/N with its count and N_DW, and "add" makes a model
+// counts, both histograms and the table of distinct E/N with N_DW, the CSV carries every distinct E/N with its count and N_DW, and "add" makes a model
 // set. Expected numbers come from the physics core, whose counts are checked against Di Luzio, Mescia, Nardi,
 // PRL 118 (2017) 031801 and Plakkot & Hoof, arXiv:2107.12378 in tests/physics/ensemble.test.ts.
 import { afterEach, beforeEach, expect, test, vi } from "vitest";
@@ -39,6 +39,16 @@ test("Λ and m_Q typed in the panel reach the enumeration; the result exports as
   expect(result).toHaveTextContent(`${core.distinct.length} distinct E/N`);
   expect(screen.getByTestId("ensemble-hist").querySelectorAll("rect").length).toBeGreaterThan(3);
   expect(screen.getByTestId("ensemble-hist-log").getAttribute("aria-label")).toMatch(/\|E\/N − c_γ\| \(log axis\)/);
+
+  // The spectrum table: one row per distinct E/N with its count and N_DW, as the CSV below.
+  const rows = screen.getByTestId("ensemble-spectrum").querySelectorAll("tbody tr");
+  expect(rows).toHaveLength(core.distinct.length);
+  const last = core.distinct[core.distinct.length - 1];
+  expect([...rows[rows.length - 1].querySelectorAll("td")].map((td) => td.textContent)).toEqual([
+    last.eOverN.replace("-", "−"),
+    String(last.count),
+    last.nDWMin === last.nDWMax ? String(last.nDWMin) : `${last.nDWMin}–${last.nDWMax}`,
+  ]);
 
   await user.click(screen.getByRole("button", { name: "Export CSV" }));
   expect(downloads.map((d) => d.fileName)).toEqual(["heavy-quark-ensemble.csv"]);

@@ -10,6 +10,7 @@ import { selectPhysics, useAxband } from "../../store";
 import { runEnsemble, type EnsembleRequest, type EnsembleRun } from "./ensemble-client";
 import { spectrumCsv } from "./ensemble-csv";
 import { Histogram } from "./Histogram";
+import { SpectrumTable } from "./SpectrumTable";
 import { modelSetDraft, type SetDrawChoice } from "./model-set";
 
 const repText = (tag: string) => {
@@ -174,6 +175,7 @@ function EnsembleResultView({ result, req }: { result: EnsembleResult; req: Ense
       </p>
       <Histogram values={result.distinct} cGamma={cGamma} />
       <Histogram values={result.distinct} cGamma={cGamma} log />
+      <SpectrumTable values={result.distinct} />
       <div className="inline-row">
         <button
           type="button"
