@@ -63,17 +63,19 @@ function LandauFields({ s }: { s: ReturnType<typeof useLandauSettings> }) {
   );
   return (
     <>
-      <label>
-        <input
-          type="checkbox"
-          data-testid="ensemble-landau-pole"
-          checked={s.on}
-          onChange={(e) => s.setOn(e.target.checked)}
-        />{" "}
-        No Landau pole below Λ, with the heavy quarks entering the running at m_Q
-      </label>
-      {field("Λ (GeV)", s.poleScale, s.setPoleScale, "ensemble-pole-scale")}{" "}
-      {field("m_Q (GeV)", s.heavyMass, s.setHeavyMass, "ensemble-heavy-mass")}
+      <div className="inline-row">
+        <label>
+          <input
+            type="checkbox"
+            data-testid="ensemble-landau-pole"
+            checked={s.on}
+            onChange={(e) => s.setOn(e.target.checked)}
+          />{" "}
+          No Landau pole below Λ, with the heavy quarks entering the running at m_Q
+        </label>
+        {field("Λ (GeV)", s.poleScale, s.setPoleScale, "ensemble-pole-scale")}{" "}
+        {field("m_Q (GeV)", s.heavyMass, s.setHeavyMass, "ensemble-heavy-mass")}
+      </div>
       <p className="note">
         Two-loop running of the three gauge couplings (no Yukawas): the whole SM from M_Z = 91.1876 GeV (coefficients of
         Machacek &amp; Vaughn 1983), the heavy quarks from m_Q on, no other thresholds; α₁(M_Z) = 0.016923 (GUT

@@ -8,7 +8,8 @@ export function SpectrumTable({ values }: { values: readonly EnsembleValue[] }) 
   return (
     <details data-testid="ensemble-spectrum">
       <summary>Each distinct E/N with its models and N_DW ({values.length} rows)</summary>
-      <div className="table-scroll">
+      {/* Up to 820 rows: the table scrolls inside the panel. */}
+      <div className="table-scroll" style={{ maxHeight: "18em", overflowY: "auto" }}>
         <table>
           <thead>
             <tr>
