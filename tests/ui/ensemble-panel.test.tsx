@@ -1,10 +1,10 @@
 // The heavy-quark ensemble panel driven like a user (jsdom has no Worker: the client runs the core a tick later on
 // the page's thread): the chosen Landau-pole scale and heavy-quark mass reach the enumeration, the result shows its
 // counts, both histograms and the table of distinct E/N with N_DW, the CSV carries every distinct E/N with its count and N_DW, and "add" makes a model
-// set. Expected numbers come from the physics core, whose counts are checked against Di Luzio, Mescia, Nardi,
+// set; Cancel stops a run. Expected numbers come from the physics core, whose counts are checked against Di Luzio, Mescia, Nardi,
 // PRL 118 (2017) 031801 and Plakkot & Hoof, arXiv:2107.12378 in tests/physics/ensemble.test.ts.
 import { afterEach, beforeEach, expect, test, vi } from "vitest";
-import { render, screen } from "@testing-library/react";
+import { fireEvent, render, screen } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { heavyQuarkEnsemble } from "../../src/physics";
 import { EnsemblePanel } from "../../src/ui/models/ensemble/EnsemblePanel";
@@ -95,4 +95,16 @@ test("a heavy-quark mass at or above Λ cannot run; turning the criterion off ca
   await user.click(screen.getByTestId("ensemble-run"));
   const core = heavyQuarkEnsemble({ maxQuarks: 2, landauPole: false });
   expect((await screen.findByTestId("ensemble-result")).textContent).toMatch(new RegExp(`^${core.models} models`));
+});
+
+test("Cancel stops a run before it reports, and says so", async () => {
+  render(<EnsemblePanel open onClose={() => undefined} />);
+  // Synchronous clicks: the run is queued a tick later (no Worker in jsdom), so Cancel lands before it starts.
+  fireEvent.click(screen.getByTestId("ensemble-run"));
+  expect(screen.getByRole("status")).toHaveTextContent("Enumerating…");
+  expect(screen.getByTestId("ensemble-run")).toBeDisabled();
+  fireEvent.click(screen.getByRole("button", { name: "Cancel" }));
+  expect(await screen.findByRole("alert")).toHaveTextContent("Cancelled.");
+  expect(screen.queryByTestId("ensemble-result")).toBeNull();
+  expect(screen.getByTestId("ensemble-run")).toBeEnabled();
 });
