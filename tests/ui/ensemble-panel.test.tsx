@@ -1,8 +1,8 @@
 // The heavy-quark ensemble panel driven like a user (jsdom has no Worker: the client runs the core a tick later on
-// the page's thread): the chosen Landau-pole scale and heavy-quark mass reach the enumeration, the result shows its
-// counts, both histograms and the table of distinct E/N with N_DW, the CSV carries every distinct E/N with its count and N_DW, and "add" makes a model
-// set; Cancel stops a run. Expected numbers come from the physics core, whose counts are checked against Di Luzio, Mescia, Nardi,
-// PRL 118 (2017) 031801 and Plakkot & Hoof, arXiv:2107.12378 in tests/physics/ensemble.test.ts.
+// the page's thread): the chosen Landau-pole scale and heavy-quark mass reach the enumeration; the result shows its
+// counts, both histograms and the table of distinct E/N with N_DW; the CSV carries the same rows; "add" makes a model
+// set; Cancel stops a run. Expected numbers come from the physics core, whose counts are checked against Di Luzio,
+// Mescia, Nardi, PRL 118 (2017) 031801 and Plakkot & Hoof, arXiv:2107.12378 in tests/physics/ensemble.test.ts.
 import { afterEach, beforeEach, expect, test, vi } from "vitest";
 import { fireEvent, render, screen } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
