@@ -4,7 +4,7 @@
 //
 // Bibliographic details were checked against public copies of the papers' abstract pages and reference
 // lists (arXiv listings and mirrors, publisher and institutional repositories); a field that could not be
-// checked is listed in `fromMemory` and flagged in the exported BibTeX.
+// checked is listed in `fromMemory` and flagged in the sources panel, never in the exported BibTeX.
 import { catalogue } from "../physics/catalogue";
 import { bibtexFieldText, escapeBibtexValue, formatBibtexEntry, isSafeBibtexKey, parseBibtex } from "./bibtex";
 import type { Project } from "../project/types";
@@ -84,8 +84,10 @@ const GDC_2016: BuiltIn = {
   text: "G. Grilli di Cortona, E. Hardy, J. Pardo Vega, G. Villadoro, “The QCD axion, precisely”, JHEP 01 (2016) 034, arXiv:1511.02867",
 };
 
-// Checked: authors, title (capitals as on the listing) and arXiv number (1812.01008, hep-ph) on the arXiv listing. The journal reference
-// JHEP 03 (2019) 033 was found only in one secondary list, not on a page of the paper: kept as unchecked.
+// Checked: authors, title (capitals as on the listing) and arXiv number (1812.01008, hep-ph) on the arXiv listing and
+// its mirrors. The journal reference JHEP 03 (2019) 033 was found only in one secondary reference list, never on a
+// record of the paper itself (searched again for this entry: no journal or DOI record reached), so it stays unchecked
+// and has no DOI; the panel says so, the BibTeX does not.
 const GV_2019: BuiltIn = {
   key: "Gorghetto2019",
   entryType: "article",
@@ -103,6 +105,27 @@ const GV_2019: BuiltIn = {
   rawFields: ["author"],
   fromMemory: ["journal", "volume", "pages", "year"],
   text: "M. Gorghetto, G. Villadoro, “Topological Susceptibility and QCD Axion Mass: QED and NNLO corrections”, JHEP 03 (2019) 033, arXiv:1812.01008",
+};
+
+// Checked: authors, title (capitals as on the listing), arXiv:2107.12378 (hep-ph) and the abstract's counts on the
+// arXiv listing and its mirrors. The journal reference Phys. Rev. D 104 (2021) 075017 is from memory.
+const PH_2021: BuiltIn = {
+  key: "Plakkot2021",
+  entryType: "article",
+  fields: [
+    ["author", "Plakkot, Vaisakh and Hoof, Sebastian"],
+    ["title", "Anomaly Ratio Distributions of Hadronic Axion Models with Multiple Heavy Quarks"],
+    ["journal", "Phys. Rev. D"],
+    ["volume", "104"],
+    ["pages", "075017"],
+    ["year", "2021"],
+    ["eprint", "2107.12378"],
+    ["archiveprefix", "arXiv"],
+    ["primaryclass", "hep-ph"],
+  ],
+  rawFields: ["author"],
+  fromMemory: ["journal", "volume", "pages", "year"],
+  text: "V. Plakkot, S. Hoof, “Anomaly Ratio Distributions of Hadronic Axion Models with Multiple Heavy Quarks”, Phys. Rev. D 104 (2021) 075017, arXiv:2107.12378",
 };
 
 // Checked: title, Phys. Rev. Lett. 118, 031801 (2017), issue 3, DOI and arXiv:1610.07593 on the arXiv
@@ -218,8 +241,10 @@ function replaceKey(raw: string, start: number, end: number, key: string): strin
   return raw.slice(0, start) + key + raw.slice(end);
 }
 
-function isDfszCatalogue(id: string): boolean {
-  return catalogue().some((c) => c.id === id && c.group === "dfsz");
+/** A catalogue source names one entry, or several joined by commas (a model set picked from the catalogue). */
+function catalogueGroups(catalogueId: string): Set<string> {
+  const ids = new Set(catalogueId.split(",").map((id) => id.trim()));
+  return new Set(catalogue().flatMap((c) => (ids.has(c.id) ? [c.group] : [])));
 }
 
 /** CODATA, then the g_aγγ formula, c_γ and K as the selected reference (or the user's constants) gives them. */
@@ -261,22 +286,40 @@ function customConstantsSource(c: Project["physics"]["custom"]): SourceEntry {
   };
 }
 
-/** The catalogue papers behind the visible catalogue models (heavy-quark and DFSZ-type). */
+/**
+ * The papers behind the visible models: Di Luzio, Mescia, Nardi for heavy-quark catalogue models and for ensembles
+ * (their representations R1–R15), Plakkot & Hoof for ensembles (multi-quark ensembles and their Landau-pole
+ * criterion), the PDG review for DFSZ-type catalogue models.
+ */
 function modelSources(models: Project["models"]): SourceEntry[] {
+  const heavyQuark: string[] = [];
+  const dfsz: string[] = [];
+  const ensembles: string[] = [];
+  for (const m of models) {
+    if (!m.visible) continue;
+    if (m.source.kind === "ensemble") ensembles.push(m.label);
+    if (m.source.kind !== "catalogue") continue;
+    const groups = catalogueGroups(m.source.catalogueId);
+    if (groups.has("dfsz")) dfsz.push(m.label);
+    if ([...groups].some((g) => g !== "dfsz")) heavyQuark.push(m.label);
+  }
   const out: SourceEntry[] = [];
-  const visibleModels = models.filter((m) => m.visible);
-  const heavyQuark = visibleModels.filter(
-    (m) => m.source.kind === "catalogue" && !isDfszCatalogue(m.source.catalogueId),
-  );
-  const dfsz = visibleModels.filter((m) => m.source.kind === "catalogue" && isDfszCatalogue(m.source.catalogueId));
+  if (heavyQuark.length > 0 || ensembles.length > 0) {
+    const used = [
+      ...(heavyQuark.length > 0 ? [`heavy-quark catalogue models: ${heavyQuark.join(", ")}`] : []),
+      ...(ensembles.length > 0 ? [`representations R1–R15 of heavy-quark ensembles: ${ensembles.join(", ")}`] : []),
+    ];
+    out.push(fromBuiltIn(DLMN_PRL, "models", used));
+  }
   if (heavyQuark.length > 0) {
-    const names = heavyQuark.map((m) => m.label).join(", ");
-    out.push(fromBuiltIn(DLMN_PRL, "models", [`heavy-quark catalogue models: ${names}`]));
+    const names = heavyQuark.join(", ");
     out.push(fromBuiltIn(DLMN_PRD, "models", [`heavy-quark representations and preferred window: ${names}`]));
   }
-  if (dfsz.length > 0) {
-    out.push(fromBuiltIn(PDG_2022, "models", [`DFSZ-type catalogue models: ${dfsz.map((m) => m.label).join(", ")}`]));
+  if (ensembles.length > 0) {
+    const use = `heavy-quark ensembles and their Landau-pole criterion: ${ensembles.join(", ")}`;
+    out.push(fromBuiltIn(PH_2021, "models", [use]));
   }
+  if (dfsz.length > 0) out.push(fromBuiltIn(PDG_2022, "models", [`DFSZ-type catalogue models: ${dfsz.join(", ")}`]));
   return out;
 }
 
@@ -348,8 +391,8 @@ function addCurveSources(out: SourceEntry[], curves: Project["curves"]): void {
  * The references behind what the project's figure shows (visible models and curves), in panel order:
  * CODATA 2018 (α, h); the g_aγγ formula and c_γ (Grilli di Cortona et al. 2016); K from the selected
  * reference (2016 paper, or Gorghetto & Villadoro 2019) or the user's custom constants with their label;
- * Di Luzio, Mescia, Nardi (PRL 2017, PRD 2017) when heavy-quark catalogue models are shown; the PDG review
- * when DFSZ-type catalogue models are; then each visible curve's citation: a BibTeX entry that parses is
+ * Di Luzio, Mescia, Nardi (PRL 2017, PRD 2017) when heavy-quark catalogue models are shown (the PRL and
+ * Plakkot & Hoof 2021 for heavy-quark ensembles); the PDG review when DFSZ-type catalogue models are; then each visible curve's citation: a BibTeX entry that parses is
  * kept verbatim (its key renamed only when it clashes with a different entry), free text becomes a @misc
  * entry with note = the text. Identical citations of several curves give one entry.
  * @param project the whole state; nothing in it is changed.

@@ -3,7 +3,8 @@
 // Rev. Mod. Phys. 93 (2021) 025010), Grilli di Cortona, Hardy, Pardo Vega, Villadoro (JHEP 01 (2016) 034,
 // arXiv:1511.02867), Gorghetto & Villadoro (arXiv:1812.01008; journal reference unchecked, from memory),
 // Di Luzio, Mescia, Nardi (PRL 118 (2017) 031801, arXiv:1610.07593; PRD 96 (2017) 075003,
-// arXiv:1705.05370), Workman et al. (PDG), PTEP 2022 (2022) 083C01.
+// arXiv:1705.05370), Workman et al. (PDG), PTEP 2022 (2022) 083C01, Plakkot & Hoof (arXiv:2107.12378; journal
+// reference from memory).
 import { describe, expect, test } from "vitest";
 import { emptyProject, newCurve, newModel } from "../../src/project/defaults";
 import { DEMO_CITATION } from "../../src/project/demo";
@@ -134,6 +135,36 @@ describe("projectSources", () => {
       doi: "10.1093/ptep/ptac097",
     });
     expect(byKey(s, "PDG2022").usedFor[0]).toContain("DFSZ-type I");
+  });
+
+  test("a catalogue model set cites the groups of its entries; a set of DFSZ-type entries only the PDG review", () => {
+    const p = project();
+    const set = (id: string, ids: string) =>
+      newModel({ id, label: `Catalogue set ${id}`, kind: "set", source: { kind: "catalogue", catalogueId: ids } });
+    p.models.push(set("s1", "dfsz-i,dfsz-ii"));
+    let s = projectSources(p);
+    expect(keys(s)).toContain("PDG2022");
+    expect(keys(s)).not.toContain("DiLuzio2017PRL");
+    p.models.push(set("s2", "ksvz-r2,dfsz-i"));
+    s = projectSources(p);
+    expect(byKey(s, "DiLuzio2017PRL").usedFor.join(" ")).toContain("Catalogue set s2");
+    expect(byKey(s, "PDG2022").usedFor.join(" ")).toMatch(/Catalogue set s1.*Catalogue set s2/);
+  });
+
+  test("a heavy-quark ensemble cites Di Luzio, Mescia, Nardi (representations) and Plakkot & Hoof (arXiv:2107.12378)", () => {
+    const p = project();
+    p.models.push(
+      newModel({ id: "e", label: "Ensemble", kind: "set", source: { kind: "ensemble", settings: { maxQuarks: 28 } } }),
+    );
+    const s = projectSources(p);
+    expect(byKey(s, "DiLuzio2017PRL").usedFor.join(" ")).toContain("representations R1–R15");
+    expect(keys(s)).not.toContain("DiLuzio2017PRD");
+    const ph = byKey(s, "Plakkot2021");
+    expect(ph.fields).toMatchObject({ eprint: "2107.12378", primaryclass: "hep-ph" });
+    expect(ph.fields.title).toBe("Anomaly Ratio Distributions of Hadronic Axion Models with Multiple Heavy Quarks");
+    // The journal reference is recalled, not checked: flagged in the panel, absent from the printing fields' text.
+    expect(ph.fromMemory).toEqual(["journal", "volume", "pages", "year"]);
+    expect(sourcesToBibtex(s)).not.toMatch(/from memory|unchecked/i);
   });
 
   test("curve citations: free text → one @misc for identical texts, BibTeX kept verbatim, hidden curves left out", () => {

@@ -1,5 +1,5 @@
 // Checks of every catalogue model's E/N and N_DW, computed from its field content, against the heavy-quark
-// table of Di Luzio, Mescia & Nardi and the two-doublet values of the PDG review.
+// table of Di Luzio, Mescia & Nardi and the two-doublet values of the reviews (both recalled: "from memory").
 import { describe, expect, test } from "vitest";
 import fc from "fast-check";
 import { anomaly, catalogue, toFractionString, type FermionInput } from "../../src/physics";
@@ -28,7 +28,12 @@ const HEAVY_QUARK_TABLE: { id: string; rep: string; eOverN: string; nDW: number 
   { id: "ksvz-r15", rep: "(15,1,2/3)", eOverN: "2/3", nDW: 20 },
 ];
 
-/** PDG review "Axions and other similar particles": DFSZ-type E/N = 8/3 and 2/3; N_DW = 6 (2 × 3 generations). */
+/**
+ * DFSZ-type E/N = 8/3 (leptons couple like down quarks) and 2/3 (like up quarks), N_DW = 6 (2 × 3 generations):
+ * L. Di Luzio, M. Giannotti, E. Nardi, L. Visinelli, "The landscape of QCD axion models", Phys. Rept. 870 (2020) 1,
+ * DFSZ-I and DFSZ-II; also the PDG review "Axions and other similar particles". From memory: neither text was
+ * at hand; the property test below derives both values from the field content.
+ */
 const DFSZ_TABLE = [
   { id: "dfsz-i", eOverN: "8/3", nDW: 6 },
   { id: "dfsz-ii", eOverN: "2/3", nDW: 6 },
@@ -83,7 +88,7 @@ describe("heavy-quark models against Di Luzio, Mescia, Nardi, PRL 118 (2017) 031
   });
 });
 
-describe("DFSZ-type models against the PDG review 'Axions and other similar particles'", () => {
+describe("DFSZ-type models against Di Luzio, Giannotti, Nardi, Visinelli, Phys. Rept. 870 (2020) 1 (from memory)", () => {
   for (const row of DFSZ_TABLE) {
     test(`${row.id}: E/N = ${row.eOverN}, N_DW = ${row.nDW}`, () => {
       const r = computed(row.id);

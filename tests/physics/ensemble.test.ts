@@ -7,6 +7,9 @@ import { Fraction, heavyQuarkEnsemble, HEAVY_QUARK_TAGS, landauCheck, multisetCo
 /**
  * Di Luzio, Mescia, Nardi, "Redefining the axion window", PRL 118 (2017) 031801, Table I: E/N of R1…R15
  * (from memory; the table itself was not reached, the abstract was: fifteen representations pass both criteria).
+ * The fifteen (colour, SU(2), Y) triples, up to conjugation, are rows of the representation table in Plakkot & Hoof's
+ * public catalogue code (github.com/sebhoof/ksvz_axion_catalogue, ksvz_models/data/rep_info.dat), checked; the E/N
+ * then follow from the anomaly formula.
  */
 const PRL_TABLE: Record<string, string> = {
   R1: "2/3",
@@ -106,7 +109,11 @@ describe("additive and signed charges (analytic: E = ΣE_i, N = ΣN_i for X = ±
   });
 });
 
-describe("multi-quark catalogue (Plakkot & Hoof, Phys. Rev. D 104 (2021) 075017, arXiv:2107.12378, abstract)", () => {
+// V. Plakkot, S. Hoof, "Anomaly Ratio Distributions of Hadronic Axion Models with Multiple Heavy Quarks",
+// arXiv:2107.12378, abstract (checked on the arXiv listing): "N_Q ≤ 28 and only 820 different anomaly ratios E/N exist
+// (443 when considering additive representations, 12 when all new quarks transform under the same representation)".
+// Journal reference Phys. Rev. D 104 (2021) 075017 from memory.
+describe("multi-quark catalogue (Plakkot & Hoof, arXiv:2107.12378, abstract)", () => {
   test("additive: N_Q ≤ 28 and 443 distinct E/N", () => {
     const r = heavyQuarkEnsemble({ maxQuarks: 40 });
     expect(r.largestNQ).toBe(28);

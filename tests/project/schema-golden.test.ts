@@ -1,11 +1,13 @@
 // Golden links and project files, one folder per schema version (tests/project/golden/vN; a link's own format
 // number may be higher, e.g. the checked format v3 of schema version 1): each NAME.link.txt and
-// NAME.axband.json must decode, forever, to NAME.expected.json. Goldens are written once and never regenerated;
+// NAME.axband.json must decode, forever, to NAME.expected.json; so must an SVG figure exported then, which carries
+// the link's text in its <metadata>. Goldens are written once and never regenerated;
 // a new schema version adds a folder and keeps the old ones.
 import { readdirSync, readFileSync } from "node:fs";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { CURRENT_VERSION, LINK_FORMAT_VERSION, decodeLink, projectFromFile, projectsEqual } from "../../src/data/index";
+import { AXBAND_PROJECT_NS, EMBED_ENCODING, extractProjectFromSvg } from "../../src/formats/figure-file";
 import type { Project } from "../../src/project/types";
 
 const GOLDEN = join(import.meta.dirname, "golden");
@@ -89,6 +91,17 @@ describe("golden links and files", () => {
         if (!r.ok) throw new Error(r.error);
         expect(r.repairs).toEqual([]);
         expect(r.verified).toBe(format >= 3);
+        const expected = expectedProject(join(dir, f.replace(/\.link\.txt$/, ".expected.json")));
+        expect(projectsEqual(r.project, expected)).toBe(true);
+      });
+      it(`v${v}/${f} inside an SVG figure of its time opens to its expected project`, () => {
+        // The figure file's layout: the link text in <axband:project> under <metadata> (the CLI reads it as input too).
+        const link = readFileSync(join(dir, f), "utf8").trim();
+        const project = `<axband:project xmlns:axband="${AXBAND_PROJECT_NS}" encoding="${EMBED_ENCODING}" version="${v}">${link}</axband:project>`;
+        const svg = `<svg xmlns="http://www.w3.org/2000/svg" width="10" height="10">\n<metadata>${project}</metadata>\n</svg>\n`;
+        const r = extractProjectFromSvg(svg);
+        if (!r.ok) throw new Error(r.error);
+        expect(r.repairs).toEqual([]);
         const expected = expectedProject(join(dir, f.replace(/\.link\.txt$/, ".expected.json")));
         expect(projectsEqual(r.project, expected)).toBe(true);
       });

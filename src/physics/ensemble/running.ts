@@ -33,7 +33,8 @@ const A_SM = [41 / 10, -19 / 6, -7];
 
 /**
  * SM two-loop gauge coefficients b_ij (no Yukawas), Machacek & Vaughn, Nucl. Phys. B222 (1983) 83, with the
- * SM content (from memory; the same matrix enters Plakkot & Hoof's code): dα_i⁻¹/dt ∋ −b_ij α_j/(4π).
+ * SM content (the paper from memory; checked against Plakkot & Hoof's code, model_building.py, where
+ * b_SM = (−b1 + b2 + b3)ᵀ with n_g = 3 gives this matrix, and a_SM these b_i): dα_i⁻¹/dt ∋ −b_ij α_j/(4π).
  */
 const B_SM = [
   [199 / 50, 27 / 10, 44 / 5],

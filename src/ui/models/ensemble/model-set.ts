@@ -1,10 +1,11 @@
-// The store draft of a model set (issue 12's model-kinds contract) from a spectrum of E/N values with counts.
-// The set fields ride along the draft; the project's newModel keeps them once the model kinds are on main.
+// The store draft of a model set from a spectrum of E/N values with counts (a heavy-quark ensemble or a charge scan),
+// each value a member with its count and N_DW.
 import type { EnsembleValue } from "../../../physics/ensemble";
+import type { ModelSource } from "../../../project/types";
 import type { ModelDraft } from "../../store/types";
 import { nDWText } from "./ensemble-csv";
 
-export type SetSource = { kind: "ensemble"; settings: Record<string, unknown> } | { kind: "scan" };
+export type SetSource = Extract<ModelSource, { kind: "ensemble" | "scan" }>;
 export type SetDrawChoice = "lines" | "extremes" | "central";
 
 export function modelSetDraft(
@@ -14,7 +15,7 @@ export function modelSetDraft(
   setDraw: SetDrawChoice = "lines",
 ): ModelDraft {
   if (values.length === 0) throw new Error("a model set needs at least one E/N");
-  const draft = {
+  return {
     label,
     kind: "set",
     eOverNMin: values[0].eOverN,
@@ -24,5 +25,4 @@ export function modelSetDraft(
     setShare: 0.68,
     source,
   };
-  return draft as unknown as ModelDraft;
 }
