@@ -2,7 +2,7 @@
 // links typed or pasted into the address bar of an open page (hashchange). The codec loads when first used.
 import { useEffect } from "react";
 import { useAxband } from "../store";
-import { UNVERIFIED_LINK_NOTE, repairsNote } from "../store/open-notes";
+import { UNVERIFIED_LINK_NOTE, linkRefusedNote, repairsNote } from "../store/open-notes";
 import { downloadText } from "../export/download";
 
 /** The page address with a fragment (the share link). */
@@ -36,7 +36,7 @@ export function useHashLinks() {
           r.project,
           `Opened the project from the link. Undo returns to your previous project.${repairsNote(r.repairs, "The link")}${r.verified ? "" : UNVERIFIED_LINK_NOTE}`,
         );
-      else pushMessage("alert", `This link could not be opened: ${r.error} Your project is unchanged.`);
+      else pushMessage("alert", linkRefusedNote(r.error));
       history.replaceState(null, "", window.location.pathname + window.location.search);
     };
     const listener = () => void onHash();
