@@ -4,6 +4,7 @@ import { useEffect } from "react";
 import { useAxband } from "../store";
 import { UNVERIFIED_LINK_NOTE, linkRefusedNote, repairsNote } from "../store/open-notes";
 import { downloadText } from "../export/download";
+import { fileBaseName } from "../export/file-base-name";
 
 /** The page address with a fragment (the share link). */
 export function linkUrl(
@@ -17,7 +18,7 @@ export function linkUrl(
 export async function saveProjectFile(): Promise<string> {
   const { projectFileName, projectToFile } = await import("../../formats/project-file");
   const project = useAxband.getState().project;
-  const name = projectFileName(project);
+  const name = projectFileName({ name: fileBaseName(project, "project") });
   downloadText(name, projectToFile(project), "application/json");
   return name;
 }
