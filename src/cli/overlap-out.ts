@@ -1,6 +1,7 @@
 // The overlap summary (and its intervals) written by the renderer: the format follows the file's extension.
 import { overlapSummary } from "../analysis/overlap-summary";
 import { projectConstants } from "../analysis/overlap-table";
+import { markdownTextCell } from "../analysis/table-cells";
 import {
   intervalsToCsv,
   intervalsToMarkdown,
@@ -31,7 +32,7 @@ export function overlapOutputs(project: Project, summaryPath?: string, intervals
         ? summaryToCsv(rows)
         : f === "tex"
           ? summaryToLatex(rows)
-          : `${summaryToMarkdown(rows)}\n${summaryCaption(rows, projectConstants(project))}\n`;
+          : `${summaryToMarkdown(rows)}\n${markdownTextCell(summaryCaption(rows, projectConstants(project)))}\n`;
     out.push({ path: summaryPath, data, report: `wrote ${summaryPath} (${rows.length} overlap row(s))` });
   }
   if (intervalsPath) {
@@ -39,7 +40,9 @@ export function overlapOutputs(project: Project, summaryPath?: string, intervals
     const data =
       f === "csv"
         ? intervalsToCsv(rows)
-        : rows.map((r) => `### ${r.modelLabel} × ${r.curveLabel}\n\n${intervalsToMarkdown(r)}`).join("\n");
+        : rows
+            .map((r) => `### ${markdownTextCell(`${r.modelLabel} × ${r.curveLabel}`)}\n\n${intervalsToMarkdown(r)}`)
+            .join("\n");
     const n = rows.reduce((s, r) => s + r.intervals.count, 0);
     out.push({ path: intervalsPath, data, report: `wrote ${intervalsPath} (${n} interval(s))` });
   }

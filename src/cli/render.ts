@@ -99,8 +99,8 @@ function writeError(e: unknown, files: readonly OutputFile[]): unknown {
 
 function checkOutputDir(path: string): void {
   const dir = dirname(resolve(path));
-  if (!existsSync(dir) || !statSync(dir).isDirectory())
-    throw new InputError(`${path}: the directory ${dir} does not exist`);
+  if (!existsSync(dir)) throw new InputError(`${path}: the directory ${dir} does not exist`);
+  if (!statSync(dir).isDirectory()) throw new InputError(`${path}: ${dir} is a file, not a directory`);
   if (existsSync(path) && statSync(path).isDirectory()) throw new InputError(`${path}: is a directory`);
 }
 

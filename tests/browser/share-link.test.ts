@@ -54,7 +54,7 @@ test("a copied link reopens the same figure in a fresh context; a tampered link 
   }, tampered);
   const alert = b.page.locator('[role="alert"]').last();
   await alert.waitFor();
-  expect(await alert.textContent()).toMatch(/link could not be opened/i);
+  expect(await alert.textContent()).toMatch(/^This link is damaged \(.*Your project is unchanged\./);
   const svgAfter = await exportSvg(b.page);
   expect(svgAfter.text).toBe(svgA.text);
 
@@ -62,7 +62,9 @@ test("a copied link reopens the same figure in a fresh context; a tampered link 
   const c = await freshPage();
   await c.page.goto(`${inject("baseUrl")}#${tampered}`, { waitUntil: "networkidle" });
   await c.page.locator('[role="alert"]').first().waitFor();
-  expect(await c.page.locator('[role="alert"]').first().textContent()).toMatch(/link could not be opened/i);
+  expect(await c.page.locator('[role="alert"]').first().textContent()).toMatch(
+    /^This link is damaged \(.*Your project is unchanged\./,
+  );
 
   expect(watchedA.consoleErrors).toEqual([]);
   expect(watchedB.consoleErrors).toEqual([]);

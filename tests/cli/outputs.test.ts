@@ -74,4 +74,14 @@ describe("an unwritable output directory", () => {
     expect(r.status).toBe(2);
     expect(r.err.split("\n")).toEqual([expect.stringMatching(/\.svg: cannot write /), "nothing was written"]);
   });
+  it("an output path through a file (p.json/f.svg) says that the file is no directory", async () => {
+    const dir = tempDir();
+    const input = projectIn(dir);
+    const r = await run([input, "-o", join(input, "f.svg")]);
+    expect(r.status).toBe(2);
+    expect(r.err.split("\n")).toEqual([
+      `axband render: ${join(input, "f.svg")}: ${input} is a file, not a directory`,
+      "nothing was written",
+    ]);
+  });
 });

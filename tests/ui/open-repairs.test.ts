@@ -44,6 +44,24 @@ describe("opening a link", () => {
   });
 });
 
+describe("a refused link", () => {
+  it("says what is wrong once, without a second lead-in (links/models_1e6_same: 10⁶ models)", async () => {
+    const texts = await openLink(read("links/models_1e6_same.txt").trim());
+    expect(texts).toEqual([
+      "This link was not opened: it holds 1,000,000 models, and axband opens at most 500 models in one project. Your project is unchanged.",
+    ]);
+  });
+
+  it("a damaged v3 link is called damaged, with one lead-in", async () => {
+    const link = encodeLink(defaultProject());
+    const at = link.length - 10;
+    const texts = await openLink(`${link.slice(0, at)}${link[at] === "A" ? "B" : "A"}${link.slice(at + 1)}`);
+    expect(texts).toEqual([expect.stringMatching(/^This link is damaged \(its checksum does not match/)]);
+    expect(texts[0]).toMatch(/Check that it was copied completely\. Your project is unchanged\.$/);
+    expect(texts[0].match(/This link/g)).toHaveLength(1);
+  });
+});
+
 describe("opening a file", () => {
   it("names the repairs of a project file (projects/wrong_types2.axband.json)", async () => {
     const file = new File([read("projects/wrong_types2.axband.json")], "wrong_types2.axband.json");

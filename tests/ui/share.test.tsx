@@ -124,7 +124,9 @@ describe("project files", () => {
     const good = encodeLink(before);
     window.location.hash = `${good.slice(0, 40)}AAAA`;
     await waitFor(() => expect(useAxband.getState().ui.messages.at(-1)?.kind).toBe("alert"));
-    expect(useAxband.getState().ui.messages.at(-1)?.text).toMatch(/could not be opened/);
+    expect(useAxband.getState().ui.messages.at(-1)?.text).toMatch(
+      /^This link is damaged \(.*\. Your project is unchanged\.$/,
+    );
     expect(useAxband.getState().project).toBe(before);
   });
 });

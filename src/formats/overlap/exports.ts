@@ -1,14 +1,9 @@
 // The overlap summary as CSV (summary and intervals, full precision), Markdown, and a plain-text caption.
 import type { AxionConstants } from "../../physics/constants";
 import { intervalEOverN, type OverlapSummaryRow } from "../../analysis/overlap-summary";
+import { csvTextCell as cell, markdownTextCell as md } from "../../analysis/table-cells";
 import { eOverNText, withUncertainty } from "./numbers";
 import { intervalView, rowView } from "./view";
-
-/** A CSV cell: quoted when needed; a leading = + − @ tab or CR is prefixed with ' so spreadsheets read text. */
-function cell(value: string): string {
-  const safe = /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
-  return /[",\n\r]/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
-}
 
 function num(x: number | null | undefined): string {
   return x === null || x === undefined || !Number.isFinite(x) ? "" : String(x);
@@ -66,10 +61,6 @@ export function intervalsToCsv(rows: readonly OverlapSummaryRow[]): string {
     }
   }
   return lines.join("\n") + "\n";
-}
-
-function md(text: string): string {
-  return text.replace(/\\/g, "\\\\").replace(/\|/g, "\\|").replace(/\r?\n/g, " ");
 }
 
 /** The summary as a GitHub-style Markdown table, the same words and figures as the screen. */

@@ -5,28 +5,14 @@ import { embedCapText, exportFigureSvgWithInfo } from "../../formats/figure-file
 import { modelsToCsv } from "../../formats/model-csv";
 import { setPngDpi } from "../../formats/png-meta";
 import { presetOf } from "../../plot/layout";
-import { defaultProject } from "../../project/demo";
 import type { Project } from "../../project/types";
 import { useAxband } from "../store";
-import { downloadBlob, downloadText, safeFileName } from "./download";
+import { downloadBlob, downloadText } from "./download";
+import { fileBaseName } from "./file-base-name";
 import { pngFigure, rasteriseSvg, type PngScale } from "./png";
 
-/** The demo's name, and the ids of its models and curves (the demo content). */
-function demoOf(): { name: string; ids: Set<string> } {
-  const d = defaultProject();
-  return { name: d.name, ids: new Set([...d.models, ...d.curves].map((x) => x.id)) };
-}
-
-/**
- * Base name of exported figure files: the project name, or "axband-figure" when there is none, or when the
- * project still has the demo's name but none of the demo's content (new work is not named after the demo).
- */
-function figureBaseName(project: Project): string {
-  const name = project.name.trim();
-  const demo = demoOf();
-  const leftDemo = name === demo.name && ![...project.models, ...project.curves].some((x) => demo.ids.has(x.id));
-  return safeFileName(name === "" || name === "Untitled" || leftDemo ? "axband-figure" : name, "axband-figure");
-}
+/** Base name of exported figure files (see fileBaseName). */
+const figureBaseName = (project: Project): string => fileBaseName(project, "axband-figure");
 
 const push = (level: "status" | "alert", text: string): void => {
   useAxband.getState().pushMessage(level, text);

@@ -6,14 +6,15 @@ import { projectConstants } from "../../analysis/overlap-table";
 import { intervalsToCsv, summaryCaption, summaryToCsv, summaryToMarkdown } from "../../formats/overlap/exports";
 import { summaryToLatex } from "../../formats/overlap/latex";
 import { useAxband } from "../store";
-import { downloadText, safeFileName } from "../export/download";
+import { downloadText } from "../export/download";
+import { fileBaseName } from "../export/file-base-name";
 import { copyText } from "../share/clipboard";
 
 export function OverlapExports({ rows }: { rows: OverlapSummaryRow[] }) {
   const project = useAxband((s) => s.project);
   const pushMessage = useAxband((s) => s.pushMessage);
   const [plain, setPlain] = useState(false);
-  const base = safeFileName(project.name === "Untitled" ? "axband" : project.name, "axband");
+  const base = fileBaseName(project, "axband");
   const physics = project.physics;
   // The caption reads every row: build it when the rows or the constants change, not on every edit elsewhere.
   const caption = useMemo(() => summaryCaption(rows, projectConstants({ physics })), [rows, physics]);

@@ -2,8 +2,9 @@
 // links typed or pasted into the address bar of an open page (hashchange). The codec loads when first used.
 import { useEffect } from "react";
 import { useAxband } from "../store";
-import { UNVERIFIED_LINK_NOTE, repairsNote } from "../store/open-notes";
+import { UNVERIFIED_LINK_NOTE, linkRefusedNote, repairsNote } from "../store/open-notes";
 import { downloadText } from "../export/download";
+import { fileBaseName } from "../export/file-base-name";
 
 /** The page address with a fragment (the share link). */
 export function linkUrl(
@@ -17,7 +18,7 @@ export function linkUrl(
 export async function saveProjectFile(): Promise<string> {
   const { projectFileName, projectToFile } = await import("../../formats/project-file");
   const project = useAxband.getState().project;
-  const name = projectFileName(project);
+  const name = projectFileName({ name: fileBaseName(project, "project") });
   downloadText(name, projectToFile(project), "application/json");
   return name;
 }
@@ -36,7 +37,7 @@ export function useHashLinks() {
           r.project,
           `Opened the project from the link. Undo returns to your previous project.${repairsNote(r.repairs, "The link")}${r.verified ? "" : UNVERIFIED_LINK_NOTE}`,
         );
-      else pushMessage("alert", `This link could not be opened: ${r.error} Your project is unchanged.`);
+      else pushMessage("alert", linkRefusedNote(r.error));
       history.replaceState(null, "", window.location.pathname + window.location.search);
     };
     const listener = () => void onHash();

@@ -2,7 +2,7 @@
 import type { StoreApi } from "zustand";
 import type { Project } from "../../project/types";
 import { defaultProject } from "../../project/demo";
-import { UNVERIFIED_LINK_NOTE, repairsNote } from "./open-notes";
+import { UNVERIFIED_LINK_NOTE, linkRefusedNote, repairsNote } from "./open-notes";
 import type { AxbandState } from "./types";
 import { CHUNK_POINTS, type CurveArrays, nextTask } from "./autosave-chunks";
 import type { DeserializeResult } from "../../formats/project-file";
@@ -139,9 +139,7 @@ export async function initProject(store: StoreApi<AxbandState>, opts: StartOpts 
         `Opened the project from the link. Undo returns to your previous project.${note}${repairsNote(r.repairs, "The link")}${r.verified ? "" : UNVERIFIED_LINK_NOTE}`,
       );
   } else {
-    store
-      .getState()
-      .pushMessage("alert", `This link could not be opened: ${sentence(r.error)} Your previous project is unchanged.`);
+    store.getState().pushMessage("alert", linkRefusedNote(r.error));
   }
   (opts.clearFragment ?? (() => loc && history.replaceState(null, "", loc.pathname + loc.search)))();
 }

@@ -19,3 +19,12 @@ export function repairsNote(repairs: readonly string[], what: string): string {
 /** Said when a link of a format without checksum (before v3) was opened. */
 export const UNVERIFIED_LINK_NOTE =
   " This link is in an older format without a checksum, so axband cannot check that it arrived undamaged.";
+
+/**
+ * The alert for a link that was refused. The decoder's reason already names the link and what is wrong with it
+ * ("This link is damaged (…)", "This link was not opened: it holds …"), so it is not put after a second lead-in.
+ */
+export function linkRefusedNote(reason: string): string {
+  const t = reason.trim();
+  return `${/[.!?]$/.test(t) ? t : `${t}.`} Your project is unchanged.`;
+}
