@@ -7,7 +7,7 @@ import { pathToFileURL } from "node:url";
 import { parseArgs, USAGE, type CliOptions } from "./args";
 import { InputError, type PreParsed } from "./inputs";
 import { loadAnyProject } from "./pdf-input";
-import { fitFigure } from "./fit-figure";
+import { fitFigure, type FittedFigure } from "./fit-figure";
 import { pngPixelSize, renderPng } from "./png";
 import { writeAllOrNothing, type OutputFile } from "./write-atomic";
 import {
@@ -18,8 +18,7 @@ import {
   rasterResolution,
 } from "../formats/figure-file";
 import { presetOf } from "../plot/layout";
-import { shortenedLegendNote } from "../plot/legend";
-import { buildScene } from "../plot/scene";
+import { writeSvg } from "../plot/svg";
 import { modelsToCsv } from "../formats/model-csv";
 import { AXBAND_VERSION } from "./version";
 import type { Project } from "../project/types";
@@ -189,11 +188,12 @@ function pngOutput(project: Project, opts: CliOptions, path: string, bare: strin
 }
 
 /** Every output the options ask for, in the order they are reported. */
-async function outputs(project: Project, opts: CliOptions, io: Io): Promise<Output[]> {
+async function outputs({ project, scene }: FittedFigure, opts: CliOptions, io: Io): Promise<Output[]> {
   const list: Output[] = [];
   const asPdf = opts.out !== undefined && /\.pdf$/i.test(opts.out);
-  // The project is embedded into the written SVG only; rasters are drawn from the lighter bare SVG.
-  const bare = opts.out && !asPdf ? exportFigureSvg(project, { embedProject: false }) : "";
+  // The project is embedded into the written SVG only; rasters are drawn from the lighter bare SVG. Written from
+  // the scene fitFigure built (what exportFigureSvg(project, { embedProject: false }) draws), not a second one.
+  const bare = opts.out && !asPdf ? writeSvg(scene) : "";
   if (opts.out)
     list.push(asPdf ? await pdfOutput(project, opts, opts.out, io) : svgOutput(project, opts, opts.out, bare, io));
   if (opts.png) list.push(pngOutput(project, opts, opts.png, bare));
@@ -234,10 +234,9 @@ async function run(argv: readonly string[], io: Io, preParsed: PreParsed): Promi
     for (const p of [opts.out, opts.png, opts.modelsCsv, opts.overlap, opts.overlapIntervals]) if (p) checkOutputDir(p);
     checkDistinctPaths(opts);
     const loaded = await loadAnyProject(opts, preParsed);
-    const { project, notes: fitNotes } = fitFigure(loaded.project);
-    const legendNote = shortenedLegendNote(buildScene(project));
-    for (const n of [...loaded.notes, ...fitNotes, ...(legendNote ? [legendNote] : [])]) io.err(`note: ${n}`);
-    const list = await outputs(project, opts, io);
+    const fitted = fitFigure(loaded.project);
+    for (const n of [...loaded.notes, ...fitted.notes]) io.err(`note: ${n}`);
+    const list = await outputs(fitted, opts, io);
     const files = list.map((o) => o.file);
     try {
       writeAllOrNothing(files);
