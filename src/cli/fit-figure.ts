@@ -7,7 +7,7 @@ import { shortenedLegendNote } from "../plot/legend";
 import { exportScene } from "../formats/figure-file";
 import { presetOf } from "../plot/layout";
 import { CUSTOM_MM_LIMITS } from "../project/limits";
-import { InputError } from "./inputs";
+import { InputError } from "./read-input";
 
 /** Font sizes the figure accepts, pt (as the project schema). */
 const FONT_PT_LIMITS: readonly [number, number] = [4, 72];

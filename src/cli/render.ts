@@ -5,8 +5,8 @@ import { existsSync, realpathSync, statSync } from "node:fs";
 import { basename, dirname, join, resolve } from "node:path";
 import { pathToFileURL } from "node:url";
 import { parseArgs, USAGE, type CliOptions } from "./args";
-import { InputError, type PreParsed } from "./inputs";
-import { loadAnyProject } from "./pdf-input";
+import { loadProject, type PreParsed } from "./inputs";
+import { InputError } from "./read-input";
 import { fitFigure, type FittedFigure } from "./fit-figure";
 import { pngPixelSize, renderPng } from "./png";
 import { writeAllOrNothing, type OutputFile } from "./write-atomic";
@@ -233,7 +233,7 @@ async function run(argv: readonly string[], io: Io, preParsed: PreParsed): Promi
   try {
     for (const p of [opts.out, opts.png, opts.modelsCsv, opts.overlap, opts.overlapIntervals]) if (p) checkOutputDir(p);
     checkDistinctPaths(opts);
-    const loaded = await loadAnyProject(opts, preParsed);
+    const loaded = await loadProject(opts, preParsed);
     const fitted = fitFigure(loaded.project);
     for (const n of [...loaded.notes, ...fitted.notes]) io.err(`note: ${n}`);
     const list = await outputs(fitted, opts, io);
