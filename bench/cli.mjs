@@ -4,6 +4,7 @@
 // BENCH_RUNS runs (default 5); never passes or fails on the numbers.
 import { spawnSync } from "node:child_process";
 import { existsSync, mkdirSync, readdirSync, readFileSync, statSync, writeFileSync } from "node:fs";
+import { loadavg } from "node:os";
 import { dirname, join, resolve } from "node:path";
 import { fileURLToPath } from "node:url";
 
@@ -68,7 +69,13 @@ const files = readdirSync(CURVES)
   .filter((f) => f.endsWith(".csv"))
   .sort()
   .map((f) => join(CURVES, f));
+// The load average says how far the times are from an idle machine's (2 cores: above 2, runs wait for a CPU).
+const load = () =>
+  loadavg()
+    .map((x) => x.toFixed(2))
+    .join(", ");
 console.log(`inputs: ${files.length} invented files in ${CURVES}; median of ${RUNS} runs (target ≤ 0.5 s)`);
+console.log(`  machine load (1, 5, 15 min) before: ${load()}`);
 const svg = join(OUT, "cli-bin.svg");
 const nodeMs = timed("node -e 0 (Node's own start-up)", process.execPath, ["-e", "0"]);
 const binMs = timed("axband render (the bin: node src/cli/run.mjs)", process.execPath, [
@@ -99,6 +106,7 @@ if (hasGnuplot()) {
   const gnuMs = timed("gnuplot (plain lines, no fills)", "gnuplot", [script], out);
   console.log(`  ratio axband/gnuplot: ${(binMs / gnuMs).toFixed(2)}×`);
 } else console.log("  gnuplot: skipped (not installed; Debian: apt-get install gnuplot-nox)");
+console.log(`  machine load (1, 5, 15 min) after: ${load()}`);
 // The reference figure script and the thinning error: bench/render.mjs.
 const first = readFileSync(svg, "utf8").slice(0, 5);
 if (first !== "<?xml") console.log("  (unexpected SVG output)");

@@ -229,13 +229,13 @@ async function measureThinning(manifest) {
   const { register } = await import("tsx/esm/api");
   register();
   const { parseArgs } = await import("../src/cli/args.ts");
-  const { loadProject } = await import("../src/cli/inputs.ts");
+  const { loadCsvProject } = await import("../src/cli/inputs.ts");
   const { buildScene } = await import("../src/plot/scene.ts");
   const { presetOf } = await import("../src/plot/layout.ts");
   const { EXPORT_RESOLUTION, rasterResolution } = await import("../src/formats/figure-file.ts");
   const args = parseArgs(cliArgs(manifest, join(OUT, "unused.svg")).slice(3));
   if (!args.ok) throw new Error(args.error);
-  const { project } = loadProject(args.options);
+  const { project } = loadCsvProject(args.options);
   const size = presetOf(project.figure);
   const base = { widthPx: size.widthPx, heightPx: size.heightPx };
   const full = buildScene(project, { ...base, thin: false });

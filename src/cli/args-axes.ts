@@ -1,6 +1,6 @@
 // The renderer's axis options (--axis-unit, --top-axis, --frequency-unit, --ticks): read apart from the main
 // parser so the option list stays one line there, and applied to the figure like the size and font options.
-import { AXIS_MASS_UNITS, FREQUENCY_AXIS_UNITS } from "../physics/units";
+import { AXIS_MASS_UNITS, FREQUENCY_UNIT_SETTINGS, TICK_SIDES, TOP_AXES } from "../project/figure-options";
 import type { AxisMassUnit, Figure, FrequencyUnitSetting, TickSides, TopAxis } from "../project/types";
 import { parseMassUnit } from "../formats/units";
 
@@ -39,15 +39,15 @@ export function readAxesOption(name: string, value: string, o: AxesCliOptions): 
       return null;
     }
     case "--top-axis":
-      if ((r = oneOf(name, value, ["none", "fa", "frequency"] as const)) !== value) return r;
+      if ((r = oneOf(name, value, TOP_AXES)) !== value) return r;
       o.topAxis = value as TopAxis;
       return null;
     case "--frequency-unit":
-      if ((r = oneOf(name, value, ["auto", ...FREQUENCY_AXIS_UNITS] as const)) !== value) return r;
+      if ((r = oneOf(name, value, FREQUENCY_UNIT_SETTINGS)) !== value) return r;
       o.frequencyUnit = value as FrequencyUnitSetting;
       return null;
     case "--ticks":
-      if ((r = oneOf(name, value, ["out", "all"] as const)) !== value) return r;
+      if ((r = oneOf(name, value, TICK_SIDES)) !== value) return r;
       o.ticks = value as TickSides;
       return null;
     default:

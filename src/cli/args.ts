@@ -2,24 +2,11 @@
 // the usage text. Kept apart from render.ts so the rules (roles per file, ranges, presets) are unit-testable.
 import type { CurveRole, ExclusionMark, LegendPlace, SizePreset } from "../project/types";
 import { LEGEND_SCALE_LIMITS } from "../project/limits";
+import { CURVE_ROLES, EXCLUSION_MARKS, FIGURE_FONTS, LEGEND_PLACES, SIZE_PRESETS } from "../project/figure-options";
 import type { FigureFontFamily } from "../formats/pdf/fonts";
 import { overlapFormat } from "./overlap-out";
 import { parseMassText, type ParsedValue } from "../formats/axis-range";
 import { AXES_OPTIONS, AXES_USAGE, readAxesOption, type AxesCliOptions } from "./args-axes";
-
-export const ROLES: readonly CurveRole[] = ["exclusion", "projection", "region"];
-export const PRESET_NAMES: readonly SizePreset[] = ["slide", "single-column", "double-column", "custom"];
-export const LEGEND_PLACES: readonly LegendPlace[] = [
-  "auto",
-  "top-left",
-  "top-right",
-  "bottom-left",
-  "bottom-right",
-  "outside-right",
-  "below",
-  "above",
-  "hidden",
-];
 
 /** One input file; `role` is set for CSV files (from the --role in effect for it). */
 export interface CliInput {
@@ -211,16 +198,16 @@ const OPTIONS: readonly OptionSpec[] = [
   { names: ["--scale"], apply: positiveInto("scale") },
   { names: ["--width-mm"], apply: positiveInto("widthMm") },
   { names: ["--height-mm"], apply: positiveInto("heightMm") },
-  { names: ["--preset"], apply: oneOf(PRESET_NAMES, (o, v) => (o.preset = v)) },
+  { names: ["--preset"], apply: oneOf(SIZE_PRESETS, (o, v) => (o.preset = v)) },
   {
     names: ["--role"],
     apply: (s, v, name) =>
-      ROLES.includes(v as CurveRole)
+      CURVE_ROLES.includes(v as CurveRole)
         ? void s.roles.push(v as CurveRole)
-        : `${name}: expected one of ${ROLES.join(", ")}, got "${v}"`,
+        : `${name}: expected one of ${CURVE_ROLES.join(", ")}, got "${v}"`,
   },
   { names: ["--model"], apply: (s, v) => void s.o.models.push(v) },
-  { names: ["--font"], apply: oneOf(["sans", "serif"] as const, (o, v) => (o.font = v)) },
+  { names: ["--font"], apply: oneOf(FIGURE_FONTS, (o, v) => (o.font = v)) },
   { names: ["--legend"], apply: oneOf(LEGEND_PLACES, (o, v) => (o.legend = v)) },
   { names: ["--legend-scale"], apply: legendScale },
   { names: ["--mass-unit"], apply: (s, v) => void (s.o.massUnit = v) },
@@ -236,8 +223,8 @@ const OPTIONS: readonly OptionSpec[] = [
 ];
 
 function exclusions(s: ParseState, value: string, name: string): string | void {
-  const marks: readonly ExclusionMark[] = ["hatch", "fill", "hatch-fill"];
-  if (!marks.includes(value as ExclusionMark)) return `${name}: expected hatch, fill or hatch-fill, got "${value}"`;
+  if (!EXCLUSION_MARKS.includes(value as ExclusionMark))
+    return `${name}: expected ${EXCLUSION_MARKS.slice(0, -1).join(", ")} or ${EXCLUSION_MARKS.at(-1)}, got "${value}"`;
   s.o.exclusions = value as ExclusionMark;
 }
 

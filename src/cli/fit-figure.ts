@@ -1,10 +1,13 @@
 // Makes every figure the schema accepts drawable before any writer sees it: a custom size outside the drawn
 // limits and text too large for the plot to fit are named in a note (or refused), never passed on silently.
 import type { Project } from "../project/types";
+import type { Scene } from "../plot/scene-types";
 import { buildScene } from "../plot/scene";
+import { shortenedLegendNote } from "../plot/legend";
+import { exportScene } from "../formats/figure-file";
 import { presetOf } from "../plot/layout";
 import { CUSTOM_MM_LIMITS } from "../project/limits";
-import { InputError } from "./inputs";
+import { InputError } from "./read-input";
 
 /** Font sizes the figure accepts, pt (as the project schema). */
 const FONT_PT_LIMITS: readonly [number, number] = [4, 72];
@@ -16,18 +19,33 @@ function plotFits(project: Project): boolean {
   return x >= 0 && y >= 0 && w > 0 && h > 0 && x + w <= s.widthPx && y + h <= s.heightPx;
 }
 
-/** What the figure itself changed to fit (a long title wrapped or shrunk), as notes. */
-function sceneNotes(project: Project): string[] {
-  return (buildScene(project).notes ?? []).map((n) => `figure: ${n}`);
+/** The figure to draw, what was changed for it, and its export scene (built once: the SVG is written from it). */
+export interface FittedFigure {
+  project: Project;
+  notes: string[];
+  /** The scene the SVG export draws (exportScene of `project`, with its data). */
+  scene: Scene;
 }
 
 /**
- * The project to draw and notes on what was changed for it: a custom size outside the drawn limits is noted
- * (the plot core clamps it), and a text size that pushes the plot off the figure is lowered to the largest
- * whole pt that fits; what the figure changes itself (a long title) is noted too. Throws InputError when no text
- * size fits.
+ * The export scene of the project as drawn, and notes on what the figure changed itself: a long title wrapped
+ * or shrunk, legend entries shortened or legend text reduced. From the scene with the data, as the auto legend
+ * place (and so what the legend must shorten) depends on where the curves run.
  */
-export function fitFigure(project: Project): { project: Project; notes: string[] } {
+function withScene(project: Project, notes: string[]): FittedFigure {
+  const scene = exportScene(project);
+  const legendNote = shortenedLegendNote(scene);
+  const sceneNotes = (scene.notes ?? []).map((n) => `figure: ${n}`);
+  return { project, scene, notes: [...notes, ...sceneNotes, ...(legendNote ? [legendNote] : [])] };
+}
+
+/**
+ * The project to draw, notes on what was changed for it, and its export scene: a custom size outside the drawn
+ * limits is noted (the plot core clamps it), and a text size that pushes the plot off the figure is lowered to
+ * the largest whole pt that fits; what the figure changes itself (a long title, the legend) is noted too.
+ * Throws InputError when no text size fits.
+ */
+export function fitFigure(project: Project): FittedFigure {
   const f = project.figure;
   const notes: string[] = [];
   const [minMm, maxMm] = CUSTOM_MM_LIMITS;
@@ -44,7 +62,7 @@ export function fitFigure(project: Project): { project: Project; notes: string[]
     curves: project.curves.map((c) => ({ ...c, massEv: new Float64Array(0), gInvGeV: new Float64Array(0) })),
   };
   const withFont = (pt: number): Project => ({ ...light, figure: { ...light.figure, fontPt: pt } });
-  if (plotFits(light)) return { project, notes: [...notes, ...sceneNotes(light)] };
+  if (plotFits(light)) return withScene(project, notes);
   const drawn = presetOf(f);
   const size = `${drawn.widthMm} × ${drawn.heightMm} mm`;
   for (let pt = Math.min(FONT_PT_LIMITS[1], Math.floor(f.fontPt)); pt >= FONT_PT_LIMITS[0]; pt--) {
@@ -52,7 +70,7 @@ export function fitFigure(project: Project): { project: Project; notes: string[]
     notes.push(
       `figure: ${f.fontPt} pt text leaves no room for the plot in ${size}; drawn with ${pt} pt text (set the text size or the figure size in the app to choose)`,
     );
-    return { project: { ...project, figure: { ...f, fontPt: pt } }, notes: [...notes, ...sceneNotes(withFont(pt))] };
+    return withScene({ ...project, figure: { ...f, fontPt: pt } }, notes);
   }
   throw new InputError(
     `figure: ${size} leaves no room for the plot even with ${FONT_PT_LIMITS[0]} pt text; choose a larger size (--preset custom --width-mm W --height-mm H)`,

@@ -1,27 +1,15 @@
-// Turns the renderer's input files into one project: a project file or an exported SVG through the same
-// validation as the app, or CSV files through the app's importer and factories with ranges fitted to the data.
+// Turns the renderer's input files into one project: CSV files through the app's importer and factories with
+// ranges fitted to the data; a project file, exported SVG or PDF through the app's validation, loaded on demand.
 import { applyAxesOptions } from "./args-axes";
-import { readFileSync } from "node:fs";
 import { basename } from "node:path";
 import type { Curve, Model, Project } from "../project/types";
 import { autoModelLabel, defaultFigure, emptyProject, newCurve, newModel } from "../project/defaults";
 import { minusSigns } from "../plot/format";
-import {
-  decodeImportBytes,
-  formatProblem,
-  formatRejection,
-  labelFromFileName,
-  parseCurveText,
-  type CurveParseResult,
-} from "../formats/csv";
-import { projectFromFile } from "../formats/project-file";
+import { formatProblem, formatRejection, labelFromFileName, type CurveParseResult } from "../formats/csv";
 import { parseEOverN } from "../physics/eovern-parse";
-import { extractProjectFromSvg } from "../formats/figure-file";
 import type { CliInput, CliOptions } from "./args";
 import { fitRanges } from "./fit-ranges";
-
-/** A problem with the user's input or options: reported on stderr, exit code 2, nothing written. */
-export class InputError extends Error {}
+import { InputError, parseCsvFile } from "./read-input";
 
 /** The project to draw, and what the user should know about how it was read (printed on stderr). */
 export interface LoadedProject {
@@ -31,58 +19,6 @@ export interface LoadedProject {
 
 /** Most `file:row:column: reason` lines printed before "… and N more". */
 export const MAX_ROW_MESSAGES = 20;
-
-function readText(path: string): string {
-  return readBytes(path).toString("utf8");
-}
-
-/** A CSV file's text, decoded as the app's import decodes it (UTF-16 by its BOM, UTF-8, else Windows-1252). */
-function readCsvText(path: string): { text: string; encoding: string } {
-  const d = decodeImportBytes(readBytes(path));
-  if (!d.ok) throw new InputError(formatProblem(path, d.problem));
-  return d;
-}
-
-function readBytes(path: string): Buffer {
-  try {
-    return readFileSync(path);
-  } catch (e) {
-    const code = (e as NodeJS.ErrnoException).code;
-    const why =
-      code === "ENOENT"
-        ? "no such file"
-        : code === "EISDIR"
-          ? "is a directory"
-          : code === "EACCES"
-            ? "permission denied"
-            : (e as Error).message;
-    throw new InputError(`${path}: cannot read the file (${why})`);
-  }
-}
-
-function loadProjectFile(input: CliInput): LoadedProject {
-  const text = readText(input.path);
-  const r = projectFromFile(text, basename(input.path));
-  if (!r.ok) throw new InputError(`${input.path}: not a usable axband project: ${r.error}`);
-  return { project: r.project, notes: r.repairs.map((s) => `${input.path}: repaired on loading: ${s}`) };
-}
-
-function loadSvg(input: CliInput): LoadedProject {
-  const r = extractProjectFromSvg(readText(input.path));
-  if (!r.ok) throw new InputError(`${input.path}: ${r.error}`);
-  return { project: r.project, notes: r.repairs.map((s) => `${input.path}: repaired on loading: ${s}`) };
-}
-
-/** Reads and parses one CSV input as the app's import would (the worker threads call this too). */
-export function parseCsvFile(path: string, opts: Pick<CliOptions, "massUnit" | "couplingUnit">): CurveParseResult {
-  const { text, encoding } = readCsvText(path);
-  return parseCurveText(text, {
-    fileName: basename(path),
-    massUnit: opts.massUnit,
-    couplingUnit: opts.couplingUnit,
-    encoding,
-  });
-}
 
 /** Parse results found ahead of loading (by parse-parallel.ts), by input index; undefined: parse here. */
 export type PreParsed = readonly (CurveParseResult | undefined)[];
@@ -192,18 +128,29 @@ export function undrawablePointNotes(project: Project, source: string): string[]
 }
 
 /**
- * Reads every input and returns the project to draw; throws InputError on anything the user must fix.
+ * The project of CSV inputs, with the figure options applied; throws InputError on anything the user must fix.
  * `preParsed` holds CSV parse results already made elsewhere (same parser, same options), by input index.
  * @default preParsed [] (every file read and parsed here)
  */
-export function loadProject(opts: CliOptions, preParsed: PreParsed = []): LoadedProject {
+export function loadCsvProject(opts: CliOptions, preParsed: PreParsed = []): LoadedProject {
+  const loaded = loadCsv(opts.inputs, opts, preParsed);
+  return { project: applyFigureOptions(loaded.project, opts), notes: loaded.notes };
+}
+
+/**
+ * Reads every input and returns the project to draw; throws InputError on anything the user must fix. The
+ * readers of project files, SVG and PDF (the schema, the PDF parser) load only for such an input.
+ * @default preParsed [] (every CSV file read and parsed here)
+ */
+export async function loadProject(opts: CliOptions, preParsed: PreParsed = []): Promise<LoadedProject> {
   const first = opts.inputs[0];
+  if (first.kind === "csv") return loadCsvProject(opts, preParsed);
   const loaded =
-    first.kind === "project"
-      ? loadProjectFile(first)
-      : first.kind === "svg"
-        ? loadSvg(first)
-        : loadCsv(opts.inputs, opts, preParsed);
-  const extra = first.kind === "csv" ? [] : undrawablePointNotes(loaded.project, first.path);
-  return { project: applyFigureOptions(loaded.project, opts), notes: [...loaded.notes, ...extra] };
+    first.kind === "pdf"
+      ? await (await import("./pdf-input")).loadPdfProject(first)
+      : (await import("./project-input")).loadSavedProject(first);
+  return {
+    project: applyFigureOptions(loaded.project, opts),
+    notes: [...loaded.notes, ...undrawablePointNotes(loaded.project, first.path)],
+  };
 }

@@ -1,7 +1,7 @@
 // Worker entry of the command-line renderer: reads, parses and prepares for drawing CSV curve files off the
 // main thread, so that several files are handled at once on a machine with more than one CPU (parse-parallel.ts).
 import { parentPort } from "node:worker_threads";
-import { parseCsvFile } from "./inputs";
+import { parseCsvFile } from "./read-input";
 import { computePrepared, preparedTransferables } from "../plot/prepare-transfer";
 import type { ParseJob, ParseReply } from "./parse-parallel";
 

@@ -1,32 +1,23 @@
-// A PDF figure exported by axband as the renderer's input: its attached project file is read back (PDF
-// parsing is asynchronous, so this sits beside the synchronous loaders of inputs.ts).
-import { readFileSync } from "node:fs";
-import type { CliOptions } from "./args";
-import { InputError, applyFigureOptions, loadProject, undrawablePointNotes, type PreParsed } from "./inputs";
+// A PDF figure exported by axband as the renderer's input: its attached project file is read back. Loaded only
+// for a PDF input (inputs.ts): the PDF reader costs other runs a good part of their start-up.
+import type { CliInput } from "./args";
+import type { LoadedProject } from "./inputs";
+import { InputError, readBytes } from "./read-input";
 
-/** As loadProject, for every input kind including an exported PDF. */
-export async function loadAnyProject(
-  opts: CliOptions,
-  preParsed: PreParsed = [],
-): Promise<ReturnType<typeof loadProject>> {
-  const first = opts.inputs[0];
-  if (first?.kind !== "pdf") return loadProject(opts, preParsed);
+/** The project attached to an exported PDF, with notes on what was repaired (figure options not applied). */
+export async function loadPdfProject(input: CliInput): Promise<LoadedProject> {
   let bytes: Uint8Array;
   try {
-    bytes = new Uint8Array(readFileSync(first.path));
+    bytes = new Uint8Array(readBytes(input.path));
   } catch {
-    throw new InputError(`${first.path}: cannot be read`);
+    throw new InputError(`${input.path}: cannot be read`);
   }
-  // The PDF reader loads only for a PDF input: it costs the other runs a good part of their start-up.
   const { extractProjectFromPdf } = await import("../formats/figure-pdf");
   const r = await extractProjectFromPdf(bytes);
-  if (!r.ok) throw new InputError(`${first.path}: ${r.error}`);
+  if (!r.ok) throw new InputError(`${input.path}: ${r.error}`);
   const notes = [
-    ...r.repairs.map((x) => `${first.path}: repaired: ${x}`),
-    ...(r.note ? [`${first.path}: ${r.note}`] : []),
+    ...r.repairs.map((x) => `${input.path}: repaired: ${x}`),
+    ...(r.note ? [`${input.path}: ${r.note}`] : []),
   ];
-  return {
-    project: applyFigureOptions(r.project, opts),
-    notes: [...notes, ...undrawablePointNotes(r.project, first.path)],
-  };
+  return { project: r.project, notes };
 }

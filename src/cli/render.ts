@@ -5,9 +5,9 @@ import { existsSync, realpathSync, statSync } from "node:fs";
 import { basename, dirname, join, resolve } from "node:path";
 import { pathToFileURL } from "node:url";
 import { parseArgs, USAGE, type CliOptions } from "./args";
-import { InputError, type PreParsed } from "./inputs";
-import { loadAnyProject } from "./pdf-input";
-import { fitFigure } from "./fit-figure";
+import { loadProject, type PreParsed } from "./inputs";
+import { InputError } from "./read-input";
+import { fitFigure, type FittedFigure } from "./fit-figure";
 import { pngPixelSize, renderPng } from "./png";
 import { writeAllOrNothing, type OutputFile } from "./write-atomic";
 import {
@@ -18,8 +18,7 @@ import {
   rasterResolution,
 } from "../formats/figure-file";
 import { presetOf } from "../plot/layout";
-import { shortenedLegendNote } from "../plot/legend";
-import { buildScene } from "../plot/scene";
+import { writeSvg } from "../plot/svg";
 import { modelsToCsv } from "../formats/model-csv";
 import { AXBAND_VERSION } from "./version";
 import type { Project } from "../project/types";
@@ -189,11 +188,12 @@ function pngOutput(project: Project, opts: CliOptions, path: string, bare: strin
 }
 
 /** Every output the options ask for, in the order they are reported. */
-async function outputs(project: Project, opts: CliOptions, io: Io): Promise<Output[]> {
+async function outputs({ project, scene }: FittedFigure, opts: CliOptions, io: Io): Promise<Output[]> {
   const list: Output[] = [];
   const asPdf = opts.out !== undefined && /\.pdf$/i.test(opts.out);
-  // The project is embedded into the written SVG only; rasters are drawn from the lighter bare SVG.
-  const bare = opts.out && !asPdf ? exportFigureSvg(project, { embedProject: false }) : "";
+  // The project is embedded into the written SVG only; rasters are drawn from the lighter bare SVG. Written from
+  // the scene fitFigure built (what exportFigureSvg(project, { embedProject: false }) draws), not a second one.
+  const bare = opts.out && !asPdf ? writeSvg(scene) : "";
   if (opts.out)
     list.push(asPdf ? await pdfOutput(project, opts, opts.out, io) : svgOutput(project, opts, opts.out, bare, io));
   if (opts.png) list.push(pngOutput(project, opts, opts.png, bare));
@@ -233,11 +233,10 @@ async function run(argv: readonly string[], io: Io, preParsed: PreParsed): Promi
   try {
     for (const p of [opts.out, opts.png, opts.modelsCsv, opts.overlap, opts.overlapIntervals]) if (p) checkOutputDir(p);
     checkDistinctPaths(opts);
-    const loaded = await loadAnyProject(opts, preParsed);
-    const { project, notes: fitNotes } = fitFigure(loaded.project);
-    const legendNote = shortenedLegendNote(buildScene(project));
-    for (const n of [...loaded.notes, ...fitNotes, ...(legendNote ? [legendNote] : [])]) io.err(`note: ${n}`);
-    const list = await outputs(project, opts, io);
+    const loaded = await loadProject(opts, preParsed);
+    const fitted = fitFigure(loaded.project);
+    for (const n of [...loaded.notes, ...fitted.notes]) io.err(`note: ${n}`);
+    const list = await outputs(fitted, opts, io);
     const files = list.map((o) => o.file);
     try {
       writeAllOrNothing(files);

@@ -8,6 +8,7 @@
 import { existsSync, readdirSync, statSync, mkdirSync, rmSync } from "node:fs";
 import { dirname, join, resolve } from "node:path";
 import { fileURLToPath, pathToFileURL } from "node:url";
+import { bundleOptions } from "./bundle-options.mjs";
 
 const repo = resolve(dirname(fileURLToPath(import.meta.url)), "../..");
 const cache = join(repo, "node_modules", ".cache", "axband");
@@ -39,24 +40,7 @@ if (stale) {
   mkdirSync(cache, { recursive: true });
   // Chunk names carry content hashes: drop the previous build's so they do not pile up.
   for (const f of readdirSync(cache)) if (f.endsWith(".mjs")) rmSync(join(cache, f), { force: true });
-  // Packages are bundled too (one file to load instead of zod's and d3's many: ~40 ms less start-up), except
-  // resvg, a native module loaded only for PNG output; a package upgrade touches package-lock.json, so rebuilds.
-  await build({
-    entryPoints: {
-      render: join(repo, "src", "cli", "start.ts"),
-      "parse-worker": join(repo, "src", "cli", "parse-worker.ts"),
-    },
-    bundle: true,
-    platform: "node",
-    format: "esm",
-    target: "node20",
-    external: ["@resvg/resvg-js"],
-    // Split so that start.ts's dynamic import of the renderer loads its modules after the workers start.
-    splitting: true,
-    outdir: cache,
-    outExtension: { ".js": ".mjs" },
-    logLevel: "warning",
-  });
+  await build(bundleOptions(repo, cache));
 }
 const { mainAsync } = await import(pathToFileURL(out).href);
 const argv = process.argv.slice(2);

@@ -2,6 +2,17 @@
 // (./restore.ts) reads untrusted input with.
 import { z } from "zod";
 import { CUSTOM_MM_LIMITS, LEGEND_SCALE_LIMITS, PROJECT_LIMITS } from "./limits";
+import {
+  AXIS_MASS_UNITS,
+  CURVE_ROLES,
+  EXCLUSION_MARKS,
+  FIGURE_FONTS,
+  FREQUENCY_UNIT_SETTINGS,
+  LEGEND_PLACES,
+  SIZE_PRESETS,
+  TICK_SIDES,
+  TOP_AXES,
+} from "./figure-options";
 import { isRationalText, rationalValue } from "./rational-text";
 import { PROJECT_VERSION } from "./types";
 import { MIN_RANGE_DECADES, saneRange } from "./view-range";
@@ -18,32 +29,16 @@ export const hexColour = z
   .string()
   .regex(/^#(?:[0-9a-fA-F]{3,4}|[0-9a-fA-F]{6}|[0-9a-fA-F]{8})$/, "expected a colour such as #117A8B");
 export const lineStyle = z.enum(["solid", "dashed", "dotted", "dashdot"]);
-export const curveRole = z.enum(["exclusion", "projection", "region"]);
-export const exclusionMark = z.enum(["hatch", "fill", "hatch-fill"]);
-// "auto" joined in schema version 1 without a bump: every older file still validates, and an older build
-// reading "auto" repairs it to its default legend place (a noted repair), so no migration is needed.
-export const legendPlace = z.enum([
-  "auto",
-  "top-left",
-  "top-right",
-  "bottom-left",
-  "bottom-right",
-  "outside-right",
-  // "below" and "above" joined without a bump in the same way as "auto".
-  "below",
-  "above",
-  "hidden",
-]);
-export const sizePreset = z.enum(["slide", "single-column", "double-column", "custom"]);
-export const topAxis = z.enum(["none", "fa", "frequency"]);
-// Joined in schema version 1 without a bump: the key is optional on reading (missing = "sans", as files were
-// drawn before), and an older build ignores it.
-export const figureFont = z.enum(["sans", "serif"]);
+export const curveRole = z.enum(CURVE_ROLES);
+export const exclusionMark = z.enum(EXCLUSION_MARKS);
+export const legendPlace = z.enum(LEGEND_PLACES);
+export const sizePreset = z.enum(SIZE_PRESETS);
+export const topAxis = z.enum(TOP_AXES);
+export const figureFont = z.enum(FIGURE_FONTS);
 export const yView = z.enum(["coupling", "normalized", "g-gamma"]);
-// Axis units and tick sides joined in schema version 1 without a bump, as the font did (missing = default).
-export const axisMassUnit = z.enum(["eV", "meV", "ueV", "neV"]);
-export const frequencyUnitSetting = z.enum(["auto", "Hz", "kHz", "MHz", "GHz", "THz"]);
-export const tickSides = z.enum(["out", "all"]);
+export const axisMassUnit = z.enum(AXIS_MASS_UNITS);
+export const frequencyUnitSetting = z.enum(FREQUENCY_UNIT_SETTINGS);
+export const tickSides = z.enum(TICK_SIDES);
 export const physicsRef = z.enum(["2016", "2019", "custom"]);
 export const modelKind = z.enum(["line", "interval", "between", "set"]);
 export const setDraw = z.enum(["lines", "extremes", "central"]);

@@ -2,29 +2,38 @@
 // Everything else (lines, bands, scenes, overlap tables) is derived from it and never stored.
 import type { FermionInput } from "../physics/anomaly-types";
 import type { ScalarInput } from "../physics/charges/types";
-import type { AxisMassUnit, FrequencyAxisUnit } from "../physics/units";
+import type { AxisMassUnit } from "../physics/units";
+import type {
+  CURVE_ROLES,
+  EXCLUSION_MARKS,
+  FIGURE_FONTS,
+  FREQUENCY_UNIT_SETTINGS,
+  LEGEND_PLACES,
+  SIZE_PRESETS,
+  TICK_SIDES,
+  TOP_AXES,
+} from "./figure-options";
 
 export const PROJECT_VERSION = 2 as const;
 
 export type LineStyle = "solid" | "dashed" | "dotted" | "dashdot";
-export type CurveRole = "exclusion" | "projection" | "region";
+export type CurveRole = (typeof CURVE_ROLES)[number];
 /** How an exclusion curve marks its excluded side: short hatches along the edge, the translucent fill, or both. */
-export type ExclusionMark = "hatch" | "fill" | "hatch-fill";
+export type ExclusionMark = (typeof EXCLUSION_MARKS)[number];
 /**
  * Where the legend goes; "auto" is a free inner corner, else below or outside right (src/plot/legend-place.ts);
  * "below" sits under the x-axis title, "above" between the figure title and the plot, both in columns.
  */
-export type LegendPlace =
-  "auto" | "top-left" | "top-right" | "bottom-left" | "bottom-right" | "outside-right" | "below" | "above" | "hidden";
-export type SizePreset = "slide" | "single-column" | "double-column" | "custom";
-export type TopAxis = "none" | "fa" | "frequency";
+export type LegendPlace = (typeof LEGEND_PLACES)[number];
+export type SizePreset = (typeof SIZE_PRESETS)[number];
+export type TopAxis = (typeof TOP_AXES)[number];
 export type { AxisMassUnit };
 /** Unit of the frequency top axis: chosen to suit the visible range ("auto"), or fixed. */
-export type FrequencyUnitSetting = "auto" | FrequencyAxisUnit;
+export type FrequencyUnitSetting = (typeof FREQUENCY_UNIT_SETTINGS)[number];
 /** Ticks outward on the left and bottom axes (and a top axis), or on all four sides. */
-export type TickSides = "out" | "all";
+export type TickSides = (typeof TICK_SIDES)[number];
 /** The figure's font family: Computer Modern Sans or Serif (LaTeX's own look). */
-export type FigureFont = "sans" | "serif";
+export type FigureFont = (typeof FIGURE_FONTS)[number];
 /** y axis: g_aγγ itself, |E/N − c_γ|, or |g_γ| = |E/N − c_γ|/2 (model lines horizontal in the last two). */
 export type YView = "coupling" | "normalized" | "g-gamma";
 

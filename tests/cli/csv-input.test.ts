@@ -3,14 +3,15 @@
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { parseArgs } from "../../src/cli/args";
-import { InputError, loadProject } from "../../src/cli/inputs";
+import { loadCsvProject } from "../../src/cli/inputs";
+import { InputError } from "../../src/cli/read-input";
 
 const REPRO = join(__dirname, "../formats/csv/repro");
 
 function load(...files: string[]) {
   const a = parseArgs([...files.map((f) => join(REPRO, f)), "-o", "/tmp/unused.svg"]);
   if (!a.ok) throw new Error(a.error);
-  return loadProject(a.options);
+  return loadCsvProject(a.options);
 }
 
 function refusal(file: string): string {

@@ -4,8 +4,9 @@ import { describe, expect, it } from "vitest";
 import { readFileSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { parseArgs } from "../../src/cli/args";
-import { loadProject } from "../../src/cli/inputs";
-import { AXBAND_PROJECT_NS, exportFigureSvg, extractProjectFromSvg } from "../../src/formats/figure-file";
+import { loadCsvProject } from "../../src/cli/inputs";
+import { AXBAND_PROJECT_NS, exportFigureSvg } from "../../src/formats/figure-file";
+import { extractProjectFromSvg } from "../../src/formats/figure-read";
 import { parseXml } from "./svg-checks";
 import { tempDir, runRender as run } from "./fixtures";
 
@@ -32,7 +33,7 @@ describe("render with curve data over the embedding cap", () => {
     expect(el.getAttribute("curves")).toBe("omitted");
     const parsed = parseArgs(args);
     if (!parsed.ok) throw new Error(parsed.error);
-    expect(svg).toBe(exportFigureSvg(loadProject(parsed.options).project));
+    expect(svg).toBe(exportFigureSvg(loadCsvProject(parsed.options).project));
 
     const back = extractProjectFromSvg(svg);
     expect(back.ok && back.omittedCurveCount).toBe(1);

@@ -4,7 +4,8 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import { readdirSync, readFileSync, writeFileSync, existsSync } from "node:fs";
 import { join } from "node:path";
-import { exportFigureSvg, extractProjectFromSvg } from "../../src/formats/figure-file";
+import { exportFigureSvg } from "../../src/formats/figure-file";
+import { extractProjectFromSvg } from "../../src/formats/figure-read";
 import { readPngDpi, readPngSize, pngChunksValid } from "../../src/formats/png-meta";
 import { projectsEqual } from "../../src/project/json";
 import { projectFromFile } from "../../src/formats/project-file";

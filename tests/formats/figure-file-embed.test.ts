@@ -16,9 +16,9 @@ import {
   embedProjectInSvgWithInfo,
   exportFigureSvg,
   exportFigureSvgWithInfo,
-  extractProjectFromSvg,
   projectMetadata,
 } from "../../src/formats/figure-file";
+import { extractProjectFromSvg } from "../../src/formats/figure-read";
 import { smallProject } from "../cli/fixtures";
 import { parseXml, unsafeParts } from "../cli/svg-checks";
 

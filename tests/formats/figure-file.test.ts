@@ -9,8 +9,8 @@ import {
   rasterResolution,
   exportFigureSvg,
   exportSizeInches,
-  extractProjectFromSvg,
 } from "../../src/formats/figure-file";
+import { extractProjectFromSvg } from "../../src/formats/figure-read";
 import { projectsEqual } from "../../src/project/json";
 import { restoreProject } from "../../src/project/restore";
 import type { SizePreset } from "../../src/project/types";

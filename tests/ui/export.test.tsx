@@ -8,7 +8,8 @@ import { ExportMenu } from "../../src/ui/export/ExportMenu";
 import { pngTarget, svgSize } from "../../src/ui/export/png";
 import { useAxband } from "../../src/ui/store";
 import { defaultProject } from "../../src/data";
-import { exportFigureSvg, extractProjectFromSvg } from "../../src/formats/figure-file";
+import { exportFigureSvg } from "../../src/formats/figure-file";
+import { extractProjectFromSvg } from "../../src/formats/figure-read";
 import { captureDownloads, useProject } from "./export-helpers";
 
 beforeEach(() => useProject({ ...defaultProject(), name: "Export test" }));

@@ -11,7 +11,7 @@ import { useImport } from "../../src/ui/importer/import-store";
 import { useAxband } from "../../src/ui/store";
 import { emptyProject } from "../../src/data";
 import { parseArgs } from "../../src/cli/args";
-import { loadProject } from "../../src/cli/inputs";
+import { loadCsvProject } from "../../src/cli/inputs";
 
 const REPRO = join(__dirname, "../formats/csv/repro/labelcomment.csv");
 
@@ -48,7 +48,7 @@ describe("# label: comment", () => {
     expect(c.citation).toBe('<img src=x onerror=alert("cit")>');
     const a = parseArgs([REPRO, "-o", "/tmp/unused.svg"]);
     if (!a.ok) throw new Error(a.error);
-    expect(loadProject(a.options).project.curves[0].label).toBe(c.label);
+    expect(loadCsvProject(a.options).project.curves[0].label).toBe(c.label);
     // Shown as text, never as markup.
     expect(document.querySelector("script")).toBeNull();
   });

@@ -1,7 +1,7 @@
 // Compact form of link formats: a table of fields per object (long name, short key, base value left out) and
 // the generic encode/decode through such tables; each link version defines its own frozen tables.
 import { isPlainObject, projectsEqual } from "../../project/json";
-import { PROJECT_LIMITS } from "../../project/schema";
+import { PROJECT_LIMITS } from "../../project/limits";
 import { goesTo, type Persistence, type PersistTarget } from "../../project/state-table";
 import type { Project } from "../../project/types";
 

@@ -2,7 +2,7 @@
 // figure exported by axband (the project travels in the SVG's <metadata>, as the PDF's attached file). Validation is the data core's; this only
 // routes the file and words the outcome.
 import { MAX_IMPORT_BYTES, projectFromFile } from "../../data";
-import { extractProjectFromSvg } from "../../formats/figure-file";
+import { extractProjectFromSvg } from "../../formats/figure-read";
 import type { Project } from "../../project/types";
 import { repairsNote } from "../store/open-notes";
 
