@@ -14,7 +14,7 @@ import type {
   YView,
 } from "../../project/types";
 import { checkRange, massRangeText, parseMassText, rangeText, type ParsedValue } from "../../formats/axis-range";
-import { massUnitInfo } from "../../physics/units";
+import { AXIS_MASS_UNITS, FREQUENCY_AXIS_UNITS, massUnitInfo } from "../../physics/units";
 import { CUSTOM_MM_LIMITS, LEGEND_SCALE_LIMITS } from "../../project/limits";
 import { useShallow } from "zustand/react/shallow";
 import { useAxband, type AxbandState } from "../store";
@@ -40,13 +40,13 @@ const TOP_AXES: { value: TopAxis; label: string }[] = [
   { value: "fa", label: "f_a [GeV]" },
   { value: "frequency", label: "frequency ν [Hz…THz]" },
 ];
-const MASS_UNITS: { value: AxisMassUnit; label: string }[] = (["eV", "meV", "ueV", "neV"] as const).map((u) => ({
+const MASS_UNITS: { value: AxisMassUnit; label: string }[] = AXIS_MASS_UNITS.map((u) => ({
   value: u,
   label: massUnitInfo(u).label,
 }));
 const FREQUENCY_UNITS: { value: FrequencyUnitSetting; label: string }[] = [
   { value: "auto", label: "automatic (suits the range)" },
-  ...(["Hz", "kHz", "MHz", "GHz", "THz"] as const).map((u) => ({ value: u, label: u })),
+  ...FREQUENCY_AXIS_UNITS.map((u) => ({ value: u, label: u })),
 ];
 const TICKS: { value: TickSides; label: string }[] = [
   { value: "out", label: "outside, left and bottom" },
