@@ -115,6 +115,7 @@ function hypot(x: number, y: number): number {
 }
 
 type Box = { x0: number; y0: number; x1: number; y1: number };
+type PlotBox = { x: number; y: number; w: number; h: number };
 
 /** Whether points a and b lie in one box grown by `pad` on every side (a cheap "may come near" test). */
 function nearBox(ax: number, ay: number, bx: number, by: number, r: Box, pad: number) {
@@ -126,6 +127,120 @@ function nearBox(ax: number, ay: number, bx: number, by: number, r: Box, pad: nu
   );
 }
 
+/** What every hatch of one edge shares (set once per edge), and the tangents of the chord being hatched. */
+interface HatchPass {
+  /** The plot grown by the hatch reach: hatches outside it are not written. */
+  r: Box;
+  /** Vertex distance of the coarse path (2.5 spacings). */
+  step: number;
+  spacing: number;
+  /** Path length over which a hatch turns from a vertex's bisector to the chord's own direction. */
+  blend: number;
+  /** Hatch length from the line's centre. */
+  len: number;
+  cosA: number;
+  sinA: number;
+  side: 1 | -1;
+  /** Tangent at the current chord's start and end (unit vectors). */
+  t0x: number;
+  t0y: number;
+  t1x: number;
+  t1y: number;
+  parts: string[];
+}
+
+/** Length of the coarse path's chords that come near the plot. */
+function visibleLength(count: number, r: Box, step: number): number {
+  let visibleLen = 0;
+  for (let k = 0; k + 1 < count; k++) {
+    const a0 = kept[k];
+    const a1 = kept[k + 1];
+    if (nearBox(edgeX[a0], edgeY[a0], edgeX[a1], edgeY[a1], r, step))
+      visibleLen += hypot(edgeX[a1] - edgeX[a0], edgeY[a1] - edgeY[a0]);
+  }
+  return visibleLen;
+}
+
+/**
+ * The shared sizes of one edge's hatches: the style's spacing, or wider where the visible edge would get more
+ * than `4 · (plot.w + plot.h) / spacingPx` hatches.
+ */
+function hatchPass(side: 1 | -1, plot: PlotBox, style: HatchStyle, lineWidthPx: number, count: number): HatchPass {
+  const step = 2.5 * style.spacingPx;
+  const reach = style.lengthPx + lineWidthPx;
+  const r = { x0: plot.x - reach, y0: plot.y - reach, x1: plot.x + plot.w + reach, y1: plot.y + plot.h + reach };
+  const visibleLen = visibleLength(count, r, step);
+  const cap = (4 * (plot.w + plot.h)) / style.spacingPx;
+  const spacing = visibleLen / style.spacingPx > cap ? visibleLen / cap : style.spacingPx;
+  const a = (style.angleDeg * Math.PI) / 180;
+  const [cosA, sinA] = [Math.cos(a), Math.sin(a)];
+  const len = style.lengthPx + lineWidthPx / 2;
+  return { r, step, spacing, blend: step / 2, len, cosA, sinA, side, t0x: 0, t0y: 0, t1x: 0, t1y: 0, parts: [] };
+}
+
+/**
+ * Set p.t1x/t1y to the tangent at the end of chord k (direction ux, uy): the bisector of this chord and the
+ * next, or this chord's own direction at the last vertex and where the two oppose.
+ */
+function endTangent(p: HatchPass, k: number, count: number, ux: number, uy: number): void {
+  p.t1x = ux;
+  p.t1y = uy;
+  if (k + 2 >= count) return;
+  const i1 = kept[k + 1];
+  const vx = edgeX[kept[k + 2]] - edgeX[i1];
+  const vy = edgeY[kept[k + 2]] - edgeY[i1];
+  const vl = hypot(vx, vy);
+  if (!(vl > 0)) return;
+  const bx = ux + vx / vl;
+  const by = uy + vy / vl;
+  const bl = hypot(bx, by);
+  if (bl > 1e-6) {
+    p.t1x = bx / bl;
+    p.t1y = by / bl;
+  }
+}
+
+/**
+ * The hatches on the chord between coarse vertices i0 and i1 (length chordLen, direction ux, uy), from path
+ * length `next` along it on, every p.spacing; returns the path length of the next hatch past the chord's start.
+ */
+function chordHatches(p: HatchPass, i0: number, i1: number, chordLen: number, ux: number, uy: number, next: number) {
+  const { r, blend, len, cosA, sinA, side } = p;
+  const fine0 = edgeLen[i0];
+  const fineLen = edgeLen[i1] - fine0;
+  let j = i0;
+  for (; next <= chordLen; next += p.spacing) {
+    // The same fraction of the fine path between the two coarse vertices: a point on the drawn line.
+    const at = fine0 + (next / chordLen) * fineLen;
+    while (j + 1 < i1 && edgeLen[j + 1] < at) j++;
+    const seg = edgeLen[j + 1] - edgeLen[j];
+    const f = seg > 0 ? (at - edgeLen[j]) / seg : 0;
+    const px = edgeX[j] + f * (edgeX[j + 1] - edgeX[j]);
+    const py = edgeY[j] + f * (edgeY[j + 1] - edgeY[j]);
+    if (px < r.x0 || px > r.x1 || py < r.y0 || py > r.y1) continue;
+    // Turn from the start's bisector to the chord's own direction over the first half step, and on to the
+    // end's bisector over the last: a long straight chord keeps its hatches square to it.
+    const ws = Math.max(0, 1 - next / blend);
+    const we = Math.max(0, 1 - (chordLen - next) / blend);
+    const wu = Math.max(0, 1 - ws - we);
+    let tx = ws * p.t0x + we * p.t1x + wu * ux;
+    let ty = ws * p.t0y + we * p.t1y + wu * uy;
+    const tn = hypot(tx, ty);
+    if (tn < 1e-6) {
+      tx = ux;
+      ty = uy;
+    } else {
+      tx /= tn;
+      ty /= tn;
+    }
+    // Unit normal into the excluded side, turned by the style's angle towards the direction of travel.
+    const nx = side * ty;
+    const ny = -side * tx;
+    p.parts.push(`M${r2(px)} ${r2(py)}l${r2(len * (cosA * nx + sinA * tx))} ${r2(len * (cosA * ny + sinA * ty))}`);
+  }
+  return next;
+}
+
 /**
  * Short strokes on the excluded side of an edge. They are spaced evenly along a coarse copy of the edge
  * (vertices 2.5 spacings apart) and square to it, turning towards the bisectors near its vertices so they turn
@@ -134,42 +249,16 @@ function nearBox(ax: number, ay: number, bx: number, by: number, r: Box, pad: nu
  * the plot are written, at most `4 · (plot.w + plot.h) / spacingPx` of them (a wild edge gets wider spacing):
  * the work is O(n), the output bounded by the plot size.
  */
-// Hot loop: long on purpose (one pass per chord with the tangents in locals, no allocation per hatch).
-export function hatchEdge(
-  e: HatchEdge,
-  plot: { x: number; y: number; w: number; h: number },
-  style: HatchStyle,
-  lineWidthPx: number,
-): Hatches {
+export function hatchEdge(e: HatchEdge, plot: PlotBox, style: HatchStyle, lineWidthPx: number): Hatches {
   if (!(style.spacingPx > 0) || !(style.lengthPx > 0)) return { d: "", count: 0 };
   const m = gather(e);
   if (m < 2) return { d: "", count: 0 };
-  const step = 2.5 * style.spacingPx;
-  const K = decimate(m, step);
-  const reach = style.lengthPx + lineWidthPx;
-  const r = { x0: plot.x - reach, y0: plot.y - reach, x1: plot.x + plot.w + reach, y1: plot.y + plot.h + reach };
-  let visibleLen = 0;
-  for (let k = 0; k + 1 < K; k++) {
-    const a0 = kept[k];
-    const a1 = kept[k + 1];
-    if (nearBox(edgeX[a0], edgeY[a0], edgeX[a1], edgeY[a1], r, step))
-      visibleLen += hypot(edgeX[a1] - edgeX[a0], edgeY[a1] - edgeY[a0]);
-  }
-  const cap = (4 * (plot.w + plot.h)) / style.spacingPx;
-  const spacing = visibleLen / style.spacingPx > cap ? visibleLen / cap : style.spacingPx;
-  const len = style.lengthPx + lineWidthPx / 2;
-  const blend = step / 2;
-  const a = (style.angleDeg * Math.PI) / 180;
-  const cosA = Math.cos(a);
-  const sinA = Math.sin(a);
-  const parts: string[] = [];
-  // Directions as plain numbers (no arrays in the loop): the tangent at the chord's start (t0x, t0y).
-  let t0x = 0;
-  let t0y = 0;
-  let hasPrev = false;
+  const count = decimate(m, 2.5 * style.spacingPx);
+  const p = hatchPass(e.side, plot, style, lineWidthPx, count);
+  let started = false;
   // Path length (along the coarse path) to the next hatch: half a spacing in, so a short edge still gets one.
-  let next = spacing / 2;
-  for (let k = 0; k + 1 < K; k++) {
+  let next = p.spacing / 2;
+  for (let k = 0; k + 1 < count; k++) {
     const i0 = kept[k];
     const i1 = kept[k + 1];
     const dx = edgeX[i1] - edgeX[i0];
@@ -178,68 +267,16 @@ export function hatchEdge(
     if (chordLen === 0) continue;
     const ux = dx / chordLen;
     const uy = dy / chordLen;
-    if (!hasPrev) {
-      t0x = ux;
-      t0y = uy;
-    }
-    // Tangent at the chord's end: bisector of this chord and the next (this chord's own where they oppose).
-    let t1x = ux;
-    let t1y = uy;
-    if (k + 2 < K) {
-      const vx = edgeX[kept[k + 2]] - edgeX[i1];
-      const vy = edgeY[kept[k + 2]] - edgeY[i1];
-      const vl = hypot(vx, vy);
-      if (vl > 0) {
-        const bx = ux + vx / vl;
-        const by = uy + vy / vl;
-        const bl = hypot(bx, by);
-        if (bl > 1e-6) {
-          t1x = bx / bl;
-          t1y = by / bl;
-        }
-      }
-    }
-    if (nearBox(edgeX[i0], edgeY[i0], edgeX[i1], edgeY[i1], r, step)) {
-      const fine0 = edgeLen[i0];
-      const fineLen = edgeLen[i1] - fine0;
-      let j = i0;
-      for (; next <= chordLen; next += spacing) {
-        const t = next / chordLen;
-        // The same fraction of the fine path between the two coarse vertices: a point on the drawn line.
-        const at = fine0 + t * fineLen;
-        while (j + 1 < i1 && edgeLen[j + 1] < at) j++;
-        const seg = edgeLen[j + 1] - edgeLen[j];
-        const f = seg > 0 ? (at - edgeLen[j]) / seg : 0;
-        const px = edgeX[j] + f * (edgeX[j + 1] - edgeX[j]);
-        const py = edgeY[j] + f * (edgeY[j + 1] - edgeY[j]);
-        if (px < r.x0 || px > r.x1 || py < r.y0 || py > r.y1) continue;
-        // Turn from the start's bisector to the chord's own direction over the first half step, and on to the
-        // end's bisector over the last: a long straight chord keeps its hatches square to it.
-        const ws = Math.max(0, 1 - next / blend);
-        const we = Math.max(0, 1 - (chordLen - next) / blend);
-        const wu = Math.max(0, 1 - ws - we);
-        let tx = ws * t0x + we * t1x + wu * ux;
-        let ty = ws * t0y + we * t1y + wu * uy;
-        const tn = hypot(tx, ty);
-        if (tn < 1e-6) {
-          tx = ux;
-          ty = uy;
-        } else {
-          tx /= tn;
-          ty /= tn;
-        }
-        // Unit normal into the excluded side, turned by the style's angle towards the direction of travel.
-        const nx = e.side * ty;
-        const ny = -e.side * tx;
-        parts.push(`M${r2(px)} ${r2(py)}l${r2(len * (cosA * nx + sinA * tx))} ${r2(len * (cosA * ny + sinA * ty))}`);
-      }
+    if (!started) [p.t0x, p.t0y, started] = [ux, uy, true];
+    endTangent(p, k, count, ux, uy);
+    if (nearBox(edgeX[i0], edgeY[i0], edgeX[i1], edgeY[i1], p.r, p.step)) {
+      next = chordHatches(p, i0, i1, chordLen, ux, uy, next);
     } else if (next <= chordLen) {
-      next += Math.ceil((chordLen - next) / spacing + 1e-9) * spacing;
+      next += Math.ceil((chordLen - next) / p.spacing + 1e-9) * p.spacing;
     }
     next -= chordLen;
-    t0x = t1x;
-    t0y = t1y;
-    hasPrev = true;
+    p.t0x = p.t1x;
+    p.t0y = p.t1y;
   }
-  return { d: parts.join(""), count: parts.length };
+  return { d: p.parts.join(""), count: p.parts.length };
 }

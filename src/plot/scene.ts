@@ -1,6 +1,5 @@
 // The scene builder: a project in, the complete figure out as plain layers of paths, rects and text, drawn
-// the same way on screen (SceneSvg and scene-dom.ts) and in the exported SVG (writeSvg). All defaults of a figure live here.
-import { DEFAULT_MASS_RANGE_EV, defaultYRange } from "../project/defaults";
+// the same way on screen (SceneSvg and scene-dom.ts) and in the exported SVG (writeSvg). Settings and their fallbacks: scene-settings.ts.
 import type { Curve, FigureFont, LegendPlace, Model, Project, YView } from "../project/types";
 import type { PathNode, Scene, SceneLayer, SceneNode, ScaleConfig } from "./scene-types";
 import { axesNodes, axisStyle, axisTicks, gridNodes, verticalTickOpts, yTitle, type AxesFrame } from "./axes";
@@ -10,8 +9,6 @@ import {
   computeLayout,
   cornerLegendOrigin,
   figurePadPx,
-  fontsFor,
-  presetOf,
   PX_PER_IN,
   type Fonts,
   type Layout,
@@ -32,11 +29,12 @@ import type { Shape } from "./occupancy";
 import { markupRuns } from "./markup";
 import { modelGeometry } from "./models";
 import { constantsOf, rescaleNote } from "./physics-settings";
-import { logAffine, sanitizeDomain, viewTransform } from "./scales";
+import { logAffine, viewTransform } from "./scales";
 import { runsWidthPx } from "./text";
 import { fitTitle, TITLE_LINE_SPACING, type TitleFit } from "./title";
 import { logTicks } from "./ticks";
 import { highlightNodes } from "./highlight";
+import { figureSettings, physicalSize } from "./scene-settings";
 
 /**
  * The CSS font-family list of each figure font: the bundled Computer Modern Unicode face first (the app loads
@@ -166,7 +164,7 @@ interface AutoLegendFrame {
  * legend must not move when a table row is hovered).
  */
 function autoLegendPlace(project: Project, f: AutoLegendFrame, outsideFits: () => boolean): AutoLegendPlace {
-  const plot = { x: r2(f.layout.plot.x), y: r2(f.layout.plot.y), w: r2(f.layout.plot.w), h: r2(f.layout.plot.h) };
+  const plot = roundedPlot(f.layout.plot);
   const map = logAffine(f.scales, plot);
   const slope = viewTransform(f.view, f.constants).slope;
   const shapes: Shape[] = [];
@@ -350,8 +348,18 @@ function legendReport(entries: LegendEntry[], box: LegendBox, fonts: Fonts, auto
   return report;
 }
 
-function physicalOf(px: number): string {
-  return `${Math.round((px / PX_PER_IN) * 254) / 100}cm`;
+/** The plot area at the scene's precision (both the scene and the legend placement map data into it). */
+function roundedPlot(p: PlotRect): PlotRect {
+  return { x: r2(p.x), y: r2(p.y), w: r2(p.w), h: r2(p.h) };
+}
+
+/** The white rectangle under the whole figure. */
+function backgroundLayer(widthPx: number, heightPx: number): SceneLayer {
+  return {
+    id: "background",
+    clip: false,
+    nodes: [{ kind: "rect", id: "background-fill", x: 0, y: 0, w: r2(widthPx), h: r2(heightPx), fill: "#ffffff" }],
+  };
 }
 
 /**
@@ -367,32 +375,16 @@ function physicalOf(px: number): string {
 export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   const fig = project.figure;
   const c = constantsOf(project.physics);
-  const view: YView = fig.yView === "normalized" || fig.yView === "g-gamma" ? fig.yView : "coupling";
-  const preset = presetOf(fig);
-  const widthPx = opts.widthPx && opts.widthPx > 0 ? opts.widthPx : preset.widthPx;
-  const heightPx = opts.heightPx && opts.heightPx > 0 ? opts.heightPx : preset.heightPx;
-  const fonts = fontsFor(fig.fontPt, preset.fontScale, fig.legendScale);
-  // An unusable range falls back to the default figure's.
-  const massDomainEv = sanitizeDomain(fig.massRangeEv, DEFAULT_MASS_RANGE_EV);
-  const yDomain = sanitizeDomain(fig.yRange, defaultYRange(view));
-  const topAxis = fig.topAxis === "fa" || fig.topAxis === "frequency" ? fig.topAxis : "none";
+  const settings = figureSettings(project, opts);
+  const { view, preset, widthPx, heightPx, fonts, massDomainEv, yDomain, topAxis } = settings;
   const legendSetting = fig.legend ?? "top-right";
 
   const entries = legendSetting === "hidden" ? [] : legendEntries(project, fonts, c);
 
   const scales: ScaleConfig = { massDomainEv, yDomain, yView: view };
-  const fitted = layoutWithLegend(project, {
-    widthPx,
-    heightPx,
-    fonts,
-    constants: c,
-    scales,
-    topAxis,
-    entries,
-    holdLegend: opts.holdLegend,
-  });
+  const fitted = layoutWithLegend(project, { ...settings, constants: c, scales, entries, holdLegend: opts.holdLegend });
   const { layout, box: legendBox, autoPlace, title } = fitted;
-  const plot = { x: r2(layout.plot.x), y: r2(layout.plot.y), w: r2(layout.plot.w), h: r2(layout.plot.h) };
+  const plot = roundedPlot(layout.plot);
   const map = logAffine(scales, plot);
   const frame: AxesFrame = {
     map,
@@ -407,34 +399,27 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   };
   const ticks = axisTicks(frame);
 
-  const { curveFills, curveHatches, curveLines, modelFills, modelLines, curveLineById, modelLineById } = dataNodes(
-    project,
-    {
-      constants: c,
-      view,
-      map,
-      massDomainEv,
-      plot,
-      fonts,
-      resolution: opts.resolution ?? 1,
-      thin: opts.thin,
-      envelope: opts.envelope,
-    },
-  );
-  const highlight = highlightNodes(opts.highlight, { map, plot, fonts }, modelLineById, curveLineById);
+  const data = dataNodes(project, {
+    constants: c,
+    view,
+    map,
+    massDomainEv,
+    plot,
+    fonts,
+    resolution: opts.resolution ?? 1,
+    thin: opts.thin,
+    envelope: opts.envelope,
+  });
+  const highlight = highlightNodes(opts.highlight, { map, plot, fonts }, data.modelLineById, data.curveLineById);
 
   const axes = axesNodes(frame, ticks, layout, yTitle(view));
   axes.push(...titleNodes(title, plot, layout, widthPx, fonts));
 
   const layers: SceneLayer[] = [
-    {
-      id: "background",
-      clip: false,
-      nodes: [{ kind: "rect", id: "background-fill", x: 0, y: 0, w: r2(widthPx), h: r2(heightPx), fill: "#ffffff" }],
-    },
+    backgroundLayer(widthPx, heightPx),
     { id: "grid", clip: true, nodes: fig.grid ? gridNodes(frame, ticks) : [] },
-    { id: "curves", clip: true, nodes: [...curveFills, ...curveHatches, ...curveLines] },
-    { id: "models", clip: true, nodes: [...modelFills, ...modelLines] },
+    { id: "curves", clip: true, nodes: [...data.curveFills, ...data.curveHatches, ...data.curveLines] },
+    { id: "models", clip: true, nodes: [...data.modelFills, ...data.modelLines] },
     { id: "highlight", clip: true, nodes: highlight },
     { id: "axes", clip: false, nodes: axes },
     {
@@ -454,10 +439,6 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   };
   Object.assign(scene, legendReport(entries, legendBox, fonts, autoPlace));
   if (title?.note) scene.notes = [title.note];
-  if (opts.physical !== false) {
-    const custom = opts.widthPx !== undefined || opts.heightPx !== undefined;
-    scene.widthPhysical = custom ? physicalOf(widthPx) : preset.widthPhysical;
-    scene.heightPhysical = custom ? physicalOf(heightPx) : preset.heightPhysical;
-  }
+  if (opts.physical !== false) Object.assign(scene, physicalSize(opts, widthPx, heightPx, preset));
   return scene;
 }

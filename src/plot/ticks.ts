@@ -10,6 +10,7 @@ import {
   type AxisMassUnit,
   type FrequencyAxisUnit,
 } from "../physics/units";
+import { pow10Of } from "../physics/pow10";
 import type { FrequencyUnitSetting } from "../project/types";
 import type { TextRun } from "./scene-types";
 import { plainOrScientificRuns, scientificRuns } from "./format";
@@ -36,10 +37,6 @@ export interface LogTickOpts {
 
 const EPS = 1e-9;
 const STEPS = [1, 2, 3, 4, 5, 6, 8, 10, 12, 15, 20, 25, 30, 40, 50, 100];
-
-function decade(e: number): number {
-  return Number(`1e${e}`);
-}
 
 /** Label every `step`-th decade: 1 up to 8 decades, then 2, 3 (> 16), and ~8 labels beyond 24 (common practice). */
 export function decadeLabelStep(spanDecades: number): number {
@@ -68,13 +65,13 @@ function decadeTicks(ax: TickAxis, eLo: number): LogTick[] {
   const decades: number[] = [];
   for (let e = eLo; e <= ax.eHi; e++) decades.push(e);
   let maxExtent = 0;
-  for (const e of decades) maxExtent = Math.max(maxExtent, ax.extent(format(decade(e))));
+  for (const e of decades) maxExtent = Math.max(maxExtent, ax.extent(format(pow10Of(e))));
   const needPx = maxExtent + ax.gap;
   const minStep = Math.max(decadeLabelStep(Math.log10(ax.hi) - ax.l0), ppd > 0 ? needPx / ppd : 1);
   const step = STEPS.find((s) => s >= minStep - EPS) ?? Math.ceil(minStep);
   const labelled = (e: number) => ((e % step) + step) % step === 0;
   return decades.map((e) => {
-    const v = decade(e);
+    const v = pow10Of(e);
     return { value: v, major: true, label: labelled(e) ? format(v) : null };
   });
 }
@@ -83,7 +80,7 @@ function decadeTicks(ax: TickAxis, eLo: number): LogTick[] {
 function addMinorTicks(ticks: LogTick[], ax: TickAxis): void {
   for (let e = Math.floor(ax.l0); e <= ax.eHi; e++)
     for (let k = 2; k <= 9; k++) {
-      const v = k * decade(e);
+      const v = k * pow10Of(e);
       if (ax.inRange(v)) ticks.push({ value: v, major: false, label: null });
     }
 }
@@ -109,7 +106,7 @@ const WANT_LABELS = 4;
 /** k·10^e in range for the multipliers k of `set`, ascending. */
 function multiplesInRange(ax: TickAxis, set: readonly number[]): number[] {
   const values: number[] = [];
-  for (let e = Math.floor(ax.l0); e <= ax.eHi; e++) for (const k of set) values.push(k * decade(e));
+  for (let e = Math.floor(ax.l0); e <= ax.eHi; e++) for (const k of set) values.push(k * pow10Of(e));
   return values.filter(ax.inRange);
 }
 
@@ -270,7 +267,7 @@ export interface FrequencyUnit {
  */
 export function frequencyUnit(loHz: number, hiHz: number, fixed: FrequencyUnitSetting = "auto"): FrequencyUnit {
   if (fixed !== "auto") {
-    const hzPerUnit = decade(massUnitInfo(fixed).pow10);
+    const hzPerUnit = pow10Of(massUnitInfo(fixed).pow10);
     return { hzPerUnit, plain: unitFormat(loHz / hzPerUnit, hiHz / hzPerUnit) !== scientificRuns, unit: fixed };
   }
   const l0 = Math.log10(loHz);
@@ -278,7 +275,7 @@ export function frequencyUnit(loHz: number, hiHz: number, fixed: FrequencyUnitSe
   const p = Math.round(((l0 + l1) / 2 - 1.5) / 3);
   const unit = FREQUENCY_AXIS_UNITS[p];
   if (!(l1 - l0 <= 5) || !unit) return { hzPerUnit: 1, plain: false, unit: "Hz" };
-  return { hzPerUnit: decade(3 * p), plain: true, unit };
+  return { hzPerUnit: pow10Of(3 * p), plain: true, unit };
 }
 
 /** Frequency range ν = m/h in Hz over a mass range in eV. */

@@ -1,5 +1,5 @@
 // Checks of the import step's pinned options: a re-parse with the detected choices pinned reads the file
-// exactly as the first parse did, and one changed choice changes only what it should (DESIGN.md §3).
+// exactly as the first parse did, and one changed choice changes only what it should.
 import { describe, expect, test } from "vitest";
 import { DELIMITER_CHOICES, MASS_UNIT_CHOICES, pinnedOptions } from "../../src/formats/import-options";
 import { parseCurveText } from "../../src/data";
@@ -26,7 +26,7 @@ describe("pinnedOptions", () => {
     expect(o.decimalComma).toBeUndefined();
     expect(pinnedOptions(first, { delimiter: "auto" }).delimiter).toBeUndefined();
   });
-  test("choices for the menus include every unit of DESIGN.md §3 and every delimiter", () => {
+  test("choices for the menus include every importer unit and every delimiter", () => {
     expect(MASS_UNIT_CHOICES.map((c) => c.value)).toEqual(
       expect.arrayContaining(["eV", "meV", "ueV", "neV", "peV", "keV", "GeV", "Hz", "kHz", "MHz", "GHz"]),
     );

@@ -1,4 +1,4 @@
-// Checks of the curve-column units: spellings and header recognition (DESIGN.md §3), mass and frequency
+// Checks of the curve-column units: spellings and header recognition (the importer's own spellings, SI prefixes), mass and frequency
 // conversions against CODATA 2018 h, and the normalized coupling units against the physics core's g_aγγ.
 import { describe, expect, test } from "vitest";
 import {
@@ -22,7 +22,7 @@ const H_EV_S = 4.135667696e-15;
 // CODATA 2018 fine-structure constant, same reference.
 const ALPHA_CODATA = 7.2973525693e-3;
 
-describe("mass unit spellings (DESIGN.md §3)", () => {
+describe("mass unit spellings (SI prefixes)", () => {
   test("the three spellings of micro: u, Greek mu U+03BC, micro sign U+00B5 (Unicode code charts)", () => {
     expect(parseMassUnit("ueV")).toBe("ueV");
     expect(parseMassUnit("\u03bceV")).toBe("ueV");
@@ -42,7 +42,7 @@ describe("mass unit spellings (DESIGN.md §3)", () => {
   });
 });
 
-describe("coupling unit spellings (DESIGN.md §3)", () => {
+describe("coupling unit spellings", () => {
   test("inverse GeV in its usual spellings", () => {
     for (const s of ["GeV^-1", "1/GeV", "GeV-1", "GeV^{-1}", "GeV\u207b\u00b9", "GeV^(-1)"]) {
       expect(parseCouplingUnit(s)?.unit, s).toBe("GeV^-1");
@@ -64,7 +64,7 @@ describe("coupling unit spellings (DESIGN.md §3)", () => {
   });
 });
 
-describe("units in header fields (DESIGN.md §3 examples)", () => {
+describe("units in header fields", () => {
   test.each([
     ["m_a [ueV]", { kind: "mass", unit: "ueV" }],
     ["m_a [\u03bceV]", { kind: "mass", unit: "ueV" }],
@@ -125,7 +125,7 @@ describe("coupling conversions through the physics core", () => {
     const faGeV = (5.691e-6 * 1e12) / m;
     expect(Math.abs(g / ((ALPHA_CODATA / (2 * Math.PI * faGeV)) * 1.92) - 1)).toBeLessThan(1e-14);
   });
-  test("|g_γ| = |E/N − c_γ|/2: g_γ = 0.96 gives the E/N = 0 line too (g_aγγ = (α/π) g_γ / f_a, DESIGN.md §4)", () => {
+  test("|g_γ| = |E/N − c_γ|/2: g_γ = 0.96 gives the E/N = 0 line too (g_aγγ = (α/π) g_γ / f_a; Di Luzio, Giannotti, Nardi, Visinelli, Phys. Rept. 870 (2020) 1, from memory)", () => {
     const g = couplingToInvGeV(0.96, m, "g-gamma", ctx);
     expect(Math.abs(g / gAgg(m, 0) - 1)).toBeLessThan(1e-15);
     const faGeV = (5.691e-6 * 1e12) / m;

@@ -35,6 +35,7 @@ import {
 } from "pdf-lib";
 import type { PathNode, RectNode, Scene, SceneNode, TextNode } from "../../plot/scene-types";
 import { placeRuns } from "../../plot/text";
+import { unitInterval } from "../../plot/format";
 import { colourRgb } from "./colour";
 import { parsePathData } from "./path-data";
 
@@ -138,8 +139,6 @@ function pathOps(d: string): PDFOperator[] {
   return ops;
 }
 
-const opacity = (v: number | undefined) => (v === undefined || !Number.isFinite(v) ? 1 : Math.min(1, Math.max(0, v)));
-
 function paintOps(
   page: PDFPage,
   states: Map<string, PDFName>,
@@ -150,8 +149,8 @@ function paintOps(
   const hasStroke = node.stroke !== undefined && node.stroke !== "none" && (node.strokeWidth ?? 1) > 0;
   if ((!hasFill && !hasStroke) || shape.length === 0) return [];
   const ops: PDFOperator[] = [pushGraphicsState()];
-  const strokeOpacity = node.kind === "path" ? opacity(node.strokeOpacity) : 1;
-  ops.push(setGraphicsState(opacityState(page, states, opacity(node.fillOpacity), strokeOpacity)));
+  const strokeOpacity = node.kind === "path" ? unitInterval(node.strokeOpacity, 1) : 1;
+  ops.push(setGraphicsState(opacityState(page, states, unitInterval(node.fillOpacity, 1), strokeOpacity)));
   if (hasFill) ops.push(setFillingRgbColor(...colourRgb(node.fill)));
   if (hasStroke) {
     ops.push(setStrokingRgbColor(...colourRgb(node.stroke)), setLineWidth(node.strokeWidth ?? 1));

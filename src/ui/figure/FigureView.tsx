@@ -2,7 +2,7 @@
 // moved by the gestures of useFigureGestures (wheel, drag, keys, double-click, hover).
 // Big curves whose drawing preparation is still being built in the worker are left out, with a note.
 import { useDeferredValue, useEffect, useId, useMemo, useRef, useState, type RefObject } from "react";
-import { buildScene } from "../../plot/scene";
+import { buildScene, type BuildSceneOpts } from "../../plot/scene";
 import { presetOf } from "../../plot/layout";
 import { shortenedLegendNote } from "../../plot/legend";
 import type { Scene } from "../../plot/scene-types";
@@ -40,25 +40,18 @@ function figureLabel(scene: Scene, project: Project): string {
   return `Figure: ${axis} against m_a, ${models} models and ${curves} curves`;
 }
 
-export function FigureView() {
-  // Deferred: a big change (a million-point curve arriving) builds the scene in its own task, after the
-  // panels have updated, instead of adding to one long task; zoom steps may skip stale frames.
-  const fullProject = useDeferredValue(useAxband(selectProject));
-  const preparing = useAxband(selectPreparing);
-  // Drawing a curve before its preparation arrives would build it here, a long task for a big curve.
-  const { project, waiting } = useMemo(() => withoutPreparing(fullProject, preparing), [fullProject, preparing]);
-  const highlight = useDeferredValue(useAxband(selectHighlight));
-  const boxRef = useRef<HTMLDivElement>(null);
-  const svgRef = useRef<SVGSVGElement>(null);
-  const sceneRef = useRef<Scene | null>(null);
-  const displayWidth = useDisplayWidth(boxRef);
-  const hintId = useId();
-  const idPrefix = `fig${useId().replace(/[^A-Za-z0-9]/g, "")}-`;
-  const { moving, panning, handlers } = useFigureGestures(svgRef, sceneRef);
-
+/**
+ * The scene of the figure on screen at the display's resolution. While the view moves, an automatic legend keeps
+ * the place it had when the view last rested; `sceneRef` always holds the latest scene for the gestures.
+ */
+function useFigureScene(
+  project: Project,
+  opts: { displayWidth: number; highlight: BuildSceneOpts["highlight"]; moving: boolean },
+  sceneRef: RefObject<Scene | null>,
+): Scene {
+  const { displayWidth, highlight, moving } = opts;
   const preset = presetOf(project.figure);
   const resolution = resolutionFor(displayWidth, preset.widthPx);
-  // While the view moves, an automatic legend keeps the place it had when the view last rested.
   const restingPlace = useRef<Scene["autoLegendPlace"]>(undefined);
   const holdLegend = moving ? restingPlace.current : undefined;
   const scene = useMemo(
@@ -80,7 +73,49 @@ export function FigureView() {
   }, [scene, moving]);
   useEffect(() => {
     sceneRef.current = scene;
-  }, [scene]);
+  }, [scene, sceneRef]);
+  return scene;
+}
+
+/** The lines under the figure: the scene's notes, the legend's shortened entries, and how to move the view. */
+function FigureNotes({ scene, hintId }: { scene: Scene; hintId: string }) {
+  const legendNote = shortenedLegendNote(scene);
+  return (
+    <>
+      {scene.notes?.length ? (
+        <p className="figure-note" data-testid="figure-notes" role="status">
+          {scene.notes.join("; ")}
+        </p>
+      ) : null}
+      {legendNote ? (
+        <p className="figure-note" data-testid="legend-note" role="status">
+          {legendNote}
+        </p>
+      ) : null}
+      <p className="figure-hint" id={hintId}>
+        Scroll to zoom (Shift: mass axis only, Alt: y axis only), drag to pan, double-click to reset. With the figure
+        focused: + and − zoom, arrow keys pan, 0 resets.
+      </p>
+    </>
+  );
+}
+
+export function FigureView() {
+  // Deferred: a big change (a million-point curve arriving) builds the scene in its own task, after the
+  // panels have updated, instead of adding to one long task; zoom steps may skip stale frames.
+  const fullProject = useDeferredValue(useAxband(selectProject));
+  const preparing = useAxband(selectPreparing);
+  // Drawing a curve before its preparation arrives would build it here, a long task for a big curve.
+  const { project, waiting } = useMemo(() => withoutPreparing(fullProject, preparing), [fullProject, preparing]);
+  const highlight = useDeferredValue(useAxband(selectHighlight));
+  const boxRef = useRef<HTMLDivElement>(null);
+  const svgRef = useRef<SVGSVGElement>(null);
+  const sceneRef = useRef<Scene | null>(null);
+  const displayWidth = useDisplayWidth(boxRef);
+  const hintId = useId();
+  const idPrefix = `fig${useId().replace(/[^A-Za-z0-9]/g, "")}-`;
+  const { moving, panning, handlers } = useFigureGestures(svgRef, sceneRef);
+  const scene = useFigureScene(project, { displayWidth, highlight, moving }, sceneRef);
 
   const { plot, scales } = scene;
   const aspect = scene.widthPx / scene.heightPx;
@@ -112,20 +147,7 @@ export function FigureView() {
         </SceneSvg>
         <PreparingNote scene={scene} waiting={waiting} />
       </div>
-      {scene.notes?.length ? (
-        <p className="figure-note" data-testid="figure-notes" role="status">
-          {scene.notes.join("; ")}
-        </p>
-      ) : null}
-      {shortenedLegendNote(scene) ? (
-        <p className="figure-note" data-testid="legend-note" role="status">
-          {shortenedLegendNote(scene)}
-        </p>
-      ) : null}
-      <p className="figure-hint" id={hintId}>
-        Scroll to zoom (Shift: mass axis only, Alt: y axis only), drag to pan, double-click to reset. With the figure
-        focused: + and − zoom, arrow keys pan, 0 resets.
-      </p>
+      <FigureNotes scene={scene} hintId={hintId} />
     </section>
   );
 }

@@ -14,11 +14,10 @@ import type {
   YView,
 } from "../../project/types";
 import { checkRange, massRangeText, parseMassText, rangeText, type ParsedValue } from "../../formats/axis-range";
-import { massUnitInfo } from "../../physics/units";
-import { CUSTOM_MM_LIMITS } from "../../project/limits";
+import { AXIS_MASS_UNITS, FREQUENCY_AXIS_UNITS, massUnitInfo } from "../../physics/units";
+import { CUSTOM_MM_LIMITS, LEGEND_SCALE_LIMITS } from "../../project/limits";
 import { useShallow } from "zustand/react/shallow";
 import { useAxband, type AxbandState } from "../store";
-import { LEGEND_SCALE_LIMITS } from "../../project/limits";
 
 const PRESETS: { value: SizePreset; label: string }[] = [
   { value: "slide", label: "Slide 16:9" },
@@ -41,13 +40,13 @@ const TOP_AXES: { value: TopAxis; label: string }[] = [
   { value: "fa", label: "f_a [GeV]" },
   { value: "frequency", label: "frequency ν [Hz…THz]" },
 ];
-const MASS_UNITS: { value: AxisMassUnit; label: string }[] = (["eV", "meV", "ueV", "neV"] as const).map((u) => ({
+const MASS_UNITS: { value: AxisMassUnit; label: string }[] = AXIS_MASS_UNITS.map((u) => ({
   value: u,
   label: massUnitInfo(u).label,
 }));
 const FREQUENCY_UNITS: { value: FrequencyUnitSetting; label: string }[] = [
   { value: "auto", label: "automatic (suits the range)" },
-  ...(["Hz", "kHz", "MHz", "GHz", "THz"] as const).map((u) => ({ value: u, label: u })),
+  ...FREQUENCY_AXIS_UNITS.map((u) => ({ value: u, label: u })),
 ];
 const TICKS: { value: TickSides; label: string }[] = [
   { value: "out", label: "outside, left and bottom" },
@@ -251,20 +250,40 @@ function ViewRanges() {
 }
 
 type FigureSansView = Omit<Figure, "massRangeEv" | "yRange">;
+/** Props of a group of figure settings: the figure (less its ranges) and the setter (with a coalescing key). */
+interface GroupProps {
+  figure: FigureSansView;
+  set: (patch: Partial<Figure>, key?: string) => void;
+}
 
-export function FigureSettings() {
-  // Every figure field except the ranges, so zoom and pan do not re-render this panel.
-  const figure: FigureSansView = useAxband(
-    useShallow((s: AxbandState) => {
-      const { massRangeEv: _m, yRange: _y, ...rest } = s.project.figure;
-      return rest;
-    }),
-  );
-  const setFigure = useAxband((s) => s.setFigure);
-  const set = (patch: Partial<Figure>, key?: string) => setFigure(patch, key ? { coalesceKey: key } : undefined);
+/** The figure settings chosen from a list. */
+type ChoiceKey = "preset" | "yView" | "massUnit" | "topAxis" | "frequencyUnit" | "ticks" | "legend" | "font";
+const CHOICES: {
+  [K in ChoiceKey]: { label: string; options: { value: FigureSansView[K]; label: string }[]; testId?: string };
+} = {
+  preset: { label: "Size", options: PRESETS },
+  yView: { label: "y axis", options: Y_VIEWS },
+  massUnit: { label: "Mass unit", options: MASS_UNITS, testId: "figure-mass-unit" },
+  topAxis: { label: "Top axis", options: TOP_AXES },
+  frequencyUnit: { label: "Frequency unit", options: FREQUENCY_UNITS, testId: "figure-frequency-unit" },
+  ticks: { label: "Ticks", options: TICKS, testId: "figure-ticks" },
+  legend: { label: "Legend", options: LEGEND, testId: "legend-place" },
+  font: { label: "Font", options: FONTS, testId: "figure-font" },
+};
+
+/** One figure setting chosen from a list, with its label, options and test id from CHOICES. */
+function Choice<K extends ChoiceKey>({ field, figure, set }: GroupProps & { field: K }) {
+  const { label, options, testId } = CHOICES[field];
+  const onChange = (v: FigureSansView[K]) => set({ [field]: v } as Partial<Figure>);
+  return <Select label={label} value={figure[field]} options={options} testId={testId} onChange={onChange} />;
+}
+
+/** The size preset, and the width and height of a custom size. */
+function SizeSettings(g: GroupProps) {
+  const { figure, set } = g;
   return (
-    <div className="figure-settings">
-      <Select label="Size" value={figure.preset} options={PRESETS} onChange={(v) => set({ preset: v })} />
+    <>
+      <Choice field="preset" {...g} />
       {figure.preset === "custom" ? (
         <div className="inline-row">
           <NumberSetting
@@ -285,39 +304,31 @@ export function FigureSettings() {
           />
         </div>
       ) : null}
+    </>
+  );
+}
+
+/** The axes: typed ranges, y view, mass unit, top axis (with its frequency unit) and ticks. */
+function AxesSettings(g: GroupProps) {
+  const { figure } = g;
+  return (
+    <>
       <ViewRanges />
-      <Select label="y axis" value={figure.yView} options={Y_VIEWS} onChange={(v) => set({ yView: v })} />
-      <Select
-        label="Mass unit"
-        value={figure.massUnit}
-        options={MASS_UNITS}
-        testId="figure-mass-unit"
-        onChange={(v) => set({ massUnit: v })}
-      />
-      <Select label="Top axis" value={figure.topAxis} options={TOP_AXES} onChange={(v) => set({ topAxis: v })} />
-      {figure.topAxis === "frequency" ? (
-        <Select
-          label="Frequency unit"
-          value={figure.frequencyUnit}
-          options={FREQUENCY_UNITS}
-          testId="figure-frequency-unit"
-          onChange={(v) => set({ frequencyUnit: v })}
-        />
-      ) : null}
-      <Select
-        label="Ticks"
-        value={figure.ticks}
-        options={TICKS}
-        testId="figure-ticks"
-        onChange={(v) => set({ ticks: v })}
-      />
-      <Select
-        label="Legend"
-        value={figure.legend}
-        options={LEGEND}
-        testId="legend-place"
-        onChange={(v) => set({ legend: v })}
-      />
+      <Choice field="yView" {...g} />
+      <Choice field="massUnit" {...g} />
+      <Choice field="topAxis" {...g} />
+      {figure.topAxis === "frequency" ? <Choice field="frequencyUnit" {...g} /> : null}
+      <Choice field="ticks" {...g} />
+    </>
+  );
+}
+
+/** The legend's place and text size. */
+function LegendSettings(g: GroupProps) {
+  const { figure, set } = g;
+  return (
+    <>
+      <Choice field="legend" {...g} />
       <NumberSetting
         label="Legend text (× default)"
         value={figure.legendScale}
@@ -327,13 +338,16 @@ export function FigureSettings() {
         testId="legend-scale"
         onChange={(v) => set({ legendScale: v }, "figure:legend-scale")}
       />
-      <Select
-        label="Font"
-        value={figure.font}
-        options={FONTS}
-        testId="figure-font"
-        onChange={(v) => set({ font: v })}
-      />
+    </>
+  );
+}
+
+/** The font family and size (beside them, in the same row, the grid switch). */
+function FontSettings(g: GroupProps) {
+  const { figure, set } = g;
+  return (
+    <>
+      <Choice field="font" {...g} />
       <div className="inline-row">
         <NumberSetting
           label="Font (pt)"
@@ -348,6 +362,27 @@ export function FigureSettings() {
           Grid
         </label>
       </div>
+    </>
+  );
+}
+
+export function FigureSettings() {
+  // Every figure field except the ranges, so zoom and pan do not re-render this panel.
+  const figure: FigureSansView = useAxband(
+    useShallow((s: AxbandState) => {
+      const { massRangeEv: _m, yRange: _y, ...rest } = s.project.figure;
+      return rest;
+    }),
+  );
+  const setFigure = useAxband((s) => s.setFigure);
+  const set = (patch: Partial<Figure>, key?: string) => setFigure(patch, key ? { coalesceKey: key } : undefined);
+  const g: GroupProps = { figure, set };
+  return (
+    <div className="figure-settings">
+      <SizeSettings {...g} />
+      <AxesSettings {...g} />
+      <LegendSettings {...g} />
+      <FontSettings {...g} />
       <label className="setting">
         <span className="field-label">Title</span>
         <input

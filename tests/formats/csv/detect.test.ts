@@ -90,7 +90,7 @@ describe("coupling units through the physics core", () => {
     const r = parseCurveText(`m,C\n${m},1.92\n`, { couplingUnit: "normalized" });
     expect(Math.abs(r.gInvGeV[0] / gAgg(m, 0) - 1)).toBeLessThan(1e-15);
   });
-  test("|g_γ| = 0.96 is the same line (haloscope convention g_γ = C_aγ/2, DESIGN.md §4)", () => {
+  test("|g_γ| = 0.96 is the same line (haloscope convention g_γ = C_aγ/2; Di Luzio, Giannotti, Nardi, Visinelli, Phys. Rept. 870 (2020) 1, from memory)", () => {
     const r = parseCurveText(`m,C\n${m},0.96\n`, { couplingUnit: "g-gamma" });
     expect(Math.abs(r.gInvGeV[0] / gAgg(m, 0) - 1)).toBeLessThan(1e-15);
   });
