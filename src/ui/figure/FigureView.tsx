@@ -12,6 +12,8 @@ import { withoutPreparing } from "../store/preparation";
 import { SceneSvg } from "./SceneSvg";
 import { Crosshair, PreparingNote } from "./FigureOverlays";
 import { useFigureGestures } from "./useFigureGestures";
+import { requestRuns, runsWorkerAvailable } from "../../worker/runs-client";
+import type { RunDeferral } from "../../plot/thinning/deferred-runs";
 
 /** Device pixels per scene pixel, rounded to quarters so a small resize does not rebuild the scene. */
 function resolutionFor(displayWidthPx: number, sceneWidthPx: number): number {
@@ -61,20 +63,28 @@ export function FigureView() {
   // While the view moves, an automatic legend keeps the place it had when the view last rested.
   const restingPlace = useRef<Scene["autoLegendPlace"]>(undefined);
   const holdLegend = moving ? restingPlace.current : undefined;
-  const scene = useMemo(
-    () =>
-      buildScene(project, {
-        widthPx: preset.widthPx,
-        heightPx: preset.heightPx,
-        resolution,
-        highlight,
-        physical: false,
-        holdLegend,
-        // Dense zig-zags as filled envelopes: the same pixels, a fraction of the browser's painting.
-        envelope: true,
-      }),
-    [project, preset.widthPx, preset.heightPx, resolution, highlight, holdLegend],
-  );
+  // Bumped when the runs worker has put thinnings into the cache that this figure drew stand-ins for.
+  const [runsInstalled, setRunsInstalled] = useState(0);
+  const { scene, deferred } = useMemo(() => {
+    void runsInstalled; // built again when the cache has gained thinnings (the scene reads them from there)
+    // A big file-order curve's first thinning at a new zoom level goes to the runs worker (a stand-in meanwhile).
+    const deferRuns: RunDeferral | undefined = runsWorkerAvailable() ? { jobs: [] } : undefined;
+    const built = buildScene(project, {
+      widthPx: preset.widthPx,
+      heightPx: preset.heightPx,
+      resolution,
+      highlight,
+      physical: false,
+      holdLegend,
+      // Dense zig-zags as filled envelopes: the same pixels, a fraction of the browser's painting.
+      envelope: true,
+      deferRuns,
+    });
+    return { scene: built, deferred: deferRuns?.jobs ?? [] };
+  }, [project, preset.widthPx, preset.heightPx, resolution, highlight, holdLegend, runsInstalled]);
+  useEffect(() => {
+    if (deferred.length) requestRuns(deferred, () => setRunsInstalled((k) => k + 1));
+  }, [deferred]);
   useEffect(() => {
     if (!moving) restingPlace.current = scene.autoLegendPlace;
   }, [scene, moving]);
@@ -106,6 +116,7 @@ export function FigureView() {
           data-y-view={scales.yView ?? "coupling"}
           data-plot-box={`${plot.x},${plot.y},${plot.w},${plot.h}`}
           data-scene-size={`${scene.widthPx},${scene.heightPx}`}
+          data-thinning-pending={deferred.length ? deferred.length : undefined}
           {...handlers}
         >
           <Crosshair scene={scene} />
