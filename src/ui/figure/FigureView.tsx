@@ -13,7 +13,7 @@ import { SceneSvg } from "./SceneSvg";
 import { Crosshair, PreparingNote } from "./FigureOverlays";
 import { useFigureGestures } from "./useFigureGestures";
 import { requestRuns, runsWorkerAvailable } from "../../worker/runs-client";
-import type { RunDeferral } from "../../plot/thinning/deferred-runs";
+import type { RunDeferral, RunJob } from "../../plot/thinning/deferred-runs";
 
 /** Device pixels per scene pixel, rounded to quarters so a small resize does not rebuild the scene. */
 function resolutionFor(displayWidthPx: number, sceneWidthPx: number): number {
@@ -42,6 +42,46 @@ function figureLabel(scene: Scene, project: Project): string {
   return `Figure: ${axis} against m_a, ${models} models and ${curves} curves`;
 }
 
+/** What the figure's scene depends on besides the project. */
+interface SceneInputs {
+  widthPx: number;
+  heightPx: number;
+  resolution: number;
+  highlight: ReturnType<typeof selectHighlight>;
+  holdLegend: Scene["autoLegendPlace"];
+}
+
+/**
+ * The figure's scene (the one an export draws, with dense columns as envelopes). A big file-order curve's first
+ * thinning at a new zoom level goes to the runs worker, a stand-in drawn meanwhile (`deferred` lists it); the scene
+ * is built again once the answers are in the cache.
+ */
+function useFigureScene(project: Project, o: SceneInputs): { scene: Scene; deferred: RunJob[] } {
+  // Bumped when the runs worker has put thinnings into the cache that this figure drew stand-ins for.
+  const [runsInstalled, setRunsInstalled] = useState(0);
+  const built = useMemo(() => {
+    void runsInstalled; // built again when the cache has gained thinnings (the scene reads them from there)
+    const deferRuns: RunDeferral | undefined = runsWorkerAvailable() ? { jobs: [] } : undefined;
+    const scene = buildScene(project, {
+      widthPx: o.widthPx,
+      heightPx: o.heightPx,
+      resolution: o.resolution,
+      highlight: o.highlight,
+      physical: false,
+      holdLegend: o.holdLegend,
+      // Dense zig-zags as filled envelopes: the same pixels, a fraction of the browser's painting.
+      envelope: true,
+      deferRuns,
+    });
+    return { scene, deferred: deferRuns?.jobs ?? [] };
+  }, [project, o.widthPx, o.heightPx, o.resolution, o.highlight, o.holdLegend, runsInstalled]);
+  const { deferred } = built;
+  useEffect(() => {
+    if (deferred.length) requestRuns(deferred, () => setRunsInstalled((k) => k + 1));
+  }, [deferred]);
+  return built;
+}
+
 export function FigureView() {
   // Deferred: a big change (a million-point curve arriving) builds the scene in its own task, after the
   // panels have updated, instead of adding to one long task; zoom steps may skip stale frames.
@@ -63,28 +103,13 @@ export function FigureView() {
   // While the view moves, an automatic legend keeps the place it had when the view last rested.
   const restingPlace = useRef<Scene["autoLegendPlace"]>(undefined);
   const holdLegend = moving ? restingPlace.current : undefined;
-  // Bumped when the runs worker has put thinnings into the cache that this figure drew stand-ins for.
-  const [runsInstalled, setRunsInstalled] = useState(0);
-  const { scene, deferred } = useMemo(() => {
-    void runsInstalled; // built again when the cache has gained thinnings (the scene reads them from there)
-    // A big file-order curve's first thinning at a new zoom level goes to the runs worker (a stand-in meanwhile).
-    const deferRuns: RunDeferral | undefined = runsWorkerAvailable() ? { jobs: [] } : undefined;
-    const built = buildScene(project, {
-      widthPx: preset.widthPx,
-      heightPx: preset.heightPx,
-      resolution,
-      highlight,
-      physical: false,
-      holdLegend,
-      // Dense zig-zags as filled envelopes: the same pixels, a fraction of the browser's painting.
-      envelope: true,
-      deferRuns,
-    });
-    return { scene: built, deferred: deferRuns?.jobs ?? [] };
-  }, [project, preset.widthPx, preset.heightPx, resolution, highlight, holdLegend, runsInstalled]);
-  useEffect(() => {
-    if (deferred.length) requestRuns(deferred, () => setRunsInstalled((k) => k + 1));
-  }, [deferred]);
+  const { scene, deferred } = useFigureScene(project, {
+    widthPx: preset.widthPx,
+    heightPx: preset.heightPx,
+    resolution,
+    highlight,
+    holdLegend,
+  });
   useEffect(() => {
     if (!moving) restingPlace.current = scene.autoLegendPlace;
   }, [scene, moving]);
