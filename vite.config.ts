@@ -24,6 +24,7 @@ export default defineConfig({
             "tests/analysis/**/*.test.ts",
             "tests/plot/**/*.test.ts",
             "tests/cli/**/*.test.ts",
+            "tests/worker/**/*.test.ts",
           ],
           testTimeout: 60_000,
         },

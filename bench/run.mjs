@@ -8,6 +8,10 @@ const scripts = [
   ["CSV import (parser alone vs a general CSV library)", "bench/import.mjs"],
   ["CSV import end to end (worker + transfer, Chromium)", "bench/import-browser.mjs"],
   ["Figure redraw during a zoom step (Chromium)", "bench/redraw.mjs"],
+  [
+    "Wheel zoom over a big file-order region: new levels thinned in the runs worker (Chromium)",
+    "bench/region-zoom.mjs",
+  ],
   ["Command line as users run it (bin, npx) vs node -e 0 and gnuplot", "bench/cli.mjs"],
   ["Command-line renderer vs reference plotting script", "bench/render.mjs"],
   ["Overlap summary, benchmark set × demo models", "bench/overlap.mjs"],

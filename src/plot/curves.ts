@@ -7,6 +7,7 @@ import type { Shape } from "./occupancy";
 import { curvePixels, pathDataCompact, prepareCurve, type PreparedCurve } from "./thinning/index";
 import { envelopeSplit } from "./thinning/envelope";
 import type { Polyline } from "./thinning/clip";
+import type { RunDeferral } from "./thinning/deferred-runs";
 import { compactPolygons } from "./path-writer";
 import { dashFor, r2, safeColour, unitInterval } from "./format";
 import { viewTransform, type LogAffine } from "./scales";
@@ -25,6 +26,8 @@ export interface CurveFrame {
   thin?: boolean;
   /** Dense columns of solid sorted curves as a filled min–max envelope (see BuildSceneOpts). @default false */
   envelope?: boolean;
+  /** On screen: big first run thinnings left to a worker, a stand-in drawn meanwhile (see BuildSceneOpts). */
+  deferRuns?: RunDeferral;
 }
 
 export interface CurveGeometry {
@@ -69,6 +72,7 @@ function framePixels(curve: Curve, prep: PreparedCurve, f: CurveFrame) {
     resolution: f.resolution,
     thin: f.thin,
     reuse: true,
+    deferRuns: f.deferRuns,
   });
 }
 

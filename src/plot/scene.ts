@@ -35,6 +35,7 @@ import { fitTitle, TITLE_LINE_SPACING, type TitleFit } from "./title";
 import { logTicks } from "./ticks";
 import { highlightNodes } from "./highlight";
 import { figureSettings, physicalSize } from "./scene-settings";
+import type { RunDeferral } from "./thinning/deferred-runs";
 
 /**
  * The CSS font-family list of each figure font: the bundled Computer Modern Unicode face first (the app loads
@@ -81,6 +82,12 @@ export interface BuildSceneOpts {
    * exports never pass it. Ignored for a fixed place.
    */
   holdLegend?: AutoLegendPlace;
+  /**
+   * On screen: the first run thinning of a big file-order curve at a new zoom level is listed in `jobs` for a
+   * worker, and a stand-in drawn meanwhile (thinning/deferred-runs.ts); the figure builds again once the worker
+   * has answered. Exports never pass it, so they always draw the full thinning. @default none
+   */
+  deferRuns?: RunDeferral;
 }
 
 function modelNotes(m: Model, c: ReturnType<typeof constantsOf>): string[] {
@@ -271,6 +278,7 @@ interface DataFrame {
   resolution: number;
   thin: boolean | undefined;
   envelope: boolean | undefined;
+  deferRuns: RunDeferral | undefined;
 }
 
 /** The curves' and models' fills and lines (each in project order), and each one's lines by id for halos. */
@@ -293,6 +301,7 @@ function dataNodes(project: Project, d: DataFrame) {
         resolution: d.resolution,
         thin: d.thin,
         envelope: d.envelope,
+        deferRuns: d.deferRuns,
       },
       `curve-${i + 1}`,
     );
@@ -409,6 +418,7 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
     resolution: opts.resolution ?? 1,
     thin: opts.thin,
     envelope: opts.envelope,
+    deferRuns: opts.deferRuns,
   });
   const highlight = highlightNodes(opts.highlight, { map, plot, fonts }, data.modelLineById, data.curveLineById);
 

@@ -7,7 +7,8 @@ import { readdirSync, readFileSync } from "node:fs";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { CURRENT_VERSION, LINK_FORMAT_VERSION, decodeLink, projectFromFile, projectsEqual } from "../../src/data/index";
-import { AXBAND_PROJECT_NS, EMBED_ENCODING, extractProjectFromSvg } from "../../src/formats/figure-file";
+import { AXBAND_PROJECT_NS, EMBED_ENCODING } from "../../src/formats/figure-file";
+import { extractProjectFromSvg } from "../../src/formats/figure-read";
 import type { Project } from "../../src/project/types";
 
 const GOLDEN = join(import.meta.dirname, "golden");

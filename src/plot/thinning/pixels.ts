@@ -16,6 +16,7 @@ import { dpSelection } from "./douglas-peucker";
 import type { PreparedCurve } from "../../analysis/prepared-curve";
 import { viewArrays, type ViewArrays } from "./prepared";
 import { gatherRuns, levelOf } from "./runs";
+import type { RunDeferral } from "./deferred-runs";
 import { ensureBuffers, scratch } from "./scratch";
 
 export interface PixelParams {
@@ -38,6 +39,11 @@ export interface PixelParams {
    * (the scene builder turns each into path data at once). @default false
    */
   reuse?: boolean;
+  /**
+   * On screen: leave a big file-order curve's first run thinning at a new level to a worker, listing it here,
+   * and draw a stand-in meanwhile (see deferred-runs.ts). Exports never pass it.
+   */
+  deferRuns?: RunDeferral;
 }
 
 /** Map the selected indices to pixels in scratch.x/y. */
@@ -57,6 +63,8 @@ function mapSelected(prep: PreparedCurve, v: Float64Array, sel: Int32Array, coun
 /** Error budget of unsorted curves in device px: Douglas–Peucker alone, or run thinning alone. */
 const DP_ONLY_PX = 0.5;
 const RUNS_PX = 0.5;
+/** Tolerance of the Douglas–Peucker stand-in for chunks no level has yet, in device px (one frame or a few). */
+const STAND_IN_PX = 1;
 
 /** Every point in scratch.x/y (thin: false, for comparisons). */
 function allPixels(prep: PreparedCurve, p: PixelParams): number {
@@ -103,7 +111,8 @@ function unsortedPixels(prep: PreparedCurve, p: PixelParams, res: number, cullRe
     const pow = (t: number) => 2 ** (Math.floor(2 * Math.log2(t)) / 2);
     const tx = pow(RUNS_PX / res / Math.abs(p.bx));
     const ty = pow(RUNS_PX / res / Math.abs(p.by));
-    n = gatherRuns(prep, va, levelOf(va, `B${tx},${ty}`), tx, ty, lmLo, lmHi, vLo, vHi, p);
+    const standInTol = STAND_IN_PX / res / scale;
+    n = gatherRuns(prep, va, levelOf(va, tx, ty), { lmLo, lmHi, vLo, vHi, map: p, standInTol, defer: p.deferRuns });
     useA = n >= k;
   }
   if (useA) {

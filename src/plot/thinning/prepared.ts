@@ -24,6 +24,9 @@ export interface ViewArrays {
 
 /** Run-thinned indices of one tolerance level, computed lazily per chunk of RUN_CHUNK points (runs.ts). */
 export interface LevelSelection {
+  /** Run sizes in log10 mass and in v (see thinRunsLog). */
+  tx: number;
+  ty: number;
   perChunk: (Int32Array | undefined)[];
 }
 

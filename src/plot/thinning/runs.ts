@@ -4,6 +4,7 @@
 import type { PixelMap } from "./columns";
 import type { PreparedCurve } from "../../analysis/prepared-curve";
 import { BOX_CHUNK, type LevelSelection, type ViewArrays } from "./prepared";
+import { DEFER_MIN_POINTS, nearestLevelChunk, type RunDeferral } from "./deferred-runs";
 import { ensureBuffers, scratch } from "./scratch";
 
 /** Points per chunk of a run-thinning level: a chunk edge ends a run, which costs ≤ 2 extra points per chunk. */
@@ -14,6 +15,8 @@ const MAX_LEVELS = 24;
 
 // Working space of thinRunsLog (its result is a copy): levels are thinned a chunk at a time, on every zoom.
 let runScratch = new Int32Array(RUN_CHUNK);
+// Which chunks of the curve being gathered are near the plot (1) or wholly beyond one edge (0).
+let visible = new Uint8Array(1024);
 
 /**
  * Run thinning for curves that are not sorted by mass: consecutive points whose bounding box is at most
@@ -74,48 +77,57 @@ export function thinRunsLog(lm: Float64Array, v: Float64Array, tx: number, ty: n
   return out.slice(0, w);
 }
 
-export function levelOf(va: ViewArrays, key: string): LevelSelection {
+/**
+ * Chunk c of a level (absolute indices, ascending): what the scene builder and the runs worker (run-jobs.ts) both
+ * compute, so a level filled by the worker is the one a synchronous build makes.
+ */
+export function thinRunChunk(lm: Float64Array, v: Float64Array, c: number, tx: number, ty: number): Int32Array {
+  const s = c * RUN_CHUNK;
+  const e = Math.min(lm.length, s + RUN_CHUNK);
+  const idx = thinRunsLog(lm.subarray(s, e), v.subarray(s, e), tx, ty);
+  for (let k = 0; k < idx.length; k++) idx[k] += s;
+  return idx;
+}
+
+/** The level of run sizes (tx, ty) of a view, made most recent (created empty when new). */
+export function levelOf(va: ViewArrays, tx: number, ty: number): LevelSelection {
+  const key = `B${tx},${ty}`;
   const hit = va.levels.get(key);
   if (hit) {
     va.levels.delete(key);
     va.levels.set(key, hit);
     return hit;
   }
-  const sel: LevelSelection = { perChunk: [] };
+  const sel: LevelSelection = { tx, ty, perChunk: [] };
   va.levels.set(key, sel);
   if (va.levels.size > MAX_LEVELS) va.levels.delete(va.levels.keys().next().value as string);
   return sel;
 }
 
+/** What gatherRuns needs of the frame: the cull rectangle in (lm, v), the pixel map, and a deferral if any. */
+export interface RunFrame {
+  lmLo: number;
+  lmHi: number;
+  vLo: number;
+  vHi: number;
+  map: PixelMap;
+  /** Importance above which a point is kept in a Douglas–Peucker stand-in (log units). */
+  standInTol: number;
+  defer?: RunDeferral;
+}
+
 /**
- * Run-thinned pixels of the visible part of an unsorted curve into scratch.x/y. A chunk whose box lies
- * wholly beyond one edge of the cull rectangle (log space) contributes only its first and last point: the
- * path between them stays beyond that edge, so this is exact culling, found without touching its points.
- * Visible chunks are thinned on first use and kept in the level.
+ * Marks in `visible` the chunks near the cull rectangle: a chunk whose box lies wholly beyond one edge (log space)
+ * contributes only its first and last point, since the path between them stays beyond that edge (exact culling,
+ * found without touching its points). Returns how many points of visible chunks the level still lacks.
  */
-export function gatherRuns(
-  prep: PreparedCurve,
-  va: ViewArrays,
-  sel: LevelSelection,
-  tx: number,
-  ty: number,
-  lmLo: number,
-  lmHi: number,
-  vLo: number,
-  vHi: number,
-  map: PixelMap,
-): number {
+function markVisible(va: ViewArrays, sel: LevelSelection, n: number, f: RunFrame): number {
   const boxes = va.boxes as Float64Array;
-  const n = prep.n;
-  const lm = prep.lm;
-  const v = va.v;
-  const { ax, bx, ay, by, yOffset } = map;
   const per = RUN_CHUNK / BOX_CHUNK;
   const nc = Math.ceil(n / RUN_CHUNK);
-  let count = 0;
+  if (visible.length < nc) visible = new Uint8Array(nc);
+  let missing = 0;
   for (let c = 0; c < nc; c++) {
-    const s = c * RUN_CHUNK;
-    const e = Math.min(n, s + RUN_CHUNK);
     let a = Infinity;
     let b = -Infinity;
     let lo = Infinity;
@@ -128,12 +140,53 @@ export function gatherRuns(
       if (boxes[4 * k + 2] < lo) lo = boxes[4 * k + 2];
       if (boxes[4 * k + 3] > hi) hi = boxes[4 * k + 3];
     }
-    const off = b < lmLo || a > lmHi || hi < vLo || lo > vHi;
-    let idx = off ? null : sel.perChunk[c];
-    if (!off && !idx) {
-      idx = thinRunsLog(lm.subarray(s, e), v.subarray(s, e), tx, ty);
-      for (let k = 0; k < idx.length; k++) idx[k] += s;
-      sel.perChunk[c] = idx;
+    const on = !(b < f.lmLo || a > f.lmHi || hi < f.vLo || lo > f.vHi);
+    visible[c] = on ? 1 : 0;
+    if (on && !sel.perChunk[c]) missing += Math.min(n, (c + 1) * RUN_CHUNK) - c * RUN_CHUNK;
+  }
+  return missing;
+}
+
+/**
+ * Run-thinned pixels of the visible part of an unsorted curve into scratch.x/y (chunks beyond the plot: their
+ * ends only, see markVisible). Visible chunks are thinned on first use and kept in the level, unless `f.defer` is
+ * given and they add up to DEFER_MIN_POINTS or more: then they are listed for the worker and drawn meanwhile from
+ * the nearest level that has them, or else as their points above the Douglas–Peucker stand-in tolerance.
+ */
+// A hot loop, long on purpose: the pixel mapping is written out per source of indices.
+export function gatherRuns(prep: PreparedCurve, va: ViewArrays, sel: LevelSelection, f: RunFrame): number {
+  const n = prep.n;
+  const lm = prep.lm;
+  const v = va.v;
+  const { ax, bx, ay, by, yOffset } = f.map;
+  const nc = Math.ceil(n / RUN_CHUNK);
+  const defer = markVisible(va, sel, n, f) >= DEFER_MIN_POINTS && !!f.defer;
+  const deferred: number[] = [];
+  const imp = va.importance as Float64Array;
+  let count = 0;
+  for (let c = 0; c < nc; c++) {
+    const s = c * RUN_CHUNK;
+    const e = Math.min(n, s + RUN_CHUNK);
+    let idx = visible[c] ? sel.perChunk[c] : null;
+    if (visible[c] && !idx) {
+      if (!defer) idx = sel.perChunk[c] = thinRunChunk(lm, v, c, sel.tx, sel.ty);
+      else {
+        deferred.push(c);
+        idx = nearestLevelChunk(va, sel, c);
+      }
+    }
+    if (!idx && visible[c]) {
+      // Douglas–Peucker stand-in: the chunk's ends and its points above the stand-in tolerance.
+      ensureBuffers(count + (e - s), count);
+      const ox = scratch.x;
+      const oy = scratch.y;
+      for (let i = s; i < e; i++) {
+        if (i !== s && i !== e - 1 && !(imp[i] > f.standInTol)) continue;
+        ox[count] = ax + bx * lm[i];
+        oy[count] = ay + by * (v[i] + yOffset);
+        count++;
+      }
+      continue;
     }
     // The pixels of the kept points, written here rather than in a second pass over their indices.
     ensureBuffers(count + (idx ? idx.length : 2), count);
@@ -157,5 +210,6 @@ export function gatherRuns(
       count++;
     }
   }
+  if (deferred.length) f.defer?.jobs.push({ prep, va, level: sel, chunks: deferred });
   return count;
 }

@@ -12,6 +12,8 @@ import { withoutPreparing } from "../store/preparation";
 import { SceneSvg } from "./SceneSvg";
 import { Crosshair, PreparingNote } from "./FigureOverlays";
 import { useFigureGestures } from "./useFigureGestures";
+import { requestRuns, runsWorkerAvailable } from "../../worker/runs-client";
+import type { RunDeferral, RunJob } from "../../plot/thinning/deferred-runs";
 
 /** Device pixels per scene pixel, rounded to quarters so a small resize does not rebuild the scene. */
 function resolutionFor(displayWidthPx: number, sceneWidthPx: number): number {
@@ -42,39 +44,49 @@ function figureLabel(scene: Scene, project: Project): string {
 
 /**
  * The scene of the figure on screen at the display's resolution. While the view moves, an automatic legend keeps
- * the place it had when the view last rested; `sceneRef` always holds the latest scene for the gestures.
+ * the place it had when the view last rested; `sceneRef` always holds the latest scene for the gestures. A big
+ * file-order curve's first thinning at a new zoom level goes to the runs worker, a stand-in drawn meanwhile
+ * (`deferred` lists it); the scene is built again once the answers are in the cache.
  */
 function useFigureScene(
   project: Project,
   opts: { displayWidth: number; highlight: BuildSceneOpts["highlight"]; moving: boolean },
   sceneRef: RefObject<Scene | null>,
-): Scene {
+): { scene: Scene; deferred: RunJob[] } {
   const { displayWidth, highlight, moving } = opts;
   const preset = presetOf(project.figure);
   const resolution = resolutionFor(displayWidth, preset.widthPx);
   const restingPlace = useRef<Scene["autoLegendPlace"]>(undefined);
   const holdLegend = moving ? restingPlace.current : undefined;
-  const scene = useMemo(
-    () =>
-      buildScene(project, {
-        widthPx: preset.widthPx,
-        heightPx: preset.heightPx,
-        resolution,
-        highlight,
-        physical: false,
-        holdLegend,
-        // Dense zig-zags as filled envelopes: the same pixels, a fraction of the browser's painting.
-        envelope: true,
-      }),
-    [project, preset.widthPx, preset.heightPx, resolution, highlight, holdLegend],
-  );
+  // Bumped when the runs worker has put thinnings into the cache that this figure drew stand-ins for.
+  const [runsInstalled, setRunsInstalled] = useState(0);
+  const built = useMemo(() => {
+    void runsInstalled; // built again when the cache has gained thinnings (the scene reads them from there)
+    const deferRuns: RunDeferral | undefined = runsWorkerAvailable() ? { jobs: [] } : undefined;
+    const scene = buildScene(project, {
+      widthPx: preset.widthPx,
+      heightPx: preset.heightPx,
+      resolution,
+      highlight,
+      physical: false,
+      holdLegend,
+      // Dense zig-zags as filled envelopes: the same pixels, a fraction of the browser's painting.
+      envelope: true,
+      deferRuns,
+    });
+    return { scene, deferred: deferRuns?.jobs ?? [] };
+  }, [project, preset.widthPx, preset.heightPx, resolution, highlight, holdLegend, runsInstalled]);
+  const { scene, deferred } = built;
+  useEffect(() => {
+    if (deferred.length) requestRuns(deferred, () => setRunsInstalled((k) => k + 1));
+  }, [deferred]);
   useEffect(() => {
     if (!moving) restingPlace.current = scene.autoLegendPlace;
   }, [scene, moving]);
   useEffect(() => {
     sceneRef.current = scene;
   }, [scene, sceneRef]);
-  return scene;
+  return built;
 }
 
 /** The lines under the figure: the scene's notes, the legend's shortened entries, and how to move the view. */
@@ -115,7 +127,7 @@ export function FigureView() {
   const hintId = useId();
   const idPrefix = `fig${useId().replace(/[^A-Za-z0-9]/g, "")}-`;
   const { moving, panning, handlers } = useFigureGestures(svgRef, sceneRef);
-  const scene = useFigureScene(project, { displayWidth, highlight, moving }, sceneRef);
+  const { scene, deferred } = useFigureScene(project, { displayWidth, highlight, moving }, sceneRef);
 
   const { plot, scales } = scene;
   const aspect = scene.widthPx / scene.heightPx;
@@ -141,6 +153,7 @@ export function FigureView() {
           data-y-view={scales.yView ?? "coupling"}
           data-plot-box={`${plot.x},${plot.y},${plot.w},${plot.h}`}
           data-scene-size={`${scene.widthPx},${scene.heightPx}`}
+          data-thinning-pending={deferred.length ? deferred.length : undefined}
           {...handlers}
         >
           <Crosshair scene={scene} />
