@@ -37,6 +37,7 @@ import { runsWidthPx } from "./text";
 import { fitTitle, TITLE_LINE_SPACING, type TitleFit } from "./title";
 import { logTicks } from "./ticks";
 import { highlightNodes } from "./highlight";
+import { directLabels } from "./direct-label-nodes";
 
 /**
  * The CSS font-family list of each figure font: the bundled Computer Modern Unicode face first (the app loads
@@ -378,7 +379,9 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   const topAxis = fig.topAxis === "fa" || fig.topAxis === "frequency" ? fig.topAxis : "none";
   const legendSetting = fig.legend ?? "top-right";
 
-  const entries = legendSetting === "hidden" ? [] : legendEntries(project, fonts, c);
+  const allEntries = legendSetting === "hidden" ? [] : legendEntries(project, fonts, c);
+  // "on-plot": no legend box; each entry's text is written beside its own line (direct-label-nodes.ts).
+  const entries = legendSetting === "on-plot" ? [] : allEntries;
 
   const scales: ScaleConfig = { massDomainEv, yDomain, yView: view };
   const fitted = layoutWithLegend(project, {
@@ -444,6 +447,11 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
       data: { testid: "legend" },
     },
   ];
+  const labels =
+    legendSetting === "on-plot"
+      ? directLabels(project, { constants: c, view, scales, plot, fonts, entries: allEntries })
+      : null;
+  if (labels) layers[layers.length - 1].nodes.push(...labels.nodes);
   const scene: Scene = {
     widthPx: r2(widthPx),
     heightPx: r2(heightPx),
@@ -454,6 +462,7 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   };
   Object.assign(scene, legendReport(entries, legendBox, fonts, autoPlace));
   if (title?.note) scene.notes = [title.note];
+  if (labels?.report.length) scene.directLabels = labels.report;
   if (opts.physical !== false) {
     const custom = opts.widthPx !== undefined || opts.heightPx !== undefined;
     scene.widthPhysical = custom ? physicalOf(widthPx) : preset.widthPhysical;

@@ -32,6 +32,8 @@ export const legendPlace = z.enum([
   // "below" and "above" joined without a bump in the same way as "auto".
   "below",
   "above",
+  // Direct labels on the plot, joined without a bump in the same way.
+  "on-plot",
   "hidden",
 ]);
 export const sizePreset = z.enum(["slide", "single-column", "double-column", "custom"]);
@@ -48,6 +50,8 @@ export const physicsRef = z.enum(["2016", "2019", "custom"]);
 export const modelKind = z.enum(["line", "interval", "between", "set"]);
 export const setDraw = z.enum(["lines", "extremes", "central"]);
 export const setShare = z.number().gt(0).max(1);
+// Where a direct label was dragged to ([mass eV, g_aγγ GeV⁻¹]); joined without a bump, optional (absent: automatic).
+export const labelAt = z.tuple([z.number().positive().finite(), z.number().positive().finite()]);
 
 const eOverNText = z
   .string()
@@ -170,6 +174,7 @@ export const ProjectSchema = z.object({
         fillOpacity: z.number().min(0).max(1),
         visible: z.boolean(),
         sigmas: z.number().min(0).max(10),
+        labelAt: labelAt.optional(),
       }),
     )
     .max(PROJECT_LIMITS.models),
@@ -195,6 +200,7 @@ export const ProjectSchema = z.object({
           }),
           citation: z.string().max(PROJECT_LIMITS.citation),
           fileName: z.string().max(PROJECT_LIMITS.fileName),
+          labelAt: labelAt.optional(),
         })
         .refine((c) => c.massEv.length === c.gInvGeV.length, "massEv and gInvGeV must have the same length"),
     )

@@ -12,10 +12,26 @@ export type CurveRole = "exclusion" | "projection" | "region";
 export type ExclusionMark = "hatch" | "fill" | "hatch-fill";
 /**
  * Where the legend goes; "auto" is a free inner corner, else below or outside right (src/plot/legend-place.ts);
- * "below" sits under the x-axis title, "above" between the figure title and the plot, both in columns.
+ * "below" sits under the x-axis title, "above" between the figure title and the plot, both in columns;
+ * "on-plot" writes no legend box but each label beside its own line (direct labels, src/plot/direct-labels.ts).
  */
 export type LegendPlace =
-  "auto" | "top-left" | "top-right" | "bottom-left" | "bottom-right" | "outside-right" | "below" | "above" | "hidden";
+  | "auto"
+  | "top-left"
+  | "top-right"
+  | "bottom-left"
+  | "bottom-right"
+  | "outside-right"
+  | "below"
+  | "above"
+  | "on-plot"
+  | "hidden";
+/**
+ * Where the user put a direct label (legend "on-plot"): the centre of its text as a point of the data, mass in eV
+ * and g_aγγ in GeV⁻¹ (whatever the y view), so it stays by the same feature of the data when the figure is
+ * resized, zoomed or set at another preset. Absent: placed automatically. Added without a bump.
+ */
+export type LabelAt = [massEv: number, gInvGeV: number];
 export type SizePreset = "slide" | "single-column" | "double-column" | "custom";
 export type TopAxis = "none" | "fa" | "frequency";
 export type { AxisMassUnit };
@@ -92,6 +108,8 @@ export interface Model {
   visible: boolean;
   /** Theory spread k in ±kσ (0 = none). */
   sigmas: number;
+  /** Where its direct label was dragged to; absent: placed automatically. */
+  labelAt?: LabelAt;
 }
 
 export interface CurveRescale {
@@ -125,6 +143,8 @@ export interface Curve {
   /** Publication the data came from (free text or a BibTeX entry), shown in the sources list. */
   citation: string;
   fileName: string;
+  /** Where its direct label was dragged to; absent: placed automatically. */
+  labelAt?: LabelAt;
 }
 
 export interface Figure {
