@@ -12,6 +12,7 @@ import { withoutPreparing } from "../store/preparation";
 import { SceneSvg } from "./SceneSvg";
 import { Crosshair, PreparingNote } from "./FigureOverlays";
 import { useFigureGestures } from "./useFigureGestures";
+import { LabelHandles } from "./LabelHandles";
 
 /** Device pixels per scene pixel, rounded to quarters so a small resize does not rebuild the scene. */
 function resolutionFor(displayWidthPx: number, sceneWidthPx: number): number {
@@ -111,6 +112,7 @@ export function FigureView() {
           <Crosshair scene={scene} />
         </SceneSvg>
         <PreparingNote scene={scene} waiting={waiting} />
+        <LabelHandles scene={scene} boxRef={boxRef} />
       </div>
       {scene.notes?.length ? (
         <p className="figure-note" data-testid="figure-notes" role="status">

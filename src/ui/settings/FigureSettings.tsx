@@ -19,6 +19,7 @@ import { CUSTOM_MM_LIMITS } from "../../project/limits";
 import { useShallow } from "zustand/react/shallow";
 import { useAxband, type AxbandState } from "../store";
 import { LEGEND_SCALE_LIMITS } from "../../project/limits";
+import { LabelPositions } from "./LabelPositions";
 
 const PRESETS: { value: SizePreset; label: string }[] = [
   { value: "slide", label: "Slide 16:9" },
@@ -63,6 +64,8 @@ const LEGEND: { value: LegendPlace; label: string }[] = [
   { value: "outside-right", label: "outside right" },
   { value: "below", label: "below the plot" },
   { value: "above", label: "above the plot" },
+  // Each label beside its own line (src/plot/direct-labels.ts).
+  { value: "on-plot", label: "on the plot (labels by their lines)" },
   { value: "hidden", label: "hidden" },
 ];
 
@@ -318,6 +321,7 @@ export function FigureSettings() {
         testId="legend-place"
         onChange={(v) => set({ legend: v })}
       />
+      {figure.legend === "on-plot" ? <LabelPositions /> : null}
       <NumberSetting
         label="Legend text (× default)"
         value={figure.legendScale}
