@@ -1,7 +1,7 @@
 // Direct labels as scene nodes: the label texts of the visible curves and models measured and wrapped, their drawn
 // shapes read as the automatic legend reads them, placed by direct-labels.ts, written as text and leader nodes.
 import type { Curve, LabelAt, Model, Project, YView } from "../project/types";
-import type { PathNode, SceneNode, ScaleConfig, TextNode } from "./scene-types";
+import type { PathNode, SceneNode, ScaleConfig, TextNode, TextRun } from "./scene-types";
 import type { Fonts, PlotRect } from "./layout";
 import type { LegendEntry } from "./legend";
 import type { Shape, Subpath } from "./occupancy";
@@ -174,12 +174,31 @@ export function labelAtOf(
   return [massEv, viewToG(s.scales.yView ?? "coupling", massEv, v, constants)];
 }
 
-/** Text lines of a label: wrapped plain text, each line's markup read (as the legend does). */
-function labelLines(text: string, sizePx: number, maxWidthPx: number) {
-  return wrapText(text, sizePx, maxWidthPx, 3).lines.map((l) => markupRuns(l));
+/** One way of setting a label: its lines (markup read, as the legend does) and its box size. */
+interface LabelForm {
+  lines: TextRun[][];
+  widthPx: number;
+  heightPx: number;
 }
 
-function textNodes(it: Labelled, p: PlacedLabel, lines: ReturnType<typeof labelLines>, sizePx: number): SceneNode[] {
+/**
+ * The forms a label can take: wrapped at the widest line allowed, then narrower (0.6 and 0.4 of it, not under six
+ * em), each kept only when it differs from the one before and needs no "…".
+ */
+function labelForms(text: string, sizePx: number, maxWidthPx: number): LabelForm[] {
+  const forms: LabelForm[] = [];
+  for (const f of [1, 0.6, 0.4]) {
+    const w = wrapText(text, sizePx, Math.max(maxWidthPx * f, sizePx * 6), f === 1 ? 3 : 4);
+    if (f !== 1 && (w.shortened || w.lines.length === forms[forms.length - 1].lines.length)) continue;
+    const lines = w.lines.map((l) => markupRuns(l));
+    const widthPx = Math.max(...lines.map((l) => runsWidthPx(l, sizePx)));
+    const heightPx = (CAP_HEIGHT + 0.25 + (lines.length - 1) * LINE_SPACING) * sizePx;
+    forms.push({ lines, widthPx, heightPx });
+  }
+  return forms;
+}
+
+function textNodes(it: Labelled, p: PlacedLabel, lines: TextRun[][], sizePx: number): SceneNode[] {
   const colour = labelColour(it.colour);
   const data = { [it.kind === "curve" ? "curve-id" : "model-id"]: it.id, "direct-label": p.pinned ? "moved" : "auto" };
   const out: SceneNode[] = [];
@@ -238,17 +257,16 @@ export function directLabels(
   const sizePx = f.fonts.legendPx;
   const lw = f.fonts.dataLinePx;
   const maxW = Math.max(f.plot.w * MAX_WIDTH_FRACTION, sizePx * 6);
-  const lines = labelled.map((it) => labelLines(it.text, sizePx, maxW));
+  const forms = labelled.map((it) => labelForms(it.text, sizePx, maxW));
   const items: LabelItem[] = labelled.map((it, k) => {
     const pin = it.labelAt ? pinPx(it.labelAt, f, map) : null;
-    const w = Math.max(...lines[k].map((l) => runsWidthPx(l, sizePx)));
-    const h = (CAP_HEIGHT + 0.25 + (lines[k].length - 1) * LINE_SPACING) * sizePx;
     const inPlot =
       pin && pin.x >= f.plot.x && pin.x <= f.plot.x + f.plot.w && pin.y >= f.plot.y && pin.y <= f.plot.y + f.plot.h;
     return {
       key: `${it.kind}:${it.id}`,
-      widthPx: w,
-      heightPx: h,
+      widthPx: forms[k][0].widthPx,
+      heightPx: forms[k][0].heightPx,
+      alternatives: forms[k].slice(1),
       lines: it.lines,
       shapes: it.shapes,
       haloPx: it.hatched ? hatchStyleFor(lw).lengthPx + lw : lw,
@@ -264,7 +282,7 @@ export function directLabels(
   labelled.forEach((it, k) => {
     const p = byKey.get(items[k].key);
     if (!p) return;
-    nodes.push(...textNodes(it, p, lines[k], sizePx));
+    nodes.push(...textNodes(it, p, (forms[k][p.variant] ?? forms[k][0]).lines, sizePx));
     const box = { x: r2(p.box.x), y: r2(p.box.y), w: r2(p.box.w), h: r2(p.box.h) };
     report.push({ kind: it.kind, id: it.id, text: it.text, box, pinned: p.pinned });
   });

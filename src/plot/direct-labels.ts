@@ -27,12 +27,14 @@ const COST_FILL = 3;
 const COST_LEADER_CROSS = 1;
 const COST_LABEL = 1000;
 /** Rings tried beyond the place beside the line (each one text size further out, with a leader line). */
-const RINGS = 6;
+const RINGS = 10;
 /** Per ring away from the line: a label on clear paper beside its line is always preferred. */
 const COST_RING = 0.3;
 /** Slight preferences that break ties the same way every time: near the middle of the line, then the position order. */
 const COST_FROM_MIDDLE = 0.1;
 const COST_POSITION = 0.004;
+/** Per narrower wrapping of the text: the label keeps its widest form where that has room. */
+const COST_VARIANT = 0.15;
 
 /**
  * The eight positions around an anchor, as unit directions: above, below, right, left, then the diagonals. A box
@@ -56,6 +58,8 @@ export interface LabelItem {
   /** The label's box size, scene px (text measured by the caller). */
   widthPx: number;
   heightPx: number;
+  /** Other sizes the same text can take (wrapped narrower), tried after the first at a slight extra cost. */
+  alternatives?: readonly { widthPx: number; heightPx: number }[];
   /** The lines the label sits beside (anchors, and where a leader points), scene px. */
   lines: readonly Subpath[];
   /** Everything the item draws; its own fills do not count against its own label (a label may sit in its band). */
@@ -74,6 +78,8 @@ export interface PlacedLabel {
   /** Where a leader line from the box ends (a point of the item's line), or null for a label beside its line. */
   leaderTo: { x: number; y: number } | null;
   pinned: boolean;
+  /** Which size was used: 0 the item's own, k its alternative k − 1. */
+  variant: number;
   /** Fraction of the box over other items' drawn pixels (0 when clear; for tests and notes). */
   covered: number;
 }
@@ -303,30 +309,39 @@ function bestPlace(item: LabelItem, k: number, input: PlaceLabelsInput, cover: C
   const { plot, gapPx, sizePx } = input;
   const anchors = anchorsOf(item.lines, plot);
   if (anchors.length === 0) return null;
-  const { widthPx: w, heightPx: h } = item;
-  let best: { box: PlotRect; cost: number; covered: number; anchor: Anchor; ring: number } | null = null;
+  const sizes = [{ widthPx: item.widthPx, heightPx: item.heightPx }, ...(item.alternatives ?? [])];
+  let best: { box: PlotRect; cost: number; covered: number; anchor: Anchor; ring: number; v: number } | null = null;
   for (let ring = 0; ring <= RINGS; ring++) {
-    for (const a of anchors)
-      for (let p = 0; p < POSITIONS.length; p++) {
-        const box = boxAt(a.x, a.y, POSITIONS[p], gapPx + ring * sizePx, w, h);
-        if (!inside(box, plot)) continue;
-        const c = coverCost(cover, k, box);
-        const leader = ring > 0 ? COST_LEADER_CROSS * leaderCrossings(cover, box, a, gapPx) : 0;
-        let cost = c.cost + leader + COST_RING * ring + COST_FROM_MIDDLE * Math.abs(a.t - 0.5) + COST_POSITION * p;
-        for (const q of placed) cost += (COST_LABEL * overlapArea(box, q.box)) / (w * h);
-        if (!best || cost < best.cost - 1e-12) best = { box, cost, covered: c.covered, anchor: a, ring };
-      }
+    for (let v = 0; v < sizes.length; v++)
+      for (const a of anchors)
+        for (let p = 0; p < POSITIONS.length; p++) {
+          const { widthPx: w, heightPx: h } = sizes[v];
+          const box = boxAt(a.x, a.y, POSITIONS[p], gapPx + ring * sizePx, w, h);
+          if (!inside(box, plot)) continue;
+          const c = coverCost(cover, k, box);
+          const leader = ring > 0 ? COST_LEADER_CROSS * leaderCrossings(cover, box, a, gapPx) : 0;
+          let cost =
+            c.cost +
+            leader +
+            COST_VARIANT * v +
+            COST_RING * ring +
+            COST_FROM_MIDDLE * Math.abs(a.t - 0.5) +
+            COST_POSITION * p;
+          for (const q of placed) cost += (COST_LABEL * overlapArea(box, q.box)) / (w * h);
+          if (!best || cost < best.cost - 1e-12) best = { box, cost, covered: c.covered, anchor: a, ring, v };
+        }
     // A clear place ends the search; further rings only while every place so far covers something.
     if (best && best.cost < COST_RING * (ring + 1)) break;
   }
   if (!best) {
     // The label is larger than every free place: beside the line's middle, kept inside the plot.
     const a = anchors[Math.floor(anchors.length / 2)];
+    const { widthPx: w, heightPx: h } = item;
     const box = clampedBox(a.x, a.y - gapPx - h / 2, w, h, plot);
-    return { key: item.key, box, leaderTo: null, pinned: false, covered: coverCost(cover, k, box).covered };
+    return { key: item.key, box, leaderTo: null, pinned: false, variant: 0, covered: coverCost(cover, k, box).covered };
   }
   const leaderTo = best.ring > 0 ? { x: best.anchor.x, y: best.anchor.y } : null;
-  return { key: item.key, box: best.box, leaderTo, pinned: false, covered: best.covered };
+  return { key: item.key, box: best.box, leaderTo, pinned: false, variant: best.v, covered: best.covered };
 }
 
 /** Cells of drawn lines a leader from the box to the anchor passes over (its last `endPx`, at its own line, left out). */
@@ -350,7 +365,8 @@ function pinnedPlace(item: LabelItem, k: number, input: PlaceLabelsInput, cover:
   const box = clampedBox(p.x, p.y, item.widthPx, item.heightPx, input.plot);
   const near = nearestOnLines(item.lines, box.x + box.w / 2, box.y + box.h / 2, input.plot);
   const away = near !== null && distToBox(box, near.x, near.y) > 1.5 * input.gapPx;
-  return { key: item.key, box, leaderTo: away ? near : null, pinned: true, covered: coverCost(cover, k, box).covered };
+  const covered = coverCost(cover, k, box).covered;
+  return { key: item.key, box, leaderTo: away ? near : null, pinned: true, variant: 0, covered };
 }
 
 /**
