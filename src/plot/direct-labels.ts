@@ -276,10 +276,9 @@ function itemCovers(items: readonly LabelItem[], plot: PlotRect, cellPx: number)
     ownFills.push(own ? own.cells : null);
   }
   const lineSat = integral(strokes, (i) => strokes.cells[i] === 1);
-  const fillSats = items.map((_, k) => {
-    const own = ownFills[k];
-    return integral(strokes, (i) => fillCount[i] - (own ? own[i] : 0) > 0);
-  });
+  // Items without a fill of their own share one table of every fill.
+  const allFills = integral(strokes, (i) => fillCount[i] > 0);
+  const fillSats = ownFills.map((own) => (own ? integral(strokes, (i) => fillCount[i] - own[i] > 0) : allFills));
   return { grid: strokes, lineSat, fillSats };
 }
 
@@ -319,15 +318,13 @@ function bestPlace(item: LabelItem, k: number, input: PlaceLabelsInput, cover: C
           const box = boxAt(a.x, a.y, POSITIONS[p], gapPx + ring * sizePx, w, h);
           if (!inside(box, plot)) continue;
           const c = coverCost(cover, k, box);
-          const leader = ring > 0 ? COST_LEADER_CROSS * leaderCrossings(cover, box, a, gapPx) : 0;
           let cost =
-            c.cost +
-            leader +
-            COST_VARIANT * v +
-            COST_RING * ring +
-            COST_FROM_MIDDLE * Math.abs(a.t - 0.5) +
-            COST_POSITION * p;
+            c.cost + COST_VARIANT * v + COST_RING * ring + COST_FROM_MIDDLE * Math.abs(a.t - 0.5) + COST_POSITION * p;
+          // The dearer parts only for a box that can still win (the scan of the leader is the costly one).
+          if (best && cost >= best.cost) continue;
           for (const q of placed) cost += (COST_LABEL * overlapArea(box, q.box)) / (w * h);
+          if (best && cost >= best.cost) continue;
+          if (ring > 0) cost += COST_LEADER_CROSS * leaderCrossings(cover, box, a, gapPx);
           if (!best || cost < best.cost - 1e-12) best = { box, cost, covered: c.covered, anchor: a, ring, v };
         }
     // A clear place ends the search; further rings only while every place so far covers something.
