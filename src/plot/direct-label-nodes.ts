@@ -23,7 +23,11 @@ export interface DirectLabelReport {
   /** The label's text (plain, notes included), for the handle's accessible name. */
   text: string;
   box: PlotRect;
+  /** Whether the user placed it (a held label is not). */
   pinned: boolean;
+  /** The box centre as a data point, and the wrapping used (what holding the label keeps). */
+  at: LabelAt;
+  variant: number;
 }
 
 /** One thing to label, as the scene builder hands it over: text, colour, and its drawn shapes. */
@@ -50,6 +54,11 @@ export interface DirectLabelFrame {
   fonts: Fonts;
   /** The legend's entries (text with notes, colour, and the item's id in `data`): what each label says. */
   entries: readonly Pick<LegendEntry, "text" | "colour" | "data">[];
+  /**
+   * Places to keep labels at (their centres as data points, by "curve:<id>" / "model:<id>") instead of placing them
+   * afresh: the figure holds its labels still while the view moves (BuildSceneOpts.holdLabels).
+   */
+  hold?: Readonly<Record<string, { at: LabelAt; variant: number }>>;
 }
 
 /** Each entry's text and colour by "curve:<id>" / "model:<id>". */
@@ -259,7 +268,9 @@ export function directLabels(
   const maxW = Math.max(f.plot.w * MAX_WIDTH_FRACTION, sizePx * 6);
   const forms = labelled.map((it) => labelForms(it.text, sizePx, maxW));
   const items: LabelItem[] = labelled.map((it, k) => {
-    const pin = it.labelAt ? pinPx(it.labelAt, f, map) : null;
+    const held = it.labelAt ? undefined : f.hold?.[`${it.kind}:${it.id}`];
+    const at = it.labelAt ?? held?.at;
+    const pin = at ? pinPx(at, f, map) : null;
     const inPlot =
       pin && pin.x >= f.plot.x && pin.x <= f.plot.x + f.plot.w && pin.y >= f.plot.y && pin.y <= f.plot.y + f.plot.h;
     return {
@@ -270,7 +281,7 @@ export function directLabels(
       lines: it.lines,
       shapes: it.shapes,
       haloPx: it.hatched ? hatchStyleFor(lw).lengthPx + lw : lw,
-      ...(inPlot ? { pinned: pin } : {}),
+      ...(inPlot ? { pinned: pin, pinnedVariant: held?.variant ?? 0 } : {}),
     };
   });
   // Clear of an exclusion's hatches (on its excluded side) and a little air beside any line.
@@ -284,7 +295,16 @@ export function directLabels(
     if (!p) return;
     nodes.push(...textNodes(it, p, (forms[k][p.variant] ?? forms[k][0]).lines, sizePx));
     const box = { x: r2(p.box.x), y: r2(p.box.y), w: r2(p.box.w), h: r2(p.box.h) };
-    report.push({ kind: it.kind, id: it.id, text: it.text, box, pinned: p.pinned });
+    const at = labelAtOf(box.x + box.w / 2, box.y + box.h / 2, f, f.constants);
+    report.push({
+      kind: it.kind,
+      id: it.id,
+      text: it.text,
+      box,
+      pinned: p.pinned && !!it.labelAt,
+      at,
+      variant: p.variant,
+    });
   });
   return { nodes, report };
 }

@@ -66,6 +66,8 @@ export interface LabelItem {
   shapes: readonly Shape[];
   /** Air kept around the item's lines, px (an exclusion's hatches stand this far out on its excluded side). */
   haloPx?: number;
+  /** With `pinned`: which size to use (0 the item's own, k its alternative k − 1). @default 0 */
+  pinnedVariant?: number;
   /** A place the user chose: the box centre, scene px; placed there (kept inside the plot), never moved. */
   pinned?: { x: number; y: number };
 }
@@ -359,11 +361,13 @@ function leaderCrossings(cover: Covers, box: PlotRect, a: Anchor, endPx: number)
 /** A pinned label: at the user's place, kept inside the plot, with a leader when it is away from its line. */
 function pinnedPlace(item: LabelItem, k: number, input: PlaceLabelsInput, cover: Covers) {
   const p = item.pinned as { x: number; y: number };
-  const box = clampedBox(p.x, p.y, item.widthPx, item.heightPx, input.plot);
+  const v = item.pinnedVariant ?? 0;
+  const size = v > 0 ? (item.alternatives?.[v - 1] ?? item) : item;
+  const box = clampedBox(p.x, p.y, size.widthPx, size.heightPx, input.plot);
   const near = nearestOnLines(item.lines, box.x + box.w / 2, box.y + box.h / 2, input.plot);
   const away = near !== null && distToBox(box, near.x, near.y) > 1.5 * input.gapPx;
   const covered = coverCost(cover, k, box).covered;
-  return { key: item.key, box, leaderTo: away ? near : null, pinned: true, variant: 0, covered };
+  return { key: item.key, box, leaderTo: away ? near : null, pinned: true, variant: size === item ? 0 : v, covered };
 }
 
 /**

@@ -84,6 +84,8 @@ export interface BuildSceneOpts {
    * exports never pass it. Ignored for a fixed place.
    */
   holdLegend?: AutoLegendPlace;
+  /** Direct labels: keep them at these data points (a scene's `directLabels[].at` by "kind:id"), as holdLegend. */
+  holdLabels?: Readonly<Record<string, { at: [number, number]; variant: number }>>;
 }
 
 function modelNotes(m: Model, c: ReturnType<typeof constantsOf>): string[] {
@@ -449,7 +451,7 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   ];
   const labels =
     legendSetting === "on-plot"
-      ? directLabels(project, { constants: c, view, scales, plot, fonts, entries: allEntries })
+      ? directLabels(project, { constants: c, view, scales, plot, fonts, entries: allEntries, hold: opts.holdLabels })
       : null;
   if (labels) layers[layers.length - 1].nodes.push(...labels.nodes);
   const scene: Scene = {

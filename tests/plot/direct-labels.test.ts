@@ -138,6 +138,19 @@ describe("direct labels in the scene", () => {
     expect(a).toContain('id="label-curve-1"');
   });
 
+  it("held at their own data points (as while the view moves), labels stay where they were and are not 'moved'", () => {
+    const p = onPlot("slide");
+    const first = buildScene(p).directLabels ?? [];
+    const hold = Object.fromEntries(first.map((l) => [`${l.kind}:${l.id}`, { at: l.at, variant: l.variant }]));
+    const held = buildScene(p, { holdLabels: hold }).directLabels ?? [];
+    expect(held.map((l) => l.id)).toEqual(first.map((l) => l.id));
+    for (const [i, l] of held.entries()) {
+      expect(l.pinned).toBe(false);
+      expect(l.box.x).toBeCloseTo(first[i].box.x, 1);
+      expect(l.box.y).toBeCloseTo(first[i].box.y, 1);
+    }
+  });
+
   it("keeps a dragged label at its data point whatever the figure size", () => {
     const p = onPlot("slide");
     p.curves[0].labelAt = [1e-4, 1e-12];

@@ -62,6 +62,9 @@ export function FigureView() {
   // While the view moves, an automatic legend keeps the place it had when the view last rested.
   const restingPlace = useRef<Scene["autoLegendPlace"]>(undefined);
   const holdLegend = moving ? restingPlace.current : undefined;
+  // Direct labels likewise keep their data points while the view moves (placing them costs tens of ms).
+  const restingLabels = useRef<Record<string, { at: [number, number]; variant: number }> | undefined>(undefined);
+  const holdLabels = moving ? restingLabels.current : undefined;
   const scene = useMemo(
     () =>
       buildScene(project, {
@@ -71,13 +74,18 @@ export function FigureView() {
         highlight,
         physical: false,
         holdLegend,
+        holdLabels,
         // Dense zig-zags as filled envelopes: the same pixels, a fraction of the browser's painting.
         envelope: true,
       }),
-    [project, preset.widthPx, preset.heightPx, resolution, highlight, holdLegend],
+    [project, preset.widthPx, preset.heightPx, resolution, highlight, holdLegend, holdLabels],
   );
   useEffect(() => {
-    if (!moving) restingPlace.current = scene.autoLegendPlace;
+    if (moving) return;
+    restingPlace.current = scene.autoLegendPlace;
+    restingLabels.current = scene.directLabels
+      ? Object.fromEntries(scene.directLabels.map((l) => [`${l.kind}:${l.id}`, { at: l.at, variant: l.variant }]))
+      : undefined;
   }, [scene, moving]);
   useEffect(() => {
     sceneRef.current = scene;
