@@ -74,7 +74,8 @@ output (at least one of -o, --png, --models-csv, --overlap, --overlap-intervals)
                             style), the translucent fill, or both (default: each curve's own)
   --legend PLACE            where the legend goes: auto (a free inner corner, else outside right or below),
                             top-left, top-right, bottom-left, bottom-right, outside-right, below (under the
-                            plot, in columns), above (between title and plot), hidden (default: the project's)
+                            plot, in columns), above (between title and plot), on-plot (each label beside its
+                            own line, clear of the data; no legend box), hidden (default: the project's)
   --legend-scale K          legend text size as a factor of the default, 0.7 to 1.5 (1: 7 pt at single-column);
                             entries wrap, and any that must still be shortened are named on stderr
   --png FILE.png            write the figure as PNG

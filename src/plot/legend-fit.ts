@@ -117,9 +117,9 @@ function bandFit(input: LegendFitInput, place: "below" | "above"): LegendFit {
   return { box, layout: input.layoutFor(place, box) };
 }
 
-/** The legend at a fixed place (or none: hidden, or no entries). */
+/** The legend at a fixed place (or none: hidden, labels on the plot, or no entries). */
 export function fitLegendAt(place: Exclude<LegendPlace, "auto">, input: LegendFitInput): LegendFit {
-  if (place === "hidden" || input.entries.length === 0)
+  if (place === "hidden" || place === "on-plot" || input.entries.length === 0)
     return {
       box: measure({ ...input, entries: [] }, { ...NONE, columns: false }),
       layout: input.layoutFor("hidden", NONE),

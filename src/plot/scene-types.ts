@@ -112,4 +112,20 @@ export interface Scene {
   legendReducedToPt?: number;
   /** What the figure changed to fit (a long title wrapped or shrunk): the app shows them, the CLI prints them. */
   notes?: string[];
+  /**
+   * With the legend "on-plot": where each curve's and model's label went (scene px) and whether the user placed
+   * it, for the app's drag handles; absent otherwise.
+   */
+  directLabels?: {
+    kind: "curve" | "model";
+    id: string;
+    text: string;
+    box: PlotArea;
+    pinned: boolean;
+    /** The box centre as [mass eV, g_aγγ GeV⁻¹], and which wrapping of the text was used. */
+    at: [number, number];
+    variant: number;
+  }[];
 }
+
+type PlotArea = { x: number; y: number; w: number; h: number };

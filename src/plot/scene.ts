@@ -36,6 +36,7 @@ import { logTicks } from "./ticks";
 import { highlightNodes } from "./highlight";
 import { figureSettings, physicalSize } from "./scene-settings";
 import type { RunDeferral } from "./thinning/deferred-runs";
+import { directLabels } from "./direct-label-nodes";
 
 /**
  * The CSS font-family list of each figure font: the bundled Computer Modern Unicode face first (the app loads
@@ -88,6 +89,8 @@ export interface BuildSceneOpts {
    * has answered. Exports never pass it, so they always draw the full thinning. @default none
    */
   deferRuns?: RunDeferral;
+  /** Direct labels: keep them at these data points (a scene's `directLabels[].at` by "kind:id"), as holdLegend. */
+  holdLabels?: Readonly<Record<string, { at: [number, number]; variant: number }>>;
 }
 
 function modelNotes(m: Model, c: ReturnType<typeof constantsOf>): string[] {
@@ -388,7 +391,9 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   const { view, preset, widthPx, heightPx, fonts, massDomainEv, yDomain, topAxis } = settings;
   const legendSetting = fig.legend ?? "top-right";
 
-  const entries = legendSetting === "hidden" ? [] : legendEntries(project, fonts, c);
+  const allEntries = legendSetting === "hidden" ? [] : legendEntries(project, fonts, c);
+  // "on-plot": no legend box; each entry's text is written beside its own line (direct-label-nodes.ts).
+  const entries = legendSetting === "on-plot" ? [] : allEntries;
 
   const scales: ScaleConfig = { massDomainEv, yDomain, yView: view };
   const fitted = layoutWithLegend(project, { ...settings, constants: c, scales, entries, holdLegend: opts.holdLegend });
@@ -439,6 +444,11 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
       data: { testid: "legend" },
     },
   ];
+  const labels =
+    legendSetting === "on-plot"
+      ? directLabels(project, { constants: c, view, scales, plot, fonts, entries: allEntries, hold: opts.holdLabels })
+      : null;
+  if (labels) layers[layers.length - 1].nodes.push(...labels.nodes);
   const scene: Scene = {
     widthPx: r2(widthPx),
     heightPx: r2(heightPx),
@@ -449,6 +459,7 @@ export function buildScene(project: Project, opts: BuildSceneOpts = {}): Scene {
   };
   Object.assign(scene, legendReport(entries, legendBox, fonts, autoPlace));
   if (title?.note) scene.notes = [title.note];
+  if (labels?.report.length) scene.directLabels = labels.report;
   if (opts.physical !== false) Object.assign(scene, physicalSize(opts, widthPx, heightPx, preset));
   return scene;
 }

@@ -7,7 +7,7 @@ export { AXIS_MASS_UNITS };
 export const CURVE_ROLES = ["exclusion", "projection", "region"] as const;
 /** How an exclusion curve marks its excluded side: short hatches along the edge, the translucent fill, or both. */
 export const EXCLUSION_MARKS = ["hatch", "fill", "hatch-fill"] as const;
-// "auto", "below" and "above" joined schema version 1 without a bump: every older file still validates, and an
+// "auto", "below", "above" and "on-plot" joined schema version 1 without a bump: every older file still validates, and an
 // older build reading one repairs it to its default legend place (a noted repair), so no migration is needed.
 export const LEGEND_PLACES = [
   "auto",
@@ -18,6 +18,8 @@ export const LEGEND_PLACES = [
   "outside-right",
   "below",
   "above",
+  // Direct labels on the plot (each label beside its own line), joined in the same way.
+  "on-plot",
   "hidden",
 ] as const;
 export const SIZE_PRESETS = ["slide", "single-column", "double-column", "custom"] as const;

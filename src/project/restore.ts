@@ -25,6 +25,7 @@ import {
   exclusionMark,
   hexColour,
   isRationalText,
+  labelAt,
   legendPlace,
   lineStyle,
   modelKind,
@@ -215,6 +216,7 @@ function restoreModel(raw: Rec, index: number, taken: Set<string>, note: Note): 
   const fillOpacity = clamped(own(raw, "fillOpacity"), 0, 1, note, "fill opacity");
   const visible = bool(own(raw, "visible"), note, "visible");
   const sigmas = clamped(own(raw, "sigmas"), 0, 10, note, "theory spread");
+  const at = valid(labelAt, own(raw, "labelAt"), note, "label position");
   const draw = valid(setDraw, own(raw, "setDraw"), note, "set drawing");
   const share = valid(setShare, own(raw, "setShare"), note, "set share");
   const id = uniqueId(rawId ?? `m-${index + 1}`, taken);
@@ -235,6 +237,8 @@ function restoreModel(raw: Rec, index: number, taken: Set<string>, note: Note): 
     fillOpacity: fillOpacity ?? d.fillOpacity,
     visible: visible ?? d.visible,
     sigmas: sigmas ?? d.sigmas,
+    // Only when set: projects without a dragged label restore exactly as they were written.
+    ...(at ? { labelAt: at } : {}),
   };
 }
 
@@ -278,6 +282,7 @@ function restoreCurve(raw: Rec, index: number, taken: Set<string>, note: Note): 
   const rescale = restoreRescale(own(raw, "rescale"), d.rescale, note);
   const citation = text(own(raw, "citation"), PROJECT_LIMITS.citation, note, "citation");
   const fileName = text(own(raw, "fileName"), PROJECT_LIMITS.fileName, note, "file name");
+  const at = valid(labelAt, own(raw, "labelAt"), note, "label position");
   const id = uniqueId(rawId ?? `c-${index + 1}`, taken);
   if (rawId !== undefined && id !== rawId) note("id", `${show(rawId)} was used twice; renamed to ${show(id)}`);
   taken.add(id);
@@ -296,6 +301,7 @@ function restoreCurve(raw: Rec, index: number, taken: Set<string>, note: Note): 
     rescale,
     citation: citation ?? d.citation,
     fileName: fileName ?? d.fileName,
+    ...(at ? { labelAt: at } : {}),
   };
 }
 

@@ -43,6 +43,8 @@ export const physicsRef = z.enum(["2016", "2019", "custom"]);
 export const modelKind = z.enum(["line", "interval", "between", "set"]);
 export const setDraw = z.enum(["lines", "extremes", "central"]);
 export const setShare = z.number().gt(0).max(1);
+// Where a direct label was dragged to ([mass eV, g_aγγ GeV⁻¹]); joined without a bump, optional (absent: automatic).
+export const labelAt = z.tuple([z.number().positive().finite(), z.number().positive().finite()]);
 
 const eOverNText = z
   .string()
@@ -165,6 +167,7 @@ export const ProjectSchema = z.object({
         fillOpacity: z.number().min(0).max(1),
         visible: z.boolean(),
         sigmas: z.number().min(0).max(10),
+        labelAt: labelAt.optional(),
       }),
     )
     .max(PROJECT_LIMITS.models),
@@ -190,6 +193,7 @@ export const ProjectSchema = z.object({
           }),
           citation: z.string().max(PROJECT_LIMITS.citation),
           fileName: z.string().max(PROJECT_LIMITS.fileName),
+          labelAt: labelAt.optional(),
         })
         .refine((c) => c.massEv.length === c.gInvGeV.length, "massEv and gInvGeV must have the same length"),
     )

@@ -51,6 +51,8 @@ export const MODEL_STATE: { readonly [K in keyof Model]-?: Persistence } = {
   fillOpacity: everywhere,
   visible: everywhere,
   sigmas: everywhere,
+  // A dragged direct label is part of the figure the sender saw.
+  labelAt: everywhere,
 };
 
 const curveMeta: Persistence = { link: "with-curves", file: true, storage: "meta" };
@@ -72,6 +74,7 @@ export const CURVE_STATE: { readonly [K in keyof Curve]-?: Persistence } = {
   rescale: curveMeta,
   citation: curveMeta,
   fileName: curveMeta,
+  labelAt: curveMeta,
 };
 
 export const FIGURE_STATE: { readonly [K in keyof Figure]-?: Persistence } = {

@@ -22,9 +22,16 @@ export type CurveRole = (typeof CURVE_ROLES)[number];
 export type ExclusionMark = (typeof EXCLUSION_MARKS)[number];
 /**
  * Where the legend goes; "auto" is a free inner corner, else below or outside right (src/plot/legend-place.ts);
- * "below" sits under the x-axis title, "above" between the figure title and the plot, both in columns.
+ * "below" sits under the x-axis title, "above" between the figure title and the plot, both in columns;
+ * "on-plot" writes no legend box but each label beside its own line (direct labels, src/plot/direct-labels.ts).
  */
 export type LegendPlace = (typeof LEGEND_PLACES)[number];
+/**
+ * Where the user put a direct label (legend "on-plot"): the centre of its text as a point of the data, mass in eV
+ * and g_aγγ in GeV⁻¹ (whatever the y view), so it stays by the same feature of the data when the figure is
+ * resized, zoomed or set at another preset. Absent: placed automatically. Added without a bump.
+ */
+export type LabelAt = [massEv: number, gInvGeV: number];
 export type SizePreset = (typeof SIZE_PRESETS)[number];
 export type TopAxis = (typeof TOP_AXES)[number];
 export type { AxisMassUnit };
@@ -101,6 +108,8 @@ export interface Model {
   visible: boolean;
   /** Theory spread k in ±kσ (0 = none). */
   sigmas: number;
+  /** Where its direct label was dragged to; absent: placed automatically. */
+  labelAt?: LabelAt;
 }
 
 export interface CurveRescale {
@@ -134,6 +143,8 @@ export interface Curve {
   /** Publication the data came from (free text or a BibTeX entry), shown in the sources list. */
   citation: string;
   fileName: string;
+  /** Where its direct label was dragged to; absent: placed automatically. */
+  labelAt?: LabelAt;
 }
 
 export interface Figure {

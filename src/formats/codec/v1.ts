@@ -110,6 +110,8 @@ const MODEL_V1: Codec = {
     { full: "fillOpacity", short: "o", base: () => 0.25 },
     { full: "visible", short: "v", base: () => true },
     { full: "sigmas", short: "k", base: () => 0 },
+    // Joined without a bump: absent (the automatic place) is the base, so older links decode unchanged.
+    { full: "labelAt", short: "la", base: () => undefined },
   ],
 };
 
@@ -147,6 +149,8 @@ const CURVE_V1: Codec = {
     },
     { full: "citation", short: "t", base: () => "" },
     { full: "fileName", short: "f", base: () => "" },
+    // Joined without a bump, as the model's "la".
+    { full: "labelAt", short: "la", base: () => undefined },
   ],
 };
 

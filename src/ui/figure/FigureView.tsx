@@ -14,6 +14,7 @@ import { Crosshair, PreparingNote } from "./FigureOverlays";
 import { useFigureGestures } from "./useFigureGestures";
 import { requestRuns, runsWorkerAvailable } from "../../worker/runs-client";
 import type { RunDeferral, RunJob } from "../../plot/thinning/deferred-runs";
+import { LabelHandles } from "./LabelHandles";
 
 /** Device pixels per scene pixel, rounded to quarters so a small resize does not rebuild the scene. */
 function resolutionFor(displayWidthPx: number, sceneWidthPx: number): number {
@@ -58,6 +59,9 @@ function useFigureScene(
   const resolution = resolutionFor(displayWidth, preset.widthPx);
   const restingPlace = useRef<Scene["autoLegendPlace"]>(undefined);
   const holdLegend = moving ? restingPlace.current : undefined;
+  // Direct labels likewise keep their data points while the view moves (placing them costs tens of ms).
+  const restingLabels = useRef<BuildSceneOpts["holdLabels"]>(undefined);
+  const holdLabels = moving ? restingLabels.current : undefined;
   // Bumped when the runs worker has put thinnings into the cache that this figure drew stand-ins for.
   const [runsInstalled, setRunsInstalled] = useState(0);
   const built = useMemo(() => {
@@ -70,18 +74,23 @@ function useFigureScene(
       highlight,
       physical: false,
       holdLegend,
+      holdLabels,
       // Dense zig-zags as filled envelopes: the same pixels, a fraction of the browser's painting.
       envelope: true,
       deferRuns,
     });
     return { scene, deferred: deferRuns?.jobs ?? [] };
-  }, [project, preset.widthPx, preset.heightPx, resolution, highlight, holdLegend, runsInstalled]);
+  }, [project, preset.widthPx, preset.heightPx, resolution, highlight, holdLegend, holdLabels, runsInstalled]);
   const { scene, deferred } = built;
   useEffect(() => {
     if (deferred.length) requestRuns(deferred, () => setRunsInstalled((k) => k + 1));
   }, [deferred]);
   useEffect(() => {
-    if (!moving) restingPlace.current = scene.autoLegendPlace;
+    if (moving) return;
+    restingPlace.current = scene.autoLegendPlace;
+    restingLabels.current = scene.directLabels
+      ? Object.fromEntries(scene.directLabels.map((l) => [`${l.kind}:${l.id}`, { at: l.at, variant: l.variant }]))
+      : undefined;
   }, [scene, moving]);
   useEffect(() => {
     sceneRef.current = scene;
@@ -159,6 +168,7 @@ export function FigureView() {
           <Crosshair scene={scene} />
         </SceneSvg>
         <PreparingNote scene={scene} waiting={waiting} />
+        <LabelHandles scene={scene} boxRef={boxRef} />
       </div>
       <FigureNotes scene={scene} hintId={hintId} />
     </section>

@@ -18,6 +18,7 @@ import { AXIS_MASS_UNITS, FREQUENCY_AXIS_UNITS, massUnitInfo } from "../../physi
 import { CUSTOM_MM_LIMITS, LEGEND_SCALE_LIMITS } from "../../project/limits";
 import { useShallow } from "zustand/react/shallow";
 import { useAxband, type AxbandState } from "../store";
+import { LabelPositions } from "./LabelPositions";
 
 const PRESETS: { value: SizePreset; label: string }[] = [
   { value: "slide", label: "Slide 16:9" },
@@ -62,6 +63,8 @@ const LEGEND: { value: LegendPlace; label: string }[] = [
   { value: "outside-right", label: "outside right" },
   { value: "below", label: "below the plot" },
   { value: "above", label: "above the plot" },
+  // Each label beside its own line (src/plot/direct-labels.ts).
+  { value: "on-plot", label: "on the plot (labels by their lines)" },
   { value: "hidden", label: "hidden" },
 ];
 
@@ -329,6 +332,7 @@ function LegendSettings(g: GroupProps) {
   return (
     <>
       <Choice field="legend" {...g} />
+      {figure.legend === "on-plot" ? <LabelPositions /> : null}
       <NumberSetting
         label="Legend text (× default)"
         value={figure.legendScale}
