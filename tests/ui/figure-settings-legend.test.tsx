@@ -14,7 +14,7 @@ beforeEach(() => resetStore());
 const legend = () => useAxband.getState().project.figure.legend;
 
 describe("Legend setting", () => {
-  test('offers "best corner (automatic)" (auto) first, then the fixed corners, outside right, below, above and hidden', () => {
+  test('offers "best corner (automatic)" (auto) first, then the fixed corners, outside right, below, above, on the plot and hidden', () => {
     render(<FigureSettings />);
     const select = screen.getByLabelText("Legend");
     const options = within(select).getAllByRole("option") as HTMLOptionElement[];
@@ -27,6 +27,7 @@ describe("Legend setting", () => {
       "outside-right",
       "below",
       "above",
+      "on-plot",
       "hidden",
     ]);
     expect(options[0]).toHaveTextContent("best corner (automatic)");
