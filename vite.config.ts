@@ -11,6 +11,8 @@ export default defineConfig({
   worker: { format: "es" },
   build: { outDir: "dist", sourcemap: false, chunkSizeWarningLimit: 1500 },
   test: {
+    // Both cores (Vitest's default leaves one free: one worker on a 2-core machine).
+    maxWorkers: 2,
     projects: [
       {
         extends: true,
@@ -25,7 +27,14 @@ export default defineConfig({
             "tests/plot/**/*.test.ts",
             "tests/cli/**/*.test.ts",
             "tests/worker/**/*.test.ts",
+            // Store, autosave and view tests without JSX need no DOM (their stores are passed in as fakes).
+            "tests/ui/**/*.test.ts",
           ],
+          // Worker threads that keep loaded modules from file to file: these tests share no global state (spies
+          // and fake timers are restored in the test that sets them), and the cores load once per worker.
+          pool: "threads",
+          isolate: false,
+          globalSetup: ["tests/cli/global-setup.ts"],
           testTimeout: 60_000,
         },
       },
@@ -34,7 +43,7 @@ export default defineConfig({
         test: {
           name: "ui",
           environment: "jsdom",
-          include: ["tests/ui/**/*.test.{ts,tsx}"],
+          include: ["tests/ui/**/*.test.tsx"],
           setupFiles: ["tests/ui/setup.ts"],
           testTimeout: 30_000,
         },

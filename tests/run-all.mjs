@@ -1,9 +1,15 @@
 // `npm test`: typecheck, lint, format check, knip, then the Vitest projects (unit + ui together, then browser alone); ends with
 // the plain summary line "N passed, N failed" that CI reads. Exit code 0 only when everything passed.
-import { spawnSync } from "node:child_process";
-import { mkdirSync, readFileSync, rmSync, existsSync } from "node:fs";
+// Speed: the four static checks run two at a time, each with its tool's own cache, and a check whose inputs (every file
+// git lists, tracked or not ignored, and the installed lock file) are those of its last passing run is not run again
+// (node_modules/.cache/axband-checks; a fresh clone has none, so CI runs them all; AXBAND_NO_CHECK_CACHE=1 runs them).
+import { spawn, spawnSync } from "node:child_process";
+import { createHash } from "node:crypto";
+import { mkdirSync, readFileSync, readdirSync, rmSync, existsSync, writeFileSync, statSync } from "node:fs";
+import { join } from "node:path";
 
 const bin = (name) => `node_modules/.bin/${name}`;
+const CACHE = "node_modules/.cache/axband-checks";
 // The same files as `npm run format` (package.json), without npm's start-up.
 const FORMAT_GLOBS = JSON.parse(readFileSync("package.json", "utf8"))
   .scripts["format:check"].match(/"[^"]+"|\S+/g)
@@ -12,25 +18,111 @@ const FORMAT_GLOBS = JSON.parse(readFileSync("package.json", "utf8"))
 let passed = 0;
 let failed = 0;
 
-function step(label, cmd, args) {
-  console.log(`\n== ${label}: ${cmd} ${args.join(" ")}`);
-  const r = spawnSync(cmd, args, { stdio: "inherit" });
-  const ok = r.status === 0;
-  console.log(`== ${label}: ${ok ? "ok" : `FAILED (exit ${r.status ?? r.signal})`}`);
-  return ok;
-}
-
-for (const [label, cmd, args] of [
-  ["typecheck", bin("tsc"), ["--noEmit", "-p", "src/tsconfig.json"]],
+const CHECKS = [
+  // Longest first, so that the pairs finish close together.
+  [
+    "typecheck",
+    bin("tsc"),
+    ["--noEmit", "-p", "src/tsconfig.json", "--incremental", "--tsBuildInfoFile", `${CACHE}/tsc`],
+  ],
   [
     "lint",
     bin("eslint"),
-    ["-c", "tests/eslint.config.mjs", "--no-error-on-unmatched-pattern", "src", "tests", "bench"],
+    [
+      "-c",
+      "tests/eslint.config.mjs",
+      "--no-error-on-unmatched-pattern",
+      "--cache",
+      "--cache-location",
+      `${CACHE}/eslint`,
+      "src",
+      "tests",
+      "bench",
+    ],
   ],
-  ["format", bin("prettier"), ["--check", "--log-level=warn", ...FORMAT_GLOBS]],
   ["knip (unused files, exports, dependencies)", bin("knip"), ["--no-progress"]],
-]) {
-  if (step(label, cmd, args)) passed++;
+  [
+    "format",
+    bin("prettier"),
+    ["--check", "--log-level=warn", "--cache", "--cache-location", `${CACHE}/prettier`, ...FORMAT_GLOBS],
+  ],
+];
+
+/** Files the checks read: what git lists (tracked, or untracked and not ignored), else the source folders. */
+function inputFiles() {
+  const git = spawnSync("git", ["ls-files", "-z", "--cached", "--others", "--exclude-standard"], { encoding: "utf8" });
+  if (git.status === 0) return git.stdout.split("\0").filter((f) => f && existsSync(f));
+  const walk = (dir) =>
+    readdirSync(dir, { withFileTypes: true }).flatMap((e) =>
+      e.isDirectory() ? walk(join(dir, e.name)) : [join(dir, e.name)],
+    );
+  return [
+    ...["src", "tests", "bench", "public"].filter((d) => existsSync(d)).flatMap(walk),
+    ...readdirSync(".").filter((f) => statSync(f).isFile()),
+  ].filter((f) => !f.startsWith(join("tests", ".artifacts")));
+}
+
+function inputsHash() {
+  const h = createHash("sha256");
+  h.update(process.version);
+  for (const f of inputFiles().sort()) {
+    h.update(f + "\0");
+    h.update(readFileSync(f));
+    h.update("\0");
+  }
+  // What is installed (a different lock file in node_modules means other tool versions).
+  if (existsSync("node_modules/.package-lock.json")) h.update(readFileSync("node_modules/.package-lock.json"));
+  return h.digest("hex");
+}
+
+const stampOf = (label) => join(CACHE, `${label.split(" ")[0]}.ok`);
+
+/** Runs one check with its output collected, printed in one piece when it ends (two run at once). */
+function runCheck([label, cmd, args], hash) {
+  const stamp = stampOf(label);
+  if (hash && existsSync(stamp) && readFileSync(stamp, "utf8") === `${hash}\n${args.join(" ")}`) {
+    console.log(`\n== ${label}: ok (inputs unchanged since it last passed)`);
+    return Promise.resolve(true);
+  }
+  return new Promise((resolve) => {
+    const t0 = Date.now();
+    const child = spawn(cmd, args, { stdio: ["ignore", "pipe", "pipe"] });
+    const out = [];
+    child.stdout.on("data", (d) => out.push(d));
+    child.stderr.on("data", (d) => out.push(d));
+    child.on("close", (code, signal) => {
+      const ok = code === 0;
+      const s = ((Date.now() - t0) / 1000).toFixed(1);
+      console.log(`\n== ${label}: ${cmd} ${args.join(" ")}`);
+      process.stdout.write(Buffer.concat(out));
+      console.log(`== ${label}: ${ok ? "ok" : `FAILED (exit ${code ?? signal})`} (${s} s)`);
+      if (ok && hash) writeFileSync(stamp, `${hash}\n${args.join(" ")}`);
+      resolve(ok);
+    });
+  });
+}
+
+function step(label, cmd, args) {
+  console.log(`\n== ${label}: ${cmd} ${args.join(" ")}`);
+  const t0 = Date.now();
+  const r = spawnSync(cmd, args, { stdio: "inherit" });
+  const ok = r.status === 0;
+  const s = ((Date.now() - t0) / 1000).toFixed(1);
+  console.log(`== ${label}: ${ok ? "ok" : `FAILED (exit ${r.status ?? r.signal})`} (${s} s)`);
+  return ok;
+}
+
+mkdirSync(CACHE, { recursive: true });
+const hash = process.env.AXBAND_NO_CHECK_CACHE ? undefined : inputsHash();
+const queue = [...CHECKS];
+const results = [];
+await Promise.all(
+  [0, 1].map(async () => {
+    for (let c = queue.shift(); c; c = queue.shift()) results.push(await runCheck(c, hash));
+  }),
+);
+for (const ok of results) {
+  if (ok) passed++;
   else failed++;
 }
 

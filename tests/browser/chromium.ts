@@ -1,6 +1,8 @@
 // Finds a locally installed Chromium for the browser tests and launches it headless; never downloads one.
+// One Chromium serves the whole run (started in global-setup.ts); each test file connects to it.
 import { existsSync } from "node:fs";
-import { chromium, type Browser, type Page } from "playwright-core";
+import { inject } from "vitest";
+import { chromium, type Browser, type BrowserServer, type Page } from "playwright-core";
 
 const CANDIDATES = [
   "/usr/bin/chromium",
@@ -40,8 +42,17 @@ export const CHROMIUM_ARGS = [
   "--disable-sync",
 ];
 
+/** Starts the run's one headless Chromium (global-setup.ts); files connect to it with launchChromium(). */
+export function startChromiumServer(): Promise<BrowserServer> {
+  return chromium.launchServer({ executablePath: findChromium(), headless: true, args: CHROMIUM_ARGS });
+}
+
+/**
+ * The run's Chromium, connected to (launching one per file cost about a second each on two cores). A test file
+ * works in its own contexts; close() drops the connection and those contexts, never the shared browser.
+ */
 export function launchChromium(): Promise<Browser> {
-  return chromium.launch({ executablePath: findChromium(), headless: true, args: CHROMIUM_ARGS });
+  return chromium.connect(inject("chromiumWs"));
 }
 
 export interface Watched {

@@ -1,13 +1,14 @@
 // Helpers for the export, share and overlap browser tests: catch a download the page starts and read it.
-import { readFileSync } from "node:fs";
+import { buffer } from "node:stream/consumers";
 import type { Browser, BrowserContext, Page } from "playwright-core";
 
 /** Runs `action`, waits for the download it starts, and returns the file's name and bytes. */
 export async function download(page: Page, action: () => Promise<unknown>): Promise<{ name: string; bytes: Buffer }> {
   const [d] = await Promise.all([page.waitForEvent("download", { timeout: 60_000 }), action()]);
-  const path = await d.path();
-  if (!path) throw new Error(`download ${d.suggestedFilename()} failed: ${await d.failure()}`);
-  return { name: d.suggestedFilename(), bytes: readFileSync(path) };
+  // Read through a stream: the browser is shared and connected to (global-setup.ts), where path() is not offered.
+  const failure = await d.failure();
+  if (failure) throw new Error(`download ${d.suggestedFilename()} failed: ${failure}`);
+  return { name: d.suggestedFilename(), bytes: await buffer(await d.createReadStream()) };
 }
 
 /** Clicks the export-svg control and returns the SVG text. */

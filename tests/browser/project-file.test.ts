@@ -43,8 +43,9 @@ test("a saved project file and a dropped SVG both reopen the same figure", async
   await b.page.waitForSelector('[role="status"]:has-text("Opened")');
   expect((await exportSvg(b.page)).text).toBe(svgA.text);
 
-  // Drop the exported SVG on a third page.
+  // Drop the exported SVG on a third page, once the import step (which listens for drops) is in it.
   const c = await freshPage();
+  await c.page.locator('[data-testid="import-files"]').waitFor({ state: "attached" });
   await c.page.evaluate(
     ({ text, name }) => {
       const dt = new DataTransfer();

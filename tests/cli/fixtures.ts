@@ -1,5 +1,6 @@
 // Small projects and files for the CLI and export tests, plus a helper that runs the CLI as a child process
-// exactly as `npm run render` does (tsx), from the repository root.
+// exactly as `npm run render` and `npx axband` do (the bundled bin, built once by global-setup.ts), from the
+// repository root.
 import { spawnSync } from "node:child_process";
 import { mkdtempSync } from "node:fs";
 import { tmpdir } from "node:os";
@@ -71,9 +72,13 @@ export interface CliRun {
   stderr: string;
 }
 
-/** Runs `tsx src/cli/render.ts ARGS` from the repository root and returns its exit code and output. */
-export function runCli(args: string[]): CliRun {
-  const r = spawnSync(process.execPath, ["--import", "tsx", "src/cli/render.ts", ...args], {
+/**
+ * Runs `node src/cli/run.mjs ARGS` (the package's bin) from the repository root and returns its exit code and
+ * output; `ts: true` runs the TypeScript entry `tsx src/cli/render.ts` instead (slower: compiled on each start).
+ */
+export function runCli(args: string[], { ts = false } = {}): CliRun {
+  const entry = ts ? ["--import", "tsx", "src/cli/render.ts"] : ["src/cli/run.mjs"];
+  const r = spawnSync(process.execPath, [...entry, ...args], {
     cwd: REPO,
     encoding: "utf8",
     timeout: 60_000,

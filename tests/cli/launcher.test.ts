@@ -1,6 +1,6 @@
 // The bundled launcher that `npm run render` uses (src/cli/run.mjs): CSV files parsed and prepared for drawing
-// on worker threads give the same SVG bytes as doing both in-process, and as the TypeScript entry the other
-// CLI tests run (sorted curves and a closed region, whose preparations differ).
+// on worker threads give the same SVG bytes as doing both in-process, and as the TypeScript entry run through
+// tsx (sorted curves and a closed region, whose preparations differ).
 import { describe, expect, it } from "vitest";
 import { spawnSync } from "node:child_process";
 import { accessSync, constants, readFileSync, writeFileSync } from "node:fs";
@@ -51,7 +51,7 @@ describe("npm run render launcher", () => {
     expect(two.status, two.stderr).toBe(0);
     const one = launch([...common, "-o", join(dir, "one.svg")], "1");
     expect(one.status, one.stderr).toBe(0);
-    const ts = runCli([...common, "-o", join(dir, "ts.svg")]);
+    const ts = runCli([...common, "-o", join(dir, "ts.svg")], { ts: true });
     expect(ts.status).toBe(0);
     const bytes = readFileSync(join(dir, "two.svg"), "utf8");
     expect(bytes).toContain("<svg");

@@ -74,7 +74,7 @@ test("a tab that hears of newer work elsewhere stops saving and asks; 'Load it' 
   expect(savedText()).not.toContain("B's title");
 
   b.store.getState().chooseTabConflict("load");
-  await vi.waitFor(() => expect(b.store.getState().ui.tabConflict).toBeNull());
+  await vi.waitFor(() => expect(b.store.getState().ui.tabConflict).toBeNull(), { timeout: 15_000 });
   expect(b.store.getState().project.curves.map((c) => c.id)).toEqual(["c1"]);
   const status = b.store
     .getState()
@@ -96,7 +96,7 @@ test("'Keep mine and save' writes this tab's work, curve data included, over the
   expect(curves.items.has("c2")).toBe(false);
   await vi.advanceTimersByTimeAsync(1);
   b.store.getState().chooseTabConflict("keep");
-  await vi.waitFor(() => expect(b.store.getState().ui.tabConflict).toBeNull());
+  await vi.waitFor(() => expect(b.store.getState().ui.tabConflict).toBeNull(), { timeout: 15_000 });
   await b.auto.flush();
   expect(curves.items.has("c2")).toBe(true);
 

@@ -96,8 +96,9 @@ describe("saving", () => {
     await vi.advanceTimersByTimeAsync(299);
     expect(local.writes).toBe(0);
     await vi.advanceTimersByTimeAsync(2);
-    // The writer module loads on the first change: wait for the write itself.
-    await vi.waitFor(() => expect(local.writes).toBe(1));
+    // The writer module loads on the first change: wait for the write itself (the margin covers its first
+    // transform, seconds on a busy machine).
+    await vi.waitFor(() => expect(local.writes).toBe(1), { timeout: 15_000 });
     const text = local.getItem(STORAGE_KEY)!;
     expect(text).toContain("E/N = 8/3");
     // 1000 doubles as JSON would be many kB; the saved text stays small because arrays go to IndexedDB.

@@ -1,7 +1,7 @@
 // The Models panel driven like a user: typed E/N values and intervals, bad input, the catalogue, list edits.
 // E/N values of the heavy-quark models: Di Luzio, Mescia, Nardi, PRL 118 (2017) 031801, Table I (from memory);
 // c_γ = 1.92 from Grilli di Cortona et al., JHEP 01 (2016) 034.
-import { beforeEach, describe, expect, test } from "vitest";
+import { afterEach, beforeEach, describe, expect, test, vi } from "vitest";
 import { render, screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { ModelsPanel } from "../../src/ui/models/ModelsPanel";
@@ -83,7 +83,14 @@ describe("catalogue", () => {
 });
 
 describe("model list", () => {
+  afterEach(() => {
+    vi.useRealTimers();
+  });
+
   test("label edit, visibility, spread, reorder and remove go to the store; a label burst is one undo step", async () => {
+    // The store joins steps within 500 ms by Date.now(): the clock stands still here, so a busy machine's slow
+    // keystrokes cannot split the burst (timers stay real for user-event).
+    vi.useFakeTimers({ toFake: ["Date"] });
     const s = useAxband.getState();
     s.addModel({ eOverNMin: "0", label: "A" });
     s.addModel({ eOverNMin: "8/3", label: "B" });
