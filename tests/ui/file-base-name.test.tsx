@@ -1,6 +1,7 @@
 // File names of everything the app writes for a project (issue 16: work that kept the demo's name after its content
 // was removed was saved and exported as "axband demo…"): the project file and the overlap tables follow the same
 // rule as the figure exports.
+// (.tsx: it runs in the jsdom project, for the download link it captures.)
 import { afterEach, expect, test, vi } from "vitest";
 import { defaultProject } from "../../src/data";
 import { fileBaseName } from "../../src/ui/export/file-base-name";
