@@ -31,7 +31,23 @@ describe("scanAnomaly", () => {
     const r = scanAnomaly([quark("-1/3", 1, "L", [1, 2, 3])], [1, 2]);
     expect(r.combinations).toBe(6);
     // N = c/2 for c copies: N_DW = |2N/X_S| = c/X_S from 1/2 (c = 1, X_S = 2) to 3 (c = 3, X_S = 1).
-    expect(r.distinct).toEqual([{ eOverN: "2/3", count: 6, nDWMin: 0.5, nDWMax: 3 }]);
+    expect(r.distinct).toEqual([{ eOverN: "2/3", count: 6, nDWMin: 0.5, nDWMax: 3, nonIntegerNDW: 2 }]);
+    expect(r.nonIntegerNDW).toBe(2);
+  });
+
+  // N_DW = |2N/𝒳_S| (L. Di Luzio, M. Giannotti, E. Nardi, L. Visinelli, Phys. Rept. 870 (2020) 1, eq. for N_DW;
+  // from memory; common practice). A Yukawa term Q̄_L Q_R Φ ties 𝒳_L − 𝒳_R = 𝒳_S, and then 2N/𝒳_S is an integer;
+  // a fractional N_DW means no renormalisable coupling links the fermion charges to the scalar's.
+  test("𝒳_Q = 1 with 𝒳_S = 2 gives N_DW = 1/2, counted as not an integer; 𝒳_S = 1 is an integer", () => {
+    const half = scanAnomaly([quark("-1/3", 1), quark("-1/3", 0, "R")], [1, 2]);
+    expect(half.distinct).toEqual([{ eOverN: "2/3", count: 2, nDWMin: 0.5, nDWMax: 1, nonIntegerNDW: 1 }]);
+    expect(half.nonIntegerNDW).toBe(1);
+    // 𝒳_Q = 2 with 𝒳_S = 2: N = 1, N_DW = 1; no note.
+    const whole = scanAnomaly([quark("-1/3", 2), quark("-1/3", 0, "R")], 2);
+    expect(whole.distinct).toEqual([{ eOverN: "2/3", count: 1, nDWMin: 1, nDWMax: 1 }]);
+    expect(whole.nonIntegerNDW).toBe(0);
+    // 𝒳_S = 3 with N = 1: N_DW = 2/3.
+    expect(scanAnomaly([quark("-1/3", [2, 3])], 3).nonIntegerNDW).toBe(1);
   });
 
   test("bad entries name the fermion and the field; too many combinations is refused", () => {

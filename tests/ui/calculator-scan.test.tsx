@@ -6,6 +6,8 @@ import { beforeEach, expect, test } from "vitest";
 import { render, screen } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { AnomalyCalculator } from "../../src/ui/models/AnomalyCalculator";
+import { CalculatorScan } from "../../src/ui/models/CalculatorScan";
+import { blankRow, initialCalcState } from "../../src/ui/models/calculator-state";
 import { useAxband } from "../../src/ui/store";
 import { resetStore } from "./helpers";
 
@@ -41,4 +43,53 @@ test("a bad list names the fermion and the field", async () => {
   await user.type(copies, "3..1");
   await user.click(screen.getByRole("button", { name: "Scan every combination" }));
   expect(screen.getByTestId("calc-scan")).toHaveTextContent("fermion 1 (Q_L): copies");
+});
+
+test("a spectrum longer than the table says how many rows it shows; the model set holds every E/N", async () => {
+  const user = userEvent.setup();
+  // Q_L (3,1,−1/3) and Q_R (3,1,2/3) with 𝒳 from 1..40 each: E/N = 2(X_L + 4X_R)/(3(X_L + X_R)) depends on
+  // X_L/X_R only, one E/N per reduced fraction of 1..40 — well over 500 of them.
+  const state = {
+    ...initialCalcState(),
+    rows: [
+      blankRow({ name: "Q_L", y: "-1/3", pq: "1..40" }),
+      blankRow({ name: "Q_R", y: "2/3", chirality: "R", pq: "-40..-1" }),
+    ],
+  };
+  render(<CalculatorScan state={state} />);
+  await user.click(screen.getByRole("button", { name: "Scan every combination" }));
+  const distinct = Number(/(\d+) distinct E\/N/.exec(screen.getByTestId("calc-scan-result").textContent ?? "")?.[1]);
+  expect(distinct).toBeGreaterThan(500);
+  expect(screen.getByTestId("calc-scan").querySelectorAll("tbody tr")).toHaveLength(500);
+  expect(screen.getByTestId("calc-scan-truncated")).toHaveTextContent(
+    `Showing the first 500 of ${distinct.toLocaleString("en")} distinct E/N; the model set holds all`,
+  );
+  await user.click(screen.getByRole("button", { name: "Add the spectrum as a model set" }));
+  const models = useAxband.getState().project.models;
+  expect(models[models.length - 1].members).toHaveLength(distinct);
+});
+
+test("a short spectrum shows every row and no truncation note", async () => {
+  const user = userEvent.setup();
+  render(<CalculatorScan state={{ ...initialCalcState(), rows: [blankRow({ y: "-1/3", pq: "1..3" })] }} />);
+  await user.click(screen.getByRole("button", { name: "Scan every combination" }));
+  expect(screen.getByTestId("calc-scan").querySelectorAll("tbody tr")).toHaveLength(1);
+  expect(screen.queryByTestId("calc-scan-truncated")).toBeNull();
+});
+
+// N_DW = |2N/𝒳_S| (Di Luzio, Giannotti, Nardi, Visinelli, Phys. Rept. 870 (2020) 1; from memory): a (3,1,−1/3)
+// quark with 𝒳 = 1 has N = 1/2, so 𝒳_S = 2 gives N_DW = 1/2 — no Yukawa term links these charges.
+test("a fractional N_DW is shown with a note and counted in the summary", async () => {
+  const user = userEvent.setup();
+  const state = { ...initialCalcState(), rows: [blankRow({ y: "-1/3", pq: "1" })], scalarCharge: "{1, 2}" };
+  render(<CalculatorScan state={state} />);
+  await user.click(screen.getByRole("button", { name: "Scan every combination" }));
+  expect(screen.getByTestId("calc-scan-result")).toHaveTextContent(
+    "2 combinations, 1 distinct E/N; 1 with N_DW not an integer (no Yukawa term links these charges).",
+  );
+  const cell = screen.getByTestId("calc-scan").querySelector("tbody tr td:last-child");
+  expect(cell).toHaveTextContent("0.5–1 †");
+  expect(screen.getByTestId("calc-scan")).toHaveTextContent(
+    "† N_DW not an integer for some combinations: no Yukawa term links these charges",
+  );
 });

@@ -3,7 +3,7 @@
 // leading ', while the decimal column stays a number and comment lines stay comments.
 import { expect, test } from "vitest";
 import { csvParseRows } from "d3-dsv";
-import { spectrumCsv } from "../../src/ui/models/ensemble/ensemble-csv";
+import { nDWText, spectrumCsv } from "../../src/ui/models/ensemble/ensemble-csv";
 
 test("a negative E/N cell is neutralised; numbers stay numbers", () => {
   const text = spectrumCsv(
@@ -24,4 +24,10 @@ test("a negative E/N cell is neutralised; numbers stay numbers", () => {
   expect(rows[2]).toEqual(["8/3", "2.6666667", "5", "6", "6"]);
   for (const r of rows.slice(1))
     for (const c of r) expect(Number.isFinite(Number(c)) || !/^[=+\-@\t\r]/.test(c), c).toBe(true);
+});
+
+test("N_DW text: integers as they are, a scan's fractional N_DW (2N/𝒳_S = 2/3) to four digits", () => {
+  expect(nDWText({ nDWMin: 3, nDWMax: 3 })).toBe("3");
+  expect(nDWText({ nDWMin: 1, nDWMax: 6 })).toBe("1–6");
+  expect(nDWText({ nDWMin: 2 / 3, nDWMax: 1.5 })).toBe("0.6667–1.5");
 });

@@ -12,12 +12,22 @@ export interface ScanFermion extends Omit<FermionInput, "pq" | "copies"> {
   copies?: number | number[];
 }
 
+/** A distinct E/N of a scan; nonIntegerNDW (only when > 0) counts its combinations whose N_DW is not an integer. */
+interface ScanValue extends EnsembleValue {
+  nonIntegerNDW?: number;
+}
+
 export interface ScanResult {
   /** Combinations tried (including those with N = 0). */
   combinations: number;
-  distinct: EnsembleValue[];
+  distinct: ScanValue[];
   /** Combinations with N = 0: no colour anomaly, no E/N. */
   zeroN: number;
+  /**
+   * Combinations whose N_DW = |2N/X_S| is not an integer. A Yukawa term ties the fermions' charge difference to
+   * X_S and then makes 2N/X_S an integer, so a fraction means no renormalisable coupling links these charges.
+   */
+  nonIntegerNDW: number;
 }
 
 /** Largest number of combinations a scan will run. */
@@ -146,8 +156,9 @@ function summariseScan(
   nScale: bigint,
   xsList: Rational[],
 ): ScanResult {
-  const byRatio = new Map<string, { value: Rational; v: EnsembleValue }>();
+  const byRatio = new Map<string, { value: Rational; v: ScanValue }>();
   let zeroN = 0;
+  let nonIntegerNDW = 0;
   for (const { e, n, c } of raw.values()) {
     if (n === 0) {
       zeroN += c * xsList.length;
@@ -156,21 +167,31 @@ function summariseScan(
     const N = new Fraction(BigInt(n), nScale);
     const ratio = new Fraction(BigInt(e), eScale).div(N);
     const key = toFractionString(ratio);
-    const dw = xsList.map((xs) => N.mul(2).div(xs).abs().valueOf());
+    const dwExact = xsList.map((xs) => N.mul(2).div(xs).abs());
+    const dw = dwExact.map((d) => d.valueOf());
+    const fractional = c * dwExact.filter((d) => d.d !== 1n).length;
+    nonIntegerNDW += fractional;
     const got = byRatio.get(key);
     if (got) {
       got.v.count += c * xsList.length;
       got.v.nDWMin = Math.min(got.v.nDWMin, ...dw);
       got.v.nDWMax = Math.max(got.v.nDWMax, ...dw);
+      if (fractional > 0) got.v.nonIntegerNDW = (got.v.nonIntegerNDW ?? 0) + fractional;
     } else
       byRatio.set(key, {
         value: ratio,
-        v: { eOverN: key, count: c * xsList.length, nDWMin: Math.min(...dw), nDWMax: Math.max(...dw) },
+        v: {
+          eOverN: key,
+          count: c * xsList.length,
+          nDWMin: Math.min(...dw),
+          nDWMax: Math.max(...dw),
+          ...(fractional > 0 ? { nonIntegerNDW: fractional } : {}),
+        },
       });
   }
   const distinct = [...byRatio.values()].sort((a, b) => a.value.compare(b.value)).map((x) => x.v);
   const combinations = distinct.reduce((s, d) => s + d.count, 0) + zeroN;
-  return { combinations, distinct, zeroN };
+  return { combinations, distinct, zeroN, nonIntegerNDW };
 }
 
 /** Outcome of reading a field that may hold a list or range. */

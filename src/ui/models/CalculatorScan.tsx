@@ -1,10 +1,12 @@
 // The anomaly calculator in scan mode: on request, every combination of the listed charges, copies and X_S,
-// shown as the spectrum of distinct E/N with counts and N_DW (N = 0 flagged), addable as a model set.
+// shown as the spectrum of distinct E/N with counts and N_DW (N = 0 and fractional N_DW flagged), addable as a
+// model set.
 import { useState } from "react";
 import { useAxband, selectPhysics } from "../store";
 import { constantsOf } from "../../project/physics-constants";
 import { minus } from "../format";
 import { scanFromState, type ScanOutcome } from "./calculator-scan";
+import type { ScanResult } from "../../physics/ensemble";
 import type { CalcState } from "./calculator-state";
 import { Histogram } from "./ensemble/Histogram";
 import { nDWText } from "./ensemble/ensemble-csv";
@@ -32,31 +34,14 @@ export function CalculatorScan({ state }: { state: CalcState }) {
         <>
           <p role="status" data-testid="calc-scan-result">
             {result.combinations.toLocaleString("en")} combinations, {result.distinct.length} distinct E/N
-            {result.zeroN > 0 ? `; ${result.zeroN.toLocaleString("en")} with N = 0 (no QCD axion) left out` : ""}.
+            {result.zeroN > 0 ? `; ${result.zeroN.toLocaleString("en")} with N = 0 (no QCD axion) left out` : ""}
+            {result.nonIntegerNDW > 0
+              ? `; ${result.nonIntegerNDW.toLocaleString("en")} with N_DW not an integer (${NO_YUKAWA})`
+              : ""}
+            .
           </p>
           <Histogram values={result.distinct} cGamma={cGamma} />
-          <div className="table-scroll">
-            <table>
-              <thead>
-                <tr>
-                  <th scope="col">E/N</th>
-                  <th scope="col">combinations</th>
-                  <th scope="col">
-                    N<sub>DW</sub>
-                  </th>
-                </tr>
-              </thead>
-              <tbody>
-                {result.distinct.slice(0, 500).map((v) => (
-                  <tr key={v.eOverN}>
-                    <td>{minus(v.eOverN)}</td>
-                    <td>{v.count}</td>
-                    <td>{nDWText(v)}</td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
+          <SpectrumRows result={result} />
           <button
             type="button"
             disabled={result.distinct.length === 0}
@@ -71,5 +56,55 @@ export function CalculatorScan({ state }: { state: CalcState }) {
         </>
       ) : null}
     </div>
+  );
+}
+
+/** Rows shown in the page; the model set (the scan's only output) gets every distinct E/N. */
+const MAX_ROWS = 500;
+
+const NO_YUKAWA = "no Yukawa term links these charges";
+
+/** The spectrum table: at most MAX_ROWS rows, saying so when there are more; a fractional N_DW carries a mark. */
+function SpectrumRows({ result }: { result: ScanResult }) {
+  const shown = result.distinct.slice(0, MAX_ROWS);
+  return (
+    <>
+      <div className="table-scroll">
+        <table>
+          <thead>
+            <tr>
+              <th scope="col">E/N</th>
+              <th scope="col">combinations</th>
+              <th scope="col">
+                N<sub>DW</sub>
+              </th>
+            </tr>
+          </thead>
+          <tbody>
+            {shown.map((v) => (
+              <tr key={v.eOverN}>
+                <td>{minus(v.eOverN)}</td>
+                <td>{v.count}</td>
+                <td>
+                  {nDWText(v)}
+                  {v.nonIntegerNDW ? (
+                    <span title={`N_DW not an integer for ${v.nonIntegerNDW} combinations: ${NO_YUKAWA}`}> †</span>
+                  ) : null}
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      {result.distinct.length > shown.length ? (
+        <p className="note" data-testid="calc-scan-truncated">
+          Showing the first {MAX_ROWS} of {result.distinct.length.toLocaleString("en")} distinct E/N; the model set
+          holds all.
+        </p>
+      ) : null}
+      {shown.some((v) => v.nonIntegerNDW) ? (
+        <p className="note">† N_DW not an integer for some combinations: {NO_YUKAWA}.</p>
+      ) : null}
+    </>
   );
 }

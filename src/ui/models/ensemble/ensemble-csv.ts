@@ -2,9 +2,12 @@
 import type { EnsembleValue } from "../../../physics/ensemble";
 import { csvTextCell } from "../../../analysis/table-cells";
 
+/** An N_DW for reading: integers as they are; a scan's fractional one (2/3) to four digits, not sixteen. */
+const dwNumber = (x: number): string => (Number.isInteger(x) ? String(x) : String(Number(x.toPrecision(4))));
+
 /** N_DW of a value: one number, or "lo–hi" when the models with this E/N differ. */
 export function nDWText(v: Pick<EnsembleValue, "nDWMin" | "nDWMax">): string {
-  return v.nDWMin === v.nDWMax ? String(v.nDWMin) : `${v.nDWMin}–${v.nDWMax}`;
+  return v.nDWMin === v.nDWMax ? dwNumber(v.nDWMin) : `${dwNumber(v.nDWMin)}–${dwNumber(v.nDWMax)}`;
 }
 
 /** Header comments say what produced the table; E/N stays an exact fraction, as text ("-64/3" would run as a formula). */
