@@ -7,7 +7,7 @@
 // AXBAND_BENCH_FPS_ONLY=1 (only the frames per second of a continuous zoom), AXBAND_BENCH_NO_FPS=1 (skip it),
 // AXBAND_BENCH_FPS_STEPS (default 80), AXBAND_BENCH_FPS_ROUNDS (default 3),
 // AXBAND_BENCH_FPS_KINDS=scan,region (diagnostics: only these kinds of the benchmark curves), AXBAND_BENCH_MINIFY=0 (readable bundle for profiling), AXBAND_BENCH_NO_TRACE=1 (skip the painting trace),
-// AXBAND_BENCH_LEGEND=auto (the legend place; default outside-right: the automatic place costs more, see DEVELOPERS.md),
+// AXBAND_BENCH_LEGEND=auto (the legend place; default outside-right: the automatic place costs more, see NOTES.md),
 // CHROMIUM_PATH (default /usr/bin/chromium).
 import { spawnSync } from "node:child_process";
 import { createServer } from "node:http";

@@ -1,6 +1,5 @@
-// The overlap table: for every visible model × visible curve of a project, the mass (f_a, frequency)
-// intervals where the curve excludes, reaches or contains the whole model band, part of it, or none of it;
-// with CSV and Markdown exports. The UI sorts, filters and highlights rows; this module only computes them.
+// The overlap table: for each visible model × curve, the mass intervals where the curve excludes all, part or none
+// of the model band, with CSV and Markdown exports (the UI only sorts, filters and highlights).
 import { csvTextCell, markdownTextCell } from "./table-cells";
 import type { AxionConstants } from "../physics/constants";
 import { faFromMass, frequencyFromMass } from "../physics/coupling";

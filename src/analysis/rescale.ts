@@ -1,8 +1,4 @@
-// Rescaling of haloscope-type limits to another local dark-matter density or axion fraction, and the
-// legend text that says a curve is shown rescaled.
-//
-// A haloscope's signal power grows as g² · ρ_a, with ρ_a = f · ρ the local axion density; a limit on the
-// power therefore moves as g ∝ 1/√(f ρ): g_shown = g · √(ρ₀/ρ) / √f (common practice).
+// Rescaling of haloscope-type limits to another local dark-matter density or axion fraction, and its legend text.
 import type { CurveRescale } from "../project/types";
 
 export interface RescaleOpts {
@@ -25,6 +21,8 @@ export function validateRescale(opts: RescaleOpts): string | null {
   return null;
 }
 
+// A haloscope's signal power grows as g² · ρ_a, with ρ_a = f · ρ the local axion density; a limit on the
+// power therefore moves as g ∝ 1/√(f ρ): g_shown = g · √(ρ₀/ρ) / √f (common practice).
 /** The factor √(ρ₀/ρ)/√f that multiplies g; throws a RangeError for parameters {@link validateRescale} rejects. */
 export function rescaleFactor(opts: RescaleOpts): number {
   const problem = validateRescale(opts);

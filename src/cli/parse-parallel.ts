@@ -1,6 +1,5 @@
-// Parses the renderer's CSV inputs on worker threads, one file at a time per worker, results kept in the
-// order of the files, each with its drawing preparation. Why: parsing and preparing 20 files of 100 000 rows
-// is most of a run, and files are independent.
+// Parses the renderer's CSV inputs on worker threads (one file per worker at a time, results in file order),
+// each with its drawing preparation: parsing 20 files of 100 000 rows is most of a run, and files are independent.
 import { availableParallelism } from "node:os";
 import { basename } from "node:path";
 import { Worker } from "node:worker_threads";

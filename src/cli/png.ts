@@ -1,6 +1,5 @@
-// PNG output of the renderer: rasterises the exported SVG with resvg (a native binary shipped inside its npm
-// package; no browser, no download) at physical size × dpi, in the figure font's own files (the PDF's), and
-// stamps the dpi into the PNG's pHYs chunk.
+// PNG output of the renderer: the exported SVG rasterised with resvg (native, no browser) at physical size × dpi,
+// in the figure font's own files, with the dpi stamped into the pHYs chunk.
 import { createRequire } from "node:module";
 import type { FigureFontFamily } from "../formats/pdf/fonts";
 import { setPngDpi } from "../formats/png-meta";

@@ -1,6 +1,5 @@
-// A project file or an SVG exported by axband as the renderer's input, read through the same validation as the
-// app (schema, migrations, repairs). Loaded only for such inputs: the validator is a good part of a CSV run's
-// start-up otherwise.
+// A project file or axband SVG as the renderer's input, validated as in the app; loaded only for such inputs,
+// since the validator is a good part of a CSV run's start-up.
 import { basename } from "node:path";
 import { projectFromFile } from "../formats/project-file";
 import { extractProjectFromSvg } from "../formats/figure-read";

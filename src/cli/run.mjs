@@ -1,10 +1,6 @@
 #!/usr/bin/env node
-// Launcher of the command-line renderer (`npx axband render …`, the package's bin; `npm run render -- …`): bundles
-// src/cli/start.ts (which loads render.ts) and the CSV parse worker with esbuild into node_modules/.cache/axband/
-// when any source file is newer than a bundle, then runs it in this process. A leading "render" is the command's
-// name and is dropped.
-// Why: starting through a TypeScript loader costs ~1–3 s per run on a small machine, more than rendering; esbuild
-// itself is loaded only to rebuild.
+// Launcher of the command-line renderer (the package's bin; `npm run render -- …`): bundles src/cli/start.ts and the
+// CSV parse worker with esbuild into node_modules/.cache/axband/ when a source is newer, then runs it in this process.
 import { existsSync, readdirSync, statSync, mkdirSync, rmSync } from "node:fs";
 import { dirname, join, resolve } from "node:path";
 import { fileURLToPath, pathToFileURL } from "node:url";
@@ -35,6 +31,8 @@ const stale =
         .filter((f) => existsSync(join(repo, f)))
         .map((f) => statSync(join(repo, f)).mtimeMs),
     );
+// Why bundle: starting through a TypeScript loader costs ~1–3 s per run on a small machine, more than rendering;
+// esbuild itself is loaded only to rebuild.
 if (stale) {
   const { build } = await import("esbuild");
   mkdirSync(cache, { recursive: true });
@@ -44,5 +42,6 @@ if (stale) {
 }
 const { mainAsync } = await import(pathToFileURL(out).href);
 const argv = process.argv.slice(2);
+// `npx axband render …`: a leading "render" is the command's name.
 if (argv[0] === "render") argv.shift();
 process.exitCode = await mainAsync(argv, undefined, { parseWorker: pathToFileURL(worker) });

@@ -1,7 +1,4 @@
-// BibTeX for the sources panel: a small tolerant parser for the entries users paste as curve citations, and
-// the writer (escaping, stable layout) behind the BibTeX export. Written here rather than taken from a
-// library: the needs are small (entries, @string macros, # concatenation, @comment/@preamble skipped) and
-// the pure core must run in plain Node and the browser without a parser generator.
+// BibTeX for the sources panel: a small tolerant parser for pasted curve citations, and the writer behind the export.
 
 /** One parsed entry. */
 export interface BibEntry {
@@ -267,6 +264,8 @@ class BibReader {
   }
 }
 
+// Written here rather than taken from a library: the needs are small (entries, @string macros, # concatenation,
+// @comment/@preamble skipped) and the pure core must run in plain Node and the browser without a parser generator.
 /**
  * Parses BibTeX text: every `@type{key, field = value, …}` (or with parentheses), values in braces, in
  * double quotes, numbers or @string macros joined with `#`; month abbreviations expand. Text outside entries

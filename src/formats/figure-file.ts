@@ -1,6 +1,5 @@
-// The exported figure file: project → self-contained SVG at a preset's physical size, with the project
-// embedded (compressed) in <metadata> so the file reopens in axband and the CLI accepts it as input; curve
-// data only up to EMBED_MAX_POINTS points and EMBED_MAX_CHARS characters, so a figure of millions of points stays small.
+// The exported figure file: project → self-contained SVG at a preset's physical size, the project embedded in
+// <metadata> so it reopens (curve data only up to EMBED_MAX_POINTS points and EMBED_MAX_CHARS characters).
 import type { Project, SizePreset } from "../project/types";
 import type { Scene } from "../plot/scene-types";
 import { PX_PER_IN, presetOf } from "../plot/layout";

@@ -1,6 +1,5 @@
-// Project files (NAME.axband.json: the whole project, curve data included, as readable JSON) and the autosave
-// form for browser storage (the project without curve data as text, plus one binary record per curve).
-// Reading either goes through the same restore step as links, and never throws.
+// Project files (NAME.axband.json, curve data included) and the autosave form for browser storage (text plus one
+// binary record per curve); reading either goes through the restore step of links and never throws.
 import { parseJsonSafely, projectToJsonValue } from "../project/json";
 import { restoreProject } from "../project/restore";
 import { CURVE_STATE, PROJECT_STATE, keysFor, type PersistTarget } from "../project/state-table";

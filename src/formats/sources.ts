@@ -1,10 +1,5 @@
-// The sources panel's content: the references behind what a figure uses (constants and formulas with their
-// papers, the papers behind catalogue models, the curves' citations as typed at import), and their export
-// as BibTeX with stable keys.
-//
-// Bibliographic details were checked against public copies of the papers' abstract pages and reference
-// lists (arXiv listings and mirrors, publisher and institutional repositories); a field that could not be
-// checked is listed in `fromMemory` and flagged in the sources panel, never in the exported BibTeX.
+// The sources panel's content: the references behind a figure (constants, formulas, catalogue models, curve
+// citations) and their BibTeX export with stable keys.
 import { catalogue } from "../physics/catalogue";
 import { bibtexFieldText, escapeBibtexValue, formatBibtexEntry, isSafeBibtexKey, parseBibtex } from "./bibtex";
 import type { Project } from "../project/types";
@@ -26,6 +21,9 @@ export interface SourceEntry {
   rawFields: string[];
   /** The user's BibTeX entry exactly as typed (exported verbatim, except a key renamed to avoid a clash). */
   bibtex?: string;
+  // Bibliographic details were checked against public copies of the papers' abstract pages and reference lists
+  // (arXiv listings and mirrors, publisher and institutional repositories); a field that could not be checked is
+  // listed here and flagged in the sources panel, never in the exported BibTeX.
   /** Fields filled from memory, not yet checked against the paper. */
   fromMemory: string[];
   /** One-line human-readable citation for the panel. */

@@ -1,6 +1,5 @@
-// Reading what a user types for E/N in a model row: one value ("8/3", "0.5", "1e-1"), an interval
-// ("5/3..44/3", "0.5 – 14.7", "1 to 2") or the region between lines ("5/3 | 44/3", "5/3 | 2 | 44/3").
-// Unlike PQ charges, E/N may be a decimal: it only feeds g_aγγ.
+// Reading a typed E/N: one value ("8/3", "0.5"), an interval ("5/3..44/3") or lines ("5/3 | 44/3"); unlike PQ
+// charges, E/N may be a decimal, since it only feeds g_aγγ.
 
 /**
  * Parsed E/N text: the two ends as typed (normalised), their values, and whether they differ; for "a | b"

@@ -1,6 +1,5 @@
-// Axes of the figure: frame, outward ticks (left and bottom, or all four sides), tick labels, axis titles with
-// real sub/superscripts, the mass axis in eV…neV, the optional top axis (f_a or frequency, in step with the mass
-// axis) and the decade grid.
+// Axes of the figure: frame, ticks, tick labels, axis titles with real sub/superscripts, the optional top axis
+// (f_a or frequency, in step with the mass axis) and the decade grid.
 import type { AxionConstants } from "../physics/constants";
 import { AXIS_MASS_UNITS, FREQUENCY_AXIS_UNITS, massToEv, massUnitInfo, type AxisMassUnit } from "../physics/units";
 import type { Figure, FrequencyUnitSetting, TickSides, TopAxis, YView } from "../project/types";

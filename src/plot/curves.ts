@@ -1,5 +1,5 @@
-// Curves as scene nodes by role: exclusion (its edge, hatched on the excluded side and/or filled from the curve up
-// past the plot top), projection (a line), region (a closed, filled and outlined polygon), at pixel resolution via thinning/.
+// Curves as scene nodes by role: exclusion (edge hatched on the excluded side and/or filled up past the plot top),
+// projection (a line), region (a closed, filled and outlined polygon), at pixel resolution via thinning/.
 import type { Curve, YView } from "../project/types";
 import type { AxionConstants } from "../physics/constants";
 import type { PathNode } from "./scene-types";

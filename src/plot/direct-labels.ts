@@ -1,5 +1,5 @@
-// Direct labels (legend "on-plot"): where each curve's and model's label goes beside its own drawn line, clear of
-// the data, of the other labels and of the plot edge, with a leader line when it had to move away. Pure and deterministic.
+// Direct labels (legend "on-plot"): where each curve's and model's label goes beside its own line, clear of the data,
+// the other labels and the plot edge, with a leader line when it had to move away. Pure and deterministic.
 import type { PlotRect } from "./layout";
 import {
   emptyGrid,

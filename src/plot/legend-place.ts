@@ -1,5 +1,5 @@
-// Automatic legend placement: a free inner corner (the legend box over no drawn content), read from the scene's
-// curves and models, given as vertices, on a coarse occupancy grid over the plot area; else outside right or below (our own rule).
+// Automatic legend placement (our own rule): a free inner corner, read from the scene's curves and models as vertices
+// on a coarse occupancy grid over the plot area; else outside right or below.
 import type { Curve } from "../project/types";
 import type { LegendCorner, PlotRect } from "./layout";
 import { drawsSorted, preparedOf } from "./curves";

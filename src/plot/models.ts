@@ -1,6 +1,5 @@
-// Model lines and bands as scene nodes: a line g(m) ∝ m is straight in log-log (two points across the
-// visible range), a band is the polygon between its edges, reaching below the plot when it cancels, with the
-// theory spread as a lighter band around it; a model set drawn as lines is one path of many lines.
+// Model lines and bands as scene nodes: a line is straight in log-log, a band the polygon between its edges (below
+// the plot where it cancels) with its theory spread; a model set drawn as lines is one path.
 import { gAgg, gFromNormalized, type AxionConstants } from "../physics/index";
 import type { Model, YView } from "../project/types";
 import type { PathNode } from "./scene-types";

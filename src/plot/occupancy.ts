@@ -1,5 +1,5 @@
-// The occupancy grid the automatic legend placement reads: which cells of the plot area hold drawn content,
-// marked from shapes given as vertices (curves and models as the scene builder has them), never read back from path data.
+// The occupancy grid the automatic legend placement reads: which cells of the plot area hold drawn content, marked
+// from shapes given as vertices (curves and models as the scene builder has them), never read back from path data.
 import type { PathNode } from "./scene-types";
 import type { PlotRect } from "./layout";
 import type { Polyline } from "./thinning/index";

@@ -1,6 +1,5 @@
-// A curve's drawing preparation (log10 arrays, and per y view the thinning pyramid or the Douglas–Peucker
-// order) as plain typed arrays: built off the main thread (the import worker), moved without copying, and
-// put into the plot cache there, so the first scene of a million-point curve does not block the page.
+// A curve's drawing preparation (log10 arrays, thinning pyramid or Douglas–Peucker order) as plain typed arrays,
+// built in the import worker and moved without copying, so the first scene of a big curve does not block the page.
 import type { Curve, Figure, PhysicsSettings, YView } from "../project/types";
 import {
   cachedPrepared,

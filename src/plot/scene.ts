@@ -1,5 +1,5 @@
-// The scene builder: a project in, the complete figure out as plain layers of paths, rects and text, drawn
-// the same way on screen (SceneSvg and scene-dom.ts) and in the exported SVG (writeSvg). Settings and their fallbacks: scene-settings.ts.
+// The scene builder: a project in, the complete figure out as plain layers of paths, rects and text, drawn the same on
+// screen (SceneSvg, scene-dom.ts) and in the exported SVG (writeSvg). Settings and their fallbacks: scene-settings.ts.
 import type { Curve, FigureFont, LegendPlace, Model, Project, YView } from "../project/types";
 import type { PathNode, Scene, SceneLayer, SceneNode, ScaleConfig } from "./scene-types";
 import { axesNodes, axisStyle, axisTicks, gridNodes, verticalTickOpts, yTitle, type AxesFrame } from "./axes";

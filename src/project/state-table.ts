@@ -1,6 +1,5 @@
-// Which part of the project goes where: for every key of Project, Model, Curve and Figure, whether it is
-// written into share links, project files and browser storage. Typed as complete records, so adding a key to
-// types.ts without deciding its fate here is a type error. The link, file and storage writers read this table.
+// Which part of the project goes where: for every key of Project, Model, Curve and Figure, whether it is written
+// into share links, project files and browser storage (the link, file and storage writers read this table).
 import type { Curve, Figure, Model, PhysicsSettings, Project } from "./types";
 
 /**
@@ -19,6 +18,7 @@ export interface Persistence {
 
 const everywhere: Persistence = { link: "always", file: true, storage: "meta" };
 
+// Typed as complete records, so adding a key to types.ts without deciding its fate here is a type error.
 export const PROJECT_STATE: { readonly [K in keyof Project]-?: Persistence } = {
   version: everywhere,
   name: everywhere,

@@ -1,6 +1,5 @@
-// Main-thread side of the curve import: runs parses in the import Web Worker (one shared worker, jobs by id)
-// with progress and cancel, and falls back to sliced parsing on the calling thread where Workers do not exist.
-// A curve's drawing preparation built in the worker is put into the plot cache here as the result arrives.
+// Main-thread side of the curve import: parses in the shared import Web Worker (jobs by id, progress, cancel) or
+// sliced on the calling thread without Workers, and caches the drawing preparation built in the worker.
 import type { CurveParseOptions, CurveParseResult, ImportProgress } from "../formats/csv";
 import { ImportCancelled } from "../formats/csv/cancel";
 import { seedPreparedCurve, type PrepareSpec, type PreparedTransfer } from "../plot/prepare-transfer";

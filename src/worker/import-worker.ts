@@ -1,6 +1,5 @@
-// Module Web Worker that parses curve files off the main thread: reads a File/Blob, bytes or text in slices,
-// posts progress, honours cancel, and returns the arrays as transferred buffers (no copy on arrival), with
-// the curve's drawing preparation (log10 arrays, thinning pyramid) built here so the first scene is quick.
+// Module Web Worker that parses curve files in slices off the main thread (progress, cancel), returns the arrays
+// as transferred buffers and builds the curve's drawing preparation, so the first scene is quick.
 import { isImportCancelled, parseCurveSource, type CurveParseOptions } from "../formats/csv";
 import {
   computePrepared,

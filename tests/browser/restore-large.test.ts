@@ -39,7 +39,7 @@ test("a restored million-point curve is prepared off the main thread: no long bl
   project.curves = [newCurve({ id: CURVE_ID, label: LABEL, role: "region" })];
   // A fixed legend place: this test is about the preparation. With the automatic legend the first drawing
   // of the arrived curve also runs the placement's code for the first time (not yet optimised by the engine),
-  // which puts that one task at 110–220 ms on this 2-core machine (DEVELOPERS.md, "Big curves").
+  // which puts that one task at 110–220 ms on this 2-core machine (bench/NOTES.md, "Big curves and the main thread").
   project.figure.legend = "top-right";
   const meta = serializeForStorage(project).meta;
   for (let i = 0; i < WARM_LOADS; i++) {

@@ -1,5 +1,5 @@
 // Curve CSV import: one pass over the text straight into Float64Arrays, chunk by chunk; delimiter, header,
-// units and decimal mark are detected. Hand-written rather than a CSV library: see DEVELOPERS.md.
+// units and decimal mark are detected. Hand-written rather than a CSV library, so numbers go straight into arrays.
 export * from "./types";
 export { MAX_IMPORT_BYTES, checkImportFile, decodeImportBytes } from "./file-check";
 export { readNumberText } from "./numbers";

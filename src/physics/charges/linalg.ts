@@ -1,6 +1,5 @@
-// Exact linear algebra over the rationals for the charge solver: reduced row echelon form, the solution set of
-// A x = b as a particular solution plus a null-space basis. Written here because no kept npm library does
-// exact rational elimination on fraction.js values; the matrices are tiny (fields × terms), so plain Gauss–Jordan.
+// Exact linear algebra over the rationals for the charge solver: reduced row echelon form, and the solutions of
+// A x = b as a particular solution plus a null-space basis.
 import Fraction from "fraction.js";
 import type { Rational } from "../rational";
 
@@ -30,6 +29,8 @@ function rref(m: readonly (readonly Rational[])[], cols: number): { rows: Ration
   return { rows, pivots };
 }
 
+// Written here because no kept npm library does exact rational elimination on fraction.js values; the matrices
+// are tiny (fields × terms), so plain Gauss–Jordan.
 /** All solutions of A x = b (A is rows × n); `{ ok: false }` when the system is inconsistent. */
 export function solveAffine(a: readonly (readonly Rational[])[], b: readonly Rational[], n: number): AffineSolution {
   const aug = a.map((r, i) => [...r, b[i]]);

@@ -1,6 +1,5 @@
-// The readable term syntax: a term is a product of fields separated by spaces (or · ⋅ and a spaced *), each
-// possibly conjugated and raised to a power, in ASCII or Unicode: "Qbar_L Phi Q_R", "H2^† H1 Phi^†2",
-// "conj(Phi)^2", "Q̄_L Φ Q_R", "H₂† H₁ Φ†²". Errors name the 1-based character position.
+// The readable term syntax (ASCII or Unicode): "Qbar_L Phi Q_R", "H2^† H1 Phi^†2", "conj(Phi)^2", "Q̄_L Φ Q_R".
+// Errors name the 1-based character position.
 import type { Term, TermFactor } from "./types";
 
 export type TermParse = { ok: true; term: Term } | { ok: false; message: string; position: number };

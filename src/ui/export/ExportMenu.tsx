@@ -1,6 +1,5 @@
-// Figure export: the size preset (the same Figure.preset the screen uses), the SVG download (self-contained,
-// project embedded so the file reopens in axband), the vector PDF (project attached), PNG at 1×, 2× or
-// 300 dpi, and the model lines and bands as CSV (export-actions.ts). All files come from the same scene builder as the screen.
+// Figure export menu: the size preset, SVG (project embedded), PDF, PNG at 1×, 2× or 300 dpi, and model CSV;
+// every file comes from the same scene builder as the screen.
 import { useState } from "react";
 import type { SizePreset } from "../../project/types";
 import { PRESETS, presetOf } from "../../plot/layout";

@@ -1,6 +1,5 @@
-// What the export menu's buttons do: write the figure as SVG (project embedded), PDF (project attached) or PNG
-// (dpi in the file), or the model lines and bands as CSV, download it, and say so. The writers load with this
-// module, on demand; the PDF writer, its fonts and pdf-lib only when a PDF is asked for.
+// What the export menu's buttons do: write SVG, PDF, PNG or model CSV, download it and say so; the writers load
+// on demand (the PDF writer, its fonts and pdf-lib only when a PDF is asked for).
 import { embedCapText, exportFigureSvgWithInfo } from "../../formats/figure-file";
 import { modelsToCsv } from "../../formats/model-csv";
 import { setPngDpi } from "../../formats/png-meta";

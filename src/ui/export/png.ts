@@ -1,6 +1,5 @@
-// Rasterises an exported SVG figure to PNG in the browser (Image of a blob URL drawn into a canvas), works
-// out the pixel size for 1×, 2× and 300 dpi from the SVG's viewBox and physical size, and builds the SVG a
-// PNG is drawn from: thinned for the PNG's pixels, without the embedded project.
+// Rasterises an exported SVG to PNG in the browser (canvas), with the pixel size for 1×, 2× and 300 dpi, from an
+// SVG thinned for the PNG's pixels and without the embedded project.
 import type { Project } from "../../project/types";
 import { exportFigureSvg, rasterResolution } from "../../formats/figure-file";
 import { presetOf, type Preset } from "../../plot/layout";

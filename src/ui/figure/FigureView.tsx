@@ -1,6 +1,5 @@
-// The interactive figure: the scene of the project (the same one the export writes) drawn by SceneSvg (scene-dom.ts),
-// moved by the gestures of useFigureGestures (wheel, drag, keys, double-click, hover).
-// Big curves whose drawing preparation is still being built in the worker are left out, with a note.
+// The interactive figure: the project's scene (the one the export writes) drawn by SceneSvg and moved by
+// useFigureGestures; big curves still being prepared in the worker are left out, with a note.
 import { useDeferredValue, useEffect, useId, useMemo, useRef, useState, type RefObject } from "react";
 import { buildScene, type BuildSceneOpts } from "../../plot/scene";
 import { presetOf } from "../../plot/layout";

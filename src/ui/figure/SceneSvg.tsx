@@ -1,6 +1,5 @@
-// The figure on screen: an <svg> whose scene content (clip path, layers, nodes) is kept in line with the Scene
-// by scene-dom.ts, the same markup writeSvg writes, so the screen matches the export; React owns the root
-// element and the screen-only overlays drawn above the scene.
+// The figure on screen: an <svg> kept in line with the Scene by scene-dom.ts (the markup writeSvg writes);
+// React owns the root element and the screen-only overlays above the scene.
 import { useCallback, useLayoutEffect, useRef, type ReactNode, type Ref, type SVGProps } from "react";
 import type { Scene } from "../../plot/scene-types";
 import { fmt } from "../../plot/svg";

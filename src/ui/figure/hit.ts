@@ -1,6 +1,5 @@
-// Which curves a point (m_a, g_aγγ) lies in: below an exclusion or projection curve interpolated linearly in
-// log-log space at that mass, or inside a closed region. Uses the shared curve preparation (cached by data
-// array), so the first hover after a big import reuses what the import worker prepared for the figure.
+// Which curves a point (m_a, g_aγγ) lies in: below an exclusion or projection curve (log-log interpolation) or
+// inside a region; reuses the shared curve preparation, so the first hover after a big import is quick.
 import { bisectRight } from "d3-array";
 import type { Curve } from "../../project/types";
 import { prepareCurve, type PreparedCurve } from "../../analysis/prepared-curve";

@@ -1,9 +1,5 @@
-// Puts a Scene into an <svg> as DOM elements, node for node and attribute for attribute as writeSvg writes it
-// (the plot core's sceneIds, layerAttributes, nodeAttributes and textSpans), updating in place from frame to
-// frame: the figure's hot path.
-// Why not React elements per node: rendering and reconciling ~150 scene nodes each frame took about as long
-// again as building the scene (bench/redraw.mjs, measured before this renderer replaced them); here an
-// unchanged node costs a few string comparisons.
+// Puts a Scene into an <svg> node for node and attribute for attribute as writeSvg writes it, updating in place
+// from frame to frame: the figure's hot path.
 import type { Scene, SceneLayer, SceneNode } from "../../plot/scene-types";
 import { fmt, layerAttributes, nodeAttributes, sceneIds, textPlacement, textSpans } from "../../plot/svg";
 

@@ -1,7 +1,5 @@
-// The import dialog (loaded on first use): sources from the file picker, the paste box or a drop anywhere on the
-// page are parsed in the Web Worker (progress bar, cancel), shown with their first rows, detected delimiter,
-// header and units, the settings to change and the unreadable rows; one click on Import adds them all.
-// Dropped project files and exported SVG figures reopen the project instead (see import-store).
+// The import dialog (loaded on first use): picked, pasted or dropped sources parsed in the worker, previewed with
+// their detected settings and unreadable rows, imported in one click (project files reopen the project instead).
 import { useEffect, useId, useState } from "react";
 import { MAX_IMPORT_BYTES } from "../../data";
 import { formatBytes, importable } from "./import-items";

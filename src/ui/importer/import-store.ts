@@ -1,6 +1,5 @@
-// The import step's own small store: the sources waiting to be imported, their parse jobs, and the actions
-// the controls (file picker and paste box in the curves panel, drops anywhere on the page) and the import
-// dialog share. Transient: never saved or undone; the curves it creates go to the project store in one step.
+// The import step's own transient store (never saved or undone): sources waiting, their parse jobs, and the
+// actions the controls and the import dialog share; the curves it creates go to the project store in one step.
 import { create } from "zustand";
 import { labelFromFileName, newCurve, type CurveParseResult } from "../../data";
 import type { Curve } from "../../project/types";

@@ -1,7 +1,5 @@
-// Runs one parse of an import source through the import worker client: in the Web Worker in a browser (the
-// page stays responsive and the arrays arrive as transferred buffers). Where there is no Worker (jsdom
-// tests) the client parses on the calling thread; the bytes are read first because jsdom's Blob has no stream().
-// The worker also builds the curve's drawing preparation, so its first scene does not block the page.
+// Runs one parse of an import source through the import worker client (the calling thread where there is no
+// Worker), with the curve's drawing preparation built alongside.
 import type { CurveParseOptions, CurveParseResult } from "../../data";
 import { hasPrepared, type PrepareSpec } from "../../plot/prepare-transfer";
 import { importInWorker, importWorkerAvailable, prepareInWorker } from "../../worker/import-client";
@@ -24,6 +22,7 @@ export function startParse(
 ): ParseJob {
   if (importWorkerAvailable() || typeof source.stream === "function")
     return importInWorker(source, opts, onProgress, prepare);
+  // No Worker and no Blob.stream() (jsdom tests): read the bytes first; the client then parses on this thread.
   let cancelled = false;
   let inner: ParseJob | null = null;
   const promise = readBytes(source).then((bytes) => {

@@ -1,6 +1,5 @@
-// The typed-E/N field: one value adds a model line, an interval ("5/3..44/3") a band of every E/N in it, lines
-// ("5/3 | 44/3") the band between them; the label keeps the text as typed. Bad input gets a message next to
-// the field and adds nothing.
+// The typed-E/N field: one value adds a line, an interval ("5/3..44/3") a band, lines ("5/3 | 44/3") the band
+// between them; bad input gets a message next to the field and adds nothing.
 import { useId, useState, type FormEvent } from "react";
 import { parseEOverN } from "../../physics/eovern-parse";
 import { useAxband } from "../store";

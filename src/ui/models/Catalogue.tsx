@@ -1,6 +1,5 @@
-// The catalogue picker: ready-made KSVZ-type and DFSZ-type models with their E/N and N_DW (computed by the
-// anomaly calculator from the field content, which each row shows when opened); "Add" makes a model, and the
-// ticked entries together make one model set ("Add as model set").
+// The catalogue picker: KSVZ-type and DFSZ-type models with E/N and N_DW from the anomaly calculator; "Add"
+// makes a model, and the ticked entries together make one model set.
 import { useMemo, useState } from "react";
 import { newModelSet } from "../../project/defaults";
 import { catalogue, type CatalogueEntry } from "../../physics/catalogue";

@@ -1,6 +1,5 @@
-// The list of models: per row label, E/N (with its kind), colour, line style, visibility, theory spread (k σ),
-// order and removal; a model set's drawing (lines, between extremes, central share); a band whose interval
-// reaches c_γ says that its coupling cancels (g = 0).
+// The list of models: per row label, E/N, colour, line style, visibility, theory spread, order and removal, a
+// model set's drawing, and a note when a band's coupling cancels (g = 0).
 import { useCallback, useId, useState } from "react";
 import { useShallow } from "zustand/react/shallow";
 import { parseEOverN } from "../../physics/eovern-parse";

@@ -1,6 +1,5 @@
-// The Models section of the sidebar: typed E/N, the catalogue, the model list, and the anomaly calculator
-// (a wide table, so it opens in a dialog over the page; it loads on first opening, apart from the first figure,
-// and then stays mounted so its table survives closing).
+// The Models section of the sidebar: typed E/N, the catalogue, the model list, and the anomaly calculator in a
+// dialog (loaded on first opening, then kept mounted so its table survives closing).
 import { lazy, Suspense, useState } from "react";
 import { Dialog } from "./Dialog";
 import { AddModel } from "./AddModel";

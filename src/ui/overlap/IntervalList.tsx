@@ -1,6 +1,4 @@
-// The intervals of one summary row as a windowed list: only the rows in view (plus a margin) are in the DOM, so a
-// row with tens of thousands of intervals expands at once. Hand-written (about 60 lines) because the list has a
-// fixed row height, which is the whole of what a virtualisation library would add here.
+// The intervals of one summary row as a windowed list: only the rows in view (plus a margin) are in the DOM.
 import { useState } from "react";
 import type { OverlapSummaryRow } from "../../analysis/overlap-summary";
 import { intervalView, rowView } from "../../formats/overlap/view";
@@ -9,6 +7,8 @@ const ROW_PX = 26;
 const VIEW_PX = 260;
 const MARGIN = 8;
 
+// Hand-written (about 60 lines): the list has a fixed row height, which is the whole of what a virtualisation
+// library would add here.
 export function IntervalList(props: {
   row: OverlapSummaryRow;
   id: string;

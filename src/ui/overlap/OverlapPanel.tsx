@@ -1,6 +1,5 @@
-// The overlap table: one summary row per visible model × curve that overlap (computed in the overlap worker), with
-// its verdict, shares, interval count, widest interval and E/N; a row expands to its intervals (windowed list);
-// a click highlights the row's intervals (or one of them) on the figure; exports and a caption for a paper.
+// The overlap table panel: one summary row per overlapping visible model × curve (from the overlap worker), rows
+// that expand to their intervals and highlight them on the figure, exports and a caption.
 import { useMemo, useState } from "react";
 import { useOverlapSummary } from "./overlap-client";
 import { useAxband } from "../store";

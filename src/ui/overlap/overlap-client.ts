@@ -1,6 +1,5 @@
-// Main-thread side of the overlap summary: computed in a Web Worker (each curve array is copied to the worker once
-// and then named by id; the rows' interval arrays come back transferred), on the calling thread where Workers do
-// not exist (jsdom) or the worker fails. `useOverlapSummary` gives the rows for the current models, curves, constants.
+// Main-thread side of the overlap summary: runs it in a Web Worker (curve arrays sent once, then named by id),
+// or on the calling thread without Workers; `useOverlapSummary` gives the rows.
 import { useEffect, useMemo, useRef, useState } from "react";
 import { overlapSummary, type OverlapSummaryRow } from "../../analysis/overlap-summary";
 import { cachedPrepared, type PreparedCurve } from "../../analysis/prepared-curve";

@@ -1,6 +1,5 @@
-// The Figure settings section: size preset, typed axis ranges (validated, with units; the previous range is kept
-// on a bad entry), y view, axis units, top axis, ticks, grid, legend place and text size, font family and size,
-// and title.
+// The Figure settings section: size preset, typed axis ranges, y view, axis units, top axis, ticks, grid,
+// legend place and text size, font and title.
 import { useId, useState } from "react";
 import type {
   AxisMassUnit,

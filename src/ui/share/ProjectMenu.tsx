@@ -1,6 +1,5 @@
-// Project actions in the header: copy a share link (the project in the URL fragment; curves included while
-// the link stays short enough, otherwise the user is told which were left out and offered the project
-// file), and the Project menu with the link and the project file (ProjectSections.tsx).
+// Project actions in the header: copy a share link (curves included while the link stays short enough, else the
+// user is told and offered the project file), and the Project menu (ProjectSections.tsx).
 import { useCallback, useEffect, useRef, useState } from "react";
 import type { AutoLink } from "../../data";
 import { useAxband } from "../store";

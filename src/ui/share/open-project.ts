@@ -1,6 +1,5 @@
-// Opens a project from a file the user picked or dropped: a `.axband.json` project file, or an SVG or PDF
-// figure exported by axband (the project travels in the SVG's <metadata>, as the PDF's attached file). Validation is the data core's; this only
-// routes the file and words the outcome.
+// Opens a picked or dropped `.axband.json` project file or axband SVG/PDF figure (project in <metadata> or
+// attached); validation is the data core's, this only routes the file and words the outcome.
 import { MAX_IMPORT_BYTES, projectFromFile } from "../../data";
 import { extractProjectFromSvg } from "../../formats/figure-read";
 import type { Project } from "../../project/types";

@@ -1,6 +1,5 @@
-// The sources panel: the references behind what the figure uses (constants and formulas with their
-// papers, the catalogue models shown, and the citations typed at curve import), with full details, fields
-// filled from memory marked as such, and a BibTeX export (references.bib).
+// The sources panel: the references behind the figure (constants, formulas, catalogue models, curve citations)
+// with details, fields filled from memory marked as such, and a BibTeX export (references.bib).
 import { useMemo } from "react";
 import { projectSources, sourcesToBibtex, type SourceEntry } from "../../data";
 import { useAxband } from "../store";

@@ -1,6 +1,5 @@
-// Autosave: keeps the project in browser storage (project without curve data in localStorage, curve arrays
-// in IndexedDB keyed by curve id) and restores it on start; a link in the URL fragment wins over it.
-// Storage that is full or missing is reported once (role="alert") and never stops the app.
+// Autosave: the project in browser storage (without curve data in localStorage, curve arrays in IndexedDB),
+// restored on start unless the URL has a link; full or missing storage is reported once and never stops the app.
 import type { StoreApi } from "zustand";
 import type { Project } from "../../project/types";
 import type { AxbandState } from "./types";

@@ -1,6 +1,22 @@
-// The axband store: one zustand store built from slices (history, models, curves, figure, ui) with the
-// middleware (subscribeWithSelector) applied once to the combined store. Components select small pieces.
-//
+// The axband store: one zustand store built from slices (history, models, curves, figure, ui, preparation) with
+// subscribeWithSelector applied once to the combined store. Components select small pieces.
+import { create } from "zustand";
+import { createStore } from "zustand/vanilla";
+import { subscribeWithSelector } from "zustand/middleware";
+import type { StateCreator } from "zustand";
+import type { Project } from "../../project/types";
+import { defaultProject } from "../../project/demo";
+import { createHistorySlice } from "./history";
+import { createModelsSlice } from "./models";
+import { createCurvesSlice } from "./curves";
+import { createFigureSlice } from "./figure";
+import { createUiSlice } from "./ui";
+import { createPreparationSlice, watchCurvePreparation } from "./preparation";
+import type { AxbandMiddleware, AxbandState } from "./types";
+
+export * from "./types";
+
+// The store's shape and API.
 // State
 //   project: Project                 plain data (src/project/types); curve arrays are never mutated, only replaced
 //   history: { past, future }        bounded to HISTORY_LIMIT (100) projects each way
@@ -20,22 +36,6 @@
 //   pushMessage(kind: "alert" | "status", text) → id · dismissMessage(id) · setHighlight(h | null) · setHover(p | null)
 // Use: `const curves = useAxband(selectCurves)`; outside React: `useAxband.getState().addModel({ eOverNMin: "8/3" })`.
 // For derived arrays select with useShallow (zustand/react/shallow). Fresh stores for tests: createAxbandStore().
-import { create } from "zustand";
-import { createStore } from "zustand/vanilla";
-import { subscribeWithSelector } from "zustand/middleware";
-import type { StateCreator } from "zustand";
-import type { Project } from "../../project/types";
-import { defaultProject } from "../../project/demo";
-import { createHistorySlice } from "./history";
-import { createModelsSlice } from "./models";
-import { createCurvesSlice } from "./curves";
-import { createFigureSlice } from "./figure";
-import { createUiSlice } from "./ui";
-import { createPreparationSlice, watchCurvePreparation } from "./preparation";
-import type { AxbandMiddleware, AxbandState } from "./types";
-
-export * from "./types";
-
 function combined(initial: Project): StateCreator<AxbandState, [], AxbandMiddleware> {
   return subscribeWithSelector((...a) => ({
     ...createHistorySlice(initial)(...a),

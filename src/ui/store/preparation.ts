@@ -1,6 +1,5 @@
-// Off-thread drawing preparation for big curves that reach the store without the import worker (autosave
-// restore, a link, a project file, undo/redo, a changed role or order): the figure leaves them out until
-// the import worker has built their preparation and it is in the plot cache, so the page never freezes.
+// Off-thread drawing preparation for big curves that reach the store without the import worker (autosave, link,
+// file, undo/redo, changed role or order): the figure leaves them out until their preparation is cached.
 import type { StoreApi } from "zustand";
 import type { Curve, Project } from "../../project/types";
 import { cachedPrepared } from "../../plot/thinning/index";
