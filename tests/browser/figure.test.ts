@@ -148,6 +148,12 @@ describe("zoom and pan", () => {
     const f0 = await frameOf(page);
     const svgBox = (await page.locator('[data-testid="plot"] svg').boundingBox())!;
     await page.mouse.move(svgBox.x + svgBox.width * 0.55, svgBox.y + svgBox.height * 0.5);
+    // The store joins steps within 500 ms by Date.now(): the page's clock stands still during the burst, so a busy
+    // machine's slow wheel events cannot split its one undo step (timers and frames run as usual).
+    await page.evaluate(() => {
+      const t = Date.now();
+      Date.now = () => t;
+    });
     for (let i = 0; i < 6; i++) await page.mouse.wheel(0, -200);
     // All six steps, however the frames batch them: each narrows the span by exp(−200 px · 0.002 per px)
     // (the figure's wheel rate), six of them by exp(−2.4).
