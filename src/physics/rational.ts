@@ -56,4 +56,3 @@ export function rationalValue(r: Rational): number {
 }
 
 /** The rational 0. */
-export const ZERO: Rational = new Fraction(0);

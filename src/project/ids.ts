@@ -1,6 +1,5 @@
 // Short random ids for models and curves: unique enough within one project, short enough for share links.
 // Uses the Web Crypto random source where present (browsers, Node ≥ 19) and Math.random otherwise.
-import type { Project } from "./types";
 
 const ALPHABET = "0123456789abcdefghijklmnopqrstuvwxyz";
 
@@ -40,12 +39,4 @@ export function uniqueId(wanted: string, taken: ReadonlySet<string>): string {
     const candidate = `${wanted}-${n}`;
     if (!taken.has(candidate)) return candidate;
   }
-}
-
-/** A fresh id for a model or curve that does not clash with the project's ids. */
-export function freshIdFor(project: Pick<Project, "models" | "curves">, prefix: "m" | "c"): string {
-  const taken = new Set([...project.models.map((m) => m.id), ...project.curves.map((c) => c.id)]);
-  let id = newId(prefix);
-  while (taken.has(id)) id = newId(prefix);
-  return id;
 }

@@ -119,16 +119,3 @@ export function goesTo(rule: Persistence, target: PersistTarget): boolean {
 export function keysFor<K extends string>(table: { readonly [P in K]: Persistence }, target: PersistTarget): K[] {
   return (Object.keys(table) as K[]).filter((k) => goesTo(table[k], target));
 }
-
-/**
- * A copy of `obj` holding only the keys of `table` that go to `target` (keys not in the table are dropped).
- */
-export function pickFor<T extends object, K extends keyof T & string>(
-  obj: T,
-  table: { readonly [P in K]: Persistence },
-  target: PersistTarget,
-): Partial<T> {
-  const out: Partial<T> = {};
-  for (const k of keysFor(table, target)) out[k] = obj[k];
-  return out;
-}
