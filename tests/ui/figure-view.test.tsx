@@ -192,6 +192,8 @@ describe("FigureView", () => {
         </Profiler>
       </>,
     );
+    // The catalogue loads apart from the first figure: count from when it is in.
+    await screen.findByTestId("catalogue-add-set");
     const before = { ...renders };
     await act(async () => {
       useAxband.getState().setView([1e-6, 1e-3], [1e-15, 1e-10]);

@@ -73,6 +73,8 @@ describe("model sets", () => {
   test("two picked catalogue entries are added as one model set, drawn between its extremes", async () => {
     const user = userEvent.setup();
     render(<ModelsPanel />);
+    // The catalogue loads apart from the first figure: wait for it.
+    await screen.findByTestId("catalogue-add-set");
     await user.click(screen.getByText("Catalogue"));
     const add = screen.getByTestId("catalogue-add-set");
     expect(add).toBeDisabled();
@@ -96,6 +98,8 @@ describe("model sets", () => {
   test("the list changes a set's drawing and its central share", async () => {
     const user = userEvent.setup();
     render(<ModelsPanel />);
+    // The catalogue loads apart from the first figure: wait for it.
+    await screen.findByTestId("catalogue-add-set");
     await user.click(screen.getByText("Catalogue"));
     for (const id of ["ksvz-r1", "ksvz-r2"]) {
       const row = document.querySelector(`[data-catalogue-id="${id}"]`) as HTMLElement;

@@ -64,6 +64,8 @@ describe("catalogue", () => {
   test("adding the heavy quark (3, 1, −1/3) gives a model E/N = 2/3 from the catalogue", async () => {
     const user = userEvent.setup();
     render(<ModelsPanel />);
+    // The catalogue loads apart from the first figure: wait for it.
+    await screen.findByTestId("catalogue-add-set");
     await user.click(screen.getByText("Catalogue"));
     const entry = document.querySelector('[data-catalogue-id="ksvz-r1"]') as HTMLElement;
     expect(within(entry).getByText(/E\/N = 2\/3/)).toBeInTheDocument();
@@ -74,6 +76,8 @@ describe("catalogue", () => {
 
   test("both groups are there, and the two-doublet models show 8/3 and 2/3 (PDG axion review, from memory)", async () => {
     render(<ModelsPanel />);
+    // The catalogue loads apart from the first figure: wait for it.
+    await screen.findByTestId("catalogue-add-set");
     expect(screen.getByRole("group", { name: /KSVZ-type/ })).toBeInTheDocument();
     const dfsz = screen.getByRole("group", { name: /DFSZ-type/ });
     const text = dfsz.textContent ?? "";

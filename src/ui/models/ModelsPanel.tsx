@@ -3,10 +3,11 @@
 import { lazy, Suspense, useState } from "react";
 import { Dialog } from "./Dialog";
 import { AddModel } from "./AddModel";
-import { Catalogue } from "./Catalogue";
 import { ModelList } from "./ModelList";
 import { useCalculatorRequest } from "./calculator-draft";
 
+// The catalogue (its table of models with their anomaly sums) loads right after the first figure, apart from it.
+const Catalogue = lazy(() => import("./Catalogue").then((m) => ({ default: m.Catalogue })));
 // Both load on first opening, apart from the first figure.
 const AnomalyCalculator = lazy(() => import("./AnomalyCalculator").then((m) => ({ default: m.AnomalyCalculator })));
 const EnsemblePanel = lazy(() => import("./ensemble/EnsemblePanel").then((m) => ({ default: m.EnsemblePanel })));
@@ -44,7 +45,16 @@ export function ModelsPanel() {
     <div className="models-panel">
       <AddModel />
       <div className="inline-row">
-        <Catalogue />
+        <Suspense
+          fallback={
+            <details className="catalogue">
+              <summary>Catalogue</summary>
+              <p className="note loading">Loading the catalogue…</p>
+            </details>
+          }
+        >
+          <Catalogue />
+        </Suspense>
       </div>
       <button
         type="button"
