@@ -4,12 +4,11 @@
 import { useState } from "react";
 import { useAxband, selectPhysics } from "../store";
 import { constantsOf } from "../../project/physics-constants";
-import { minus } from "../format";
 import { scanFromState, type ScanOutcome } from "./calculator-scan";
 import type { ScanResult } from "../../physics/ensemble";
 import type { CalcState } from "./calculator-state";
 import { Histogram } from "./ensemble/Histogram";
-import { nDWText } from "./ensemble/ensemble-csv";
+import { SpectrumGrid } from "./ensemble/SpectrumTable";
 import { modelSetDraft } from "./ensemble/model-set";
 
 export function CalculatorScan({ state }: { state: CalcState }) {
@@ -69,33 +68,15 @@ function SpectrumRows({ result }: { result: ScanResult }) {
   const shown = result.distinct.slice(0, MAX_ROWS);
   return (
     <>
-      <div className="table-scroll">
-        <table>
-          <thead>
-            <tr>
-              <th scope="col">E/N</th>
-              <th scope="col">combinations</th>
-              <th scope="col">
-                N<sub>DW</sub>
-              </th>
-            </tr>
-          </thead>
-          <tbody>
-            {shown.map((v) => (
-              <tr key={v.eOverN}>
-                <td>{minus(v.eOverN)}</td>
-                <td>{v.count}</td>
-                <td>
-                  {nDWText(v)}
-                  {v.nonIntegerNDW ? (
-                    <span title={`N_DW not an integer for ${v.nonIntegerNDW} combinations: ${NO_YUKAWA}`}> †</span>
-                  ) : null}
-                </td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
+      <SpectrumGrid
+        values={shown}
+        countHeading="combinations"
+        mark={(v) =>
+          v.nonIntegerNDW ? (
+            <span title={`N_DW not an integer for ${v.nonIntegerNDW} combinations: ${NO_YUKAWA}`}> †</span>
+          ) : null
+        }
+      />
       {result.distinct.length > shown.length ? (
         <p className="note" data-testid="calc-scan-truncated">
           Showing the first {MAX_ROWS} of {result.distinct.length.toLocaleString("en")} distinct E/N; the model set
