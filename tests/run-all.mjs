@@ -1,8 +1,8 @@
-// `npm test`: typecheck, lint, format check, knip, then the Vitest projects (unit + ui together, then browser alone); ends with
-// the plain summary line "N passed, N failed" that CI reads. Exit code 0 only when everything passed.
-// Speed: the four static checks run two at a time, each with its tool's own cache, and a check whose inputs (every file
-// git lists, tracked or not ignored, and the installed lock file) are those of its last passing run is not run again
-// (node_modules/.cache/axband-checks; a fresh clone has none, so CI runs them all; AXBAND_NO_CHECK_CACHE=1 runs them).
+// `npm test`: typecheck, lint, format check, knip and the Vitest projects; ends with the plain summary line
+// "N passed, N failed" that CI reads. Exit code 0 only when everything passed. Two lanes run side by side: the
+// browser tests, and the static checks followed by the unit and component tests. A static check whose inputs (every
+// file git lists, tracked or not ignored, and the installed lock file) are those of its last passing run is not run
+// again (node_modules/.cache/axband-checks; a fresh clone has none, so CI runs them all; AXBAND_NO_CHECK_CACHE=1 runs them).
 import { spawn, spawnSync } from "node:child_process";
 import { createHash } from "node:crypto";
 import { mkdirSync, readFileSync, readdirSync, rmSync, existsSync, writeFileSync, statSync } from "node:fs";
@@ -19,7 +19,6 @@ let passed = 0;
 let failed = 0;
 
 const CHECKS = [
-  // Longest first, so that the pairs finish close together.
   // TypeScript's native compiler (7.x, a tenth of 6.x's time here); 6.x stays installed for typescript-eslint.
   ["typecheck", "node_modules/typescript-native/bin/tsc", ["--noEmit", "-p", "src/tsconfig.json"]],
   [
@@ -74,16 +73,11 @@ function inputsHash() {
 
 const stampOf = (label) => join(CACHE, `${label.split(" ")[0]}.ok`);
 
-/** Runs one check with its output collected, printed in one piece when it ends (two run at once). */
-function runCheck([label, cmd, args], hash) {
-  const stamp = stampOf(label);
-  if (hash && existsSync(stamp) && readFileSync(stamp, "utf8") === `${hash}\n${args.join(" ")}`) {
-    console.log(`\n== ${label}: ok (inputs unchanged since it last passed)`);
-    return Promise.resolve(true);
-  }
+/** Runs a command with its output collected and printed in one piece when it ends (lanes run side by side). */
+function run(label, cmd, args) {
   return new Promise((resolve) => {
     const t0 = Date.now();
-    const child = spawn(cmd, args, { stdio: ["ignore", "pipe", "pipe"] });
+    const child = spawn(cmd, args, { stdio: ["ignore", "pipe", "pipe"], env: { ...process.env, FORCE_COLOR: "0" } });
     const out = [];
     child.stdout.on("data", (d) => out.push(d));
     child.stderr.on("data", (d) => out.push(d));
@@ -93,40 +87,25 @@ function runCheck([label, cmd, args], hash) {
       console.log(`\n== ${label}: ${cmd} ${args.join(" ")}`);
       process.stdout.write(Buffer.concat(out));
       console.log(`== ${label}: ${ok ? "ok" : `FAILED (exit ${code ?? signal})`} (${s} s)`);
-      if (ok && hash) writeFileSync(stamp, `${hash}\n${args.join(" ")}`);
       resolve(ok);
     });
   });
 }
 
-function step(label, cmd, args) {
-  console.log(`\n== ${label}: ${cmd} ${args.join(" ")}`);
-  const t0 = Date.now();
-  const r = spawnSync(cmd, args, { stdio: "inherit" });
-  const ok = r.status === 0;
-  const s = ((Date.now() - t0) / 1000).toFixed(1);
-  console.log(`== ${label}: ${ok ? "ok" : `FAILED (exit ${r.status ?? r.signal})`} (${s} s)`);
+/** One static check, skipped when its inputs are those of its last passing run. */
+async function runCheck([label, cmd, args], hash) {
+  const stamp = stampOf(label);
+  if (hash && existsSync(stamp) && readFileSync(stamp, "utf8") === `${hash}\n${args.join(" ")}`) {
+    console.log(`\n== ${label}: ok (inputs unchanged since it last passed)`);
+    return true;
+  }
+  const ok = await run(label, cmd, args);
+  if (ok && hash) writeFileSync(stamp, `${hash}\n${args.join(" ")}`);
   return ok;
 }
 
-mkdirSync(CACHE, { recursive: true });
-const hash = process.env.AXBAND_NO_CHECK_CACHE ? undefined : inputsHash();
-const queue = [...CHECKS];
-const results = [];
-await Promise.all(
-  [0, 1].map(async () => {
-    for (let c = queue.shift(); c; c = queue.shift()) results.push(await runCheck(c, hash));
-  }),
-);
-for (const ok of results) {
-  if (ok) passed++;
-  else failed++;
-}
-
-mkdirSync("tests/.artifacts", { recursive: true });
-// The browser tests run after the others and alone: their timing checks (long tasks on the main thread)
-// must not share the two cores with hundreds of unit tests.
-for (const projects of [["unit", "ui", "ui-mocking"], ["browser"]]) {
+/** Runs Vitest projects with a JSON report and counts their tests. */
+async function runVitest(projects) {
   const name = projects.join("+");
   const report = `tests/.artifacts/vitest-${name}.json`;
   rmSync(report, { force: true });
@@ -137,18 +116,35 @@ for (const projects of [["unit", "ui", "ui-mocking"], ["browser"]]) {
     "--reporter=json",
     `--outputFile.json=${report}`,
   ];
-  const ok = step(`vitest ${name}`, bin("vitest"), args);
-  if (!existsSync(report)) {
-    failed++;
-    continue;
-  }
+  const ok = await run(`vitest ${name}`, bin("vitest"), args);
+  if (!existsSync(report)) return { passed: 0, failed: 1 };
   const r = JSON.parse(readFileSync(report, "utf8"));
-  passed += r.numPassedTests;
-  failed += r.numFailedTests;
+  let failedHere = r.numFailedTests;
   // A file that fails to load has no tests to count; count it once so it cannot pass unnoticed.
-  for (const f of r.testResults ?? []) if (f.status === "failed" && (f.assertionResults ?? []).length === 0) failed++;
-  if (!ok && r.numFailedTests === 0) failed++;
+  for (const f of r.testResults ?? [])
+    if (f.status === "failed" && (f.assertionResults ?? []).length === 0) failedHere++;
+  if (!ok && failedHere === 0) failedHere++;
+  return { passed: r.numPassedTests, failed: failedHere };
 }
 
+const started = Date.now();
+mkdirSync(CACHE, { recursive: true });
+mkdirSync("tests/.artifacts", { recursive: true });
+const hash = process.env.AXBAND_NO_CHECK_CACHE ? undefined : inputsHash();
+const count = ({ passed: p, failed: f }) => {
+  passed += p;
+  failed += f;
+};
+// Two lanes side by side on the two cores: the browser tests (their files wait on the page a good part of the
+// time) beside the static checks and then the unit and component tests. Each lane's steps print when they end.
+await Promise.all([
+  (async () => count(await runVitest(["browser"])))(),
+  (async () => {
+    for (const c of CHECKS) count((await runCheck(c, hash)) ? { passed: 1, failed: 0 } : { passed: 0, failed: 1 });
+    count(await runVitest(["unit", "ui", "ui-mocking"]));
+  })(),
+]);
+
+console.log(`\nnpm test took ${((Date.now() - started) / 1000).toFixed(0)} s`);
 console.log(`\n${passed} passed, ${failed} failed`);
 process.exit(failed === 0 ? 0 : 1);
