@@ -2,9 +2,10 @@
 // exactly as `npm run render` and `npx axband` do (the bundled bin, built once by global-setup.ts), from the
 // repository root.
 import { spawnSync } from "node:child_process";
-import { mkdtempSync } from "node:fs";
+import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join, resolve } from "node:path";
+import { afterAll, onTestFinished } from "vitest";
 import { emptyProject, newCurve, newModel } from "../../src/project/defaults";
 import { projectToFile } from "../../src/formats/project-file";
 import type { Project } from "../../src/project/types";
@@ -12,9 +13,20 @@ import { main } from "../../src/cli/render";
 
 export const REPO = resolve(__dirname, "../..");
 
-/** A fresh temporary directory for one test's files. */
+/**
+ * A fresh temporary directory for one test's files, removed when that test ends (or, made in a describe block,
+ * after the block's tests), so that runs leave nothing behind in the system's temporary folder.
+ */
 export function tempDir(tag = "axband-cli-"): string {
-  return mkdtempSync(join(tmpdir(), tag));
+  const dir = mkdtempSync(join(tmpdir(), tag));
+  const remove = () => rmSync(dir, { recursive: true, force: true });
+  try {
+    onTestFinished(remove);
+  } catch {
+    // Not inside a test: the directory serves the tests of the describe block being collected.
+    afterAll(remove);
+  }
+  return dir;
 }
 
 /**

@@ -2,10 +2,10 @@
 // truncated or foreign PDFs give a clear message; poppler-utils (an independent PDF reader) sees one page of
 // the preset's size, only embedded fonts, every legend entry and both axis titles as text, and the attachment.
 import { execFileSync, spawnSync } from "node:child_process";
-import { mkdtempSync, writeFileSync } from "node:fs";
+import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { describe, expect, it } from "vitest";
+import { describe, expect, it, onTestFinished } from "vitest";
 import { exportFigurePdfWithInfo, extractProjectFromPdf } from "../../src/formats/figure-pdf";
 import { nodePdfFonts } from "../../src/cli/pdf-fonts";
 import { defaultProject } from "../../src/project/demo";
@@ -74,6 +74,7 @@ describe("the project attached to the PDF", () => {
 describe.skipIf(!hasPoppler)("read by poppler-utils (pdfinfo, pdffonts, pdftotext, pdfdetach)", () => {
   it("single column: one page of 8.6 cm = 243.78 pt width (±0.5 pt), embedded subset fonts, the project attached", async () => {
     const dir = mkdtempSync(join(tmpdir(), "axband-pdf-"));
+    onTestFinished(() => rmSync(dir, { recursive: true, force: true }));
     const file = join(dir, "demo.pdf");
     const p = defaultProject();
     writeFileSync(file, (await exportFigurePdfWithInfo(p, { ...opts, preset: "single-column" })).pdf);
@@ -90,6 +91,7 @@ describe.skipIf(!hasPoppler)("read by poppler-utils (pdfinfo, pdffonts, pdftotex
 
   it("slide: pdftotext finds both axis titles and every legend entry", async () => {
     const dir = mkdtempSync(join(tmpdir(), "axband-pdf-"));
+    onTestFinished(() => rmSync(dir, { recursive: true, force: true }));
     const file = join(dir, "demo.pdf");
     const p = defaultProject();
     writeFileSync(file, (await exportFigurePdfWithInfo(p, { ...opts, preset: "slide" })).pdf);

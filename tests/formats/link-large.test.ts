@@ -64,8 +64,11 @@ function compactText(link: string): string {
   );
 }
 
+// Built once: the property runs below make hundreds of projects, and building the demo's curves is most of each.
+const DEMO = defaultProject();
+
 function oneCurve(massEv: Float64Array, gInvGeV: Float64Array = massEv.slice().reverse()): Project {
-  return { ...defaultProject(), curves: [newCurve({ id: "c", label: "Invented", massEv, gInvGeV })] };
+  return { ...DEMO, curves: [newCurve({ id: "c", label: "Invented", massEv, gInvGeV })] };
 }
 
 /** xorshift32 (Marsaglia, J. Stat. Softw. 8 (2003) 14) for large reproducible data. */

@@ -304,13 +304,17 @@ describe("automatic legend placement in the scene", () => {
       return project([left, right, block("low", [M_LO, M_HI], [G_LO, 1e-13])]);
     };
     let disagreements = 0;
-    for (let seed = 1; seed <= 30; seed++) {
+    // Seeds 1 … 30, the two found to be near ties (9 and 22) first: the search for one near tie (the second scene
+    // per resolution, only needed until one is found) then usually ends with the first seed.
+    const seeds = [9, 22, ...Array.from({ length: 30 }, (_, i) => i + 1).filter((s) => s !== 9 && s !== 22)];
+    for (const seed of seeds) {
       const p = mirrored(seed);
       const boxes = new Set<string>();
       const own = new Set<string>();
       for (const resolution of [0.25, 0.75, 1, 1.25, 2, 3, 6.25]) {
         const scene = buildScene(p, { resolution, physical: false });
         boxes.add(JSON.stringify(legendBox(scene)));
+        if (disagreements > 0) continue;
         // The corners' coverage read from the scene's own paths, with the plot area of an inside legend.
         const inCorner = buildScene(
           { ...p, figure: { ...p.figure, legend: "top-right" } },

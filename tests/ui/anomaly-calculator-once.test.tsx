@@ -18,7 +18,7 @@ beforeEach(() => {
 });
 
 test("one keystroke in a charge field runs the anomaly computation once, and the breakdown shows its result", async () => {
-  const user = userEvent.setup();
+  const user = userEvent.setup({ delay: null });
   render(<AnomalyCalculator />);
   const y = screen.getByRole("textbox", { name: "Hypercharge Y of Q_L" });
   await user.clear(y);

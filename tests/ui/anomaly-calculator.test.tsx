@@ -25,7 +25,7 @@ describe("live result", () => {
   });
 
   test("typing hypercharge 2/3 for both chiralities updates E/N to 8/3", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<AnomalyCalculator />);
     for (const name of ["Hypercharge Y of Q_L", "Hypercharge Y of Q_R"]) {
       const y = screen.getByRole("textbox", { name });
@@ -36,7 +36,7 @@ describe("live result", () => {
   });
 
   test("a bad charge shows a message naming the field and keeps the previous result", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<AnomalyCalculator />);
     for (const name of ["Hypercharge Y of Q_L", "Hypercharge Y of Q_R"]) {
       const y = screen.getByRole("textbox", { name });
@@ -60,7 +60,7 @@ describe("live result", () => {
   });
 
   test("a decimal charge is refused (it would not be exact)", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<AnomalyCalculator />);
     const y = screen.getByRole("textbox", { name: "Hypercharge Y of Q_L" });
     await user.clear(y);
@@ -72,7 +72,7 @@ describe("live result", () => {
 
 describe("catalogue and models", () => {
   test("loading the heavy quark (3, 1, −1/3) gives E/N = 2/3 and N_DW = 1", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<AnomalyCalculator />);
     await user.selectOptions(screen.getByRole("combobox", { name: "Catalogue entry to load" }), "ksvz-r1");
     await user.click(screen.getByRole("button", { name: "Load" }));
@@ -82,7 +82,7 @@ describe("catalogue and models", () => {
   });
 
   test("loading the colour octet (8, 1, −1) gives E/N = 8/3 with N_DW = 6", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<AnomalyCalculator />);
     await user.selectOptions(screen.getByRole("combobox", { name: "Catalogue entry to load" }), "ksvz-r12");
     await user.click(screen.getByRole("button", { name: "Load" }));
@@ -91,7 +91,7 @@ describe("catalogue and models", () => {
   });
 
   test("adding a fermion row and removing it changes the result back", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<AnomalyCalculator />);
     await user.click(screen.getByRole("button", { name: "+ Fermion" }));
     // a third, left-handed colour triplet singlet with X = 1 and Y = −1/3: E = 1·3·1/9 = 1/3, N adds 1/2
@@ -108,7 +108,7 @@ describe("catalogue and models", () => {
   });
 
   test("Add as model creates a model with source calculator and its field content", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<AnomalyCalculator />);
     await user.selectOptions(screen.getByRole("combobox", { name: "Catalogue entry to load" }), "ksvz-r2");
     await user.click(screen.getByRole("button", { name: "Load" }));

@@ -30,7 +30,7 @@ async function typeTerms(user: ReturnType<typeof userEvent.setup>, kept: string,
 
 describe("charges from the Lagrangian", () => {
   test("the Yukawa Qbar_L Phi Q_R solves the start table's heavy quark (3,1,0): charges 1 and 0, E/N = 0, N_DW = 1", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<AnomalyCalculator />);
     // Scramble the typed charges first: the solver must set them.
     const pq = screen.getByRole("textbox", { name: "PQ charge of Q_L" });
@@ -46,7 +46,7 @@ describe("charges from the Lagrangian", () => {
   });
 
   test("an unknown field names the line and the character; a term that is not gauge invariant is named", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<AnomalyCalculator />);
     await typeTerms(user, "Qbar_L Phi Foo");
     expect(screen.getByTestId("solve-errors")).toHaveTextContent(
@@ -57,7 +57,7 @@ describe("charges from the Lagrangian", () => {
   });
 
   test("renaming the normalised scalar keeps it normalised; the Yukawa through the renamed field still solves", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<AnomalyCalculator />);
     await user.click(screen.getByText("Charges from the Lagrangian"));
     const name = screen.getByRole("textbox", { name: "Name of scalar 1" });
@@ -70,7 +70,7 @@ describe("charges from the Lagrangian", () => {
   });
 
   test("a bare mass left in the forbidden list but allowed by the symmetry is reported", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<AnomalyCalculator />);
     await typeTerms(user, "Qbar_L Phi Q_R", "Qbar_L Q_R Phi");
     expect(screen.getByTestId("charge-report")).toHaveTextContent("Not forbidden by this symmetry: Qbar_L Q_R Phi");
@@ -78,7 +78,7 @@ describe("charges from the Lagrangian", () => {
 });
 
 test("a second heavy quark without a Yukawa: E/N is not determined, and its free charges are offered as a scan", async () => {
-  const user = userEvent.setup();
+  const user = userEvent.setup({ delay: null });
   render(<AnomalyCalculator />);
   for (const n of [1, 2]) {
     await user.click(screen.getByRole("button", { name: "+ Fermion" }));
@@ -101,7 +101,7 @@ test("a second heavy quark without a Yukawa: E/N is not determined, and its free
 
 describe("calculator comforts", () => {
   test("β is typed as in papers; singlet rows have no β field; the breakdown shows n_w", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<AnomalyCalculator />);
     await user.selectOptions(screen.getByRole("combobox", { name: "Electroweak kind of Q_L" }), "su3l");
     const beta = screen.getByRole("textbox", { name: "β of Q_L" });
@@ -118,7 +118,7 @@ describe("calculator comforts", () => {
   });
 
   test("the model gets its name; Load asks before replacing an edited draft; the draft survives a remount", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     const first = render(<AnomalyCalculator />);
     await user.type(screen.getByRole("textbox", { name: "Model name" }), "My quark");
     first.unmount();
@@ -134,7 +134,7 @@ describe("calculator comforts", () => {
   });
 
   test("a calculator model reopens for editing from the model list and the update replaces it", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<ModelsPanel />);
     await user.click(screen.getByRole("button", { name: "Anomaly calculator…" }));
     const dialog = screen.getByRole("dialog");

@@ -14,7 +14,7 @@ import { resetStore } from "./helpers";
 beforeEach(() => resetStore());
 
 test("a listed PQ charge scans every value, shows the spectrum with N = 0 flagged, and adds a model set", async () => {
-  const user = userEvent.setup();
+  const user = userEvent.setup({ delay: null });
   render(<AnomalyCalculator />);
   for (const name of ["Hypercharge Y of Q_L", "Hypercharge Y of Q_R"]) {
     const y = screen.getByRole("textbox", { name });
@@ -36,7 +36,7 @@ test("a listed PQ charge scans every value, shows the spectrum with N = 0 flagge
 });
 
 test("a bad list names the fermion and the field", async () => {
-  const user = userEvent.setup();
+  const user = userEvent.setup({ delay: null });
   render(<AnomalyCalculator />);
   const copies = screen.getByRole("textbox", { name: "Copies of Q_L" });
   await user.clear(copies);
@@ -46,7 +46,7 @@ test("a bad list names the fermion and the field", async () => {
 });
 
 test("a spectrum longer than the table says how many rows it shows; the model set holds every E/N", async () => {
-  const user = userEvent.setup();
+  const user = userEvent.setup({ delay: null });
   // Q_L (3,1,−1/3) and Q_R (3,1,2/3) with 𝒳 from 1..40 each: E/N = 2(X_L + 4X_R)/(3(X_L + X_R)) depends on
   // X_L/X_R only, one E/N per reduced fraction of 1..40 — well over 500 of them.
   const state = {
@@ -70,7 +70,7 @@ test("a spectrum longer than the table says how many rows it shows; the model se
 });
 
 test("a short spectrum shows every row and no truncation note", async () => {
-  const user = userEvent.setup();
+  const user = userEvent.setup({ delay: null });
   render(<CalculatorScan state={{ ...initialCalcState(), rows: [blankRow({ y: "-1/3", pq: "1..3" })] }} />);
   await user.click(screen.getByRole("button", { name: "Scan every combination" }));
   expect(screen.getByTestId("calc-scan").querySelectorAll("tbody tr")).toHaveLength(1);
@@ -80,7 +80,7 @@ test("a short spectrum shows every row and no truncation note", async () => {
 // N_DW = |2N/𝒳_S| (Di Luzio, Giannotti, Nardi, Visinelli, Phys. Rept. 870 (2020) 1; from memory): a (3,1,−1/3)
 // quark with 𝒳 = 1 has N = 1/2, so 𝒳_S = 2 gives N_DW = 1/2 — no Yukawa term links these charges.
 test("a fractional N_DW is shown with a note and counted in the summary", async () => {
-  const user = userEvent.setup();
+  const user = userEvent.setup({ delay: null });
   const state = { ...initialCalcState(), rows: [blankRow({ y: "-1/3", pq: "1" })], scalarCharge: "{1, 2}" };
   render(<CalculatorScan state={state} />);
   await user.click(screen.getByRole("button", { name: "Scan every combination" }));

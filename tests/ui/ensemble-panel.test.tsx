@@ -16,14 +16,14 @@ beforeEach(() => resetStore());
 afterEach(() => vi.restoreAllMocks());
 
 async function setField(testId: string, value: string) {
-  const user = userEvent.setup();
+  const user = userEvent.setup({ delay: null });
   const input = screen.getByTestId(testId);
   await user.clear(input);
   await user.type(input, value);
 }
 
 test("Λ and m_Q typed in the panel reach the enumeration; the result exports as CSV and joins the project", async () => {
-  const user = userEvent.setup();
+  const user = userEvent.setup({ delay: null });
   const downloads = captureDownloads();
   render(<EnsemblePanel open onClose={() => undefined} />);
   await setField("ensemble-max-quarks", "2");
@@ -73,7 +73,7 @@ test("Λ and m_Q typed in the panel reach the enumeration; the result exports as
 });
 
 test("signed charges report the models dropped for N = 0", async () => {
-  const user = userEvent.setup();
+  const user = userEvent.setup({ delay: null });
   render(<EnsemblePanel open onClose={() => undefined} />);
   await setField("ensemble-max-quarks", "2");
   await user.selectOptions(screen.getByTestId("ensemble-charges"), "signed");
@@ -84,7 +84,7 @@ test("signed charges report the models dropped for N = 0", async () => {
 });
 
 test("a heavy-quark mass at or above Λ cannot run; turning the criterion off can", async () => {
-  const user = userEvent.setup();
+  const user = userEvent.setup({ delay: null });
   render(<EnsemblePanel open onClose={() => undefined} />);
   await setField("ensemble-max-quarks", "2");
   await setField("ensemble-heavy-mass", "1e19");

@@ -13,7 +13,7 @@ beforeEach(() => resetStore());
 
 describe("Font setting", () => {
   test("offers sans and serif, sans first; choosing serif is one undo step", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<FigureSettings />);
     const select = screen.getByTestId("figure-font");
     expect(screen.getByLabelText("Font")).toBe(select);

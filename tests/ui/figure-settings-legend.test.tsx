@@ -42,7 +42,7 @@ describe("Legend setting", () => {
   });
 
   test("choosing a fixed corner and back to best corner updates the figure; undo restores the previous place", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     resetStore({ ...blankProject(), figure: { ...blankProject().figure, legend: "auto" } });
     render(<FigureSettings />);
     const select = screen.getByLabelText("Legend");
@@ -56,7 +56,7 @@ describe("Legend setting", () => {
   });
 
   test("the legend text size goes through the store with undo; a new project has the default size", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     resetStore(defaultProject());
     render(<FigureSettings />);
     const field = screen.getByTestId("legend-scale");
@@ -74,7 +74,7 @@ describe("Legend setting", () => {
   });
 
   test("a legend entry that must be shortened is named in a note under the figure; a place with room clears it", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     const p = defaultProject();
     // One word wider than any legend room on a single column cannot wrap: it is cut, and the note says which.
     const word = "Averyveryverylongsinglewordlabelthatcannotwrapanywhereatall";

@@ -31,7 +31,7 @@ beforeEach(() => {
 });
 
 async function upload() {
-  const user = userEvent.setup();
+  const user = userEvent.setup({ delay: null });
   render(<Step />);
   const file = new File([readFileSync(REPRO)], "labelcomment.csv", { type: "text/csv" });
   await user.upload(screen.getByTestId("import-files"), file);

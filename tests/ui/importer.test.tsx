@@ -79,7 +79,7 @@ describe("pasted data", () => {
 
 describe("files", () => {
   test("confirm adds a curve labelled by the file name, with the chosen mass unit", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<Step />);
     const file = new File(["freq,g\n1,1e-13\n2,2e-13\n"], "demo-haloscope (invented).csv", { type: "text/csv" });
     await user.upload(screen.getByTestId("import-files"), file);
@@ -97,7 +97,7 @@ describe("files", () => {
   });
 
   test("several files import in one click, each with its own colour", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<Step />);
     await user.upload(screen.getByTestId("import-files"), [
       new File(["1e-6,1e-13\n2e-6,2e-13\n"], "a.csv"),
@@ -112,7 +112,7 @@ describe("files", () => {
   });
 
   test("empty, single-column and binary files get a message and change nothing", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<Step />);
     await user.upload(screen.getByTestId("import-files"), [
       new File([""], "empty.csv"),

@@ -15,7 +15,7 @@ const models = () => useAxband.getState().project.models;
 
 describe("between lines", () => {
   test('"5/3 | 44/3" adds the band between the two lines; it does not cancel', async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<ModelsPanel />);
     await user.type(screen.getByTestId("model-eovern"), "44/3 | 5/3{Enter}");
     expect(models()).toHaveLength(1);
@@ -43,7 +43,7 @@ describe("between lines", () => {
   });
 
   test('"5/3 | 2 | 44/3" keeps three lines; one value or an empty part is an error naming the form', async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<ModelsPanel />);
     const input = screen.getByTestId("model-eovern");
     await user.type(input, "5/3 | 2 | 44/3{Enter}");
@@ -57,7 +57,7 @@ describe("between lines", () => {
   });
 
   test("editing an interval in the list into lines changes its kind", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<ModelsPanel />);
     await user.type(screen.getByTestId("model-eovern"), "5/3..44/3{Enter}");
     expect(screen.getByTestId("cancellation-note")).toBeInTheDocument();
@@ -71,7 +71,7 @@ describe("between lines", () => {
 
 describe("model sets", () => {
   test("two picked catalogue entries are added as one model set, drawn between its extremes", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<ModelsPanel />);
     // The catalogue loads apart from the first figure: wait for it.
     await screen.findByTestId("catalogue-add-set");
@@ -96,7 +96,7 @@ describe("model sets", () => {
   });
 
   test("the list changes a set's drawing and its central share", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<ModelsPanel />);
     // The catalogue loads apart from the first figure: wait for it.
     await screen.findByTestId("catalogue-add-set");

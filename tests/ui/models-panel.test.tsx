@@ -14,7 +14,7 @@ const models = () => useAxband.getState().project.models;
 
 describe("typed E/N", () => {
   test('typing "8/3" and clicking add creates a model line labelled "E/N = 8/3"', async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<ModelsPanel />);
     await user.type(screen.getByTestId("model-eovern"), "8/3");
     await user.click(screen.getByTestId("add-model"));
@@ -30,7 +30,7 @@ describe("typed E/N", () => {
   });
 
   test("Enter adds an interval as a band that keeps the typed text; it cancels since 5/3 < c_γ = 1.92 < 44/3", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<ModelsPanel />);
     await user.type(screen.getByTestId("model-eovern"), "5/3..44/3{Enter}");
     expect(models()).toHaveLength(1);
@@ -39,7 +39,7 @@ describe("typed E/N", () => {
   });
 
   test("a line away from c_γ has no cancellation note", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<ModelsPanel />);
     await user.type(screen.getByTestId("model-eovern"), "0.5..1.5{Enter}");
     expect(models()[0]).toMatchObject({ eOverNMin: "0.5", eOverNMax: "1.5" });
@@ -47,7 +47,7 @@ describe("typed E/N", () => {
   });
 
   test.each(["8/0", "abc", "", "1..2..3"])("bad input %j shows a message and adds nothing", async (bad) => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<ModelsPanel />);
     const input = screen.getByTestId("model-eovern");
     if (bad) await user.type(input, bad);
@@ -62,7 +62,7 @@ describe("typed E/N", () => {
 
 describe("catalogue", () => {
   test("adding the heavy quark (3, 1, −1/3) gives a model E/N = 2/3 from the catalogue", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<ModelsPanel />);
     // The catalogue loads apart from the first figure: wait for it.
     await screen.findByTestId("catalogue-add-set");
@@ -98,7 +98,7 @@ describe("model list", () => {
     const s = useAxband.getState();
     s.addModel({ eOverNMin: "0", label: "A" });
     s.addModel({ eOverNMin: "8/3", label: "B" });
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<ModelsPanel />);
     const label = screen.getByDisplayValue("A");
     await user.clear(label);
@@ -121,7 +121,7 @@ describe("model list", () => {
 
   test("editing E/N in a row: a bad value keeps the previous one with a message", async () => {
     useAxband.getState().addModel({ eOverNMin: "8/3", label: "B" });
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<ModelsPanel />);
     const field = screen.getByRole("textbox", { name: "E/N of B" });
     await user.clear(field);

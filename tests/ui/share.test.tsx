@@ -97,7 +97,7 @@ describe("project files", () => {
   });
 
   test("Open project replaces the project; a bad file shows an alert and changes nothing", async () => {
-    const user = userEvent.setup();
+    const user = userEvent.setup({ delay: null });
     render(<ProjectMenu />);
     fireEvent.click(screen.getByTestId("project-menu"));
     const other = { ...defaultProject(), name: "Other project", curves: [] };
