@@ -52,14 +52,14 @@ function widenPrepared(x: Extent, p: PreparedCurve): void {
   if (p.sorted) {
     x[0] = Math.min(x[0], lm[0]);
     x[1] = Math.max(x[1], lm[n - 1]);
-  } else for (let i = 0; i < n; i++) ((x[0] = Math.min(x[0], lm[i])), (x[1] = Math.max(x[1], lm[i])));
+  } else widenBy(x, 0, lm, n);
   const view = viewsOf(p).get(0);
   if (view && view.v === lg) {
     if (view.pyramid?.levels.length) levelValues(view.pyramid, lg);
     rangeMinMax(lg, view.pyramid, 0, n, scratch);
     x[2] = Math.min(x[2], lg[scratch.min]);
     x[3] = Math.max(x[3], lg[scratch.max]);
-  } else for (let i = 0; i < n; i++) ((x[2] = Math.min(x[2], lg[i])), (x[3] = Math.max(x[3], lg[i])));
+  } else widenBy(x, 2, lg, n);
 }
 
 /** Widens `x` by the curve's usable points (as prepareCurve selects them), read from the data arrays. */
