@@ -1,5 +1,6 @@
 // One preparation of a curve's points for all that read them (the drawing, the hover readout, the overlap):
 // the points a log axis can show, in mass order or file order, with their log10 values, cached per data array.
+import { stableOrder } from "./stable-order";
 
 /** The usable points of one curve, in drawing order, with their log10 values. */
 export interface PreparedCurve {
@@ -38,14 +39,10 @@ function entryOf(massEv: Float64Array, gInvGeV: Float64Array): CacheEntry {
   return entry;
 }
 
-/** Whether a point can go on log axes: mass and coupling positive and finite. */
-function usablePoint(massEv: number, gInvGeV: number): boolean {
-  return massEv > 0 && gInvGeV > 0 && massEv < Infinity && gInvGeV < Infinity;
-}
-
 /**
  * The prepared points of a curve, cached per data array: `sorted` orders by mass (stable, so equal masses keep
- * file order); otherwise file order is kept. Points that cannot go on a log axis are skipped (and counted).
+ * file order); otherwise file order is kept. Points that cannot go on a log axis (mass or coupling ≤ 0, NaN or
+ * ±∞) are skipped (and counted).
  */
 export function prepareCurve(massEv: Float64Array, gInvGeV: Float64Array, sorted: boolean): PreparedCurve {
   const entry = entryOf(massEv, gInvGeV);
@@ -53,20 +50,46 @@ export function prepareCurve(massEv: Float64Array, gInvGeV: Float64Array, sorted
   const hit = entry[key];
   if (hit) return hit;
   const len = Math.min(massEv.length, gInvGeV.length);
+  // One pass: the usable points, their logarithms and whether they already come in mass order.
   let idx = new Uint32Array(len);
+  let lm = new Float64Array(len);
+  let lg = new Float64Array(len);
   let n = 0;
-  for (let i = 0; i < len; i++) if (usablePoint(massEv[i], gInvGeV[i])) idx[n++] = i;
-  idx = idx.subarray(0, n);
-  if (sorted) {
-    let ordered = true;
-    for (let k = 1; k < n && ordered; k++) if (massEv[idx[k]] < massEv[idx[k - 1]]) ordered = false;
-    if (!ordered) idx = Uint32Array.from(idx).sort((a, b) => massEv[a] - massEv[b] || a - b);
+  let ordered = true;
+  let prev = 0;
+  for (let i = 0; i < len; i++) {
+    const m = massEv[i];
+    const g = gInvGeV[i];
+    if (m > 0 && g > 0 && m < Infinity && g < Infinity) {
+      if (m < prev) ordered = false;
+      prev = m;
+      idx[n] = i;
+      lm[n] = Math.log10(m);
+      lg[n] = Math.log10(g);
+      n++;
+    }
   }
-  const lm = new Float64Array(n);
-  const lg = new Float64Array(n);
-  for (let k = 0; k < n; k++) {
-    lm[k] = Math.log10(massEv[idx[k]]);
-    lg[k] = Math.log10(gInvGeV[idx[k]]);
+  if (sorted && !ordered) {
+    // Reorder the computed points rather than take logarithms again: log10 of the same double is the same.
+    const keys = new Float64Array(n);
+    for (let k = 0; k < n; k++) keys[k] = massEv[idx[k]];
+    const perm = stableOrder(keys);
+    const si = new Uint32Array(n);
+    const sm = new Float64Array(n);
+    const sg = new Float64Array(n);
+    for (let k = 0; k < n; k++) {
+      const q = perm[k];
+      si[k] = idx[q];
+      sm[k] = lm[q];
+      sg[k] = lg[q];
+    }
+    idx = si;
+    lm = sm;
+    lg = sg;
+  } else if (n < len) {
+    idx = idx.slice(0, n);
+    lm = lm.slice(0, n);
+    lg = lg.slice(0, n);
   }
   const skipped = Math.max(massEv.length, gInvGeV.length) - n;
   const prep: PreparedCurve = { n, skipped, index: idx, lm, lg, sorted };

@@ -5,6 +5,8 @@ import { existsSync, readdirSync, readFileSync } from "node:fs";
 import { join } from "node:path";
 import { parseArgs, USAGE } from "../../src/cli/args";
 import { fitRanges } from "../../src/cli/fit-ranges";
+import { prepareCurve } from "../../src/analysis/prepared-curve";
+import { computePrepared } from "../../src/plot/prepare-transfer";
 import { pngPixelSize, renderPng } from "../../src/cli/png";
 import { FIGURE_FONT_CSS } from "../../src/plot/scene";
 import { writeAllOrNothing } from "../../src/cli/write-atomic";
@@ -140,6 +142,23 @@ describe("fitRanges", () => {
     expect(hi).toBeGreaterThanOrEqual(1e-5);
     expect(fitRanges([{ massEv: Float64Array.of(0), gInvGeV: Float64Array.of(1) }])).toBeUndefined();
     expect(fitRanges([])).toBeUndefined();
+  });
+
+  it("reads curves prepared for drawing (sorted with a pyramid, or in file order) as it reads raw arrays", () => {
+    const curves = [0, 1, 2].map((k) => {
+      const n = 5000;
+      const massEv = Float64Array.from({ length: n }, (_, i) => (i % 7 === 3 ? -1 : 1e-7 * (1 + ((i * 7919) % n) + k)));
+      const gInvGeV = Float64Array.from({ length: n }, (_, i) =>
+        i % 11 === 5 ? 0 : 1e-13 * (1 + ((i * 104729) % 997)),
+      );
+      return { massEv, gInvGeV };
+    });
+    const raw = curves.map((c) => ({ massEv: c.massEv.slice(), gInvGeV: c.gInvGeV.slice() }));
+    computePrepared(curves[0].massEv, curves[0].gInvGeV, true, { slopes: [0] });
+    prepareCurve(curves[1].massEv, curves[1].gInvGeV, true);
+    prepareCurve(curves[2].massEv, curves[2].gInvGeV, false);
+    expect(fitRanges(curves)).toEqual(fitRanges(raw));
+    expect(fitRanges(curves)).toEqual({ massRangeEv: [1e-7, 0.001], gRange: [1e-13, 1e-10] });
   });
 
   it("spans several curves", () => {

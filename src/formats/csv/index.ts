@@ -4,4 +4,5 @@ export * from "./types";
 export { MAX_IMPORT_BYTES, checkImportFile, decodeImportBytes } from "./file-check";
 export { readNumberText } from "./numbers";
 export { createCurveParser, parseCurveText } from "./parser";
+export { parseCurveBytes } from "./parse-bytes";
 export * from "./source";

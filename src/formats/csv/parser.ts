@@ -12,6 +12,7 @@ import {
 } from "../units";
 import { detectLayout, type SniffLine } from "./detect";
 import { extraFields, mixedDelimiters, mixedMarks } from "./disagree";
+import { fastLines } from "./fast-lines";
 import { closingQuote, countColumns, isBlank, onlyDelimiters, splitFields, WS } from "./fields";
 import { binaryProblem, looksBinary } from "./file-check";
 import { ERR_NONE, ERR_RANGE, fieldReason, read, readNumber } from "./numbers";
@@ -47,7 +48,8 @@ export class Parser implements CurveParser {
   readonly fileName: string;
   private started = false;
   private carry = "";
-  private nl = 0;
+  /** Line end: 10 (LF) or 13 (CR), fixed by the first chunk holding one. */
+  nl = 0;
   private phase: "sniff" | "data" | "stopped" = "sniff";
   private sniff: SniffLine[] = [];
   private sniffChars = 0;
@@ -73,15 +75,19 @@ export class Parser implements CurveParser {
   couplingUnit: CouplingUnit = "GeV^-1";
   massUnitSource: UnitSource = "default";
   couplingUnitSource: UnitSource = "default";
-  private massShift = 0;
+  massShift = 0;
   private massFreq = false;
   massLog = false;
   gLog = false;
   private gMode = G_INV_GEV;
+  /** No conversion after reading (mass in a unit of energy, coupling in GeV⁻¹, neither as log10). */
+  plain = false;
+  /** Data lines may go through fastLines first (a layout it can read, no row limit). */
+  private fast = false;
   ctx: CouplingContext = couplingContext();
   private kMuEv = 0;
   private modelAbs = 0;
-  private readonly previewMax: number;
+  readonly previewMax: number;
   private readonly maxRows: number;
   private readonly maxRejected: number;
 
@@ -145,6 +151,13 @@ export class Parser implements CurveParser {
     const nlChar = this.nl === 10 ? "\n" : "\r";
     let pos = 0;
     for (;;) {
+      if (this.fast && this.phase === "data") {
+        pos = fastLines(this, text, pos);
+        if (this.isStopped()) {
+          this.carry = "";
+          return;
+        }
+      }
       const end = text.indexOf(nlChar, pos);
       if (end < 0) break;
       this.lines++;
@@ -171,8 +184,13 @@ export class Parser implements CurveParser {
     return parseResult(this);
   }
 
+  /** Whether the next data lines may be read as bytes by fastBytes (parse-bytes.ts). */
+  takesBytes(): boolean {
+    return this.phase === "data" && this.fast && this.plain && this.nl === 10;
+  }
+
   // A method, so TypeScript does not narrow `phase` across calls that change it.
-  private isStopped(): boolean {
+  isStopped(): boolean {
     return this.phase === "stopped";
   }
 
@@ -206,8 +224,6 @@ export class Parser implements CurveParser {
     if (m[1].toLowerCase() === "label") this.label ??= m[2].trim();
     else this.citation.push(m[2]);
   }
-
-  /** Fixes delimiter, header, columns and units from the first lines, then reads those lines as data. */
 
   /** Fixes delimiter, header, columns and units from the first lines, then reads those lines as data. */
   private decide(): void {
@@ -248,6 +264,8 @@ export class Parser implements CurveParser {
     this.gMode = { "GeV^-1": G_INV_GEV, normalized: G_NORMALIZED, "g-gamma": G_GGAMMA, "model-line": G_MODEL }[
       this.couplingUnit
     ];
+    this.plain = !this.massLog && !this.massFreq && !this.gLog && this.gMode === G_INV_GEV;
+    this.fast = this.delim !== WS && this.need === 2 && this.massCol + this.gCol === 1 && this.maxRows === Infinity;
 
     for (const l of lines) {
       if (l.row === this.headerRow) continue;
@@ -370,7 +388,7 @@ export class Parser implements CurveParser {
   }
 
   /** Converts a readable row to eV and GeV⁻¹ and stores it (or rejects it when a conversion overflows). */
-  private keep(row: number, massV: number, gV: number, t: string, s: number, e: number): void {
+  keep(row: number, massV: number, gV: number, t: string, s: number, e: number): void {
     const massCol = this.massCol;
     const gCol = this.gCol;
     const delim = this.delim;
@@ -438,7 +456,7 @@ export class Parser implements CurveParser {
     }
   }
 
-  private grow(): void {
+  grow(): void {
     const m = new Float64Array(this.m.length * 2);
     m.set(this.m);
     this.m = m;

@@ -70,11 +70,14 @@ const PYRAMID_MIN_SPAN = 64;
 /** The v values of a pyramid level's argmin/argmax, built on first use (they are not transferred between threads). */
 export function levelValues(pyr: Pyramid, v: Float64Array): void {
   if (pyr.values && pyr.values.v === v) return;
-  pyr.values = {
-    v,
-    min: pyr.levels.map((l) => Float64Array.from(l.min, (i) => v[i])),
-    max: pyr.levels.map((l) => Float64Array.from(l.max, (i) => v[i])),
-  };
+  pyr.values = { v, min: pyr.levels.map((l) => gather(v, l.min)), max: pyr.levels.map((l) => gather(v, l.max)) };
+}
+
+/** v at each index (a plain loop: Float64Array.from with a mapping function calls it per element, ~5× slower). */
+function gather(v: Float64Array, idx: Int32Array): Float64Array {
+  const out = new Float64Array(idx.length);
+  for (let k = 0; k < idx.length; k++) out[k] = v[idx[k]];
+  return out;
 }
 
 /**
