@@ -77,7 +77,9 @@ export default defineConfig({
           environment: "node",
           include: ["tests/browser/**/*.test.ts"],
           globalSetup: ["tests/browser/global-setup.ts"],
-          fileParallelism: false,
+          // Two files at a time (the root's maxWorkers) on the one app and Chromium, each in its own browser
+          // contexts; the files that time the main thread run alone (runsAlone(), tests/browser/run-lock.ts).
+          setupFiles: ["tests/browser/setup.ts"],
           testTimeout: 120_000,
           hookTimeout: 180_000,
         },
