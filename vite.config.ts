@@ -80,6 +80,10 @@ export default defineConfig({
           // Two files at a time (the root's maxWorkers) on the one app and Chromium, each in its own browser
           // contexts; the files that time the main thread run alone (runsAlone(), tests/browser/run-lock.ts).
           setupFiles: ["tests/browser/setup.ts"],
+          // Worker processes that keep loaded modules (Playwright, the cores) from file to file: importing them
+          // again for each file cost seconds per file on a busy machine. The files share no global state but the
+          // run lock's mark, which setup.ts clears.
+          isolate: false,
           testTimeout: 120_000,
           hookTimeout: 180_000,
         },

@@ -74,7 +74,10 @@ export function runsAlone(): void {
   (globalThis as Record<symbol, boolean>)[ALONE] = true;
 }
 
-/** Whether this file called runsAlone() (read by setup.ts once the file is collected). */
-export function isAlone(): boolean {
-  return (globalThis as Record<symbol, boolean>)[ALONE] === true;
+/** Whether this file called runsAlone(), cleared for the next file a worker runs (setup.ts, once it is collected). */
+export function takeAloneMark(): boolean {
+  const g = globalThis as Record<symbol, boolean>;
+  const alone = g[ALONE] === true;
+  delete g[ALONE];
+  return alone;
 }
