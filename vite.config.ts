@@ -1,13 +1,36 @@
 // Build, dev server and test configuration for axband (one file: Vite serves the app, Vitest runs the tests).
 import { defineConfig } from "vitest/config";
 import react from "@vitejs/plugin-react";
+import { BaseSequencer, type TestSpecification } from "vitest/node";
 import { existsSync, readdirSync, readFileSync } from "node:fs";
+import { resolve } from "node:path";
 
 // Component tests that replace modules with vi.mock need modules of their own (found by reading the files, so a
 // new one is never run in the shared module cache by mistake).
 const MOCKING_UI_TESTS = (existsSync("tests/ui") ? readdirSync("tests/ui") : [])
   .filter((f) => f.endsWith(".test.tsx") && readFileSync(`tests/ui/${f}`, "utf8").includes("vi.mock("))
   .map((f) => `tests/ui/${f}`);
+
+// Browser test files that run with no other file beside them (they call runsAlone(), tests/browser/run-lock.ts).
+const ALONE_BROWSER_TESTS = new Set(
+  (existsSync("tests/browser") ? readdirSync("tests/browser") : [])
+    .filter((f) => f.endsWith(".test.ts") && readFileSync(`tests/browser/${f}`, "utf8").includes("\nrunsAlone();"))
+    .map((f) => resolve(`tests/browser/${f}`)),
+);
+
+/** Vitest's order (failed, then longest first), with the browser files that run alone first: run later, each would
+ *  leave the second worker idle until the other file then running ends, as well as while it runs. */
+class AloneFirstSequencer extends BaseSequencer {
+  override async sort(files: TestSpecification[]): Promise<TestSpecification[]> {
+    const sorted = await super.sort(files);
+    const alone = (f: TestSpecification) => ALONE_BROWSER_TESTS.has(resolve(f.moduleId));
+    // Moved to where the browser project's files begin (projects stay in Vitest's order).
+    const at = sorted.findIndex((f) => f.project.name === "browser");
+    if (at < 0) return sorted;
+    const rest = sorted.filter((f) => !alone(f));
+    return [...rest.slice(0, at), ...sorted.filter(alone), ...rest.slice(at)];
+  }
+}
 
 export default defineConfig({
   plugins: [react()],
@@ -20,6 +43,7 @@ export default defineConfig({
   test: {
     // Both cores (Vitest's default leaves one free: one worker on a 2-core machine).
     maxWorkers: 2,
+    sequence: { sequencer: AloneFirstSequencer },
     projects: [
       {
         extends: true,
@@ -77,7 +101,13 @@ export default defineConfig({
           environment: "node",
           include: ["tests/browser/**/*.test.ts"],
           globalSetup: ["tests/browser/global-setup.ts"],
-          fileParallelism: false,
+          // Two files at a time (the root's maxWorkers) on the one app and Chromium, each in its own browser
+          // contexts; the files that time the main thread run alone (runsAlone(), tests/browser/run-lock.ts).
+          setupFiles: ["tests/browser/setup.ts"],
+          // Worker processes that keep loaded modules (Playwright, the cores) from file to file: importing them
+          // again for each file cost seconds per file on a busy machine. The files share no global state but the
+          // run lock's mark, which setup.ts clears.
+          isolate: false,
           testTimeout: 120_000,
           hookTimeout: 180_000,
         },

@@ -16,49 +16,16 @@ const BURST = 8;
 
 /** Writes the autosave (project text in localStorage, curve chunks in IndexedDB) as the app stores it. */
 async function writeAutosave(page, baseUrl) {
-  const { emptyProject, newCurve, serializeForStorage } = await tsImport("../src/data/index.ts", import.meta.url);
-  const { CHUNK_POINTS, STORAGE_KEY, chunkKey } = await tsImport("../src/ui/store/autosave.ts", import.meta.url);
-  const project = emptyProject("Region zoom benchmark (invented)");
-  project.curves = [newCurve({ id: "bench-region", label: "Invented region", role: "region" })];
-  project.figure.legend = "top-right";
-  project.figure.massRangeEv = [1e-7, 1e-2];
-  project.figure.yRange = [1e-14, 1e-10];
-  const chunkKeys = Array.from({ length: Math.ceil(POINTS / CHUNK_POINTS) }, (_, k) => chunkKey("bench-region", k));
-  await page.goto(baseUrl + "demo.axband.json", { waitUntil: "load" });
-  await page.evaluate(
-    async ({ meta, key, points, chunk, chunkKeys }) => {
-      localStorage.setItem(key, meta);
-      const db = await new Promise((ok, fail) => {
-        const req = indexedDB.open("axband", 1);
-        req.onupgradeneeded = () => req.result.createObjectStore("curves");
-        req.onsuccess = () => ok(req.result);
-        req.onerror = () => fail(req.error);
-      });
-      const tx = db.transaction("curves", "readwrite");
-      const store = tx.objectStore("curves");
-      // Invented: a wobbly contour with a little noise on its radius, like the shared benchmark's regions.
-      for (let k = 0; k < chunkKeys.length; k++) {
-        const n = Math.min(chunk, points - k * chunk);
-        const massEv = new Float64Array(n);
-        const gInvGeV = new Float64Array(n);
-        for (let j = 0; j < n; j++) {
-          const i = k * chunk + j;
-          const a = (2 * Math.PI * i) / points;
-          const r = 1 + 0.05 * Math.sin(17 * a) + 0.01 * ((Math.sin(i * 12.9898) * 43758.5453) % 1);
-          massEv[j] = 10 ** (-4.5 + 1.2 * r * Math.cos(a));
-          gInvGeV[j] = 10 ** (-12 + 0.8 * r * Math.sin(a));
-        }
-        store.put({ massEv, gInvGeV }, chunkKeys[k]);
-      }
-      store.put({ v: 1, length: points, chunks: chunkKeys.length }, "bench-region");
-      await new Promise((ok, fail) => {
-        tx.oncomplete = ok;
-        tx.onerror = () => fail(tx.error);
-      });
-      db.close();
-    },
-    { meta: serializeForStorage(project).meta, key: STORAGE_KEY, points: POINTS, chunk: CHUNK_POINTS, chunkKeys },
-  );
+  const { seedStoredRegion } = await tsImport("../tests/browser/stored-region.ts", import.meta.url);
+  // Invented: a wobbly contour with a little noise on its radius, like the shared benchmark's regions.
+  await seedStoredRegion(page, baseUrl, {
+    curveId: "bench-region",
+    label: "Invented region",
+    projectName: "Region zoom benchmark (invented)",
+    contour: { points: POINTS, wobble: 0.05, wobbleTurns: 17, wobblePeriodPoints: Infinity, noise: 0.01 },
+    massRangeEv: [1e-7, 1e-2],
+    yRange: [1e-14, 1e-10],
+  });
 }
 
 /** One fresh page: restore, settle, one wheel step, then a burst; long tasks and times to the full thinning. */

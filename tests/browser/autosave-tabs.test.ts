@@ -6,6 +6,7 @@
 import { afterAll, beforeAll, describe, expect, inject, test } from "vitest";
 import type { Browser, BrowserContext, Page } from "playwright-core";
 import { launchChromium, watchPage, type Watched } from "./chromium";
+import { reusedContext } from "./fresh-context";
 
 let browser: Browser;
 beforeAll(async () => {
@@ -15,8 +16,12 @@ afterAll(async () => {
   await browser?.close();
 });
 
-async function openTab(context: BrowserContext): Promise<{ page: Page; watched: Watched }> {
+const contexts = reusedContext(() => browser, { viewport: { width: 1440, height: 900 } });
+
+/** A tab of the app in `context`; `init` runs before the page's scripts, on reloads too. */
+async function openTab(context: BrowserContext, init?: () => void): Promise<{ page: Page; watched: Watched }> {
   const page = await context.newPage();
+  if (init) await page.addInitScript(init);
   const watched = watchPage(page);
   await page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
   await page.locator('[data-testid="plot"] svg').waitFor();
@@ -57,7 +62,7 @@ const UPGRADE = "Demo network: upgrade reach (invented)";
 
 describe("two tabs", () => {
   test("a tab that hears of newer work stops saving and asks; closing it then leaves the other tab's work", async () => {
-    const context = await browser.newContext({ viewport: { width: 1440, height: 900 } });
+    const context = await contexts.fresh();
     const a = await openTab(context);
     const b = await openTab(context);
     await addModel(a.page, "11/7");
@@ -74,11 +79,10 @@ describe("two tabs", () => {
     expect(saved).toContain('"11/7"');
     expect(saved).not.toContain('"12/7"');
     expect([...a.watched.consoleErrors, ...b.watched.consoleErrors]).toEqual([]);
-    await context.close();
   });
 
   test("'Load it' takes the other tab's work and names the curve this tab loses; 'Keep mine and save' writes over it", async () => {
-    const context = await browser.newContext({ viewport: { width: 1440, height: 900 } });
+    const context = await contexts.fresh();
     const a = await openTab(context);
     const b = await openTab(context);
     await a.page.getByRole("button", { name: `Remove ${UPGRADE}`, exact: true }).click();
@@ -107,15 +111,14 @@ describe("two tabs", () => {
     // …and B hears of it.
     await expect.poll(() => conflictB.count()).toBe(1);
     expect([...a.watched.consoleErrors, ...b.watched.consoleErrors]).toEqual([]);
-    await context.close();
   });
 });
 
 describe("full storage", () => {
   test("with localStorage full, the last edit is kept in IndexedDB and comes back after a reload", async () => {
-    const context = await browser.newContext({ viewport: { width: 1440, height: 900 } });
+    const context = await contexts.fresh();
     // Once the page sets the flag, saving the project into localStorage throws as a full storage does.
-    await context.addInitScript(() => {
+    const { page, watched } = await openTab(context, () => {
       if (!sessionStorage.getItem("fill")) return;
       const setItem = Storage.prototype.setItem;
       Storage.prototype.setItem = function (this: Storage, key: string, value: string) {
@@ -124,7 +127,6 @@ describe("full storage", () => {
         setItem.call(this, key, value);
       };
     });
-    const { page, watched } = await openTab(context);
     await addModel(page, "1/7");
     await expect.poll(() => savedText(page)).toContain('"1/7"');
     await page.evaluate(() => sessionStorage.setItem("fill", "1"));
@@ -139,6 +141,5 @@ describe("full storage", () => {
     await expect.poll(() => legendTexts(page)).toContain("E/N = 2/7");
     expect(await legendTexts(page)).toContain("E/N = 1/7");
     expect(watched.consoleErrors).toEqual([]);
-    await context.close();
   });
 });

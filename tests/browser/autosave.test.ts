@@ -2,8 +2,9 @@
 // undo/redo by buttons and keys (not while typing), full storage gives one alert, links open over it.
 // Storage behaviour per the WHATWG HTML standard, §12 Web storage (setItem throws "QuotaExceededError").
 import { afterAll, beforeAll, describe, expect, inject, test } from "vitest";
-import type { Browser, BrowserContext, Page } from "playwright-core";
+import type { Browser, Page } from "playwright-core";
 import { launchChromium, watchPage, type Watched } from "./chromium";
+import { reusedContext } from "./fresh-context";
 import { defaultProject } from "../../src/project/demo";
 import { newModel } from "../../src/project/defaults";
 import { encodeLink } from "../../src/formats/codec";
@@ -19,14 +20,16 @@ afterAll(async () => {
   await browser?.close();
 });
 
-async function open(init?: () => void, hash = ""): Promise<{ context: BrowserContext; page: Page; watched: Watched }> {
-  const context = await browser.newContext({ viewport: { width: 1440, height: 900 } });
-  if (init) await context.addInitScript(init);
-  const page = await context.newPage();
+const contexts = reusedContext(() => browser, { viewport: { width: 1440, height: 900 } });
+
+/** The app in the file's context, emptied (no storage) for each test; `init` runs before the page's scripts. */
+async function open(init?: () => void, hash = ""): Promise<{ page: Page; watched: Watched }> {
+  const page = await (await contexts.fresh()).newPage();
+  if (init) await page.addInitScript(init);
   const watched = watchPage(page);
   await page.goto(inject("baseUrl") + hash, { waitUntil: "networkidle" });
   await page.locator('[data-testid="plot"] svg').waitFor();
-  return { context, page, watched };
+  return { page, watched };
 }
 
 const legendTexts = (page: Page) =>
@@ -63,7 +66,7 @@ async function addModel(page: Page, text: string) {
 
 describe("autosave", () => {
   test("a reload restores models, the zoomed view and the curves", async () => {
-    const { context, page, watched } = await open();
+    const { page, watched } = await open();
     await addModel(page, "5/3..44/3");
     await page.locator('[data-testid="plot"] svg').focus();
     await page.keyboard.press("+");
@@ -93,7 +96,6 @@ describe("autosave", () => {
     expect(await page.getByTestId("undo").isDisabled()).toBe(true);
     expect(await page.getByRole("alert").count()).toBe(0);
     expect(watched.consoleErrors).toEqual([]);
-    await context.close();
   });
 
   test("a curve bigger than one stored chunk (150,000 points) comes back after a reload, drawn the same", async () => {
@@ -107,7 +109,7 @@ describe("autosave", () => {
       );
     writeFileSync(file, rows.join("\n") + "\n");
     try {
-      const { context, page, watched } = await open();
+      const { page, watched } = await open();
       await page.setInputFiles('[data-testid="import-files"]', file);
       await page.click('[data-testid="import-confirm"]', { timeout: 60_000 });
       const entry = page.locator('[data-testid="legend"] [data-legend-entry="chunked (invented)"]');
@@ -130,14 +132,13 @@ describe("autosave", () => {
       ).toBe(before);
       expect(await page.getByRole("alert").count()).toBe(0);
       expect(watched.consoleErrors).toEqual([]);
-      await context.close();
     } finally {
       rmSync(dir, { recursive: true, force: true });
     }
   });
 
   test("full storage: one alert, and the app keeps working", async () => {
-    const { context, page, watched } = await open(() => {
+    const { page, watched } = await open(() => {
       const w = window as unknown as { __saveTries: number };
       w.__saveTries = 0;
       Storage.prototype.setItem = function () {
@@ -161,13 +162,12 @@ describe("autosave", () => {
     await page.getByRole("button", { name: "Dismiss message" }).click();
     expect(await alerts.count()).toBe(0);
     expect(watched.consoleErrors).toEqual([]);
-    await context.close();
   });
 });
 
 describe("undo and redo", () => {
   test("buttons and Ctrl+Z / Shift+Ctrl+Z / Ctrl+Y; keys inside a text field are left to the field", async () => {
-    const { context, page, watched } = await open();
+    const { page, watched } = await open();
     await addModel(page, "16/15");
     await expect.poll(() => legendTexts(page)).toContain("E/N = 16/15");
     await page.getByTestId("undo").click();
@@ -189,7 +189,6 @@ describe("undo and redo", () => {
     await input.press("Control+z");
     expect(await legendTexts(page)).toContain("E/N = 16/15");
     expect(watched.consoleErrors).toEqual([]);
-    await context.close();
   });
 });
 
@@ -201,23 +200,21 @@ describe("links at start", () => {
       newModel({ id: "from-link", eOverNMin: "44/3", label: "From the link, E/N = 44/3" }, project),
     ];
     const fragment = encodeLink(project, { includeCurves: false });
-    const { context, page, watched } = await open(undefined, `#${fragment}`);
+    const { page, watched } = await open(undefined, `#${fragment}`);
     await expect.poll(() => legendTexts(page)).toContain("From the link, E/N = 44/3");
     expect(await page.getByRole("status").first().textContent()).toMatch(/link/i);
     expect(new URL(page.url()).hash).toBe("");
     expect(await page.getByTestId("undo").isDisabled()).toBe(false);
     expect(watched.consoleErrors).toEqual([]);
-    await context.close();
   });
 
   test("a tampered link shows an alert and the previous project stays", async () => {
-    const { context, page, watched } = await open(undefined, "#v1.AAAA-this-is-not-a-project");
+    const { page, watched } = await open(undefined, "#v1.AAAA-this-is-not-a-project");
     const alert = page.getByRole("alert");
     await expect.poll(() => alert.count()).toBe(1);
     expect(await alert.textContent()).toMatch(/link/i);
     const texts = await legendTexts(page);
     expect(texts).toHaveLength(7); // the demo project
     expect(watched.consoleErrors).toEqual([]);
-    await context.close();
   });
 });

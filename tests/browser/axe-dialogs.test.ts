@@ -7,6 +7,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import type { Browser } from "playwright-core";
 import { launchChromium, watchPage } from "./chromium";
+import { reusedContext } from "./fresh-context";
 import { axeViolations } from "./axe";
 
 let browser: Browser;
@@ -20,12 +21,13 @@ afterAll(async () => {
   if (dir) rmSync(dir, { recursive: true, force: true });
 });
 
+const contexts = reusedContext(() => browser, { viewport: { width: 1400, height: 950 } });
+
 test("the import step with a file staged has no axe violations", async () => {
   const file = join(dir, "invented-scan.csv");
   // Invented: a few points in μeV with one unreadable row, so the card shows its warnings too.
   writeFileSync(file, "# invented for a test\nm_a [ueV],g [1/GeV]\n1.0,3e-14\n2.0,2.5e-14\nx,y\n3.0,2.7e-14\n");
-  const context = await browser.newContext({ viewport: { width: 1400, height: 950 } });
-  const page = await context.newPage();
+  const page = await (await contexts.fresh()).newPage();
   const watched = watchPage(page);
   await page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
   await page.setInputFiles('[data-testid="import-files"]', file);
@@ -33,12 +35,10 @@ test("the import step with a file staged has no axe violations", async () => {
   await page.locator('[data-testid="import-confirm"]').waitFor();
   expect(await axeViolations(page)).toEqual([]);
   expect(watched.consoleErrors).toEqual([]);
-  await context.close();
 });
 
 test("the anomaly calculator with a model built in it has no axe violations", async () => {
-  const context = await browser.newContext({ viewport: { width: 1400, height: 950 } });
-  const page = await context.newPage();
+  const page = await (await contexts.fresh()).newPage();
   const watched = watchPage(page);
   await page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
   await page.getByRole("button", { name: "Anomaly calculator…" }).click();
@@ -65,5 +65,4 @@ test("the anomaly calculator with a model built in it has no axe violations", as
   await expect.poll(() => dialog.getByTestId("solve-errors").textContent()).toContain("SU(3)_L: triality");
   expect(await axeViolations(page)).toEqual([]);
   expect(watched.consoleErrors).toEqual([]);
-  await context.close();
 });

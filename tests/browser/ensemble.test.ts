@@ -6,6 +6,10 @@ import type { Browser } from "playwright-core";
 import { launchChromium, watchPage } from "./chromium";
 import { TASK_MARGIN_MS } from "./settle";
 import { heavyQuarkEnsemble } from "../../src/physics";
+import { runsAlone } from "./run-lock";
+
+// Times the page's main-thread tasks: no other browser test file runs meanwhile.
+runsAlone();
 
 let browser: Browser;
 

@@ -1,6 +1,7 @@
 // Helpers for the export, share and overlap browser tests: catch a download the page starts and read it.
 import { buffer } from "node:stream/consumers";
-import type { Browser, BrowserContext, Page } from "playwright-core";
+import type { Page } from "playwright-core";
+import type { ReusedContext } from "./fresh-context";
 
 /** Runs `action`, waits for the download it starts, and returns the file's name and bytes. */
 export async function download(page: Page, action: () => Promise<unknown>): Promise<{ name: string; bytes: Buffer }> {
@@ -17,13 +18,12 @@ export async function exportSvg(page: Page): Promise<{ name: string; text: strin
   return { name, text: bytes.toString("utf8") };
 }
 
-/** A new context (downloads accepted, a desktop-sized window) with the app loaded. */
-export async function openFreshPage(
-  browser: Browser,
-  baseUrl: string,
-): Promise<{ page: Page; context: BrowserContext }> {
-  const context = await browser.newContext({ acceptDownloads: true, viewport: { width: 1400, height: 950 } });
-  const page = await context.newPage();
+/**
+ * The file's context emptied (every page closed, no storage: as a new context) with the app loaded in a new page.
+ * Make `contexts` with downloads accepted and a desktop-sized window.
+ */
+export async function openFreshPage(contexts: ReusedContext, baseUrl: string): Promise<Page> {
+  const page = await (await contexts.fresh()).newPage();
   await page.goto(baseUrl, { waitUntil: "networkidle" });
-  return { page, context };
+  return page;
 }

@@ -9,6 +9,7 @@ import { join } from "node:path";
 import { PDFDocument } from "pdf-lib";
 import type { Browser } from "playwright-core";
 import { launchChromium, watchPage } from "./chromium";
+import { reusedContext } from "./fresh-context";
 import { download, exportSvg, openFreshPage } from "./export-helpers";
 
 let browser: Browser;
@@ -22,35 +23,36 @@ afterAll(async () => {
   rmSync(dir, { recursive: true, force: true });
 });
 
-const freshPage = () => openFreshPage(browser, inject("baseUrl"));
+const contexts = reusedContext(() => browser, { acceptDownloads: true, viewport: { width: 1400, height: 950 } });
+/** The app in a new page of the file's context, emptied first: the pages before it close. */
+const freshPage = () => openFreshPage(contexts, inject("baseUrl"));
 
 test("the PDF download is one page and reopens the project", async () => {
   const a = await freshPage();
-  const watched = watchPage(a.page);
-  await a.page.fill('[data-testid="model-eovern"]', "-4/3");
-  await a.page.click('[data-testid="add-model"]');
-  await a.page.click('[data-testid="project-menu"]');
-  await a.page.fill('[aria-label="Project name"]', "PDF round trip (invented)");
-  await a.page.keyboard.press("Escape");
-  const svgA = await exportSvg(a.page);
+  const watched = watchPage(a);
+  await a.fill('[data-testid="model-eovern"]', "-4/3");
+  await a.click('[data-testid="add-model"]');
+  await a.click('[data-testid="project-menu"]');
+  await a.fill('[aria-label="Project name"]', "PDF round trip (invented)");
+  await a.keyboard.press("Escape");
+  const svgA = await exportSvg(a);
 
-  await a.page.click('[data-testid="export-menu"]');
-  const pdf = await download(a.page, () => a.page.click('[data-testid="export-pdf"]'));
+  await a.click('[data-testid="export-menu"]');
+  const pdf = await download(a, () => a.click('[data-testid="export-pdf"]'));
   expect(pdf.name).toBe("PDF round trip (invented).pdf");
   expect(pdf.bytes.subarray(0, 5).toString("latin1")).toBe("%PDF-");
   const doc = await PDFDocument.load(new Uint8Array(pdf.bytes), { updateMetadata: false });
   expect(doc.getPageCount()).toBe(1);
   expect(doc.getCreator()).toMatch(/^axband \d+\.\d+\.\d+/);
-  await a.page.waitForSelector('[role="status"]:has-text("Saved PDF round trip (invented).pdf")');
+  await a.waitForSelector('[role="status"]:has-text("Saved PDF round trip (invented).pdf")');
 
   const b = await freshPage();
   const file = join(dir, pdf.name);
   writeFileSync(file, pdf.bytes);
-  await b.page.click('[data-testid="project-menu"]');
-  await b.page.setInputFiles('[data-testid="open-project"]', file);
-  await b.page.waitForSelector('[role="status"]:has-text("Opened the project attached to")');
-  await b.page.keyboard.press("Escape");
-  expect((await exportSvg(b.page)).text).toBe(svgA.text);
+  await b.click('[data-testid="project-menu"]');
+  await b.setInputFiles('[data-testid="open-project"]', file);
+  await b.waitForSelector('[role="status"]:has-text("Opened the project attached to")');
+  await b.keyboard.press("Escape");
+  expect((await exportSvg(b)).text).toBe(svgA.text);
   expect(watched.consoleErrors).toEqual([]);
-  await Promise.all([a.context.close(), b.context.close()]);
 });

@@ -10,6 +10,7 @@ import { join } from "node:path";
 import { DOMParser } from "@xmldom/xmldom";
 import type { Browser } from "playwright-core";
 import { launchChromium, watchPage } from "./chromium";
+import { reusedContext } from "./fresh-context";
 import { download, exportSvg } from "./export-helpers";
 import { readPngDpi, readPngSize } from "../../src/formats/png-meta";
 
@@ -27,6 +28,8 @@ afterAll(async () => {
   await browser?.close();
   rmSync(dir, { recursive: true, force: true });
 });
+
+const contexts = reusedContext(() => browser, { acceptDownloads: true, viewport: { width: 1400, height: 950 } });
 
 interface XmlEl {
   nodeType: number;
@@ -54,8 +57,7 @@ function attrs(el: XmlEl): { name: string; value: string }[] {
 }
 
 test("the SVG download is self-contained, valid XML at a physical size, and labels stay inert", async () => {
-  const context = await browser.newContext({ acceptDownloads: true, viewport: { width: 1400, height: 950 } });
-  const page = await context.newPage();
+  const page = await (await contexts.fresh()).newPage();
   const watched = watchPage(page);
   const dialogs: string[] = [];
   page.on("dialog", (d) => {
@@ -135,12 +137,10 @@ test("the SVG download is self-contained, valid XML at a physical size, and labe
   expect(text).not.toMatch(/<script/i);
   expect(watched.consoleErrors).toEqual([]);
   expect(watched.foreignRequests).toEqual([]);
-  await context.close();
 });
 
 test("PNG at 300 dpi for the single-column preset has the pixel size and dpi of 8.6 cm at 300 dpi", async () => {
-  const context = await browser.newContext({ acceptDownloads: true, viewport: { width: 1400, height: 950 } });
-  const page = await context.newPage();
+  const page = await (await contexts.fresh()).newPage();
   const watched = watchPage(page);
   await page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
   await page.click('[data-testid="export-menu"]');
@@ -162,5 +162,4 @@ test("PNG at 300 dpi for the single-column preset has the pixel size and dpi of 
   const svg = await exportSvg(page);
   expect(svg.text).toMatch(/<svg[^>]*\swidth="8\.6cm"/);
   expect(watched.consoleErrors).toEqual([]);
-  await context.close();
 });

@@ -3,8 +3,9 @@
 // g_aγγ = α/(2π f_a)·|E/N − c_γ| with c_γ = 1.92 (Grilli di Cortona et al., JHEP 01 (2016) 034) and
 // m_a·f_a = 5.691 μeV·10¹² GeV (Gorghetto & Villadoro, JHEP 03 (2019) 033), computed by src/physics.
 import { afterAll, beforeAll, describe, expect, inject, test } from "vitest";
-import type { Browser, BrowserContext, Page } from "playwright-core";
+import type { Browser, Page } from "playwright-core";
 import { launchChromium, watchPage, type Watched } from "./chromium";
+import { reusedContext } from "./fresh-context";
 import { gAgg } from "../../src/physics/coupling";
 import { rationalToNumber } from "../../src/physics/eovern-parse";
 
@@ -17,19 +18,20 @@ afterAll(async () => {
 });
 
 interface Opened {
-  context: BrowserContext;
   page: Page;
   watched: Watched;
 }
 
-/** A fresh context (empty storage), so each test starts from the demo project. */
+const contexts = reusedContext(() => browser, { viewport: { width: 1440, height: 900 }, deviceScaleFactor: 1 });
+
+/** The file's context emptied (no storage), so each test starts from the demo project. */
 async function open(): Promise<Opened> {
-  const context = await browser.newContext({ viewport: { width: 1440, height: 900 }, deviceScaleFactor: 1 });
+  const context = await contexts.fresh();
   const page = await context.newPage();
   const watched = watchPage(page);
   await page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
   await page.locator('[data-testid="plot"] svg').waitFor();
-  return { context, page, watched };
+  return { page, watched };
 }
 
 interface Frame {
@@ -63,7 +65,7 @@ async function tickLabels(page: Page): Promise<string[]> {
 
 describe("the demo figure", () => {
   test("renders its legend entries, curves and model paths with no console errors", async () => {
-    const { context, page, watched } = await open();
+    const { page, watched } = await open();
     const entries = page.locator('[data-testid="plot"] [data-testid="legend"] [data-legend-entry]');
     // The demo project: three models and four invented curves, all visible.
     expect(await entries.count()).toBe(7);
@@ -80,11 +82,10 @@ describe("the demo figure", () => {
     await page.screenshot({ path: "/tmp/axband-demo.png" });
     expect(watched.consoleErrors).toEqual([]);
     expect(watched.foreignRequests).toEqual([]);
-    await context.close();
   });
 
   test('adding "8/3" adds a legend entry and a line whose pixels sit where g_aγγ says (within 0.5 px)', async () => {
-    const { context, page, watched } = await open();
+    const { page, watched } = await open();
     const legend = page.locator('[data-testid="legend"] [data-legend-entry]');
     const before = await legend.count();
     await page.getByTestId("model-eovern").fill("8/3");
@@ -114,13 +115,12 @@ describe("the demo figure", () => {
     expect(checked).toBe(pts.length);
     await page.screenshot({ path: "/tmp/axband-added-8-3.png" });
     expect(watched.consoleErrors).toEqual([]);
-    await context.close();
   });
 });
 
 describe("the heavy-quark window (Di Luzio, Mescia, Nardi, PRL 118 (2017) 031801)", () => {
   test("has a lower edge above the plot bottom, on the E/N = 5/3 line (within 0.5 px)", async () => {
-    const { context, page, watched } = await open();
+    const { page, watched } = await open();
     const band = page.locator('[data-testid="plot"] path[data-model-kind="between"]');
     expect(await band.count()).toBe(1);
     expect(await band.getAttribute("data-cancels")).toBe("false");
@@ -137,13 +137,12 @@ describe("the heavy-quark window (Di Luzio, Mescia, Nardi, PRL 118 (2017) 031801
     const yLine = bottom - ((Math.log10(g) - ly0) / (ly1 - ly0)) * f.box.h;
     expect(Math.abs(yLow - yLine)).toBeLessThan(0.5);
     expect(watched.consoleErrors).toEqual([]);
-    await context.close();
   });
 });
 
 describe("zoom and pan", () => {
   test("the wheel zooms about the cursor and changes the tick labels", async () => {
-    const { context, page, watched } = await open();
+    const { page, watched } = await open();
     const before = await tickLabels(page);
     const f0 = await frameOf(page);
     const svgBox = (await page.locator('[data-testid="plot"] svg').boundingBox())!;
@@ -174,11 +173,10 @@ describe("zoom and pan", () => {
     await page.getByTestId("undo").click();
     expect((await frameOf(page)).mass).toEqual(f0.mass);
     expect(watched.consoleErrors).toEqual([]);
-    await context.close();
   });
 
   test("keyboard: + zooms in by 1.25 about the centre, arrows pan, 0 resets to the default view", async () => {
-    const { context, page, watched } = await open();
+    const { page, watched } = await open();
     const f0 = await frameOf(page);
     const svg = page.locator('[data-testid="plot"] svg');
     await svg.focus();
@@ -197,11 +195,10 @@ describe("zoom and pan", () => {
     await expect.poll(async () => (await frameOf(page)).mass).toEqual(f0.mass);
     expect((await frameOf(page)).y).toEqual(f0.y);
     expect(watched.consoleErrors).toEqual([]);
-    await context.close();
   });
 
   test("dragging pans by the dragged distance; double-click resets", async () => {
-    const { context, page, watched } = await open();
+    const { page, watched } = await open();
     const f0 = await frameOf(page);
     const svgBox = (await page.locator('[data-testid="plot"] svg').boundingBox())!;
     const scale = svgBox.width / 960; // slide preset: 960 scene px wide
@@ -221,11 +218,10 @@ describe("zoom and pan", () => {
     await page.mouse.dblclick(x, y);
     await expect.poll(async () => (await frameOf(page)).mass).toEqual(f0.mass);
     expect(watched.consoleErrors).toEqual([]);
-    await context.close();
   });
 
   test("hovering a point shows m_a, g_aγγ, f_a, frequency and E/N there", async () => {
-    const { context, page, watched } = await open();
+    const { page, watched } = await open();
     const f = await frameOf(page);
     const svgBox = (await page.locator('[data-testid="plot"] svg').boundingBox())!;
     const scale = svgBox.width / 960;
@@ -245,6 +241,5 @@ describe("zoom and pan", () => {
     expect(await page.getByTestId("hover-freq").textContent()).toMatch(/Hz/);
     expect(await page.getByTestId("hover-eovern").textContent()).toMatch(/or/);
     expect(watched.consoleErrors).toEqual([]);
-    await context.close();
   });
 });

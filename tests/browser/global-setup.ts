@@ -1,17 +1,20 @@
-// Builds the app once and serves it in-process on 127.0.0.1 for the browser tests (no orphan servers), and starts
-// the one headless Chromium all test files connect to.
+// Builds the app once and serves it in-process on 127.0.0.1 for the browser tests (no orphan servers), starts the
+// one headless Chromium all test files connect to, and serves the run lock that lets files run two at a time.
 import type { TestProject } from "vitest/node";
 import { build, preview, type PreviewServer } from "vite";
 import type { BrowserServer } from "playwright-core";
 import { startChromiumServer } from "./chromium";
+import { startRunLock } from "./run-lock";
 
 let server: PreviewServer | undefined;
 let chromiumServer: BrowserServer | undefined;
+let runLock: Awaited<ReturnType<typeof startRunLock>> | undefined;
 
 declare module "vitest" {
   export interface ProvidedContext {
     baseUrl: string;
     chromiumWs: string;
+    runLockUrl: string;
   }
 }
 
@@ -21,6 +24,7 @@ export default async function setup(project: TestProject): Promise<() => Promise
   const teardown = async () => {
     await (chromiumServer ?? (await chromiumStarting.catch(() => undefined)))?.close();
     await new Promise<void>((resolve) => (server ? server.httpServer.close(() => resolve()) : resolve()));
+    await runLock?.close();
   };
   try {
     if (!process.env.AXBAND_SKIP_BUILD) await buildApp();
@@ -30,6 +34,8 @@ export default async function setup(project: TestProject): Promise<() => Promise
     project.provide("baseUrl", `http://127.0.0.1:${port}/`);
     chromiumServer = await chromiumStarting;
     project.provide("chromiumWs", chromiumServer.wsEndpoint());
+    runLock = await startRunLock();
+    project.provide("runLockUrl", runLock.url);
   } catch (e) {
     await teardown();
     throw e;

@@ -10,6 +10,10 @@ import { join } from "node:path";
 import type { Browser } from "playwright-core";
 import { launchChromium, watchPage } from "./chromium";
 import { TASK_MARGIN_MS, waitForQuiet, waitForSavedCurve } from "./settle";
+import { runsAlone } from "./run-lock";
+
+// Times the page's main-thread tasks: no other browser test file runs meanwhile.
+runsAlone();
 
 const ROWS = 1_000_000;
 let browser: Browser;

@@ -3,6 +3,7 @@
 import { afterAll, beforeAll, expect, inject, test } from "vitest";
 import type { Browser } from "playwright-core";
 import { launchChromium, watchPage } from "./chromium";
+import { reusedContext } from "./fresh-context";
 
 let browser: Browser;
 beforeAll(async () => {
@@ -11,6 +12,8 @@ beforeAll(async () => {
 afterAll(async () => {
   await browser?.close();
 });
+
+const contexts = reusedContext(() => browser, {});
 
 type Box = { x: number; y: number; width: number; height: number };
 const overlaps = (a: Box, b: Box) =>
@@ -21,8 +24,8 @@ test.each([
   [1280, 720],
   [1024, 768],
 ])("at %i × %i px an alert leaves the figure's title uncovered", async (width, height) => {
-  const context = await browser.newContext({ viewport: { width, height } });
-  const page = await context.newPage();
+  const page = await (await contexts.fresh()).newPage();
+  await page.setViewportSize({ width, height });
   const watched = watchPage(page);
   await page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
   await page.locator('[data-testid="plot"] svg').waitFor();
@@ -42,5 +45,4 @@ test.each([
   expect(titleBox && alertBox).toBeTruthy();
   expect(overlaps(titleBox!, alertBox!), JSON.stringify({ titleBox, alertBox })).toBe(false);
   expect(watched.consoleErrors).toEqual([]);
-  await context.close();
 });

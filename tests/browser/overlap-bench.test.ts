@@ -14,6 +14,10 @@ import type { Browser, Page } from "playwright-core";
 import { gAgg } from "../../src/physics";
 import { launchChromium, watchPage } from "./chromium";
 import { TASK_MARGIN_MS, waitForQuiet } from "./settle";
+import { runsAlone } from "./run-lock";
+
+// Times the page's main-thread tasks: no other browser test file runs meanwhile.
+runsAlone();
 
 const BENCH_POINTS = Number(process.env.AXBAND_OVERLAP_POINTS ?? 20_000);
 const DIPS = 3_000;

@@ -7,6 +7,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import type { Browser } from "playwright-core";
 import { launchChromium, watchPage } from "./chromium";
+import { reusedContext } from "./fresh-context";
 import { download, exportSvg, openFreshPage } from "./export-helpers";
 
 let browser: Browser;
@@ -20,33 +21,35 @@ afterAll(async () => {
   rmSync(dir, { recursive: true, force: true });
 });
 
-const freshPage = () => openFreshPage(browser, inject("baseUrl"));
+const contexts = reusedContext(() => browser, { acceptDownloads: true, viewport: { width: 1400, height: 950 } });
+/** The app in a new page of the file's context, emptied first: the pages before it close. */
+const freshPage = () => openFreshPage(contexts, inject("baseUrl"));
 
 test("a saved project file and a dropped SVG both reopen the same figure", async () => {
   const a = await freshPage();
-  const watched = watchPage(a.page);
-  await a.page.fill('[data-testid="model-eovern"]', "-4/3");
-  await a.page.click('[data-testid="add-model"]');
-  await a.page.click('[data-testid="project-menu"]');
-  await a.page.fill('[aria-label="Project name"]', "Round trip (invented)");
-  const saved = await download(a.page, () => a.page.click('[data-testid="save-project"]'));
+  const watched = watchPage(a);
+  await a.fill('[data-testid="model-eovern"]', "-4/3");
+  await a.click('[data-testid="add-model"]');
+  await a.click('[data-testid="project-menu"]');
+  await a.fill('[aria-label="Project name"]', "Round trip (invented)");
+  const saved = await download(a, () => a.click('[data-testid="save-project"]'));
   expect(saved.name).toBe("Round trip (invented).axband.json");
-  await a.page.keyboard.press("Escape");
-  const svgA = await exportSvg(a.page);
+  await a.keyboard.press("Escape");
+  const svgA = await exportSvg(a);
 
   // Open the project file in a fresh context (its own storage: nothing to restore from).
   const b = await freshPage();
   const file = join(dir, saved.name);
   writeFileSync(file, saved.bytes);
-  await b.page.click('[data-testid="project-menu"]');
-  await b.page.setInputFiles('[data-testid="open-project"]', file);
-  await b.page.waitForSelector('[role="status"]:has-text("Opened")');
-  expect((await exportSvg(b.page)).text).toBe(svgA.text);
+  await b.click('[data-testid="project-menu"]');
+  await b.setInputFiles('[data-testid="open-project"]', file);
+  await b.waitForSelector('[role="status"]:has-text("Opened")');
+  expect((await exportSvg(b)).text).toBe(svgA.text);
 
   // Drop the exported SVG on a third page, once the import step (which listens for drops) is in it.
   const c = await freshPage();
-  await c.page.locator('[data-testid="import-files"]').waitFor({ state: "attached" });
-  await c.page.evaluate(
+  await c.locator('[data-testid="import-files"]').waitFor({ state: "attached" });
+  await c.evaluate(
     ({ text, name }) => {
       const dt = new DataTransfer();
       dt.items.add(new File([text], name, { type: "image/svg+xml" }));
@@ -56,8 +59,7 @@ test("a saved project file and a dropped SVG both reopen the same figure", async
     },
     { text: svgA.text, name: svgA.name },
   );
-  await c.page.waitForSelector('[role="status"]:has-text("Opened the project embedded in")');
-  expect((await exportSvg(c.page)).text).toBe(svgA.text);
+  await c.waitForSelector('[role="status"]:has-text("Opened the project embedded in")');
+  expect((await exportSvg(c)).text).toBe(svgA.text);
   expect(watched.consoleErrors).toEqual([]);
-  await Promise.all([a.context.close(), b.context.close(), c.context.close()]);
 });

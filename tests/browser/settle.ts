@@ -51,6 +51,7 @@ export async function waitForQuiet(page: Page, quietMs = 500, timeout = 30_000):
  * tasks over 50 ms, https://w3c.github.io/longtasks/), measured by the benchmarks (`npm run bench`); a test
  * allows five times that, a margin for a busy machine (tasks of 560–680 ms were seen at a load of 20 on two
  * cores) that still catches work moved back onto the main thread (preparing a million-point region there took
- * 1.1–1.4 s on an idle machine, parsing a million rows seconds).
+ * 1.1–1.4 s on an idle machine, parsing a million rows seconds). A file that checks it calls runsAlone()
+ * (run-lock.ts): another test file's page beside it would stretch its tasks.
  */
 export const TASK_MARGIN_MS = 1000;

@@ -5,6 +5,7 @@
 import { afterAll, beforeAll, expect, inject, test } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { launchChromium, watchPage } from "./chromium";
+import { reusedContext } from "./fresh-context";
 import { exportSvg } from "./export-helpers";
 
 let browser: Browser;
@@ -15,10 +16,13 @@ afterAll(async () => {
   await browser?.close();
 });
 
-async function freshPage(): Promise<{ page: Page; close: () => Promise<void> }> {
-  const context = await browser.newContext({ acceptDownloads: true, viewport: { width: 1400, height: 950 } });
+const contexts = reusedContext(() => browser, { acceptDownloads: true, viewport: { width: 1400, height: 950 } });
+
+/** A new page in the file's context, emptied first (the pages before it close: as a fresh context). */
+async function freshPage(): Promise<{ page: Page }> {
+  const context = await contexts.fresh();
   await context.grantPermissions(["clipboard-read", "clipboard-write"], { origin: new URL(inject("baseUrl")).origin });
-  return { page: await context.newPage(), close: () => context.close() };
+  return { page: await context.newPage() };
 }
 
 test("a copied link reopens the same figure in a fresh context; a tampered link is refused", async () => {
@@ -68,5 +72,4 @@ test("a copied link reopens the same figure in a fresh context; a tampered link 
 
   expect(watchedA.consoleErrors).toEqual([]);
   expect(watchedB.consoleErrors).toEqual([]);
-  await Promise.all([a.close(), b.close(), c.close()]);
 });

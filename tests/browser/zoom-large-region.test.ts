@@ -6,8 +6,11 @@
 import { afterAll, beforeAll, expect, inject, test } from "vitest";
 import type { Browser } from "playwright-core";
 import { launchChromium, watchPage } from "./chromium";
-import { emptyProject, newCurve, serializeForStorage } from "../../src/data";
-import { CHUNK_POINTS, STORAGE_KEY, chunkKey } from "../../src/ui/store/autosave";
+import { seedStoredRegion } from "./stored-region";
+import { runsAlone } from "./run-lock";
+
+// Times the page's main-thread tasks: no other browser test file runs meanwhile.
+runsAlone();
 
 const POINTS = 500_000;
 const CURVE_ID = "zoomed-region";
@@ -24,51 +27,16 @@ afterAll(async () => {
 test("zooming a big file-order region thins new levels in the worker and ends on the full thinning", async () => {
   const context = await browser.newContext({ viewport: { width: 1400, height: 950 } });
   const page = await context.newPage();
-  const project = emptyProject("Zoomed region (invented)");
-  project.curves = [newCurve({ id: CURVE_ID, label: LABEL, role: "region" })];
-  project.figure.legend = "top-right";
-  project.figure.massRangeEv = [1e-7, 1e-2];
-  project.figure.yRange = [1e-14, 1e-10];
-  const meta = serializeForStorage(project).meta;
-  // The autosave as the app stores it, written from a same-origin page that does not run the app.
-  await page.goto(inject("baseUrl") + "demo.axband.json", { waitUntil: "load" });
-  const chunkKeys = Array.from({ length: Math.ceil(POINTS / CHUNK_POINTS) }, (_, k) => chunkKey(CURVE_ID, k));
-  await page.evaluate(
-    async ({ meta, key, id, points, chunk, chunkKeys }) => {
-      localStorage.setItem(key, meta);
-      const db = await new Promise<IDBDatabase>((resolve, reject) => {
-        const req = indexedDB.open("axband", 1);
-        req.onupgradeneeded = () => req.result.createObjectStore("curves");
-        req.onsuccess = () => resolve(req.result);
-        req.onerror = () => reject(req.error);
-      });
-      const tx = db.transaction("curves", "readwrite");
-      const store = tx.objectStore("curves");
-      // Invented data: a wobbly contour about m = 3×10⁻⁵ eV, g = 10⁻¹² GeV⁻¹ with a little noise on the radius
-      // (a fixed hash, not Math.random), so run thinning beats Douglas–Peucker once zoomed in.
-      for (let k = 0; k < chunkKeys.length; k++) {
-        const n = Math.min(chunk, points - k * chunk);
-        const massEv = new Float64Array(n);
-        const gInvGeV = new Float64Array(n);
-        for (let j = 0; j < n; j++) {
-          const i = k * chunk + j;
-          const a = (2 * Math.PI * i) / points;
-          const noise = (Math.sin(i * 12.9898) * 43758.5453) % 1;
-          const r = 1 + 0.05 * Math.sin(17 * a) + 0.01 * noise;
-          massEv[j] = 10 ** (-4.5 + 1.2 * r * Math.cos(a));
-          gInvGeV[j] = 10 ** (-12 + 0.8 * r * Math.sin(a));
-        }
-        store.put({ massEv, gInvGeV }, chunkKeys[k]);
-      }
-      store.put({ v: 1, length: points, chunks: chunkKeys.length }, id);
-      await new Promise<void>((resolve, reject) => {
-        tx.oncomplete = () => resolve();
-        tx.onerror = () => reject(tx.error);
-      });
-      db.close();
-    },
-    { meta, key: STORAGE_KEY, id: CURVE_ID, points: POINTS, chunk: CHUNK_POINTS, chunkKeys },
-  );
+  // The autosave as the app stores it. Invented data: a wobbly contour with a little noise on the radius, so run
+  // thinning beats Douglas–Peucker once zoomed in.
+  await seedStoredRegion(page, inject("baseUrl"), {
+    curveId: CURVE_ID,
+    label: LABEL,
+    projectName: "Zoomed region (invented)",
+    contour: { points: POINTS, wobble: 0.05, wobbleTurns: 17, wobblePeriodPoints: Infinity, noise: 0.01 },
+    massRangeEv: [1e-7, 1e-2],
+    yRange: [1e-14, 1e-10],
+  });
 
   const watched = watchPage(page);
   await page.addInitScript(() => {
