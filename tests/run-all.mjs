@@ -1,6 +1,6 @@
 // `npm test`: typecheck, lint, format check, knip and the Vitest projects; ends with the plain summary line
 // "N passed, N failed" that CI reads. Exit code 0 only when everything passed. Two lanes run side by side: the
-// browser tests, and the static checks followed by the unit and component tests. A static check whose inputs (every
+// browser tests, and the static checks followed by the unit and component tests (order below). A static check whose inputs (every
 // file git lists, tracked or not ignored, and the installed lock file) are those of its last passing run is not run
 // again (node_modules/.cache/axband-checks; a fresh clone has none, so CI runs them all; AXBAND_NO_CHECK_CACHE=1 runs them).
 import { spawn, spawnSync } from "node:child_process";
@@ -105,13 +105,14 @@ async function runCheck([label, cmd, args], hash) {
 }
 
 /** Runs Vitest projects with a JSON report and counts their tests. */
-async function runVitest(projects) {
-  const name = projects.join("+");
+async function runVitest(projects, files = [], part = "") {
+  const name = projects.join("+") + part;
   const report = `tests/.artifacts/vitest-${name}.json`;
   rmSync(report, { force: true });
   const args = [
     "run",
     ...projects.flatMap((p) => ["--project", p]),
+    ...files,
     "--reporter=default",
     "--reporter=json",
     `--outputFile.json=${report}`,
@@ -135,12 +136,25 @@ const count = ({ passed: p, failed: f }) => {
   passed += p;
   failed += f;
 };
-// Two lanes side by side on the two cores: the browser tests (their files wait on the page a good part of the
-// time) beside the static checks and then the unit and component tests. Each lane's steps print when they end.
+// Two lanes side by side on the two cores. The browser files that time the page's main thread (they call
+// runsAlone()) go first, beside the static checks only (one process at a time), so that their margins are not spent
+// on hundreds of unit tests; then the other browser files (two at a time) beside the unit and component tests.
+const browserFiles = readdirSync("tests/browser")
+  .filter((f) => f.endsWith(".test.ts"))
+  .map((f) => `tests/browser/${f}`);
+const aloneFiles = browserFiles.filter((f) => readFileSync(f, "utf8").includes("\nrunsAlone();"));
+const sharedFiles = browserFiles.filter((f) => !aloneFiles.includes(f));
+let timedDone;
+const timed = new Promise((resolve) => (timedDone = resolve));
 await Promise.all([
-  (async () => count(await runVitest(["browser"])))(),
+  (async () => {
+    if (aloneFiles.length) count(await runVitest(["browser"], aloneFiles, "-timed"));
+    timedDone();
+    if (sharedFiles.length) count(await runVitest(["browser"], sharedFiles));
+  })(),
   (async () => {
     for (const c of CHECKS) count((await runCheck(c, hash)) ? { passed: 1, failed: 0 } : { passed: 0, failed: 1 });
+    await timed;
     count(await runVitest(["unit", "ui", "ui-mocking"]));
   })(),
 ]);
