@@ -3,17 +3,10 @@
 import { describe, expect, test } from "vitest";
 import { prepareCurve } from "../../src/analysis/prepared-curve";
 import { stableOrder } from "../../src/analysis/stable-order";
+import { mulberry32 } from "../../src/project/demo";
 
-function rng(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+/** Deterministic random numbers (the demo's mulberry32), so a failure reproduces. */
+const rng = mulberry32;
 
 const byComparator = (keys: Float64Array) =>
   Array.from({ length: keys.length }, (_, i) => i).sort((a, b) => keys[a] - keys[b] || a - b);

@@ -4,18 +4,10 @@
 // implementation on random inputs is common practice).
 import { describe, expect, test } from "vitest";
 import { createCurveParser, parseCurveBytes, parseCurveText, type CurveParseOptions } from "../../../src/formats/csv";
+import { mulberry32 } from "../../../src/project/demo";
 
-/** Deterministic random numbers (mulberry32), so a failure reproduces. */
-function rng(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+/** Deterministic random numbers (the demo's mulberry32), so a failure reproduces. */
+const rng = mulberry32;
 
 const pick = <T>(r: () => number, xs: readonly T[]): T => xs[Math.floor(r() * xs.length)];
 const digits = (r: () => number, n: number) => Array.from({ length: n }, () => Math.floor(r() * 10)).join("");
