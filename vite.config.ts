@@ -2,21 +2,13 @@
 import { defineConfig } from "vitest/config";
 import react from "@vitejs/plugin-react";
 import { BaseSequencer, type TestSpecification } from "vitest/node";
-import { existsSync, readdirSync, readFileSync } from "node:fs";
+import { aloneBrowserTests, mockingUiTests } from "./tests/test-files.mjs";
 import { resolve } from "node:path";
 
-// Component tests that replace modules with vi.mock need modules of their own (found by reading the files, so a
-// new one is never run in the shared module cache by mistake).
-const MOCKING_UI_TESTS = (existsSync("tests/ui") ? readdirSync("tests/ui") : [])
-  .filter((f) => f.endsWith(".test.tsx") && readFileSync(`tests/ui/${f}`, "utf8").includes("vi.mock("))
-  .map((f) => `tests/ui/${f}`);
-
-// Browser test files that run with no other file beside them (they call runsAlone(), tests/browser/run-lock.ts).
-const ALONE_BROWSER_TESTS = new Set(
-  (existsSync("tests/browser") ? readdirSync("tests/browser") : [])
-    .filter((f) => f.endsWith(".test.ts") && readFileSync(`tests/browser/${f}`, "utf8").includes("\nrunsAlone();"))
-    .map((f) => resolve(`tests/browser/${f}`)),
-);
+// Component tests that replace modules with vi.mock, and browser files that run with no other file beside them,
+// found by reading the files (tests/test-files.mjs; tests/run-all.mjs picks the same).
+const MOCKING_UI_TESTS = mockingUiTests();
+const ALONE_BROWSER_TESTS = new Set(aloneBrowserTests().map((f) => resolve(f)));
 
 /** Vitest's order (failed, then longest first), with the browser files that run alone first: run later, each would
  *  leave the second worker idle until the other file then running ends, as well as while it runs. */

@@ -7,6 +7,7 @@ import { spawn, spawnSync } from "node:child_process";
 import { createHash } from "node:crypto";
 import { mkdirSync, readFileSync, readdirSync, rmSync, existsSync, writeFileSync, statSync } from "node:fs";
 import { join } from "node:path";
+import { aloneBrowserTests } from "./test-files.mjs";
 
 const bin = (name) => `node_modules/.bin/${name}`;
 const CACHE = "node_modules/.cache/axband-checks";
@@ -142,7 +143,7 @@ const count = ({ passed: p, failed: f }) => {
 const browserFiles = readdirSync("tests/browser")
   .filter((f) => f.endsWith(".test.ts"))
   .map((f) => `tests/browser/${f}`);
-const aloneFiles = browserFiles.filter((f) => readFileSync(f, "utf8").includes("\nrunsAlone();"));
+const aloneFiles = aloneBrowserTests();
 const sharedFiles = browserFiles.filter((f) => !aloneFiles.includes(f));
 const check = async (c) => count((await runCheck(c, hash)) ? { passed: 1, failed: 0 } : { passed: 0, failed: 1 });
 let timedDone;
