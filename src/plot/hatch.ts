@@ -1,6 +1,6 @@
 // Hatches on the excluded side of an exclusion edge: short strokes spaced evenly along the edge's path length
 // in scene px, computed from the thinned and clipped pixels, so the screen and every export draw the same marks.
-import { r2 } from "./format";
+import { compactPolygons } from "./path-writer";
 
 /** Size of the hatches of one figure, in scene px. */
 export interface HatchStyle {
@@ -146,7 +146,9 @@ interface HatchPass {
   t0y: number;
   t1x: number;
   t1y: number;
-  parts: string[];
+  /** Both ends of every hatch (x, y, x, y…), and where each hatch ends in that list (in points). */
+  xy: number[];
+  ends: number[];
 }
 
 /** Length of the coarse path's chords that come near the plot. */
@@ -175,7 +177,7 @@ function hatchPass(side: 1 | -1, plot: PlotBox, style: HatchStyle, lineWidthPx: 
   const a = (style.angleDeg * Math.PI) / 180;
   const [cosA, sinA] = [Math.cos(a), Math.sin(a)];
   const len = style.lengthPx + lineWidthPx / 2;
-  return { r, step, spacing, blend: step / 2, len, cosA, sinA, side, t0x: 0, t0y: 0, t1x: 0, t1y: 0, parts: [] };
+  return { r, step, spacing, blend: step / 2, len, cosA, sinA, side, t0x: 0, t0y: 0, t1x: 0, t1y: 0, xy: [], ends: [] };
 }
 
 /**
@@ -236,29 +238,10 @@ function chordHatches(p: HatchPass, i0: number, i1: number, chordLen: number, ux
     // Unit normal into the excluded side, turned by the style's angle towards the direction of travel.
     const nx = side * ty;
     const ny = -side * tx;
-    p.parts.push(hatchMark(px, py, len * (cosA * nx + sinA * tx), len * (cosA * ny + sinA * ty)));
+    p.ends.push(p.xy.length / 2 + 2);
+    p.xy.push(px, py, px + len * (cosA * nx + sinA * tx), py + len * (cosA * ny + sinA * ty));
   }
   return next;
-}
-
-/** A number rounded to 2 decimals without a leading zero (".04", "-.04"), as the curves' compact path data writes it. */
-function compact(v: number): string {
-  const t = String(r2(v));
-  return t.startsWith("0.") ? t.slice(1) : t.startsWith("-0.") ? "-" + t.slice(2) : t;
-}
-
-/**
- * One hatch as path data: a move, then `h`/`v` for a level or upright mark after rounding, else `l` (no space
- * before a minus): ~14 kB less of the twenty benchmark curves' 193 kB of hatches, the same marks.
- */
-function hatchMark(x: number, y: number, dx: number, dy: number): string {
-  const ry = r2(dy);
-  const rx = r2(dx);
-  const at = `M${r2(x)} ${r2(y)}`;
-  if (ry === 0) return `${at}h${compact(dx)}`;
-  if (rx === 0) return `${at}v${compact(dy)}`;
-  const ys = compact(dy);
-  return `${at}l${compact(dx)}${ys.startsWith("-") ? "" : " "}${ys}`;
 }
 
 /**
@@ -298,5 +281,10 @@ export function hatchEdge(e: HatchEdge, plot: PlotBox, style: HatchStyle, lineWi
     p.t0x = p.t1x;
     p.t0y = p.t1y;
   }
-  return { d: p.parts.join(""), count: p.parts.length };
+  // Written as the curves are (path-writer.ts: rounded ends, relative moves, h/v when level or upright).
+  const n = p.xy.length / 2;
+  const xs = new Float64Array(n);
+  const ys = new Float64Array(n);
+  for (let k = 0; k < n; k++) [xs[k], ys[k]] = [p.xy[2 * k], p.xy[2 * k + 1]];
+  return { d: compactPolygons(xs, ys, Int32Array.from(p.ends), p.ends.length, false), count: p.ends.length };
 }

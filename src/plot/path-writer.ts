@@ -119,10 +119,16 @@ export function compactPath(xs: Float64Array, ys: Float64Array, n: number, close
 }
 
 /**
- * Several closed polygons in one path data, each written as {@link compactPath} writes one: polygon k holds
- * the vertices [ends[k − 1], ends[k]) (from 0 for the first).
+ * Several polylines in one path data, each written as {@link compactPath} writes one (closed polygons unless
+ * `closed` is false): polyline k holds the vertices [ends[k − 1], ends[k]) (from 0 for the first).
  */
-export function compactPolygons(xs: Float64Array, ys: Float64Array, ends: Int32Array, count: number): string {
+export function compactPolygons(
+  xs: Float64Array,
+  ys: Float64Array,
+  ends: Int32Array,
+  count: number,
+  closed = true,
+): string {
   pos = 0;
   ensure((count ? ends[count - 1] : 0) * VERTEX_BYTES + count);
   let p = 0;
@@ -130,7 +136,7 @@ export function compactPolygons(xs: Float64Array, ys: Float64Array, ends: Int32A
   for (let k = 0; k < count; k++) {
     if (ends[k] > from) {
       p = putCompact(buf, p, xs, ys, from, ends[k]);
-      buf[p++] = 90; /* Z */
+      if (closed) buf[p++] = 90; /* Z */
     }
     from = ends[k];
   }
