@@ -1,6 +1,6 @@
 // The bundled launcher that `npm run render` uses (src/cli/run.mjs): CSV files parsed and prepared for drawing
-// on worker threads give the same SVG bytes as doing both in-process, and as the TypeScript entry run through
-// tsx (sorted curves and a closed region, whose preparations differ).
+// by the main thread and worker threads together give the same SVG bytes as doing both in-process, and as the
+// TypeScript entry run through tsx (sorted curves and a closed region, whose preparations differ).
 import { describe, expect, it } from "vitest";
 import { spawnSync } from "node:child_process";
 import { accessSync, constants, readFileSync, writeFileSync } from "node:fs";
@@ -31,7 +31,7 @@ function launch(
 }
 
 describe("npm run render launcher", () => {
-  it("gives the same bytes with two parse workers, in-process, and through the TypeScript entry", () => {
+  it("gives the same bytes with one or two parse workers, in-process, and through the TypeScript entry", () => {
     const dir = tempDir("axband-launcher-");
     const files = [0, 1, 2].map((i) => join(dir, `curve-${i}.csv`));
     files.forEach((f, i) => invented(f, 7 + i, 2000));
@@ -47,8 +47,11 @@ describe("npm run render launcher", () => {
       "8/3",
       "--no-embed",
     ];
+    // Parse threads, the main one included: 2 is the main thread and one worker, 3 two workers beside it.
     const two = launch([...common, "-o", join(dir, "two.svg")], "2");
     expect(two.status, two.stderr).toBe(0);
+    const three = launch([...common, "-o", join(dir, "three.svg")], "3");
+    expect(three.status, three.stderr).toBe(0);
     const one = launch([...common, "-o", join(dir, "one.svg")], "1");
     expect(one.status, one.stderr).toBe(0);
     const ts = runCli([...common, "-o", join(dir, "ts.svg")], { ts: true });
@@ -57,6 +60,7 @@ describe("npm run render launcher", () => {
     expect(bytes).toContain("<svg");
     expect(bytes).toMatch(/id="curve-3-region"/);
     expect(readFileSync(join(dir, "one.svg"), "utf8")).toBe(bytes);
+    expect(readFileSync(join(dir, "three.svg"), "utf8")).toBe(bytes);
     expect(readFileSync(join(dir, "ts.svg"), "utf8")).toBe(bytes);
   });
 
