@@ -59,7 +59,7 @@ const yieldToEvents = () => new Promise<void>((resolve) => setImmediate(resolve)
  * Never throws.
  * @param threads most threads parsing, this one included. @default os.availableParallelism()
  */
-export async function parseCsvInWorkers(
+export async function parseCsvInParallel(
   opts: CliOptions,
   workerUrl: URL,
   threads: number = availableParallelism(),

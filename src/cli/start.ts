@@ -3,7 +3,7 @@
 import { availableParallelism } from "node:os";
 import { parseArgs } from "./args";
 import type { Io } from "./render";
-import { parseCsvInWorkers } from "./parse-parallel";
+import { parseCsvInParallel } from "./parse-parallel";
 
 /**
  * Most threads parsing, this one included: AXBAND_PARSE_THREADS when set to a whole number ≥ 1, else the CPUs
@@ -32,7 +32,7 @@ export async function mainAsync(
   const args = parseArgs(argv);
   const pending =
     args.ok && !args.options.help && options.parseWorker
-      ? parseCsvInWorkers(args.options, options.parseWorker, parseThreads())
+      ? parseCsvInParallel(args.options, options.parseWorker, parseThreads())
       : Promise.resolve([]);
   const render = await import("./render");
   return render.mainWithPreParsed(argv, io ?? render.consoleIo, await pending);
