@@ -278,7 +278,7 @@ const cliBare = thinningOnly
       cliArgs(manifest, join(OUT, "cli-noembed.svg"), ["--no-embed"]),
       join(OUT, "cli-noembed.svg"),
     );
-// The same with two parse threads forced (the main thread and one worker; the default is one thread per CPU).
+// The same with two parse threads forced (the main thread and one worker; on ≤ 2 CPUs the default parses in-process).
 const cliWorkers = thinningOnly
   ? null
   : measure(

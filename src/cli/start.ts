@@ -1,20 +1,23 @@
-// Entry of the bundled command-line renderer (run.mjs): starts the CSV parse workers first, then loads the
-// renderer, so that workers read and parse while this thread loads d3 and the plot core (then parses too).
+// Entry of the bundled command-line renderer (run.mjs): starts any CSV parse workers first (more than two CPUs),
+// then loads the renderer, so that workers parse while this thread loads d3 and the plot core (then parses too).
 import { availableParallelism } from "node:os";
 import { parseArgs } from "./args";
 import type { Io } from "./render";
 import { parseCsvInParallel } from "./parse-parallel";
 
 /**
- * Most threads parsing, this one included: AXBAND_PARSE_THREADS when set to a whole number ≥ 1, else the CPUs
- * available (one, i.e. in-process, on a single CPU). On a 2-core machine, 20 files of 100 000 rows: this thread
- * and one worker beat two workers with this thread waiting (each worker boots and warms up its own copy of the
- * parser; bench/NOTES.md, ninth session). The output bytes are the same either way.
+ * Most threads parsing, this one included: AXBAND_PARSE_THREADS when set to a whole number ≥ 1; else one
+ * (in-process) on up to two CPUs and one per CPU on more. On a 2-core machine, 20 files of 100 000 rows
+ * (bench/NOTES.md, ninth session): idle, this thread with one worker and this thread alone took the same wall
+ * time (~0.9 s); with other work running, alone was faster (1.7 s against 2.1 s), and it always took less CPU:
+ * a worker boots and warms up its own copy of the parser, and V8's background compiling and GC threads need the
+ * second core. The output bytes are the same either way.
  */
 function parseThreads(): number {
   const n = Number(process.env.AXBAND_PARSE_THREADS);
   if (Number.isInteger(n) && n >= 1) return n;
-  return Math.max(1, availableParallelism());
+  const cpus = availableParallelism();
+  return cpus <= 2 ? 1 : cpus;
 }
 
 /**
