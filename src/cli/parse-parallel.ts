@@ -27,6 +27,21 @@ export interface ParseReply {
   prepared?: PreparedTransfer;
 }
 
+/** A parsed curve for a worker to prepare for drawing (its arrays are copied to the worker). */
+export interface PrepareJob {
+  kind: "prepare";
+  index: number;
+  massEv: Float64Array;
+  gInvGeV: Float64Array;
+  sorted: boolean;
+}
+
+/** A worker's preparation of a {@link PrepareJob}'s curve; null when it could not make one. */
+export interface PrepareReply {
+  index: number;
+  prepared: PreparedTransfer | null;
+}
+
 /** Jobs each worker holds at once: the next file is there when one ends, even while this thread is parsing. */
 const IN_FLIGHT = 2;
 
@@ -50,23 +65,61 @@ function jobsOf(opts: CliOptions): ParseJob[] {
 const yieldToEvents = () => new Promise<void>((resolve) => setImmediate(resolve));
 
 /**
+ * A worker that prepares the curves this thread parses, while it parses the next file: `prepare` sends a copy
+ * of the arrays, the answer is seeded into this thread's plot cache under the original ones; `finish` resolves
+ * when every answer is in (or the worker failed: its curves are then prepared here when first drawn).
+ */
+function startPreparer(workerUrl: URL) {
+  let worker: Worker | null = null;
+  let exited: Promise<void> = Promise.resolve();
+  const pending = new Map<number, PrepareJob>();
+  try {
+    const w = new Worker(workerUrl);
+    worker = w;
+    exited = new Promise<void>((done) => w.on("exit", () => done()));
+    w.on("message", (reply: PrepareReply) => {
+      const job = pending.get(reply.index);
+      pending.delete(reply.index);
+      if (job && reply.prepared) seedPreparedCurve(job.massEv, job.gInvGeV, job.sorted, reply.prepared);
+    });
+    w.on("error", () => undefined);
+  } catch {
+    worker = null;
+  }
+  return {
+    prepare(job: PrepareJob): void {
+      if (!worker) return;
+      pending.set(job.index, job);
+      worker.postMessage(job);
+    },
+    finish(): Promise<void> {
+      worker?.postMessage(null);
+      return exited;
+    },
+  };
+}
+
+/**
  * Parse results of the CSV inputs of `opts`, in input order, from this thread and up to `threads − 1` workers
  * running `workerUrl` (the bundled parse-worker), all taking files from one queue. A file parsed here is also
  * prepared for drawing here (into this thread's plot cache, as buildScene would prepare it); a worker's
  * preparation is seeded into the cache. An entry is undefined for a file not parsed (read error, worker
  * failure): the caller parses it again, so messages and output stay those of the serial path.
- * Returns all-undefined without parsing anything for fewer than two CSV files or fewer than two threads.
- * Never throws.
+ * With one thread and `prepareAside`, this thread parses every file and one worker prepares each curve meanwhile.
+ * Returns all-undefined without parsing anything for fewer than two CSV files, or one thread without
+ * `prepareAside`. Never throws.
  * @param threads most threads parsing, this one included. @default os.availableParallelism()
  */
 export async function parseCsvInParallel(
   opts: CliOptions,
   workerUrl: URL,
   threads: number = availableParallelism(),
+  { prepareAside = false }: { prepareAside?: boolean } = {},
 ): Promise<(CurveParseResult | undefined)[]> {
   const jobs = jobsOf(opts);
   const results: (CurveParseResult | undefined)[] = new Array(opts.inputs.length).fill(undefined);
-  if (jobs.length < 2 || threads < 2) return results;
+  if (jobs.length < 2 || (threads < 2 && !prepareAside)) return results;
+  const preparer = threads < 2 ? startPreparer(workerUrl) : null;
   let next = 0;
   const runWorker = () =>
     new Promise<void>((done) => {
@@ -113,9 +166,12 @@ export async function parseCsvInParallel(
       try {
         const result = parseCsvFile(job.path, job);
         results[job.index] = result;
+        const { massEv, gInvGeV } = result;
         // The preparation lands in this thread's cache under the arrays the curve is drawn from.
-        if (!result.fatal && result.massEv.length > 0)
-          computePrepared(result.massEv, result.gInvGeV, job.sorted, { slopes: [0] });
+        const drawable = !result.fatal && massEv.length > 0;
+        if (drawable && preparer)
+          preparer.prepare({ kind: "prepare", index: job.index, massEv, gInvGeV, sorted: job.sorted });
+        else if (drawable) computePrepared(massEv, gInvGeV, job.sorted, { slopes: [0] });
       } catch {
         // Parsed again by the caller, which reports the problem in its own words.
       }
@@ -123,5 +179,6 @@ export async function parseCsvInParallel(
     }
   };
   await Promise.all([local(), ...Array.from({ length: threads - 1 }, runWorker)]);
+  await preparer?.finish();
   return results;
 }

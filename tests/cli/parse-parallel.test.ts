@@ -51,6 +51,21 @@ describe("parseCsvInParallel", () => {
     }
   });
 
+  it("with one thread and preparation aside, parses every file here; a failing preparer leaves drawing to prepare", async () => {
+    const dir = tempDir("axband-parse-parallel-");
+    const files = [0, 1, 2].map((i) => join(dir, `curve-${i}.csv`));
+    files.forEach((f, i) => invented(f, 31 + i, 200));
+    const broken = join(dir, "broken-worker.mjs");
+    writeFileSync(broken, 'throw new Error("this worker fails on purpose");\n');
+    const results = await parseCsvInParallel(optionsFor(files), pathToFileURL(broken), 1, { prepareAside: true });
+    results.forEach((r, i) => {
+      const serial = parseCsvFile(files[i], {});
+      expect(r && Buffer.from(r.massEv.buffer).equals(Buffer.from(serial.massEv.buffer))).toBe(true);
+      // No preparation came back: the curve is prepared when first drawn.
+      expect(cachedPrepared(r!.massEv, r!.gInvGeV, true)).toBeUndefined();
+    });
+  });
+
   it("parses nothing for a single file or a single thread (the caller parses in-process)", async () => {
     const dir = tempDir("axband-parse-parallel-");
     const files = [0, 1].map((i) => join(dir, `curve-${i}.csv`));
