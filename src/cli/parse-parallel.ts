@@ -1,5 +1,5 @@
-// Parses the renderer's CSV inputs on this thread and on worker threads taking files from one queue (results in
-// file order), each with its drawing preparation: parsing 20 files of 100 000 rows is most of a run.
+// Parses the renderer's CSV inputs, with their drawing preparation, on this thread and worker threads taking files
+// from one queue, or on this thread with a worker preparing aside: 20 files of 100 000 rows are most of a run.
 import { availableParallelism } from "node:os";
 import { basename } from "node:path";
 import { Worker } from "node:worker_threads";
