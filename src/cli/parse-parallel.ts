@@ -42,7 +42,7 @@ export interface PrepareReply {
   prepared: PreparedTransfer | null;
 }
 
-/** Jobs each worker holds at once: the next file is there when one ends, even while this thread is parsing. */
+/** Most jobs a worker holds at once: the next file is there when one ends, even while this thread is parsing. */
 const IN_FLIGHT = 2;
 
 /** The CSV inputs of `opts` as parse jobs (a CSV figure starts in the g_aγγ view; regions keep file order). */
@@ -132,7 +132,8 @@ export async function parseCsvInParallel(
       }
       let held = 0;
       const feed = () => {
-        while (held < IN_FLIGHT && next < jobs.length) {
+        // A second file only while the queue has one for every thread: the last ones go to whoever is free.
+        while (held < IN_FLIGHT && next < jobs.length && (held === 0 || jobs.length - next >= threads)) {
           worker.postMessage(jobs[next++]);
           held++;
         }
@@ -178,7 +179,9 @@ export async function parseCsvInParallel(
       await yieldToEvents();
     }
   };
-  await Promise.all([local(), ...Array.from({ length: threads - 1 }, runWorker)]);
+  // No more workers than files beside the one this thread takes.
+  const workers = Math.max(0, Math.min(threads - 1, jobs.length - 1));
+  await Promise.all([local(), ...Array.from({ length: workers }, runWorker)]);
   await preparer?.finish();
   return results;
 }
