@@ -278,11 +278,11 @@ const cliBare = thinningOnly
       cliArgs(manifest, join(OUT, "cli-noembed.svg"), ["--no-embed"]),
       join(OUT, "cli-noembed.svg"),
     );
-// The same with two CSV parse workers forced (the default uses none on ≤ 2 CPUs), to see what they bring here.
+// The same with two parse threads forced (the main thread and one worker; on ≤ 2 CPUs the default parses in-process).
 const cliWorkers = thinningOnly
   ? null
   : measure(
-      "axband CLI, --no-embed, AXBAND_PARSE_THREADS=2 (two parse workers)",
+      "axband CLI, --no-embed, AXBAND_PARSE_THREADS=2 (main thread + one worker)",
       process.execPath,
       cliArgs(manifest, join(OUT, "cli-workers.svg"), ["--no-embed"]),
       join(OUT, "cli-workers.svg"),

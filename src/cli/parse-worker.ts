@@ -1,31 +1,49 @@
 // Worker entry of the command-line renderer: reads, parses and prepares for drawing CSV curve files off the
-// main thread, so that several files are handled at once on a machine with more than one CPU (parse-parallel.ts).
+// main thread, or prepares curves the main thread parsed (parse-parallel.ts), so that files are handled at once.
 import { parentPort } from "node:worker_threads";
 import { parseCsvFile } from "./read-input";
-import { computePrepared, preparedTransferables } from "../plot/prepare-transfer";
-import type { ParseJob, ParseReply } from "./parse-parallel";
+import { computePrepared, preparedTransferables, type PreparedTransfer } from "../plot/prepare-transfer";
+import type { ParseJob, ParseReply, PrepareJob, PrepareReply } from "./parse-parallel";
+
+/** The same preparation the figure would build on first drawing (identical by construction), for the g_aγγ view. */
+function prepare(massEv: Float64Array, gInvGeV: Float64Array, sorted: boolean): PreparedTransfer {
+  return computePrepared(massEv, gInvGeV, sorted, { slopes: [0] });
+}
+
+function parseReply(job: ParseJob): ParseReply {
+  try {
+    const result = parseCsvFile(job.path, job);
+    const prepared =
+      !result.fatal && result.massEv.length > 0 ? prepare(result.massEv, result.gInvGeV, job.sorted) : undefined;
+    return { index: job.index, result, prepared };
+  } catch {
+    // The main thread reads and parses this file again itself, and reports any problem in its own words.
+    return { index: job.index, result: null };
+  }
+}
+
+function prepareReply(job: PrepareJob): PrepareReply {
+  try {
+    return { index: job.index, prepared: prepare(job.massEv, job.gInvGeV, job.sorted) };
+  } catch {
+    // Prepared on the main thread when first drawn.
+    return { index: job.index, prepared: null };
+  }
+}
 
 const port = parentPort;
 if (port) {
-  port.on("message", (job: ParseJob | null) => {
+  port.on("message", (job: ParseJob | PrepareJob | null) => {
     if (job === null) {
       port.close();
       return;
     }
-    let reply: ParseReply;
-    try {
-      const result = parseCsvFile(job.path, job);
-      // The same preparation the figure would build on first drawing (identical by construction), for the
-      // g_aγγ view a CSV figure starts in; the main thread seeds its plot cache with it.
-      const prepared =
-        !result.fatal && result.massEv.length > 0
-          ? computePrepared(result.massEv, result.gInvGeV, job.sorted, { slopes: [0] })
-          : undefined;
-      reply = { index: job.index, result, prepared };
-    } catch {
-      // The main thread reads and parses this file again itself, and reports any problem in its own words.
-      reply = { index: job.index, result: null };
+    if ("kind" in job) {
+      const reply = prepareReply(job);
+      port.postMessage(reply, reply.prepared ? preparedTransferables(reply.prepared) : []);
+      return;
     }
+    const reply = parseReply(job);
     // Moved, not copied: the point arrays are most of the result's bytes.
     const buffers = reply.result
       ? [

@@ -23,6 +23,26 @@ describe("stableOrder", () => {
     }
     for (const keys of cases) expect(Array.from(stableOrder(keys))).toEqual(byComparator(keys));
   });
+
+  test("positive keys equal but for their lowest bits, subnormals, and more points than 2^17", () => {
+    const r = rng(23);
+    const eps = Number.EPSILON;
+    const cases: Float64Array[] = [];
+    for (const n of [40, 3000]) {
+      // Keys that differ only in the bits the positions are packed into: small groups and groups over 32.
+      cases.push(Float64Array.from({ length: n }, () => 1 + Math.floor(r() * 8) * eps));
+      cases.push(Float64Array.from({ length: n }, () => 1 + Math.floor(r() * (n / 2)) * eps));
+      cases.push(Float64Array.from({ length: n }, (_, i) => 1 + i * eps));
+      cases.push(Float64Array.from({ length: n }, () => Number.MIN_VALUE * (1 + Math.floor(r() * 100))));
+    }
+    cases.push(Float64Array.from({ length: 140_000 }, () => 1e-6 * (1 + Math.floor(r() * 90_000) / 90_000)));
+    for (const keys of cases) {
+      const order = stableOrder(keys);
+      const expected = byComparator(keys);
+      // Compared as bytes: deep equality of 140,000 numbers is slow.
+      expect(Buffer.from(order.buffer).equals(Buffer.from(Uint32Array.from(expected).buffer))).toBe(true);
+    }
+  });
 });
 
 describe("prepareCurve in mass order", () => {

@@ -1,6 +1,7 @@
-// The bundled launcher that `npm run render` uses (src/cli/run.mjs): CSV files parsed and prepared for drawing
-// on worker threads give the same SVG bytes as doing both in-process, and as the TypeScript entry run through
-// tsx (sorted curves and a closed region, whose preparations differ).
+// The bundled launcher that `npm run render` uses (src/cli/run.mjs): CSV files parsed and prepared for drawing by
+// the main thread and worker threads together, or parsed on the main thread and prepared on a worker, give the same
+// SVG bytes as doing both in-process, and as the TypeScript entry run through tsx (sorted curves and a closed
+// region, whose preparations differ).
 import { describe, expect, it } from "vitest";
 import { spawnSync } from "node:child_process";
 import { accessSync, constants, readFileSync, writeFileSync } from "node:fs";
@@ -16,22 +17,20 @@ function invented(file: string, seed: number, rows: number): void {
   writeFileSync(file, lines.join("\n") + "\n");
 }
 
+/** Runs the launcher with AXBAND_PARSE_THREADS set to `threads`, or unset (the default) when it is null. */
 function launch(
   args: string[],
-  threads: string,
+  threads: string | null,
   script = "src/cli/run.mjs",
 ): { status: number | null; stderr: string } {
-  const r = spawnSync(process.execPath, [script, ...args], {
-    cwd: REPO,
-    encoding: "utf8",
-    timeout: 120_000,
-    env: { ...process.env, AXBAND_PARSE_THREADS: threads },
-  });
+  const { AXBAND_PARSE_THREADS: _unset, ...inherited } = process.env;
+  const env = threads === null ? inherited : { ...inherited, AXBAND_PARSE_THREADS: threads };
+  const r = spawnSync(process.execPath, [script, ...args], { cwd: REPO, encoding: "utf8", timeout: 120_000, env });
   return { status: r.status, stderr: r.stderr };
 }
 
 describe("npm run render launcher", () => {
-  it("gives the same bytes with two parse workers, in-process, and through the TypeScript entry", () => {
+  it("gives the same bytes with parse workers, a preparing worker, in-process, and through the TypeScript entry", () => {
     const dir = tempDir("axband-launcher-");
     const files = [0, 1, 2].map((i) => join(dir, `curve-${i}.csv`));
     files.forEach((f, i) => invented(f, 7 + i, 2000));
@@ -47,8 +46,14 @@ describe("npm run render launcher", () => {
       "8/3",
       "--no-embed",
     ];
+    // Parse threads, the main one included: 2 is the main thread and one worker, 3 two workers beside it; the
+    // default on up to two CPUs parses on the main thread while a worker prepares the curves.
     const two = launch([...common, "-o", join(dir, "two.svg")], "2");
+    const aside = launch([...common, "-o", join(dir, "default.svg")], null);
+    expect(aside.status, aside.stderr).toBe(0);
     expect(two.status, two.stderr).toBe(0);
+    const three = launch([...common, "-o", join(dir, "three.svg")], "3");
+    expect(three.status, three.stderr).toBe(0);
     const one = launch([...common, "-o", join(dir, "one.svg")], "1");
     expect(one.status, one.stderr).toBe(0);
     const ts = runCli([...common, "-o", join(dir, "ts.svg")], { ts: true });
@@ -57,6 +62,8 @@ describe("npm run render launcher", () => {
     expect(bytes).toContain("<svg");
     expect(bytes).toMatch(/id="curve-3-region"/);
     expect(readFileSync(join(dir, "one.svg"), "utf8")).toBe(bytes);
+    expect(readFileSync(join(dir, "three.svg"), "utf8")).toBe(bytes);
+    expect(readFileSync(join(dir, "default.svg"), "utf8")).toBe(bytes);
     expect(readFileSync(join(dir, "ts.svg"), "utf8")).toBe(bytes);
   });
 

@@ -191,26 +191,31 @@ export function fastBytes(p: FastLineTarget, t: Uint8Array, pos: number, limit: 
     for (let col = 0; col < 2; col++) {
       let c = t[i];
       if (c === 43) c = t[++i];
-      let mant = 0;
+      // The significant digits in two small integers (the first nine, then up to six more): integer steps
+      // instead of a chain of floating-point multiply-adds, and the same exact mantissa (below 2^53).
+      let head = 0;
+      let tail = 0;
       let sig = 0;
-      let exp10 = 0;
-      let point = false;
+      let pointAt = -1;
       for (;;) {
         if (c >= 48 && c <= 57) {
-          if (sig === 0 && c === 48) {
-            if (point) exp10--;
-          } else {
-            if (sig === 15) break line;
-            mant = mant * 10 + (c - 48);
+          // Leading zeros are not significant (the point's position still counts them).
+          if (sig !== 0 || c !== 48) {
+            if (sig < 9) head = head * 10 + (c - 48);
+            else if (sig < 15) tail = tail * 10 + (c - 48);
+            // A 16th significant digit: readNumber's correctly rounded slow path.
+            else break line;
             sig++;
-            if (point) exp10--;
           }
-        } else if (c === mark && !point) point = true;
+        } else if (c === mark && pointAt < 0) pointAt = i;
         else break;
         c = t[++i];
       }
       // No digits, or zero (not positive): the text path.
-      if (mant === 0) break line;
+      if (sig === 0) break line;
+      const mant = sig <= 9 ? head : head * POW10[sig - 9] + tail;
+      // Every digit after the point lowers the exponent by one.
+      let exp10 = pointAt < 0 ? 0 : pointAt + 1 - i;
       if (c === 101 || c === 69) {
         c = t[++i];
         let eneg = false;
