@@ -75,10 +75,13 @@ function inputsHash() {
 const stampOf = (label) => join(CACHE, `${label.split(" ")[0]}.ok`);
 
 /** Runs a command with its output collected and printed in one piece when it ends (lanes run side by side). */
-function run(label, cmd, args) {
+function run(label, cmd, args, env = {}) {
   return new Promise((resolve) => {
     const t0 = Date.now();
-    const child = spawn(cmd, args, { stdio: ["ignore", "pipe", "pipe"], env: { ...process.env, FORCE_COLOR: "0" } });
+    const child = spawn(cmd, args, {
+      stdio: ["ignore", "pipe", "pipe"],
+      env: { ...process.env, FORCE_COLOR: "0", ...env },
+    });
     const out = [];
     child.stdout.on("data", (d) => out.push(d));
     child.stderr.on("data", (d) => out.push(d));
@@ -106,7 +109,7 @@ async function runCheck([label, cmd, args], hash) {
 }
 
 /** Runs Vitest projects with a JSON report and counts their tests. */
-async function runVitest(projects, files = [], part = "") {
+async function runVitest(projects, files = [], part = "", env = {}) {
   const name = projects.join("+") + part;
   const report = `tests/.artifacts/vitest-${name}.json`;
   rmSync(report, { force: true });
@@ -118,7 +121,7 @@ async function runVitest(projects, files = [], part = "") {
     "--reporter=json",
     `--outputFile.json=${report}`,
   ];
-  const ok = await run(`vitest ${name}`, bin("vitest"), args);
+  const ok = await run(`vitest ${name}`, bin("vitest"), args, env);
   if (!existsSync(report)) return { passed: 0, failed: 1 };
   const r = JSON.parse(readFileSync(report, "utf8"));
   let failedHere = r.numFailedTests;
@@ -150,11 +153,18 @@ let timedDone;
 const timed = new Promise((resolve) => (timedDone = resolve));
 await Promise.all([
   (async () => {
-    if (aloneFiles.length) count(await runVitest(["browser"], aloneFiles, "-timed"));
+    let built = false;
+    if (aloneFiles.length) {
+      const timedRun = await runVitest(["browser"], aloneFiles, "-timed");
+      count(timedRun);
+      built = timedRun.failed === 0;
+    }
     timedDone();
     // The last check here, where it evens out the lanes (the unit lane is the longer one).
     await check(CHECKS[CHECKS.length - 1]);
-    if (sharedFiles.length) count(await runVitest(["browser"], sharedFiles));
+    // The app the timed files' run built (tests/browser/global-setup.ts) serves these too: no second build.
+    if (sharedFiles.length)
+      count(await runVitest(["browser"], sharedFiles, "", built ? { AXBAND_SKIP_BUILD: "1" } : {}));
   })(),
   (async () => {
     for (const c of CHECKS.slice(0, -1)) await check(c);

@@ -27,6 +27,7 @@ export default async function setup(project: TestProject): Promise<() => Promise
     await runLock?.close();
   };
   try {
+    // Set by tests/run-all.mjs for its second browser run: the first one built dist/ from the same sources.
     if (!process.env.AXBAND_SKIP_BUILD) await buildApp();
     server = await preview({ preview: { port: 0, host: "127.0.0.1", strictPort: false }, logLevel: "warn" });
     const address = server.httpServer.address();
