@@ -14,7 +14,7 @@ afterAll(async () => {
 test("the app loads with no console errors and no foreign requests", async () => {
   const page = await browser.newPage();
   const watched = watchPage(page);
-  await page.goto(inject("baseUrl"), { waitUntil: "load" });
+  await page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
   expect(await page.locator("h1").first().textContent()).toContain("axband");
   expect(watched.consoleErrors).toEqual([]);
   expect(watched.foreignRequests).toEqual([]);

@@ -23,7 +23,7 @@ async function openTab(context: BrowserContext, init?: () => void): Promise<{ pa
   const page = await context.newPage();
   if (init) await page.addInitScript(init);
   const watched = watchPage(page);
-  await page.goto(inject("baseUrl"), { waitUntil: "load" });
+  await page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
   await page.locator('[data-testid="plot"] svg').waitFor();
   return { page, watched };
 }
@@ -130,14 +130,14 @@ describe("full storage", () => {
     await addModel(page, "1/7");
     await expect.poll(() => savedText(page)).toContain('"1/7"');
     await page.evaluate(() => sessionStorage.setItem("fill", "1"));
-    await page.reload({ waitUntil: "load" });
+    await page.reload({ waitUntil: "networkidle" });
     await page.locator('[data-testid="plot"] svg').waitFor();
     await addModel(page, "2/7");
     await expect.poll(() => page.getByRole("alert").count()).toBe(1);
     await expect.poll(() => spareText(page)).toContain('"2/7"');
     expect(await savedText(page)).not.toContain('"2/7"');
 
-    await page.reload({ waitUntil: "load" });
+    await page.reload({ waitUntil: "networkidle" });
     await expect.poll(() => legendTexts(page)).toContain("E/N = 2/7");
     expect(await legendTexts(page)).toContain("E/N = 1/7");
     expect(watched.consoleErrors).toEqual([]);

@@ -27,7 +27,7 @@ async function open(init?: () => void, hash = ""): Promise<{ page: Page; watched
   const page = await (await contexts.fresh()).newPage();
   if (init) await page.addInitScript(init);
   const watched = watchPage(page);
-  await page.goto(inject("baseUrl") + hash, { waitUntil: "load" });
+  await page.goto(inject("baseUrl") + hash, { waitUntil: "networkidle" });
   await page.locator('[data-testid="plot"] svg').waitFor();
   return { page, watched };
 }
@@ -82,7 +82,7 @@ describe("autosave", () => {
       .toBe(true);
     // Curve data goes to IndexedDB after the text, one task per curve: wait for all four demo curves.
     await expect.poll(async () => (await storedCurveKeys(page)).length, { timeout: 30_000 }).toBeGreaterThanOrEqual(4);
-    await page.reload({ waitUntil: "load" });
+    await page.reload({ waitUntil: "networkidle" });
     await page.locator('[data-testid="plot"] svg').waitFor();
     // Restored curves join the legend once read back and prepared off the main thread (slow on a busy machine).
     await expect
@@ -125,7 +125,7 @@ describe("autosave", () => {
         })
         .toBe(4);
       await expect.poll(async () => JSON.stringify(await savedMeta(page)).includes(curveId!)).toBe(true);
-      await page.reload({ waitUntil: "load" });
+      await page.reload({ waitUntil: "networkidle" });
       await page.locator('[data-testid="legend"] [data-legend-entry="chunked (invented)"]').waitFor();
       expect(
         await page.locator(`[data-testid="plot"] path[data-curve-id="${curveId}"]`).first().getAttribute("d"),

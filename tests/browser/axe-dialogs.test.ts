@@ -29,7 +29,7 @@ test("the import step with a file staged has no axe violations", async () => {
   writeFileSync(file, "# invented for a test\nm_a [ueV],g [1/GeV]\n1.0,3e-14\n2.0,2.5e-14\nx,y\n3.0,2.7e-14\n");
   const page = await (await contexts.fresh()).newPage();
   const watched = watchPage(page);
-  await page.goto(inject("baseUrl"), { waitUntil: "load" });
+  await page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
   await page.setInputFiles('[data-testid="import-files"]', file);
   await page.locator('[data-testid="import-detected"]').waitFor();
   await page.locator('[data-testid="import-confirm"]').waitFor();
@@ -40,7 +40,7 @@ test("the import step with a file staged has no axe violations", async () => {
 test("the anomaly calculator with a model built in it has no axe violations", async () => {
   const page = await (await contexts.fresh()).newPage();
   const watched = watchPage(page);
-  await page.goto(inject("baseUrl"), { waitUntil: "load" });
+  await page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
   await page.getByRole("button", { name: "Anomaly calculator…" }).click();
   const dialog = page.getByRole("dialog");
   await dialog.getByTestId("calc-eovern").waitFor();

@@ -37,7 +37,7 @@ test("µeV axis, a range typed with units, mirrored ticks, no serious axe violat
   const context = await browser.newContext({ viewport: { width: 1400, height: 950 } });
   const page = await context.newPage();
   const watched = watchPage(page);
-  await page.goto(inject("baseUrl"), { waitUntil: "load" });
+  await page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
   await page.locator("#section-figure > summary").click();
   await page.selectOption('[data-testid="figure-mass-unit"]', "ueV");
   await page.waitForFunction(() =>

@@ -17,7 +17,7 @@ test("build the (3,1,0) heavy-quark model from its Yukawa term, see E/N = 0 and 
   const context = await browser.newContext({ viewport: { width: 1440, height: 900 } });
   const page = await context.newPage();
   const watched = watchPage(page);
-  await page.goto(inject("baseUrl"), { waitUntil: "load" });
+  await page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
   await page.getByRole("button", { name: "Anomaly calculator…" }).click();
   const dialog = page.getByRole("dialog");
   // Start from wrong typed charges so the solver has to fill them.
@@ -38,7 +38,7 @@ test("build the (3,1,0) heavy-quark model from its Yukawa term, see E/N = 0 and 
   const id = await entry.getAttribute("data-model-id");
   expect(await page.locator(`[data-testid="plot"] path[data-model-id="${id}"]`).count()).toBeGreaterThan(0);
   // The draft (name, terms) is kept across a reload.
-  await page.reload({ waitUntil: "load" });
+  await page.reload({ waitUntil: "networkidle" });
   await page.getByRole("button", { name: "Anomaly calculator…" }).click();
   const again = page.getByRole("dialog");
   await expect.poll(() => again.getByRole("textbox", { name: "Model name" }).inputValue()).toBe("KSVZ from its Yukawa");

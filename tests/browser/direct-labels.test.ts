@@ -39,7 +39,7 @@ test("labels on the plot: drag, reload, keys, reset; no serious axe violations",
   const context = await browser.newContext({ viewport: { width: 1400, height: 950 } });
   const page = await context.newPage();
   const watched = watchPage(page);
-  await page.goto(inject("baseUrl"), { waitUntil: "load" });
+  await page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
   await page.locator("#section-figure > summary").click();
   await page.selectOption('[data-testid="legend-place"]', "on-plot");
   await page.locator(HANDLE).waitFor();
@@ -60,7 +60,7 @@ test("labels on the plot: drag, reload, keys, reset; no serious axe violations",
 
   // Saved with the project, and back after a reload.
   await expect.poll(() => savedAt(page), { timeout: 10_000 }).not.toBeNull();
-  await page.reload({ waitUntil: "load" });
+  await page.reload({ waitUntil: "networkidle" });
   await page.locator(HANDLE).waitFor({ timeout: 30_000 });
   await expect.poll(() => labelXY(page), { timeout: 30_000 }).toEqual(moved);
   expect(await page.locator(HANDLE).getAttribute("data-moved")).toBe("true");

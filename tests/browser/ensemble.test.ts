@@ -32,7 +32,7 @@ test("an N_Q ≤ 2 ensemble runs, shows its histogram and joins the legend as a 
       for (const e of list.getEntries()) w.__longTasks.push({ start: e.startTime, duration: e.duration });
     }).observe({ type: "longtask", buffered: true });
   });
-  await page.goto(inject("baseUrl"), { waitUntil: "load" });
+  await page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
   // Start-up work (first render, first autosave) ends before the measured window: no long task for a second.
   await page.waitForFunction(
     () => {

@@ -24,6 +24,6 @@ export async function exportSvg(page: Page): Promise<{ name: string; text: strin
  */
 export async function openFreshPage(contexts: ReusedContext, baseUrl: string): Promise<Page> {
   const page = await (await contexts.fresh()).newPage();
-  await page.goto(baseUrl, { waitUntil: "load" });
+  await page.goto(baseUrl, { waitUntil: "networkidle" });
   return page;
 }

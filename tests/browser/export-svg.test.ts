@@ -64,7 +64,7 @@ test("the SVG download is self-contained, valid XML at a physical size, and labe
     dialogs.push(d.message());
     void d.dismiss();
   });
-  await page.goto(inject("baseUrl"), { waitUntil: "load" });
+  await page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
   const count = () =>
     page.evaluate(() => ({
       img: document.querySelectorAll("img").length,
@@ -142,7 +142,7 @@ test("the SVG download is self-contained, valid XML at a physical size, and labe
 test("PNG at 300 dpi for the single-column preset has the pixel size and dpi of 8.6 cm at 300 dpi", async () => {
   const page = await (await contexts.fresh()).newPage();
   const watched = watchPage(page);
-  await page.goto(inject("baseUrl"), { waitUntil: "load" });
+  await page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
   await page.click('[data-testid="export-menu"]');
   await page.selectOption('[aria-label="Figure size preset"]', "single-column");
   await page.selectOption('[aria-label="PNG resolution"]', "300dpi");

@@ -29,7 +29,7 @@ async function open(): Promise<Opened> {
   const context = await contexts.fresh();
   const page = await context.newPage();
   const watched = watchPage(page);
-  await page.goto(inject("baseUrl"), { waitUntil: "load" });
+  await page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
   await page.locator('[data-testid="plot"] svg').waitFor();
   return { page, watched };
 }

@@ -40,7 +40,7 @@ test("demo exclusions are hatched; a curve set to fill loses its hatches; a long
   const context = await browser.newContext({ viewport: { width: 1440, height: 900 }, deviceScaleFactor: 1 });
   const page = await context.newPage();
   const watched = watchPage(page);
-  await page.goto(inject("baseUrl"), { waitUntil: "load" });
+  await page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
   await page.locator('[data-testid="plot"] svg').waitFor();
   const hatches = page.locator('[data-testid="plot"] path[data-curve-part="hatch"]');
   // The demo has two exclusion curves (invented), both hatched by default.

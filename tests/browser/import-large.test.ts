@@ -61,7 +61,7 @@ test("a million-row file imports in the worker with progress, and no main-thread
       }
     }).observe(document, { subtree: true, childList: true, attributes: true, attributeFilter: ["aria-valuenow"] });
   });
-  await page.goto(inject("baseUrl"), { waitUntil: "load" });
+  await page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
   // Let start-up work (first render of the demo figure, first autosave) finish before the measured window
   // opens: wait until no long task has ended for a second (at most 15 s).
   await page.waitForFunction(

@@ -27,7 +27,7 @@ test.each([
   const page = await (await contexts.fresh()).newPage();
   await page.setViewportSize({ width, height });
   const watched = watchPage(page);
-  await page.goto(inject("baseUrl"), { waitUntil: "load" });
+  await page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
   await page.locator('[data-testid="plot"] svg').waitFor();
   await page.locator("#section-figure > summary").click();
   await page.getByLabel("Title").fill("Invented model bands over demo haloscope limits at one dark-matter density");

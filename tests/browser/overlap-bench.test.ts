@@ -106,7 +106,7 @@ test("benchmark-shaped curves: summary rows ≤ models × curves, the busiest ro
       for (const e of list.getEntries()) w.__longTasks.push({ start: e.startTime, duration: e.duration });
     }).observe({ type: "longtask", buffered: true });
   });
-  await page.goto(inject("baseUrl"), { waitUntil: "load" });
+  await page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
   const table = page.locator('[data-testid="overlap-table"]');
   await table.locator("tbody tr").first().waitFor();
   // The hint names the number of model × curve pairs; with the demo's curves it gives the number of models.

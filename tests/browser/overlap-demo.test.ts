@@ -47,7 +47,7 @@ test("the demo shows a non-empty overlap table and its CSV export matches it", a
   const context = await browser.newContext({ acceptDownloads: true, viewport: { width: 1400, height: 950 } });
   const page = await context.newPage();
   const watched = watchPage(page);
-  await page.goto(inject("baseUrl"), { waitUntil: "load" });
+  await page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
   const table = page.locator('[data-testid="overlap-table"]');
   await table.locator("tbody tr").first().waitFor();
   const cells = await table

@@ -28,7 +28,7 @@ async function freshPage(): Promise<{ page: Page }> {
 test("a copied link reopens the same figure in a fresh context; a tampered link is refused", async () => {
   const a = await freshPage();
   const watchedA = watchPage(a.page);
-  await a.page.goto(inject("baseUrl"), { waitUntil: "load" });
+  await a.page.goto(inject("baseUrl"), { waitUntil: "networkidle" });
   // Change something so the link carries more than the demo state: a model with a theory spread.
   await a.page.fill('[data-testid="model-eovern"]', "5/3..44/3");
   await a.page.click('[data-testid="add-model"]');
@@ -44,7 +44,7 @@ test("a copied link reopens the same figure in a fresh context; a tampered link 
 
   const b = await freshPage();
   const watchedB = watchPage(b.page);
-  await b.page.goto(link, { waitUntil: "load" });
+  await b.page.goto(link, { waitUntil: "networkidle" });
   await b.page.waitForSelector('[role="status"]:has-text("Opened the project from the link")');
   const svgB = await exportSvg(b.page);
   expect(svgB.text).toBe(svgA.text);
@@ -64,7 +64,7 @@ test("a copied link reopens the same figure in a fresh context; a tampered link 
 
   // The same tampered link opened as a new page is refused too and leaves the start project.
   const c = await freshPage();
-  await c.page.goto(`${inject("baseUrl")}#${tampered}`, { waitUntil: "load" });
+  await c.page.goto(`${inject("baseUrl")}#${tampered}`, { waitUntil: "networkidle" });
   await c.page.locator('[role="alert"]').first().waitFor();
   expect(await c.page.locator('[role="alert"]').first().textContent()).toMatch(
     /^This link is damaged \(.*Your project is unchanged\./,
