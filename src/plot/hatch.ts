@@ -146,9 +146,9 @@ interface HatchPass {
   t0y: number;
   t1x: number;
   t1y: number;
-  /** Both ends of every hatch (x, y, x, y…), and where each hatch ends in that list (in points). */
-  xy: number[];
-  ends: number[];
+  /** Both ends of every hatch (hatch k is points 2k and 2k + 1). */
+  xs: number[];
+  ys: number[];
 }
 
 /** Length of the coarse path's chords that come near the plot. */
@@ -177,7 +177,7 @@ function hatchPass(side: 1 | -1, plot: PlotBox, style: HatchStyle, lineWidthPx: 
   const a = (style.angleDeg * Math.PI) / 180;
   const [cosA, sinA] = [Math.cos(a), Math.sin(a)];
   const len = style.lengthPx + lineWidthPx / 2;
-  return { r, step, spacing, blend: step / 2, len, cosA, sinA, side, t0x: 0, t0y: 0, t1x: 0, t1y: 0, xy: [], ends: [] };
+  return { r, step, spacing, blend: step / 2, len, cosA, sinA, side, t0x: 0, t0y: 0, t1x: 0, t1y: 0, xs: [], ys: [] };
 }
 
 /**
@@ -238,8 +238,8 @@ function chordHatches(p: HatchPass, i0: number, i1: number, chordLen: number, ux
     // Unit normal into the excluded side, turned by the style's angle towards the direction of travel.
     const nx = side * ty;
     const ny = -side * tx;
-    p.ends.push(p.xy.length / 2 + 2);
-    p.xy.push(px, py, px + len * (cosA * nx + sinA * tx), py + len * (cosA * ny + sinA * ty));
+    p.xs.push(px, px + len * (cosA * nx + sinA * tx));
+    p.ys.push(py, py + len * (cosA * ny + sinA * ty));
   }
   return next;
 }
@@ -282,9 +282,8 @@ export function hatchEdge(e: HatchEdge, plot: PlotBox, style: HatchStyle, lineWi
     p.t0y = p.t1y;
   }
   // Written as the curves are (path-writer.ts: rounded ends, relative moves, h/v when level or upright).
-  const n = p.xy.length / 2;
-  const xs = new Float64Array(n);
-  const ys = new Float64Array(n);
-  for (let k = 0; k < n; k++) [xs[k], ys[k]] = [p.xy[2 * k], p.xy[2 * k + 1]];
-  return { d: compactPolygons(xs, ys, Int32Array.from(p.ends), p.ends.length, false), count: p.ends.length };
+  const hatches = p.xs.length / 2;
+  const ends = new Int32Array(hatches).map((_, k) => 2 * k + 2);
+  const d = compactPolygons(Float64Array.from(p.xs), Float64Array.from(p.ys), ends, hatches, false);
+  return { d, count: hatches };
 }
