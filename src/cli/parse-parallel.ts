@@ -27,6 +27,17 @@ export interface ParseReply {
   prepared?: PreparedTransfer;
 }
 
+/**
+ * A parsed curve's drawing preparation for the g_aγγ view a CSV figure starts in (the one the figure would build on
+ * first drawing, identical by construction; cached on this thread too); undefined when it has nothing to draw.
+ */
+export function prepareForFigure(
+  r: { massEv: Float64Array; gInvGeV: Float64Array; fatal?: CurveParseResult["fatal"] },
+  sorted: boolean,
+): PreparedTransfer | undefined {
+  return !r.fatal && r.massEv.length > 0 ? computePrepared(r.massEv, r.gInvGeV, sorted, { slopes: [0] }) : undefined;
+}
+
 /** A parsed curve for a worker to prepare for drawing (its arrays are copied to the worker). */
 export interface PrepareJob {
   kind: "prepare";
@@ -169,10 +180,9 @@ export async function parseCsvInParallel(
         results[job.index] = result;
         const { massEv, gInvGeV } = result;
         // The preparation lands in this thread's cache under the arrays the curve is drawn from.
-        const drawable = !result.fatal && massEv.length > 0;
-        if (drawable && preparer)
+        if (!preparer) prepareForFigure(result, job.sorted);
+        else if (!result.fatal && massEv.length > 0)
           preparer.prepare({ kind: "prepare", index: job.index, massEv, gInvGeV, sorted: job.sorted });
-        else if (drawable) computePrepared(massEv, gInvGeV, job.sorted, { slopes: [0] });
       } catch {
         // Parsed again by the caller, which reports the problem in its own words.
       }

@@ -2,20 +2,13 @@
 // main thread, or prepares curves the main thread parsed (parse-parallel.ts), so that files are handled at once.
 import { parentPort } from "node:worker_threads";
 import { parseCsvFile } from "./read-input";
-import { computePrepared, preparedTransferables, type PreparedTransfer } from "../plot/prepare-transfer";
-import type { ParseJob, ParseReply, PrepareJob, PrepareReply } from "./parse-parallel";
-
-/** The same preparation the figure would build on first drawing (identical by construction), for the g_aγγ view. */
-function prepare(massEv: Float64Array, gInvGeV: Float64Array, sorted: boolean): PreparedTransfer {
-  return computePrepared(massEv, gInvGeV, sorted, { slopes: [0] });
-}
+import { preparedTransferables } from "../plot/prepare-transfer";
+import { prepareForFigure, type ParseJob, type ParseReply, type PrepareJob, type PrepareReply } from "./parse-parallel";
 
 function parseReply(job: ParseJob): ParseReply {
   try {
     const result = parseCsvFile(job.path, job);
-    const prepared =
-      !result.fatal && result.massEv.length > 0 ? prepare(result.massEv, result.gInvGeV, job.sorted) : undefined;
-    return { index: job.index, result, prepared };
+    return { index: job.index, result, prepared: prepareForFigure(result, job.sorted) };
   } catch {
     // The main thread reads and parses this file again itself, and reports any problem in its own words.
     return { index: job.index, result: null };
@@ -24,7 +17,7 @@ function parseReply(job: ParseJob): ParseReply {
 
 function prepareReply(job: PrepareJob): PrepareReply {
   try {
-    return { index: job.index, prepared: prepare(job.massEv, job.gInvGeV, job.sorted) };
+    return { index: job.index, prepared: prepareForFigure(job, job.sorted) ?? null };
   } catch {
     // Prepared on the main thread when first drawn.
     return { index: job.index, prepared: null };
